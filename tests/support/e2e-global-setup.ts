@@ -1,1 +1,11 @@
-export default async function setup() {}
+import type { TestProject } from "vitest/node";
+import { acquireStack, releaseStack } from "./stack";
+
+/** Browser tests drive Chromium against the built app on its own database. */
+export default async function setup(project: TestProject) {
+  const stack = await acquireStack(true);
+  project.provide("dbName", stack.dbName);
+  project.provide("appUrl", stack.appUrl);
+  return releaseStack;
+}
+

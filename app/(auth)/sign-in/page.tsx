@@ -1,0 +1,28 @@
+import type { Metadata } from "next";
+import { Suspense } from "react";
+import { redirect } from "next/navigation";
+import { getSessionUser } from "@/lib/auth/session";
+import { SignInForm } from "@/components/auth/sign-in-form";
+import { Wordmark } from "@/components/shell/wordmark";
+
+export const metadata: Metadata = { title: "Sign in" };
+
+export default async function SignInPage() {
+  if (await getSessionUser()) redirect("/projects");
+  return (
+    <main className="flex min-h-screen items-center justify-center px-4">
+      <div className="w-full max-w-sm">
+        <div className="mb-6 flex flex-col items-center gap-2 text-center">
+          <Wordmark />
+          <p className="text-sm text-ink-soft">Stability checks of embankment dams and soil slopes.</p>
+        </div>
+        <div className="panel p-6 shadow-sm">
+          <Suspense>
+            <SignInForm />
+          </Suspense>
+        </div>
+        <p className="mt-4 text-center text-xs text-ink-faint">Accounts are created by your team&apos;s administrator.</p>
+      </div>
+    </main>
+  );
+}

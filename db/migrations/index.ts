@@ -1,0 +1,21 @@
+import type { Knex } from "knex";
+import * as m001 from "./001-organisations-users-projects";
+import * as m002 from "./002-sections-materials-runs";
+
+interface Migration {
+  up(knex: Knex): Promise<void>;
+  down(knex: Knex): Promise<void>;
+}
+
+// Listed explicitly so the same migrations load under Next.js, tsx and vitest alike,
+// where knex's own file loader would need a TypeScript require hook.
+const migrations: Record<string, Migration> = {
+  "001-organisations-users-projects": m001,
+  "002-sections-materials-runs": m002,
+};
+
+export const migrationSource: Knex.MigrationSource<string> = {
+  getMigrations: async () => Object.keys(migrations).sort(),
+  getMigrationName: (name) => name,
+  getMigration: async (name) => migrations[name],
+};

@@ -1,0 +1,63 @@
+import "server-only";
+import { NextResponse } from "next/server";
+import { ZodError, type ZodType } from "zod";
+import { ApiError } from "./errors";
+
+export interface ErrorBody {
+  error: { code: string; message: string; fields?: Record<string, string[]> };
+}
+
+/** Turns zod issues into `{ "a.b": ["message"] }`, the shape every form reads. */
+export function fieldErrors(error: ZodError): Record<string, string[]> {
+  const fields: Record<string, string[]> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.length ? issue.path.join(".") : "_";
+    (fields[key] ??= []).push(issue.message);
+  }
+  return fields;
+}
+
+export function errorResponse(err: unknown): NextResponse<ErrorBody> {
+  if (err instanceof ApiError) {
+    return NextResponse.json({ error: { code: err.code, message: err.message, fields: err.fields } }, { status: err.status });
+  }
+  if (err instanceof ZodError) {
+    return NextResponse.json(
+      { error: { code: "invalid_input", message: "Some fields are not valid.", fields: fieldErrors(err) } },
+      { status: 400 },
+    );
+  }
+  console.error("[api] unexpected error", err);
+  return NextResponse.json({ error: { code: "internal", message: "Something went wrong on the server." } }, { status: 500 });
+}
+
+/** Reads and validates a JSON body; a body that is not JSON is a 400 like any other bad field. */
+export async function parseJson<T>(request: Request, schema: ZodType<T>): Promise<T> {
+  let raw: unknown;
+  try {
+    raw = await request.json();
+  } catch {
+    throw new ApiError(400, "invalid_json", "The request body is not valid JSON.", { _: ["Send a JSON object."] });
+  }
+  return schema.parse(raw);
+}
+
+/** Parses a numeric route parameter such as a project id. */
+export function parseId(value: string, what: string): number {
+  const id = Number(value);
+  if (!Number.isInteger(id) || id <= 0) throw new ApiError(404, "not_found", `${what} was not found.`);
+  return id;
+}
+
+type Handler<C> = (request: Request, context: C) => Promise<Response>;
+
+/** Wraps a route handler so every failure answers `{"error": {code, message, fields}}`. */
+export function apiRoute<C>(handler: Handler<C>): Handler<C> {
+  return async (request, context) => {
+    try {
+      return await handler(request, context);
+    } catch (err) {
+      return errorResponse(err);
+    }
+  };
+}

@@ -1,0 +1,49 @@
+import "server-only";
+import { z } from "zod";
+import { fetchUserByEmail } from "@/db/queries/users";
+import { clearSignInFailures, fetchSignInFailures, recordSignInFailure } from "@/db/queries/sign-in-failures";
+import { DUMMY_HASH, verifyPassword } from "./password";
+import { decideThrottle } from "./throttle";
+import type { Role } from "../permissions";
+
+/** The one message for every failed sign-in: it never says whether the account exists. */
+export const SIGN_IN_FAILED = "The e-mail or password is not right.";
+
+export const credentialsSchema = z.object({
+  email: z.string().trim().toLowerCase().email().max(254),
+  password: z.string().min(1).max(200),
+});
+
+export interface SignedInUser {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  organisationId: number;
+}
+
+export class SignInError extends Error {}
+
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+/** Checks credentials with throttling; throws SignInError with a message safe to show. */
+export async function authenticate(raw: unknown): Promise<SignedInUser> {
+  const parsed = credentialsSchema.safeParse(raw);
+  if (!parsed.success) throw new SignInError(SIGN_IN_FAILED);
+  const { email, password } = parsed.data;
+
+  const decision = decideThrottle(await fetchSignInFailures(email), new Date());
+  if (decision.locked) {
+    throw new SignInError(`Too many failed sign-ins for this e-mail. Try again in ${decision.retryInMinutes} min.`);
+  }
+  if (decision.delayMs) await sleep(decision.delayMs);
+
+  const user = await fetchUserByEmail(email);
+  const ok = await verifyPassword(password, user?.password_hash ?? DUMMY_HASH);
+  if (!user || !ok || !user.active) {
+    await recordSignInFailure(email);
+    throw new SignInError(SIGN_IN_FAILED);
+  }
+  await clearSignInFailures(email);
+  return { id: String(user.id), email: user.email, name: user.name, role: user.role, organisationId: user.organisation_id };
+}

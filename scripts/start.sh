@@ -1,0 +1,36 @@
+#!/usr/bin/env bash
+# One command from a fresh machine to the app with demo data on http://127.0.0.1:3000:
+# installs what is missing, starts MariaDB, migrates, seeds, builds and serves.
+set -euo pipefail
+. "$(dirname "$0")/lib/common.sh"
+. "$(dirname "$0")/lib/deps.sh"
+cd "$ROOT"
+
+ensure_node_modules
+bash scripts/ensure-env.sh
+bash scripts/db-start.sh
+load_env
+npx tsx scripts/db.ts migrate
+npx tsx scripts/db.ts seed
+bash scripts/services-start.sh
+
+log "building the app"
+NEXT_TELEMETRY_DISABLED=1 node node_modules/next/dist/bin/next build >"$DATA_ROOT/build.log" 2>&1 || { tail -40 "$DATA_ROOT/build.log"; die "build failed; see $DATA_ROOT/build.log"; }
+
+PORT="${PORT:-3000}"
+if (exec 3<>"/dev/tcp/127.0.0.1/$PORT") 2>/dev/null; then
+  die "port $PORT on 127.0.0.1 is in use (an earlier npm start?); stop it with npm run stop"
+fi
+cat >&2 <<MSG
+
+  Scarpline is starting on http://127.0.0.1:$PORT
+  Demo sign-ins (password: scarpline-demo)
+    admin@scarpline.test      administrator: people, projects, members
+    engineer@scarpline.test   engineer: sections, materials, runs
+    reviewer@scarpline.test   reviewer: reviews and signs off runs
+    designer@scarpline.test   designer: sections, runs, slope sweeps
+  Stop with Ctrl-C; npm run stop also stops the database.
+
+MSG
+echo $$ >"$DATA_ROOT/app.pid"
+exec node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT"

@@ -1,0 +1,137 @@
+/**
+ * The real stack the integration and browser tests talk to: a database of the run's own on the
+ * project's MariaDB (created here, dropped at the end), and the built app served on a free port.
+ * Shared by the integration and e2e projects: the first caller starts it, the last stops it.
+ */
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { randomBytes } from "node:crypto";
+import { createServer } from "node:net";
+import path from "node:path";
+import fs from "node:fs";
+import knex from "knex";
+import { knexConfig } from "../../db/config";
+import { seedDemo } from "../../db/seeds/demo";
+
+export interface Stack {
+  dbName: string;
+  appUrl: string;
+}
+
+const ROOT = path.resolve(__dirname, "../..");
+const DIST_DIR = ".next-test";
+
+interface State {
+  users: number;
+  stack: Promise<Stack>;
+  server?: ChildProcess;
+  dbName: string;
+}
+const g = globalThis as unknown as { scarplineStack?: State };
+
+async function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const srv = createServer();
+    srv.once("error", reject);
+    srv.listen(0, "127.0.0.1", () => {
+      const { port } = srv.address() as { port: number };
+      srv.close(() => resolve(port));
+    });
+  });
+}
+
+async function createDatabase(dbName: string): Promise<void> {
+  const admin = knex({ ...knexConfig(), connection: { ...(knexConfig().connection as object), database: undefined } });
+  try {
+    await admin.raw(`CREATE DATABASE \`${dbName}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
+  } finally {
+    await admin.destroy();
+  }
+  const db = knex(knexConfig(dbName));
+  try {
+    await db.migrate.latest();
+    await seedDemo(db);
+  } finally {
+    await db.destroy();
+  }
+}
+
+async function dropDatabase(dbName: string): Promise<void> {
+  const admin = knex({ ...knexConfig(), connection: { ...(knexConfig().connection as object), database: undefined } });
+  try {
+    await admin.raw(`DROP DATABASE IF EXISTS \`${dbName}\``);
+  } finally {
+    await admin.destroy();
+  }
+}
+
+function buildApp(): void {
+  if (process.env.SCARPLINE_SKIP_BUILD === "1" && fs.existsSync(path.join(ROOT, DIST_DIR, "BUILD_ID"))) return;
+  const result = spawnSync(process.execPath, ["node_modules/next/dist/bin/next", "build"], {
+    cwd: ROOT,
+    env: { ...process.env, NEXT_DIST_DIR: DIST_DIR, NEXT_TELEMETRY_DISABLED: "1" },
+    encoding: "utf8",
+  });
+  if (result.status !== 0) throw new Error(`next build failed:\n${result.stdout}\n${result.stderr}`);
+}
+
+async function waitForServer(url: string, server: ChildProcess, log: () => string): Promise<void> {
+  const deadline = Date.now() + 60_000;
+  while (Date.now() < deadline) {
+    if (server.exitCode !== null) throw new Error(`app server exited early:\n${log()}`);
+    try {
+      const res = await fetch(`${url}/sign-in`);
+      if (res.ok) return;
+    } catch {
+      /* not listening yet */
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`app server did not answer within 60 s:\n${log()}`);
+}
+
+async function start(withServer: boolean, state: State): Promise<Stack> {
+  await createDatabase(state.dbName);
+  if (!withServer) return { dbName: state.dbName, appUrl: "" };
+  buildApp();
+  const port = await freePort();
+  const appUrl = `http://127.0.0.1:${port}`;
+  let output = "";
+  const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(port)], {
+    cwd: ROOT,
+    env: {
+      ...process.env,
+      NODE_ENV: "production",
+      NEXT_DIST_DIR: DIST_DIR,
+      DATABASE_NAME: state.dbName,
+      NEXTAUTH_URL: appUrl,
+      APP_URL: appUrl,
+      NEXTAUTH_SECRET: randomBytes(24).toString("base64url"),
+    },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  server.stdout?.on("data", (d) => (output += d));
+  server.stderr?.on("data", (d) => (output += d));
+  state.server = server;
+  await waitForServer(appUrl, server, () => output);
+  return { dbName: state.dbName, appUrl };
+}
+
+/** Starts (or joins) the stack. The first caller decides whether the app server is needed. */
+export function acquireStack(withServer: boolean): Promise<Stack> {
+  if (!g.scarplineStack) {
+    const state: State = { users: 0, dbName: `scarpline_test_${process.pid}_${randomBytes(3).toString("hex")}`, stack: Promise.resolve() as never };
+    state.stack = start(withServer, state);
+    g.scarplineStack = state;
+  }
+  g.scarplineStack.users++;
+  return g.scarplineStack.stack;
+}
+
+export async function releaseStack(): Promise<void> {
+  const state = g.scarplineStack;
+  if (!state) return;
+  if (--state.users > 0) return;
+  g.scarplineStack = undefined;
+  state.server?.kill("SIGTERM");
+  await dropDatabase(state.dbName);
+}

@@ -1,0 +1,15 @@
+import type { Role } from "@/lib/permissions";
+
+declare module "next-auth" {
+  interface Session {
+    user: { id: number; name: string; email: string; role: Role; organisationId: number };
+  }
+}
+
+declare module "next-auth/jwt" {
+  interface JWT {
+    uid?: number;
+    role?: Role;
+    organisationId?: number;
+  }
+}
