@@ -1,0 +1,46 @@
+/**
+ * The parts of the section document (ENGINE-IO.md, input version 1) that the CSV files carry.
+ * Kept here, not imported from lib/stability, so import/export stays a leaf module.
+ */
+
+/** [x, y] in metres. */
+export type Point = [number, number];
+
+/** A closed polygon (first point not repeated) of one material. */
+export interface SectionRegion {
+  material: string;
+  points: Point[];
+}
+
+export interface MohrCoulombMaterial {
+  id: string;
+  model: "mohr-coulomb";
+  /** kN/m³ */
+  gamma: number;
+  /** kN/m³, used below the phreatic line */
+  gammaSat?: number;
+  /** kPa */
+  c: number;
+  /** degrees */
+  phi: number;
+}
+
+export interface UndrainedMaterial {
+  id: string;
+  model: "undrained";
+  gamma: number;
+  gammaSat?: number;
+  /** su (kPa) at suDatum (m), rising by suGradient (kPa/m) with depth below it. */
+  su: number;
+  suGradient?: number;
+  suDatum?: number;
+}
+
+export interface ImpenetrableMaterial {
+  id: string;
+  model: "impenetrable";
+}
+
+export type SectionMaterial = MohrCoulombMaterial | UndrainedMaterial | ImpenetrableMaterial;
+
+export const MATERIAL_MODELS = ["mohr-coulomb", "undrained", "impenetrable"] as const;
