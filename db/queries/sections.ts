@@ -30,3 +30,138 @@ export async function fetchSectionsOfProject(projectId: number, db: Knex = getDb
     updatedByName: r.user_name as string,
   }));
 }
+
+export interface SectionVersionMeta {
+  id: number;
+  version: number;
+  summary: string;
+  createdAt: string;
+  createdByName: string;
+}
+
+export interface SectionDetail {
+  id: number;
+  projectId: number;
+  name: string;
+  description: string;
+  currentVersion: number;
+  versions: SectionVersionMeta[];
+}
+
+export interface StoredVersion {
+  id: number;
+  sectionId: number;
+  version: number;
+  summary: string;
+  document: unknown;
+  createdAt: string;
+  createdByName: string;
+}
+
+export async function fetchSection(projectId: number, sectionId: number, db: Knex = getDb()): Promise<SectionDetail | null> {
+  const s = await db("sections").where({ id: sectionId, project_id: projectId }).first();
+  if (!s) return null;
+  const versions = await db("section_versions as v")
+    .join("users as u", "u.id", "v.created_by")
+    .where("v.section_id", sectionId)
+    .select("v.id", "v.version", "v.summary", "v.created_at", "u.name as user_name")
+    .orderBy("v.version", "desc");
+  return {
+    id: s.id,
+    projectId: s.project_id,
+    name: s.name,
+    description: s.description,
+    currentVersion: s.current_version,
+    versions: versions.map((v: Record<string, unknown>) => ({
+      id: v.id as number,
+      version: v.version as number,
+      summary: v.summary as string,
+      createdAt: new Date(v.created_at as Date).toISOString(),
+      createdByName: v.user_name as string,
+    })),
+  };
+}
+
+export async function fetchSectionVersion(sectionId: number, version: number, db: Knex = getDb()): Promise<StoredVersion | null> {
+  const v = await db("section_versions as v")
+    .join("users as u", "u.id", "v.created_by")
+    .where({ "v.section_id": sectionId, "v.version": version })
+    .select("v.*", "u.name as user_name")
+    .first();
+  if (!v) return null;
+  return {
+    id: v.id,
+    sectionId: v.section_id,
+    version: v.version,
+    summary: v.summary,
+    document: JSON.parse(v.document),
+    createdAt: new Date(v.created_at).toISOString(),
+    createdByName: v.user_name,
+  };
+}
+
+export async function fetchSectionVersionById(versionId: number, db: Knex = getDb()): Promise<StoredVersion | null> {
+  const v = await db("section_versions").where({ id: versionId }).first();
+  return v ? fetchSectionVersion(v.section_id, v.version, db) : null;
+}
+
+/** Creates a section with its first version, in one transaction. */
+export async function createSection(
+  input: { projectId: number; name: string; description: string; document: unknown; summary: string; userId: number },
+  db: Knex = getDb(),
+): Promise<number> {
+  return db.transaction(async (trx) => {
+    const [id] = await trx("sections").insert({
+      project_id: input.projectId,
+      name: input.name,
+      description: input.description,
+      current_version: 1,
+      created_by: input.userId,
+    });
+    await trx("section_versions").insert({
+      section_id: id,
+      version: 1,
+      document: JSON.stringify(input.document),
+      summary: input.summary,
+      created_by: input.userId,
+    });
+    return id;
+  });
+}
+
+export class StaleVersionError extends Error {
+  constructor(readonly currentVersion: number) {
+    super(`The section was saved by someone else meanwhile (now version ${currentVersion}).`);
+  }
+}
+
+/**
+ * Saves a new version. `baseVersion` is the version the editor started from: a save on top of
+ * a newer version would silently drop someone's work, so it is refused instead.
+ */
+export async function saveSectionVersion(
+  input: { sectionId: number; baseVersion: number; document: unknown; summary: string; userId: number; name?: string; description?: string },
+  db: Knex = getDb(),
+): Promise<number> {
+  return db.transaction(async (trx) => {
+    const s = await trx("sections").where({ id: input.sectionId }).forUpdate().first();
+    if (s.current_version !== input.baseVersion) throw new StaleVersionError(s.current_version);
+    const version = s.current_version + 1;
+    await trx("section_versions").insert({
+      section_id: input.sectionId,
+      version,
+      document: JSON.stringify(input.document),
+      summary: input.summary,
+      created_by: input.userId,
+    });
+    await trx("sections")
+      .where({ id: input.sectionId })
+      .update({
+        current_version: version,
+        updated_at: trx.fn.now(),
+        ...(input.name !== undefined ? { name: input.name } : {}),
+        ...(input.description !== undefined ? { description: input.description } : {}),
+      });
+    return version;
+  });
+}

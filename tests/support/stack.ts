@@ -18,7 +18,8 @@ export interface Stack {
 }
 
 const ROOT = path.resolve(__dirname, "../..");
-const DIST_DIR = ".next-test";
+// Each concurrent test runner may build into its own folder (SCARPLINE_TEST_DIST).
+const DIST_DIR = process.env.SCARPLINE_TEST_DIST ?? ".next-test";
 
 interface State {
   users: number;
