@@ -1,0 +1,46 @@
+/**
+ * Fills in the analysis defaults so every caller works with a complete analysis:
+ * 50 slices, direction auto, both methods, steady case, classical ordinary method,
+ * 10 lowest circles kept, no refinement, no minimum depth.
+ */
+import type { Analysis, Direction, Drawdown, Grid, LoadCase, Method, OrdinaryForm, Radii } from "./schema";
+
+export const DEFAULT_SLICES = 50;
+export const DEFAULT_GAMMA_W = 9.81; // kN/m³
+export const DEFAULT_LOWEST_COUNT = 10;
+export const MAX_SLICES = 500;
+
+/** An analysis with every default applied; grid and radii stay optional (one-circle runs need neither). */
+export interface ResolvedAnalysis {
+  case: LoadCase;
+  methods: Method[];
+  slices: number;
+  direction: Direction;
+  ordinaryForm: OrdinaryForm;
+  refine: boolean;
+  lowestCount: number;
+  minDepth: number;
+  grid?: Grid;
+  radii?: Radii;
+  drawdown?: Drawdown;
+}
+
+/** Returns a complete analysis from a partial one (or none), without changing the input. */
+export function resolveAnalysis(analysis?: Analysis | null): ResolvedAnalysis {
+  const a = analysis ?? {};
+  const methods: Method[] = a.methods && a.methods.length > 0 ? [...new Set(a.methods)] : ["bishop", "fellenius"];
+  const out: ResolvedAnalysis = {
+    case: a.case ?? "steady",
+    methods,
+    slices: a.slices ?? DEFAULT_SLICES,
+    direction: a.direction ?? "auto",
+    ordinaryForm: a.ordinaryForm ?? "classical",
+    refine: a.refine ?? false,
+    lowestCount: a.lowestCount ?? DEFAULT_LOWEST_COUNT,
+    minDepth: a.minDepth ?? 0,
+  };
+  if (a.grid) out.grid = { ...a.grid };
+  if (a.radii) out.radii = { ...a.radii };
+  if (a.drawdown) out.drawdown = { ...a.drawdown };
+  return out;
+}

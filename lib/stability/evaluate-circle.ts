@@ -1,0 +1,133 @@
+/**
+ * Factor of safety of one trial circle by the requested methods: the hot path of the grid
+ * search (ENGINE.md §3–§5). Allocation-free: results are left in the scratch fields, and
+ * one-circle reports re-run the governing mass with the very same code, so a stored
+ * critical circle re-checks to the same bits.
+ */
+import { bishopFactor } from "./methods/bishop";
+import { ordinaryFactor } from "./methods/ordinary";
+import { findMasses } from "./intersect";
+import type { PreparedSection } from "./prepare";
+import type { Scratch } from "./scratch";
+import { buildSlices } from "./slices";
+import * as status from "./status";
+
+// Module-local copies: imported bindings are property reads on every use in the hot loop.
+const BAD_RADIUS = status.BAD_RADIUS;
+const NO_DRIVING = status.NO_DRIVING;
+const OK = status.OK;
+
+/** Arc elevation (m) at x of the lower arc of circle (xc, yc, r). */
+export function arcY(xc: number, yc: number, r: number, x: number): number {
+  const d = x - xc;
+  return yc - Math.sqrt(Math.max(0, r * r - d * d));
+}
+
+/** Sliding direction of a circle: fixed by the analysis, or toward its lower end (auto). */
+function chooseDirection(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number): number {
+  if (P.direction !== 0) return P.direction;
+  const yl = arcY(xc, yc, r, S.massA[0]);
+  const yr = arcY(xc, yc, r, S.massB[S.nMass - 1]);
+  if (Math.abs(yl - yr) <= 1e-6) return 0;
+  return yr < yl ? 1 : -1;
+}
+
+/**
+ * Slices mass m of the circle and computes its driving term; returns a status code.
+ * On OK, S holds the slices and S.D the driving term (kN, may be ≤ 0).
+ */
+export function sliceMass(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, m: number, dir: number): number {
+  const st = buildSlices(P, S, xc, yc, r, S.massA[m], S.massB[m], dir);
+  if (st !== OK) return st;
+  let D = 0;
+  for (let i = 0; i < S.n; i++) D += S.dD[i];
+  S.D = D;
+  return OK;
+}
+
+/**
+ * Evaluates circle (xc, yc, r) (m). Sets S.fsO / S.fsB (NaN when invalid, with S.reasonO /
+ * S.reasonB), S.dir, S.govO / S.govB (the governing masses) and Bishop's mα record.
+ * @returns OK when the circle has at least one slip mass with a driving moment, else the reason.
+ */
+export function evaluateCircle(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, wantBishop: boolean): number {
+  S.fsO = NaN;
+  S.fsB = NaN;
+  S.govO = -1;
+  S.govB = -1;
+  S.minMa = NaN;
+  if (!(r > 0)) return reject(S, BAD_RADIUS);
+  const st = findMasses(P, S, xc, yc, r);
+  if (st !== OK) return reject(S, st);
+  let dir = chooseDirection(P, S, xc, yc, r);
+  let status = runMasses(P, S, xc, yc, r, dir === 0 ? 1 : dir, wantBishop);
+  // Ends at one level: slide the way the loads drive it.
+  if (dir === 0 && status === NO_DRIVING) {
+    dir = -1;
+    status = runMasses(P, S, xc, yc, r, -1, wantBishop);
+  } else if (dir === 0) dir = 1;
+  S.dir = dir;
+  return status;
+}
+
+function reject(S: Scratch, st: number): number {
+  S.reasonO = st;
+  S.reasonB = st;
+  return st;
+}
+
+/** Runs every mass in direction dir and keeps each method's lowest factor. */
+function runMasses(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, dir: number, wantBishop: boolean): number {
+  let fo = Infinity;
+  let fb = Infinity;
+  let mo = -1;
+  let mb = -1;
+  let failB = OK;
+  let minMa = NaN;
+  let minMaX = NaN;
+  let minMaAlpha = NaN;
+  let negB = 0;
+  let negO = 0;
+  let iterations = 0;
+  let driving = false;
+  const eff = P.ordinaryForm === 1;
+  for (let m = 0; m < S.nMass; m++) {
+    const st = sliceMass(P, S, xc, yc, r, m, dir);
+    if (st !== OK) return reject(S, st);
+    const D = S.D;
+    if (!(D > 1e-12)) continue;
+    driving = true;
+    const f0 = ordinaryFactor(S, D, eff);
+    if (f0 < fo) { fo = f0; mo = m; negO = S.negO; }
+    if (wantBishop) {
+      const f1 = bishopFactor(S, D, f0);
+      if (Number.isNaN(f1)) failB = S.reasonB;
+      else if (f1 < fb) {
+        fb = f1; mb = m; minMa = S.minMa; minMaX = S.minMaX; minMaAlpha = S.minMaAlpha; negB = S.negB; iterations = S.iterations;
+      }
+    }
+  }
+  S.dir = dir;
+  if (!driving) return reject(S, NO_DRIVING);
+  S.fsO = fo;
+  S.govO = mo;
+  S.negO = negO;
+  S.reasonO = OK;
+  if (wantBishop) {
+    if (failB !== OK) {
+      S.fsB = NaN;
+      S.reasonB = failB;
+      S.govB = -1;
+    } else {
+      S.fsB = fb;
+      S.govB = mb;
+      S.reasonB = OK;
+      S.minMa = minMa;
+      S.minMaX = minMaX;
+      S.minMaAlpha = minMaAlpha;
+      S.negB = negB;
+      S.iterations = iterations;
+    }
+  }
+  return OK;
+}

@@ -1,0 +1,79 @@
+/**
+ * Reusable buffers for the slice loop (ENGINE.md §5): allocated once per worker so that
+ * evaluating a circle creates no objects. Slice arrays hold one slip mass at a time.
+ */
+import { MAX_SLICES } from "./defaults";
+
+const SLICE_CAP = MAX_SLICES + 8;
+const BREAK_CAP = 8192;
+
+/** Scratch state of one evaluator; results of the last circle are left in its fields. */
+export interface Scratch {
+  roots: Float64Array;
+  massA: Float64Array;
+  massB: Float64Array;
+  nMass: number;
+  brk: Float64Array;
+  kept: Float64Array;
+  // Per slice (current mass)
+  n: number;
+  xL: Float64Array;
+  xR: Float64Array;
+  ym: Float64Array;
+  b: Float64Array;
+  sinA: Float64Array;
+  cosA: Float64Array;
+  len: Float64Array;
+  W: Float64Array;
+  Ww: Float64Array;
+  Q: Float64Array;
+  V: Float64Array;
+  /** Horizontal water thrust on the slice, positive in the sliding direction (kN/m). */
+  Fw: Float64Array;
+  Hs: Float64Array;
+  u: Float64Array;
+  uRaw: Float64Array;
+  c: Float64Array;
+  tanPhi: Float64Array;
+  mat: Int32Array;
+  dD: Float64Array;
+  /** Horizontal force resolved into the classical ordinary-method normal force. */
+  Hn: Float64Array;
+  // Results of the last circle
+  dir: number;
+  depth: number;
+  D: number;
+  fsO: number;
+  fsB: number;
+  negO: number;
+  negB: number;
+  minMa: number;
+  minMaX: number;
+  minMaAlpha: number;
+  iterations: number;
+  reasonB: number;
+  reasonO: number;
+  /** Index of the mass that governs each method (−1 when none). */
+  govO: number;
+  govB: number;
+}
+
+/** Allocates a scratch set (about 60 kB). */
+export function createScratch(): Scratch {
+  const f = () => new Float64Array(SLICE_CAP);
+  return {
+    roots: new Float64Array(1024),
+    massA: new Float64Array(512),
+    massB: new Float64Array(512),
+    nMass: 0,
+    brk: new Float64Array(BREAK_CAP),
+    kept: new Float64Array(BREAK_CAP),
+    n: 0,
+    xL: f(), xR: f(), ym: f(), b: f(), sinA: f(), cosA: f(), len: f(),
+    W: f(), Ww: f(), Q: f(), V: f(), Fw: f(), Hs: f(), u: f(), uRaw: f(),
+    c: f(), tanPhi: f(), mat: new Int32Array(SLICE_CAP), dD: f(), Hn: f(),
+    dir: 1, depth: 0, D: 0,
+    fsO: NaN, fsB: NaN, negO: 0, negB: 0, minMa: NaN, minMaX: NaN, minMaAlpha: NaN,
+    iterations: 0, reasonB: 0, reasonO: 0, govO: -1, govB: -1,
+  };
+}

@@ -1,0 +1,230 @@
+/**
+ * Cuts one slip mass into slices and computes each slice's loads and base strength
+ * (ENGINE.md §3 "Slice boundaries" and "Per slice"). Writes into the scratch arrays;
+ * allocation-free. Sliding is toward +x when dir = +1 and toward −x when dir = −1: the
+ * geometry stays in document coordinates and only the signs of sin α and of the
+ * horizontal water forces change, which is the same as mirroring the section.
+ */
+import * as defaults from "./defaults";
+import * as cases from "./load-cases";
+import type { PreparedSection } from "./prepare";
+import type { Scratch } from "./scratch";
+import * as status from "./status";
+import { findStrip } from "./strip-table";
+import { addFaceThrust } from "./vertical-faces";
+
+// Module-local copies: imported bindings are property reads on every use in the hot loop.
+const MAX_SLICES = defaults.MAX_SLICES;
+const KIND_RIGID = cases.KIND_RIGID;
+const KIND_UNDRAINED = cases.KIND_UNDRAINED;
+const OK = status.OK;
+const OUT_OF_SECTION = status.OUT_OF_SECTION;
+const RIGID = status.RIGID;
+const SHALLOW = status.SHALLOW;
+const TOO_MANY_BREAKS = status.TOO_MANY_BREAKS;
+
+/** Collects the slice boundaries of mass [xA, xB]; returns how many are in S.kept (−1 if too many). */
+function collectBreaks(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, xA: number, xB: number): number {
+  const T = P.table;
+  const brk = S.brk;
+  const cap = brk.length - 4;
+  const r2 = r * r;
+  const line = P.waterKind === 1;
+  let nb = 0;
+  brk[nb++] = xA;
+  let k = findStrip(T, xA);
+  for (;;) {
+    const x0 = T.xs[k] > xA ? T.xs[k] : xA;
+    const x1 = T.xs[k + 1] < xB ? T.xs[k + 1] : xB;
+    const start = nb;
+    const o = T.lineOff[k];
+    const e = T.lineOff[k + 1];
+    // Arc crossings with material boundaries, the base and the water line.
+    for (let i = o; i <= e; i++) {
+      let a: number;
+      let b: number;
+      if (i < e) {
+        if (T.lineBreak[i] === 0) continue;
+        a = T.lineA[i];
+        b = T.lineB[i];
+      } else {
+        if (!line) break;
+        a = P.waterA[k];
+        b = P.waterB[k];
+      }
+      const qa = 1 + b * b;
+      const qb = b * (a - yc) - xc;
+      const qc = xc * xc + (a - yc) * (a - yc) - r2;
+      const disc = qb * qb - qa * qc;
+      if (disc <= 0) continue;
+      const sq = Math.sqrt(disc);
+      for (let s = -1; s <= 1; s += 2) {
+        const x = (-qb + s * sq) / qa;
+        if (x > x0 && x < x1 && a + b * x < yc && nb < cap) brk[nb++] = x;
+      }
+    }
+    for (let i = start + 1; i < nb; i++) {
+      const v = brk[i];
+      let j = i - 1;
+      while (j >= start && brk[j] > v) { brk[j + 1] = brk[j]; j--; }
+      brk[j + 1] = v;
+    }
+    if (nb >= cap) return -1;
+    brk[nb++] = x1;
+    if (x1 >= xB || k + 1 >= T.n) break;
+    k++;
+  }
+  // Merge boundaries closer than max(0.1 mm, 1e-7·R) (ENGINE.md §3).
+  const tol = Math.max(1e-4, 1e-7 * r);
+  const kept = S.kept;
+  let nk = 0;
+  kept[nk++] = xA;
+  for (let i = 1; i < nb; i++) {
+    const x = brk[i];
+    if (x - kept[nk - 1] >= tol) kept[nk++] = x;
+    else if (i === nb - 1) {
+      if (nk > 1) kept[nk - 1] = x;
+      else kept[nk++] = x;
+    }
+  }
+  return nk;
+}
+
+/**
+ * Builds the slices of mass [xA, xB] of circle (xc, yc, r) sliding in direction dir.
+ * @returns a status code; on OK, S.n slices are filled and S.depth is the mass thickness (m).
+ */
+export function buildSlices(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, xA: number, xB: number, dir: number): number {
+  const nk = collectBreaks(P, S, xc, yc, r, xA, xB);
+  if (nk < 0) return TOO_MANY_BREAKS;
+  const kept = S.kept;
+  let bmax = (xB - xA) / P.slices;
+  let total = 0;
+  for (let pass = 0; pass < 40; pass++) {
+    total = 0;
+    for (let i = 1; i < nk; i++) total += Math.max(1, Math.ceil((kept[i] - kept[i - 1]) / bmax - 1e-9));
+    if (total <= MAX_SLICES) break;
+    bmax *= 1.25;
+  }
+  if (total > MAX_SLICES) return TOO_MANY_BREAKS;
+  const T = P.table;
+  const M = P.mat;
+  const r2 = r * r;
+  const gw = P.gammaW;
+  const line = P.waterKind === 1;
+  const ruMode = P.waterKind === 2;
+  const kh = P.kh;
+  // Locals for the arrays read per slice: fewer property loads in the loop.
+  const xs = T.xs;
+  const lineA = T.lineA;
+  const lineB = T.lineB;
+  const lineOff = T.lineOff;
+  const layerMat = T.layerMat;
+  const waterA = P.waterA;
+  const waterB = P.waterB;
+  const nStrips = T.n;
+  let ks = findStrip(T, (kept[0] + kept[1]) / 2);
+  let n = 0;
+  let depth = 0;
+  for (let i = 1; i < nk; i++) {
+    const p = kept[i - 1];
+    const q = kept[i];
+    const m = Math.max(1, Math.ceil((q - p) / bmax - 1e-9));
+    const w = (q - p) / m;
+    for (let j = 0; j < m; j++) {
+      const xl = p + j * w;
+      const xr = j === m - 1 ? q : p + (j + 1) * w;
+      const b = xr - xl;
+      const xm = (xl + xr) / 2;
+      const ddx = xm - xc;
+      const ym = yc - Math.sqrt(r2 - ddx * ddx);
+      while (ks + 1 < nStrips && xs[ks + 1] <= xm) ks++;
+      const o = lineOff[ks];
+      const e = lineOff[ks + 1] - 1;
+      if (ym < lineA[e] + lineB[e] * xm - 1e-6) return OUT_OF_SECTION;
+      const yg = lineA[o] + lineB[o] * xm;
+      if (yg - ym > depth) depth = yg - ym;
+      const yw = line ? waterA[ks] + waterB[ks] * xm : -Infinity;
+      let wsum = 0;
+      let wy = 0;
+      let baseMat = layerMat[e - 1];
+      for (let li = o; li < e; li++) {
+        const top = lineA[li] + lineB[li] * xm;
+        if (top <= ym) { baseMat = li > o ? layerMat[li - 1] : layerMat[o]; break; }
+        const bot = lineA[li + 1] + lineB[li + 1] * xm;
+        const mi = layerMat[li];
+        const last = bot <= ym + 1e-9;
+        const lowBot = last ? ym : bot;
+        const h = top - lowBot;
+        if (h > 0) {
+          const g = M.gamma[mi];
+          if (g < 0) return RIGID;
+          let hb = 0;
+          if (yw > lowBot) hb = yw - lowBot < h ? yw - lowBot : h;
+          const ha = h - hb;
+          const gs = M.gammaSat[mi];
+          wsum += g * ha + gs * hb;
+          if (kh !== 0) wy += g * ha * (top - ha / 2) + gs * hb * (lowBot + hb / 2);
+        }
+        if (last) { baseMat = mi; break; }
+      }
+      const kind = M.kind[baseMat];
+      if (kind === KIND_RIGID) return RIGID;
+      const W = wsum * b;
+      const sinA = (dir * (xc - xm)) / r;
+      const cosA = (yc - ym) / r;
+      let u = 0;
+      if (line) u = yw > ym ? gw * (yw - ym) * P.waterCos2[ks] : 0;
+      else if (ruMode) u = P.ru * wsum;
+      let Ww = 0;
+      let Fw = 0;
+      let dH = 0;
+      if (line) {
+        const ygL = lineA[o] + lineB[o] * xl;
+        const ygR = lineA[o] + lineB[o] * xr;
+        const dL = waterA[ks] + waterB[ks] * xl - ygL;
+        const dR = waterA[ks] + waterB[ks] * xr - ygR;
+        const dl = dL > 0 ? dL : 0;
+        const dr = dR > 0 ? dR : 0;
+        if (dl + dr > 0) {
+          Ww = (gw * b * (dl + dr)) / 2;
+          // Thrust toward +x where the ground rises to the right; sign flips with dir.
+          Fw = (dir * gw * (dl + dr) * (ygR - ygL)) / 2;
+          const yF = ygL + ((ygR - ygL) * (dl + 2 * dr)) / (3 * (dl + dr));
+          dH += Fw * (yc - yF);
+        }
+      }
+      const Q = P.q[ks] * b;
+      const V = W + Ww + Q;
+      let Hs = 0;
+      if (kh !== 0 && wsum > 0) {
+        Hs = kh * W;
+        dH += Hs * (yc - wy / wsum);
+      }
+      let c: number;
+      let tp: number;
+      let uEff = u;
+      if (kind === KIND_UNDRAINED) {
+        const dz = M.suDatum[baseMat] - ym;
+        c = M.su[baseMat] + (dz > 0 ? M.suGradient[baseMat] * dz : 0);
+        tp = 0;
+        uEff = 0;
+      } else {
+        c = M.c[baseMat];
+        tp = M.tanPhi[baseMat];
+      }
+      S.xL[n] = xl; S.xR[n] = xr; S.ym[n] = ym; S.b[n] = b;
+      S.sinA[n] = sinA; S.cosA[n] = cosA; S.len[n] = b / cosA;
+      S.W[n] = W; S.Ww[n] = Ww; S.Q[n] = Q; S.V[n] = V; S.Fw[n] = Fw; S.Hs[n] = Hs;
+      S.u[n] = uEff; S.uRaw[n] = u; S.c[n] = c; S.tanPhi[n] = tp; S.mat[n] = baseMat;
+      S.Hn[n] = Fw + Hs;
+      S.dD[n] = V * sinA + dH / r;
+      if (P.hasFaces) addFaceThrust(P, S, n, ks, xl, xr, xc, yc, r, dir);
+      n++;
+    }
+  }
+  S.n = n;
+  S.depth = depth;
+  if (P.minDepth > 0 && depth < P.minDepth) return SHALLOW;
+  return OK;
+}

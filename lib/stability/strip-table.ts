@@ -1,0 +1,186 @@
+/**
+ * The strip table (ENGINE.md §5): the section cut into vertical strips at every vertex x,
+ * so that inside a strip every region boundary is one straight line. Each strip lists its
+ * boundary lines from the ground down to the base, with the material between them, so a
+ * soil column is a binary search plus a short loop. Building it also finds overlaps,
+ * voids (holes, overhangs) and uncovered x ranges.
+ */
+import { fmtPoint, issue, type Issue } from "./issues";
+import { uniqueSorted } from "./geometry";
+
+/** One region ring as the builder needs it: points (m), material index, region index. */
+export interface RingInput {
+  points: ReadonlyArray<readonly [number, number]>;
+  material: number;
+  region: number;
+}
+
+/** Strips between xs[k] and xs[k+1]; lines y = lineA + lineB·x, top (ground) first. */
+export interface StripTable {
+  n: number;
+  xs: Float64Array;
+  /** Lines of strip k are lineOff[k] … lineOff[k+1] − 1 (layers + 1 lines). */
+  lineOff: Int32Array;
+  lineA: Float64Array;
+  lineB: Float64Array;
+  /** Material of the layer just below line i (unused for a strip's last line). */
+  layerMat: Int32Array;
+  /** 1 when the arc crossing line i changes the base material or leaves the section. */
+  lineBreak: Uint8Array;
+}
+
+/** Vertical tolerance for contact between regions (ENGINE.md §1: 1 mm). */
+export const CONTACT_TOL = 1e-3;
+/** Two vertex x within this (m) are one strip boundary. */
+export const X_MERGE_TOL = 1e-6;
+
+interface Interval {
+  ta: number; tb: number; ba: number; bb: number;
+  material: number; region: number;
+}
+
+/**
+ * Builds the strip table from region rings plus extra break abscissae (water, loads).
+ * @returns the table (null when the regions leave an x range uncovered) and every problem found.
+ */
+export function buildStripTable(rings: ReadonlyArray<RingInput>, extraBreaks: ReadonlyArray<number> = []): { table: StripTable | null; issues: Issue[] } {
+  const issues: Issue[] = [];
+  const seen = new Set<string>();
+  let xmin = Infinity;
+  let xmax = -Infinity;
+  const xsAll: number[] = [];
+  for (const r of rings) for (const p of r.points) { xsAll.push(p[0]); xmin = Math.min(xmin, p[0]); xmax = Math.max(xmax, p[0]); }
+  for (const x of extraBreaks) if (x > xmin && x < xmax) xsAll.push(x);
+  const xs = uniqueSorted(xsAll, X_MERGE_TOL);
+  const lineA: number[] = [];
+  const lineB: number[] = [];
+  const layerMat: number[] = [];
+  const lineBreak: number[] = [];
+  const lineOff: number[] = [0];
+  let covered = true;
+  for (let k = 0; k + 1 < xs.length; k++) {
+    const x0 = xs[k];
+    const x1 = xs[k + 1];
+    const ivs = stripIntervals(rings, x0, x1);
+    if (ivs.length === 0) {
+      covered = false;
+      issues.push(issue("regions-not-covering", "regions", `No region covers x = ${x0.toFixed(2)} to ${x1.toFixed(2)} m: the regions must form one section without side gaps.`, [(x0 + x1) / 2, 0]));
+      lineOff.push(lineA.length);
+      continue;
+    }
+    checkContacts(ivs, x0, x1, issues, seen);
+    // Merge neighbouring layers of one material: fewer lines, same column.
+    const tops: [number, number][] = [[ivs[0].ta, ivs[0].tb]];
+    const mats: number[] = [ivs[0].material];
+    for (let i = 1; i < ivs.length; i++) {
+      if (ivs[i].material === mats[mats.length - 1]) continue;
+      tops.push([ivs[i].ta, ivs[i].tb]);
+      mats.push(ivs[i].material);
+    }
+    const last = ivs[ivs.length - 1];
+    for (let i = 0; i < tops.length; i++) {
+      lineA.push(tops[i][0]); lineB.push(tops[i][1]); layerMat.push(mats[i]); lineBreak.push(i === 0 ? 0 : 1);
+    }
+    lineA.push(last.ba); lineB.push(last.bb); layerMat.push(-1); lineBreak.push(1);
+    lineOff.push(lineA.length);
+  }
+  if (!covered) return { table: null, issues };
+  return {
+    table: {
+      n: xs.length - 1,
+      xs: Float64Array.from(xs),
+      lineOff: Int32Array.from(lineOff),
+      lineA: Float64Array.from(lineA),
+      lineB: Float64Array.from(lineB),
+      layerMat: Int32Array.from(layerMat),
+      lineBreak: Uint8Array.from(lineBreak),
+    },
+    issues,
+  };
+}
+
+/** Solid intervals of every ring across one strip, sorted from the top down. */
+function stripIntervals(rings: ReadonlyArray<RingInput>, x0: number, x1: number): Interval[] {
+  const xm = (x0 + x1) / 2;
+  const out: Interval[] = [];
+  for (const r of rings) {
+    const lines: { a: number; b: number; y: number }[] = [];
+    const pts = r.points;
+    for (let i = 0; i < pts.length; i++) {
+      const p = pts[i];
+      const q = pts[(i + 1) % pts.length];
+      const lo = Math.min(p[0], q[0]);
+      const hi = Math.max(p[0], q[0]);
+      if (hi - lo <= X_MERGE_TOL || lo > x0 + X_MERGE_TOL || hi < x1 - X_MERGE_TOL) continue;
+      const b = (q[1] - p[1]) / (q[0] - p[0]);
+      const a = p[1] - b * p[0];
+      lines.push({ a, b, y: a + b * xm });
+    }
+    lines.sort((u, v) => v.y - u.y);
+    for (let i = 0; i + 1 < lines.length; i += 2) {
+      out.push({ ta: lines[i].a, tb: lines[i].b, ba: lines[i + 1].a, bb: lines[i + 1].b, material: r.material, region: r.region });
+    }
+  }
+  out.sort((u, v) => v.ta + v.tb * xm - (u.ta + u.tb * xm));
+  return out;
+}
+
+/** Reports overlaps and voids between vertically neighbouring intervals of one strip. */
+function checkContacts(ivs: Interval[], x0: number, x1: number, issues: Issue[], seen: Set<string>): void {
+  for (let i = 0; i + 1 < ivs.length; i++) {
+    const up = ivs[i];
+    const dn = ivs[i + 1];
+    // The difference of two lines is linear, so its ends bound it over the strip.
+    const d0 = dn.ta + dn.tb * x0 - (up.ba + up.bb * x0);
+    const d1 = dn.ta + dn.tb * x1 - (up.ba + up.bb * x1);
+    const worst = Math.abs(d0) >= Math.abs(d1) ? 0 : 1;
+    const d = worst === 0 ? d0 : d1;
+    if (Math.abs(d) <= CONTACT_TOL) continue;
+    const x = worst === 0 ? x0 : x1;
+    const y = up.ba + up.bb * x;
+    const a = Math.min(up.region, dn.region);
+    const b = Math.max(up.region, dn.region);
+    if (d > 0) {
+      const key = `o${a}-${b}`;
+      if (seen.has(key)) continue;
+      seen.add(key);
+      const msg = a === b
+        ? `regions[${a}] overlaps itself near ${fmtPoint(x, y)}. Redraw it as one simple polygon.`
+        : `regions[${a}] and regions[${b}] overlap near ${fmtPoint(x, y)}. Move the shared boundary so each point of the section belongs to one region.`;
+      issues.push(issue("regions-overlap", `regions[${b}]`, msg, [x, y]));
+    } else {
+      const key = `g${a}-${b}`;
+      if (seen.has(key)) continue;
+      seen.add(key);
+      issues.push(issue("regions-void", `regions[${dn.region}]`,
+        `Void below the ground at ${fmtPoint(x, y)} between regions[${up.region}] and regions[${dn.region}]. Regions must fill the section from the ground down to its base: no holes or overhangs.`, [x, y]));
+    }
+  }
+}
+
+/** Index of the strip holding x (the right-hand one when x is a boundary), clamped. */
+export function findStrip(t: StripTable, x: number): number {
+  const xs = t.xs;
+  let lo = 0;
+  let hi = t.n;
+  if (x <= xs[0]) return 0;
+  if (x >= xs[hi]) return hi - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (xs[mid] <= x) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/** Ground elevation (m) at x inside strip k, from the strip's top line. */
+export function groundInStrip(t: StripTable, k: number, x: number): number {
+  const i = t.lineOff[k];
+  return t.lineA[i] + t.lineB[i] * x;
+}
+
+/** Base elevation (m) of the section at x inside strip k. */
+export function bottomInStrip(t: StripTable, k: number, x: number): number {
+  const i = t.lineOff[k + 1] - 1;
+  return t.lineA[i] + t.lineB[i] * x;
+}

@@ -1,0 +1,87 @@
+/**
+ * Command-line tool of the stability engine (ENGINE-IO.md):
+ *   npx tsx scripts/analyze.ts section.json                       grid search
+ *   npx tsx scripts/analyze.ts section.json --circle xc,yc,r      one circle, slice table
+ *   cat section.json | npx tsx scripts/analyze.ts -               read standard input
+ * Options: --map adds the minimum-FS map per method to a search's output.
+ * Standard output carries only JSON. Exit 0 with "ok": true; exit 2 with "ok": false and
+ * the error list on bad input or bad arguments; exit 1 on an internal failure.
+ */
+import { readFileSync } from "node:fs";
+import { analyzeCircle } from "../lib/stability/analyze-circle";
+import { runGridSearch } from "../lib/stability/grid-search";
+
+interface CliError {
+  code: string;
+  path: string;
+  message: string;
+}
+
+const USAGE = "usage: analyze.ts <section.json | -> [--circle xc,yc,r] [--map]";
+
+function fail(status: number, errors: CliError[]): never {
+  process.stdout.write(`${JSON.stringify({ ok: false, errors }, null, 2)}\n`);
+  process.exit(status);
+}
+
+function parseArgs(argv: string[]): { file: string; circle?: { xc: number; yc: number; r: number }; map: boolean } {
+  let file: string | undefined;
+  let circle: { xc: number; yc: number; r: number } | undefined;
+  let map = false;
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i];
+    if (a === "--circle") {
+      const spec = argv[++i];
+      const nums = (spec ?? "").split(",").map((s) => Number(s.trim()));
+      if (nums.length !== 3 || !nums.every(Number.isFinite)) {
+        fail(2, [{ code: "bad-argument", path: "--circle", message: `--circle needs three numbers xc,yc,r in metres (got "${spec ?? ""}"). ${USAGE}` }]);
+      }
+      circle = { xc: nums[0], yc: nums[1], r: nums[2] };
+    } else if (a === "--map") map = true;
+    else if (a.startsWith("--")) fail(2, [{ code: "bad-argument", path: a, message: `Unknown option ${a}. ${USAGE}` }]);
+    else if (file === undefined) file = a;
+    else fail(2, [{ code: "bad-argument", path: a, message: `Only one input file is read (got "${file}" and "${a}"). ${USAGE}` }]);
+  }
+  if (file === undefined) fail(2, [{ code: "bad-argument", path: "", message: `No input given. ${USAGE}` }]);
+  return { file, circle, map };
+}
+
+function readInput(file: string): unknown {
+  let text: string;
+  try {
+    text = readFileSync(file === "-" ? 0 : file, "utf8");
+  } catch (e) {
+    fail(2, [{ code: "unreadable-input", path: "", message: `Cannot read ${file === "-" ? "standard input" : file}: ${(e as Error).message}` }]);
+  }
+  try {
+    return JSON.parse(text);
+  } catch (e) {
+    fail(2, [{ code: "invalid-json", path: "", message: `The input is not valid JSON: ${(e as Error).message}` }]);
+  }
+}
+
+function main(): void {
+  const { file, circle, map } = parseArgs(process.argv.slice(2));
+  const doc = readInput(file);
+  if (circle) {
+    const r = analyzeCircle(doc, circle);
+    process.stdout.write(`${JSON.stringify(r, null, 2)}\n`);
+    process.exit(r.ok ? 0 : 2);
+  }
+  const r = runGridSearch(doc);
+  if (!r.ok) {
+    process.stdout.write(`${JSON.stringify(r, null, 2)}\n`);
+    process.exit(2);
+  }
+  const { fsMap, ...rest } = r;
+  const out = map ? r : rest;
+  void fsMap;
+  process.stdout.write(`${JSON.stringify(out, null, 2)}\n`);
+  process.exit(0);
+}
+
+try {
+  main();
+} catch (e) {
+  fail(1, [{ code: "internal-error", path: "", message: `The engine failed unexpectedly: ${(e as Error).message}` }]);
+}
