@@ -10,4 +10,14 @@ export type { Circle, CircleFs, FsMap, EngineFailure, MethodRecord } from "./res
 export { sectionGround } from "./prepare";
 export { REASONS } from "./status";
 export { infiniteSlopeFactor, infiniteSlopeUndrained, type InfiniteSlopeInput } from "./infinite-slope";
-export * from "./seepage";
+export {
+  computeFilterSeepage,
+  kozenyY0,
+  criticalGradient,
+  type SeepageInput,
+  type SeepageResult,
+  type SeepageConstruction,
+  type SeepageLimit,
+  type PipingCheck,
+  type SeepageFlow,
+} from "./seepage";
