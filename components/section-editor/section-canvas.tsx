@@ -1,0 +1,68 @@
+"use client";
+
+/**
+ * The konva drawing of the section. It only draws: pointer events are read by the
+ * container in section-editor.tsx, which keeps this file free of editing logic. Konva
+ * needs a browser, so this module is loaded through next/dynamic with ssr: false.
+ */
+import { useMemo } from "react";
+import { Stage } from "react-konva";
+import type { Point, SectionDocument } from "@/lib/stability";
+import type { Draft } from "@/lib/editor/drafts";
+import type { Selection } from "@/lib/editor/refs";
+import type { ViewTransform } from "@/lib/editor/view-transform";
+import { AxesLayer } from "./layers/axes-layer";
+import { GridLayer } from "./layers/grid-layer";
+import { IssueMarkersLayer } from "./layers/issue-markers-layer";
+import { OverlayLayer } from "./layers/overlay-layer";
+import { SectionLayer } from "./layers/section-layer";
+import { CANVAS_COLORS, FALLBACK_MATERIAL_COLORS } from "./palette";
+import type { EditorIssue, MaterialSwatch, ToolName } from "./types";
+import type { Hover } from "./use-canvas-pointer";
+
+export interface SectionCanvasProps {
+  width: number;
+  height: number;
+  view: ViewTransform;
+  doc: SectionDocument;
+  materials: MaterialSwatch[];
+  ground: Point[];
+  ponds: Point[][];
+  tool: ToolName;
+  selection: Selection | null;
+  draft: Draft | null;
+  hover: Hover | null;
+  issues: EditorIssue[];
+  focusedIssue: number | null;
+  reservoirPreview: { y: number; x1: number; x2: number } | null;
+}
+
+export default function SectionCanvas(props: SectionCanvasProps) {
+  const { width, height, view, doc, materials } = props;
+  const colorOf = useMemo(() => {
+    const known = new Map(materials.map((m) => [m.key, m.color]));
+    const docOrder = doc.materials.map((m) => m.id);
+    return (key: string) =>
+      known.get(key) ??
+      doc.materials.find((m) => m.id === key)?.color ??
+      (docOrder.includes(key) ? FALLBACK_MATERIAL_COLORS[docOrder.indexOf(key) % FALLBACK_MATERIAL_COLORS.length] : CANVAS_COLORS.unknownMaterial);
+  }, [materials, doc.materials]);
+
+  return (
+    <Stage width={width} height={height} listening={false}>
+      <GridLayer view={view} width={width} height={height} />
+      <SectionLayer doc={doc} view={view} colorOf={colorOf} ground={props.ground} ponds={props.ponds} />
+      <OverlayLayer
+        doc={doc}
+        view={view}
+        tool={props.tool}
+        selection={props.selection}
+        draft={props.draft}
+        hover={props.hover}
+        reservoirPreview={props.reservoirPreview}
+      />
+      <IssueMarkersLayer issues={props.issues} view={view} focused={props.focusedIssue} />
+      <AxesLayer view={view} width={width} height={height} />
+    </Stage>
+  );
+}
