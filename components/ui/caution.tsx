@@ -1,6 +1,6 @@
-/** The caution every result view and export carries. */
-export const CAUTION_TEXT =
-  "These results support, and do not replace, the judgement of a qualified engineer. Check every input, and apply the codes and guidance that govern the work where it is built.";
+import { CAUTION_TEXT } from "@/lib/caution";
+
+export { CAUTION_TEXT };
 
 export function Caution({ compact = false }: { compact?: boolean }) {
   return (

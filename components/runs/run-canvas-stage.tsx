@@ -1,0 +1,62 @@
+"use client";
+
+import { useRef } from "react";
+import type Konva from "konva";
+import { Layer, Stage } from "react-konva";
+import type { Grid, Radii } from "@/lib/stability";
+import type { RunScene } from "@/lib/runs/run-scene";
+import type { RunView } from "@/lib/runs/view-fit";
+import { SectionShapes } from "./canvas-section";
+import { AxisMarks } from "./canvas-axes";
+import { CentreGridShapes } from "./canvas-centre-grid";
+import { CircleShapes } from "./canvas-circles";
+import { SetupHandles } from "./canvas-setup-handles";
+
+export interface RunCanvasStageProps {
+  scene: RunScene;
+  view: RunView;
+  width: number;
+  height: number;
+  setup?: { grid: Grid; radii: Radii; onGridChange: (grid: Grid, radii: Radii) => void };
+  /** Called with pixel moves while the background is dragged. */
+  onPan: (dx: number, dy: number) => void;
+}
+
+/**
+ * The konva stage of the run canvas. Loaded only in the browser (next/dynamic, ssr: false).
+ * Drawing layers do not listen to events, so a press anywhere but on a set-up handle lands
+ * on the stage itself and pans the view.
+ */
+export default function RunCanvasStage({ scene, view, width, height, setup, onPan }: RunCanvasStageProps) {
+  const last = useRef<{ x: number; y: number } | null>(null);
+
+  const onDown = (e: Konva.KonvaEventObject<PointerEvent>) => {
+    const stage = e.target.getStage();
+    if (!stage || e.target !== stage) return;
+    const p = stage.getPointerPosition();
+    last.current = p ? { x: p.x, y: p.y } : null;
+  };
+  const onMove = (e: Konva.KonvaEventObject<PointerEvent>) => {
+    const p = e.target.getStage()?.getPointerPosition();
+    if (!last.current || !p) return;
+    onPan(p.x - last.current.x, p.y - last.current.y);
+    last.current = { x: p.x, y: p.y };
+  };
+  const onUp = () => { last.current = null; };
+
+  return (
+    <Stage width={width} height={height} onPointerDown={onDown} onPointerMove={onMove} onPointerUp={onUp} onPointerLeave={onUp}>
+      <Layer listening={false}>
+        <AxisMarks view={view} width={width} height={height} />
+        <SectionShapes scene={scene} view={view} />
+        <CentreGridShapes scene={scene} view={view} setup={Boolean(setup)} />
+        <CircleShapes scene={scene} view={view} />
+      </Layer>
+      {setup ? (
+        <Layer>
+          <SetupHandles {...setup} view={view} sectionBox={scene.fitBox} />
+        </Layer>
+      ) : null}
+    </Stage>
+  );
+}

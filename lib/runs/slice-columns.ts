@@ -1,0 +1,95 @@
+/**
+ * The slice table's columns: header, unit, number format and value, shared by the table on
+ * screen and its CSV so both always show the same thing. Sorting keeps empty values last.
+ */
+import type { SliceRow } from "@/lib/stability";
+
+export type SliceMethod = "bishop" | "fellenius";
+
+export type SliceColumnKey =
+  | "index" | "xLeft" | "xRight" | "width" | "material" | "weight" | "alpha" | "baseLength"
+  | "porePressure" | "c" | "phi" | "mAlpha" | "normal" | "resisting" | "driving";
+
+/** A slice with its number counted from the first slice of the mass (1-based). */
+export interface NumberedSlice {
+  n: number;
+  row: SliceRow;
+}
+
+export interface SliceColumn {
+  key: SliceColumnKey;
+  /** Header text without the unit. */
+  label: string;
+  /** Unit shown in brackets after the label; empty when dimensionless or text. */
+  unit: string;
+  /** Decimals for numbers; null for text. */
+  decimals: number | null;
+  value: (s: NumberedSlice, method: SliceMethod) => number | string | null;
+}
+
+const num = (v: number | null | undefined) => (v === null || v === undefined || !Number.isFinite(v) ? null : v);
+
+/** Columns in display order. N′ and the resisting term follow the method the table shows. */
+export function sliceColumns(method: SliceMethod): SliceColumn[] {
+  const m = method === "bishop" ? "Bishop" : "ordinary";
+  return [
+    // Not "#": a header starting with "#" would read as one of the comment lines.
+    { key: "index", label: "Slice", unit: "", decimals: 0, value: (s) => s.n },
+    { key: "xLeft", label: "x left", unit: "m", decimals: 2, value: (s) => s.row.xLeft },
+    { key: "xRight", label: "x right", unit: "m", decimals: 2, value: (s) => s.row.xRight },
+    { key: "width", label: "Width b", unit: "m", decimals: 2, value: (s) => s.row.xRight - s.row.xLeft },
+    { key: "material", label: "Base material", unit: "", decimals: null, value: (s) => s.row.material },
+    { key: "weight", label: "Weight W", unit: "kN/m", decimals: 1, value: (s) => s.row.weight },
+    { key: "alpha", label: "Base angle α", unit: "°", decimals: 1, value: (s) => s.row.alpha },
+    { key: "baseLength", label: "Base length l", unit: "m", decimals: 2, value: (s) => s.row.baseLength },
+    { key: "porePressure", label: "Pore pressure u", unit: "kPa", decimals: 1, value: (s) => s.row.porePressure },
+    { key: "c", label: "c′", unit: "kPa", decimals: 1, value: (s) => s.row.c },
+    { key: "phi", label: "φ′", unit: "°", decimals: 1, value: (s) => s.row.phi },
+    { key: "mAlpha", label: "mα", unit: "", decimals: 3, value: (s) => num(s.row.mAlpha) },
+    {
+      key: "normal", label: `N′ (${m})`, unit: "kN/m", decimals: 1,
+      value: (s, md) => (md === "bishop" ? num(s.row.normalBishop) : num(s.row.normalOrdinary)),
+    },
+    {
+      key: "resisting", label: `Resisting (${m})`, unit: "kN/m", decimals: 1,
+      value: (s, md) => (md === "bishop" ? num(s.row.resistingBishop) : num(s.row.resistingOrdinary)),
+    },
+    { key: "driving", label: "Driving", unit: "kN/m", decimals: 1, value: (s) => s.row.driving },
+  ];
+}
+
+/** Header text with its unit: `Weight W (kN/m)`. */
+export function columnHeader(c: SliceColumn): string {
+  return c.unit ? `${c.label} (${c.unit})` : c.label;
+}
+
+/** A cell as text: fixed decimals for numbers, an empty string for no value. */
+export function formatCell(c: SliceColumn, v: number | string | null): string {
+  if (v === null) return "";
+  if (typeof v === "string") return v;
+  const s = v.toFixed(c.decimals ?? 3);
+  // "-0.0" reads as a sign error in a table; show it as zero.
+  return /^-0(\.0*)?$/.test(s) ? s.slice(1) : s;
+}
+
+/** Numbers the slices 1…n in their order along the slip surface. */
+export function numberSlices(rows: readonly SliceRow[]): NumberedSlice[] {
+  return rows.map((row, i) => ({ n: i + 1, row }));
+}
+
+export type SortDirection = "ascending" | "descending";
+
+/**
+ * Slices sorted by a column; stable, with empty cells last in either direction.
+ */
+export function sortSlices(slices: readonly NumberedSlice[], column: SliceColumn, dir: SortDirection, method: SliceMethod): NumberedSlice[] {
+  const sign = dir === "ascending" ? 1 : -1;
+  return slices
+    .map((s, i) => ({ s, i, v: column.value(s, method) }))
+    .sort((a, b) => {
+      if (a.v === null || b.v === null) return a.v === b.v ? a.i - b.i : a.v === null ? 1 : -1;
+      const d = typeof a.v === "number" && typeof b.v === "number" ? a.v - b.v : String(a.v).localeCompare(String(b.v));
+      return d !== 0 ? sign * d : a.i - b.i;
+    })
+    .map((x) => x.s);
+}
