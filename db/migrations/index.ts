@@ -1,6 +1,8 @@
 import type { Knex } from "knex";
 import * as m001 from "./001-organisations-users-projects";
 import * as m002 from "./002-sections-materials-runs";
+import * as m004 from "./004-documents";
+import * as m005 from "./005-loading-conditions";
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -12,6 +14,8 @@ interface Migration {
 const migrations: Record<string, Migration> = {
   "001-organisations-users-projects": m001,
   "002-sections-materials-runs": m002,
+  "004-documents": m004,
+  "005-loading-conditions": m005,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

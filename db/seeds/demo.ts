@@ -1,5 +1,9 @@
 import type { Knex } from "knex";
 import bcrypt from "bcryptjs";
+import { buildDemoSection } from "./demo-section";
+import { seedDemoMaterials } from "./demo-materials";
+import { fetchMaterialsOfProject } from "../queries/materials";
+import { toEngineMaterial } from "../../lib/materials/engine-material";
 
 /** The demo scenario is invented: no real organisation, place or person. */
 export const DEMO_PASSWORD = "scarpline-demo";
@@ -35,6 +39,24 @@ export async function seedDemo(knex: Knex): Promise<{ created: boolean }> {
       description:
         "Check of a 12 m homogeneous clay embankment on a silty clay foundation: downstream face under steady seepage, upstream face under rapid drawdown, both faces at end of construction.",
       created_by: ids.admin,
+    });
+    // The section takes its materials from the library, so both show the same lab-derived values.
+    await seedDemoMaterials(trx, projectId, ids.engineer);
+    const library = await fetchMaterialsOfProject(projectId, trx);
+    const [sectionId] = await trx("sections").insert({
+      project_id: projectId,
+      name: "Main embankment, station 0+240",
+      description:
+        "Maximum section. Foundation taken as much less permeable than the fill for the seepage line; confirm with the site investigation.",
+      current_version: 1,
+      created_by: ids.engineer,
+    });
+    await trx("section_versions").insert({
+      section_id: sectionId,
+      version: 1,
+      document: JSON.stringify(buildDemoSection(library.map(toEngineMaterial))),
+      summary: "First version from the design drawings",
+      created_by: ids.engineer,
     });
     await trx("project_members").insert([
       { project_id: projectId, user_id: ids.engineer, role: "engineer" },

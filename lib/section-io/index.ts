@@ -5,3 +5,4 @@ export * from "./geometry-csv";
 export * from "./phreatic-csv";
 export * from "./materials-csv";
 export * from "./csv-templates";
+export * from "./detect";

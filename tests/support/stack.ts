@@ -1,6 +1,7 @@
 /**
  * The real stack the integration and browser tests talk to: a database of the run's own on the
- * project's MariaDB (created here, dropped at the end), and the built app served on a free port.
+ * project's MariaDB (created here, dropped at the end), the S3 fake on a free port with a bucket and
+ * data folder of the run's own (scripts/s3-fake.ts), and the built app served on a free port.
  * Shared by the integration and e2e projects: the first caller starts it, the last stops it.
  */
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
@@ -8,6 +9,7 @@ import { randomBytes } from "node:crypto";
 import { createServer } from "node:net";
 import path from "node:path";
 import fs from "node:fs";
+import os from "node:os";
 import knex from "knex";
 import { knexConfig } from "../../db/config";
 import { seedDemo } from "../../db/seeds/demo";
@@ -25,6 +27,7 @@ interface State {
   users: number;
   stack: Promise<Stack>;
   server?: ChildProcess;
+  s3?: FakeS3;
   dbName: string;
 }
 const g = globalThis as unknown as { scarplineStack?: State };
@@ -90,10 +93,77 @@ async function waitForServer(url: string, server: ChildProcess, log: () => strin
   throw new Error(`app server did not answer within 60 s:\n${log()}`);
 }
 
+interface FakeS3 {
+  endpoint: string;
+  bucket: string;
+  folder: string;
+  process: ChildProcess;
+}
+
+/** Starts scripts/s3-fake.ts on a free port, with a bucket and a temporary data folder of this run's own. */
+async function startFakeS3(): Promise<FakeS3> {
+  const folder = fs.mkdtempSync(path.join(os.tmpdir(), "scarpline-s3-"));
+  const port = await freePort();
+  const bucket = `scarpline-test-${process.pid}-${randomBytes(3).toString("hex")}`;
+  // node --import tsx keeps the fake in one process, so killing it leaves nothing behind.
+  const child = spawn(process.execPath, ["--import", "tsx", "scripts/s3-fake.ts"], {
+    cwd: ROOT,
+    env: { ...process.env, S3_PORT: String(port), S3_BUCKET: bucket, S3_DATA_DIR: path.join(folder, "data"), S3_PID_FILE: path.join(folder, "s3-fake.pid") },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  const fake: FakeS3 = { endpoint: `http://127.0.0.1:${port}`, bucket, folder, process: child };
+  // Should the run die before releaseStack, the fake must not outlive it.
+  process.once("exit", () => child.kill("SIGKILL"));
+  let output = "";
+  await new Promise<void>((resolve, reject) => {
+    const timer = setTimeout(() => fail(new Error(`the S3 fake did not start within 20 s:\n${output}`)), 20_000);
+    const fail = (err: Error) => {
+      clearTimeout(timer);
+      child.kill("SIGKILL");
+      reject(err);
+    };
+    child.stderr?.on("data", (d) => (output += d));
+    child.stdout?.on("data", (d) => {
+      output += d;
+      if (output.includes("s3-fake ready")) {
+        clearTimeout(timer);
+        resolve();
+      }
+    });
+    child.once("exit", (code) => fail(new Error(`the S3 fake exited early (code ${code}):\n${output}`)));
+  });
+  return fake;
+}
+
+/** The app's object-storage settings (lib/storage/s3-config.ts) for the run's fake. */
+function s3Env(fake: FakeS3): Record<string, string> {
+  return {
+    S3_ENDPOINT: fake.endpoint,
+    S3_BUCKET: fake.bucket,
+    S3_ACCESS_KEY_ID: "S3RVER",
+    S3_SECRET_ACCESS_KEY: "S3RVER",
+    S3_REGION: "us-east-1",
+    S3_FORCE_PATH_STYLE: "true",
+  };
+}
+
+async function stopFakeS3(fake: FakeS3): Promise<void> {
+  if (fake.process.exitCode === null && fake.process.signalCode === null) {
+    const exited = new Promise<void>((resolve) => fake.process.once("exit", () => resolve()));
+    fake.process.kill("SIGTERM");
+    await Promise.race([exited, new Promise((r) => setTimeout(r, 5_000))]);
+    fake.process.kill("SIGKILL");
+  }
+  fs.rmSync(fake.folder, { recursive: true, force: true });
+}
+
 async function start(withServer: boolean, state: State): Promise<Stack> {
   await createDatabase(state.dbName);
   if (!withServer) return { dbName: state.dbName, appUrl: "" };
   buildApp();
+  state.s3 = await startFakeS3();
+  // Test files read these too, to look into the bucket with their own S3 client.
+  Object.assign(process.env, s3Env(state.s3));
   const port = await freePort();
   const appUrl = `http://127.0.0.1:${port}`;
   let output = "";
@@ -107,6 +177,7 @@ async function start(withServer: boolean, state: State): Promise<Stack> {
       NEXTAUTH_URL: appUrl,
       APP_URL: appUrl,
       NEXTAUTH_SECRET: randomBytes(24).toString("base64url"),
+      ...s3Env(state.s3),
     },
     stdio: ["ignore", "pipe", "pipe"],
   });
@@ -134,5 +205,6 @@ export async function releaseStack(): Promise<void> {
   if (--state.users > 0) return;
   g.scarplineStack = undefined;
   state.server?.kill("SIGTERM");
+  if (state.s3) await stopFakeS3(state.s3);
   await dropDatabase(state.dbName);
 }

@@ -1,0 +1,26 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { requirePageUser } from "@/lib/auth/session";
+import { findProjectAccess } from "@/lib/projects/access";
+import { can } from "@/lib/permissions";
+import { fetchRun } from "@/db/queries/runs";
+import { PageTitle } from "@/components/ui/page-title";
+import { RunView } from "@/components/run-view/run-view";
+
+export const metadata: Metadata = { title: "Run" };
+
+export default async function RunPage({ params }: { params: Promise<{ projectId: string; runId: string }> }) {
+  const user = await requirePageUser();
+  const p = await params;
+  const access = await findProjectAccess(user, Number(p.projectId));
+  if (!access) notFound();
+  const run = await fetchRun(access.project.id, Number(p.runId));
+  if (!run) notFound();
+  return (
+    <>
+      <PageTitle title={run.title} kicker={<><Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link> / <Link href={`/projects/${access.project.id}/runs`} className="hover:text-ink">Runs</Link></>} />
+      <RunView run={run} canRevise={can(access.role, "run.create")} />
+    </>
+  );
+}

@@ -1,0 +1,14 @@
+import { csvTemplates, type CsvTemplateKind } from "@/lib/section-io";
+import { notFound } from "@/lib/api/errors";
+import { apiRoute } from "@/lib/api/handler";
+
+type Ctx = { params: Promise<{ kind: string }> };
+
+/** The CSV templates, public: they hold only an invented example. */
+export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
+  const kind = (await params).kind as CsvTemplateKind;
+  if (!(kind in csvTemplates)) throw notFound("The template");
+  return new Response(csvTemplates[kind] + "\r\n", {
+    headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="scarpline-${kind}-template.csv"` },
+  });
+});

@@ -1,0 +1,91 @@
+import type { LabTestRecord } from "@/lib/materials/lab-kinds";
+import { formatValue } from "@/lib/materials/parameter-form";
+
+type Row = [label: string, value: string, unit: string];
+
+function rowsOf(record: LabTestRecord): Row[] {
+  switch (record.kind) {
+    case "direct-shear":
+    case "triaxial-cu": {
+      const r = record.result;
+      const rows: Row[] = [
+        ["Cohesion intercept c'", formatValue(r.cohesion, 1), "kPa"],
+        ["Friction angle φ'", formatValue(r.frictionAngle, 1), "°"],
+        ["R² of the fit", formatValue(r.fit.rSquared, 3), ""],
+        ["Scatter about the line", formatValue(r.fit.standardError, 1), "kPa"],
+        ["Tests used", String(r.fit.n), ""],
+      ];
+      if (record.kind === "direct-shear" && record.data.zeroCohesion) rows.splice(2, 0, ["Line forced through the origin", "yes", ""]);
+      return rows;
+    }
+    case "undrained": {
+      const r = record.result;
+      if (r.model === "constant") {
+        return [
+          ["Mean su", formatValue(r.su, 1), "kPa"],
+          ["Standard deviation", formatValue(r.standardDeviation, 1), "kPa"],
+          ["Coefficient of variation", formatValue(r.coefficientOfVariation, 2), ""],
+          ["Tests used", String(r.n), ""],
+        ];
+      }
+      return [
+        ["su at the datum", formatValue(r.su, 1), "kPa"],
+        ["Increase with depth", formatValue(r.suGradient, 2), "kPa/m"],
+        ["Datum elevation", formatValue(r.suDatum, 2), "m"],
+        ["R² of the fit", formatValue(r.fit.rSquared, 3), ""],
+        ["Tests used", String(r.n), ""],
+      ];
+    }
+    case "compaction": {
+      const r = record.result;
+      return [
+        ["Maximum dry density", formatValue(r.maxDryDensity, 3), "Mg/m³"],
+        ["Optimum moisture content", formatValue(r.optimumMoistureContent, 1), "%"],
+        [`Acceptance density (${r.acceptance.percent} %)`, formatValue(r.acceptance.dryDensity, 3), "Mg/m³"],
+        ["Moisture window", `${formatValue(r.acceptance.dryLimit.moistureContent, 1)} – ${formatValue(r.acceptance.wetLimit.moistureContent, 1)}`, "%"],
+        ["Bulk unit weight at optimum γ", formatValue(r.unitWeight, 1), "kN/m³"],
+        ["Saturated unit weight γsat", formatValue(r.saturatedUnitWeight, 1), "kN/m³"],
+        ["Void ratio, saturation", `${formatValue(r.voidRatio, 3)}, ${formatValue(r.degreeOfSaturation * 100, 0)} %`, ""],
+      ];
+    }
+    case "atterberg": {
+      const r = record.result;
+      return [
+        ["Liquid limit LL", formatValue(r.liquidLimit, 0), "%"],
+        ["Plastic limit PL", formatValue(r.plasticLimit, 0), "%"],
+        ["Plasticity index PI", formatValue(r.plasticityIndex, 0), "%"],
+        ["Liquidity index", formatValue(r.liquidityIndex, 2), ""],
+        ["A-line at this LL", formatValue(r.aLinePI, 1), "%"],
+      ];
+    }
+  }
+}
+
+/** The derived numbers of a test set, with units, its warnings and (for limits) the chart hint. */
+export function LabResultSummary({ record }: { record: LabTestRecord }) {
+  return (
+    <div className="space-y-2 text-sm" data-testid="lab-result">
+      <table className="w-full">
+        <tbody>
+          {rowsOf(record).map(([label, value, unit]) => (
+            <tr key={label} className="border-b border-rule/60 last:border-0">
+              <th className="py-1 pr-3 text-left font-normal text-ink-soft">{label}</th>
+              <td className="py-1 text-right font-medium tabular-nums">{value}</td>
+              <td className="w-14 py-1 pl-1.5 text-xs text-ink-faint">{unit}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      {record.kind === "atterberg" ? (
+        <p className="rounded-md bg-paper-sunk px-3 py-2 text-xs text-ink-soft">
+          <strong className="text-ink">Hint: {record.result.hint.group}.</strong> {record.result.hint.explanation}
+        </p>
+      ) : null}
+      {record.result.warnings.length > 0 ? (
+        <ul className="list-disc space-y-0.5 pl-5 text-xs text-clay-700">
+          {record.result.warnings.map((w) => <li key={w}>{w}</li>)}
+        </ul>
+      ) : null}
+    </div>
+  );
+}

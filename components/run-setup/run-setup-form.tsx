@@ -1,0 +1,147 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useMemo, useState } from "react";
+import { useForm } from "react-hook-form";
+import type { RunSetup } from "@/lib/analysis/run-setup";
+import { documentForRun } from "@/lib/analysis/run-setup";
+import { directionForFace } from "@/lib/analysis/face";
+import { suggestGrid } from "@/lib/analysis/auto-grid";
+import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
+import type { SectionDocument } from "@/lib/stability";
+import { ConditionFields, GridFields, MethodFields } from "./setup-fields";
+import { fromRunSetup, runSetupResolver, type RunSetupInput } from "./form-values";
+import { useGridSearch } from "./use-grid-search";
+import { SearchProgress } from "./search-progress";
+import { SearchOutcome } from "./search-outcome";
+import { RunCanvas } from "@/components/runs/run-canvas";
+
+export interface RunSetupFormProps {
+  projectId: number;
+  section: { id: number; name: string; version: number };
+  document: SectionDocument;
+  requiredFs: Record<LoadingConditionKey, number>;
+  initial?: RunSetup;
+  revisesRunId?: number;
+  materialColors?: Record<string, string>;
+}
+
+function defaults(doc: SectionDocument, requiredFs: Record<LoadingConditionKey, number>): RunSetupInput {
+  const face = "downstream";
+  const g = suggestGrid(doc, directionForFace(doc, face));
+  return {
+    condition: "steady-seepage",
+    face,
+    methods: ["bishop", "fellenius"],
+    slices: 50,
+    ordinaryForm: "classical",
+    grid: g.grid,
+    radiusMode: "tangent",
+    tangentY1: g.radii.tangentY1,
+    tangentY2: g.radii.tangentY2,
+    r1: 10,
+    r2: 30,
+    radiusCount: g.radii.n,
+    refine: true,
+    requiredFs: requiredFs["steady-seepage"],
+  };
+}
+
+export function RunSetupForm({ projectId, section, document: doc, requiredFs, initial, revisesRunId, materialColors }: RunSetupFormProps) {
+  const router = useRouter();
+  const form = useForm<RunSetupInput, unknown, RunSetup>({
+    resolver: runSetupResolver,
+    defaultValues: initial ? fromRunSetup(initial) : defaults(doc, requiredFs),
+    mode: "onBlur",
+  });
+  const search = useGridSearch();
+  const [setup, setSetup] = useState<RunSetup | null>(null);
+  const values = form.watch();
+
+  function placeGrid(face = values.face) {
+    const g = suggestGrid(doc, directionForFace(doc, face));
+    form.setValue("grid", g.grid, { shouldValidate: true });
+    form.setValue("radiusMode", "tangent");
+    form.setValue("tangentY1", g.radii.tangentY1);
+    form.setValue("tangentY2", g.radii.tangentY2);
+    form.setValue("radiusCount", g.radii.n);
+  }
+
+  function onCondition(key: string) {
+    const c = loadingCondition(key as LoadingConditionKey);
+    form.setValue("requiredFs", requiredFs[c.key]);
+    if (c.faces !== "both" && c.faces !== values.face) {
+      form.setValue("face", c.faces);
+      placeGrid(c.faces);
+    }
+  }
+
+  const onRun = form.handleSubmit((valid) => {
+    setSetup(valid);
+    search.start(documentForRun(doc, valid));
+  });
+
+  const gridForCanvas = Number.isFinite(values.grid?.x1) ? values.grid : undefined;
+  const radiiForCanvas = useMemo(
+    () =>
+      values.radiusMode === "tangent"
+        ? { tangentY1: values.tangentY1, tangentY2: values.tangentY2, n: values.radiusCount }
+        : { r1: values.r1, r2: values.r2, n: values.radiusCount },
+    [values.radiusMode, values.tangentY1, values.tangentY2, values.r1, values.r2, values.radiusCount],
+  );
+  const done = search.state.status === "done" ? search.state.message : null;
+  const running = search.state.status === "running";
+  const drawdownTo = loadingCondition(values.condition).engineCase === "drawdown" ? values.drawdownTo : undefined;
+
+  return (
+    <div className="grid gap-4 xl:grid-cols-[22rem_1fr]">
+      <form onSubmit={onRun} className="panel space-y-5 self-start p-4" noValidate data-testid="run-setup-form">
+        <ConditionFields form={form} onCondition={onCondition} />
+        <MethodFields form={form} />
+        <GridFields form={form} onSuggest={() => placeGrid()} />
+        <button type="submit" className="btn-primary w-full" disabled={running}>{running ? "Searching…" : "Run the search"}</button>
+        <p className="text-xs text-ink-faint">The search runs in your browser; the server re-checks the critical circles when you save.</p>
+      </form>
+      <div className="min-w-0 space-y-3">
+        <SearchProgress state={search.state} onCancel={search.cancel} />
+        <RunCanvas
+          document={doc}
+          materialColors={materialColors}
+          grid={gridForCanvas}
+          radii={radiiForCanvas}
+          onGridChange={
+            running
+              ? undefined
+              : (grid, radii) => {
+                  form.setValue("grid", grid, { shouldValidate: true });
+                  if ("tangentY1" in radii) {
+                    form.setValue("radiusMode", "tangent");
+                    form.setValue("tangentY1", radii.tangentY1);
+                    form.setValue("tangentY2", radii.tangentY2);
+                  } else {
+                    form.setValue("radiusMode", "range");
+                    form.setValue("r1", radii.r1);
+                    form.setValue("r2", radii.r2);
+                  }
+                }
+          }
+          result={done?.result.ok ? done.result : undefined}
+          slices={done?.critical.bishop?.slices ?? done?.critical.fellenius?.slices}
+          drawdownTo={drawdownTo}
+          requiredFs={values.requiredFs}
+          height={460}
+        />
+        {done && setup ? (
+          <SearchOutcome
+            projectId={projectId}
+            section={section}
+            setup={setup}
+            outcome={done}
+            revisesRunId={revisesRunId}
+            onSaved={(id) => router.push(`/projects/${projectId}/runs/${id}`)}
+          />
+        ) : null}
+      </div>
+    </div>
+  );
+}

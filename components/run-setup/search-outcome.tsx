@@ -1,0 +1,68 @@
+"use client";
+
+import { useState } from "react";
+import type { RunSetup } from "@/lib/analysis/run-setup";
+import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
+import { FormBanner } from "@/components/ui/form-message";
+import { FsSummary } from "@/components/runs/fs-summary";
+import { SliceTable } from "@/components/runs/slice-table";
+import type { WorkerMessage } from "./grid-search.worker";
+import { loadingCondition } from "@/lib/analysis/required-fs";
+
+export interface SearchOutcomeProps {
+  projectId: number;
+  section: { id: number; name: string; version: number };
+  setup: RunSetup;
+  outcome: Extract<WorkerMessage, { type: "done" }>;
+  revisesRunId?: number;
+  onSaved: (runId: number) => void;
+}
+
+/** The result of a finished search, before it is kept: read it, name it, save it. */
+export function SearchOutcome({ projectId, section, setup, outcome, revisesRunId, onSaved }: SearchOutcomeProps) {
+  const { result, critical } = outcome;
+  const [title, setTitle] = useState(`${loadingCondition(setup.condition).label}, ${setup.face} face`);
+  const [error, setError] = useState<string | null>(null);
+  const [saving, setSaving] = useState(false);
+
+  if (!result.ok) {
+    return (
+      <div className="panel p-4 text-sm" data-testid="search-errors">
+        <p className="font-semibold text-alarm-700">The section cannot be analysed as it is:</p>
+        <ul className="mt-1 list-disc pl-5">{result.errors.map((e, i) => <li key={i}>{e.path ? `${e.path}: ` : ""}{e.message}</li>)}</ul>
+      </div>
+    );
+  }
+
+  async function save() {
+    setSaving(true);
+    setError(null);
+    try {
+      const body = await fetchJson<{ run: { id: number } }>(`/api/projects/${projectId}/runs`, {
+        method: "POST",
+        json: { sectionId: section.id, sectionVersion: section.version, title, setup, result, revisesRunId },
+      });
+      onSaved(body.run.id);
+    } catch (err) {
+      setError(err instanceof ApiClientError ? err.message : "Could not reach the server.");
+      setSaving(false);
+    }
+  }
+
+  const method = result.methods.includes("bishop") && critical.bishop ? "bishop" : "fellenius";
+  return (
+    <div className="space-y-3" data-testid="search-outcome">
+      <p className="text-xs text-ink-faint">{result.circles.tried.toLocaleString("en-GB")} circles in {(outcome.elapsedMs / 1000).toFixed(2)} s</p>
+      <FsSummary result={result} requiredFs={setup.requiredFs} critical={critical} />
+      <div className="panel flex flex-wrap items-end gap-3 p-3">
+        <div className="min-w-64 flex-1">
+          <label className="label" htmlFor="run-title">Name of the run</label>
+          <input id="run-title" className="field" value={title} onChange={(e) => setTitle(e.target.value)} />
+        </div>
+        <button type="button" className="btn-primary" onClick={save} disabled={saving || title.trim().length < 3}>{saving ? "Saving…" : "Keep this run"}</button>
+      </div>
+      {error ? <FormBanner kind="error">{error}</FormBanner> : null}
+      {critical[method] ? <SliceTable rows={critical[method]!.slices} meta={{ title, section: `${section.name} v${section.version}`, method }} /> : null}
+    </div>
+  );
+}

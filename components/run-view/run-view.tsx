@@ -1,0 +1,84 @@
+"use client";
+
+import Link from "next/link";
+import { useState } from "react";
+import type { RunDetail } from "@/db/queries/runs";
+import type { GridSearchSuccess, SectionDocument, SliceRow } from "@/lib/stability";
+import type { RunSetup } from "@/lib/analysis/run-setup";
+import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
+import { materialPalette } from "@/lib/sections/material-palette";
+import { downloadText, slug } from "@/lib/client/download";
+import { RunCanvas } from "@/components/runs/run-canvas";
+import { FsSummary } from "@/components/runs/fs-summary";
+import { SliceTable } from "@/components/runs/slice-table";
+import { StatusBadge } from "@/components/run-list/status-badge";
+
+type Method = "bishop" | "fellenius";
+export type StoredResult = GridSearchSuccess & { setup: RunSetup };
+export type StoredSlices = Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>;
+
+export interface RunViewProps {
+  run: RunDetail;
+  canRevise: boolean;
+}
+
+/** A kept run exactly as it was saved: its frozen section, settings, critical circles and slices. */
+export function RunView({ run, canRevise }: RunViewProps) {
+  const result = run.result as StoredResult;
+  const tables = run.sliceTables as StoredSlices;
+  const doc = run.document as SectionDocument;
+  const methods = result.methods.filter((m) => result.results[m]);
+  const [method, setMethod] = useState<Method>(methods[0] ?? "bishop");
+  const colors = Object.fromEntries(materialPalette(doc.materials).map((m) => [m.key, m.color]));
+  const drawdownTo = doc.analysis?.drawdown?.to;
+  const condition = loadingCondition(run.loadingCondition as LoadingConditionKey);
+  const fs = method === "bishop" ? run.fsBishop : run.fsFellenius;
+
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm text-ink-soft" data-testid="run-meta">
+        <StatusBadge status={run.status} />
+        <span>{condition?.label ?? run.loadingCondition}</span>
+        <span className="capitalize">{run.face} face</span>
+        <span>{run.sectionName} v{run.sectionVersion}</span>
+        <span>by {run.authorName}, {new Date(run.createdAt).toLocaleString("en-GB")}</span>
+        <span>engine {run.engineVersion}</span>
+        {run.revisesRunId ? <Link className="text-clay-600 hover:underline" href={`/projects/${run.projectId}/runs/${run.revisesRunId}`}>revises run {run.revisesRunId}</Link> : null}
+      </div>
+      <div className="flex flex-wrap items-center gap-2">
+        {methods.length > 1 ? (
+          <div className="inline-flex overflow-hidden rounded-md border border-rule text-sm" role="group" aria-label="Method shown">
+            {methods.map((m) => (
+              <button key={m} type="button" onClick={() => setMethod(m)} aria-pressed={method === m} className={`px-3 py-1 ${method === m ? "bg-ink text-paper" : "bg-paper-raised hover:bg-paper-sunk"}`}>
+                {m === "bishop" ? "Bishop's simplified" : "Ordinary method"}
+              </button>
+            ))}
+          </div>
+        ) : null}
+        <button type="button" className="btn-quiet" onClick={() => downloadText(`${slug(run.title)}-section.json`, JSON.stringify(doc, null, 2) + "\n", "application/json")}>
+          Section JSON for the command line
+        </button>
+        {canRevise ? <Link className="btn-quiet" href={`/projects/${run.projectId}/sections/${run.sectionId}/runs/new?from=${run.id}`}>Revise as a new run</Link> : null}
+      </div>
+      <RunCanvas document={doc} materialColors={colors} result={result} method={method} slices={tables[method]?.slices} drawdownTo={drawdownTo} requiredFs={run.requiredFs} grid={doc.analysis?.grid} radii={doc.analysis?.radii} height={480} />
+      <FsSummary result={result} requiredFs={run.requiredFs} />
+      {tables[method] ? (
+        <SliceTable
+          rows={tables[method]!.slices}
+          meta={{
+            method,
+            title: run.title,
+            section: `${run.sectionName} v${run.sectionVersion}`,
+            loadCase: condition?.label ?? run.loadingCondition,
+            fs: { [method]: fs },
+            requiredFs: run.requiredFs,
+            circle: result.results[method]?.circle,
+            ordinaryForm: result.ordinaryForm,
+            engineVersion: run.engineVersion,
+            runAt: run.createdAt,
+          }}
+        />
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,61 @@
+/**
+ * The analysis set-up a user fills in, and how it becomes the engine's analysis block.
+ * One zod schema serves the form (client) and the run route (server).
+ */
+import { z } from "zod";
+import { gridSchema, radiiSchema, type Analysis, type SectionDocument } from "../stability";
+import { directionForFace } from "./face";
+import { LOADING_CONDITION_KEYS, loadingCondition, type LoadingConditionKey } from "./required-fs";
+
+export const runSetupSchema = z
+  .object({
+    condition: z.enum(LOADING_CONDITION_KEYS, { error: "Choose a loading condition." }),
+    face: z.enum(["upstream", "downstream"], { error: "Choose the face to check." }),
+    methods: z.array(z.enum(["bishop", "fellenius"])).min(1, "Choose at least one method."),
+    slices: z.number({ error: "Enter a number of slices." }).int("Whole slices only.").min(10, "At least 10 slices.").max(500, "At most 500 slices."),
+    grid: gridSchema.refine((g) => g.x2 > g.x1 && g.y2 > g.y1, "The grid's second corner must be right of and above the first.")
+      .refine((g) => g.nx >= 2 && g.ny >= 2 && g.nx * g.ny <= 10000, "Use 2 to 100 points each way (at most 10,000 centres)."),
+    radii: radiiSchema,
+    refine: z.boolean(),
+    drawdownFrom: z.number().optional(),
+    drawdownTo: z.number().optional(),
+    requiredFs: z.number({ error: "Enter the required factor of safety." }).min(1, "At least 1.0.").max(5, "At most 5."),
+    ordinaryForm: z.enum(["classical", "effective-weight"]).default("classical"),
+  })
+  .superRefine((v, ctx) => {
+    if (loadingCondition(v.condition).engineCase === "drawdown") {
+      if (v.drawdownFrom === undefined) ctx.addIssue({ code: "custom", path: ["drawdownFrom"], message: "Enter the pool level before drawdown (m)." });
+      if (v.drawdownTo === undefined) ctx.addIssue({ code: "custom", path: ["drawdownTo"], message: "Enter the pool level after drawdown (m)." });
+      if (v.drawdownFrom !== undefined && v.drawdownTo !== undefined && v.drawdownTo > v.drawdownFrom) {
+        ctx.addIssue({ code: "custom", path: ["drawdownTo"], message: "The pool after drawdown must not be above the pool before it." });
+      }
+    }
+    const n = v.radii.n;
+    if (!Number.isInteger(n) || n < 1 || n > 100) ctx.addIssue({ code: "custom", path: ["radii", "n"], message: "Use 1 to 100 radii per centre." });
+  });
+
+export type RunSetup = z.infer<typeof runSetupSchema>;
+
+/** The engine's analysis block for a set-up on a given section. */
+export function toAnalysis(doc: SectionDocument, setup: RunSetup): Analysis {
+  const condition = loadingCondition(setup.condition as LoadingConditionKey);
+  const analysis: Analysis = {
+    case: condition.engineCase,
+    methods: setup.methods,
+    slices: setup.slices,
+    direction: directionForFace(doc, setup.face),
+    grid: setup.grid,
+    radii: setup.radii,
+    refine: setup.refine,
+    ordinaryForm: setup.ordinaryForm,
+  };
+  if (condition.engineCase === "drawdown") {
+    analysis.drawdown = { from: setup.drawdownFrom!, to: setup.drawdownTo!, method: "effective" };
+  }
+  return analysis;
+}
+
+/** The document a run analyses: the section version with the run's analysis block. */
+export function documentForRun(section: SectionDocument, setup: RunSetup): SectionDocument {
+  return { ...section, analysis: toAnalysis(section, setup) };
+}

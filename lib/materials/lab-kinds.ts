@@ -1,0 +1,103 @@
+import type {
+  AtterbergInputData,
+  AtterbergResult,
+  CompactionInputData,
+  CompactionResult,
+  DirectShearInputData,
+  DirectShearResult,
+  TriaxialCuInputData,
+  TriaxialCuResult,
+  UndrainedStrengthInputData,
+  UndrainedStrengthResult,
+} from "@/lib/lab";
+import type { ParameterKey } from "./parameters";
+
+/** The kinds of lab test set the library stores (the `lab_test_sets.kind` column). */
+export const LAB_TEST_KINDS = ["direct-shear", "triaxial-cu", "undrained", "compaction", "atterberg"] as const;
+export type LabTestKind = (typeof LAB_TEST_KINDS)[number];
+
+export interface LabInputByKind {
+  "direct-shear": DirectShearInputData;
+  "triaxial-cu": TriaxialCuInputData;
+  undrained: UndrainedStrengthInputData;
+  compaction: CompactionInputData;
+  atterberg: AtterbergInputData;
+}
+
+export interface LabResultByKind {
+  "direct-shear": DirectShearResult;
+  "triaxial-cu": TriaxialCuResult;
+  undrained: UndrainedStrengthResult;
+  compaction: CompactionResult;
+  atterberg: AtterbergResult;
+}
+
+/** A lab test set's input and what was derived from it, tied together by `kind`. */
+export type LabTestRecord = { [K in LabTestKind]: { kind: K; data: LabInputByKind[K]; result: LabResultByKind[K] } }[LabTestKind];
+
+/** One column of a kind's rows table; `unit` is shown in the header. */
+export interface LabColumn {
+  key: string;
+  label: string;
+  unit: string | null;
+  numeric: boolean;
+}
+
+export interface LabKindInfo {
+  label: string;
+  /** Where the rows sit in the input (`tests`, `specimens`, `points`), or null for one sample. */
+  rowsKey: "tests" | "specimens" | "points" | null;
+  columns: LabColumn[];
+  /** Parameters of a material this kind can supply. */
+  feeds: readonly ParameterKey[];
+  /** Rows a fresh table starts with. */
+  startRows: number;
+}
+
+const specimen: LabColumn = { key: "specimen", label: "Specimen", unit: null, numeric: false };
+const num = (key: string, label: string, unit: string): LabColumn => ({ key, label, unit, numeric: true });
+
+export const LAB_KIND_INFO: Record<LabTestKind, LabKindInfo> = {
+  "direct-shear": {
+    label: "Direct shear (shear box)",
+    rowsKey: "tests",
+    columns: [specimen, num("normalStress", "Normal stress σn", "kPa"), num("shearStress", "Peak shear stress τ", "kPa")],
+    feeds: ["c", "phi"],
+    startRows: 3,
+  },
+  "triaxial-cu": {
+    label: "Triaxial, consolidated undrained, pore pressures measured",
+    rowsKey: "specimens",
+    columns: [specimen, num("cellPressure", "Cell pressure σ3", "kPa"), num("deviatorStress", "Deviator stress at failure q", "kPa"), num("porePressure", "Pore pressure at failure u", "kPa")],
+    feeds: ["c", "phi"],
+    startRows: 3,
+  },
+  undrained: {
+    label: "Undrained strength (UU triaxial or field vane)",
+    rowsKey: "tests",
+    columns: [specimen, num("depth", "Depth", "m"), num("elevation", "Elevation", "m"), num("deviatorStress", "UU deviator stress q", "kPa"), num("su", "Vane su", "kPa")],
+    feeds: ["su", "suGradient", "suDatum"],
+    startRows: 3,
+  },
+  compaction: {
+    label: "Compaction test",
+    rowsKey: "points",
+    columns: [specimen, num("moistureContent", "Moisture content w", "%"), num("dryDensity", "Dry density ρd", "Mg/m³"), num("bulkDensity", "Bulk density ρ", "Mg/m³")],
+    feeds: ["gamma", "gammaSat"],
+    startRows: 5,
+  },
+  atterberg: {
+    label: "Atterberg limits",
+    rowsKey: null,
+    columns: [specimen, num("liquidLimit", "Liquid limit LL", "%"), num("plasticLimit", "Plastic limit PL", "%"), num("waterContent", "Natural water content w", "%")],
+    feeds: [],
+    startRows: 1,
+  },
+};
+
+/** The noun lib/lab uses in its row messages ("test 3: …"). */
+export const LAB_ROW_NOUN = "test";
+
+export function isLabTestKind(value: string): value is LabTestKind {
+  return (LAB_TEST_KINDS as readonly string[]).includes(value);
+}

@@ -1,0 +1,81 @@
+import { z } from "zod";
+import { impenetrableMaterialSchema, mohrCoulombMaterialSchema, undrainedMaterialSchema, type Material } from "@/lib/stability";
+import { checkMaterials } from "@/lib/stability/validate-materials";
+import type { Issue } from "@/lib/stability";
+
+/**
+ * A library material's engineering parameters: the engine's material (ENGINE-IO.md) without the
+ * id, name and colour, which the library keeps in their own columns. Units: kN/m³, kPa, degrees, m.
+ */
+const withoutIdentity = { id: true, name: true, color: true } as const;
+export const materialParametersSchema = z.discriminatedUnion("model", [
+  mohrCoulombMaterialSchema.omit(withoutIdentity),
+  undrainedMaterialSchema.omit(withoutIdentity),
+  impenetrableMaterialSchema.omit(withoutIdentity),
+]);
+export type MaterialParameters = z.infer<typeof materialParametersSchema>;
+export type MaterialModel = MaterialParameters["model"];
+
+export const MATERIAL_MODELS: readonly MaterialModel[] = ["mohr-coulomb", "undrained", "impenetrable"];
+
+/** Numeric parameters that can be typed in, or copied from a lab test set. */
+export const PARAMETER_KEYS = ["gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum"] as const;
+export type ParameterKey = (typeof PARAMETER_KEYS)[number];
+
+export interface ParameterInfo {
+  /** Plain-words name for forms. */
+  label: string;
+  /** The symbol engineers write. */
+  symbol: string;
+  unit: string;
+}
+
+export const PARAMETER_INFO: Record<ParameterKey, ParameterInfo> = {
+  gamma: { label: "Unit weight", symbol: "γ", unit: "kN/m³" },
+  gammaSat: { label: "Saturated unit weight", symbol: "γsat", unit: "kN/m³" },
+  c: { label: "Effective cohesion", symbol: "c'", unit: "kPa" },
+  phi: { label: "Effective friction angle", symbol: "φ'", unit: "°" },
+  su: { label: "Undrained shear strength", symbol: "su", unit: "kPa" },
+  suGradient: { label: "Increase of su per metre of depth", symbol: "su gradient", unit: "kPa/m" },
+  suDatum: { label: "Elevation where su applies", symbol: "su datum", unit: "m" },
+};
+
+/** Which numeric parameters each model keeps (the engine's schema; su on Mohr–Coulomb is for end of construction). */
+export const MODEL_PARAMETERS: Record<MaterialModel, readonly ParameterKey[]> = {
+  "mohr-coulomb": ["gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum"],
+  undrained: ["gamma", "gammaSat", "su", "suGradient", "suDatum"],
+  impenetrable: ["gamma"],
+};
+
+export const MODEL_LABELS: Record<MaterialModel, string> = {
+  "mohr-coulomb": "Drained strength (c', φ')",
+  undrained: "Undrained strength (su, φ = 0)",
+  impenetrable: "Impenetrable (no slip through it)",
+};
+
+/** The value of a numeric parameter, or undefined when the model lacks it or it is unset. */
+export function parameterValue(p: MaterialParameters, key: ParameterKey): number | undefined {
+  const value = (p as Partial<Record<ParameterKey, unknown>>)[key];
+  return typeof value === "number" ? value : undefined;
+}
+
+export interface ParameterCheck {
+  /** Keyed `parameters.<name>`, the shape forms read; empty when the parameters may be saved. */
+  errors: Record<string, string[]>;
+  warnings: Issue[];
+}
+
+/**
+ * Checks parameters against the engine's own material bounds (ENGINE.md §1, through
+ * lib/stability's checkMaterials), so the library never holds a material a run would refuse.
+ * @param key the material key, used in the messages
+ */
+export function checkMaterialParameters(key: string, parameters: MaterialParameters, gammaW = 9.81): ParameterCheck {
+  const errors: Issue[] = [];
+  const warnings: Issue[] = [];
+  const material = { ...parameters, id: key } as Material;
+  checkMaterials([material], gammaW, errors, warnings);
+  const fields: Record<string, string[]> = {};
+  for (const e of errors) (fields[e.path.replace(/^materials\[0\]/, "parameters")] ??= []).push(e.message);
+  return { errors: fields, warnings: warnings.map((w) => ({ ...w, path: w.path.replace(/^materials\[0\]/, "parameters") })) };
+}

@@ -1,0 +1,34 @@
+/**
+ * The shape of a grid-search result as the browser sends it for saving. Only the critical
+ * circles are trusted after the server has re-run them; the rest (map, lowest circles, counts)
+ * is display data, checked here for shape and size so nothing malformed is stored.
+ */
+import { z } from "zod";
+
+const finite = z.number();
+const point = z.tuple([finite, finite]);
+const circle = z.object({ xc: finite, yc: finite, r: finite.positive() });
+const circleFs = z.object({ fs: finite.positive(), circle, entry: point, exit: point, direction: z.enum(["left", "right"]) });
+const fsMap = z.object({
+  nx: z.number().int().positive(),
+  ny: z.number().int().positive(),
+  xs: z.array(finite),
+  ys: z.array(finite),
+  values: z.array(finite.nullable()).max(40000),
+});
+
+export const searchResultSchema = z.object({
+  ok: z.literal(true),
+  engineVersion: z.string().max(40),
+  case: z.string().max(20),
+  methods: z.array(z.enum(["bishop", "fellenius"])).min(1),
+  ordinaryForm: z.string().max(30),
+  results: z.object({ bishop: circleFs.nullable().optional(), fellenius: circleFs.nullable().optional() }),
+  fsMap: z.object({ bishop: fsMap.optional(), fellenius: fsMap.optional() }),
+  lowest: z.object({ bishop: z.array(circleFs).max(100).optional(), fellenius: z.array(circleFs).max(100).optional() }),
+  circles: z.object({ tried: z.number().int().nonnegative(), valid: z.number().int().nonnegative(), rejected: z.record(z.string(), z.number().int().nonnegative()) }),
+  warnings: z.array(z.object({ code: z.string(), message: z.string() })).max(200),
+  cancelled: z.literal(false, { error: "A cancelled search cannot be saved; run it to the end." }),
+});
+
+export type StoredSearchResult = z.infer<typeof searchResultSchema>;

@@ -1,0 +1,12 @@
+import { z } from "zod";
+import { runSetupSchema } from "../analysis/run-setup";
+import { searchResultSchema } from "../run-records/result-schema";
+
+export const createRunSchema = z.object({
+  sectionId: z.number().int().positive(),
+  sectionVersion: z.number().int().positive(),
+  title: z.string().trim().min(3, "At least 3 characters.").max(200, "At most 200 characters."),
+  setup: runSetupSchema,
+  result: searchResultSchema,
+  revisesRunId: z.number().int().positive().optional(),
+});
