@@ -130,6 +130,7 @@ export function RunSetupForm({ projectId, section, document: doc, requiredFs, in
           drawdownTo={drawdownTo}
           requiredFs={values.requiredFs}
           height={460}
+          caution={false}
         />
         {done && setup ? (
           <SearchOutcome

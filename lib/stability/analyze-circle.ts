@@ -7,7 +7,7 @@ import { evaluateCircle, sliceMass } from "./evaluate-circle";
 import type { EngineWarning } from "./issues";
 import { fmt } from "./issues";
 import { ordinaryNormal } from "./methods/ordinary";
-import { prepareSection } from "./prepare";
+import { prepareSection, type PreparedSection } from "./prepare";
 import { finiteOrNull, issuesToWarnings, type Circle, type EngineFailure } from "./results";
 import { createScratch, type Scratch } from "./scratch";
 import { M_ALPHA_WARN } from "./search-warnings";
@@ -15,6 +15,8 @@ import { OK, REASONS, REASON_TEXT } from "./status";
 import { validateSection } from "./validate";
 import { ENGINE_VERSION } from "./version";
 import { arcY } from "./evaluate-circle";
+import { replayStagedMass } from "./drawdown/staged-circle";
+import { sliceStage, stageSummary, stageWarnings, type SliceStage, type StageFs } from "./drawdown/staged-report";
 
 /** One slice of the governing slip mass. Forces kN/m, pressures kPa, lengths m, angles °. */
 export interface SliceRow {
@@ -42,6 +44,13 @@ export interface SliceRow {
   resistingBishop: number | null;
   normalOrdinary: number;
   resistingOrdinary: number;
+  /**
+   * Staged drawdown only (ENGINE.md §7(b)): the base's stage-1 stresses, strengths and the
+   * strength that governs in the final stage. c, phi and the Bishop and ordinary terms above
+   * then show the final-stage strengths of Bishop's chain (of the ordinary method's chain
+   * when Bishop has no result).
+   */
+  stage?: SliceStage;
 }
 
 export interface CircleSuccess {
@@ -59,6 +68,10 @@ export interface CircleSuccess {
   iterations?: number;
   minMAlpha?: number | null;
   drivingSum?: number;
+  /** Staged drawdown only: the factor of safety of each stage per method; `fs` holds the final ones. */
+  stages?: { bishop: StageFs | null; fellenius: StageFs | null };
+  /** Staged drawdown only: the procedure used. */
+  stagedVariant?: "three-stage" | "usace-two-stage";
   slices: SliceRow[];
   warnings: EngineWarning[];
 }
@@ -95,8 +108,10 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
   const negB = S.negB;
   const dir = S.dir;
   const m = S.govB >= 0 ? S.govB : S.govO;
-  sliceMass(P, S, c.xc, c.yc, c.r, m, dir);
+  const staged = P.staged !== null ? stagedPart(P, S, c, m, dir, warnings) : null;
+  if (!staged) sliceMass(P, S, c.xc, c.yc, c.r, m, dir);
   const slices = sliceRows(P.mat.ids, S, fsB, P.ordinaryForm === 1);
+  if (staged) for (let i = 0; i < slices.length; i++) slices[i].stage = sliceStage(P, S, i, staged.bishop);
   const xa = S.massA[m];
   const xb = S.massB[m];
   const a: [number, number] = [xa, arcY(c.xc, c.yc, c.r, xa)];
@@ -118,8 +133,26 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
     iterations,
     minMAlpha: finiteOrNull(minMa),
     drivingSum: S.D,
+    ...(staged ? { stages: staged.stages, stagedVariant: staged.variant } : {}),
     slices,
   };
+}
+
+/**
+ * Stage factors of the evaluated circle, then a replay of the governing mass that leaves its
+ * final-stage strengths and stage data in S for the slice table.
+ */
+function stagedPart(P: PreparedSection, S: Scratch, c: Circle, m: number, dir: number, warnings: EngineWarning[]) {
+  const bishop = S.govB >= 0;
+  const stages = {
+    bishop: bishop ? stageSummary(S.stage.govB) : null,
+    fellenius: S.govO >= 0 ? stageSummary(S.stage.govO) : null,
+  };
+  stageWarnings("bishop", stages.bishop, "this circle", warnings);
+  stageWarnings("fellenius", stages.fellenius, "this circle", warnings);
+  replayStagedMass(P, S, c.xc, c.yc, c.r, m, dir, bishop);
+  const variant: "three-stage" | "usace-two-stage" = P.analysis.drawdown?.stagedVariant ?? "three-stage";
+  return { bishop, stages, variant };
 }
 
 /** Per-slice table of the mass now in S, with Bishop terms at its converged F. */

@@ -4,6 +4,8 @@
  * one-circle reports re-run the governing mass with the very same code, so a stored
  * critical circle re-checks to the same bits.
  */
+import { arcY, chooseDirection } from "./circle-direction";
+import { evaluateStagedCircle } from "./drawdown/staged-circle";
 import { bishopFactor } from "./methods/bishop";
 import { ordinaryFactor } from "./methods/ordinary";
 import { findMasses } from "./intersect";
@@ -17,20 +19,7 @@ const BAD_RADIUS = status.BAD_RADIUS;
 const NO_DRIVING = status.NO_DRIVING;
 const OK = status.OK;
 
-/** Arc elevation (m) at x of the lower arc of circle (xc, yc, r). */
-export function arcY(xc: number, yc: number, r: number, x: number): number {
-  const d = x - xc;
-  return yc - Math.sqrt(Math.max(0, r * r - d * d));
-}
-
-/** Sliding direction of a circle: fixed by the analysis, or toward its lower end (auto). */
-function chooseDirection(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number): number {
-  if (P.direction !== 0) return P.direction;
-  const yl = arcY(xc, yc, r, S.massA[0]);
-  const yr = arcY(xc, yc, r, S.massB[S.nMass - 1]);
-  if (Math.abs(yl - yr) <= 1e-6) return 0;
-  return yr < yl ? 1 : -1;
-}
+export { arcY };
 
 /**
  * Slices mass m of the circle and computes its driving term; returns a status code.
@@ -48,9 +37,11 @@ export function sliceMass(P: PreparedSection, S: Scratch, xc: number, yc: number
 /**
  * Evaluates circle (xc, yc, r) (m). Sets S.fsO / S.fsB (NaN when invalid, with S.reasonO /
  * S.reasonB), S.dir, S.govO / S.govB (the governing masses) and Bishop's mα record.
+ * A staged drawdown (ENGINE.md §7(b)) goes to the staged evaluator: its FS is the final stage's.
  * @returns OK when the circle has at least one slip mass with a driving moment, else the reason.
  */
 export function evaluateCircle(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, wantBishop: boolean): number {
+  if (P.staged !== null) return evaluateStagedCircle(P, S, xc, yc, r, wantBishop);
   S.fsO = NaN;
   S.fsB = NaN;
   S.govO = -1;

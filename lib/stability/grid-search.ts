@@ -13,6 +13,7 @@ import { refineFrom } from "./refine";
 import { describeCircle, finiteOrNull, issuesToWarnings, type CircleFs, type EngineFailure, type FsMap, type MethodRecord } from "./results";
 import type { Grid, Method, Radii, SectionDocument } from "./schema";
 import { createScratch } from "./scratch";
+import { stageWarnings } from "./drawdown/staged-report";
 import { createMethodState, localMinima, recordFs, type MethodState } from "./search-state";
 import { criticalWarnings, gridEdgeWarnings } from "./search-warnings";
 import { OK, REASONS } from "./status";
@@ -39,6 +40,8 @@ export interface GridSearchSuccess {
   circles: { tried: number; valid: number; rejected: Record<string, number> };
   warnings: EngineWarning[];
   cancelled: boolean;
+  /** Staged drawdown only (ENGINE.md §7(b)): the procedure used; each circle's FS is its final stage's. */
+  stagedVariant?: "three-stage" | "usace-two-stage";
 }
 
 export type GridSearchResult = GridSearchSuccess | EngineFailure;
@@ -126,6 +129,7 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
     lowest[M.method] = list;
     gridEdgeWarnings(M, grid, rv.length, warnings);
     criticalWarnings(P, S, M.method, crit, warnings);
+    stageWarnings(M.method, crit?.stages, "critical circle", warnings);
   }
   if (cancelled) warnings.push({ code: "search-cancelled", message: "The search was cancelled; results cover the circles tried so far." });
   return {
@@ -140,6 +144,7 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
     circles: { tried, valid, rejected },
     warnings,
     cancelled,
+    ...(P.staged !== null ? { stagedVariant: analysis.drawdown?.stagedVariant ?? "three-stage" } : {}),
   };
 }
 

@@ -9,7 +9,8 @@ import type { EngineWarning } from "./issues";
 import { buildMaterialTable, type MaterialTable } from "./load-cases";
 import type { SectionDocument } from "./schema";
 import { buildStripTable, type RingInput, type StripTable } from "./strip-table";
-import { buildWaterModel, WATER_LINE } from "./water";
+import { buildWaterModel, WATER_LINE, type WaterModel } from "./water";
+import { buildStagedModel, VARIANT_THREE_STAGE, VARIANT_TWO_STAGE, type StagedModel } from "./drawdown/staged-model";
 
 /** Everything one run needs, precomputed once. Lengths m, pressures kPa, weights kN/m³. */
 export interface PreparedSection {
@@ -27,6 +28,9 @@ export interface PreparedSection {
   waterB: Float64Array;
   /** Factor on phreatic pore pressure per strip: cos²θ of the line when cos2Correction is on, else 1. */
   waterCos2: Float64Array;
+  /** A second water surface per strip whose arc crossings also break slices (staged drawdown), or null. */
+  extraWaterA: Float64Array | null;
+  extraWaterB: Float64Array | null;
   /** Surcharge pressure per strip (kPa). */
   q: Float64Array;
   kh: number;
@@ -43,6 +47,8 @@ export interface PreparedSection {
   direction: number;
   analysis: ResolvedAnalysis;
   warnings: EngineWarning[];
+  /** Staged drawdown (ENGINE.md §7(b)): the stage-1 section and the staged strengths; null otherwise. */
+  staged: StagedModel | null;
 }
 
 /** The ground surface of a valid section as [x, y] points (m); vertical faces give two points at one x. */
@@ -59,8 +65,15 @@ export function sectionRings(doc: SectionDocument): RingInput[] {
   return doc.regions.map((r, i) => ({ points: r.points, material: index.get(r.material) ?? 0, region: i }));
 }
 
+/** True when the analysis asks for a staged total-stress drawdown (ENGINE.md §7(b)). */
+export function isStagedDrawdown(analysis: ResolvedAnalysis): boolean {
+  return analysis.case === "drawdown" && analysis.drawdown?.method === "staged";
+}
+
 /**
- * Prepares a validated section for computation.
+ * Prepares a validated section for computation. For a staged drawdown the result is the
+ * post-drawdown section (stages 2 and 3) and carries the pre-drawdown one (stage 1) in
+ * `staged.pre`; both share one strip table, so a circle cuts both into identical slices.
  * @throws Error when the regions cannot form a strip table (call validateSection first).
  */
 export function prepareSection(doc: SectionDocument, analysisIn?: ResolvedAnalysis): PreparedSection {
@@ -71,11 +84,34 @@ export function prepareSection(doc: SectionDocument, analysisIn?: ResolvedAnalys
   const ground = deriveGround(base.table);
   const gammaW = doc.water?.gammaW ?? DEFAULT_GAMMA_W;
   const water = buildWaterModel(doc.water, ground, analysis.case, analysis.drawdown, gammaW);
+  // A drawdown also breaks slices at the pre-drawdown line, whichever method: stage 1 of a
+  // staged analysis needs it, and so both methods cut a circle into the same slices.
+  const preWater = analysis.case === "drawdown" && analysis.drawdown && water.surface ? buildWaterModel(doc.water, ground, "steady", undefined, gammaW) : null;
   const surcharges = doc.loads?.surcharges ?? [];
   const breaks = [...water.breaks];
+  if (preWater) breaks.push(...preWater.breaks);
   for (const s of surcharges) breaks.push(s.x1, s.x2);
   const built = buildStripTable(rings, breaks);
   const table = built.table ?? base.table;
+  const { table: mat, warnings } = buildMaterialTable(doc.materials, analysis.case);
+  const P = assemble(doc, analysis, table, water, mat, warnings);
+  if (preWater) {
+    // The section as it stands before drawdown (stage 1); each breaks at the other's line.
+    const pre = assemble(doc, analysis, table, preWater, mat, []);
+    P.extraWaterA = pre.waterA;
+    P.extraWaterB = pre.waterB;
+    pre.extraWaterA = P.waterA;
+    pre.extraWaterB = P.waterB;
+    if (isStagedDrawdown(analysis)) {
+      P.staged = buildStagedModel(doc.materials, pre, analysis.drawdown?.stagedVariant === "usace-two-stage" ? VARIANT_TWO_STAGE : VARIANT_THREE_STAGE);
+    }
+  }
+  return P;
+}
+
+/** Fills the per-strip water, surcharge and face arrays of one water model. */
+function assemble(doc: SectionDocument, analysis: ResolvedAnalysis, table: StripTable, water: WaterModel, mat: MaterialTable, warnings: EngineWarning[]): PreparedSection {
+  const surcharges = doc.loads?.surcharges ?? [];
   const n = table.n;
   const waterA = new Float64Array(n);
   const waterB = new Float64Array(n);
@@ -114,7 +150,6 @@ export function prepareSection(doc: SectionDocument, analysisIn?: ResolvedAnalys
     faceBot[k] = Math.min(yl, yr);
     faceSoil[k] = yl > yr ? -1 : 1;
   }
-  const { table: mat, warnings } = buildMaterialTable(doc.materials, analysis.case);
   return {
     table,
     ground: deriveGround(table),
@@ -122,11 +157,13 @@ export function prepareSection(doc: SectionDocument, analysisIn?: ResolvedAnalys
     xmax: table.xs[n],
     mat,
     waterKind: water.kind,
-    gammaW,
+    gammaW: water.gammaW,
     ru: water.ru,
     waterA,
     waterB,
     waterCos2,
+    extraWaterA: null,
+    extraWaterB: null,
     q,
     kh: doc.loads?.kh ?? 0,
     hasFaces: hasFaces && water.kind === WATER_LINE,
@@ -139,5 +176,6 @@ export function prepareSection(doc: SectionDocument, analysisIn?: ResolvedAnalys
     direction: analysis.direction === "right" ? 1 : analysis.direction === "left" ? -1 : 0,
     analysis,
     warnings,
+    staged: null,
   };
 }

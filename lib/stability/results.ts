@@ -7,6 +7,7 @@ import type { EngineWarning, Issue } from "./issues";
 import { arcY, evaluateCircle } from "./evaluate-circle";
 import type { PreparedSection } from "./prepare";
 import type { Scratch } from "./scratch";
+import { stageSummary, type StageFs } from "./drawdown/staged-report";
 
 /** A trial circle: centre (xc, yc) and radius r, m. */
 export interface Circle {
@@ -23,6 +24,8 @@ export interface CircleFs {
   exit: [number, number];
   /** Direction the mass slides: "right" toward +x, "left" toward −x. */
   direction: "left" | "right";
+  /** Staged drawdown only (ENGINE.md §7(b)): this method's factor of safety at each stage; `fs` is the final one. */
+  stages?: StageFs;
 }
 
 /** Minimum FS over radii at every centre, row by row: values[iy·nx + ix], null where no circle was valid. */
@@ -62,7 +65,9 @@ export function describeCircle(P: PreparedSection, S: Scratch, c: Circle, method
   const a: [number, number] = [xa, arcY(c.xc, c.yc, c.r, xa)];
   const b: [number, number] = [xb, arcY(c.xc, c.yc, c.r, xb)];
   const right = S.dir >= 0;
-  return { fs, circle: { ...c }, entry: right ? a : b, exit: right ? b : a, direction: right ? "right" : "left" };
+  const out: CircleFs = { fs, circle: { ...c }, entry: right ? a : b, exit: right ? b : a, direction: right ? "right" : "left" };
+  if (P.staged !== null) out.stages = stageSummary(method === "bishop" ? S.stage.govB : S.stage.govO);
+  return out;
 }
 
 /** Converts validation issues to result warnings. */

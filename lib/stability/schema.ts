@@ -38,6 +38,13 @@ export const mohrCoulombMaterialSchema = z.object({
   suDatum: coordinate.optional(),
   /** Drains during construction or drawdown: keeps effective strength in those cases. */
   freeDraining: z.boolean().optional(),
+  /**
+   * Total-stress (R) envelope from consolidated-undrained tests, for a staged drawdown
+   * (ENGINE.md §7(b)): intercept cR (kPa) and angle phiR (°), plotted against the effective
+   * consolidation stress σ'3c. Needed by low-permeability materials in a staged drawdown.
+   */
+  cR: pressure.optional(),
+  phiR: z.number().min(-360).max(360).optional(),
 });
 
 /** Undrained (φ = 0) material: su (kPa) at suDatum (m), rising by suGradient (kPa/m) with depth. */
@@ -109,11 +116,21 @@ export const rangeRadiiSchema = z.object({ r1: coordinate, r2: coordinate, n: z.
 /** Radii either by tangent elevations (R = yc − yt) or by a radius range. */
 export const radiiSchema = z.union([tangentRadiiSchema, rangeRadiiSchema]);
 
-/** Rapid drawdown: pool from `from` down to `to` (m), effective-stress method (ENGINE.md §7(a)). */
+/** How a drawdown is analysed: "effective" (ENGINE.md §7(a), the default) or "staged" (§7(b)). */
+export const drawdownMethodSchema = z.enum(["effective", "staged"]);
+/** Which staged procedure: Duncan, Wright & Wong (1990) three stages (default) or the USACE (1970) two stages. */
+export const stagedVariantSchema = z.enum(["three-stage", "usace-two-stage"]);
+
+/**
+ * Rapid drawdown: pool from `from` down to `to` (m). `method` "effective" is the
+ * effective-stress method (ENGINE.md §7(a)); "staged" the staged total-stress method (§7(b)),
+ * whose variant `stagedVariant` picks (three-stage by default).
+ */
 export const drawdownSchema = z.object({
   from: coordinate,
   to: coordinate,
-  method: z.literal("effective").optional(),
+  method: drawdownMethodSchema.optional(),
+  stagedVariant: stagedVariantSchema.optional(),
 });
 
 export const methodSchema = z.enum(["bishop", "fellenius"]);
@@ -182,6 +199,8 @@ export type Loads = z.infer<typeof loadsSchema>;
 export type Grid = z.infer<typeof gridSchema>;
 export type Radii = z.infer<typeof radiiSchema>;
 export type Drawdown = z.infer<typeof drawdownSchema>;
+export type DrawdownMethod = z.infer<typeof drawdownMethodSchema>;
+export type StagedVariant = z.infer<typeof stagedVariantSchema>;
 export type Method = z.infer<typeof methodSchema>;
 export type LoadCase = z.infer<typeof loadCaseSchema>;
 export type Direction = z.infer<typeof directionSchema>;

@@ -3,6 +3,7 @@
  * evaluating a circle creates no objects. Slice arrays hold one slip mass at a time.
  */
 import { MAX_SLICES } from "./defaults";
+import { createStageScratch, type StageScratch } from "./drawdown/stage-scratch";
 
 const SLICE_CAP = MAX_SLICES + 8;
 const BREAK_CAP = 8192;
@@ -56,9 +57,11 @@ export interface Scratch {
   /** Index of the mass that governs each method (−1 when none). */
   govO: number;
   govB: number;
+  /** Staged-drawdown buffers and stage factors (ENGINE.md §7(b)); unused otherwise. */
+  stage: StageScratch;
 }
 
-/** Allocates a scratch set (about 60 kB). */
+/** Allocates a scratch set (about 90 kB). */
 export function createScratch(): Scratch {
   const f = () => new Float64Array(SLICE_CAP);
   return {
@@ -75,5 +78,6 @@ export function createScratch(): Scratch {
     dir: 1, depth: 0, D: 0,
     fsO: NaN, fsB: NaN, negO: 0, negB: 0, minMa: NaN, minMaX: NaN, minMaAlpha: NaN,
     iterations: 0, reasonB: 0, reasonO: 0, govO: -1, govB: -1,
+    stage: createStageScratch(SLICE_CAP),
   };
 }

@@ -30,6 +30,8 @@ function collectBreaks(P: PreparedSection, S: Scratch, xc: number, yc: number, r
   const cap = brk.length - 4;
   const r2 = r * r;
   const line = P.waterKind === 1;
+  const extraA = P.extraWaterA;
+  const extraB = P.extraWaterB;
   let nb = 0;
   brk[nb++] = xA;
   let k = findStrip(T, xA);
@@ -39,18 +41,22 @@ function collectBreaks(P: PreparedSection, S: Scratch, xc: number, yc: number, r
     const start = nb;
     const o = T.lineOff[k];
     const e = T.lineOff[k + 1];
-    // Arc crossings with material boundaries, the base and the water line.
-    for (let i = o; i <= e; i++) {
+    const last = extraA === null ? e : e + 1;
+    // Arc crossings with material boundaries, the base, the water line and the other stage's line.
+    for (let i = o; i <= last; i++) {
       let a: number;
       let b: number;
       if (i < e) {
         if (T.lineBreak[i] === 0) continue;
         a = T.lineA[i];
         b = T.lineB[i];
-      } else {
-        if (!line) break;
+      } else if (i === e) {
+        if (!line) continue;
         a = P.waterA[k];
         b = P.waterB[k];
+      } else {
+        a = extraA![k];
+        b = extraB![k];
       }
       const qa = 1 + b * b;
       const qb = b * (a - yc) - xc;

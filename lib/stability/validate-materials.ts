@@ -1,7 +1,8 @@
 /**
  * Material checks (ENGINE.md §1 "Bounds"): errors block a run, warnings flag unusual values.
  * γ ∉ (5, 30] / ∉ [14, 24]; γsat ≤ γw / < γ; c' < 0 / > 200 kPa; φ' ∉ [0°, 60°) / > 45°;
- * su ≤ 0 / > 500 kPa.
+ * su ≤ 0 / > 500 kPa; R envelope (staged drawdown, §7(b)): cR < 0 / > 200 kPa, φR ∉ [0°, 60°) / > 45°,
+ * and both or neither.
  */
 import { issue, type Issue } from "./issues";
 import type { LenientSectionDocument } from "./schema";
@@ -39,6 +40,7 @@ export function checkMaterials(materials: ReadonlyArray<LenientMaterial>, gammaW
       else if (m.c > 200) warnings.push(issue("cohesion-high", `${p}.c`, `${name}: c' = ${m.c} kPa is high for soil (over 200 kPa).`));
       if (!(m.phi >= 0 && m.phi < 60)) errors.push(issue("phi-out-of-range", `${p}.phi`, `${name}: φ' = ${m.phi}° is outside 0–60°. Give the friction angle in degrees.`));
       else if (m.phi > 45) warnings.push(issue("phi-high", `${p}.phi`, `${name}: φ' = ${m.phi}° is high (over 45°).`));
+      checkREnvelope(m, p, name, errors, warnings);
     }
     if (m.su !== undefined) checkSu(m, p, name, errors, warnings);
   });
@@ -51,4 +53,18 @@ function checkSu(m: Exclude<LenientMaterial, { model: "impenetrable" }>, p: stri
   const g = m.suGradient ?? 0;
   if (g < 0) errors.push(issue("su-gradient-negative", `${p}.suGradient`, `${name}: suGradient = ${g} kPa/m is negative; su may only rise with depth.`));
   if (g !== 0 && m.suDatum === undefined) errors.push(issue("su-datum-missing", `${p}.suDatum`, `${name}: suGradient is set but suDatum is missing; give the elevation (m) where su applies.`));
+}
+
+/** The total-stress (R) envelope of a Mohr–Coulomb material, when given: both keys, in range. */
+function checkREnvelope(m: Extract<LenientMaterial, { model: "mohr-coulomb" }>, p: string, name: string, errors: Issue[], warnings: Issue[]): void {
+  if (m.cR === undefined && m.phiR === undefined) return;
+  if (m.cR === undefined || m.phiR === undefined) {
+    const missing = m.cR === undefined ? "cR" : "phiR";
+    errors.push(issue("r-envelope-incomplete", `${p}.${missing}`, `${name}: the R envelope needs both cR (kPa) and phiR (°); ${missing} is missing. Give both from consolidated-undrained tests, or neither.`));
+    return;
+  }
+  if (m.cR < 0) errors.push(issue("r-cohesion-negative", `${p}.cR`, `${name}: cR = ${m.cR} kPa is negative; give cR ≥ 0.`));
+  else if (m.cR > 200) warnings.push(issue("r-cohesion-high", `${p}.cR`, `${name}: cR = ${m.cR} kPa is high for soil (over 200 kPa).`));
+  if (!(m.phiR >= 0 && m.phiR < 60)) errors.push(issue("r-phi-out-of-range", `${p}.phiR`, `${name}: φR = ${m.phiR}° is outside 0–60°. Give the R-envelope angle in degrees.`));
+  else if (m.phiR > 45) warnings.push(issue("r-phi-high", `${p}.phiR`, `${name}: φR = ${m.phiR}° is high (over 45°).`));
 }

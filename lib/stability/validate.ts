@@ -11,6 +11,7 @@ import { lenientSectionDocumentSchema, sectionDocumentSchema, type SectionDocume
 import { sectionRings } from "./prepare";
 import { checkAnalysis } from "./validate-analysis";
 import { checkMaterials } from "./validate-materials";
+import { checkStagedMaterials } from "./validate-staged";
 import { checkRegionLayout, checkRegionMaterials, cleanRegions } from "./validate-regions";
 import { checkLoads, checkWater } from "./validate-water";
 import { fromZodIssues } from "./zod-issues";
@@ -53,6 +54,7 @@ export function validateSection(doc: unknown): ValidationResult {
   checkWater(src.water, xmin, xmax, errors, warnings);
   checkLoads(src.loads, xmin, xmax, errors, warnings);
   checkAnalysis(src.analysis, src.water, errors.length === 0 ? ground : null, errors, warnings);
+  checkStagedMaterials(src, src.analysis, errors, warnings);
   if (errors.length === 0 && !sectionDocumentSchema.safeParse(section).success) {
     errors.push({ code: "invalid-document", path: "", message: "The section does not match the document format after cleaning; please report this." });
   }

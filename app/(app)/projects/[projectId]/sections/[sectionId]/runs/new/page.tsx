@@ -7,13 +7,14 @@ import { can } from "@/lib/permissions";
 import { fetchSection, fetchSectionVersion } from "@/db/queries/sections";
 import { fetchRequiredFsMap } from "@/db/queries/loading-conditions";
 import { PageTitle } from "@/components/ui/page-title";
-import { Caution } from "@/components/ui/caution";
 import { RunSetupForm } from "@/components/run-setup/run-setup-form";
 import type { SectionDocument } from "@/lib/stability";
+import type { RunSetup } from "@/lib/analysis/run-setup";
+import { fetchRun } from "@/db/queries/runs";
 
 export const metadata: Metadata = { title: "New run" };
 
-export default async function NewRunPage({ params }: { params: Promise<{ projectId: string; sectionId: string }> }) {
+export default async function NewRunPage({ params, searchParams }: { params: Promise<{ projectId: string; sectionId: string }>; searchParams: Promise<{ from?: string }> }) {
   const user = await requirePageUser();
   const p = await params;
   const access = await findProjectAccess(user, Number(p.projectId));
@@ -25,10 +26,14 @@ export default async function NewRunPage({ params }: { params: Promise<{ project
   }
   const version = await fetchSectionVersion(section.id, section.currentVersion);
   const requiredFs = await fetchRequiredFsMap(access.project.id);
+  // "Revise as a new run" starts from the earlier run's settings, on the section as it is now.
+  const from = Number((await searchParams).from) || null;
+  const earlier = from ? await fetchRun(access.project.id, from) : null;
+  const initial = earlier && earlier.sectionId === section.id ? (earlier.result as { setup?: RunSetup }).setup : undefined;
   return (
     <>
       <PageTitle
-        title="New run"
+        title={initial ? `New run revising “${earlier!.title}”` : "New run"}
         kicker={
           <>
             <Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link> /{" "}
@@ -41,8 +46,9 @@ export default async function NewRunPage({ params }: { params: Promise<{ project
         section={{ id: section.id, name: section.name, version: section.currentVersion }}
         document={version!.document as SectionDocument}
         requiredFs={requiredFs}
+        initial={initial}
+        revisesRunId={earlier && initial ? earlier.id : undefined}
       />
-      <div className="mt-6"><Caution compact /></div>
     </>
   );
 }
