@@ -1,0 +1,102 @@
+import { describe, expect, test } from "vitest";
+import { AppClient, signedIn } from "../support/http";
+import { demoProject } from "../support/demo";
+import { getDb } from "@/db/index";
+import type { SectionDocument } from "@/lib/stability";
+
+const bank = (): SectionDocument => ({
+  version: 1,
+  materials: [{ id: "clay", model: "mohr-coulomb", gamma: 19, gammaSat: 20, c: 8, phi: 26 }],
+  regions: [{ material: "clay", points: [[0, 0], [40, 0], [40, 5], [25, 5], [15, 10], [0, 10]] }],
+});
+
+async function count(table: string): Promise<number> {
+  const row = await getDb()(table).count({ n: "*" }).first();
+  return Number(row?.n);
+}
+
+describe("sections and their versions", () => {
+  test("create, save twice, read every version, restore the first", async () => {
+    const engineer = await signedIn("engineer@scarpline.test");
+    const { projectId } = await demoProject(engineer);
+    const created = await engineer.request(`/api/projects/${projectId}/sections`, { method: "POST", json: { name: "Canal bank km 2.1", description: "Left bank", document: bank() } });
+    expect(created.status).toBe(201);
+    const { section } = await created.json();
+
+    const v2 = bank();
+    (v2.materials[0] as { phi: number }).phi = 30;
+    const save2 = await engineer.request(`/api/projects/${projectId}/sections/${section.id}`, { method: "PUT", json: { baseVersion: 1, document: v2 } });
+    expect(save2.status).toBe(200);
+    const s2 = await save2.json();
+    expect(s2.section.version).toBe(2);
+    // The one-line summary names what changed when the user gives none.
+    expect(s2.summary).toMatch(/φ' 26° → 30°/);
+
+    const v3 = { ...v2, water: { phreatic: [[0, 8], [40, 3]] as [number, number][] } };
+    const save3 = await engineer.request(`/api/projects/${projectId}/sections/${section.id}`, { method: "PUT", json: { baseVersion: 2, document: v3, summary: "Added the seepage line" } });
+    expect((await save3.json()).section.version).toBe(3);
+
+    const detail = await (await engineer.request(`/api/projects/${projectId}/sections/${section.id}`)).json();
+    expect(detail.section.versions.map((v: { version: number; summary: string }) => [v.version, v.summary])).toEqual([
+      [3, "Added the seepage line"],
+      [2, expect.stringContaining("φ'")],
+      [1, "First version"],
+    ]);
+    const first = await (await engineer.request(`/api/projects/${projectId}/sections/${section.id}/versions/1`)).json();
+    expect(first.version.document.materials[0].phi).toBe(26);
+
+    const restored = await engineer.request(`/api/projects/${projectId}/sections/${section.id}/versions/1/restore`, { method: "POST" });
+    expect(restored.status).toBe(201);
+    const now = await (await engineer.request(`/api/projects/${projectId}/sections/${section.id}`)).json();
+    expect(now.section.currentVersion).toBe(4);
+    expect(now.document.materials[0].phi).toBe(26);
+    expect(now.section.versions[0].summary).toBe("Restored version 1");
+  });
+
+  test("a save on top of an older version is refused with 409 and nothing is written", async () => {
+    const engineer = await signedIn("engineer@scarpline.test");
+    const { projectId, sectionId, version, document } = await demoProject(engineer);
+    const before = await count("section_versions");
+    const res = await engineer.request(`/api/projects/${projectId}/sections/${sectionId}`, { method: "PUT", json: { baseVersion: version + 5, document } });
+    expect(res.status).toBe(409);
+    expect(await count("section_versions")).toBe(before);
+  });
+
+  test("an invalid section gets every problem with its place and nothing is saved", async () => {
+    const engineer = await signedIn("engineer@scarpline.test");
+    const { projectId } = await demoProject(engineer);
+    const bad = bank();
+    bad.regions[0].points = [[0, 0], [10, 10], [10, 0], [0, 10]]; // edges cross
+    (bad.materials[0] as { phi: number }).phi = 75;
+    const sectionsBefore = await count("sections");
+    const res = await engineer.request(`/api/projects/${projectId}/sections`, { method: "POST", json: { name: "Broken", description: "", document: bad } });
+    expect(res.status).toBe(400);
+    const body = await res.json();
+    expect(body.error.code).toBe("invalid_section");
+    const keys = Object.keys(body.error.fields);
+    expect(keys.some((k) => k.startsWith("document.regions[0]"))).toBe(true);
+    expect(keys.some((k) => k.startsWith("document.materials[0]"))).toBe(true);
+    expect(await count("sections")).toBe(sectionsBefore);
+  });
+
+  test("a reviewer may read but not save; a non-member gets 404; no session gets 401", async () => {
+    const engineer = await signedIn("engineer@scarpline.test");
+    const { projectId, sectionId, version, document } = await demoProject(engineer);
+    const reviewer = await signedIn("reviewer@scarpline.test");
+    expect((await reviewer.request(`/api/projects/${projectId}/sections/${sectionId}`)).status).toBe(200);
+    expect((await reviewer.request(`/api/projects/${projectId}/sections/${sectionId}`, { method: "PUT", json: { baseVersion: version, document } })).status).toBe(403);
+
+    const admin = await signedIn("admin@scarpline.test");
+    await admin.request("/api/users", { method: "POST", json: { email: "outsider@scarpline.test", name: "Out Sider", role: "engineer", password: "outsider-pass-1" } });
+    const outsider = await signedIn("outsider@scarpline.test", "outsider-pass-1");
+    expect((await outsider.request(`/api/projects/${projectId}/sections/${sectionId}`)).status).toBe(404);
+    expect((await new AppClient().request(`/api/projects/${projectId}/sections/${sectionId}`)).status).toBe(401);
+  });
+
+  test("the CSV templates download as text/csv", async () => {
+    const res = await new AppClient().request("/api/templates/geometry");
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toContain("text/csv");
+    expect((await res.text()).split("\r\n")[0]).toBe("region,material,x,y");
+  });
+});
