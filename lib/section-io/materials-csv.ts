@@ -8,7 +8,8 @@ type Model = (typeof MATERIAL_MODELS)[number];
 
 /** Columns each model needs, may use, and ignores (ENGINE-IO.md, `materials[].model`). */
 const NEEDS: Record<Model, { required: NumberColumn[]; optional: NumberColumn[] }> = {
-  "mohr-coulomb": { required: ["gamma", "c", "phi"], optional: ["gammaSat"] },
+  // su on a drained material is its end-of-construction strength (ENGINE-IO.md load case "undrained").
+  "mohr-coulomb": { required: ["gamma", "c", "phi"], optional: ["gammaSat", "su", "suGradient", "suDatum"] },
   undrained: { required: ["gamma", "su"], optional: ["gammaSat", "suGradient", "suDatum"] },
   impenetrable: { required: [], optional: [] },
 };
@@ -76,7 +77,7 @@ function readNumbers(r: RowReader, model: Model, columns: Map<string, number>, p
     const v = r.number(col);
     if (v !== null) out[col] = v;
   }
-  if (model === "undrained" && out.suGradient !== undefined && out.suDatum === undefined && !r.has("suDatum")) {
+  if (out.suGradient !== undefined && out.suDatum === undefined && !r.has("suDatum")) {
     r.problem("suDatum", "suDatum (the elevation where su applies) is needed when suGradient is given.");
   }
   return problems.length > before ? null : out;
@@ -85,7 +86,17 @@ function readNumbers(r: RowReader, model: Model, columns: Map<string, number>, p
 function buildMaterial(id: string, model: Model, n: Partial<Record<NumberColumn, number>>): SectionMaterial {
   if (model === "impenetrable") return { id, model };
   if (model === "mohr-coulomb") {
-    return { id, model, gamma: n.gamma as number, ...(n.gammaSat !== undefined && { gammaSat: n.gammaSat }), c: n.c as number, phi: n.phi as number };
+    return {
+      id,
+      model,
+      gamma: n.gamma as number,
+      ...(n.gammaSat !== undefined && { gammaSat: n.gammaSat }),
+      c: n.c as number,
+      phi: n.phi as number,
+      ...(n.su !== undefined && { su: n.su }),
+      ...(n.suGradient !== undefined && { suGradient: n.suGradient }),
+      ...(n.suDatum !== undefined && { suDatum: n.suDatum }),
+    };
   }
   return {
     id,

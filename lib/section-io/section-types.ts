@@ -23,6 +23,10 @@ export interface MohrCoulombMaterial {
   c: number;
   /** degrees */
   phi: number;
+  /** Optional end-of-construction undrained strength, kPa at suDatum, rising by suGradient kPa/m below it. */
+  su?: number;
+  suGradient?: number;
+  suDatum?: number;
 }
 
 export interface UndrainedMaterial {
