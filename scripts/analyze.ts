@@ -4,6 +4,8 @@
  *   npx tsx scripts/analyze.ts section.json --circle xc,yc,r      one circle, slice table
  *   cat section.json | npx tsx scripts/analyze.ts -               read standard input
  * Options: --map adds the minimum-FS map per method to a search's output.
+ * A drawdown with analysis.drawdown.method "staged" (materials with cR, phiR or freeDraining)
+ * reports each stage's FS under `stages`; the FS shown is the final stage's.
  * Standard output carries only JSON. Exit 0 with "ok": true; exit 2 with "ok": false and
  * the error list on bad input or bad arguments; exit 1 on an internal failure.
  */

@@ -8,6 +8,17 @@ export { runGridSearch, type GridSearchOptions, type GridSearchResult, type Grid
 export { analyzeCircle, type CircleResult, type CircleSuccess, type SliceRow } from "./analyze-circle";
 export type { Circle, CircleFs, FsMap, EngineFailure, MethodRecord } from "./results";
 export { sectionGround } from "./prepare";
+export type { StageFs, SliceStage } from "./drawdown/staged-report";
+export {
+  threeStageStrength,
+  twoStageStrength,
+  threeStageDetail,
+  consolidationRatio,
+  failureRatio,
+  kc1Intercept,
+  kc1Slope,
+  type StageTwoDetail,
+} from "./drawdown/staged-strength";
 export { REASONS } from "./status";
 export { infiniteSlopeFactor, infiniteSlopeUndrained, type InfiniteSlopeInput } from "./infinite-slope";
 export {
