@@ -12,9 +12,10 @@ interface CoordinateInputProps {
 }
 
 /**
- * A metre value shown to 2 decimals that accepts any precision. The typed text is kept
- * while the field has focus and applied on Enter or when leaving the field, so one
- * edit is one undo step; text that is not a number puts the old value back.
+ * A metre value shown to 2 decimals that accepts any precision. Typed text is kept while
+ * the field has focus and applied on Enter or when leaving the field, so one edit is one
+ * undo step; a field left untouched never rounds the stored value; text that is not a
+ * number puts the old value back.
  */
 export function CoordinateInput({ value, label, readOnly, testId, onCommit, onFocus }: CoordinateInputProps) {
   const [text, setText] = useState<string | null>(null);
@@ -34,10 +35,8 @@ export function CoordinateInput({ value, label, readOnly, testId, onCommit, onFo
       readOnly={readOnly}
       className="field px-1.5 py-0.5 text-right font-mono text-xs"
       value={text ?? value.toFixed(2)}
-      onFocus={() => {
-        setText(String(value));
-        onFocus();
-      }}
+      // The shown text must not change on focus: that would move the caret under a typing user.
+      onFocus={onFocus}
       onChange={(e) => setText(e.target.value)}
       onBlur={apply}
       onKeyDown={(e) => {

@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import type { SectionDetail } from "@/db/queries/sections";
 import type { SectionDocument } from "@/lib/stability";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
@@ -28,6 +28,8 @@ export function SectionWorkspace({ projectId, section, document: saved, material
   const [banner, setBanner] = useState<{ kind: "ok" | "error"; text: string; fields?: string[] } | null>(null);
   const [busy, setBusy] = useState(false);
   const { errors, warnings } = useValidation(doc);
+  // A new saved version (ours, or a restore) becomes the drawing; the banner stays to say what happened.
+  useEffect(() => setDoc(saved), [section.currentVersion]); // eslint-disable-line react-hooks/exhaustive-deps
   const dirty = JSON.stringify(doc) !== JSON.stringify(saved);
   const palette = materials.length > 0 ? materials : doc.materials.map((m, i) => ({ key: m.id, name: m.name ?? m.id, color: ["#8fb3d9", "#d9b38f", "#9fc79f", "#c9a0c9", "#a0a0a0"][i % 5] }));
 

@@ -27,3 +27,13 @@ export function watchConsole(page: Page): string[] {
   page.on("pageerror", (e) => errors.push(e.message));
   return errors;
 }
+
+/** Runs a browser test body; on failure keeps a screenshot in test-results/ to show what the page looked like. */
+export async function keepScreenshotOnFailure<T>(page: Page, name: string, body: () => Promise<T>): Promise<T> {
+  try {
+    return await body();
+  } catch (err) {
+    await page.screenshot({ path: `test-results/${name.replace(/[^a-z0-9]+/gi, "-")}.png`, fullPage: true }).catch(() => undefined);
+    throw err;
+  }
+}

@@ -30,7 +30,6 @@ export default async function SectionPage({ params }: { params: Promise<{ projec
       </PageTitle>
       {section.description ? <p className="-mt-3 mb-4 max-w-3xl text-sm text-ink-soft">{section.description}</p> : null}
       <SectionWorkspace
-        key={section.currentVersion}
         projectId={access.project.id}
         section={section}
         document={doc}
