@@ -23,6 +23,7 @@ export interface RunSetupInput {
   refine: boolean;
   drawdownFrom?: number;
   drawdownTo?: number;
+  drawdownMethod: "effective" | "staged";
   requiredFs: number;
 }
 
@@ -40,6 +41,7 @@ export function toRunSetup(v: RunSetupInput): unknown {
     refine: v.refine,
     drawdownFrom: nanToUndefined(v.drawdownFrom),
     drawdownTo: nanToUndefined(v.drawdownTo),
+    drawdownMethod: v.drawdownMethod ?? "effective",
     requiredFs: v.requiredFs,
   };
 }
@@ -62,6 +64,7 @@ export function fromRunSetup(s: RunSetup): RunSetupInput {
     refine: s.refine,
     drawdownFrom: s.drawdownFrom,
     drawdownTo: s.drawdownTo,
+    drawdownMethod: s.drawdownMethod ?? "effective",
     requiredFs: s.requiredFs,
   };
 }

@@ -43,6 +43,9 @@ function defaults(doc: SectionDocument, requiredFs: Record<LoadingConditionKey, 
     r2: 30,
     radiusCount: g.radii.n,
     refine: true,
+    drawdownMethod: "effective",
+    drawdownFrom: undefined,
+    drawdownTo: undefined,
     requiredFs: requiredFs["steady-seepage"],
   };
 }
@@ -70,6 +73,11 @@ export function RunSetupForm({ projectId, section, document: doc, requiredFs, in
   function onCondition(key: string) {
     const c = loadingCondition(key as LoadingConditionKey);
     form.setValue("requiredFs", requiredFs[c.key]);
+    if (c.engineCase === "drawdown" && values.drawdownFrom === undefined) {
+      // Start from the reservoir level drawn on the section; the engineer types the low level.
+      const line = doc.water?.phreatic;
+      if (line && line.length > 0) form.setValue("drawdownFrom", Math.max(line[0][1], line[line.length - 1][1]));
+    }
     if (c.faces !== "both" && c.faces !== values.face) {
       form.setValue("face", c.faces);
       placeGrid(c.faces);

@@ -39,6 +39,13 @@ export function ConditionFields({ form, onCondition }: { form: SetupForm; onCond
         <div className="grid grid-cols-2 gap-2">
           <Num form={form} name="drawdownFrom" label="Pool before" unit="m" />
           <Num form={form} name="drawdownTo" label="Pool after" unit="m" />
+          <div className="col-span-2">
+            <label className="label" htmlFor="f-drawdownMethod">Drawdown method</label>
+            <select id="f-drawdownMethod" className="field" {...form.register("drawdownMethod")}>
+              <option value="effective">Effective stress, pore pressures held (simple)</option>
+              <option value="staged">Staged total stress (three stages, R envelope)</option>
+            </select>
+          </div>
         </div>
       ) : null}
       <Num form={form} name="requiredFs" label="Required FS" step="0.05" />

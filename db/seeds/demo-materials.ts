@@ -35,7 +35,7 @@ const DEMO: DemoMaterial[] = [
     name: "Compacted clay fill",
     color: MATERIAL_COLORS[0],
     notes: "Embankment shell and core, placed in 250 mm layers. su for end of construction is a design assumption pending UU tests on placed fill.",
-    parameters: { model: "mohr-coulomb", gamma: 19, gammaSat: 20, c: 10, phi: 26, su: 60 },
+    parameters: { model: "mohr-coulomb", gamma: 19, gammaSat: 20, c: 10, phi: 26, su: 60, cR: 22, phiR: 15 },
     sets: [
       {
         kind: "direct-shear",
@@ -63,7 +63,7 @@ const DEMO: DemoMaterial[] = [
     name: "Silty clay foundation",
     color: MATERIAL_COLORS[1],
     notes: "Alluvial silty clay under the footprint. Undrained strength from field vanes in two probes; the datum is the original ground at 6.00 m.",
-    parameters: { model: "mohr-coulomb", gamma: 18, gammaSat: 18.5, c: 4, phi: 24, su: 35, suGradient: 1.5, suDatum: 6 },
+    parameters: { model: "mohr-coulomb", gamma: 18, gammaSat: 18.5, c: 4, phi: 24, su: 35, suGradient: 1.5, suDatum: 6, cR: 15, phiR: 13 },
     sets: [
       {
         kind: "undrained",

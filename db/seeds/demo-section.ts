@@ -12,8 +12,8 @@ export const DEMO_POOL = { normal: 16, flood: 17, drawdownTo: 8 };
 
 /** The values the demo library derives from its lab sets (db/seeds/demo-materials.ts), for use without a database. */
 export const DEMO_MATERIALS: SectionDocument["materials"] = [
-  { id: "fill", name: "Compacted clay fill", model: "mohr-coulomb", gamma: 19, gammaSat: 20, c: 10.4, phi: 25.9, su: 60 },
-  { id: "foundation", name: "Silty clay foundation", model: "mohr-coulomb", gamma: 18, gammaSat: 18.5, c: 4, phi: 24, su: 34.6, suGradient: 1.65, suDatum: 6 },
+  { id: "fill", name: "Compacted clay fill", model: "mohr-coulomb", gamma: 19, gammaSat: 20, c: 10.4, phi: 25.9, su: 60, cR: 22, phiR: 15 },
+  { id: "foundation", name: "Silty clay foundation", model: "mohr-coulomb", gamma: 18, gammaSat: 18.5, c: 4, phi: 24, su: 34.6, suGradient: 1.65, suDatum: 6, cR: 15, phiR: 13 },
   { id: "drain", name: "Gravel blanket drain", model: "mohr-coulomb", gamma: 20, gammaSat: 21, c: 0, phi: 36, freeDraining: true },
   { id: "rock", name: "Mudstone bedrock", model: "impenetrable", gamma: 23 },
 ];

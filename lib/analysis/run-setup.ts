@@ -19,6 +19,8 @@ export const runSetupSchema = z
     refine: z.boolean(),
     drawdownFrom: z.number().optional(),
     drawdownTo: z.number().optional(),
+    /** effective: pore pressures held (ENGINE.md §7(a)); staged: Duncan–Wright–Wong total-stress stages (§7(b)). */
+    drawdownMethod: z.enum(["effective", "staged"]).default("effective"),
     requiredFs: z.number({ error: "Enter the required factor of safety." }).min(1, "At least 1.0.").max(5, "At most 5."),
     ordinaryForm: z.enum(["classical", "effective-weight"]).default("classical"),
   })
@@ -50,7 +52,7 @@ export function toAnalysis(doc: SectionDocument, setup: RunSetup): Analysis {
     ordinaryForm: setup.ordinaryForm,
   };
   if (condition.engineCase === "drawdown") {
-    analysis.drawdown = { from: setup.drawdownFrom!, to: setup.drawdownTo!, method: "effective" };
+    analysis.drawdown = { from: setup.drawdownFrom!, to: setup.drawdownTo!, method: setup.drawdownMethod };
   }
   return analysis;
 }

@@ -14,6 +14,8 @@ export const EMPTY_PARAMETER_FORM: ParameterFormValues = {
   su: "",
   suGradient: "",
   suDatum: "",
+  cR: "",
+  phiR: "",
 };
 
 /** The form's values for stored parameters. */

@@ -19,7 +19,7 @@ export type MaterialModel = MaterialParameters["model"];
 export const MATERIAL_MODELS: readonly MaterialModel[] = ["mohr-coulomb", "undrained", "impenetrable"];
 
 /** Numeric parameters that can be typed in, or copied from a lab test set. */
-export const PARAMETER_KEYS = ["gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum"] as const;
+export const PARAMETER_KEYS = ["gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum", "cR", "phiR"] as const;
 export type ParameterKey = (typeof PARAMETER_KEYS)[number];
 
 export interface ParameterInfo {
@@ -38,11 +38,14 @@ export const PARAMETER_INFO: Record<ParameterKey, ParameterInfo> = {
   su: { label: "Undrained shear strength", symbol: "su", unit: "kPa" },
   suGradient: { label: "Increase of su per metre of depth", symbol: "su gradient", unit: "kPa/m" },
   suDatum: { label: "Elevation where su applies", symbol: "su datum", unit: "m" },
+  // The total-stress (R) envelope from CU tests, for the staged rapid-drawdown method (ENGINE.md §7(b)).
+  cR: { label: "R-envelope intercept (staged drawdown)", symbol: "cR", unit: "kPa" },
+  phiR: { label: "R-envelope angle (staged drawdown)", symbol: "φR", unit: "°" },
 };
 
 /** Which numeric parameters each model keeps (the engine's schema; su on Mohr–Coulomb is for end of construction). */
 export const MODEL_PARAMETERS: Record<MaterialModel, readonly ParameterKey[]> = {
-  "mohr-coulomb": ["gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum"],
+  "mohr-coulomb": ["gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum", "cR", "phiR"],
   undrained: ["gamma", "gammaSat", "su", "suGradient", "suDatum"],
   impenetrable: ["gamma"],
 };

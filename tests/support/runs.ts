@@ -15,6 +15,7 @@ export function quickSetup(doc: SectionDocument, face: "upstream" | "downstream"
     grid: g.grid,
     radii: g.radii,
     refine: false,
+    drawdownMethod: "effective",
     requiredFs: face === "downstream" ? 1.5 : 1.3,
     ...(face === "upstream" ? { drawdownFrom: 16, drawdownTo: 8 } : {}),
     ...overrides,
