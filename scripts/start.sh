@@ -15,7 +15,8 @@ npx tsx scripts/db.ts seed
 bash scripts/services-start.sh
 
 log "building the app"
-NEXT_TELEMETRY_DISABLED=1 node node_modules/next/dist/bin/next build >"$DATA_ROOT/build.log" 2>&1 || { tail -40 "$DATA_ROOT/build.log"; die "build failed; see $DATA_ROOT/build.log"; }
+node scripts/build-engine.mjs >"$DATA_ROOT/build.log" 2>&1 || { cat "$DATA_ROOT/build.log"; die "bundling the engine for server sweeps failed"; }
+NEXT_TELEMETRY_DISABLED=1 node node_modules/next/dist/bin/next build >>"$DATA_ROOT/build.log" 2>&1 || { tail -40 "$DATA_ROOT/build.log"; die "build failed; see $DATA_ROOT/build.log"; }
 
 PORT="${PORT:-3000}"
 if (exec 3<>"/dev/tcp/127.0.0.1/$PORT") 2>/dev/null; then

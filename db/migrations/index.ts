@@ -3,6 +3,7 @@ import * as m001 from "./001-organisations-users-projects";
 import * as m002 from "./002-sections-materials-runs";
 import * as m004 from "./004-documents";
 import * as m005 from "./005-loading-conditions";
+import * as m007 from "./007-design-studies";
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -16,6 +17,7 @@ const migrations: Record<string, Migration> = {
   "002-sections-materials-runs": m002,
   "004-documents": m004,
   "005-loading-conditions": m005,
+  "007-design-studies": m007,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -2,6 +2,7 @@ import type { Knex } from "knex";
 import bcrypt from "bcryptjs";
 import { buildDemoSection } from "./demo-section";
 import { seedDemoMaterials } from "./demo-materials";
+import { seedDemoDesign } from "./demo-design";
 import { fetchMaterialsOfProject } from "../queries/materials";
 import { toEngineMaterial } from "../../lib/materials/engine-material";
 
@@ -63,6 +64,7 @@ export async function seedDemo(knex: Knex): Promise<{ created: boolean }> {
       { project_id: projectId, user_id: ids.reviewer, role: "reviewer" },
       { project_id: projectId, user_id: ids.designer, role: "designer" },
     ]);
+    await seedDemoDesign(trx, projectId, ids.designer);
   });
   return { created: true };
 }

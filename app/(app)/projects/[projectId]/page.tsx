@@ -25,6 +25,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
     <>
       <PageTitle title={project.name} kicker={<Link href="/projects" className="hover:text-ink">Projects</Link>}>
         <Link href={`/projects/${project.id}/materials`} className="btn-quiet">Materials</Link>
+        <Link href={`/projects/${project.id}/design`} className="btn-quiet">Slope design</Link>
         <Link href={`/projects/${project.id}/documents`} className="btn-quiet">Documents</Link>
         <Link href={`/projects/${project.id}/settings`} className="btn-quiet">Required FS</Link>
         {can(role, "members.manage") ? <Link href={`/projects/${project.id}/members`} className="btn-quiet">Members</Link> : null}
