@@ -1,5 +1,8 @@
 import { z } from "zod";
 
+// "false" must read as false, which z.coerce.boolean() would not do.
+const flag = z.enum(["true", "false", "1", "0"]).transform((v) => v === "true" || v === "1");
+
 const envSchema = z.object({
   DATABASE_HOST: z.string().default("127.0.0.1"),
   DATABASE_PORT: z.coerce.number().int().positive().default(3307),
@@ -7,6 +10,17 @@ const envSchema = z.object({
   DATABASE_PASSWORD: z.string().default("scarpline-dev"),
   DATABASE_NAME: z.string().regex(/^scarpline[A-Za-z0-9_]*$/, "must start with 'scarpline'").default("scarpline"),
   APP_URL: z.string().url().default("http://127.0.0.1:3000"),
+  // Outgoing mail. The defaults reach the local fake that scripts/services-start.sh starts.
+  SMTP_HOST: z.string().min(1).default("127.0.0.1"),
+  SMTP_PORT: z.coerce.number().int().positive().max(65535).default(2525),
+  SMTP_SECURE: flag.default(false),
+  // The local fake offers no TLS; a real server should leave this false.
+  SMTP_IGNORE_TLS: flag.default(true),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().min(3).default("Scarpline notices <notices@scarpline.test>"),
+  // Where the local fake keeps the mail it caught, read by the admin mail page.
+  SMTP_MAIL_DIR: z.string().min(1).default(".data/mail"),
 });
 
 export type ServerEnv = z.infer<typeof envSchema>;

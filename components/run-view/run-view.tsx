@@ -12,6 +12,8 @@ import { RunCanvas } from "@/components/runs/run-canvas";
 import { FsSummary } from "@/components/runs/fs-summary";
 import { SliceTable } from "@/components/runs/slice-table";
 import { StatusBadge } from "@/components/run-list/status-badge";
+import { PinnedCanvas } from "@/components/review/pinned-canvas";
+import type { PinMarker } from "@/lib/review/pin-markers";
 
 type Method = "bishop" | "fellenius";
 export type StoredResult = GridSearchSuccess & { setup: RunSetup };
@@ -20,10 +22,19 @@ export type StoredSlices = Partial<Record<Method, { slices: SliceRow[]; minMAlph
 export interface RunViewProps {
   run: RunDetail;
   canRevise: boolean;
+  /** Numbered comment markers drawn over the section. */
+  markers?: readonly PinMarker[];
+  /** While true a click on the section reports its coordinates through onPlace. */
+  placing?: boolean;
+  onPlace?: (point: { x: number; y: number }) => void;
+  activePin?: number | null;
+  onSelectPin?: (n: number) => void;
+  /** Extra links or buttons beside the view's own. */
+  actions?: React.ReactNode;
 }
 
 /** A kept run exactly as it was saved: its frozen section, settings, critical circles and slices. */
-export function RunView({ run, canRevise }: RunViewProps) {
+export function RunView({ run, canRevise, markers = [], placing, onPlace, activePin, onSelectPin, actions }: RunViewProps) {
   const result = run.result as StoredResult;
   const tables = run.sliceTables as StoredSlices;
   const doc = run.document as SectionDocument;
@@ -59,8 +70,11 @@ export function RunView({ run, canRevise }: RunViewProps) {
           Section JSON for the command line
         </button>
         {canRevise ? <Link className="btn-quiet" href={`/projects/${run.projectId}/sections/${run.sectionId}/runs/new?from=${run.id}`}>Revise as a new run</Link> : null}
+        {actions}
       </div>
-      <RunCanvas document={doc} materialColors={colors} result={result} method={method} slices={tables[method]?.slices} drawdownTo={drawdownTo} requiredFs={run.requiredFs} grid={doc.analysis?.grid} radii={doc.analysis?.radii} height={480} />
+      <PinnedCanvas markers={markers} placing={placing} onPlace={onPlace} active={activePin} onSelect={onSelectPin}>
+        <RunCanvas document={doc} materialColors={colors} result={result} method={method} slices={tables[method]?.slices} drawdownTo={drawdownTo} requiredFs={run.requiredFs} grid={doc.analysis?.grid} radii={doc.analysis?.radii} height={480} />
+      </PinnedCanvas>
       <FsSummary result={result} requiredFs={run.requiredFs} />
       {tables[method] ? (
         <SliceTable

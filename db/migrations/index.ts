@@ -3,6 +3,7 @@ import * as m001 from "./001-organisations-users-projects";
 import * as m002 from "./002-sections-materials-runs";
 import * as m004 from "./004-documents";
 import * as m005 from "./005-loading-conditions";
+import * as m006 from "./006-review";
 import * as m007 from "./007-design-studies";
 
 interface Migration {
@@ -17,6 +18,7 @@ const migrations: Record<string, Migration> = {
   "002-sections-materials-runs": m002,
   "004-documents": m004,
   "005-loading-conditions": m005,
+  "006-review": m006,
   "007-design-studies": m007,
 };
 

@@ -139,3 +139,83 @@ export async function createRun(run: NewRun, db: Knex = getDb()): Promise<number
     return id;
   });
 }
+
+/** A draft's new title, with its audit line. The database refuses it for a run that left draft. */
+export async function renameDraftRun(runId: number, title: string, actorId: number, db: Knex = getDb()): Promise<void> {
+  await db.transaction(async (trx) => {
+    const row = await trx("runs").where({ id: runId }).forUpdate().first("status", "title");
+    if (!row || row.status !== "draft") throw new Error("run_frozen: only a draft can be renamed");
+    await trx("runs").where({ id: runId, status: "draft" }).update({ title });
+    await trx("run_events").insert({ run_id: runId, actor_id: actorId, kind: "renamed", note: `Renamed from “${row.title}” to “${title}”.` });
+  });
+}
+
+/** Runs that name this one as the run they revise. */
+export async function fetchRevisionIds(runId: number, db: Knex = getDb()): Promise<number[]> {
+  const rows = await db("runs").where({ revises_run_id: runId }).orderBy("id").select("id");
+  return rows.map((r: { id: number }) => r.id);
+}
+
+/** Deletes a draft with its comments and audit lines; the database refuses any other status. */
+export async function deleteDraftRun(runId: number, db: Knex = getDb()): Promise<boolean> {
+  return db.transaction(async (trx) => {
+    const n = await trx("runs").where({ id: runId, status: "draft" }).delete();
+    return n > 0;
+  });
+}
+
+export interface ChainLink {
+  id: number;
+  title: string;
+  status: RunSummary["status"];
+  createdAt: string;
+}
+
+/**
+ * The revisions a run belongs to, oldest first: the runs it revises, back to the first, and the
+ * runs that revise it, forward along each first revision.
+ */
+export async function fetchRevisionChain(projectId: number, runId: number, db: Knex = getDb()): Promise<ChainLink[]> {
+  const rows = (await db("runs").where({ project_id: projectId }).select("id", "title", "status", "created_at", "revises_run_id")) as {
+    id: number; title: string; status: RunSummary["status"]; created_at: Date; revises_run_id: number | null;
+  }[];
+  const byId = new Map(rows.map((r) => [r.id, r]));
+  const link = (r: (typeof rows)[number]): ChainLink => ({ id: r.id, title: r.title, status: r.status, createdAt: new Date(r.created_at).toISOString() });
+  const start = byId.get(runId);
+  if (!start) return [];
+  const back: ChainLink[] = [];
+  const seen = new Set<number>([runId]);
+  for (let r = start; r.revises_run_id !== null && byId.has(r.revises_run_id) && !seen.has(r.revises_run_id); ) {
+    r = byId.get(r.revises_run_id)!;
+    seen.add(r.id);
+    back.unshift(link(r));
+  }
+  const forward: ChainLink[] = [];
+  for (let id: number | undefined = runId; id !== undefined; ) {
+    const next = rows.filter((r) => r.revises_run_id === id && !seen.has(r.id)).sort((a, b) => a.id - b.id)[0];
+    if (!next) break;
+    seen.add(next.id);
+    forward.push(link(next));
+    id = next.id;
+  }
+  return [...back, link(start), ...forward];
+}
+
+export interface RunExportRow extends RunSummary {
+  reviewedByName: string | null;
+  reviewedAt: string | null;
+}
+
+/** The project's runs with who signed them off, for the runs CSV. */
+export async function fetchRunsForExport(projectId: number, db: Knex = getDb()): Promise<RunExportRow[]> {
+  const rows = await runSummaryQuery(db)
+    .leftJoin("users as rv", "rv.id", "r.reviewed_by")
+    .select("rv.name as reviewed_name", "r.reviewed_at")
+    .where("r.project_id", projectId)
+    .orderBy("r.id");
+  return rows.map((r: Record<string, unknown>) => ({
+    ...toRunSummary(r),
+    reviewedByName: (r.reviewed_name as string) ?? null,
+    reviewedAt: r.reviewed_at ? new Date(r.reviewed_at as Date).toISOString() : null,
+  }));
+}

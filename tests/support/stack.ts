@@ -1,7 +1,8 @@
 /**
  * The real stack the integration and browser tests talk to: a database of the run's own on the
  * project's MariaDB (created here, dropped at the end), the S3 fake on a free port with a bucket and
- * data folder of the run's own (scripts/s3-fake.ts), and the built app served on a free port.
+ * data folder of the run's own (scripts/s3-fake.ts), the SMTP fake on a free port with a mail
+ * folder of the run's own (scripts/smtp-fake.ts), and the built app served on a free port.
  * Shared by the integration and e2e projects: the first caller starts it, the last stops it.
  */
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
@@ -28,6 +29,7 @@ interface State {
   stack: Promise<Stack>;
   server?: ChildProcess;
   s3?: FakeS3;
+  smtp?: FakeSmtp;
   dbName: string;
 }
 const g = globalThis as unknown as { scarplineStack?: State };
@@ -70,6 +72,9 @@ async function dropDatabase(dbName: string): Promise<void> {
 
 function buildApp(): void {
   if (process.env.SCARPLINE_SKIP_BUILD === "1" && fs.existsSync(path.join(ROOT, DIST_DIR, "BUILD_ID"))) return;
+  // Server-side sweeps load the engine as one bundled module (scripts/build-engine.mjs).
+  const engine = spawnSync(process.execPath, ["scripts/build-engine.mjs"], { cwd: ROOT, encoding: "utf8" });
+  if (engine.status !== 0) throw new Error(`engine bundle failed:\n${engine.stdout}\n${engine.stderr}`);
   const result = spawnSync(process.execPath, ["node_modules/next/dist/bin/next", "build"], {
     cwd: ROOT,
     env: { ...process.env, NEXT_DIST_DIR: DIST_DIR, NEXT_TELEMETRY_DISABLED: "1" },
@@ -135,6 +140,60 @@ async function startFakeS3(): Promise<FakeS3> {
   return fake;
 }
 
+interface FakeSmtp {
+  port: number;
+  /** Where the fake writes each caught message as JSON (lib/mail/caught-mail.ts). */
+  mailDir: string;
+  folder: string;
+  process: ChildProcess;
+}
+
+/** Starts scripts/smtp-fake.ts on a free port, keeping the mail it catches in a temporary folder. */
+async function startFakeSmtp(): Promise<FakeSmtp> {
+  const folder = fs.mkdtempSync(path.join(os.tmpdir(), "scarpline-smtp-"));
+  const port = await freePort();
+  const mailDir = path.join(folder, "mail");
+  const child = spawn(process.execPath, ["--import", "tsx", "scripts/smtp-fake.ts"], {
+    cwd: ROOT,
+    env: { ...process.env, SMTP_PORT: String(port), SMTP_MAIL_DIR: mailDir, SMTP_PID_FILE: path.join(folder, "smtp-fake.pid") },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  process.once("exit", () => child.kill("SIGKILL"));
+  let output = "";
+  await new Promise<void>((resolve, reject) => {
+    const timer = setTimeout(() => fail(new Error(`the SMTP fake did not start within 20 s:\n${output}`)), 20_000);
+    const fail = (err: Error) => {
+      clearTimeout(timer);
+      child.kill("SIGKILL");
+      reject(err);
+    };
+    child.stderr?.on("data", (d) => (output += d));
+    child.stdout?.on("data", (d) => {
+      output += d;
+      if (output.includes("smtp-fake ready")) {
+        clearTimeout(timer);
+        resolve();
+      }
+    });
+    child.once("exit", (code) => fail(new Error(`the SMTP fake exited early (code ${code}):\n${output}`)));
+  });
+  return { port, mailDir, folder, process: child };
+}
+
+/** The app's mail settings (lib/env.ts) for the run's fake; tests read SMTP_MAIL_DIR too. */
+function smtpEnv(fake: FakeSmtp): Record<string, string> {
+  return { SMTP_HOST: "127.0.0.1", SMTP_PORT: String(fake.port), SMTP_SECURE: "false", SMTP_IGNORE_TLS: "true", SMTP_MAIL_DIR: fake.mailDir };
+}
+
+async function stopChild(child: ChildProcess): Promise<void> {
+  if (child.exitCode === null && child.signalCode === null) {
+    const exited = new Promise<void>((resolve) => child.once("exit", () => resolve()));
+    child.kill("SIGTERM");
+    await Promise.race([exited, new Promise((r) => setTimeout(r, 5_000))]);
+    child.kill("SIGKILL");
+  }
+}
+
 /** The app's object-storage settings (lib/storage/s3-config.ts) for the run's fake. */
 function s3Env(fake: FakeS3): Record<string, string> {
   return {
@@ -162,8 +221,9 @@ async function start(withServer: boolean, state: State): Promise<Stack> {
   if (!withServer) return { dbName: state.dbName, appUrl: "" };
   buildApp();
   state.s3 = await startFakeS3();
-  // Test files read these too, to look into the bucket with their own S3 client.
-  Object.assign(process.env, s3Env(state.s3));
+  state.smtp = await startFakeSmtp();
+  // Test files read these too, to look into the bucket with their own S3 client and into the caught mail.
+  Object.assign(process.env, s3Env(state.s3), smtpEnv(state.smtp));
   const port = await freePort();
   const appUrl = `http://127.0.0.1:${port}`;
   let output = "";
@@ -178,6 +238,7 @@ async function start(withServer: boolean, state: State): Promise<Stack> {
       APP_URL: appUrl,
       NEXTAUTH_SECRET: randomBytes(24).toString("base64url"),
       ...s3Env(state.s3),
+      ...smtpEnv(state.smtp),
     },
     stdio: ["ignore", "pipe", "pipe"],
   });
@@ -206,5 +267,9 @@ export async function releaseStack(): Promise<void> {
   g.scarplineStack = undefined;
   state.server?.kill("SIGTERM");
   if (state.s3) await stopFakeS3(state.s3);
+  if (state.smtp) {
+    await stopChild(state.smtp.process);
+    fs.rmSync(state.smtp.folder, { recursive: true, force: true });
+  }
   await dropDatabase(state.dbName);
 }

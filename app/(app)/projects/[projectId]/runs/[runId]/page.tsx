@@ -4,9 +4,12 @@ import { notFound } from "next/navigation";
 import { requirePageUser } from "@/lib/auth/session";
 import { findProjectAccess } from "@/lib/projects/access";
 import { can } from "@/lib/permissions";
+import { loadReviewState } from "@/lib/review/review-state";
 import { fetchRun } from "@/db/queries/runs";
 import { PageTitle } from "@/components/ui/page-title";
-import { RunView } from "@/components/run-view/run-view";
+import { ReviewWorkspace } from "@/components/review/review-workspace";
+import { RevisionChain } from "@/components/review/revision-chain";
+import { AuditTrail } from "@/components/review/audit-trail";
 
 export const metadata: Metadata = { title: "Run" };
 
@@ -17,10 +20,15 @@ export default async function RunPage({ params }: { params: Promise<{ projectId:
   if (!access) notFound();
   const run = await fetchRun(access.project.id, Number(p.runId));
   if (!run) notFound();
+  const review = await loadReviewState(run, { userId: user.id, role: access.role });
   return (
     <>
       <PageTitle title={run.title} kicker={<><Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link> / <Link href={`/projects/${access.project.id}/runs`} className="hover:text-ink">Runs</Link></>} />
-      <RunView run={run} canRevise={can(access.role, "run.create")} />
+      <div className="space-y-4">
+        <ReviewWorkspace run={run} review={review} mode="run" canRevise={can(access.role, "run.create")} />
+        <RevisionChain projectId={run.projectId} chain={review.chain} currentId={run.id} />
+        <AuditTrail events={review.events} />
+      </div>
     </>
   );
 }

@@ -1,0 +1,39 @@
+/**
+ * The review life of a run. A run is saved as a draft; its author submits it; a reviewer who is
+ * not its author approves it (signed off) or returns it with a note. A returned run stays as it
+ * was, as history: the author revises it as a new run (linked by revises_run_id) and submits that.
+ */
+export const RUN_STATUSES = ["draft", "submitted", "returned", "approved"] as const;
+export type RunStatus = (typeof RUN_STATUSES)[number];
+
+export const TRANSITION_ACTIONS = ["submit", "approve", "return"] as const;
+export type TransitionAction = (typeof TRANSITION_ACTIONS)[number];
+
+export interface Transition {
+  from: RunStatus;
+  to: RunStatus;
+}
+
+export const TRANSITIONS: Record<TransitionAction, Transition> = {
+  submit: { from: "draft", to: "submitted" },
+  approve: { from: "submitted", to: "approved" },
+  return: { from: "submitted", to: "returned" },
+};
+
+/** Words for a status in sentences, mail and the report (the badge has its own short labels). */
+export const STATUS_WORDS: Record<RunStatus, string> = {
+  draft: "draft",
+  submitted: "awaiting review",
+  returned: "returned with comments",
+  approved: "signed off",
+};
+
+export const ACTION_WORDS: Record<TransitionAction, string> = {
+  submit: "Submit for review",
+  approve: "Sign off",
+  return: "Return with comments",
+};
+
+export function isRunStatus(value: string): value is RunStatus {
+  return (RUN_STATUSES as readonly string[]).includes(value);
+}
