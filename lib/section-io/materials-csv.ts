@@ -54,7 +54,8 @@ export function parseMaterialsCsv(text: string): CsvParseResult<MaterialsCsvValu
     const material = buildMaterial(id, model, numbers);
     checkBounds(r, material, warnings);
     value.materials.push(material);
-    if (r.text("name") !== "") value.names[id] = r.text("name");
+    // defineProperty, not assignment: an id such as "__proto__" must stay an ordinary key.
+    if (r.text("name") !== "") Object.defineProperty(value.names, id, { value: r.text("name"), enumerable: true, writable: true, configurable: true });
   }
   return finish(value, table.rows, problems, warnings);
 }

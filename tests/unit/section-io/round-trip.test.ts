@@ -71,3 +71,8 @@ describe("section CSV round trips (fast-check)", () => {
     );
   });
 });
+
+test("parseMaterialsCsv keeps the name of a material whose id is __proto__ (found by fast-check)", () => {
+  const r = parseMaterialsCsv("id,name,model,gamma,gammaSat,c,phi,su,suGradient,suDatum\n__proto__,Odd id,mohr-coulomb,19,,5,30,,,\n");
+  expect(r.ok && Object.getOwnPropertyDescriptor(r.value.names, "__proto__")?.value).toBe("Odd id");
+});
