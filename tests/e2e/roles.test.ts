@@ -52,6 +52,7 @@ describe("signing in as each role", () => {
     await page.getByRole("link", { name: "Projects" }).click();
     await page.getByRole("link", { name: "Lower Wendle Reservoir embankment" }).click();
     await page.getByRole("link", { name: "Members" }).click();
+    await page.waitForURL(/\/members$/);
     await page.getByLabel("Person").selectOption({ label: "Demo Second Engineer (engineer2@scarpline.test)" });
     await page.getByLabel("Role in this project").selectOption("engineer");
     await page.getByRole("button", { name: "Save member" }).click();
