@@ -1,5 +1,6 @@
 "use client";
 
+import { downloadText } from "@/lib/client/download";
 import { useMemo, useState } from "react";
 import type { SliceRow } from "@/lib/stability";
 import { Caution } from "@/components/ui/caution";
@@ -21,17 +22,8 @@ export interface SliceTableProps {
 /** Bishop's mα below this is flagged in the table (after Whitman & Bailey 1967, as the engine does). */
 const LOW_M_ALPHA = 0.2;
 
-/** Saves text as a file through a temporary link; a byte-order mark lets spreadsheets read UTF-8. */
-function download(text: string, name: string) {
-  const url = URL.createObjectURL(new Blob(["\uFEFF", text], { type: "text/csv;charset=utf-8" }));
-  const a = document.createElement("a");
-  a.href = url;
-  a.download = name;
-  document.body.appendChild(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 0);
-}
+/** A byte-order mark lets spreadsheets read the CSV as UTF-8 (φ, α, γ in the headers). */
+const download = (text: string, name: string) => downloadText(name, "\uFEFF" + text, "text/csv");
 
 /** The slices of a critical circle: sortable by any column, with units, and downloadable as CSV. */
 export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
