@@ -9,6 +9,7 @@ import { fetchLabTestSetsOfMaterial } from "@/db/queries/lab-tests";
 import { PageTitle } from "@/components/ui/page-title";
 import { Caution } from "@/components/ui/caution";
 import { MaterialWorkbench } from "@/components/materials/material-workbench";
+import { DocumentsPanel } from "@/components/documents/documents-panel";
 
 export const metadata: Metadata = { title: "Material" };
 
@@ -37,6 +38,10 @@ export default async function MaterialPage({ params }: { params: Promise<{ proje
       </PageTitle>
       <div className="mb-6"><Caution compact /></div>
       <MaterialWorkbench projectId={access.project.id} canEdit={can(access.role, "material.edit")} initial={{ material, labTests }} />
+      <section className="mt-8" aria-labelledby="material-documents">
+        <h2 id="material-documents" className="mb-2 text-lg font-semibold">Lab sheets and other sources</h2>
+        <DocumentsPanel projectId={access.project.id} materialId={material.id} canUpload={can(access.role, "document.upload")} currentUserId={user.id} isAdmin={user.role === "admin"} />
+      </section>
     </>
   );
 }

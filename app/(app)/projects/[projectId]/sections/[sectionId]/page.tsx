@@ -8,6 +8,7 @@ import { fetchSection, fetchSectionVersion } from "@/db/queries/sections";
 import { materialPalette } from "@/lib/sections/material-palette";
 import { PageTitle } from "@/components/ui/page-title";
 import { SectionWorkspace } from "@/components/section-workspace/section-workspace";
+import { DocumentsPanel } from "@/components/documents/documents-panel";
 import type { SectionDocument } from "@/lib/stability";
 
 export const metadata: Metadata = { title: "Section" };
@@ -36,6 +37,10 @@ export default async function SectionPage({ params }: { params: Promise<{ projec
         materials={materialPalette(doc.materials)}
         canEdit={can(access.role, "section.edit")}
       />
+      <section className="mt-8" aria-labelledby="section-documents">
+        <h2 id="section-documents" className="mb-2 text-lg font-semibold">Survey files, drawings and photographs</h2>
+        <DocumentsPanel projectId={access.project.id} sectionId={section.id} canUpload={can(access.role, "document.upload")} currentUserId={user.id} isAdmin={user.role === "admin"} />
+      </section>
     </>
   );
 }
