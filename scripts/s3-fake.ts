@@ -15,6 +15,7 @@
  */
 import fs from "node:fs";
 import path from "node:path";
+import { DATA_ROOT, HOST, livePid, portAnswers, readPort, serviceLog } from "./lib/loopback-service";
 import { createRequire } from "node:module";
 
 // s3rver ships no type declarations; this is the part of its API used here.
@@ -32,9 +33,7 @@ interface S3rverInstance {
 }
 type S3rverConstructor = new (options: S3rverOptions) => S3rverInstance;
 
-const ROOT = path.resolve(__dirname, "..");
-const DATA_ROOT = process.env.SCARPLINE_DATA_DIR ?? path.join(ROOT, ".data");
-const HOST = "127.0.0.1";
+const log = serviceLog("s3-fake");
 const BUCKET_NAME = /^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/;
 
 interface FakeSettings {
@@ -45,8 +44,7 @@ interface FakeSettings {
 }
 
 function readSettings(env: NodeJS.ProcessEnv = process.env): FakeSettings {
-  const port = Number(env.S3_PORT ?? 4569);
-  if (!Number.isInteger(port) || port <= 0 || port > 65535) throw new Error(`S3_PORT must be a port number, got '${env.S3_PORT}'`);
+  const port = readPort(env, "S3_PORT", 4569);
   const bucket = env.S3_BUCKET ?? "scarpline-documents";
   if (!BUCKET_NAME.test(bucket)) throw new Error(`S3_BUCKET must be a valid bucket name (3–63 lower-case letters, digits, '.' or '-'), got '${bucket}'`);
   return {
@@ -55,37 +53,6 @@ function readSettings(env: NodeJS.ProcessEnv = process.env): FakeSettings {
     directory: path.resolve(env.S3_DATA_DIR ?? path.join(DATA_ROOT, "s3")),
     pidFile: path.resolve(env.S3_PID_FILE ?? path.join(DATA_ROOT, "s3-fake.pid")),
   };
-}
-
-function log(message: string): void {
-  console.error(`[s3-fake] ${message}`);
-}
-
-/** The pid recorded in the pid file when that process is still alive, else null. */
-function livePid(pidFile: string): number | null {
-  let pid: number;
-  try {
-    pid = Number(fs.readFileSync(pidFile, "utf8").trim());
-  } catch {
-    return null;
-  }
-  if (!Number.isInteger(pid) || pid <= 0) return null;
-  try {
-    process.kill(pid, 0);
-    return pid;
-  } catch {
-    return null;
-  }
-}
-
-/** Whether anything answers HTTP on the port (an S3 server answers even unsigned requests, with an error). */
-async function portAnswers(port: number): Promise<boolean> {
-  try {
-    await fetch(`http://${HOST}:${port}/`, { signal: AbortSignal.timeout(2000) });
-    return true;
-  } catch {
-    return false;
-  }
 }
 
 async function main(): Promise<void> {

@@ -15,16 +15,14 @@
  * reported, not waited on. Prints `smtp-fake ready ...` on stdout once it listens.
  */
 import fs from "node:fs";
-import net from "node:net";
 import path from "node:path";
+import { DATA_ROOT, HOST, ROOT, livePid, portAnswers, readPort, serviceLog } from "./lib/loopback-service";
 import { randomBytes } from "node:crypto";
 import { SMTPServer, type SMTPServerAddress } from "smtp-server";
 import { simpleParser, type AddressObject } from "mailparser";
 import { CAUGHT_MAIL_SUFFIX, type CaughtMail } from "../lib/mail/caught-mail";
 
-const ROOT = path.resolve(__dirname, "..");
-const DATA_ROOT = process.env.SCARPLINE_DATA_DIR ?? path.join(ROOT, ".data");
-const HOST = "127.0.0.1";
+const log = serviceLog("smtp-fake");
 /** Larger messages are refused; notices are a few kilobytes. */
 const MAX_MESSAGE_BYTES = 5 * 1024 * 1024;
 
@@ -35,43 +33,12 @@ interface FakeSettings {
 }
 
 function readSettings(env: NodeJS.ProcessEnv = process.env): FakeSettings {
-  const port = Number(env.SMTP_PORT ?? 2525);
-  if (!Number.isInteger(port) || port <= 0 || port > 65535) throw new Error(`SMTP_PORT must be a port number, got '${env.SMTP_PORT}'`);
+  const port = readPort(env, "SMTP_PORT", 2525);
   return {
     port,
     folder: path.resolve(ROOT, env.SMTP_MAIL_DIR ?? path.join(DATA_ROOT, "mail")),
     pidFile: path.resolve(env.SMTP_PID_FILE ?? path.join(DATA_ROOT, "smtp-fake.pid")),
   };
-}
-
-function log(message: string): void {
-  console.error(`[smtp-fake] ${message}`);
-}
-
-function livePid(pidFile: string): number | null {
-  let pid: number;
-  try {
-    pid = Number(fs.readFileSync(pidFile, "utf8").trim());
-  } catch {
-    return null;
-  }
-  if (!Number.isInteger(pid) || pid <= 0) return null;
-  try {
-    process.kill(pid, 0);
-    return pid;
-  } catch {
-    return null;
-  }
-}
-
-/** Whether something accepts connections on the port. */
-function portAnswers(port: number): Promise<boolean> {
-  return new Promise((resolve) => {
-    const socket = net.connect({ host: HOST, port, timeout: 2000 });
-    socket.once("connect", () => { socket.destroy(); resolve(true); });
-    socket.once("error", () => resolve(false));
-    socket.once("timeout", () => { socket.destroy(); resolve(false); });
-  });
 }
 
 const addresses = (a: AddressObject | AddressObject[] | undefined): string[] =>
