@@ -19,8 +19,15 @@ describe("materials from lab results", () => {
     await keepScreenshotOnFailure(page, "materials-shear-box", async () => {
       await signInAs(page, "engineer@scarpline.test");
       await page.getByRole("link", { name: "Lower Wendle Reservoir embankment" }).click();
+      await page.waitForURL(/\/projects\/\d+$/);
+      // A material of the test's own: the demo library is read by other tests and must stay as seeded.
+      const { origin, pathname: projectPath } = new URL(page.url());
+      const created = await page.request.post(`${origin}/api${projectPath}/materials`, {
+        data: { key: "borrow-b-clay", name: "Borrow area B clay", parameters: { model: "mohr-coulomb", gamma: 19, gammaSat: 20, c: 5, phi: 25 } },
+      });
+      expect(created.status()).toBe(201);
       await page.getByRole("link", { name: "Materials" }).click();
-      await page.getByRole("link", { name: /Compacted clay fill/ }).first().click();
+      await page.getByRole("link", { name: /Borrow area B clay/ }).first().click();
       await page.getByTestId("lab-entry").waitFor();
       const setsBefore = await page.getByTestId("lab-set").count();
 
