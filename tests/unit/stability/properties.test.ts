@@ -170,9 +170,10 @@ describe("robustness", () => {
       }),
       { numRuns: 60 },
     );
-    // The generator must mostly produce valid sections with valid circles, or the test proves little.
-    expect(searched).toBeGreaterThan(50);
-    expect(validCircles).toBeGreaterThan(1000);
+    // The generator must mostly produce valid sections with valid circles, or the test proves little;
+    // the bounds leave room for an unlucky draw so the check does not flicker.
+    expect(searched).toBeGreaterThan(30);
+    expect(validCircles).toBeGreaterThan(500);
   });
 
   test("arbitrary JSON never makes validation throw", () => {
