@@ -2,25 +2,20 @@
 # Stops what npm start left running: the app server, the S3 and SMTP fakes and the project's MariaDB.
 set -euo pipefail
 . "$(dirname "$0")/lib/common.sh"
-if [ -f "$DATA_ROOT/app.pid" ]; then
-  pid="$(cat "$DATA_ROOT/app.pid")"
-  if kill -0 "$pid" 2>/dev/null; then kill "$pid" && log "app server stopped"; fi
-  rm -f "$DATA_ROOT/app.pid"
-fi
-if [ -f "$DATA_ROOT/s3-fake.pid" ]; then
-  pid="$(cat "$DATA_ROOT/s3-fake.pid")"
+
+# stop_pid FILE LABEL: ends the process a pid file names, waiting a moment for it to go.
+stop_pid() {
+  local file="$1" label="$2"
+  [ -f "$file" ] || return 0
+  local pid; pid="$(cat "$file")"
   if kill -0 "$pid" 2>/dev/null; then
     kill "$pid" && for _ in $(seq 1 20); do kill -0 "$pid" 2>/dev/null || break; sleep 0.25; done
-    log "S3 fake stopped"
+    log "$label stopped"
   fi
-  rm -f "$DATA_ROOT/s3-fake.pid"
-fi
-if [ -f "$DATA_ROOT/smtp-fake.pid" ]; then
-  pid="$(cat "$DATA_ROOT/smtp-fake.pid")"
-  if kill -0 "$pid" 2>/dev/null; then
-    kill "$pid" && for _ in $(seq 1 20); do kill -0 "$pid" 2>/dev/null || break; sleep 0.25; done
-    log "SMTP fake stopped"
-  fi
-  rm -f "$DATA_ROOT/smtp-fake.pid"
-fi
+  rm -f "$file"
+}
+
+stop_pid "$DATA_ROOT/app.pid" "app server"
+stop_pid "$DATA_ROOT/s3-fake.pid" "S3 fake"
+stop_pid "$DATA_ROOT/smtp-fake.pid" "SMTP fake"
 bash "$(dirname "$0")/db-stop.sh"

@@ -110,18 +110,27 @@ async function startFakeS3(): Promise<FakeS3> {
   const folder = fs.mkdtempSync(path.join(os.tmpdir(), "scarpline-s3-"));
   const port = await freePort();
   const bucket = `scarpline-test-${process.pid}-${randomBytes(3).toString("hex")}`;
-  // node --import tsx keeps the fake in one process, so killing it leaves nothing behind.
-  const child = spawn(process.execPath, ["--import", "tsx", "scripts/s3-fake.ts"], {
-    cwd: ROOT,
-    env: { ...process.env, S3_PORT: String(port), S3_BUCKET: bucket, S3_DATA_DIR: path.join(folder, "data"), S3_PID_FILE: path.join(folder, "s3-fake.pid") },
-    stdio: ["ignore", "pipe", "pipe"],
+  const child = await startFake("scripts/s3-fake.ts", "s3-fake ready", {
+    S3_PORT: String(port),
+    S3_BUCKET: bucket,
+    S3_DATA_DIR: path.join(folder, "data"),
+    S3_PID_FILE: path.join(folder, "s3-fake.pid"),
   });
   const fake: FakeS3 = { endpoint: `http://127.0.0.1:${port}`, bucket, folder, process: child };
+  return fake;
+}
+
+/**
+ * Starts one of the project's loopback stand-ins and resolves once it prints its ready line.
+ * node --import tsx keeps the fake in one process, so killing it leaves nothing behind.
+ */
+async function startFake(script: string, readyText: string, env: Record<string, string>): Promise<ChildProcess> {
+  const child = spawn(process.execPath, ["--import", "tsx", script], { cwd: ROOT, env: { ...process.env, ...env }, stdio: ["ignore", "pipe", "pipe"] });
   // Should the run die before releaseStack, the fake must not outlive it.
   process.once("exit", () => child.kill("SIGKILL"));
   let output = "";
   await new Promise<void>((resolve, reject) => {
-    const timer = setTimeout(() => fail(new Error(`the S3 fake did not start within 20 s:\n${output}`)), 20_000);
+    const timer = setTimeout(() => fail(new Error(`${script} did not start within 20 s:\n${output}`)), 20_000);
     const fail = (err: Error) => {
       clearTimeout(timer);
       child.kill("SIGKILL");
@@ -130,14 +139,14 @@ async function startFakeS3(): Promise<FakeS3> {
     child.stderr?.on("data", (d) => (output += d));
     child.stdout?.on("data", (d) => {
       output += d;
-      if (output.includes("s3-fake ready")) {
+      if (output.includes(readyText)) {
         clearTimeout(timer);
         resolve();
       }
     });
-    child.once("exit", (code) => fail(new Error(`the S3 fake exited early (code ${code}):\n${output}`)));
+    child.once("exit", (code) => fail(new Error(`${script} exited early (code ${code}):\n${output}`)));
   });
-  return fake;
+  return child;
 }
 
 interface FakeSmtp {
@@ -153,29 +162,10 @@ async function startFakeSmtp(): Promise<FakeSmtp> {
   const folder = fs.mkdtempSync(path.join(os.tmpdir(), "scarpline-smtp-"));
   const port = await freePort();
   const mailDir = path.join(folder, "mail");
-  const child = spawn(process.execPath, ["--import", "tsx", "scripts/smtp-fake.ts"], {
-    cwd: ROOT,
-    env: { ...process.env, SMTP_PORT: String(port), SMTP_MAIL_DIR: mailDir, SMTP_PID_FILE: path.join(folder, "smtp-fake.pid") },
-    stdio: ["ignore", "pipe", "pipe"],
-  });
-  process.once("exit", () => child.kill("SIGKILL"));
-  let output = "";
-  await new Promise<void>((resolve, reject) => {
-    const timer = setTimeout(() => fail(new Error(`the SMTP fake did not start within 20 s:\n${output}`)), 20_000);
-    const fail = (err: Error) => {
-      clearTimeout(timer);
-      child.kill("SIGKILL");
-      reject(err);
-    };
-    child.stderr?.on("data", (d) => (output += d));
-    child.stdout?.on("data", (d) => {
-      output += d;
-      if (output.includes("smtp-fake ready")) {
-        clearTimeout(timer);
-        resolve();
-      }
-    });
-    child.once("exit", (code) => fail(new Error(`the SMTP fake exited early (code ${code}):\n${output}`)));
+  const child = await startFake("scripts/smtp-fake.ts", "smtp-fake ready", {
+    SMTP_PORT: String(port),
+    SMTP_MAIL_DIR: mailDir,
+    SMTP_PID_FILE: path.join(folder, "smtp-fake.pid"),
   });
   return { port, mailDir, folder, process: child };
 }
