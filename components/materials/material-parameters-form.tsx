@@ -2,9 +2,9 @@
 
 import { useState } from "react";
 import type { LibraryMaterial } from "@/db/queries/materials";
-import { formValuesFrom, parametersFromForm, type ParameterFormValues } from "@/lib/materials/parameter-form";
-import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
+import { formValuesFrom, type ParameterFormValues } from "@/lib/materials/parameter-form";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
+import { useMaterialSave } from "./use-material-save";
 import { ParameterFields } from "./parameter-fields";
 
 export interface MaterialParametersFormProps {
@@ -23,36 +23,18 @@ export function MaterialParametersForm({ projectId, material, canEdit, onSaved }
   const [notes, setNotes] = useState(material.notes);
   const [color, setColor] = useState(material.color);
   const [values, setValues] = useState<ParameterFormValues>(() => formValuesFrom(material.parameters));
-  const [fields, setFields] = useState<Record<string, string[]>>({});
-  const [banner, setBanner] = useState<{ kind: "error" | "ok"; text: string } | null>(null);
-  const [busy, setBusy] = useState(false);
+  const { fields, banner, busy, save } = useMaterialSave();
 
-  async function submit(event: React.FormEvent<HTMLFormElement>) {
+  function submit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
-    setBanner(null);
-    const parsed = parametersFromForm(values);
-    if (!parsed.ok) {
-      setFields(parsed.fields);
-      return;
-    }
-    setFields({});
-    setBusy(true);
-    try {
-      const result = await fetchJson<{ material: LibraryMaterial; warnings: { message: string }[] }>(`/api/projects/${projectId}/materials/${material.id}`, {
-        method: "PUT",
-        json: { name, notes, color, parameters: parsed.parameters },
-      });
-      onSaved(result.material);
-      const notesText = result.warnings.map((w) => w.message).join(" ");
-      setBanner({ kind: "ok", text: `Saved.${notesText ? ` Note: ${notesText}` : ""}` });
-    } catch (err) {
-      if (err instanceof ApiClientError) {
-        setFields(err.fields);
-        setBanner({ kind: "error", text: err.message });
-      } else setBanner({ kind: "error", text: "Could not reach the server." });
-    } finally {
-      setBusy(false);
-    }
+    void save(
+      values,
+      (parameters) => ({ url: `/api/projects/${projectId}/materials/${material.id}`, method: "PUT", json: { name, notes, color, parameters } }),
+      (saved) => {
+        onSaved(saved);
+        return "Saved.";
+      },
+    );
   }
 
   return (

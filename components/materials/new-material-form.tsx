@@ -2,10 +2,10 @@
 
 import { useState } from "react";
 import type { LibraryMaterial } from "@/db/queries/materials";
-import { EMPTY_PARAMETER_FORM, parametersFromForm, type ParameterFormValues } from "@/lib/materials/parameter-form";
+import { EMPTY_PARAMETER_FORM, type ParameterFormValues } from "@/lib/materials/parameter-form";
 import { MATERIAL_KEY_HINT, suggestMaterialKey } from "@/lib/materials/keys";
-import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
+import { useMaterialSave } from "./use-material-save";
 import { ParameterFields } from "./parameter-fields";
 
 export interface NewMaterialFormProps {
@@ -19,40 +19,22 @@ export function NewMaterialForm({ projectId, onCreated }: NewMaterialFormProps) 
   const [key, setKey] = useState("");
   const [keyTouched, setKeyTouched] = useState(false);
   const [values, setValues] = useState<ParameterFormValues>(EMPTY_PARAMETER_FORM);
-  const [fields, setFields] = useState<Record<string, string[]>>({});
-  const [banner, setBanner] = useState<{ kind: "error" | "ok"; text: string } | null>(null);
-  const [busy, setBusy] = useState(false);
+  const { fields, banner, busy, save } = useMaterialSave();
 
-  async function submit(event: React.FormEvent<HTMLFormElement>) {
+  function submit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
-    setBanner(null);
-    const parsed = parametersFromForm(values);
-    if (!parsed.ok) {
-      setFields(parsed.fields);
-      return;
-    }
-    setFields({});
-    setBusy(true);
-    try {
-      const result = await fetchJson<{ material: LibraryMaterial; warnings: { message: string }[] }>(`/api/projects/${projectId}/materials`, {
-        method: "POST",
-        json: { key, name, parameters: parsed.parameters },
-      });
-      onCreated(result.material);
-      const notes = result.warnings.map((w) => w.message).join(" ");
-      setBanner({ kind: "ok", text: `Added '${result.material.key}'.${notes ? ` Note: ${notes}` : ""}` });
-      setName("");
-      setKey("");
-      setKeyTouched(false);
-      setValues(EMPTY_PARAMETER_FORM);
-    } catch (err) {
-      if (err instanceof ApiClientError) {
-        setFields(err.fields);
-        setBanner({ kind: "error", text: err.message });
-      } else setBanner({ kind: "error", text: "Could not reach the server." });
-    } finally {
-      setBusy(false);
-    }
+    void save(
+      values,
+      (parameters) => ({ url: `/api/projects/${projectId}/materials`, method: "POST", json: { key, name, parameters } }),
+      (created) => {
+        onCreated(created);
+        setName("");
+        setKey("");
+        setKeyTouched(false);
+        setValues(EMPTY_PARAMETER_FORM);
+        return `Added '${created.key}'.`;
+      },
+    );
   }
 
   return (
