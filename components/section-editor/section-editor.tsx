@@ -63,7 +63,8 @@ export function SectionEditor({ document, onChange, materials, issues = [], read
     setToolState(t);
     setMessage(null);
   };
-  const actions = createEditorActions({
+  // What the actions and the pointer both need to read and change the drawing.
+  const editing = {
     doc,
     readOnly,
     selection,
@@ -75,17 +76,15 @@ export function SectionEditor({ document, onChange, materials, issues = [], read
     commit: history.commit,
     say: setMessage,
     showPoint: view.showPoint,
-  });
-  const undo = () => {
+  };
+  const actions = createEditorActions(editing);
+  const historyStep = (go: () => void) => () => {
     setDraft(null);
     setMessage(null);
-    if (!readOnly) history.undo();
+    if (!readOnly) go();
   };
-  const redo = () => {
-    setDraft(null);
-    setMessage(null);
-    if (!readOnly) history.redo();
-  };
+  const undo = historyStep(history.undo);
+  const redo = historyStep(history.redo);
   const keys = useEditorKeys({
     actions,
     draft,
@@ -101,17 +100,7 @@ export function SectionEditor({ document, onChange, materials, issues = [], read
     readOnly,
   });
   const pointer = useCanvasPointer({
-    doc,
-    readOnly,
-    selection,
-    setSelection,
-    draft,
-    setDraft,
-    newRegionMaterial,
-    gridStep,
-    commit: history.commit,
-    say: setMessage,
-    showPoint: view.showPoint,
+    ...editing,
     view: view.view,
     tool,
     actions,
