@@ -13,7 +13,12 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias },
-        test: { name: "unit", include: ["tests/unit/**/*.test.ts", "tests/unit/**/*.test.tsx"], environment: "node", setupFiles: ["tests/support/fast-check-setup.ts"] },
+        test: {
+          name: "unit",
+          include: ["tests/unit/**/*.test.ts", "tests/unit/**/*.test.tsx"],
+          environment: "node",
+          setupFiles: ["tests/support/fast-check-setup.ts"],
+        },
       },
       {
         resolve: { alias },

@@ -8,7 +8,10 @@ const envSchema = z.object({
   DATABASE_PORT: z.coerce.number().int().positive().default(3307),
   DATABASE_USER: z.string().default("scarpline"),
   DATABASE_PASSWORD: z.string().default("scarpline-dev"),
-  DATABASE_NAME: z.string().regex(/^scarpline[A-Za-z0-9_]*$/, "must start with 'scarpline'").default("scarpline"),
+  DATABASE_NAME: z
+    .string()
+    .regex(/^scarpline[A-Za-z0-9_]*$/, "must start with 'scarpline'")
+    .default("scarpline"),
   APP_URL: z.string().url().default("http://127.0.0.1:3000"),
   // Outgoing mail. The defaults reach the local fake that scripts/services-start.sh starts.
   SMTP_HOST: z.string().min(1).default("127.0.0.1"),

@@ -36,13 +36,22 @@ function parseArgs(argv: string[]): { file: string; circle?: { xc: number; yc: n
       const spec = argv[++i];
       const nums = (spec ?? "").split(",").map((s) => Number(s.trim()));
       if (nums.length !== 3 || !nums.every(Number.isFinite)) {
-        fail(2, [{ code: "bad-argument", path: "--circle", message: `--circle needs three numbers xc,yc,r in metres (got "${spec ?? ""}"). ${USAGE}` }]);
+        fail(2, [
+          {
+            code: "bad-argument",
+            path: "--circle",
+            message: `--circle needs three numbers xc,yc,r in metres (got "${spec ?? ""}"). ${USAGE}`,
+          },
+        ]);
       }
       circle = { xc: nums[0], yc: nums[1], r: nums[2] };
     } else if (a === "--map") map = true;
     else if (a.startsWith("--")) fail(2, [{ code: "bad-argument", path: a, message: `Unknown option ${a}. ${USAGE}` }]);
     else if (file === undefined) file = a;
-    else fail(2, [{ code: "bad-argument", path: a, message: `Only one input file is read (got "${file}" and "${a}"). ${USAGE}` }]);
+    else
+      fail(2, [
+        { code: "bad-argument", path: a, message: `Only one input file is read (got "${file}" and "${a}"). ${USAGE}` },
+      ]);
   }
   if (file === undefined) fail(2, [{ code: "bad-argument", path: "", message: `No input given. ${USAGE}` }]);
   return { file, circle, map };
@@ -53,7 +62,13 @@ function readInput(file: string): unknown {
   try {
     text = readFileSync(file === "-" ? 0 : file, "utf8");
   } catch (e) {
-    fail(2, [{ code: "unreadable-input", path: "", message: `Cannot read ${file === "-" ? "standard input" : file}: ${(e as Error).message}` }]);
+    fail(2, [
+      {
+        code: "unreadable-input",
+        path: "",
+        message: `Cannot read ${file === "-" ? "standard input" : file}: ${(e as Error).message}`,
+      },
+    ]);
   }
   try {
     return JSON.parse(text);

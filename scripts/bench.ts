@@ -45,13 +45,15 @@ let tried = 0;
 let valid = 0;
 let fs = "";
 for (let i = 0; i < 7; i++) {
-  runs.push(timed(() => {
-    const r = runGridSearch(doc);
-    if (!r.ok) throw new Error("benchmark section is invalid");
-    tried = r.circles.tried;
-    valid = r.circles.valid;
-    fs = `Bishop ${r.results.bishop?.fs.toFixed(4)}, ordinary ${r.results.fellenius?.fs.toFixed(4)}`;
-  }));
+  runs.push(
+    timed(() => {
+      const r = runGridSearch(doc);
+      if (!r.ok) throw new Error("benchmark section is invalid");
+      tried = r.circles.tried;
+      valid = r.circles.valid;
+      fs = `Bishop ${r.results.bishop?.fs.toFixed(4)}, ordinary ${r.results.fellenius?.fs.toFixed(4)}`;
+    }),
+  );
 }
 const wallSearch = median(runs.map((r) => r.wall));
 const cpuSearch = median(runs.map((r) => r.cpu));
@@ -65,19 +67,21 @@ const loopCpu: number[] = [];
 let loopCount = 0;
 for (let rep = 0; rep < 5; rep++) {
   loopCount = 0;
-  loopCpu.push(timed(() => {
-    for (let iy = 0; iy < g.ny; iy++) {
-      const yc = g.y1 + ((g.y2 - g.y1) * iy) / (g.ny - 1);
-      for (let ix = 0; ix < g.nx; ix++) {
-        const xc = g.x1 + ((g.x2 - g.x1) * ix) / (g.nx - 1);
-        for (let k = 0; k < rr.n; k++) {
-          const yt = rr.tangentY1 + ((rr.tangentY2 - rr.tangentY1) * k) / (rr.n - 1);
-          evaluateCircle(P, S, xc, yc, yc - yt, true);
-          loopCount++;
+  loopCpu.push(
+    timed(() => {
+      for (let iy = 0; iy < g.ny; iy++) {
+        const yc = g.y1 + ((g.y2 - g.y1) * iy) / (g.ny - 1);
+        for (let ix = 0; ix < g.nx; ix++) {
+          const xc = g.x1 + ((g.x2 - g.x1) * ix) / (g.nx - 1);
+          for (let k = 0; k < rr.n; k++) {
+            const yt = rr.tangentY1 + ((rr.tangentY2 - rr.tangentY1) * k) / (rr.n - 1);
+            evaluateCircle(P, S, xc, yc, yc - yt, true);
+            loopCount++;
+          }
         }
       }
-    }
-  }).cpu);
+    }).cpu,
+  );
 }
 const loopRate = loopCount / median(loopCpu);
 const searchRate = tried / cpuSearch;
@@ -86,8 +90,12 @@ const load = os.loadavg()[0];
 console.log("Section: three-material embankment (shell, clay core, foundation) with a phreatic line and ponded pool");
 console.log(`Methods: Bishop's simplified + ordinary (classical), ${v.section.analysis!.slices} slices, one thread`);
 console.log(`Circles: ${tried} tried (${g.nx} × ${g.ny} centres × ${rr.n} radii), ${valid} valid; ${fs}`);
-console.log(`Search of ${tried} circles (median of 7): ${cpuSearch.toFixed(3)} s of CPU, ${wallSearch.toFixed(3)} s wall clock  (target < 0.5 s)`);
-console.log(`Machine load average (1 min): ${load.toFixed(2)} on ${os.cpus().length} cores; wall clock includes waiting for a core`);
+console.log(
+  `Search of ${tried} circles (median of 7): ${cpuSearch.toFixed(3)} s of CPU, ${wallSearch.toFixed(3)} s wall clock  (target < 0.5 s)`,
+);
+console.log(
+  `Machine load average (1 min): ${load.toFixed(2)} on ${os.cpus().length} cores; wall clock includes waiting for a core`,
+);
 console.log(`Circle loop alone: ${Math.round(loopRate)} circles per CPU second`);
 console.log(`Whole search: ${Math.round(searchRate)} circles per second per core  (target ≥ 100000)`);
 console.log(`circles_per_second=${Math.round(searchRate)}`);

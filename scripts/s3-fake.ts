@@ -46,7 +46,10 @@ interface FakeSettings {
 function readSettings(env: NodeJS.ProcessEnv = process.env): FakeSettings {
   const port = readPort(env, "S3_PORT", 4569);
   const bucket = env.S3_BUCKET ?? "scarpline-documents";
-  if (!BUCKET_NAME.test(bucket)) throw new Error(`S3_BUCKET must be a valid bucket name (3–63 lower-case letters, digits, '.' or '-'), got '${bucket}'`);
+  if (!BUCKET_NAME.test(bucket))
+    throw new Error(
+      `S3_BUCKET must be a valid bucket name (3–63 lower-case letters, digits, '.' or '-'), got '${bucket}'`,
+    );
   return {
     port,
     bucket,
@@ -64,8 +67,12 @@ async function main(): Promise<void> {
     console.log(`s3-fake ready on http://${HOST}:${settings.port} bucket=${settings.bucket}`);
     return;
   }
-  if (answering) throw new Error(`port ${settings.port} on ${HOST} is held by another process; set S3_PORT to a free port`);
-  if (running) throw new Error(`process ${running} from ${settings.pidFile} is alive but does not answer on port ${settings.port}; stop it first`);
+  if (answering)
+    throw new Error(`port ${settings.port} on ${HOST} is held by another process; set S3_PORT to a free port`);
+  if (running)
+    throw new Error(
+      `process ${running} from ${settings.pidFile} is alive but does not answer on port ${settings.port}; stop it first`,
+    );
   fs.rmSync(settings.pidFile, { force: true });
 
   fs.mkdirSync(settings.directory, { recursive: true });

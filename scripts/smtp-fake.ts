@@ -42,7 +42,9 @@ function readSettings(env: NodeJS.ProcessEnv = process.env): FakeSettings {
 }
 
 const addresses = (a: AddressObject | AddressObject[] | undefined): string[] =>
-  (Array.isArray(a) ? a : a ? [a] : []).flatMap((o) => o.value.map((v) => (v.name ? `${v.name} <${v.address}>` : v.address ?? "")));
+  (Array.isArray(a) ? a : a ? [a] : []).flatMap((o) =>
+    o.value.map((v) => (v.name ? `${v.name} <${v.address}>` : (v.address ?? ""))),
+  );
 
 const envelopeAddress = (a: SMTPServerAddress | false) => (a ? a.address : "");
 
@@ -63,8 +65,12 @@ async function main(): Promise<void> {
     console.log(`smtp-fake ready on smtp://${HOST}:${settings.port} mail=${settings.folder}`);
     return;
   }
-  if (answering) throw new Error(`port ${settings.port} on ${HOST} is held by another process; set SMTP_PORT to a free port`);
-  if (running) throw new Error(`process ${running} from ${settings.pidFile} is alive but does not answer on port ${settings.port}; stop it first`);
+  if (answering)
+    throw new Error(`port ${settings.port} on ${HOST} is held by another process; set SMTP_PORT to a free port`);
+  if (running)
+    throw new Error(
+      `process ${running} from ${settings.pidFile} is alive but does not answer on port ${settings.port}; stop it first`,
+    );
   fs.rmSync(settings.pidFile, { force: true });
   fs.mkdirSync(settings.folder, { recursive: true });
   fs.mkdirSync(path.dirname(settings.pidFile), { recursive: true });
@@ -81,7 +87,10 @@ async function main(): Promise<void> {
           const mail: CaughtMail = {
             id: randomBytes(6).toString("hex"),
             receivedAt: new Date().toISOString(),
-            envelope: { from: envelopeAddress(session.envelope.mailFrom), to: session.envelope.rcptTo.map((r) => r.address) },
+            envelope: {
+              from: envelopeAddress(session.envelope.mailFrom),
+              to: session.envelope.rcptTo.map((r) => r.address),
+            },
             from: addresses(parsed.from).join(", "),
             to: addresses(parsed.to),
             subject: parsed.subject ?? "",

@@ -15,7 +15,10 @@ export function NotificationPrefs({ initial }: { initial: Record<NoticeKind, boo
     setPrefs({ ...prefs, [kind]: enabled });
     setBanner(null);
     try {
-      const body = await fetchJson<{ preferences: Record<NoticeKind, boolean> }>("/api/account/notifications", { method: "PUT", json: { preferences: [{ kind, enabled }] } });
+      const body = await fetchJson<{ preferences: Record<NoticeKind, boolean> }>("/api/account/notifications", {
+        method: "PUT",
+        json: { preferences: [{ kind, enabled }] },
+      });
       setPrefs(body.preferences);
       setBanner({ kind: "ok", text: "Notice settings saved." });
     } catch (err) {
@@ -26,12 +29,19 @@ export function NotificationPrefs({ initial }: { initial: Record<NoticeKind, boo
 
   return (
     <section className="panel space-y-3 p-4" aria-labelledby="notices-heading" data-testid="notification-prefs">
-      <h2 id="notices-heading" className="font-semibold">E-mail notices</h2>
+      <h2 id="notices-heading" className="font-semibold">
+        E-mail notices
+      </h2>
       <ul className="space-y-2 text-sm">
         {NOTICE_KINDS.map((kind) => (
           <li key={kind}>
             <label className="flex items-start gap-2">
-              <input type="checkbox" className="mt-0.5" checked={prefs[kind]} onChange={(e) => toggle(kind, e.target.checked)} />
+              <input
+                type="checkbox"
+                className="mt-0.5"
+                checked={prefs[kind]}
+                onChange={(e) => toggle(kind, e.target.checked)}
+              />
               <span>
                 {NOTICE_INFO[kind].label}
                 <span className="block text-xs text-ink-faint">{NOTICE_INFO[kind].audience}</span>

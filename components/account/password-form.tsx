@@ -21,12 +21,17 @@ export function PasswordForm() {
     setFields({});
     setBanner(null);
     try {
-      await fetchJson("/api/account/password", { method: "POST", json: Object.fromEntries(FIELDS.map(([k]) => [k, String(form.get(k) ?? "")])) });
+      await fetchJson("/api/account/password", {
+        method: "POST",
+        json: Object.fromEntries(FIELDS.map(([k]) => [k, String(form.get(k) ?? "")])),
+      });
       el.reset();
       setBanner({ kind: "ok", text: "Password changed." });
     } catch (err) {
-      if (err instanceof ApiClientError) { setFields(err.fields); setBanner({ kind: "error", text: err.message }); }
-      else setBanner({ kind: "error", text: "Could not reach the server." });
+      if (err instanceof ApiClientError) {
+        setFields(err.fields);
+        setBanner({ kind: "error", text: err.message });
+      } else setBanner({ kind: "error", text: "Could not reach the server." });
     }
   }
 
@@ -35,14 +40,18 @@ export function PasswordForm() {
       <h2 className="font-semibold">Change password</h2>
       {FIELDS.map(([name, label, auto]) => (
         <div key={name}>
-          <label className="label" htmlFor={name}>{label}</label>
+          <label className="label" htmlFor={name}>
+            {label}
+          </label>
           <input id={name} name={name} type="password" autoComplete={auto} className="field" />
           <FieldError messages={fields[name]} />
         </div>
       ))}
       <p className="text-xs text-ink-faint">At least 10 characters, with letters and a digit.</p>
       {banner ? <FormBanner kind={banner.kind}>{banner.text}</FormBanner> : null}
-      <button type="submit" className="btn-primary">Change password</button>
+      <button type="submit" className="btn-primary">
+        Change password
+      </button>
     </form>
   );
 }

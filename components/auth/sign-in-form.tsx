@@ -23,7 +23,9 @@ export function SignInForm() {
     });
     setBusy(false);
     if (!result || result.error) {
-      setError(result?.error && result.error !== "CredentialsSignin" ? result.error : "The e-mail or password is not right.");
+      setError(
+        result?.error && result.error !== "CredentialsSignin" ? result.error : "The e-mail or password is not right.",
+      );
       return;
     }
     const next = params.get("callbackUrl");
@@ -34,12 +36,23 @@ export function SignInForm() {
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
       <div>
-        <label htmlFor="email" className="label">E-mail</label>
+        <label htmlFor="email" className="label">
+          E-mail
+        </label>
         <input id="email" name="email" type="email" autoComplete="username" required className="field" />
       </div>
       <div>
-        <label htmlFor="password" className="label">Password</label>
-        <input id="password" name="password" type="password" autoComplete="current-password" required className="field" />
+        <label htmlFor="password" className="label">
+          Password
+        </label>
+        <input
+          id="password"
+          name="password"
+          type="password"
+          autoComplete="current-password"
+          required
+          className="field"
+        />
       </div>
       {error ? <FormBanner kind="error">{error}</FormBanner> : null}
       <button type="submit" className="btn-primary w-full" disabled={busy}>

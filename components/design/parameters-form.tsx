@@ -28,7 +28,9 @@ export function ParametersForm({ values, errors, library, onChange, disabled }: 
       <FieldGroup title="Berms">
         {(["upstream", "downstream"] as const).map((side) => (
           <div key={side} className="col-span-2 grid grid-cols-2 gap-3 md:col-span-3 md:grid-cols-3">
-            <div className="flex items-end pb-2"><CheckInput name={`${side}Berm.on`} label={`Berm on the ${side} face`} {...io} /></div>
+            <div className="flex items-end pb-2">
+              <CheckInput name={`${side}Berm.on`} label={`Berm on the ${side} face`} {...io} />
+            </div>
             {values[`${side}Berm.on`] === "on" ? (
               <>
                 <NumberInput name={`${side}Berm.elevation`} {...io} />
@@ -40,9 +42,24 @@ export function ParametersForm({ values, errors, library, onChange, disabled }: 
       </FieldGroup>
 
       <FieldGroup title="Fill">
-        <div className="col-span-2 flex flex-wrap gap-4 text-sm md:col-span-3" role="radiogroup" aria-label="Fill zoning">
-          <label className="inline-flex items-center gap-1.5"><input type="radio" name="zoning" checked={!zoned} onChange={() => onChange("zoning.kind", "homogeneous")} /> Homogeneous fill</label>
-          <label className="inline-flex items-center gap-1.5"><input type="radio" name="zoning" checked={zoned} onChange={() => onChange("zoning.kind", "zoned")} /> Core and shells</label>
+        <div
+          className="col-span-2 flex flex-wrap gap-4 text-sm md:col-span-3"
+          role="radiogroup"
+          aria-label="Fill zoning"
+        >
+          <label className="inline-flex items-center gap-1.5">
+            <input
+              type="radio"
+              name="zoning"
+              checked={!zoned}
+              onChange={() => onChange("zoning.kind", "homogeneous")}
+            />{" "}
+            Homogeneous fill
+          </label>
+          <label className="inline-flex items-center gap-1.5">
+            <input type="radio" name="zoning" checked={zoned} onChange={() => onChange("zoning.kind", "zoned")} /> Core
+            and shells
+          </label>
         </div>
         {zoned ? (
           <>

@@ -10,7 +10,9 @@ const sci = (v: number) => v.toExponential(2).replace("e", " × 10^").replace("^
 function Row({ term, value, from }: { term: string; value: string; from: string }) {
   return (
     <tr className="border-t border-rule">
-      <th scope="row" className="py-1 pr-3 text-left font-normal">{term}</th>
+      <th scope="row" className="py-1 pr-3 text-left font-normal">
+        {term}
+      </th>
       <td className="py-1 pr-3 text-right tabular-nums">{value}</td>
       <td className="py-1 text-xs text-ink-soft">{from}</td>
     </tr>
@@ -22,14 +24,31 @@ function PoolSeepage({ outcome, crestLength }: { outcome: PhreaticOutcome; crest
   const s = outcome.seepage;
   const title = `${outcome.pool === "normal" ? "Normal" : "Flood"} pool at ${outcome.poolLevel.toFixed(2)} m`;
   if (outcome.source === "hand-drawn") {
-    return <div><h4 className="text-sm font-semibold">{title}</h4><p className="text-sm text-ink-soft">Phreatic line drawn by hand: seepage and piping are not computed from it; use a flow net.</p></div>;
+    return (
+      <div>
+        <h4 className="text-sm font-semibold">{title}</h4>
+        <p className="text-sm text-ink-soft">
+          Phreatic line drawn by hand: seepage and piping are not computed from it; use a flow net.
+        </p>
+      </div>
+    );
   }
   if (!s || !s.ok) {
     return (
       <div data-testid={`seepage-limits-${outcome.pool}`}>
         <h4 className="text-sm font-semibold">{title}</h4>
-        <p className="text-sm font-medium text-alarm-700">Outside the limits of the Kozeny–Casagrande construction: no line was drawn.</p>
-        <ul className="mt-1 list-disc pl-5 text-sm">{outcome.limits.filter((l) => l.severity === "error").map((l) => <li key={l.code}><code className="text-xs">{l.code}</code> {l.message}</li>)}</ul>
+        <p className="text-sm font-medium text-alarm-700">
+          Outside the limits of the Kozeny–Casagrande construction: no line was drawn.
+        </p>
+        <ul className="mt-1 list-disc pl-5 text-sm">
+          {outcome.limits
+            .filter((l) => l.severity === "error")
+            .map((l) => (
+              <li key={l.code}>
+                <code className="text-xs">{l.code}</code> {l.message}
+              </li>
+            ))}
+        </ul>
       </div>
     );
   }
@@ -40,20 +59,56 @@ function PoolSeepage({ outcome, crestLength }: { outcome: PhreaticOutcome; crest
     <div data-testid={`seepage-${outcome.pool}`}>
       <h4 className="text-sm font-semibold">{title}</h4>
       <table className="mt-1 w-full text-sm">
-        <thead className="sr-only"><tr><th>Quantity</th><th>Value</th><th>From</th></tr></thead>
+        <thead className="sr-only">
+          <tr>
+            <th>Quantity</th>
+            <th>Value</th>
+            <th>From</th>
+          </tr>
+        </thead>
         <tbody>
           <Row term="Head h" value={`${c.h.toFixed(2)} m`} from="pool − foundation top (impervious base)" />
-          <Row term="Wetted face projection m" value={`${c.m.toFixed(2)} m`} from="upstream toe to where the pool meets the face" />
-          <Row term="Distance d" value={`${c.d.toFixed(2)} m`} from={`drain start − point 0.3·m upstream of the pool's edge${c.parabola.xScale !== 1 ? ", × √(kv/kh)" : ""}`} />
+          <Row
+            term="Wetted face projection m"
+            value={`${c.m.toFixed(2)} m`}
+            from="upstream toe to where the pool meets the face"
+          />
+          <Row
+            term="Distance d"
+            value={`${c.d.toFixed(2)} m`}
+            from={`drain start − point 0.3·m upstream of the pool's edge${c.parabola.xScale !== 1 ? ", × √(kv/kh)" : ""}`}
+          />
           <Row term="y0" value={`${c.y0.toFixed(3)} m`} from="√(h² + d²) − d (Kozeny's basic parabola)" />
-          <Row term="Seepage q per metre" value={`${sci(q)} m³/s/m`} from={`√(kh·kv)·y0 = ${(q * SECONDS_PER_DAY).toFixed(4)} m³/day per metre`} />
-          <Row term={`Seepage for ${crestLength} m of dam`} value={`${sci(q * crestLength)} m³/s`} from={`q × crest length = ${(q * crestLength * SECONDS_PER_DAY).toFixed(2)} m³/day (upper bound: the section is the highest)`} />
+          <Row
+            term="Seepage q per metre"
+            value={`${sci(q)} m³/s/m`}
+            from={`√(kh·kv)·y0 = ${(q * SECONDS_PER_DAY).toFixed(4)} m³/day per metre`}
+          />
+          <Row
+            term={`Seepage for ${crestLength} m of dam`}
+            value={`${sci(q * crestLength)} m³/s`}
+            from={`q × crest length = ${(q * crestLength * SECONDS_PER_DAY).toFixed(2)} m³/day (upper bound: the section is the highest)`}
+          />
           <Row term="Critical gradient i_cr" value={p.criticalGradient.toFixed(3)} from="(γsat − γw)/γw of the fill" />
-          <Row term="Exit gradient i_exit" value={p.exitGradient.toFixed(3)} from="free surface entering the drain (i = 1 at the parabola's vertex)" />
-          <Row term="Factor against piping" value={p.pipingFactor.toFixed(2)} from={`i_cr / i_exit; required ${p.required.toFixed(1)}: ${p.adequate ? "met" : "not met"}`} />
+          <Row
+            term="Exit gradient i_exit"
+            value={p.exitGradient.toFixed(3)}
+            from="free surface entering the drain (i = 1 at the parabola's vertex)"
+          />
+          <Row
+            term="Factor against piping"
+            value={p.pipingFactor.toFixed(2)}
+            from={`i_cr / i_exit; required ${p.required.toFixed(1)}: ${p.adequate ? "met" : "not met"}`}
+          />
         </tbody>
       </table>
-      {s.limits.filter((l) => l.severity === "warning").map((l) => <p key={l.code} className="mt-1 text-xs text-ink-soft">{l.message}</p>)}
+      {s.limits
+        .filter((l) => l.severity === "warning")
+        .map((l) => (
+          <p key={l.code} className="mt-1 text-xs text-ink-soft">
+            {l.message}
+          </p>
+        ))}
     </div>
   );
 }
@@ -71,24 +126,56 @@ export interface SeepagePanelProps {
 export function SeepagePanel({ normal, flood, crestLength, values, errors, onChange }: SeepagePanelProps) {
   return (
     <section className="panel space-y-4 p-4" aria-labelledby="seepage-heading">
-      <h3 id="seepage-heading" className="text-base font-semibold">Phreatic line, seepage and piping</h3>
+      <h3 id="seepage-heading" className="text-base font-semibold">
+        Phreatic line, seepage and piping
+      </h3>
       <div className="grid gap-4 lg:grid-cols-2">
         <PoolSeepage outcome={normal} crestLength={crestLength} />
         <PoolSeepage outcome={flood} crestLength={crestLength} />
       </div>
       <Caution compact />
-      <details className="text-sm" open={Boolean(values["handLines.normal"] || values["handLines.flood"]) || normal.source === "none"}>
+      <details
+        className="text-sm"
+        open={Boolean(values["handLines.normal"] || values["handLines.flood"]) || normal.source === "none"}
+      >
         <summary className="cursor-pointer font-medium">Edit the line by hand</summary>
-        <p className="mt-1 text-xs text-ink-soft">One point per line as “x, y” in metres, left to right. A hand-drawn line replaces the construction for that pool and stays as drawn when the sweep changes the faces. Clear the box to go back to the construction.</p>
+        <p className="mt-1 text-xs text-ink-soft">
+          One point per line as “x, y” in metres, left to right. A hand-drawn line replaces the construction for that
+          pool and stays as drawn when the sweep changes the faces. Clear the box to go back to the construction.
+        </p>
         <div className="mt-2 grid gap-3 lg:grid-cols-2">
-          {([["normal", normal], ["flood", flood]] as const).map(([pool, outcome]) => (
+          {(
+            [
+              ["normal", normal],
+              ["flood", flood],
+            ] as const
+          ).map(([pool, outcome]) => (
             <div key={pool}>
-              <label className="label" htmlFor={`hand-${pool}`}>{pool === "normal" ? "Normal" : "Flood"} pool line</label>
-              <textarea id={`hand-${pool}`} rows={6} className="field font-mono text-xs" value={values[`handLines.${pool}`] ?? ""} placeholder={outcome.line ? lineToText(outcome.line.slice(0, 4)) + "\n…" : "0, 16\n24, 16\n…"} onChange={(e) => onChange(`handLines.${pool}`, e.target.value)} />
+              <label className="label" htmlFor={`hand-${pool}`}>
+                {pool === "normal" ? "Normal" : "Flood"} pool line
+              </label>
+              <textarea
+                id={`hand-${pool}`}
+                rows={6}
+                className="field font-mono text-xs"
+                value={values[`handLines.${pool}`] ?? ""}
+                placeholder={outcome.line ? lineToText(outcome.line.slice(0, 4)) + "\n…" : "0, 16\n24, 16\n…"}
+                onChange={(e) => onChange(`handLines.${pool}`, e.target.value)}
+              />
               {!values[`handLines.${pool}`] && outcome.line ? (
-                <button type="button" className="btn-quiet mt-1 text-xs" onClick={() => onChange(`handLines.${pool}`, lineToText(outcome.line))}>Start from the constructed line</button>
+                <button
+                  type="button"
+                  className="btn-quiet mt-1 text-xs"
+                  onClick={() => onChange(`handLines.${pool}`, lineToText(outcome.line))}
+                >
+                  Start from the constructed line
+                </button>
               ) : null}
-              <FieldError messages={Object.entries(errors).filter(([k]) => k.startsWith(`handLines.${pool}`)).flatMap(([, v]) => v)} />
+              <FieldError
+                messages={Object.entries(errors)
+                  .filter(([k]) => k.startsWith(`handLines.${pool}`))
+                  .flatMap(([, v]) => v)}
+              />
             </div>
           ))}
         </div>

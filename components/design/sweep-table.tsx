@@ -13,25 +13,90 @@ export interface SweepTableProps {
 
 const f3 = (v: number | null) => (v === null ? "–" : v.toFixed(3));
 
-function PointRow({ point, required, steepest, crestLength, canOpen, busy, onOpen }: { point: SweepPoint; required: number; steepest: number | null; crestLength: number; canOpen: boolean; busy: boolean; onOpen: SweepTableProps["onOpen"] }) {
+function PointRow({
+  point,
+  required,
+  steepest,
+  crestLength,
+  canOpen,
+  busy,
+  onOpen,
+}: {
+  point: SweepPoint;
+  required: number;
+  steepest: number | null;
+  crestLength: number;
+  canOpen: boolean;
+  busy: boolean;
+  onOpen: SweepTableProps["onOpen"];
+}) {
   const pass = point.fsBishop !== null && point.fsBishop >= required;
   const isStar = steepest !== null && point.ratio === steepest;
   return (
-    <tr className={`border-t border-rule ${isStar ? "bg-clay-50 font-medium" : ""}`} data-testid="sweep-row" data-case={point.caseKey} data-ratio={point.ratio} data-fs={point.fsBishop ?? ""}>
-      <td className="px-2 py-1 tabular-nums">{point.ratio.toFixed(2)}{isStar ? " (n*)" : ""}</td>
+    <tr
+      className={`border-t border-rule ${isStar ? "bg-clay-50 font-medium" : ""}`}
+      data-testid="sweep-row"
+      data-case={point.caseKey}
+      data-ratio={point.ratio}
+      data-fs={point.fsBishop ?? ""}
+    >
+      <td className="px-2 py-1 tabular-nums">
+        {point.ratio.toFixed(2)}
+        {isStar ? " (n*)" : ""}
+      </td>
       <td className="px-2 py-1 text-right tabular-nums">{f3(point.fsBishop)}</td>
       <td className="px-2 py-1 text-right tabular-nums">{f3(point.fsOrdinary)}</td>
-      <td className="px-2 py-1 text-right tabular-nums">{point.resolution === null ? "–" : `±${point.resolution.toFixed(3)}`}</td>
-      <td className="px-2 py-1">{point.error ? <span className="text-alarm-700">{point.error}</span> : pass ? <span className="text-moss-700">✓ meets {required.toFixed(2)}</span> : <span className="text-alarm-700">✗ below {required.toFixed(2)}</span>}</td>
+      <td className="px-2 py-1 text-right tabular-nums">
+        {point.resolution === null ? "–" : `±${point.resolution.toFixed(3)}`}
+      </td>
+      <td className="px-2 py-1">
+        {point.error ? (
+          <span className="text-alarm-700">{point.error}</span>
+        ) : pass ? (
+          <span className="text-moss-700">✓ meets {required.toFixed(2)}</span>
+        ) : (
+          <span className="text-alarm-700">✗ below {required.toFixed(2)}</span>
+        )}
+      </td>
       <td className="px-2 py-1 text-right tabular-nums">{point.fillArea.toFixed(1)}</td>
-      <td className="px-2 py-1 text-right tabular-nums">{Math.round(point.fillArea * crestLength).toLocaleString("en-GB")}</td>
-      <td className="px-2 py-1 text-xs tabular-nums">{point.circle ? `(${point.circle.xc.toFixed(1)}, ${point.circle.yc.toFixed(1)}) R ${point.circle.r.toFixed(1)}` : "–"}</td>
-      <td className="px-2 py-1 text-xs">{point.warnings.length ? <span title={point.warnings.join("\n")}>{point.warnings.length} warning{point.warnings.length > 1 ? "s" : ""}</span> : ""}</td>
+      <td className="px-2 py-1 text-right tabular-nums">
+        {Math.round(point.fillArea * crestLength).toLocaleString("en-GB")}
+      </td>
+      <td className="px-2 py-1 text-xs tabular-nums">
+        {point.circle
+          ? `(${point.circle.xc.toFixed(1)}, ${point.circle.yc.toFixed(1)}) R ${point.circle.r.toFixed(1)}`
+          : "–"}
+      </td>
+      <td className="px-2 py-1 text-xs">
+        {point.warnings.length ? (
+          <span title={point.warnings.join("\n")}>
+            {point.warnings.length} warning{point.warnings.length > 1 ? "s" : ""}
+          </span>
+        ) : (
+          ""
+        )}
+      </td>
       <td className="px-2 py-1 whitespace-nowrap">
         {canOpen ? (
           <>
-            <button type="button" className="btn-quiet px-2 py-0.5 text-xs" disabled={busy || point.fsBishop === null} onClick={() => onOpen(point, "run")} aria-label={`Open ${sweepCase(point.caseKey).label} at ${point.ratio.toFixed(2)}:1 as a saved run`}>Open as run</button>{" "}
-            <button type="button" className="btn-quiet px-2 py-0.5 text-xs" disabled={busy} onClick={() => onOpen(point, "editor")} aria-label={`Open the section at ${point.ratio.toFixed(2)}:1 in the editor`}>Editor</button>
+            <button
+              type="button"
+              className="btn-quiet px-2 py-0.5 text-xs"
+              disabled={busy || point.fsBishop === null}
+              onClick={() => onOpen(point, "run")}
+              aria-label={`Open ${sweepCase(point.caseKey).label} at ${point.ratio.toFixed(2)}:1 as a saved run`}
+            >
+              Open as run
+            </button>{" "}
+            <button
+              type="button"
+              className="btn-quiet px-2 py-0.5 text-xs"
+              disabled={busy}
+              onClick={() => onOpen(point, "editor")}
+              aria-label={`Open the section at ${point.ratio.toFixed(2)}:1 in the editor`}
+            >
+              Editor
+            </button>
           </>
         ) : null}
       </td>
@@ -47,39 +112,111 @@ export function SweepTable({ reading, recheck, crestLength, canOpen, busyPoint, 
         <div key={c.caseKey} className="panel overflow-x-auto">
           <table className="w-full text-sm">
             <caption className="px-3 py-2 text-left font-semibold">
-              <span aria-hidden style={{ color: CASE_STYLES[c.caseKey].colour }}>{CASE_STYLES[c.caseKey].marker === "circle" ? "●" : CASE_STYLES[c.caseKey].marker === "square" ? "■" : "▲"} </span>
-              {sweepCase(c.caseKey).label}: required FS {c.required.toFixed(2)}, n* = {c.steepest === null ? "none in the range" : `${c.steepest.toFixed(2)}:1`}
+              <span aria-hidden style={{ color: CASE_STYLES[c.caseKey].colour }}>
+                {CASE_STYLES[c.caseKey].marker === "circle"
+                  ? "●"
+                  : CASE_STYLES[c.caseKey].marker === "square"
+                    ? "■"
+                    : "▲"}{" "}
+              </span>
+              {sweepCase(c.caseKey).label}: required FS {c.required.toFixed(2)}, n* ={" "}
+              {c.steepest === null ? "none in the range" : `${c.steepest.toFixed(2)}:1`}
             </caption>
             <thead className="bg-paper-sunk text-xs uppercase tracking-wide text-ink-soft">
               <tr>
-                <th scope="col" className="px-2 py-1 text-left">H:1V</th>
-                <th scope="col" className="px-2 py-1 text-right">Bishop FS</th>
-                <th scope="col" className="px-2 py-1 text-right">Ordinary FS</th>
-                <th scope="col" className="px-2 py-1 text-right">Grid step</th>
-                <th scope="col" className="px-2 py-1 text-left">Against required</th>
-                <th scope="col" className="px-2 py-1 text-right">Fill m³/m</th>
-                <th scope="col" className="px-2 py-1 text-right">Fill m³ ({crestLength} m)</th>
-                <th scope="col" className="px-2 py-1 text-left">Critical circle (m)</th>
-                <th scope="col" className="px-2 py-1 text-left">Notes</th>
-                <th scope="col" className="px-2 py-1"><span className="sr-only">Open</span></th>
+                <th scope="col" className="px-2 py-1 text-left">
+                  H:1V
+                </th>
+                <th scope="col" className="px-2 py-1 text-right">
+                  Bishop FS
+                </th>
+                <th scope="col" className="px-2 py-1 text-right">
+                  Ordinary FS
+                </th>
+                <th scope="col" className="px-2 py-1 text-right">
+                  Grid step
+                </th>
+                <th scope="col" className="px-2 py-1 text-left">
+                  Against required
+                </th>
+                <th scope="col" className="px-2 py-1 text-right">
+                  Fill m³/m
+                </th>
+                <th scope="col" className="px-2 py-1 text-right">
+                  Fill m³ ({crestLength} m)
+                </th>
+                <th scope="col" className="px-2 py-1 text-left">
+                  Critical circle (m)
+                </th>
+                <th scope="col" className="px-2 py-1 text-left">
+                  Notes
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  <span className="sr-only">Open</span>
+                </th>
               </tr>
             </thead>
             <tbody>
-              {c.points.map((p) => <PointRow key={p.id} point={p} required={c.required} steepest={c.steepest} crestLength={crestLength} canOpen={canOpen} busy={busyPoint !== null} onOpen={onOpen} />)}
-              {recheck.filter((p) => p.caseKey === c.caseKey).map((p) => (
-                <tr key={p.id} className="border-t-2 border-rule bg-paper-sunk/50" data-testid="recheck-row" data-case={p.caseKey}>
-                  <td className="px-2 py-1 text-xs" colSpan={1}>Pair {p.upstreamRatio.toFixed(2)} / {p.downstreamRatio.toFixed(2)}</td>
-                  <td className="px-2 py-1 text-right tabular-nums">{f3(p.fsBishop)}</td>
-                  <td className="px-2 py-1 text-right tabular-nums">{f3(p.fsOrdinary)}</td>
-                  <td className="px-2 py-1 text-right tabular-nums">{p.resolution === null ? "–" : `±${p.resolution.toFixed(3)}`}</td>
-                  <td className="px-2 py-1">{p.fsBishop !== null && p.fsBishop >= c.required ? <span className="text-moss-700">✓ pair meets {c.required.toFixed(2)}</span> : <span className="text-alarm-700">✗ pair below {c.required.toFixed(2)}</span>}</td>
-                  <td className="px-2 py-1 text-right tabular-nums">{p.fillArea.toFixed(1)}</td>
-                  <td className="px-2 py-1 text-right tabular-nums">{Math.round(p.fillArea * crestLength).toLocaleString("en-GB")}</td>
-                  <td className="px-2 py-1 text-xs tabular-nums">{p.circle ? `(${p.circle.xc.toFixed(1)}, ${p.circle.yc.toFixed(1)}) R ${p.circle.r.toFixed(1)}` : "–"}</td>
-                  <td className="px-2 py-1 text-xs">recheck of the pair</td>
-                  <td className="px-2 py-1 whitespace-nowrap">{canOpen ? <button type="button" className="btn-quiet px-2 py-0.5 text-xs" disabled={busyPoint !== null || p.fsBishop === null} onClick={() => onOpen(p, "run")}>Open as run</button> : null}</td>
-                </tr>
+              {c.points.map((p) => (
+                <PointRow
+                  key={p.id}
+                  point={p}
+                  required={c.required}
+                  steepest={c.steepest}
+                  crestLength={crestLength}
+                  canOpen={canOpen}
+                  busy={busyPoint !== null}
+                  onOpen={onOpen}
+                />
               ))}
+              {recheck
+                .filter((p) => p.caseKey === c.caseKey)
+                .map((p) => (
+                  <tr
+                    key={p.id}
+                    className="border-t-2 border-rule bg-paper-sunk/50"
+                    data-testid="recheck-row"
+                    data-case={p.caseKey}
+                  >
+                    <td className="px-2 py-1 text-xs" colSpan={1}>
+                      Pair {p.upstreamRatio.toFixed(2)} / {p.downstreamRatio.toFixed(2)}
+                    </td>
+                    <td className="px-2 py-1 text-right tabular-nums">{f3(p.fsBishop)}</td>
+                    <td className="px-2 py-1 text-right tabular-nums">{f3(p.fsOrdinary)}</td>
+                    <td className="px-2 py-1 text-right tabular-nums">
+                      {p.resolution === null ? "–" : `±${p.resolution.toFixed(3)}`}
+                    </td>
+                    <td className="px-2 py-1">
+                      {p.fsBishop !== null && p.fsBishop >= c.required ? (
+                        <span className="text-moss-700">✓ pair meets {c.required.toFixed(2)}</span>
+                      ) : (
+                        <span className="text-alarm-700">✗ pair below {c.required.toFixed(2)}</span>
+                      )}
+                    </td>
+                    <td className="px-2 py-1 text-right tabular-nums">{p.fillArea.toFixed(1)}</td>
+                    <td className="px-2 py-1 text-right tabular-nums">
+                      {Math.round(p.fillArea * crestLength).toLocaleString("en-GB")}
+                    </td>
+                    <td className="px-2 py-1 text-xs tabular-nums">
+                      {p.circle
+                        ? `(${p.circle.xc.toFixed(1)}, ${p.circle.yc.toFixed(1)}) R ${p.circle.r.toFixed(1)}`
+                        : "–"}
+                    </td>
+                    <td className="px-2 py-1 text-xs">recheck of the pair</td>
+                    <td className="px-2 py-1 whitespace-nowrap">
+                      {canOpen ? (
+                        <button
+                          type="button"
+                          className="btn-quiet px-2 py-0.5 text-xs"
+                          disabled={busyPoint !== null || p.fsBishop === null}
+                          onClick={() => onOpen(p, "run")}
+                        >
+                          Open as run
+                        </button>
+                      ) : null}
+                    </td>
+                  </tr>
+                ))}
             </tbody>
           </table>
         </div>

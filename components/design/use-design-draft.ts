@@ -2,8 +2,14 @@
 
 import { useCallback, useMemo, useState } from "react";
 import {
-  DesignInputError, embankmentParamsSchema, fromFormValues, generateEmbankment, toFormValues,
-  type EmbankmentParams, type FormValues, type GeneratedEmbankment,
+  DesignInputError,
+  embankmentParamsSchema,
+  fromFormValues,
+  generateEmbankment,
+  toFormValues,
+  type EmbankmentParams,
+  type FormValues,
+  type GeneratedEmbankment,
 } from "@/lib/design";
 import type { Material } from "@/lib/stability";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
@@ -34,14 +40,27 @@ export function useDesignDraft(projectId: number, studyId: number, initial: Emba
   const { preview, generateError } = useMemo(() => {
     const params = parsed.success ? parsed.data : lastValid;
     try {
-      return { preview: { normal: generateEmbankment(params, materials), flood: generateEmbankment(params, materials, { pool: "flood" }) } as DraftPreview, generateError: null };
+      return {
+        preview: {
+          normal: generateEmbankment(params, materials),
+          flood: generateEmbankment(params, materials, { pool: "flood" }),
+        } as DraftPreview,
+        generateError: null,
+      };
     } catch (err) {
-      if (err instanceof DesignInputError) return { preview: null, generateError: { field: err.field, message: err.message } };
+      if (err instanceof DesignInputError)
+        return { preview: null, generateError: { field: err.field, message: err.message } };
       throw err;
     }
   }, [parsed, lastValid, materials]);
 
-  if (parsed.success && !generateError && parsed.data !== lastValid && JSON.stringify(parsed.data) !== JSON.stringify(lastValid)) setLastValid(parsed.data);
+  if (
+    parsed.success &&
+    !generateError &&
+    parsed.data !== lastValid &&
+    JSON.stringify(parsed.data) !== JSON.stringify(lastValid)
+  )
+    setLastValid(parsed.data);
 
   const errors = useMemo(() => {
     const out = { ...serverErrors, ...schemaErrors };
@@ -63,12 +82,17 @@ export function useDesignDraft(projectId: number, studyId: number, initial: Emba
     if (!params) return null;
     setSaveError(null);
     try {
-      await fetchJson(`/api/projects/${projectId}/design/${studyId}`, { method: "PATCH", json: { parameters: params } });
+      await fetchJson(`/api/projects/${projectId}/design/${studyId}`, {
+        method: "PATCH",
+        json: { parameters: params },
+      });
       setSaved(params);
       return params;
     } catch (err) {
       if (err instanceof ApiClientError) {
-        setServerErrors(Object.fromEntries(Object.entries(err.fields).map(([k, v]) => [k.replace(/^parameters\./, ""), v])));
+        setServerErrors(
+          Object.fromEntries(Object.entries(err.fields).map(([k, v]) => [k.replace(/^parameters\./, ""), v])),
+        );
         setSaveError(err.message);
       } else setSaveError("Could not reach the server.");
       return null;

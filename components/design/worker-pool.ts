@@ -19,14 +19,23 @@ export interface WorkerPool {
   terminate: () => void;
 }
 
-export function startWorkerPool(params: EmbankmentParams, materials: Material[], settings: JobSettings, size = browserWorkerCount()): WorkerPool {
-  const workers = Array.from({ length: size }, () => new Worker(new URL("./sweep.worker.ts", import.meta.url), { type: "module" }));
+export function startWorkerPool(
+  params: EmbankmentParams,
+  materials: Material[],
+  settings: JobSettings,
+  size = browserWorkerCount(),
+): WorkerPool {
+  const workers = Array.from(
+    { length: size },
+    () => new Worker(new URL("./sweep.worker.ts", import.meta.url), { type: "module" }),
+  );
   const idle = [...workers];
   const waiting: ((w: Worker) => void)[] = [];
   const rejectors = new Set<(e: Error) => void>();
   let seq = 0;
   let stopped = false;
-  const take = () => new Promise<Worker>((resolve) => (idle.length ? resolve(idle.pop() as Worker) : waiting.push(resolve)));
+  const take = () =>
+    new Promise<Worker>((resolve) => (idle.length ? resolve(idle.pop() as Worker) : waiting.push(resolve)));
   const give = (w: Worker) => {
     const next = waiting.shift();
     if (next) next(w);

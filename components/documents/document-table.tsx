@@ -20,7 +20,14 @@ function attachmentOf(d: DocumentSummary): string {
   return "Project";
 }
 
-export function DocumentTable({ projectId, documents, showAttachment, canDelete, onDelete, deletingId }: DocumentTableProps) {
+export function DocumentTable({
+  projectId,
+  documents,
+  showAttachment,
+  canDelete,
+  onDelete,
+  deletingId,
+}: DocumentTableProps) {
   return (
     <div className="overflow-x-auto">
       <table className="w-full rounded-lg border border-rule bg-paper-raised text-sm" data-testid="document-table">
@@ -39,7 +46,11 @@ export function DocumentTable({ projectId, documents, showAttachment, canDelete,
           {documents.map((d) => (
             <tr key={d.id} className="border-t border-rule align-top" data-testid="document-row">
               <td className="px-3 py-2">
-                <a href={`/api/projects/${projectId}/documents/${d.id}`} className="font-medium text-clay-600 hover:underline" download={d.originalName}>
+                <a
+                  href={`/api/projects/${projectId}/documents/${d.id}`}
+                  className="font-medium text-clay-600 hover:underline"
+                  download={d.originalName}
+                >
                   {d.originalName}
                 </a>
                 {d.note ? <p className="text-xs text-ink-faint">{d.note}</p> : null}
@@ -51,7 +62,12 @@ export function DocumentTable({ projectId, documents, showAttachment, canDelete,
               <td className="px-3 py-2 text-ink-soft">{new Date(d.uploadedAt).toLocaleDateString("en-GB")}</td>
               <td className="px-3 py-2 text-right">
                 {canDelete(d) ? (
-                  <button type="button" className="text-xs text-alarm-700 hover:underline disabled:opacity-50" disabled={deletingId === d.id} onClick={() => onDelete(d)}>
+                  <button
+                    type="button"
+                    className="text-xs text-alarm-700 hover:underline disabled:opacity-50"
+                    disabled={deletingId === d.id}
+                    onClick={() => onDelete(d)}
+                  >
                     {deletingId === d.id ? "Deleting…" : "Delete"}
                   </button>
                 ) : null}

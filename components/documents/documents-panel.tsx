@@ -26,7 +26,15 @@ export interface DocumentsPanelProps {
  * Source documents beside a section, a material or the whole project: upload by dropping
  * files, download again, delete your own (administrators may delete any).
  */
-export function DocumentsPanel({ projectId, sectionId, materialId, canUpload, currentUserId, isAdmin, initialDocuments }: DocumentsPanelProps) {
+export function DocumentsPanel({
+  projectId,
+  sectionId,
+  materialId,
+  canUpload,
+  currentUserId,
+  isAdmin,
+  initialDocuments,
+}: DocumentsPanelProps) {
   const target = useMemo(() => ({ projectId, sectionId, materialId }), [projectId, sectionId, materialId]);
   const url = documentsUrl(target);
   const { data, error, mutate } = useSWR<{ documents: DocumentSummary[] }>(url, {
@@ -53,9 +61,15 @@ export function DocumentsPanel({ projectId, sectionId, materialId, canUpload, cu
 
   return (
     <section className="panel space-y-4 p-4" aria-labelledby="documents-heading" data-testid="documents-panel">
-      <h2 id="documents-heading" className="font-semibold">Source documents</h2>
+      <h2 id="documents-heading" className="font-semibold">
+        Source documents
+      </h2>
       {canUpload ? <DocumentDropArea target={target} onStored={refresh} /> : null}
-      {error ? <FormBanner kind="error">{error instanceof ApiClientError ? error.message : "Could not load the documents."}</FormBanner> : null}
+      {error ? (
+        <FormBanner kind="error">
+          {error instanceof ApiClientError ? error.message : "Could not load the documents."}
+        </FormBanner>
+      ) : null}
       {deleteError ? <FormBanner kind="error">{deleteError}</FormBanner> : null}
       {!data && !error ? (
         <p className="text-sm text-ink-soft">Loading documents…</p>

@@ -9,14 +9,22 @@ export interface UploadTarget {
 }
 
 /** Sends one file as multipart/form-data; throws ApiClientError with the server's message when refused. */
-export async function uploadDocument(target: UploadTarget, file: File, kind: DocumentKind, note: string): Promise<DocumentSummary> {
+export async function uploadDocument(
+  target: UploadTarget,
+  file: File,
+  kind: DocumentKind,
+  note: string,
+): Promise<DocumentSummary> {
   const form = new FormData();
   form.append("file", file, file.name);
   form.append("kind", kind);
   if (target.sectionId !== undefined) form.append("sectionId", String(target.sectionId));
   if (target.materialId !== undefined) form.append("materialId", String(target.materialId));
   if (note.trim()) form.append("note", note.trim());
-  const { document } = await fetchJson<{ document: DocumentSummary }>(`/api/projects/${target.projectId}/documents`, { method: "POST", body: form });
+  const { document } = await fetchJson<{ document: DocumentSummary }>(`/api/projects/${target.projectId}/documents`, {
+    method: "POST",
+    body: form,
+  });
   return document;
 }
 

@@ -16,7 +16,8 @@ export function CsvDropZone({ onText, onRejected, label, testId }: CsvDropZonePr
     maxSize: 200_000,
     accept: { "text/csv": [".csv"], "text/plain": [".txt", ".csv"] },
     onDropAccepted: async ([file]) => onText(await file.text(), file.name),
-    onDropRejected: ([rejection]) => onRejected(`${rejection.file.name}: ${rejection.errors.map((e) => e.message).join("; ")}`),
+    onDropRejected: ([rejection]) =>
+      onRejected(`${rejection.file.name}: ${rejection.errors.map((e) => e.message).join("; ")}`),
   });
   return (
     <div
@@ -31,7 +32,15 @@ export function CsvDropZone({ onText, onRejected, label, testId }: CsvDropZonePr
 }
 
 /** A link that downloads `text` as a CSV file without a round trip to the server. */
-export function CsvDownloadLink({ text, fileName, children }: { text: string; fileName: string; children: React.ReactNode }) {
+export function CsvDownloadLink({
+  text,
+  fileName,
+  children,
+}: {
+  text: string;
+  fileName: string;
+  children: React.ReactNode;
+}) {
   return (
     <a className="btn-quiet" href={`data:text/csv;charset=utf-8,${encodeURIComponent(text)}`} download={fileName}>
       {children}

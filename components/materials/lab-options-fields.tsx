@@ -10,12 +10,34 @@ export interface LabOptionsFieldsProps {
   problems: readonly TableProblem[];
 }
 
-function NumberSetting({ id, label, unit, value, onChange, messages }: { id: string; label: string; unit: string; value: string; onChange: (v: string) => void; messages?: string[] }) {
+function NumberSetting({
+  id,
+  label,
+  unit,
+  value,
+  onChange,
+  messages,
+}: {
+  id: string;
+  label: string;
+  unit: string;
+  value: string;
+  onChange: (v: string) => void;
+  messages?: string[];
+}) {
   return (
     <div>
-      <label className="label normal-case" htmlFor={id}>{label}</label>
+      <label className="label normal-case" htmlFor={id}>
+        {label}
+      </label>
       <div className="flex items-center gap-1.5">
-        <input id={id} className="field w-28" inputMode="decimal" value={value} onChange={(e) => onChange(e.target.value)} />
+        <input
+          id={id}
+          className="field w-28"
+          inputMode="decimal"
+          value={value}
+          onChange={(e) => onChange(e.target.value)}
+        />
         <span className="text-xs text-ink-faint">{unit}</span>
       </div>
       <FieldError messages={messages} />
@@ -34,15 +56,26 @@ export function LabOptionsFields({ kind, options, onChange, problems }: LabOptio
     case "direct-shear":
       return (
         <label className="flex items-center gap-2 text-sm">
-          <input type="checkbox" checked={options.zeroCohesion} onChange={(e) => set("zeroCohesion", e.target.checked)} />
+          <input
+            type="checkbox"
+            checked={options.zeroCohesion}
+            onChange={(e) => set("zeroCohesion", e.target.checked)}
+          />
           Force the line through the origin (c&apos; = 0), as for clean sand or gravel
         </label>
       );
     case "triaxial-cu":
       return (
         <div>
-          <label className="label" htmlFor="lab-space">Fit the line in</label>
-          <select id="lab-space" className="field w-auto" value={options.space} onChange={(e) => set("space", e.target.value as LabOptions["space"])}>
+          <label className="label" htmlFor="lab-space">
+            Fit the line in
+          </label>
+          <select
+            id="lab-space"
+            className="field w-auto"
+            value={options.space}
+            onChange={(e) => set("space", e.target.value as LabOptions["space"])}
+          >
             <option value="p-q">p&apos;–q: p&apos; = (σ1&apos; + 2σ3&apos;)/3, q = σ1 − σ3</option>
             <option value="s-t">s&apos;–t: s&apos; = (σ1&apos; + σ3&apos;)/2, t = (σ1 − σ3)/2</option>
           </select>
@@ -52,29 +85,82 @@ export function LabOptionsFields({ kind, options, onChange, problems }: LabOptio
       return (
         <div className="grid gap-3 sm:grid-cols-3">
           <div>
-            <label className="label" htmlFor="lab-source">Tests</label>
-            <select id="lab-source" className="field" value={options.source} onChange={(e) => set("source", e.target.value as LabOptions["source"])}>
+            <label className="label" htmlFor="lab-source">
+              Tests
+            </label>
+            <select
+              id="lab-source"
+              className="field"
+              value={options.source}
+              onChange={(e) => set("source", e.target.value as LabOptions["source"])}
+            >
               <option value="uu">UU triaxial (su = q/2)</option>
               <option value="vane">Field vane (su read directly)</option>
             </select>
           </div>
           <div>
-            <label className="label" htmlFor="lab-su-model">su taken as</label>
-            <select id="lab-su-model" className="field" value={options.model} onChange={(e) => set("model", e.target.value as LabOptions["model"])}>
+            <label className="label" htmlFor="lab-su-model">
+              su taken as
+            </label>
+            <select
+              id="lab-su-model"
+              className="field"
+              value={options.model}
+              onChange={(e) => set("model", e.target.value as LabOptions["model"])}
+            >
               <option value="constant">One value (the mean)</option>
               <option value="linear">Rising with depth (a fitted line)</option>
             </select>
           </div>
-          <NumberSetting id="lab-ground" label="Ground elevation (for depths)" unit="m" value={options.groundElevation} onChange={(v) => set("groundElevation", v)} messages={messagesOf("groundElevation")} />
-          {options.model === "linear" ? <NumberSetting id="lab-datum" label="Datum elevation (blank: ground)" unit="m" value={options.datumElevation} onChange={(v) => set("datumElevation", v)} messages={messagesOf("datumElevation")} /> : null}
-          {options.source === "vane" ? <NumberSetting id="lab-vane" label="Vane correction factor (blank: 1)" unit="–" value={options.vaneCorrectionFactor} onChange={(v) => set("vaneCorrectionFactor", v)} messages={messagesOf("vaneCorrectionFactor")} /> : null}
+          <NumberSetting
+            id="lab-ground"
+            label="Ground elevation (for depths)"
+            unit="m"
+            value={options.groundElevation}
+            onChange={(v) => set("groundElevation", v)}
+            messages={messagesOf("groundElevation")}
+          />
+          {options.model === "linear" ? (
+            <NumberSetting
+              id="lab-datum"
+              label="Datum elevation (blank: ground)"
+              unit="m"
+              value={options.datumElevation}
+              onChange={(v) => set("datumElevation", v)}
+              messages={messagesOf("datumElevation")}
+            />
+          ) : null}
+          {options.source === "vane" ? (
+            <NumberSetting
+              id="lab-vane"
+              label="Vane correction factor (blank: 1)"
+              unit="–"
+              value={options.vaneCorrectionFactor}
+              onChange={(v) => set("vaneCorrectionFactor", v)}
+              messages={messagesOf("vaneCorrectionFactor")}
+            />
+          ) : null}
         </div>
       );
     case "compaction":
       return (
         <div className="grid gap-3 sm:grid-cols-2">
-          <NumberSetting id="lab-gs" label="Specific gravity of solids Gs" unit="–" value={options.specificGravity} onChange={(v) => set("specificGravity", v)} messages={messagesOf("specificGravity")} />
-          <NumberSetting id="lab-acceptance" label="Acceptance, share of max. dry density" unit="%" value={options.acceptancePercent} onChange={(v) => set("acceptancePercent", v)} messages={messagesOf("acceptancePercent")} />
+          <NumberSetting
+            id="lab-gs"
+            label="Specific gravity of solids Gs"
+            unit="–"
+            value={options.specificGravity}
+            onChange={(v) => set("specificGravity", v)}
+            messages={messagesOf("specificGravity")}
+          />
+          <NumberSetting
+            id="lab-acceptance"
+            label="Acceptance, share of max. dry density"
+            unit="%"
+            value={options.acceptancePercent}
+            onChange={(v) => set("acceptancePercent", v)}
+            messages={messagesOf("acceptancePercent")}
+          />
         </div>
       );
     case "atterberg":

@@ -8,7 +8,15 @@ import { PlasticityChart } from "./plots/plasticity-chart";
 export function LabResultPlot({ record }: { record: LabTestRecord }) {
   switch (record.kind) {
     case "direct-shear":
-      return <StrengthLinePlot title="Shear stress against normal stress" xLabel="Normal stress σn (kPa)" yLabel="Shear stress τ (kPa)" points={record.result.points} line={record.result.line} />;
+      return (
+        <StrengthLinePlot
+          title="Shear stress against normal stress"
+          xLabel="Normal stress σn (kPa)"
+          yLabel="Shear stress τ (kPa)"
+          points={record.result.points}
+          line={record.result.line}
+        />
+      );
     case "triaxial-cu": {
       const pq = record.result.space === "p-q";
       return (

@@ -15,7 +15,8 @@ function rowsOf(record: LabTestRecord): Row[] {
         ["Scatter about the line", formatValue(r.fit.standardError, 1), "kPa"],
         ["Tests used", String(r.fit.n), ""],
       ];
-      if (record.kind === "direct-shear" && record.data.zeroCohesion) rows.splice(2, 0, ["Line forced through the origin", "yes", ""]);
+      if (record.kind === "direct-shear" && record.data.zeroCohesion)
+        rows.splice(2, 0, ["Line forced through the origin", "yes", ""]);
       return rows;
     }
     case "undrained": {
@@ -42,10 +43,18 @@ function rowsOf(record: LabTestRecord): Row[] {
         ["Maximum dry density", formatValue(r.maxDryDensity, 3), "Mg/m³"],
         ["Optimum moisture content", formatValue(r.optimumMoistureContent, 1), "%"],
         [`Acceptance density (${r.acceptance.percent} %)`, formatValue(r.acceptance.dryDensity, 3), "Mg/m³"],
-        ["Moisture window", `${formatValue(r.acceptance.dryLimit.moistureContent, 1)} – ${formatValue(r.acceptance.wetLimit.moistureContent, 1)}`, "%"],
+        [
+          "Moisture window",
+          `${formatValue(r.acceptance.dryLimit.moistureContent, 1)} – ${formatValue(r.acceptance.wetLimit.moistureContent, 1)}`,
+          "%",
+        ],
         ["Bulk unit weight at optimum γ", formatValue(r.unitWeight, 1), "kN/m³"],
         ["Saturated unit weight γsat", formatValue(r.saturatedUnitWeight, 1), "kN/m³"],
-        ["Void ratio, saturation", `${formatValue(r.voidRatio, 3)}, ${formatValue(r.degreeOfSaturation * 100, 0)} %`, ""],
+        [
+          "Void ratio, saturation",
+          `${formatValue(r.voidRatio, 3)}, ${formatValue(r.degreeOfSaturation * 100, 0)} %`,
+          "",
+        ],
       ];
     }
     case "atterberg": {
@@ -83,7 +92,9 @@ export function LabResultSummary({ record }: { record: LabTestRecord }) {
       ) : null}
       {record.result.warnings.length > 0 ? (
         <ul className="list-disc space-y-0.5 pl-5 text-xs text-clay-700">
-          {record.result.warnings.map((w) => <li key={w}>{w}</li>)}
+          {record.result.warnings.map((w) => (
+            <li key={w}>{w}</li>
+          ))}
         </ul>
       ) : null}
     </div>

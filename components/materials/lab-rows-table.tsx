@@ -12,7 +12,9 @@ export interface LabRowsTableProps {
 
 /** Columns that matter for the chosen settings: UU rows need q, vane rows need su. */
 function visibleColumns(kind: LabTestKind, options: LabOptions) {
-  return LAB_KIND_INFO[kind].columns.filter((c) => kind !== "undrained" || (options.source === "uu" ? c.key !== "su" : c.key !== "deviatorStress"));
+  return LAB_KIND_INFO[kind].columns.filter(
+    (c) => kind !== "undrained" || (options.source === "uu" ? c.key !== "su" : c.key !== "deviatorStress"),
+  );
 }
 
 /** The editable table of test results, units in the headers; cells with a problem are marked. */
@@ -20,7 +22,8 @@ export function LabRowsTable({ kind, options, rows, onChange, problems }: LabRow
   const columns = visibleColumns(kind, options);
   const single = LAB_KIND_INFO[kind].rowsKey === null;
   const bad = new Set(problems.filter((p) => p.row !== null).map((p) => `${p.row}:${p.column ?? ""}`));
-  const edit = (i: number, key: string, value: string) => onChange(rows.map((r, k) => (k === i ? { ...r, [key]: value } : r)));
+  const edit = (i: number, key: string, value: string) =>
+    onChange(rows.map((r, k) => (k === i ? { ...r, [key]: value } : r)));
 
   return (
     <div className="space-y-2">
@@ -54,7 +57,12 @@ export function LabRowsTable({ kind, options, rows, onChange, problems }: LabRow
                 ))}
                 <td className="py-0.5">
                   {!single ? (
-                    <button type="button" className="text-xs text-ink-faint hover:text-alarm-700" aria-label={`Remove row ${i + 1}`} onClick={() => onChange(rows.filter((_, k) => k !== i))}>
+                    <button
+                      type="button"
+                      className="text-xs text-ink-faint hover:text-alarm-700"
+                      aria-label={`Remove row ${i + 1}`}
+                      onClick={() => onChange(rows.filter((_, k) => k !== i))}
+                    >
                       ✕
                     </button>
                   ) : null}
@@ -64,7 +72,11 @@ export function LabRowsTable({ kind, options, rows, onChange, problems }: LabRow
           </tbody>
         </table>
       </div>
-      {!single ? <button type="button" className="btn-quiet" onClick={() => onChange([...rows, emptyLabRow(kind)])}>Add a row</button> : null}
+      {!single ? (
+        <button type="button" className="btn-quiet" onClick={() => onChange([...rows, emptyLabRow(kind)])}>
+          Add a row
+        </button>
+      ) : null}
     </div>
   );
 }

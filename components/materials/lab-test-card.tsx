@@ -21,7 +21,9 @@ export interface LabTestCardProps {
 }
 
 const describe = (s: SuggestedValues) =>
-  (Object.entries(s.values) as [ParameterKey, number][]).map(([k, v]) => `${PARAMETER_INFO[k].symbol} = ${v} ${PARAMETER_INFO[k].unit}`).join(", ");
+  (Object.entries(s.values) as [ParameterKey, number][])
+    .map(([k, v]) => `${PARAMETER_INFO[k].symbol} = ${v} ${PARAMETER_INFO[k].unit}`)
+    .join(", ");
 
 /** One stored test set: its rows, what was derived, the plot, and buttons that copy values into the material. */
 export function LabTestCard({ projectId, material, set, canEdit, onChanged }: LabTestCardProps) {
@@ -42,12 +44,18 @@ export function LabTestCard({ projectId, material, set, canEdit, onChanged }: La
       onChanged();
     } catch (err) {
       const fields = err instanceof ApiClientError ? Object.values(err.fields).flat().join(" ") : "";
-      setBanner({ kind: "error", text: err instanceof ApiClientError ? `${err.message} ${fields}` : "Could not reach the server." });
+      setBanner({
+        kind: "error",
+        text: err instanceof ApiClientError ? `${err.message} ${fields}` : "Could not reach the server.",
+      });
     }
   }
 
   async function remove() {
-    if (!window.confirm(`Delete lab test set ${set.id}? Values taken from it stay in the material but lose their source.`)) return;
+    if (
+      !window.confirm(`Delete lab test set ${set.id}? Values taken from it stay in the material but lose their source.`)
+    )
+      return;
     try {
       await fetchJson(`/api/projects/${projectId}/lab-tests/${set.id}`, { method: "DELETE" });
       onChanged();
@@ -60,26 +68,48 @@ export function LabTestCard({ projectId, material, set, canEdit, onChanged }: La
     <article id={`lab-set-${set.id}`} className="panel scroll-mt-6 p-4" data-testid="lab-set">
       <header className="mb-3 flex flex-wrap items-start justify-between gap-2">
         <div>
-          <p className="text-xs font-medium uppercase tracking-wide text-ink-faint">Lab test set {set.id} · {info.label}</p>
+          <p className="text-xs font-medium uppercase tracking-wide text-ink-faint">
+            Lab test set {set.id} · {info.label}
+          </p>
           <h3 className="font-semibold">{set.name}</h3>
-          <p className="text-xs text-ink-faint">Entered by {set.createdByName} on {new Date(set.createdAt).toLocaleDateString("en-GB")}</p>
+          <p className="text-xs text-ink-faint">
+            Entered by {set.createdByName} on {new Date(set.createdAt).toLocaleDateString("en-GB")}
+          </p>
         </div>
-        {canEdit ? <button type="button" className="text-xs text-alarm-700 hover:underline" onClick={remove}>Delete set</button> : null}
+        {canEdit ? (
+          <button type="button" className="text-xs text-alarm-700 hover:underline" onClick={remove}>
+            Delete set
+          </button>
+        ) : null}
       </header>
       <div className="grid gap-4 lg:grid-cols-2">
         <div className="space-y-3">
           <LabResultSummary record={set} />
           <details className="text-xs">
-            <summary className="cursor-pointer text-ink-soft">The {rows.length} test{rows.length === 1 ? "" : "s"} behind these numbers</summary>
+            <summary className="cursor-pointer text-ink-soft">
+              The {rows.length} test{rows.length === 1 ? "" : "s"} behind these numbers
+            </summary>
             <table className="mt-2 w-full">
               <thead className="text-left text-ink-faint">
-                <tr><th className="pr-2">#</th>{info.columns.map((c) => <th key={c.key} className="pr-2 font-normal">{c.label}{c.unit ? ` (${c.unit})` : ""}</th>)}</tr>
+                <tr>
+                  <th className="pr-2">#</th>
+                  {info.columns.map((c) => (
+                    <th key={c.key} className="pr-2 font-normal">
+                      {c.label}
+                      {c.unit ? ` (${c.unit})` : ""}
+                    </th>
+                  ))}
+                </tr>
               </thead>
               <tbody>
                 {rows.map((r, i) => (
                   <tr key={i} className="border-t border-rule/60">
                     <td className="pr-2 text-ink-faint">{i + 1}</td>
-                    {info.columns.map((c) => <td key={c.key} className="pr-2 tabular-nums">{r[c.key]}</td>)}
+                    {info.columns.map((c) => (
+                      <td key={c.key} className="pr-2 tabular-nums">
+                        {r[c.key]}
+                      </td>
+                    ))}
                   </tr>
                 ))}
               </tbody>
@@ -94,17 +124,32 @@ export function LabTestCard({ projectId, material, set, canEdit, onChanged }: La
             const missing = Object.keys(s.values).filter((k) => !allowed.includes(k as ParameterKey));
             return (
               <div key={s.label}>
-                <button type="button" className="btn-quiet" disabled={missing.length > 0} onClick={() => use(s)} title={s.note}>
+                <button
+                  type="button"
+                  className="btn-quiet"
+                  disabled={missing.length > 0}
+                  onClick={() => use(s)}
+                  title={s.note}
+                >
                   Use {describe(s)}
                 </button>
-                {missing.length > 0 ? <p className="mt-1 text-xs text-ink-faint">This material&apos;s model has no {missing.map((k) => PARAMETER_INFO[k as ParameterKey].symbol).join(", ")}: change the model first.</p> : null}
+                {missing.length > 0 ? (
+                  <p className="mt-1 text-xs text-ink-faint">
+                    This material&apos;s model has no{" "}
+                    {missing.map((k) => PARAMETER_INFO[k as ParameterKey].symbol).join(", ")}: change the model first.
+                  </p>
+                ) : null}
                 {s.note ? <p className="mt-1 text-xs text-clay-700">{s.note}</p> : null}
               </div>
             );
           })}
         </div>
       ) : null}
-      {banner ? <div className="mt-3"><FormBanner kind={banner.kind}>{banner.text}</FormBanner></div> : null}
+      {banner ? (
+        <div className="mt-3">
+          <FormBanner kind={banner.kind}>{banner.text}</FormBanner>
+        </div>
+      ) : null}
     </article>
   );
 }

@@ -3,7 +3,13 @@
 import { useState } from "react";
 import type { CsvProblem } from "@/lib/section-io";
 import { LAB_KIND_INFO, LAB_TEST_KINDS, type LabTestKind } from "@/lib/materials/lab-kinds";
-import { DEFAULT_LAB_OPTIONS, buildLabInput, emptyLabRow, type LabOptions, type LabRow } from "@/lib/materials/lab-rows";
+import {
+  DEFAULT_LAB_OPTIONS,
+  buildLabInput,
+  emptyLabRow,
+  type LabOptions,
+  type LabRow,
+} from "@/lib/materials/lab-rows";
 import { checkAndDeriveLabTest, type LabDeriveOutcome } from "@/lib/materials/lab-derive";
 import { labCsvTemplate, parseLabCsv } from "@/lib/materials/lab-csv";
 import { fieldsToProblems, type TableProblem } from "@/lib/materials/problem-keys";
@@ -70,7 +76,10 @@ export function LabTestEntry({ projectId, materialId, onSaved }: LabTestEntryPro
     setBusy(true);
     setFields({});
     try {
-      await fetchJson(`/api/projects/${projectId}/lab-tests`, { method: "POST", json: { materialId, kind, name, data } });
+      await fetchJson(`/api/projects/${projectId}/lab-tests`, {
+        method: "POST",
+        json: { materialId, kind, name, data },
+      });
       setBanner({ kind: "ok", text: "Saved. The set is listed above, with buttons to use its values." });
       setName("");
       setRows(freshRows(kind));
@@ -100,17 +109,33 @@ export function LabTestEntry({ projectId, materialId, onSaved }: LabTestEntryPro
   const info = LAB_KIND_INFO[kind];
   return (
     <section className="panel space-y-4 p-4" aria-labelledby="lab-entry-heading" data-testid="lab-entry">
-      <h2 id="lab-entry-heading" className="font-semibold">Add test results</h2>
+      <h2 id="lab-entry-heading" className="font-semibold">
+        Add test results
+      </h2>
       <div className="grid gap-3 sm:grid-cols-2">
         <div>
-          <label className="label" htmlFor="lab-kind">Kind of test</label>
+          <label className="label" htmlFor="lab-kind">
+            Kind of test
+          </label>
           <select id="lab-kind" className="field" value={kind} onChange={(e) => reset(e.target.value as LabTestKind)}>
-            {LAB_TEST_KINDS.map((k) => <option key={k} value={k}>{LAB_KIND_INFO[k].label}</option>)}
+            {LAB_TEST_KINDS.map((k) => (
+              <option key={k} value={k}>
+                {LAB_KIND_INFO[k].label}
+              </option>
+            ))}
           </select>
         </div>
         <div>
-          <label className="label" htmlFor="lab-name">Name of the set</label>
-          <input id="lab-name" className="field" placeholder="e.g. Borehole 3, 4.5 m, shear box" value={name} onChange={(e) => setName(e.target.value)} />
+          <label className="label" htmlFor="lab-name">
+            Name of the set
+          </label>
+          <input
+            id="lab-name"
+            className="field"
+            placeholder="e.g. Borehole 3, 4.5 m, shear box"
+            value={name}
+            onChange={(e) => setName(e.target.value)}
+          />
           <FieldError messages={fields.name} />
         </div>
       </div>
@@ -119,21 +144,38 @@ export function LabTestEntry({ projectId, materialId, onSaved }: LabTestEntryPro
       <details className="text-sm">
         <summary className="cursor-pointer text-ink-soft">Fill the table from a CSV file or pasted rows</summary>
         <div className="mt-2 space-y-2">
-          <p className="text-xs text-ink-faint">Header: {info.columns.map((c) => `${c.key}${c.unit ? ` (${c.unit})` : ""}`).join(", ")}.</p>
-          <CsvDropZone label="Drop a CSV of test results here, or click to choose one" onText={readCsv} onRejected={(m) => setCsvProblems([{ row: 1, column: null, message: m }])} />
+          <p className="text-xs text-ink-faint">
+            Header: {info.columns.map((c) => `${c.key}${c.unit ? ` (${c.unit})` : ""}`).join(", ")}.
+          </p>
+          <CsvDropZone
+            label="Drop a CSV of test results here, or click to choose one"
+            onText={readCsv}
+            onRejected={(m) => setCsvProblems([{ row: 1, column: null, message: m }])}
+          />
           <textarea
             className="field min-h-20 font-mono text-xs"
             placeholder={labCsvTemplate(kind)}
             aria-label="Paste rows of a CSV, header first"
-            onPaste={(e) => { const text = e.clipboardData.getData("text"); e.preventDefault(); readCsv(text); }}
+            onPaste={(e) => {
+              const text = e.clipboardData.getData("text");
+              e.preventDefault();
+              readCsv(text);
+            }}
           />
-          <CsvDownloadLink text={labCsvTemplate(kind)} fileName={`${kind}-template.csv`}>Download a template</CsvDownloadLink>
+          <CsvDownloadLink text={labCsvTemplate(kind)} fileName={`${kind}-template.csv`}>
+            Download a template
+          </CsvDownloadLink>
           <CsvProblemList items={csvProblems} kind="problem" />
         </div>
       </details>
       {problems.length > 0 ? (
-        <ul className="rounded-md border border-alarm-600 bg-alarm-50 px-3 py-2 text-sm text-alarm-700" data-testid="lab-problems">
-          {problems.map((p, i) => <li key={i}>{p.message}</li>)}
+        <ul
+          className="rounded-md border border-alarm-600 bg-alarm-50 px-3 py-2 text-sm text-alarm-700"
+          data-testid="lab-problems"
+        >
+          {problems.map((p, i) => (
+            <li key={i}>{p.message}</li>
+          ))}
         </ul>
       ) : null}
       {preview ? (
@@ -144,8 +186,12 @@ export function LabTestEntry({ projectId, materialId, onSaved }: LabTestEntryPro
       ) : null}
       {banner ? <FormBanner kind={banner.kind}>{banner.text}</FormBanner> : null}
       <div className="flex gap-2">
-        <button type="button" className="btn-quiet" onClick={() => workOut()}>Work out the result</button>
-        <button type="button" className="btn-primary" disabled={busy} onClick={save}>{busy ? "Saving…" : "Save the test set"}</button>
+        <button type="button" className="btn-quiet" onClick={() => workOut()}>
+          Work out the result
+        </button>
+        <button type="button" className="btn-primary" disabled={busy} onClick={save}>
+          {busy ? "Saving…" : "Save the test set"}
+        </button>
       </div>
     </section>
   );

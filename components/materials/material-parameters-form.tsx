@@ -29,7 +29,11 @@ export function MaterialParametersForm({ projectId, material, canEdit, onSaved }
     event.preventDefault();
     void save(
       values,
-      (parameters) => ({ url: `/api/projects/${projectId}/materials/${material.id}`, method: "PUT", json: { name, notes, color, parameters } }),
+      (parameters) => ({
+        url: `/api/projects/${projectId}/materials/${material.id}`,
+        method: "PUT",
+        json: { name, notes, color, parameters },
+      }),
       (saved) => {
         onSaved(saved);
         return "Saved.";
@@ -42,24 +46,53 @@ export function MaterialParametersForm({ projectId, material, canEdit, onSaved }
       <h2 className="font-semibold">Parameters</h2>
       <fieldset className="grid gap-3 sm:grid-cols-[1fr_auto]" disabled={!canEdit}>
         <div>
-          <label className="label" htmlFor="material-name">Name</label>
+          <label className="label" htmlFor="material-name">
+            Name
+          </label>
           <input id="material-name" className="field" value={name} onChange={(e) => setName(e.target.value)} />
           <FieldError messages={fields.name} />
         </div>
         <div>
-          <label className="label" htmlFor="material-color">Colour</label>
-          <input id="material-color" type="color" className="h-8 w-14 rounded border border-rule" value={color} onChange={(e) => setColor(e.target.value.toUpperCase())} />
+          <label className="label" htmlFor="material-color">
+            Colour
+          </label>
+          <input
+            id="material-color"
+            type="color"
+            className="h-8 w-14 rounded border border-rule"
+            value={color}
+            onChange={(e) => setColor(e.target.value.toUpperCase())}
+          />
           <FieldError messages={fields.color} />
         </div>
       </fieldset>
-      <ParameterFields idPrefix="material" values={values} onChange={setValues} fields={fields} sources={material.sources} disabled={!canEdit} />
+      <ParameterFields
+        idPrefix="material"
+        values={values}
+        onChange={setValues}
+        fields={fields}
+        sources={material.sources}
+        disabled={!canEdit}
+      />
       <div>
-        <label className="label" htmlFor="material-notes">Notes</label>
-        <textarea id="material-notes" className="field min-h-16" value={notes} onChange={(e) => setNotes(e.target.value)} disabled={!canEdit} />
+        <label className="label" htmlFor="material-notes">
+          Notes
+        </label>
+        <textarea
+          id="material-notes"
+          className="field min-h-16"
+          value={notes}
+          onChange={(e) => setNotes(e.target.value)}
+          disabled={!canEdit}
+        />
         <FieldError messages={fields.notes} />
       </div>
       {banner ? <FormBanner kind={banner.kind}>{banner.text}</FormBanner> : null}
-      {canEdit ? <button type="submit" className="btn-primary" disabled={busy}>{busy ? "Saving…" : "Save parameters"}</button> : null}
+      {canEdit ? (
+        <button type="submit" className="btn-primary" disabled={busy}>
+          {busy ? "Saving…" : "Save parameters"}
+        </button>
+      ) : null}
     </form>
   );
 }

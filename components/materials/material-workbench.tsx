@@ -22,7 +22,9 @@ export interface MaterialWorkbenchProps {
 export function MaterialWorkbench({ projectId, canEdit, initial }: MaterialWorkbenchProps) {
   const router = useRouter();
   const url = `/api/projects/${projectId}/materials/${initial.material.id}`;
-  const { data, mutate } = useSWR<{ material: LibraryMaterial; labTests: LabTestSet[] }>(url, { fallbackData: initial });
+  const { data, mutate } = useSWR<{ material: LibraryMaterial; labTests: LabTestSet[] }>(url, {
+    fallbackData: initial,
+  });
   const [error, setError] = useState<string | null>(null);
   const { material, labTests } = data ?? initial;
 
@@ -42,18 +44,41 @@ export function MaterialWorkbench({ projectId, canEdit, initial }: MaterialWorkb
       <div className="grid gap-6 xl:grid-cols-[2fr_3fr]">
         <div className="space-y-3">
           {/* Remount on each save so the form shows what the server kept. */}
-          <MaterialParametersForm key={material.updatedAt} projectId={projectId} material={material} canEdit={canEdit} onSaved={(m) => mutate({ material: m, labTests }, { revalidate: false })} />
-          {canEdit ? <button type="button" className="btn-danger" onClick={remove}>Delete this material</button> : null}
+          <MaterialParametersForm
+            key={material.updatedAt}
+            projectId={projectId}
+            material={material}
+            canEdit={canEdit}
+            onSaved={(m) => mutate({ material: m, labTests }, { revalidate: false })}
+          />
+          {canEdit ? (
+            <button type="button" className="btn-danger" onClick={remove}>
+              Delete this material
+            </button>
+          ) : null}
           {error ? <FormBanner kind="error">{error}</FormBanner> : null}
         </div>
         <section className="space-y-4" aria-labelledby="lab-sets-heading">
-          <h2 id="lab-sets-heading" className="text-lg font-semibold">Lab test sets</h2>
+          <h2 id="lab-sets-heading" className="text-lg font-semibold">
+            Lab test sets
+          </h2>
           {labTests.length === 0 ? (
             <EmptyState title="No test results yet">
-              {canEdit ? "Add the results of shear box, triaxial, vane, compaction or limits tests below; the app fits them and offers the values to this material." : "Engineers and designers add the lab results behind each parameter."}
+              {canEdit
+                ? "Add the results of shear box, triaxial, vane, compaction or limits tests below; the app fits them and offers the values to this material."
+                : "Engineers and designers add the lab results behind each parameter."}
             </EmptyState>
           ) : (
-            labTests.map((set) => <LabTestCard key={set.id} projectId={projectId} material={material} set={set} canEdit={canEdit} onChanged={() => mutate()} />)
+            labTests.map((set) => (
+              <LabTestCard
+                key={set.id}
+                projectId={projectId}
+                material={material}
+                set={set}
+                canEdit={canEdit}
+                onChanged={() => mutate()}
+              />
+            ))
           )}
         </section>
       </div>

@@ -33,13 +33,21 @@ export function MaterialsCsvImport({ projectId, existingKeys, onImported }: Mate
     setBusy(true);
     setBanner(null);
     try {
-      const result = await fetchJson<{ materials: LibraryMaterial[] }>(`/api/projects/${projectId}/materials/import`, { method: "POST", json: { csv: file.text } });
+      const result = await fetchJson<{ materials: LibraryMaterial[] }>(`/api/projects/${projectId}/materials/import`, {
+        method: "POST",
+        json: { csv: file.text },
+      });
       onImported(result.materials);
-      setBanner({ kind: "ok", text: `Added ${result.materials.length} material${result.materials.length === 1 ? "" : "s"} from ${file.name}.` });
+      setBanner({
+        kind: "ok",
+        text: `Added ${result.materials.length} material${result.materials.length === 1 ? "" : "s"} from ${file.name}.`,
+      });
       setFile(null);
     } catch (err) {
       if (err instanceof ApiClientError) {
-        setServerProblems(fieldsToProblems(err.fields).map((p) => ({ row: p.row ?? 1, column: p.column, message: p.message })));
+        setServerProblems(
+          fieldsToProblems(err.fields).map((p) => ({ row: p.row ?? 1, column: p.column, message: p.message })),
+        );
         setBanner({ kind: "error", text: err.message });
       } else setBanner({ kind: "error", text: "Could not reach the server." });
     } finally {
@@ -50,33 +58,59 @@ export function MaterialsCsvImport({ projectId, existingKeys, onImported }: Mate
   return (
     <section className="panel space-y-3 p-4" aria-labelledby="import-heading" data-testid="materials-import">
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <h2 id="import-heading" className="font-semibold">Import from a CSV file</h2>
-        <CsvDownloadLink text={csvTemplates.materials} fileName="materials-template.csv">Download a template</CsvDownloadLink>
+        <h2 id="import-heading" className="font-semibold">
+          Import from a CSV file
+        </h2>
+        <CsvDownloadLink text={csvTemplates.materials} fileName="materials-template.csv">
+          Download a template
+        </CsvDownloadLink>
       </div>
       <p className="text-xs text-ink-faint">
-        Columns: {MATERIAL_COLUMNS.join(", ")}. Units: γ and γsat in kN/m³, c and su in kPa, φ in degrees, suGradient in kPa/m, suDatum in m.
+        Columns: {MATERIAL_COLUMNS.join(", ")}. Units: γ and γsat in kN/m³, c and su in kPa, φ in degrees, suGradient in
+        kPa/m, suDatum in m.
       </p>
       <CsvDropZone
         label="Drop a materials CSV here, or click to choose one"
         testId="materials-drop"
-        onText={(text, name) => { setFile({ text, name }); setServerProblems([]); setBanner(null); }}
+        onText={(text, name) => {
+          setFile({ text, name });
+          setServerProblems([]);
+          setBanner(null);
+        }}
         onRejected={(message) => setBanner({ kind: "error", text: message })}
       />
       {check && file ? (
         <>
-          <p className="text-sm text-ink-soft">{file.name}: {check.preview.length} row{check.preview.length === 1 ? "" : "s"} read.</p>
+          <p className="text-sm text-ink-soft">
+            {file.name}: {check.preview.length} row{check.preview.length === 1 ? "" : "s"} read.
+          </p>
           {check.preview.length > 0 ? (
             <div className="max-h-72 overflow-auto rounded border border-rule">
               <table className="w-full text-xs" data-testid="import-preview">
                 <thead className="sticky top-0 bg-paper-sunk text-left">
-                  <tr><th className="px-2 py-1">Row</th>{MATERIAL_COLUMNS.map((c) => <th key={c} className="px-2 py-1 font-mono">{c}</th>)}</tr>
+                  <tr>
+                    <th className="px-2 py-1">Row</th>
+                    {MATERIAL_COLUMNS.map((c) => (
+                      <th key={c} className="px-2 py-1 font-mono">
+                        {c}
+                      </th>
+                    ))}
+                  </tr>
                 </thead>
                 <tbody>
                   {check.preview.map((r) => (
-                    <tr key={r.row} className={`border-t border-rule ${badCells.has(`${r.row}:`) ? "bg-alarm-50" : ""}`}>
+                    <tr
+                      key={r.row}
+                      className={`border-t border-rule ${badCells.has(`${r.row}:`) ? "bg-alarm-50" : ""}`}
+                    >
                       <td className="px-2 py-1 text-ink-faint">{r.row}</td>
                       {MATERIAL_COLUMNS.map((c) => (
-                        <td key={c} className={`px-2 py-1 ${badCells.has(`${r.row}:${c}`) ? "bg-alarm-50 font-medium text-alarm-700" : ""}`}>{r.cells[c] ?? ""}</td>
+                        <td
+                          key={c}
+                          className={`px-2 py-1 ${badCells.has(`${r.row}:${c}`) ? "bg-alarm-50 font-medium text-alarm-700" : ""}`}
+                        >
+                          {r.cells[c] ?? ""}
+                        </td>
                       ))}
                     </tr>
                   ))}
@@ -87,10 +121,17 @@ export function MaterialsCsvImport({ projectId, existingKeys, onImported }: Mate
           <CsvProblemList items={[...check.problems, ...serverProblems]} kind="problem" />
           <CsvProblemList items={check.warnings} kind="warning" />
           <div className="flex gap-2">
-            <button type="button" className="btn-primary" disabled={!check.ok || check.materials.length === 0 || busy} onClick={send}>
+            <button
+              type="button"
+              className="btn-primary"
+              disabled={!check.ok || check.materials.length === 0 || busy}
+              onClick={send}
+            >
               {busy ? "Adding…" : `Add these ${check.materials.length} materials`}
             </button>
-            <button type="button" className="btn-quiet" onClick={() => setFile(null)}>Discard the file</button>
+            <button type="button" className="btn-quiet" onClick={() => setFile(null)}>
+              Discard the file
+            </button>
           </div>
         </>
       ) : null}

@@ -18,14 +18,20 @@ export interface MaterialsLibraryProps {
 /** The library page's live part: the table, and for editors the add form and the CSV import. */
 export function MaterialsLibrary({ projectId, canEdit, initialMaterials }: MaterialsLibraryProps) {
   const url = `/api/projects/${projectId}/materials`;
-  const { data, mutate } = useSWR<{ materials: LibraryMaterial[] }>(url, { fallbackData: { materials: initialMaterials } });
+  const { data, mutate } = useSWR<{ materials: LibraryMaterial[] }>(url, {
+    fallbackData: { materials: initialMaterials },
+  });
   const materials = data?.materials ?? [];
 
   return (
     <div className="grid gap-6 xl:grid-cols-[3fr_2fr]">
       <div className="space-y-3">
         <div className="flex flex-wrap items-center justify-end gap-2">
-          {materials.length > 0 ? <CsvDownloadLink text={libraryToCsv(materials)} fileName={`materials-project-${projectId}.csv`}>Export as CSV</CsvDownloadLink> : null}
+          {materials.length > 0 ? (
+            <CsvDownloadLink text={libraryToCsv(materials)} fileName={`materials-project-${projectId}.csv`}>
+              Export as CSV
+            </CsvDownloadLink>
+          ) : null}
         </div>
         {materials.length === 0 ? (
           <EmptyState title="No materials yet">
@@ -36,12 +42,19 @@ export function MaterialsLibrary({ projectId, canEdit, initialMaterials }: Mater
         ) : (
           <MaterialsTable projectId={projectId} materials={materials} />
         )}
-        <p className="text-xs text-ink-faint">A green mark under a value names the lab test set it was derived from; open the material to see the tests and the fit.</p>
+        <p className="text-xs text-ink-faint">
+          A green mark under a value names the lab test set it was derived from; open the material to see the tests and
+          the fit.
+        </p>
       </div>
       {canEdit ? (
         <div className="space-y-6">
           <NewMaterialForm projectId={projectId} onCreated={() => mutate()} />
-          <MaterialsCsvImport projectId={projectId} existingKeys={materials.map((m) => m.key)} onImported={() => mutate()} />
+          <MaterialsCsvImport
+            projectId={projectId}
+            existingKeys={materials.map((m) => m.key)}
+            onImported={() => mutate()}
+          />
         </div>
       ) : null}
     </div>

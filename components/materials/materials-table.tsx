@@ -23,7 +23,8 @@ export function MaterialsTable({ projectId, materials }: { projectId: number; ma
             <th className="px-3 py-2 font-medium">Model</th>
             {COLUMNS.map(({ key }) => (
               <th key={key} className="px-3 py-2 text-right font-medium">
-                {PARAMETER_INFO[key].symbol} <span className="font-normal text-ink-faint">({PARAMETER_INFO[key].unit})</span>
+                {PARAMETER_INFO[key].symbol}{" "}
+                <span className="font-normal text-ink-faint">({PARAMETER_INFO[key].unit})</span>
               </th>
             ))}
             <th className="px-3 py-2 text-right font-medium">Lab sets</th>
@@ -33,21 +34,40 @@ export function MaterialsTable({ projectId, materials }: { projectId: number; ma
           {materials.map((m) => (
             <tr key={m.id} className="border-t border-rule align-top">
               <td className="px-3 py-2">
-                <span className="mr-2 inline-block h-3 w-3 rounded-sm border border-ink/20 align-middle" style={{ backgroundColor: m.color }} aria-hidden />
-                <Link href={`/projects/${projectId}/materials/${m.id}`} className="font-medium hover:text-clay-600">{m.name}</Link>
+                <span
+                  className="mr-2 inline-block h-3 w-3 rounded-sm border border-ink/20 align-middle"
+                  style={{ backgroundColor: m.color }}
+                  aria-hidden
+                />
+                <Link href={`/projects/${projectId}/materials/${m.id}`} className="font-medium hover:text-clay-600">
+                  {m.name}
+                </Link>
                 <div className="ml-5 font-mono text-xs text-ink-faint">{m.key}</div>
               </td>
               <td className="px-3 py-2 text-ink-soft">
                 {MODEL_LABELS[m.parameters.model]}
-                {"freeDraining" in m.parameters && m.parameters.freeDraining ? <div className="text-xs text-ink-faint">drains freely</div> : null}
+                {"freeDraining" in m.parameters && m.parameters.freeDraining ? (
+                  <div className="text-xs text-ink-faint">drains freely</div>
+                ) : null}
               </td>
               {COLUMNS.map(({ key, digits }) => {
                 const v = parameterValue(m.parameters, key);
                 return (
                   <td key={key} className="px-3 py-2 text-right tabular-nums">
                     {formatValue(v, digits)}
-                    {key === "su" && parameterValue(m.parameters, "suGradient") ? <div className="text-xs text-ink-faint">+{formatValue(parameterValue(m.parameters, "suGradient"), 2)} kPa/m</div> : null}
-                    {v !== undefined ? <div><SourceBadge setId={m.sources[key]} href={`/projects/${projectId}/materials/${m.id}#lab-set-${m.sources[key]}`} /></div> : null}
+                    {key === "su" && parameterValue(m.parameters, "suGradient") ? (
+                      <div className="text-xs text-ink-faint">
+                        +{formatValue(parameterValue(m.parameters, "suGradient"), 2)} kPa/m
+                      </div>
+                    ) : null}
+                    {v !== undefined ? (
+                      <div>
+                        <SourceBadge
+                          setId={m.sources[key]}
+                          href={`/projects/${projectId}/materials/${m.id}#lab-set-${m.sources[key]}`}
+                        />
+                      </div>
+                    ) : null}
                   </td>
                 );
               })}

@@ -25,7 +25,11 @@ export function NewMaterialForm({ projectId, onCreated }: NewMaterialFormProps) 
     event.preventDefault();
     void save(
       values,
-      (parameters) => ({ url: `/api/projects/${projectId}/materials`, method: "POST", json: { key, name, parameters } }),
+      (parameters) => ({
+        url: `/api/projects/${projectId}/materials`,
+        method: "POST",
+        json: { key, name, parameters },
+      }),
       (created) => {
         onCreated(created);
         setName("");
@@ -41,19 +45,44 @@ export function NewMaterialForm({ projectId, onCreated }: NewMaterialFormProps) 
     <form onSubmit={submit} className="panel space-y-3 p-4" noValidate data-testid="new-material-form">
       <h2 className="font-semibold">Add a material</h2>
       <div>
-        <label className="label" htmlFor="material-name">Name</label>
-        <input id="material-name" className="field" value={name} onChange={(e) => { setName(e.target.value); if (!keyTouched) setKey(suggestMaterialKey(e.target.value)); }} />
+        <label className="label" htmlFor="material-name">
+          Name
+        </label>
+        <input
+          id="material-name"
+          className="field"
+          value={name}
+          onChange={(e) => {
+            setName(e.target.value);
+            if (!keyTouched) setKey(suggestMaterialKey(e.target.value));
+          }}
+        />
         <FieldError messages={fields.name} />
       </div>
       <div>
-        <label className="label" htmlFor="material-key">Key used in sections</label>
-        <input id="material-key" className="field font-mono" value={key} onChange={(e) => { setKey(e.target.value); setKeyTouched(true); }} aria-describedby="material-key-hint" />
-        <p id="material-key-hint" className="mt-1 text-xs text-ink-faint">{MATERIAL_KEY_HINT}</p>
+        <label className="label" htmlFor="material-key">
+          Key used in sections
+        </label>
+        <input
+          id="material-key"
+          className="field font-mono"
+          value={key}
+          onChange={(e) => {
+            setKey(e.target.value);
+            setKeyTouched(true);
+          }}
+          aria-describedby="material-key-hint"
+        />
+        <p id="material-key-hint" className="mt-1 text-xs text-ink-faint">
+          {MATERIAL_KEY_HINT}
+        </p>
         <FieldError messages={fields.key} />
       </div>
       <ParameterFields idPrefix="new-material" values={values} onChange={setValues} fields={fields} />
       {banner ? <FormBanner kind={banner.kind}>{banner.text}</FormBanner> : null}
-      <button type="submit" className="btn-primary" disabled={busy}>{busy ? "Adding…" : "Add material"}</button>
+      <button type="submit" className="btn-primary" disabled={busy}>
+        {busy ? "Adding…" : "Add material"}
+      </button>
     </form>
   );
 }

@@ -4,8 +4,17 @@ export function SourceBadge({ setId, href }: { setId: number | undefined; href?:
   const cls = "ml-1 inline-block rounded-sm bg-moss-50 px-1 py-px align-middle text-[10px] font-medium text-moss-700";
   const text = `from lab test set ${setId}`;
   return href ? (
-    <a href={href} className={`${cls} hover:underline`} title={`Derived from lab test set ${setId}`} data-testid="source-badge">{text}</a>
+    <a
+      href={href}
+      className={`${cls} hover:underline`}
+      title={`Derived from lab test set ${setId}`}
+      data-testid="source-badge"
+    >
+      {text}
+    </a>
   ) : (
-    <span className={cls} title={`Derived from lab test set ${setId}`} data-testid="source-badge">{text}</span>
+    <span className={cls} title={`Derived from lab test set ${setId}`} data-testid="source-badge">
+      {text}
+    </span>
   );
 }

@@ -32,7 +32,10 @@ export function useMaterialSave() {
     setBusy(true);
     try {
       const { url, method, json } = request(parsed.parameters);
-      const result = await fetchJson<{ material: LibraryMaterial; warnings: { message: string }[] }>(url, { method, json });
+      const result = await fetchJson<{ material: LibraryMaterial; warnings: { message: string }[] }>(url, {
+        method,
+        json,
+      });
       const said = onDone(result.material);
       const notes = result.warnings.map((w) => w.message).join(" ");
       setBanner({ kind: "ok", text: `${said}${notes ? ` Note: ${notes}` : ""}` });

@@ -33,8 +33,10 @@ export function MembersManager({ projectId, initialMembers, candidates }: Member
       });
       await mutate(result, { revalidate: false });
     } catch (err) {
-      if (err instanceof ApiClientError) { setFields(err.fields); setError(err.message); }
-      else setError("Could not reach the server.");
+      if (err instanceof ApiClientError) {
+        setFields(err.fields);
+        setError(err.message);
+      } else setError("Could not reach the server.");
     }
   }
 
@@ -49,13 +51,25 @@ export function MembersManager({ projectId, initialMembers, candidates }: Member
 
   return (
     <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
-      <table className="w-full self-start rounded-lg border border-rule bg-paper-raised text-sm" data-testid="member-table">
+      <table
+        className="w-full self-start rounded-lg border border-rule bg-paper-raised text-sm"
+        data-testid="member-table"
+      >
         <thead className="bg-paper-sunk text-left text-xs uppercase tracking-wide text-ink-soft">
-          <tr><th className="px-3 py-2">Name</th><th className="px-3 py-2">E-mail</th><th className="px-3 py-2">Project role</th><th /></tr>
+          <tr>
+            <th className="px-3 py-2">Name</th>
+            <th className="px-3 py-2">E-mail</th>
+            <th className="px-3 py-2">Project role</th>
+            <th />
+          </tr>
         </thead>
         <tbody>
           {members.length === 0 ? (
-            <tr><td colSpan={4} className="px-3 py-6 text-center text-ink-soft">No members yet: add the people who work on this project.</td></tr>
+            <tr>
+              <td colSpan={4} className="px-3 py-6 text-center text-ink-soft">
+                No members yet: add the people who work on this project.
+              </td>
+            </tr>
           ) : (
             members.map((m) => (
               <tr key={m.userId} className="border-t border-rule">
@@ -63,7 +77,9 @@ export function MembersManager({ projectId, initialMembers, candidates }: Member
                 <td className="px-3 py-2 text-ink-soft">{m.email}</td>
                 <td className="px-3 py-2 capitalize">{m.role}</td>
                 <td className="px-3 py-2 text-right">
-                  <button className="text-xs text-alarm-700 hover:underline" onClick={() => remove(m.userId)}>Remove</button>
+                  <button className="text-xs text-alarm-700 hover:underline" onClick={() => remove(m.userId)}>
+                    Remove
+                  </button>
                 </td>
               </tr>
             ))
@@ -73,22 +89,38 @@ export function MembersManager({ projectId, initialMembers, candidates }: Member
       <form onSubmit={add} className="panel space-y-3 self-start p-4" noValidate>
         <h2 className="font-semibold">Add or change a member</h2>
         <div>
-          <label className="label" htmlFor="member-user">Person</label>
+          <label className="label" htmlFor="member-user">
+            Person
+          </label>
           <select id="member-user" name="userId" className="field" defaultValue="">
-            <option value="" disabled>Choose…</option>
-            {candidates.map((c) => <option key={c.id} value={c.id}>{c.name} ({c.email})</option>)}
+            <option value="" disabled>
+              Choose…
+            </option>
+            {candidates.map((c) => (
+              <option key={c.id} value={c.id}>
+                {c.name} ({c.email})
+              </option>
+            ))}
           </select>
           <FieldError messages={fields.userId} />
         </div>
         <div>
-          <label className="label" htmlFor="member-role">Role in this project</label>
+          <label className="label" htmlFor="member-role">
+            Role in this project
+          </label>
           <select id="member-role" name="role" className="field" defaultValue="engineer">
-            {PROJECT_ROLES.map((r) => <option key={r} value={r}>{r}</option>)}
+            {PROJECT_ROLES.map((r) => (
+              <option key={r} value={r}>
+                {r}
+              </option>
+            ))}
           </select>
           <FieldError messages={fields.role} />
         </div>
         {error ? <FormBanner kind="error">{error}</FormBanner> : null}
-        <button type="submit" className="btn-primary">Save member</button>
+        <button type="submit" className="btn-primary">
+          Save member
+        </button>
       </form>
     </div>
   );

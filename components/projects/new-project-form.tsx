@@ -12,7 +12,10 @@ export function NewProjectForm({ onDone, onCancel }: { onDone: () => void; onCan
     event.preventDefault();
     const form = new FormData(event.currentTarget);
     try {
-      await fetchJson("/api/projects", { method: "POST", json: { name: form.get("name"), description: form.get("description") } });
+      await fetchJson("/api/projects", {
+        method: "POST",
+        json: { name: form.get("name"), description: form.get("description") },
+      });
       onDone();
     } catch (err) {
       if (err instanceof ApiClientError) {
@@ -25,19 +28,27 @@ export function NewProjectForm({ onDone, onCancel }: { onDone: () => void; onCan
   return (
     <form onSubmit={onSubmit} className="panel space-y-3 p-4" noValidate>
       <div>
-        <label className="label" htmlFor="project-name">Name</label>
+        <label className="label" htmlFor="project-name">
+          Name
+        </label>
         <input id="project-name" name="name" className="field" />
         <FieldError messages={fields.name} />
       </div>
       <div>
-        <label className="label" htmlFor="project-description">Description</label>
+        <label className="label" htmlFor="project-description">
+          Description
+        </label>
         <textarea id="project-description" name="description" rows={2} className="field" />
         <FieldError messages={fields.description} />
       </div>
       {error ? <FormBanner kind="error">{error}</FormBanner> : null}
       <div className="flex gap-2">
-        <button type="submit" className="btn-primary">Create project</button>
-        <button type="button" className="btn-quiet" onClick={onCancel}>Cancel</button>
+        <button type="submit" className="btn-primary">
+          Create project
+        </button>
+        <button type="button" className="btn-quiet" onClick={onCancel}>
+          Cancel
+        </button>
       </div>
     </form>
   );

@@ -13,7 +13,9 @@ export interface ProjectListProps {
 }
 
 export function ProjectList({ initialProjects, canCreate }: ProjectListProps) {
-  const { data, mutate } = useSWR<{ projects: ProjectSummary[] }>("/api/projects", { fallbackData: { projects: initialProjects } });
+  const { data, mutate } = useSWR<{ projects: ProjectSummary[] }>("/api/projects", {
+    fallbackData: { projects: initialProjects },
+  });
   const [creating, setCreating] = useState(false);
   const projects = data?.projects ?? [];
 
@@ -21,9 +23,17 @@ export function ProjectList({ initialProjects, canCreate }: ProjectListProps) {
     <div className="space-y-4">
       {canCreate ? (
         creating ? (
-          <NewProjectForm onDone={() => { setCreating(false); void mutate(); }} onCancel={() => setCreating(false)} />
+          <NewProjectForm
+            onDone={() => {
+              setCreating(false);
+              void mutate();
+            }}
+            onCancel={() => setCreating(false)}
+          />
         ) : (
-          <button className="btn-primary" onClick={() => setCreating(true)}>New project</button>
+          <button className="btn-primary" onClick={() => setCreating(true)}>
+            New project
+          </button>
         )
       ) : null}
       {projects.length === 0 ? (
@@ -39,10 +49,14 @@ export function ProjectList({ initialProjects, canCreate }: ProjectListProps) {
               <Link href={`/projects/${p.id}`} className="panel block p-4 transition-colors hover:border-clay-500">
                 <div className="flex items-baseline justify-between gap-2">
                   <h2 className="font-semibold">{p.name}</h2>
-                  {p.memberRole ? <span className="text-xs uppercase tracking-wide text-ink-faint">{p.memberRole}</span> : null}
+                  {p.memberRole ? (
+                    <span className="text-xs uppercase tracking-wide text-ink-faint">{p.memberRole}</span>
+                  ) : null}
                 </div>
                 <p className="mt-1 line-clamp-2 text-sm text-ink-soft">{p.description || "No description."}</p>
-                <p className="mt-2 text-xs text-ink-faint">{p.memberCount} member{p.memberCount === 1 ? "" : "s"}</p>
+                <p className="mt-2 text-xs text-ink-faint">
+                  {p.memberCount} member{p.memberCount === 1 ? "" : "s"}
+                </p>
               </Link>
             </li>
           ))}

@@ -7,7 +7,9 @@ export function ProjectSections({ projectId, sections }: { projectId: number; se
       {sections.map((s) => (
         <li key={s.id} className="flex items-center justify-between gap-4 px-4 py-3">
           <div>
-            <Link href={`/projects/${projectId}/sections/${s.id}`} className="font-medium hover:text-clay-600">{s.name}</Link>
+            <Link href={`/projects/${projectId}/sections/${s.id}`} className="font-medium hover:text-clay-600">
+              {s.name}
+            </Link>
             <p className="text-xs text-ink-faint">
               v{s.currentVersion} · saved by {s.updatedByName} on {new Date(s.updatedAt).toLocaleDateString("en-GB")}
             </p>

@@ -9,7 +9,12 @@ export interface CommentListProps {
 
 /** Comments in the order written; the number matches the marker on the section. */
 export function CommentList({ comments, active = null, onSelect }: CommentListProps) {
-  if (comments.length === 0) return <p className="text-sm text-ink-faint" data-testid="comment-list">No comments yet.</p>;
+  if (comments.length === 0)
+    return (
+      <p className="text-sm text-ink-faint" data-testid="comment-list">
+        No comments yet.
+      </p>
+    );
   return (
     <ol className="space-y-2" data-testid="comment-list">
       {comments.map((c, i) => (
@@ -22,7 +27,14 @@ export function CommentList({ comments, active = null, onSelect }: CommentListPr
           <div className="mb-0.5 flex flex-wrap gap-x-2 text-xs text-ink-soft">
             <span className="font-semibold text-ink">{commentLabel(c, i)}</span>
             <span>{c.authorName}</span>
-            <span>{new Date(c.createdAt).toLocaleString("en-GB", { timeZone: "UTC", dateStyle: "medium", timeStyle: "short" })} UTC</span>
+            <span>
+              {new Date(c.createdAt).toLocaleString("en-GB", {
+                timeZone: "UTC",
+                dateStyle: "medium",
+                timeStyle: "short",
+              })}{" "}
+              UTC
+            </span>
           </div>
           <p className="whitespace-pre-wrap break-words">{c.body}</p>
         </li>

@@ -2,7 +2,12 @@ import type { CaughtMail } from "@/lib/mail/caught-mail";
 
 /** Caught messages with their headers; the body opens on demand. */
 export function MailLog({ messages }: { messages: readonly CaughtMail[] }) {
-  if (messages.length === 0) return <p className="panel p-4 text-sm text-ink-faint" data-testid="mail-log">No mail has been caught yet.</p>;
+  if (messages.length === 0)
+    return (
+      <p className="panel p-4 text-sm text-ink-faint" data-testid="mail-log">
+        No mail has been caught yet.
+      </p>
+    );
   return (
     <ol className="space-y-2" data-testid="mail-log">
       {messages.map((m) => (
@@ -13,12 +18,21 @@ export function MailLog({ messages }: { messages: readonly CaughtMail[] }) {
               <span className="ml-2 text-xs text-ink-soft">to {m.to.join(", ") || m.envelope.to.join(", ")}</span>
             </summary>
             <dl className="mt-2 grid grid-cols-[6rem_1fr] gap-y-1 text-xs">
-              <dt className="text-ink-soft">From</dt><dd>{m.from}</dd>
-              <dt className="text-ink-soft">To</dt><dd>{m.to.join(", ")}</dd>
-              <dt className="text-ink-soft">Delivered to</dt><dd>{m.envelope.to.join(", ")}</dd>
-              <dt className="text-ink-soft">Date</dt><dd>{new Date(m.date ?? m.receivedAt).toLocaleString("en-GB", { timeZone: "UTC" })} UTC</dd>
+              <dt className="text-ink-soft">From</dt>
+              <dd>{m.from}</dd>
+              <dt className="text-ink-soft">To</dt>
+              <dd>{m.to.join(", ")}</dd>
+              <dt className="text-ink-soft">Delivered to</dt>
+              <dd>{m.envelope.to.join(", ")}</dd>
+              <dt className="text-ink-soft">Date</dt>
+              <dd>{new Date(m.date ?? m.receivedAt).toLocaleString("en-GB", { timeZone: "UTC" })} UTC</dd>
             </dl>
-            <pre className="mt-2 overflow-x-auto whitespace-pre-wrap rounded bg-paper-sunk p-2 font-mono text-xs" data-testid="mail-body">{m.text}</pre>
+            <pre
+              className="mt-2 overflow-x-auto whitespace-pre-wrap rounded bg-paper-sunk p-2 font-mono text-xs"
+              data-testid="mail-body"
+            >
+              {m.text}
+            </pre>
           </details>
         </li>
       ))}

@@ -27,7 +27,14 @@ interface Frame {
  * Numbered comment markers over a RunCanvas, kept in step with its pan and zoom by watching the
  * canvas's data-view; in placing mode a click converts to section coordinates (m).
  */
-export function PinnedCanvas({ markers, placing = false, onPlace, active = null, onSelect, children }: PinnedCanvasProps) {
+export function PinnedCanvas({
+  markers,
+  placing = false,
+  onPlace,
+  active = null,
+  onSelect,
+  children,
+}: PinnedCanvasProps) {
   const wrapRef = useRef<HTMLDivElement>(null);
   const [frame, setFrame] = useState<Frame | null>(null);
 
@@ -50,7 +57,10 @@ export function PinnedCanvas({ markers, placing = false, onPlace, active = null,
     mo.observe(canvas, { attributes: true, attributeFilter: ["data-view"] });
     const ro = typeof ResizeObserver === "undefined" ? null : new ResizeObserver(read);
     ro?.observe(canvas);
-    return () => { mo.disconnect(); ro?.disconnect(); };
+    return () => {
+      mo.disconnect();
+      ro?.disconnect();
+    };
   }, []);
 
   function place(e: React.MouseEvent<HTMLDivElement>) {
@@ -71,7 +81,11 @@ export function PinnedCanvas({ markers, placing = false, onPlace, active = null,
           data-testid="pin-overlay"
           data-placing={placing ? "true" : "false"}
         >
-          {placing ? <p className="absolute left-2 top-2 rounded bg-paper-raised/90 px-2 py-0.5 text-xs text-ink">Click the place on the section the comment is about</p> : null}
+          {placing ? (
+            <p className="absolute left-2 top-2 rounded bg-paper-raised/90 px-2 py-0.5 text-xs text-ink">
+              Click the place on the section the comment is about
+            </p>
+          ) : null}
           {markers.map((m) => {
             const s = toScreen(frame.view, m.x, m.y);
             return (
@@ -83,7 +97,10 @@ export function PinnedCanvas({ markers, placing = false, onPlace, active = null,
                 title={m.label}
                 aria-label={`Comment ${m.n}: ${m.label}`}
                 data-testid={`comment-pin-${m.n}`}
-                onClick={(e) => { e.stopPropagation(); onSelect?.(m.n); }}
+                onClick={(e) => {
+                  e.stopPropagation();
+                  onSelect?.(m.n);
+                }}
               >
                 {m.n}
               </button>

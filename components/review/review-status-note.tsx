@@ -1,6 +1,9 @@
 import type { ReviewRecord } from "@/db/queries/review";
 
-const at = (iso: string | null) => (iso ? `${new Date(iso).toLocaleString("en-GB", { timeZone: "UTC", dateStyle: "medium", timeStyle: "short" })} UTC` : "");
+const at = (iso: string | null) =>
+  iso
+    ? `${new Date(iso).toLocaleString("en-GB", { timeZone: "UTC", dateStyle: "medium", timeStyle: "short" })} UTC`
+    : "";
 
 /** One sentence on where the review stands, with the reviewer's note. */
 export function ReviewStatusNote({ record }: { record: ReviewRecord }) {
@@ -9,15 +12,21 @@ export function ReviewStatusNote({ record }: { record: ReviewRecord }) {
     case "approved":
       return (
         <div className={`${box} border-moss-600 bg-moss-50`} data-testid="review-status-note">
-          <strong>Signed off</strong> by {record.reviewedByName} on {at(record.reviewedAt)}. The run and its inputs are frozen; a change needs a revision.
-          {record.reviewNote ? <p className="mt-1 whitespace-pre-wrap">Reviewer&apos;s note: {record.reviewNote}</p> : null}
+          <strong>Signed off</strong> by {record.reviewedByName} on {at(record.reviewedAt)}. The run and its inputs are
+          frozen; a change needs a revision.
+          {record.reviewNote ? (
+            <p className="mt-1 whitespace-pre-wrap">Reviewer&apos;s note: {record.reviewNote}</p>
+          ) : null}
         </div>
       );
     case "returned":
       return (
         <div className={`${box} border-alarm-600 bg-alarm-50`} data-testid="review-status-note">
-          <strong>Returned with comments</strong> by {record.reviewedByName} on {at(record.reviewedAt)}. Revise it as a new run and submit that one.
-          {record.reviewNote ? <p className="mt-1 whitespace-pre-wrap">Reviewer&apos;s note: {record.reviewNote}</p> : null}
+          <strong>Returned with comments</strong> by {record.reviewedByName} on {at(record.reviewedAt)}. Revise it as a
+          new run and submit that one.
+          {record.reviewNote ? (
+            <p className="mt-1 whitespace-pre-wrap">Reviewer&apos;s note: {record.reviewNote}</p>
+          ) : null}
         </div>
       );
     case "submitted":
@@ -29,7 +38,8 @@ export function ReviewStatusNote({ record }: { record: ReviewRecord }) {
     default:
       return (
         <div className={`${box} border-rule bg-paper-raised`} data-testid="review-status-note">
-          <strong>Draft.</strong> Its author submits it for review when it is ready; until then it can be renamed or deleted.
+          <strong>Draft.</strong> Its author submits it for review when it is ready; until then it can be renamed or
+          deleted.
         </div>
       );
   }

@@ -33,17 +33,31 @@ export function ReviewWorkspace({ run, review, mode, canRevise }: ReviewWorkspac
   const pagePath = `/projects/${run.projectId}/runs/${run.id}`;
   const tables = run.sliceTables as Tables;
   const markers = pinMarkers(review.comments, tables);
-  const shown = pin ? [...markers, { n: review.comments.length + 1, x: pin.x, y: pin.y, label: "Place of the comment being written" }] : markers;
+  const shown = pin
+    ? [...markers, { n: review.comments.length + 1, x: pin.x, y: pin.y, label: "Place of the comment being written" }]
+    : markers;
   const sliceCounts = Object.fromEntries(Object.entries(tables).map(([m, t]) => [m, t?.slices.length ?? 0]));
   const reviews = review.may.actions.includes("approve") || review.may.actions.includes("return");
   const openItems = review.checklist.filter((c) => c.state !== "ok").length;
 
   const links = (
     <>
-      <a className="btn-quiet" href={`${apiBase}/report`} target="_blank" rel="noopener" data-testid="report-link">Calculation report (PDF)</a>
-      <a className="btn-quiet" href={`/api/projects/${run.projectId}/runs/export`} download>All runs (CSV)</a>
-      {mode === "run" && reviews ? <Link className="btn-primary" href={`${pagePath}/review`}>Review this run</Link> : null}
-      {mode === "review" ? <Link className="btn-quiet" href={pagePath}>Back to the run</Link> : null}
+      <a className="btn-quiet" href={`${apiBase}/report`} target="_blank" rel="noopener" data-testid="report-link">
+        Calculation report (PDF)
+      </a>
+      <a className="btn-quiet" href={`/api/projects/${run.projectId}/runs/export`} download>
+        All runs (CSV)
+      </a>
+      {mode === "run" && reviews ? (
+        <Link className="btn-primary" href={`${pagePath}/review`}>
+          Review this run
+        </Link>
+      ) : null}
+      {mode === "review" ? (
+        <Link className="btn-quiet" href={pagePath}>
+          Back to the run
+        </Link>
+      ) : null}
     </>
   );
 
@@ -55,27 +69,53 @@ export function ReviewWorkspace({ run, review, mode, canRevise }: ReviewWorkspac
         canRevise={canRevise}
         markers={shown}
         placing={placing}
-        onPlace={(p) => { setPin(p); setPlacing(false); }}
+        onPlace={(p) => {
+          setPin(p);
+          setPlacing(false);
+        }}
         activePin={active}
         onSelectPin={setActive}
         actions={links}
       />
       <div className="grid gap-4 lg:grid-cols-2">
         <section className="panel space-y-3 p-4" aria-labelledby="comments-heading">
-          <h2 id="comments-heading" className="font-semibold">Comments</h2>
+          <h2 id="comments-heading" className="font-semibold">
+            Comments
+          </h2>
           <CommentList comments={review.comments} active={active} onSelect={setActive} />
           {review.may.comment ? (
-            <CommentForm apiBase={apiBase} sliceCounts={sliceCounts} pin={pin} placing={placing} onPlacing={setPlacing} onClearPin={() => setPin(null)} />
+            <CommentForm
+              apiBase={apiBase}
+              sliceCounts={sliceCounts}
+              pin={pin}
+              placing={placing}
+              onPlacing={setPlacing}
+              onClearPin={() => setPin(null)}
+            />
           ) : null}
         </section>
         <div className="space-y-4">
           {mode === "review" ? (
             <>
-              <ChecklistPanel key={review.checklist.map((c) => `${c.state}:${c.note}`).join("|")} apiBase={apiBase} items={review.checklist} editable={review.may.checklist} />
+              <ChecklistPanel
+                key={review.checklist.map((c) => `${c.state}:${c.note}`).join("|")}
+                apiBase={apiBase}
+                items={review.checklist}
+                editable={review.may.checklist}
+              />
               <DecisionForm apiBase={apiBase} actions={review.may.actions} openItems={openItems} />
             </>
           ) : (
-            <AuthorActions apiBase={apiBase} projectId={run.projectId} title={run.title} may={{ submit: review.may.actions.includes("submit"), rename: review.may.rename, delete: review.may.delete }} />
+            <AuthorActions
+              apiBase={apiBase}
+              projectId={run.projectId}
+              title={run.title}
+              may={{
+                submit: review.may.actions.includes("submit"),
+                rename: review.may.rename,
+                delete: review.may.delete,
+              }}
+            />
           )}
         </div>
       </div>

@@ -18,7 +18,11 @@ export function useRunAction() {
       router.refresh();
       return true;
     } catch (err) {
-      setError(err instanceof ApiClientError ? { message: err.message, fields: err.fields } : { message: "Could not reach the server.", fields: {} });
+      setError(
+        err instanceof ApiClientError
+          ? { message: err.message, fields: err.fields }
+          : { message: "Could not reach the server.", fields: {} },
+      );
       return false;
     } finally {
       setBusy(false);

@@ -21,9 +21,21 @@ export function RunComparison({ runs }: { runs: RunDetail[] }) {
     const result = run.result as GridSearchSuccess;
     const method = result.results.bishop ? "bishop" : "fellenius";
     const c = result.results[method];
-    return c ? [{ label: `${letter(i)} ${method === "bishop" ? "Bishop" : "ordinary"} ${c.fs.toFixed(3)}`, color: OVERLAY_COLOURS[i % OVERLAY_COLOURS.length], circle: c.circle, entry: c.entry, exit: c.exit }] : [];
+    return c
+      ? [
+          {
+            label: `${letter(i)} ${method === "bishop" ? "Bishop" : "ordinary"} ${c.fs.toFixed(3)}`,
+            color: OVERLAY_COLOURS[i % OVERLAY_COLOURS.length],
+            circle: c.circle,
+            entry: c.entry,
+            exit: c.exit,
+          },
+        ]
+      : [];
   });
-  const sameGeometry = runs.every((r) => JSON.stringify((r.document as SectionDocument).regions) === JSON.stringify(baseDoc.regions));
+  const sameGeometry = runs.every(
+    (r) => JSON.stringify((r.document as SectionDocument).regions) === JSON.stringify(baseDoc.regions),
+  );
 
   return (
     <div className="space-y-4">
@@ -38,24 +50,55 @@ export function RunComparison({ runs }: { runs: RunDetail[] }) {
         }))}
       />
       <div>
-        <RunCanvas document={baseDoc} materialColors={Object.fromEntries(materialPalette(baseDoc.materials).map((m) => [m.key, m.color]))} overlays={overlays} height={460} />
-        {!sameGeometry ? <p className="mt-1 text-xs text-ink-soft">The runs analyse different geometry; the circles are drawn on the section of run A ({base.sectionName} v{base.sectionVersion}).</p> : null}
+        <RunCanvas
+          document={baseDoc}
+          materialColors={Object.fromEntries(materialPalette(baseDoc.materials).map((m) => [m.key, m.color]))}
+          overlays={overlays}
+          height={460}
+        />
+        {!sameGeometry ? (
+          <p className="mt-1 text-xs text-ink-soft">
+            The runs analyse different geometry; the circles are drawn on the section of run A ({base.sectionName} v
+            {base.sectionVersion}).
+          </p>
+        ) : null}
       </div>
       <section className="space-y-3" aria-label="Differences in the inputs">
         <h2 className="text-lg font-semibold">What differs in the inputs</h2>
         {runs.slice(1).map((run, i) => {
           const differences = diffDocuments(baseDoc, run.document as SectionDocument);
           const extra = [
-            run.requiredFs !== base.requiredFs ? { area: "analysis" as const, path: "requiredFs", text: `required FS ${base.requiredFs} → ${run.requiredFs}` } : null,
-            run.loadingCondition !== base.loadingCondition ? { area: "analysis" as const, path: "condition", text: `loading condition ${base.loadingCondition} → ${run.loadingCondition}` } : null,
+            run.requiredFs !== base.requiredFs
+              ? {
+                  area: "analysis" as const,
+                  path: "requiredFs",
+                  text: `required FS ${base.requiredFs} → ${run.requiredFs}`,
+                }
+              : null,
+            run.loadingCondition !== base.loadingCondition
+              ? {
+                  area: "analysis" as const,
+                  path: "condition",
+                  text: `loading condition ${base.loadingCondition} → ${run.loadingCondition}`,
+                }
+              : null,
           ].filter((d): d is NonNullable<typeof d> => d !== null);
           return (
             <div key={run.id} className="panel p-3" data-testid={`diff-${letter(i + 1)}`}>
               <h3 className="mb-2 text-sm font-semibold">
-                <Link href={`/projects/${run.projectId}/runs/${base.id}`} className="hover:text-clay-600">A</Link> →{" "}
-                <Link href={`/projects/${run.projectId}/runs/${run.id}`} className="hover:text-clay-600">{letter(i + 1)}</Link>
+                <Link href={`/projects/${run.projectId}/runs/${base.id}`} className="hover:text-clay-600">
+                  A
+                </Link>{" "}
+                →{" "}
+                <Link href={`/projects/${run.projectId}/runs/${run.id}`} className="hover:text-clay-600">
+                  {letter(i + 1)}
+                </Link>
               </h3>
-              <InputDiff differences={[...extra, ...differences]} beforeLabel={`A: ${base.title}`} afterLabel={`${letter(i + 1)}: ${run.title}`} />
+              <InputDiff
+                differences={[...extra, ...differences]}
+                beforeLabel={`A: ${base.title}`}
+                afterLabel={`${letter(i + 1)}: ${run.title}`}
+              />
             </div>
           );
         })}

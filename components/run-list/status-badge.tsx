@@ -9,7 +9,10 @@ const STYLES: Record<string, { label: string; cls: string; mark: string }> = {
 export function StatusBadge({ status }: { status: string }) {
   const s = STYLES[status] ?? STYLES.draft;
   return (
-    <span className={`inline-flex items-center gap-1 rounded border px-1.5 py-0.5 text-xs ${s.cls}`} data-testid="run-status">
+    <span
+      className={`inline-flex items-center gap-1 rounded border px-1.5 py-0.5 text-xs ${s.cls}`}
+      data-testid="run-status"
+    >
       <span aria-hidden="true">{s.mark}</span>
       {s.label}
     </span>
@@ -22,7 +25,9 @@ export function PassMark({ fs, required }: { fs: number | null; required: number
   return (
     <span className={pass ? "text-moss-700" : "text-alarm-700"}>
       <span className="tabular-nums">{fs.toFixed(3)}</span> <span aria-hidden="true">{pass ? "✓" : "✕"}</span>
-      <span className="sr-only">{pass ? "meets" : "below"} the required {required}</span>
+      <span className="sr-only">
+        {pass ? "meets" : "below"} the required {required}
+      </span>
     </span>
   );
 }

@@ -37,7 +37,10 @@ export function toRunSetup(v: RunSetupInput): unknown {
     slices: v.slices,
     ordinaryForm: v.ordinaryForm,
     grid: v.grid,
-    radii: v.radiusMode === "tangent" ? { tangentY1: v.tangentY1, tangentY2: v.tangentY2, n: v.radiusCount } : { r1: v.r1, r2: v.r2, n: v.radiusCount },
+    radii:
+      v.radiusMode === "tangent"
+        ? { tangentY1: v.tangentY1, tangentY2: v.tangentY2, n: v.radiusCount }
+        : { r1: v.r1, r2: v.r2, n: v.radiusCount },
     refine: v.refine,
     drawdownFrom: nanToUndefined(v.drawdownFrom),
     drawdownTo: nanToUndefined(v.drawdownTo),
@@ -69,7 +72,13 @@ export function fromRunSetup(s: RunSetup): RunSetupInput {
   };
 }
 
-const RADII_FIELDS: Record<string, string> = { tangentY1: "tangentY1", tangentY2: "tangentY2", r1: "r1", r2: "r2", n: "radiusCount" };
+const RADII_FIELDS: Record<string, string> = {
+  tangentY1: "tangentY1",
+  tangentY2: "tangentY2",
+  r1: "r1",
+  r2: "r2",
+  n: "radiusCount",
+};
 
 function formPath(path: PropertyKey[]): string {
   if (path[0] === "radii") return RADII_FIELDS[String(path[1])] ?? "radiusCount";

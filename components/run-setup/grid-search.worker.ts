@@ -8,7 +8,12 @@ import { analyzeCircle, runGridSearch, type CircleSuccess, type SectionDocument 
 export type WorkerRequest = { doc: SectionDocument };
 export type WorkerMessage =
   | { type: "progress"; fraction: number }
-  | { type: "done"; result: ReturnType<typeof runGridSearch>; critical: Partial<Record<"bishop" | "fellenius", CircleSuccess>>; elapsedMs: number }
+  | {
+      type: "done";
+      result: ReturnType<typeof runGridSearch>;
+      critical: Partial<Record<"bishop" | "fellenius", CircleSuccess>>;
+      elapsedMs: number;
+    }
   | { type: "error"; message: string };
 
 const ctx = self as unknown as DedicatedWorkerGlobalScope;

@@ -50,7 +50,15 @@ function defaults(doc: SectionDocument, requiredFs: Record<LoadingConditionKey, 
   };
 }
 
-export function RunSetupForm({ projectId, section, document: doc, requiredFs, initial, revisesRunId, materialColors }: RunSetupFormProps) {
+export function RunSetupForm({
+  projectId,
+  section,
+  document: doc,
+  requiredFs,
+  initial,
+  revisesRunId,
+  materialColors,
+}: RunSetupFormProps) {
   const router = useRouter();
   const form = useForm<RunSetupInput, unknown, RunSetup>({
     resolver: runSetupResolver,
@@ -107,8 +115,12 @@ export function RunSetupForm({ projectId, section, document: doc, requiredFs, in
         <ConditionFields form={form} onCondition={onCondition} />
         <MethodFields form={form} />
         <GridFields form={form} onSuggest={() => placeGrid()} />
-        <button type="submit" className="btn-primary w-full" disabled={running}>{running ? "Searching…" : "Run the search"}</button>
-        <p className="text-xs text-ink-faint">The search runs in your browser; the server re-checks the critical circles when you save.</p>
+        <button type="submit" className="btn-primary w-full" disabled={running}>
+          {running ? "Searching…" : "Run the search"}
+        </button>
+        <p className="text-xs text-ink-faint">
+          The search runs in your browser; the server re-checks the critical circles when you save.
+        </p>
       </form>
       <div className="min-w-0 space-y-3">
         <SearchProgress state={search.state} onCancel={search.cancel} />

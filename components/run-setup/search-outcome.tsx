@@ -29,7 +29,14 @@ export function SearchOutcome({ projectId, section, setup, outcome, revisesRunId
     return (
       <div className="panel p-4 text-sm" data-testid="search-errors">
         <p className="font-semibold text-alarm-700">The section cannot be analysed as it is:</p>
-        <ul className="mt-1 list-disc pl-5">{result.errors.map((e, i) => <li key={i}>{e.path ? `${e.path}: ` : ""}{e.message}</li>)}</ul>
+        <ul className="mt-1 list-disc pl-5">
+          {result.errors.map((e, i) => (
+            <li key={i}>
+              {e.path ? `${e.path}: ` : ""}
+              {e.message}
+            </li>
+          ))}
+        </ul>
       </div>
     );
   }
@@ -52,17 +59,28 @@ export function SearchOutcome({ projectId, section, setup, outcome, revisesRunId
   const method = result.methods.includes("bishop") && critical.bishop ? "bishop" : "fellenius";
   return (
     <div className="space-y-3" data-testid="search-outcome">
-      <p className="text-xs text-ink-faint">{result.circles.tried.toLocaleString("en-GB")} circles in {(outcome.elapsedMs / 1000).toFixed(2)} s</p>
+      <p className="text-xs text-ink-faint">
+        {result.circles.tried.toLocaleString("en-GB")} circles in {(outcome.elapsedMs / 1000).toFixed(2)} s
+      </p>
       <FsSummary result={result} requiredFs={setup.requiredFs} critical={critical} />
       <div className="panel flex flex-wrap items-end gap-3 p-3">
         <div className="min-w-64 flex-1">
-          <label className="label" htmlFor="run-title">Name of the run</label>
+          <label className="label" htmlFor="run-title">
+            Name of the run
+          </label>
           <input id="run-title" className="field" value={title} onChange={(e) => setTitle(e.target.value)} />
         </div>
-        <button type="button" className="btn-primary" onClick={save} disabled={saving || title.trim().length < 3}>{saving ? "Saving…" : "Keep this run"}</button>
+        <button type="button" className="btn-primary" onClick={save} disabled={saving || title.trim().length < 3}>
+          {saving ? "Saving…" : "Keep this run"}
+        </button>
       </div>
       {error ? <FormBanner kind="error">{error}</FormBanner> : null}
-      {critical[method] ? <SliceTable rows={critical[method]!.slices} meta={{ title, section: `${section.name} v${section.version}`, method }} /> : null}
+      {critical[method] ? (
+        <SliceTable
+          rows={critical[method]!.slices}
+          meta={{ title, section: `${section.name} v${section.version}`, method }}
+        />
+      ) : null}
     </div>
   );
 }

@@ -7,13 +7,37 @@ import type { RunSetupInput } from "./form-values";
 
 type SetupForm = UseFormReturn<RunSetupInput, unknown, RunSetup>;
 
-function Num({ form, name, label, unit, step = "any" }: { form: SetupForm; name: string; label: string; unit?: string; step?: string }) {
-  const error = name.split(".").reduce<unknown>((o, k) => (o as Record<string, unknown> | undefined)?.[k], form.formState.errors) as { message?: string } | undefined;
+function Num({
+  form,
+  name,
+  label,
+  unit,
+  step = "any",
+}: {
+  form: SetupForm;
+  name: string;
+  label: string;
+  unit?: string;
+  step?: string;
+}) {
+  const error = name
+    .split(".")
+    .reduce<unknown>((o, k) => (o as Record<string, unknown> | undefined)?.[k], form.formState.errors) as
+    { message?: string } | undefined;
   const id = `f-${name.replace(/\./g, "-")}`;
   return (
     <div>
-      <label className="label" htmlFor={id}>{label}{unit ? <span className="normal-case text-ink-faint"> ({unit})</span> : null}</label>
-      <input id={id} type="number" step={step} className="field tabular-nums" {...form.register(name as never, { valueAsNumber: true })} />
+      <label className="label" htmlFor={id}>
+        {label}
+        {unit ? <span className="normal-case text-ink-faint"> ({unit})</span> : null}
+      </label>
+      <input
+        id={id}
+        type="number"
+        step={step}
+        className="field tabular-nums"
+        {...form.register(name as never, { valueAsNumber: true })}
+      />
       {error?.message ? <p className="field-error">{error.message}</p> : null}
     </div>
   );
@@ -25,13 +49,22 @@ export function ConditionFields({ form, onCondition }: { form: SetupForm; onCond
   return (
     <fieldset className="space-y-3">
       <legend className="mb-1 text-sm font-semibold">Loading condition</legend>
-      <select className="field" aria-label="Loading condition" {...form.register("condition", { onChange: (e) => onCondition(e.target.value) })}>
-        {LOADING_CONDITIONS.map((c) => <option key={c.key} value={c.key}>{c.label}</option>)}
+      <select
+        className="field"
+        aria-label="Loading condition"
+        {...form.register("condition", { onChange: (e) => onCondition(e.target.value) })}
+      >
+        {LOADING_CONDITIONS.map((c) => (
+          <option key={c.key} value={c.key}>
+            {c.label}
+          </option>
+        ))}
       </select>
       <div className="flex gap-4 text-sm" role="radiogroup" aria-label="Face checked">
         {(["upstream", "downstream"] as const).map((f) => (
           <label key={f} className="inline-flex items-center gap-1.5">
-            <input type="radio" value={f} {...form.register("face")} /> {f === "upstream" ? "Upstream face" : "Downstream face"}
+            <input type="radio" value={f} {...form.register("face")} />{" "}
+            {f === "upstream" ? "Upstream face" : "Downstream face"}
           </label>
         ))}
       </div>
@@ -40,7 +73,9 @@ export function ConditionFields({ form, onCondition }: { form: SetupForm; onCond
           <Num form={form} name="drawdownFrom" label="Pool before" unit="m" />
           <Num form={form} name="drawdownTo" label="Pool after" unit="m" />
           <div className="col-span-2">
-            <label className="label" htmlFor="f-drawdownMethod">Drawdown method</label>
+            <label className="label" htmlFor="f-drawdownMethod">
+              Drawdown method
+            </label>
             <select id="f-drawdownMethod" className="field" {...form.register("drawdownMethod")}>
               <option value="effective">Effective stress, pore pressures held (simple)</option>
               <option value="staged">Staged total stress (three stages, R envelope)</option>
@@ -58,14 +93,22 @@ export function MethodFields({ form }: { form: SetupForm }) {
     <fieldset className="space-y-3">
       <legend className="mb-1 text-sm font-semibold">Methods</legend>
       <div className="flex flex-col gap-1 text-sm">
-        <label className="inline-flex items-center gap-1.5"><input type="checkbox" value="bishop" {...form.register("methods")} /> Bishop&apos;s simplified method</label>
-        <label className="inline-flex items-center gap-1.5"><input type="checkbox" value="fellenius" {...form.register("methods")} /> Ordinary method of slices</label>
-        {form.formState.errors.methods?.message ? <p className="field-error">{form.formState.errors.methods.message}</p> : null}
+        <label className="inline-flex items-center gap-1.5">
+          <input type="checkbox" value="bishop" {...form.register("methods")} /> Bishop&apos;s simplified method
+        </label>
+        <label className="inline-flex items-center gap-1.5">
+          <input type="checkbox" value="fellenius" {...form.register("methods")} /> Ordinary method of slices
+        </label>
+        {form.formState.errors.methods?.message ? (
+          <p className="field-error">{form.formState.errors.methods.message}</p>
+        ) : null}
       </div>
       <div className="grid grid-cols-2 gap-2">
         <Num form={form} name="slices" label="Slices" step="1" />
         <div>
-          <label className="label" htmlFor="f-ordinaryForm">Ordinary form</label>
+          <label className="label" htmlFor="f-ordinaryForm">
+            Ordinary form
+          </label>
           <select id="f-ordinaryForm" className="field" {...form.register("ordinaryForm")}>
             <option value="classical">Classical (N − u·l)</option>
             <option value="effective-weight">Effective weight</option>
@@ -82,7 +125,9 @@ export function GridFields({ form, onSuggest }: { form: SetupForm; onSuggest: ()
     <fieldset className="space-y-3">
       <legend className="mb-1 flex w-full items-center justify-between text-sm font-semibold">
         Trial centres and radii
-        <button type="button" className="text-xs font-normal text-clay-600 hover:underline" onClick={onSuggest}>Place for this face</button>
+        <button type="button" className="text-xs font-normal text-clay-600 hover:underline" onClick={onSuggest}>
+          Place for this face
+        </button>
       </legend>
       <div className="grid grid-cols-2 gap-2">
         <Num form={form} name="grid.x1" label="Left x" unit="m" />
@@ -93,11 +138,17 @@ export function GridFields({ form, onSuggest }: { form: SetupForm; onSuggest: ()
         <Num form={form} name="grid.ny" label="Rows" step="1" />
       </div>
       {form.formState.errors.grid?.message || form.formState.errors.grid?.root?.message ? (
-        <p className="field-error">{form.formState.errors.grid?.message ?? form.formState.errors.grid?.root?.message}</p>
+        <p className="field-error">
+          {form.formState.errors.grid?.message ?? form.formState.errors.grid?.root?.message}
+        </p>
       ) : null}
       <div className="flex gap-4 text-sm" role="radiogroup" aria-label="Radius set">
-        <label className="inline-flex items-center gap-1.5"><input type="radio" value="tangent" {...form.register("radiusMode")} /> Tangent elevations</label>
-        <label className="inline-flex items-center gap-1.5"><input type="radio" value="range" {...form.register("radiusMode")} /> Radius range</label>
+        <label className="inline-flex items-center gap-1.5">
+          <input type="radio" value="tangent" {...form.register("radiusMode")} /> Tangent elevations
+        </label>
+        <label className="inline-flex items-center gap-1.5">
+          <input type="radio" value="range" {...form.register("radiusMode")} /> Radius range
+        </label>
       </div>
       {mode === "tangent" ? (
         <div className="grid grid-cols-3 gap-2">
@@ -112,7 +163,9 @@ export function GridFields({ form, onSuggest }: { form: SetupForm; onSuggest: ()
           <Num form={form} name="radiusCount" label="Count" step="1" />
         </div>
       )}
-      <label className="inline-flex items-center gap-1.5 text-sm"><input type="checkbox" {...form.register("refine")} /> Refine around the best centres</label>
+      <label className="inline-flex items-center gap-1.5 text-sm">
+        <input type="checkbox" {...form.register("refine")} /> Refine around the best centres
+      </label>
     </fieldset>
   );
 }

@@ -33,10 +33,18 @@ export function useGridSearch() {
       w.onmessage = (event: MessageEvent<WorkerMessage>) => {
         const m = event.data;
         if (m.type === "progress") setState({ status: "running", fraction: m.fraction, startedAt });
-        else if (m.type === "error") { setState({ status: "failed", message: m.message }); stop(); }
-        else { setState({ status: "done", message: m }); stop(); }
+        else if (m.type === "error") {
+          setState({ status: "failed", message: m.message });
+          stop();
+        } else {
+          setState({ status: "done", message: m });
+          stop();
+        }
       };
-      w.onerror = (e) => { setState({ status: "failed", message: e.message || "The search stopped unexpectedly." }); stop(); };
+      w.onerror = (e) => {
+        setState({ status: "failed", message: e.message || "The search stopped unexpectedly." });
+        stop();
+      };
       w.postMessage({ doc });
     },
     [stop],

@@ -34,7 +34,16 @@ export interface RunViewProps {
 }
 
 /** A kept run exactly as it was saved: its frozen section, settings, critical circles and slices. */
-export function RunView({ run, canRevise, markers = [], placing, onPlace, activePin, onSelectPin, actions }: RunViewProps) {
+export function RunView({
+  run,
+  canRevise,
+  markers = [],
+  placing,
+  onPlace,
+  activePin,
+  onSelectPin,
+  actions,
+}: RunViewProps) {
   const result = run.result as StoredResult;
   const tables = run.sliceTables as StoredSlices;
   const doc = run.document as SectionDocument;
@@ -51,29 +60,71 @@ export function RunView({ run, canRevise, markers = [], placing, onPlace, active
         <StatusBadge status={run.status} />
         <span>{condition?.label ?? run.loadingCondition}</span>
         <span className="capitalize">{run.face} face</span>
-        <span>{run.sectionName} v{run.sectionVersion}</span>
-        <span>by {run.authorName}, {new Date(run.createdAt).toLocaleString("en-GB")}</span>
+        <span>
+          {run.sectionName} v{run.sectionVersion}
+        </span>
+        <span>
+          by {run.authorName}, {new Date(run.createdAt).toLocaleString("en-GB")}
+        </span>
         <span>engine {run.engineVersion}</span>
-        {run.revisesRunId ? <Link className="text-clay-600 hover:underline" href={`/projects/${run.projectId}/runs/${run.revisesRunId}`}>revises run {run.revisesRunId}</Link> : null}
+        {run.revisesRunId ? (
+          <Link className="text-clay-600 hover:underline" href={`/projects/${run.projectId}/runs/${run.revisesRunId}`}>
+            revises run {run.revisesRunId}
+          </Link>
+        ) : null}
       </div>
       <div className="flex flex-wrap items-center gap-2">
         {methods.length > 1 ? (
-          <div className="inline-flex overflow-hidden rounded-md border border-rule text-sm" role="group" aria-label="Method shown">
+          <div
+            className="inline-flex overflow-hidden rounded-md border border-rule text-sm"
+            role="group"
+            aria-label="Method shown"
+          >
             {methods.map((m) => (
-              <button key={m} type="button" onClick={() => setMethod(m)} aria-pressed={method === m} className={`px-3 py-1 ${method === m ? "bg-ink text-paper" : "bg-paper-raised hover:bg-paper-sunk"}`}>
+              <button
+                key={m}
+                type="button"
+                onClick={() => setMethod(m)}
+                aria-pressed={method === m}
+                className={`px-3 py-1 ${method === m ? "bg-ink text-paper" : "bg-paper-raised hover:bg-paper-sunk"}`}
+              >
                 {m === "bishop" ? "Bishop's simplified" : "Ordinary method"}
               </button>
             ))}
           </div>
         ) : null}
-        <button type="button" className="btn-quiet" onClick={() => downloadText(`${slug(run.title)}-section.json`, JSON.stringify(doc, null, 2) + "\n", "application/json")}>
+        <button
+          type="button"
+          className="btn-quiet"
+          onClick={() =>
+            downloadText(`${slug(run.title)}-section.json`, JSON.stringify(doc, null, 2) + "\n", "application/json")
+          }
+        >
           Section JSON for the command line
         </button>
-        {canRevise ? <Link className="btn-quiet" href={`/projects/${run.projectId}/sections/${run.sectionId}/runs/new?from=${run.id}`}>Revise as a new run</Link> : null}
+        {canRevise ? (
+          <Link
+            className="btn-quiet"
+            href={`/projects/${run.projectId}/sections/${run.sectionId}/runs/new?from=${run.id}`}
+          >
+            Revise as a new run
+          </Link>
+        ) : null}
         {actions}
       </div>
       <PinnedCanvas markers={markers} placing={placing} onPlace={onPlace} active={activePin} onSelect={onSelectPin}>
-        <RunCanvas document={doc} materialColors={colors} result={result} method={method} slices={tables[method]?.slices} drawdownTo={drawdownTo} requiredFs={run.requiredFs} grid={doc.analysis?.grid} radii={doc.analysis?.radii} height={480} />
+        <RunCanvas
+          document={doc}
+          materialColors={colors}
+          result={result}
+          method={method}
+          slices={tables[method]?.slices}
+          drawdownTo={drawdownTo}
+          requiredFs={run.requiredFs}
+          grid={doc.analysis?.grid}
+          radii={doc.analysis?.radii}
+          height={480}
+        />
       </PinnedCanvas>
       <FsSummary result={result} requiredFs={run.requiredFs} />
       {tables[method] ? (

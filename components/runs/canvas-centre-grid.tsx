@@ -18,7 +18,19 @@ export function CentreGridShapes({ scene, view, setup = false }: { scene: RunSce
         const [x2, y2] = toScreen(view, c.x2, c.y1);
         const w = x2 - x1;
         const h = y2 - y1;
-        if (c.colour) return <Rect key={`c${c.ix}-${c.iy}`} name="fs-cell" x={x1} y={y1} width={w} height={h} fill={c.colour} opacity={0.92} />;
+        if (c.colour)
+          return (
+            <Rect
+              key={`c${c.ix}-${c.iy}`}
+              name="fs-cell"
+              x={x1}
+              y={y1}
+              width={w}
+              height={h}
+              fill={c.colour}
+              opacity={0.92}
+            />
+          );
         return (
           <Group key={`c${c.ix}-${c.iy}`} name="fs-cell-empty">
             <Rect x={x1} y={y1} width={w} height={h} stroke={EMPTY_HATCH} strokeWidth={0.5} opacity={0.6} />
@@ -30,11 +42,24 @@ export function CentreGridShapes({ scene, view, setup = false }: { scene: RunSce
         const [sx, sy] = toScreen(view, x, y);
         return <Circle key={`d${i}`} name="trial-centre" x={sx} y={sy} radius={1.8} fill="#4a4640" />;
       })}
-      {scene.gridBox && !setup ? (() => {
-        const [x1, y1] = toScreen(view, scene.gridBox.minX, scene.gridBox.maxY);
-        const [x2, y2] = toScreen(view, scene.gridBox.maxX, scene.gridBox.minY);
-        return <Rect name="grid-outline" x={x1} y={y1} width={x2 - x1} height={y2 - y1} stroke="#4a4640" strokeWidth={0.75} dash={[4, 3]} />;
-      })() : null}
+      {scene.gridBox && !setup
+        ? (() => {
+            const [x1, y1] = toScreen(view, scene.gridBox.minX, scene.gridBox.maxY);
+            const [x2, y2] = toScreen(view, scene.gridBox.maxX, scene.gridBox.minY);
+            return (
+              <Rect
+                name="grid-outline"
+                x={x1}
+                y={y1}
+                width={x2 - x1}
+                height={y2 - y1}
+                stroke="#4a4640"
+                strokeWidth={0.75}
+                dash={[4, 3]}
+              />
+            );
+          })()
+        : null}
       {scene.band.length === 2 ? <Band scene={scene} view={view} lines={!setup} /> : null}
     </Group>
   );
@@ -55,7 +80,15 @@ function Band({ scene, view, lines }: { scene: RunScene; view: RunView; lines: b
             return (
               <Group key={l.key}>
                 <Line points={[x1, sy, x2, sy]} stroke={SETUP_ACCENT} strokeWidth={1} dash={[6, 4]} opacity={0.8} />
-                <Text x={x2 - 260} y={upper ? sy - 14 : sy + 3} width={254} align="right" text={bandLineLabel(l)} fontSize={10} fill={SETUP_ACCENT} />
+                <Text
+                  x={x2 - 260}
+                  y={upper ? sy - 14 : sy + 3}
+                  width={254}
+                  align="right"
+                  text={bandLineLabel(l)}
+                  fontSize={10}
+                  fill={SETUP_ACCENT}
+                />
               </Group>
             );
           })

@@ -25,13 +25,45 @@ export function SectionShapes({ scene, view }: { scene: RunScene; view: RunView 
   return (
     <Group name="section">
       {scene.regions.map((r, i) => (
-        <Line key={`region-${i}`} name="region" points={screenPoints(view, r.points)} closed fill={r.fill} opacity={0.75} stroke={REGION_EDGE} strokeWidth={0.75} />
+        <Line
+          key={`region-${i}`}
+          name="region"
+          points={screenPoints(view, r.points)}
+          closed
+          fill={r.fill}
+          opacity={0.75}
+          stroke={REGION_EDGE}
+          strokeWidth={0.75}
+        />
       ))}
       {scene.ponds.map((p, i) => (
-        <Line key={`pond-${i}`} name="ponded-water" points={screenPoints(view, p)} closed fill={WATER_FILL} opacity={0.6} />
+        <Line
+          key={`pond-${i}`}
+          name="ponded-water"
+          points={screenPoints(view, p)}
+          closed
+          fill={WATER_FILL}
+          opacity={0.6}
+        />
       ))}
-      {scene.ground.length >= 4 ? <Line name="ground" points={screenPoints(view, scene.ground)} stroke={GROUND} strokeWidth={1.75} lineJoin="round" /> : null}
-      {scene.phreatic ? <Line name="phreatic" points={screenPoints(view, scene.phreatic)} stroke={WATER_LINE} strokeWidth={1.75} dash={[9, 5]} /> : null}
+      {scene.ground.length >= 4 ? (
+        <Line
+          name="ground"
+          points={screenPoints(view, scene.ground)}
+          stroke={GROUND}
+          strokeWidth={1.75}
+          lineJoin="round"
+        />
+      ) : null}
+      {scene.phreatic ? (
+        <Line
+          name="phreatic"
+          points={screenPoints(view, scene.phreatic)}
+          stroke={WATER_LINE}
+          strokeWidth={1.75}
+          dash={[9, 5]}
+        />
+      ) : null}
       {pool
         ? pool.spans.map(([a, b], i) => {
             const [x1, y] = toScreen(view, a, pool.level);
@@ -39,7 +71,13 @@ export function SectionShapes({ scene, view }: { scene: RunScene; view: RunView 
             return (
               <Group key={`pool-${i}`} name="pool-after-drawdown">
                 <Line points={[x1, y, x2, y]} stroke={WATER_LINE} strokeWidth={2} dash={[2, 4]} lineCap="round" />
-                <Text x={x1 + 4} y={y + 4} text={`pool after drawdown ${pool.level.toFixed(1)} m`} fontSize={11} fill={WATER_LINE} />
+                <Text
+                  x={x1 + 4}
+                  y={y + 4}
+                  text={`pool after drawdown ${pool.level.toFixed(1)} m`}
+                  fontSize={11}
+                  fill={WATER_LINE}
+                />
               </Group>
             );
           })

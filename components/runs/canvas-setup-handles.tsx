@@ -3,8 +3,16 @@ import type Konva from "konva";
 import { Group, Line, Rect, Text } from "react-konva";
 import type { Grid, Radii } from "@/lib/stability";
 import {
-  GRID_CORNERS, bandLineLabel, bandLines, cornerPoint, dragBandLine, dragCorner, moveGrid, normaliseGrid,
-  type BandKey, type GridCorner,
+  GRID_CORNERS,
+  bandLineLabel,
+  bandLines,
+  cornerPoint,
+  dragBandLine,
+  dragCorner,
+  moveGrid,
+  normaliseGrid,
+  type BandKey,
+  type GridCorner,
 } from "@/lib/runs/grid-edit";
 import { toScreen, toWorld, type Box, type RunView } from "@/lib/runs/view-fit";
 import { SETUP_ACCENT } from "./canvas-centre-grid";
@@ -21,7 +29,10 @@ export interface SetupHandlesProps {
 const HANDLE = 10;
 // Lower-left and upper-right sit on the rising diagonal of the screen.
 const CURSOR: Record<GridCorner, string> = {
-  "lower-left": "nesw-resize", "upper-right": "nesw-resize", "upper-left": "nwse-resize", "lower-right": "nwse-resize",
+  "lower-left": "nesw-resize",
+  "upper-right": "nesw-resize",
+  "upper-left": "nwse-resize",
+  "lower-right": "nwse-resize",
 };
 
 function setCursor(e: Konva.KonvaEventObject<MouseEvent>, cursor: string) {
@@ -46,7 +57,11 @@ export function SetupHandles({ grid, radii, onGridChange, view, sectionBox }: Se
     const s = start.current;
     if (!s) return;
     const node = e.target;
-    const moved = moveGrid(s.grid, s.grid.x1 + (node.x() - s.x) / view.scale, s.grid.y1 - (node.y() - s.y) / view.scale);
+    const moved = moveGrid(
+      s.grid,
+      s.grid.x1 + (node.x() - s.x) / view.scale,
+      s.grid.y1 - (node.y() - s.y) / view.scale,
+    );
     const [sx, sy] = toScreen(view, moved.x1, moved.y2);
     node.position({ x: sx, y: sy });
     onGridChange(moved, radii);
@@ -78,22 +93,54 @@ export function SetupHandles({ grid, radii, onGridChange, view, sectionBox }: Se
   return (
     <Group key={epoch} name="set-up-handles">
       <Rect
-        name="grid-body" x={gx1} y={gy1} width={gx2 - gx1} height={gy2 - gy1}
-        fill={SETUP_ACCENT} opacity={0.12} stroke={SETUP_ACCENT} strokeWidth={1.25} dash={[5, 3]} draggable
-        onDragStart={(e) => { start.current = { grid: g, x: e.target.x(), y: e.target.y() }; }}
+        name="grid-body"
+        x={gx1}
+        y={gy1}
+        width={gx2 - gx1}
+        height={gy2 - gy1}
+        fill={SETUP_ACCENT}
+        opacity={0.12}
+        stroke={SETUP_ACCENT}
+        strokeWidth={1.25}
+        dash={[5, 3]}
+        draggable
+        onDragStart={(e) => {
+          start.current = { grid: g, x: e.target.x(), y: e.target.y() };
+        }}
         onDragMove={onBodyMove}
-        onDragEnd={() => { start.current = null; end(); }}
-        onMouseEnter={(e) => setCursor(e, "move")} onMouseLeave={(e) => setCursor(e, "")}
+        onDragEnd={() => {
+          start.current = null;
+          end();
+        }}
+        onMouseEnter={(e) => setCursor(e, "move")}
+        onMouseLeave={(e) => setCursor(e, "")}
       />
-      <Text x={gx1} y={gy1 - 15} text={`${g.nx} × ${g.ny} trial centres`} fontSize={11} fill={SETUP_ACCENT} listening={false} />
+      <Text
+        x={gx1}
+        y={gy1 - 15}
+        text={`${g.nx} × ${g.ny} trial centres`}
+        fontSize={11}
+        fill={SETUP_ACCENT}
+        listening={false}
+      />
       {GRID_CORNERS.map((corner) => {
         const [cx, cy] = toScreen(view, ...cornerPoint(g, corner));
         return (
           <Rect
-            key={corner} name={`grid-corner-${corner}`} x={cx - HANDLE / 2} y={cy - HANDLE / 2} width={HANDLE} height={HANDLE}
-            fill="#ffffff" stroke={SETUP_ACCENT} strokeWidth={1.5} draggable
-            onDragMove={onCornerMove(corner)} onDragEnd={end}
-            onMouseEnter={(e) => setCursor(e, CURSOR[corner])} onMouseLeave={(e) => setCursor(e, "")}
+            key={corner}
+            name={`grid-corner-${corner}`}
+            x={cx - HANDLE / 2}
+            y={cy - HANDLE / 2}
+            width={HANDLE}
+            height={HANDLE}
+            fill="#ffffff"
+            stroke={SETUP_ACCENT}
+            strokeWidth={1.5}
+            draggable
+            onDragMove={onCornerMove(corner)}
+            onDragEnd={end}
+            onMouseEnter={(e) => setCursor(e, CURSOR[corner])}
+            onMouseLeave={(e) => setCursor(e, "")}
           />
         );
       })}
@@ -103,13 +150,33 @@ export function SetupHandles({ grid, radii, onGridChange, view, sectionBox }: Se
         return (
           <Group key={l.key}>
             <Line
-              name={`band-line-${l.key}`} x={0} y={0} points={[bx1, sy, bx2, sy]}
-              stroke={SETUP_ACCENT} strokeWidth={1.5} dash={[7, 4]} hitStrokeWidth={12} draggable
-              dragBoundFunc={function (this: Konva.Node, pos) { return { x: this.absolutePosition().x, y: pos.y }; }}
-              onDragMove={onBandMove(l.key, sy)} onDragEnd={end}
-              onMouseEnter={(e) => setCursor(e, "ns-resize")} onMouseLeave={(e) => setCursor(e, "")}
+              name={`band-line-${l.key}`}
+              x={0}
+              y={0}
+              points={[bx1, sy, bx2, sy]}
+              stroke={SETUP_ACCENT}
+              strokeWidth={1.5}
+              dash={[7, 4]}
+              hitStrokeWidth={12}
+              draggable
+              dragBoundFunc={function (this: Konva.Node, pos) {
+                return { x: this.absolutePosition().x, y: pos.y };
+              }}
+              onDragMove={onBandMove(l.key, sy)}
+              onDragEnd={end}
+              onMouseEnter={(e) => setCursor(e, "ns-resize")}
+              onMouseLeave={(e) => setCursor(e, "")}
             />
-            <Text x={bx2 - 264} y={upper ? sy - 14 : sy + 3} width={258} align="right" text={bandLineLabel(l)} fontSize={10} fill={SETUP_ACCENT} listening={false} />
+            <Text
+              x={bx2 - 264}
+              y={upper ? sy - 14 : sy + 3}
+              width={258}
+              align="right"
+              text={bandLineLabel(l)}
+              fontSize={10}
+              fill={SETUP_ACCENT}
+              listening={false}
+            />
           </Group>
         );
       })}

@@ -23,7 +23,10 @@ const METHODS = ["bishop", "fellenius"] as const;
 
 /** Lowest FS of a method over the runs (at 3 decimals), to mark the governing run. */
 function lowestOf(runs: readonly CompareRun[], m: (typeof METHODS)[number]): number | null {
-  const vals = runs.map((r) => r.fs[m]).filter((v): v is number => typeof v === "number" && Number.isFinite(v)).map(roundFs);
+  const vals = runs
+    .map((r) => r.fs[m])
+    .filter((v): v is number => typeof v === "number" && Number.isFinite(v))
+    .map(roundFs);
   return vals.length > 1 ? Math.min(...vals) : null;
 }
 
@@ -33,14 +36,24 @@ export function CompareTable({ runs }: CompareTableProps) {
   return (
     <section className="panel overflow-x-auto p-3" data-testid="compare-table">
       <table className="w-full text-sm">
-        <caption className="mb-2 text-left text-xs font-medium uppercase tracking-wide text-ink-soft">Factor of safety by run</caption>
+        <caption className="mb-2 text-left text-xs font-medium uppercase tracking-wide text-ink-soft">
+          Factor of safety by run
+        </caption>
         <thead>
           <tr className="align-bottom">
-            <th scope="col" className="px-2 py-1 text-left text-xs font-medium text-ink-soft">Run</th>
+            <th scope="col" className="px-2 py-1 text-left text-xs font-medium text-ink-soft">
+              Run
+            </th>
             {runs.map((r) => (
               <th key={r.id} scope="col" className="px-2 py-1 text-left font-semibold" data-run={r.id}>
                 <span className="inline-flex items-center gap-1.5">
-                  {r.colour ? <span aria-hidden="true" className="inline-block h-2.5 w-2.5 rounded-full" style={{ background: r.colour }} /> : null}
+                  {r.colour ? (
+                    <span
+                      aria-hidden="true"
+                      className="inline-block h-2.5 w-2.5 rounded-full"
+                      style={{ background: r.colour }}
+                    />
+                  ) : null}
                   {r.label}
                 </span>
                 {r.detail ? <span className="block text-xs font-normal text-ink-faint">{r.detail}</span> : null}
@@ -50,22 +63,36 @@ export function CompareTable({ runs }: CompareTableProps) {
         </thead>
         <tbody>
           <tr className="border-t border-rule">
-            <th scope="row" className="px-2 py-1.5 text-left font-normal text-ink-soft">Required FS</th>
-            {runs.map((r) => <td key={r.id} className="px-2 py-1.5 tabular-nums">{r.requiredFs !== null && r.requiredFs !== undefined ? r.requiredFs.toFixed(2) : "—"}</td>)}
+            <th scope="row" className="px-2 py-1.5 text-left font-normal text-ink-soft">
+              Required FS
+            </th>
+            {runs.map((r) => (
+              <td key={r.id} className="px-2 py-1.5 tabular-nums">
+                {r.requiredFs !== null && r.requiredFs !== undefined ? r.requiredFs.toFixed(2) : "—"}
+              </td>
+            ))}
           </tr>
           {methods.map((m) => {
             const low = lowestOf(runs, m);
             return (
               <tr key={m} className="border-t border-rule align-top" data-testid={`compare-row-${m}`}>
-                <th scope="row" className="px-2 py-1.5 text-left font-normal">{METHOD_NAME[m]}</th>
+                <th scope="row" className="px-2 py-1.5 text-left font-normal">
+                  {METHOD_NAME[m]}
+                </th>
                 {runs.map((r) => {
                   const fs = r.fs[m];
                   const governs = low !== null && typeof fs === "number" && roundFs(fs) === low;
                   return (
                     <td key={r.id} className="px-2 py-1.5" data-run={r.id}>
                       <span className="text-base font-semibold tabular-nums">{formatFs(fs)}</span>
-                      {governs ? <span className="ml-1.5 rounded-sm border border-ink-faint px-1 text-[10px] uppercase tracking-wide text-ink-soft">lowest</span> : null}
-                      <span className="block text-xs"><VerdictMark verdict={verdictOf(fs, r.requiredFs)} required={r.requiredFs} /></span>
+                      {governs ? (
+                        <span className="ml-1.5 rounded-sm border border-ink-faint px-1 text-[10px] uppercase tracking-wide text-ink-soft">
+                          lowest
+                        </span>
+                      ) : null}
+                      <span className="block text-xs">
+                        <VerdictMark verdict={verdictOf(fs, r.requiredFs)} required={r.requiredFs} />
+                      </span>
                     </td>
                   );
                 })}
@@ -74,8 +101,12 @@ export function CompareTable({ runs }: CompareTableProps) {
           })}
         </tbody>
       </table>
-      {runs.length > 4 ? <p className="mt-2 text-xs text-ink-faint">Comparing more than four runs gets hard to read; consider fewer.</p> : null}
-      <div className="mt-3"><Caution compact /></div>
+      {runs.length > 4 ? (
+        <p className="mt-2 text-xs text-ink-faint">Comparing more than four runs gets hard to read; consider fewer.</p>
+      ) : null}
+      <div className="mt-3">
+        <Caution compact />
+      </div>
     </section>
   );
 }

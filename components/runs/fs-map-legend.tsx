@@ -23,10 +23,17 @@ export function FsMapLegend({ range, method, requiredFs }: FsMapLegendProps) {
     <div className="flex flex-wrap items-end gap-x-6 gap-y-2 text-xs text-ink-soft" data-testid="fs-map-legend">
       <div>
         <p className="mb-1 font-medium text-ink">Lowest FS from each centre, {METHOD_NAME[method]}</p>
-        <svg width={BAR_W + 40} height={BAR_H + 34} role="img" aria-label={`Colour scale from FS ${legend.lowLabel} (dark) to ${legend.highLabel} (light)`}>
+        <svg
+          width={BAR_W + 40}
+          height={BAR_H + 34}
+          role="img"
+          aria-label={`Colour scale from FS ${legend.lowLabel} (dark) to ${legend.highLabel} (light)`}
+        >
           <defs>
             <linearGradient id={gradientId} x1="0" x2="1" y1="0" y2="0">
-              {legend.gradient.map((g) => <stop key={g.offset} offset={g.offset} stopColor={g.colour} />)}
+              {legend.gradient.map((g) => (
+                <stop key={g.offset} offset={g.offset} stopColor={g.colour} />
+              ))}
             </linearGradient>
           </defs>
           <g transform="translate(20, 14)">
@@ -34,7 +41,9 @@ export function FsMapLegend({ range, method, requiredFs }: FsMapLegendProps) {
             {legend.ticks.map((t) => (
               <g key={t.value} transform={`translate(${t.at * BAR_W}, 0)`}>
                 <line y1={BAR_H} y2={BAR_H + 4} stroke="#4a4640" />
-                <text y={BAR_H + 15} textAnchor="middle" fontSize={10} fill="#4a4640">{t.label}</text>
+                <text y={BAR_H + 15} textAnchor="middle" fontSize={10} fill="#4a4640">
+                  {t.label}
+                </text>
               </g>
             ))}
             {req ? (
@@ -48,10 +57,16 @@ export function FsMapLegend({ range, method, requiredFs }: FsMapLegendProps) {
         {req ? (
           <p className="mt-0.5">
             ▼ required FS {req.value.toFixed(2)}
-            {req.outside === "below" ? " (every centre is above it)" : req.outside === "above" ? " (every centre is below it)" : ""}
+            {req.outside === "below"
+              ? " (every centre is above it)"
+              : req.outside === "above"
+                ? " (every centre is below it)"
+                : ""}
             {range.clipped ? `; cells above ${range.hi.toFixed(2)} share the lightest colour` : ""}
           </p>
-        ) : range.clipped ? <p className="mt-0.5">Cells above {range.hi.toFixed(2)} share the lightest colour.</p> : null}
+        ) : range.clipped ? (
+          <p className="mt-0.5">Cells above {range.hi.toFixed(2)} share the lightest colour.</p>
+        ) : null}
       </div>
       <div className="flex items-center gap-1.5">
         <svg width={18} height={14} aria-hidden="true">

@@ -22,7 +22,10 @@ function collectWarnings(result: GridSearchSuccess, critical: FsSummaryProps["cr
   const extra: EngineWarning[] = [];
   for (const one of Object.values(critical ?? {})) {
     for (const w of one?.warnings ?? []) {
-      if (SLICE_LEVEL.has(w.code) && !seen.has(w.message)) { seen.add(w.message); extra.push(w); }
+      if (SLICE_LEVEL.has(w.code) && !seen.has(w.message)) {
+        seen.add(w.message);
+        extra.push(w);
+      }
     }
   }
   return [...result.warnings, ...extra];
@@ -40,7 +43,11 @@ export function FsSummary({ result, requiredFs, critical }: FsSummaryProps) {
           Factor of safety{requiredFs !== undefined ? `, required ${requiredFs.toFixed(2)}` : ""}
         </caption>
         <thead className="text-xs text-ink-soft">
-          <tr><th className="py-1 pr-3 font-medium">Method</th><th className="py-1 pr-3 text-right font-medium">FS</th><th className="py-1 font-medium">Against the required FS</th></tr>
+          <tr>
+            <th className="py-1 pr-3 font-medium">Method</th>
+            <th className="py-1 pr-3 text-right font-medium">FS</th>
+            <th className="py-1 font-medium">Against the required FS</th>
+          </tr>
         </thead>
         <tbody>
           {result.methods.map((m) => {
@@ -49,10 +56,19 @@ export function FsSummary({ result, requiredFs, critical }: FsSummaryProps) {
               <tr key={m} className="border-t border-rule align-top" data-testid={`fs-row-${m}`}>
                 <th scope="row" className="py-1.5 pr-3 font-normal">
                   {METHOD_NAME[m]}
-                  {m === "fellenius" ? <span className="block text-xs text-ink-faint">{ordinaryFormText(result.ordinaryForm)}</span> : null}
+                  {m === "fellenius" ? (
+                    <span className="block text-xs text-ink-faint">{ordinaryFormText(result.ordinaryForm)}</span>
+                  ) : null}
                 </th>
-                <td className="py-1.5 pr-3 text-right text-base font-semibold tabular-nums" data-testid={`fs-value-${m}`}>{formatFs(r?.fs)}</td>
-                <td className="py-1.5"><VerdictMark verdict={verdictOf(r?.fs, requiredFs)} required={requiredFs} /></td>
+                <td
+                  className="py-1.5 pr-3 text-right text-base font-semibold tabular-nums"
+                  data-testid={`fs-value-${m}`}
+                >
+                  {formatFs(r?.fs)}
+                </td>
+                <td className="py-1.5">
+                  <VerdictMark verdict={verdictOf(r?.fs, requiredFs)} required={requiredFs} />
+                </td>
               </tr>
             );
           })}
@@ -60,18 +76,25 @@ export function FsSummary({ result, requiredFs, critical }: FsSummaryProps) {
       </table>
 
       <div className="grid gap-3 sm:grid-cols-2">
-        {result.methods.map((m) => <CircleFacts key={m} method={m} c={result.results[m] ?? null} minMAlpha={critical?.[m]?.minMAlpha} />)}
+        {result.methods.map((m) => (
+          <CircleFacts key={m} method={m} c={result.results[m] ?? null} minMAlpha={critical?.[m]?.minMAlpha} />
+        ))}
       </div>
 
       <div data-testid="fs-summary-circles">
         <h3 className="label">Trial circles</h3>
         <p className="tabular-nums">
-          {result.circles.tried.toLocaleString("en-GB")} tried, {result.circles.valid.toLocaleString("en-GB")} gave an FS
+          {result.circles.tried.toLocaleString("en-GB")} tried, {result.circles.valid.toLocaleString("en-GB")} gave an
+          FS
           {rejectedTotal > 0 ? `, ${rejectedTotal.toLocaleString("en-GB")} set aside:` : "."}
         </p>
         {rejected.length > 0 ? (
           <ul className="mt-1 list-disc pl-5 text-ink-soft">
-            {rejected.map((r) => <li key={r.reason} data-reason={r.reason}><span className="tabular-nums">{r.count.toLocaleString("en-GB")}</span> {r.text}</li>)}
+            {rejected.map((r) => (
+              <li key={r.reason} data-reason={r.reason}>
+                <span className="tabular-nums">{r.count.toLocaleString("en-GB")}</span> {r.text}
+              </li>
+            ))}
           </ul>
         ) : null}
       </div>
@@ -81,8 +104,15 @@ export function FsSummary({ result, requiredFs, critical }: FsSummaryProps) {
           <h3 className="label">Points to check</h3>
           <ul className="space-y-2">
             {warnings.map((w, i) => (
-              <li key={i} className={`border-l-2 pl-3 ${w.weight === "check" ? "border-clay-500" : "border-rule"}`} data-code={w.code}>
-                <p className={w.weight === "check" ? "font-medium text-ink" : "text-ink"}>{w.weight === "check" ? "Check: " : "Note: "}{w.headline}</p>
+              <li
+                key={i}
+                className={`border-l-2 pl-3 ${w.weight === "check" ? "border-clay-500" : "border-rule"}`}
+                data-code={w.code}
+              >
+                <p className={w.weight === "check" ? "font-medium text-ink" : "text-ink"}>
+                  {w.weight === "check" ? "Check: " : "Note: "}
+                  {w.headline}
+                </p>
                 {w.action ? <p className="text-ink-soft">{w.action}</p> : null}
                 {w.detail ? <p className="text-xs text-ink-faint">{w.detail}</p> : null}
               </li>
@@ -96,18 +126,36 @@ export function FsSummary({ result, requiredFs, critical }: FsSummaryProps) {
   );
 }
 
-function CircleFacts({ method, c, minMAlpha }: { method: "bishop" | "fellenius"; c: CircleFs | null; minMAlpha?: number | null }) {
+function CircleFacts({
+  method,
+  c,
+  minMAlpha,
+}: {
+  method: "bishop" | "fellenius";
+  c: CircleFs | null;
+  minMAlpha?: number | null;
+}) {
   return (
     <div className="rounded-md border border-rule p-3" data-testid={`critical-${method}`}>
       <h3 className="label">Critical circle, {METHOD_NAME[method]}</h3>
       {c ? (
         <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 tabular-nums">
-          <dt className="text-ink-soft">Centre</dt><dd>{pt([c.circle.xc, c.circle.yc])} m</dd>
-          <dt className="text-ink-soft">Radius</dt><dd>{m2(c.circle.r)} m</dd>
-          <dt className="text-ink-soft">Enters</dt><dd>{pt(c.entry)} m</dd>
-          <dt className="text-ink-soft">Exits</dt><dd>{pt(c.exit)} m</dd>
-          <dt className="text-ink-soft">Sliding</dt><dd>toward {c.direction === "right" ? "+x (right)" : "−x (left)"}</dd>
-          {method === "bishop" && minMAlpha !== undefined && minMAlpha !== null ? <><dt className="text-ink-soft">Least mα</dt><dd>{minMAlpha.toFixed(3)}</dd></> : null}
+          <dt className="text-ink-soft">Centre</dt>
+          <dd>{pt([c.circle.xc, c.circle.yc])} m</dd>
+          <dt className="text-ink-soft">Radius</dt>
+          <dd>{m2(c.circle.r)} m</dd>
+          <dt className="text-ink-soft">Enters</dt>
+          <dd>{pt(c.entry)} m</dd>
+          <dt className="text-ink-soft">Exits</dt>
+          <dd>{pt(c.exit)} m</dd>
+          <dt className="text-ink-soft">Sliding</dt>
+          <dd>toward {c.direction === "right" ? "+x (right)" : "−x (left)"}</dd>
+          {method === "bishop" && minMAlpha !== undefined && minMAlpha !== null ? (
+            <>
+              <dt className="text-ink-soft">Least mα</dt>
+              <dd>{minMAlpha.toFixed(3)}</dd>
+            </>
+          ) : null}
         </dl>
       ) : (
         <p className="text-ink-soft">No trial circle gave a factor of safety.</p>

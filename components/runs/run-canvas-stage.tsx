@@ -42,10 +42,19 @@ export default function RunCanvasStage({ scene, view, width, height, setup, onPa
     onPan(p.x - last.current.x, p.y - last.current.y);
     last.current = { x: p.x, y: p.y };
   };
-  const onUp = () => { last.current = null; };
+  const onUp = () => {
+    last.current = null;
+  };
 
   return (
-    <Stage width={width} height={height} onPointerDown={onDown} onPointerMove={onMove} onPointerUp={onUp} onPointerLeave={onUp}>
+    <Stage
+      width={width}
+      height={height}
+      onPointerDown={onDown}
+      onPointerMove={onMove}
+      onPointerUp={onUp}
+      onPointerLeave={onUp}
+    >
       <Layer listening={false}>
         <AxisMarks view={view} width={width} height={height} />
         <SectionShapes scene={scene} view={view} />

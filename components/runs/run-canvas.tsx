@@ -55,11 +55,32 @@ export function RunCanvas(props: RunCanvasProps) {
   const containerRef = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(800);
   const scene = useMemo(
-    () => buildRunScene({
-      document: doc, materialsColors: props.materialsColors ?? props.materialColors, grid: props.grid, radii: props.radii,
-      result, method: props.method, slices: props.slices, overlays, drawdownTo: props.drawdownTo, requiredFs: props.requiredFs,
-    }),
-    [doc, props.materialsColors, props.materialColors, props.grid, props.radii, result, props.method, props.slices, overlays, props.drawdownTo, props.requiredFs],
+    () =>
+      buildRunScene({
+        document: doc,
+        materialsColors: props.materialsColors ?? props.materialColors,
+        grid: props.grid,
+        radii: props.radii,
+        result,
+        method: props.method,
+        slices: props.slices,
+        overlays,
+        drawdownTo: props.drawdownTo,
+        requiredFs: props.requiredFs,
+      }),
+    [
+      doc,
+      props.materialsColors,
+      props.materialColors,
+      props.grid,
+      props.radii,
+      result,
+      props.method,
+      props.slices,
+      overlays,
+      props.drawdownTo,
+      props.requiredFs,
+    ],
   );
 
   // The fitted box is kept until what it depends on changes, so dragging the grid does not rescale the view.
@@ -98,10 +119,16 @@ export function RunCanvas(props: RunCanvasProps) {
   }, []);
 
   const onPan = useCallback((dx: number, dy: number) => setManual(panBy(viewRef.current, dx, dy)), []);
-  const refit = () => { setFit({ key: scene.fitKey, box: scene.fitBox }); setManual(null); };
+  const refit = () => {
+    setFit({ key: scene.fitKey, box: scene.fitBox });
+    setManual(null);
+  };
   const zoomBy = (f: number) => setManual(zoomAt(view, f, width / 2, height / 2));
 
-  const setup = props.onGridChange && props.grid && props.radii ? { grid: props.grid, radii: props.radii, onGridChange: props.onGridChange } : undefined;
+  const setup =
+    props.onGridChange && props.grid && props.radii
+      ? { grid: props.grid, radii: props.radii, onGridChange: props.onGridChange }
+      : undefined;
   const showsResult = Boolean(result) || Boolean(overlays && overlays.length > 0);
   const viewAttr = JSON.stringify({ scale: view.scale, offsetX: view.offsetX, offsetY: view.offsetY });
 
@@ -116,17 +143,38 @@ export function RunCanvas(props: RunCanvasProps) {
         data-critical={criticalAttribute(scene.critical)}
         data-mode={setup ? "set-up" : overlays && overlays.length > 0 ? "compare" : result ? "result" : "section"}
         role="img"
-        aria-label={describeCanvas(scene.critical.map((c) => c.label), Boolean(setup))}
+        aria-label={describeCanvas(
+          scene.critical.map((c) => c.label),
+          Boolean(setup),
+        )}
       >
         <RunCanvasStage scene={scene} view={view} width={width} height={height} setup={setup} onPan={onPan} />
         <div className="absolute right-2 top-2 flex gap-1">
-          <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => zoomBy(1.25)} aria-label="Zoom in">+</button>
-          <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => zoomBy(0.8)} aria-label="Zoom out">−</button>
-          <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={refit} data-testid="run-canvas-fit">Whole section</button>
+          <button
+            type="button"
+            className="btn-quiet px-2 py-0.5 text-xs"
+            onClick={() => zoomBy(1.25)}
+            aria-label="Zoom in"
+          >
+            +
+          </button>
+          <button
+            type="button"
+            className="btn-quiet px-2 py-0.5 text-xs"
+            onClick={() => zoomBy(0.8)}
+            aria-label="Zoom out"
+          >
+            −
+          </button>
+          <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={refit} data-testid="run-canvas-fit">
+            Whole section
+          </button>
         </div>
       </div>
       <figcaption className="space-y-2 border-t border-rule px-3 py-2">
-        {scene.range && scene.method ? <FsMapLegend range={scene.range} method={scene.method} requiredFs={props.requiredFs} /> : null}
+        {scene.range && scene.method ? (
+          <FsMapLegend range={scene.range} method={scene.method} requiredFs={props.requiredFs} />
+        ) : null}
         <CanvasKey scene={scene} setup={Boolean(setup)} />
         {showsResult && caution ? <Caution compact /> : null}
       </figcaption>

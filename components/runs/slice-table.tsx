@@ -5,8 +5,12 @@ import { useMemo, useState } from "react";
 import type { SliceRow } from "@/lib/stability";
 import { Caution } from "@/components/ui/caution";
 import {
-  formatCell, numberSlices, sliceColumns, sortSlices,
-  type SliceColumnKey, type SortDirection,
+  formatCell,
+  numberSlices,
+  sliceColumns,
+  sortSlices,
+  type SliceColumnKey,
+  type SortDirection,
 } from "@/lib/runs/slice-columns";
 import { sliceCsvFileName, sliceTableToCsv, type SliceCsvMeta } from "@/lib/runs/slice-csv";
 import { METHOD_NAME } from "@/lib/runs/warning-text";
@@ -37,13 +41,23 @@ export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
   }, [numbered, columns, sort, method]);
 
   const toggle = (key: SliceColumnKey) =>
-    setSort((s) => (s && s.key === key ? { key, dir: s.dir === "ascending" ? "descending" : "ascending" } : { key, dir: "ascending" }));
+    setSort((s) =>
+      s && s.key === key ? { key, dir: s.dir === "ascending" ? "descending" : "ascending" } : { key, dir: "ascending" },
+    );
 
   return (
     <section className="panel p-3" data-testid="slice-table">
       <div className="mb-2 flex flex-wrap items-center justify-between gap-2">
-        <h3 className="text-sm font-semibold">Slices of the critical circle, {METHOD_NAME[method]} <span className="font-normal text-ink-faint">({rows.length} slices; forces per metre run)</span></h3>
-        <button type="button" className="btn-quiet" onClick={() => download(sliceTableToCsv(rows, meta), sliceCsvFileName(meta.title, method))} data-testid="slice-csv-download">
+        <h3 className="text-sm font-semibold">
+          Slices of the critical circle, {METHOD_NAME[method]}{" "}
+          <span className="font-normal text-ink-faint">({rows.length} slices; forces per metre run)</span>
+        </h3>
+        <button
+          type="button"
+          className="btn-quiet"
+          onClick={() => download(sliceTableToCsv(rows, meta), sliceCsvFileName(meta.title, method))}
+          data-testid="slice-csv-download"
+        >
           Download CSV
         </button>
       </div>
@@ -54,11 +68,22 @@ export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
               {columns.map((c) => {
                 const state = sort?.key === c.key ? sort.dir : "none";
                 return (
-                  <th key={c.key} scope="col" aria-sort={state} className={`px-2 py-1.5 font-medium ${c.decimals === null ? "text-left" : "text-right"}`}>
-                    <button type="button" className="inline-flex items-center gap-0.5 hover:text-clay-600" onClick={() => toggle(c.key)}>
+                  <th
+                    key={c.key}
+                    scope="col"
+                    aria-sort={state}
+                    className={`px-2 py-1.5 font-medium ${c.decimals === null ? "text-left" : "text-right"}`}
+                  >
+                    <button
+                      type="button"
+                      className="inline-flex items-center gap-0.5 hover:text-clay-600"
+                      onClick={() => toggle(c.key)}
+                    >
                       {c.label}
                       {c.unit ? <span className="font-normal text-ink-faint">&nbsp;({c.unit})</span> : null}
-                      <span aria-hidden="true" className="w-2">{state === "ascending" ? "▲" : state === "descending" ? "▼" : ""}</span>
+                      <span aria-hidden="true" className="w-2">
+                        {state === "ascending" ? "▲" : state === "descending" ? "▼" : ""}
+                      </span>
                     </button>
                   </th>
                 );
@@ -72,8 +97,13 @@ export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
                   const v = c.value(s, method);
                   const low = c.key === "mAlpha" && typeof v === "number" && v < LOW_M_ALPHA;
                   return (
-                    <td key={c.key} className={`px-2 py-1 ${c.decimals === null ? "text-left" : "text-right"} ${low ? "font-semibold text-alarm-700" : ""}`} title={low ? `mα below ${LOW_M_ALPHA}` : undefined}>
-                      {v === null ? "—" : formatCell(c, v)}{low ? " !" : ""}
+                    <td
+                      key={c.key}
+                      className={`px-2 py-1 ${c.decimals === null ? "text-left" : "text-right"} ${low ? "font-semibold text-alarm-700" : ""}`}
+                      title={low ? `mα below ${LOW_M_ALPHA}` : undefined}
+                    >
+                      {v === null ? "—" : formatCell(c, v)}
+                      {low ? " !" : ""}
                     </td>
                   );
                 })}
@@ -83,9 +113,14 @@ export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
         </table>
       </div>
       <p className="mt-2 text-xs text-ink-faint">
-        Click a header to sort by it, again to reverse. The CSV holds the same columns. mα values marked “!” are below {LOW_M_ALPHA}.
+        Click a header to sort by it, again to reverse. The CSV holds the same columns. mα values marked “!” are below{" "}
+        {LOW_M_ALPHA}.
       </p>
-      {caution ? <div className="mt-2"><Caution compact /></div> : null}
+      {caution ? (
+        <div className="mt-2">
+          <Caution compact />
+        </div>
+      ) : null}
     </section>
   );
 }

@@ -153,7 +153,11 @@ export function createEditorActions(ctx: EditorContext) {
       const t = parseIssuePath(issue.path);
       if (t.kind === "region" && doc.regions[t.region]) {
         const n = doc.regions[t.region].points.length;
-        ctx.setSelection({ kind: "region", region: t.region, vertex: t.vertex !== null && t.vertex < n ? t.vertex : null });
+        ctx.setSelection({
+          kind: "region",
+          region: t.region,
+          vertex: t.vertex !== null && t.vertex < n ? t.vertex : null,
+        });
       } else if (t.kind === "phreatic" && doc.water?.phreatic) {
         const n = doc.water.phreatic.length;
         ctx.setSelection({ kind: "phreatic", vertex: t.vertex !== null && t.vertex < n ? t.vertex : null });
@@ -166,5 +170,7 @@ export function createEditorActions(ctx: EditorContext) {
 export type EditorActions = ReturnType<typeof createEditorActions>;
 
 function ownerSelection(owner: Owner): Selection {
-  return owner.kind === "region" ? { kind: "region", region: owner.region, vertex: null } : { kind: "phreatic", vertex: null };
+  return owner.kind === "region"
+    ? { kind: "region", region: owner.region, vertex: null }
+    : { kind: "phreatic", vertex: null };
 }

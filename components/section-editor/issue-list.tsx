@@ -20,7 +20,8 @@ export function IssueList({ issues, focused, onPick }: IssueListProps) {
       ) : (
         <>
           <p className="mb-2 text-xs text-ink-soft">
-            {errors} {errors === 1 ? "error" : "errors"}, {warnings} {warnings === 1 ? "warning" : "warnings"}. Pick one to find it.
+            {errors} {errors === 1 ? "error" : "errors"}, {warnings} {warnings === 1 ? "warning" : "warnings"}. Pick one
+            to find it.
           </p>
           <ol className="flex max-h-72 flex-col gap-1 overflow-y-auto">
             {issues.map((issue, i) => {

@@ -25,4 +25,13 @@ export const REGION_FILL_OPACITY = 0.55;
 export const POND_FILL_OPACITY = 0.35;
 
 /** Colours offered for materials that have none; a colour-blind-safe sequence. */
-export const FALLBACK_MATERIAL_COLORS = ["#e69f00", "#009e73", "#56b4e9", "#f0e442", "#cc79a7", "#0072b2", "#d55e00", "#999999"];
+export const FALLBACK_MATERIAL_COLORS = [
+  "#e69f00",
+  "#009e73",
+  "#56b4e9",
+  "#f0e442",
+  "#cc79a7",
+  "#0072b2",
+  "#d55e00",
+  "#999999",
+];

@@ -45,7 +45,9 @@ export default function SectionCanvas(props: SectionCanvasProps) {
     return (key: string) =>
       known.get(key) ??
       doc.materials.find((m) => m.id === key)?.color ??
-      (docOrder.includes(key) ? FALLBACK_MATERIAL_COLORS[docOrder.indexOf(key) % FALLBACK_MATERIAL_COLORS.length] : CANVAS_COLORS.unknownMaterial);
+      (docOrder.includes(key)
+        ? FALLBACK_MATERIAL_COLORS[docOrder.indexOf(key) % FALLBACK_MATERIAL_COLORS.length]
+        : CANVAS_COLORS.unknownMaterial);
   }, [materials, doc.materials]);
 
   return (

@@ -36,7 +36,14 @@ const SectionCanvas = dynamic(() => import("./section-canvas"), {
  * The parent owns the document; the editor keeps its own undo history of documents and
  * reports every change through onChange.
  */
-export function SectionEditor({ document, onChange, materials, issues = [], readOnly = false, height = 520 }: SectionEditorProps) {
+export function SectionEditor({
+  document,
+  onChange,
+  materials,
+  issues = [],
+  readOnly = false,
+  height = 520,
+}: SectionEditorProps) {
   const history = useEditorDocument(document, onChange);
   const doc = history.current();
   const [tool, setToolState] = useState<ToolName>("select");
@@ -119,7 +126,15 @@ export function SectionEditor({ document, onChange, materials, issues = [], read
     const onWheel = (e: WheelEvent) => {
       e.preventDefault();
       const r = el.getBoundingClientRect();
-      handleRef.current({ type: "wheel", sx: e.clientX - r.left, sy: e.clientY - r.top, button: 0, altKey: e.altKey, shiftKey: e.shiftKey, deltaY: e.deltaY });
+      handleRef.current({
+        type: "wheel",
+        sx: e.clientX - r.left,
+        sy: e.clientY - r.top,
+        button: 0,
+        altKey: e.altKey,
+        shiftKey: e.shiftKey,
+        deltaY: e.deltaY,
+      });
     };
     el.addEventListener("wheel", onWheel, { passive: false });
     return () => el.removeEventListener("wheel", onWheel);
@@ -132,7 +147,15 @@ export function SectionEditor({ document, onChange, materials, issues = [], read
       if (e.button === 1) e.preventDefault();
       e.currentTarget.focus({ preventScroll: true });
     }
-    pointer.handle({ type, sx: e.clientX - r.left, sy: e.clientY - r.top, button: e.button, altKey: e.altKey, shiftKey: e.shiftKey, deltaY: 0 });
+    pointer.handle({
+      type,
+      sx: e.clientX - r.left,
+      sy: e.clientY - r.top,
+      button: e.button,
+      altKey: e.altKey,
+      shiftKey: e.shiftKey,
+      deltaY: 0,
+    });
   };
 
   const reservoirPreview = useMemo(() => {
@@ -143,7 +166,15 @@ export function SectionEditor({ document, onChange, materials, issues = [], read
   }, [tool, pointer.hover, ground, readOnly]);
 
   const cursor =
-    pointer.gesture === "pan" ? "grabbing" : tool === "pan" ? "grab" : tool !== "select" ? "crosshair" : pointer.hover?.overVertex ? "move" : "default";
+    pointer.gesture === "pan"
+      ? "grabbing"
+      : tool === "pan"
+        ? "grab"
+        : tool !== "select"
+          ? "crosshair"
+          : pointer.hover?.overVertex
+            ? "move"
+            : "default";
   const v = view.view;
 
   return (
@@ -171,7 +202,16 @@ export function SectionEditor({ document, onChange, materials, issues = [], read
             <div
               ref={containerRef}
               data-testid="editor-canvas"
-              data-view={v ? JSON.stringify({ scale: v.scale, offsetX: v.offsetX, offsetY: v.offsetY, exaggeration: v.exaggeration }) : undefined}
+              data-view={
+                v
+                  ? JSON.stringify({
+                      scale: v.scale,
+                      offsetX: v.offsetX,
+                      offsetY: v.offsetY,
+                      exaggeration: v.exaggeration,
+                    })
+                  : undefined
+              }
               tabIndex={0}
               role="application"
               aria-label="Section drawing. Use the tool keys, arrows to move the selected vertex, plus and minus to zoom."

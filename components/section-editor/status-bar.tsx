@@ -24,7 +24,12 @@ export function StatusBar({ tool, hover, message }: StatusBarProps) {
             ? `x ${hover.snapped[0].toFixed(2)} m · elevation ${hover.snapped[1].toFixed(2)} m ${SNAP_WORDS[hover.snap]}`
             : "Move over the drawing to read coordinates."}
         </span>
-        <span role="status" aria-live="polite" data-testid="editor-message" className={message ? "font-medium text-clay-700" : ""}>
+        <span
+          role="status"
+          aria-live="polite"
+          data-testid="editor-message"
+          className={message ? "font-medium text-clay-700" : ""}
+        >
           {message ?? ""}
         </span>
       </div>

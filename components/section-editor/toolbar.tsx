@@ -46,23 +46,70 @@ export function Toolbar(p: ToolbarProps) {
               className={active ? "btn-primary px-2.5 py-1 text-xs" : ICON_BTN}
             >
               {t.label}
-              <kbd className={`rounded px-1 font-mono text-[10px] ${active ? "bg-clay-700" : "bg-paper-sunk text-ink-faint"}`}>{t.key.toUpperCase()}</kbd>
+              <kbd
+                className={`rounded px-1 font-mono text-[10px] ${active ? "bg-clay-700" : "bg-paper-sunk text-ink-faint"}`}
+              >
+                {t.key.toUpperCase()}
+              </kbd>
             </button>
           );
         })}
       </div>
       <div className="flex gap-1" role="group" aria-label="History">
-        <button type="button" data-testid="undo" aria-label="Undo (Ctrl+Z)" title="Undo — Ctrl+Z" disabled={!p.canUndo || p.readOnly} onClick={p.onUndo} className={ICON_BTN}>
+        <button
+          type="button"
+          data-testid="undo"
+          aria-label="Undo (Ctrl+Z)"
+          title="Undo — Ctrl+Z"
+          disabled={!p.canUndo || p.readOnly}
+          onClick={p.onUndo}
+          className={ICON_BTN}
+        >
           ↶ Undo
         </button>
-        <button type="button" data-testid="redo" aria-label="Redo (Ctrl+Shift+Z)" title="Redo — Ctrl+Shift+Z or Ctrl+Y" disabled={!p.canRedo || p.readOnly} onClick={p.onRedo} className={ICON_BTN}>
+        <button
+          type="button"
+          data-testid="redo"
+          aria-label="Redo (Ctrl+Shift+Z)"
+          title="Redo — Ctrl+Shift+Z or Ctrl+Y"
+          disabled={!p.canRedo || p.readOnly}
+          onClick={p.onRedo}
+          className={ICON_BTN}
+        >
           ↷ Redo
         </button>
       </div>
       <div className="flex gap-1" role="group" aria-label="Zoom">
-        <button type="button" data-testid="zoom-in" aria-label="Zoom in (+)" title="Zoom in — +" onClick={p.onZoomIn} className={ICON_BTN}>+</button>
-        <button type="button" data-testid="zoom-out" aria-label="Zoom out (−)" title="Zoom out — −" onClick={p.onZoomOut} className={ICON_BTN}>−</button>
-        <button type="button" data-testid="zoom-fit" aria-label="Fit the section in view (F)" title="Fit — F" onClick={p.onFit} className={ICON_BTN}>Fit</button>
+        <button
+          type="button"
+          data-testid="zoom-in"
+          aria-label="Zoom in (+)"
+          title="Zoom in — +"
+          onClick={p.onZoomIn}
+          className={ICON_BTN}
+        >
+          +
+        </button>
+        <button
+          type="button"
+          data-testid="zoom-out"
+          aria-label="Zoom out (−)"
+          title="Zoom out — −"
+          onClick={p.onZoomOut}
+          className={ICON_BTN}
+        >
+          −
+        </button>
+        <button
+          type="button"
+          data-testid="zoom-fit"
+          aria-label="Fit the section in view (F)"
+          title="Fit — F"
+          onClick={p.onFit}
+          className={ICON_BTN}
+        >
+          Fit
+        </button>
       </div>
       <label className="flex items-center gap-1.5 text-xs text-ink-soft">
         Snap to grid
@@ -74,7 +121,9 @@ export function Toolbar(p: ToolbarProps) {
           onChange={(e) => p.onGridStep(Number(e.target.value))}
         >
           {GRID_STEPS.map((s) => (
-            <option key={s} value={s}>{s === 0 ? "off" : `${s} m`}</option>
+            <option key={s} value={s}>
+              {s === 0 ? "off" : `${s} m`}
+            </option>
           ))}
         </select>
       </label>
@@ -88,7 +137,9 @@ export function Toolbar(p: ToolbarProps) {
           onChange={(e) => p.onExaggeration(Number(e.target.value))}
         >
           {EXAGGERATIONS.map((x) => (
-            <option key={x} value={x}>{x}×</option>
+            <option key={x} value={x}>
+              {x}×
+            </option>
           ))}
         </select>
       </label>

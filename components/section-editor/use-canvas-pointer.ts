@@ -33,7 +33,16 @@ interface PointerDeps extends EditorContext {
 
 type Gesture =
   | { kind: "pan"; lastX: number; lastY: number }
-  | { kind: "drag"; ref: VertexRef; from: Point; startX: number; startY: number; moved: boolean; detach: boolean; result: SectionDocument | null };
+  | {
+      kind: "drag";
+      ref: VertexRef;
+      from: Point;
+      startX: number;
+      startY: number;
+      moved: boolean;
+      detach: boolean;
+      result: SectionDocument | null;
+    };
 
 /** Pixels the pointer must travel before a press on a vertex becomes a drag. */
 const DRAG_THRESHOLD_PX = 3;
@@ -50,7 +59,11 @@ function snapCandidates(doc: SectionDocument, draft: Draft | null, skip?: Point)
  * Turns canvas pointer events into editor actions: selecting, dragging vertices (one undo
  * step per drag, committed on release), drawing, setting the reservoir, panning and zooming.
  */
-export function useCanvasPointer(deps: PointerDeps): { handle(e: CanvasPointer): void; hover: Hover | null; gesture: Gesture["kind"] | null } {
+export function useCanvasPointer(deps: PointerDeps): {
+  handle(e: CanvasPointer): void;
+  hover: Hover | null;
+  gesture: Gesture["kind"] | null;
+} {
   const gestureRef = useRef<Gesture | null>(null);
   const [gestureKind, setGestureKind] = useState<Gesture["kind"] | null>(null);
   const [hover, setHover] = useState<Hover | null>(null);
@@ -83,7 +96,12 @@ export function useCanvasPointer(deps: PointerDeps): { handle(e: CanvasPointer):
 
   const snapped = (d: PointerDeps, view: ViewTransform, sx: number, sy: number, skip?: Point) => {
     const world = screenToWorld(view, sx, sy);
-    const r = snapPoint(world, { gridStep: d.gridStep, vertices: snapCandidates(d.doc, d.draft, skip), view, tolerancePx: VERTEX_SNAP_PX });
+    const r = snapPoint(world, {
+      gridStep: d.gridStep,
+      vertices: snapCandidates(d.doc, d.draft, skip),
+      view,
+      tolerancePx: VERTEX_SNAP_PX,
+    });
     return { world, ...r };
   };
 
@@ -94,12 +112,26 @@ export function useCanvasPointer(deps: PointerDeps): { handle(e: CanvasPointer):
     if (d.tool === "select") {
       const v = hitVertex(d.doc, view, e.sx, e.sy, VERTEX_SNAP_PX, prefer);
       if (v) {
-        d.setSelection({ ...(v.kind === "region" ? { kind: "region", region: v.region } : { kind: "phreatic" }), vertex: v.index });
+        d.setSelection({
+          ...(v.kind === "region" ? { kind: "region", region: v.region } : { kind: "phreatic" }),
+          vertex: v.index,
+        });
         const from = pointAt(d.doc, v);
-        if (!d.readOnly && from) start({ kind: "drag", ref: v, from, startX: e.sx, startY: e.sy, moved: false, detach: e.altKey, result: null });
+        if (!d.readOnly && from)
+          start({
+            kind: "drag",
+            ref: v,
+            from,
+            startX: e.sx,
+            startY: e.sy,
+            moved: false,
+            detach: e.altKey,
+            result: null,
+          });
         return;
       }
-      if (hitEdge(d.doc, { kind: "phreatic" }, view, e.sx, e.sy, EDGE_HIT_PX)) return d.setSelection({ kind: "phreatic", vertex: null });
+      if (hitEdge(d.doc, { kind: "phreatic" }, view, e.sx, e.sy, EDGE_HIT_PX))
+        return d.setSelection({ kind: "phreatic", vertex: null });
       const region = hitRegion(d.doc, screenToWorld(view, e.sx, e.sy));
       d.setSelection(region >= 0 ? { kind: "region", region, vertex: null } : null);
       return;
@@ -138,7 +170,12 @@ export function useCanvasPointer(deps: PointerDeps): { handle(e: CanvasPointer):
     }
     const s = snapped(d, view, e.sx, e.sy);
     const overVertex = d.tool === "select" && hitVertex(d.doc, view, e.sx, e.sy, VERTEX_SNAP_PX) !== null;
-    setHover({ world: s.world, snapped: d.tool === "select" ? s.world : s.point, snap: d.tool === "select" ? "none" : s.kind, overVertex });
+    setHover({
+      world: s.world,
+      snapped: d.tool === "select" ? s.world : s.point,
+      snap: d.tool === "select" ? "none" : s.kind,
+      overVertex,
+    });
   };
 
   const doubleClick = (d: PointerDeps, view: ViewTransform, e: CanvasPointer) => {

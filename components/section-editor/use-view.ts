@@ -28,7 +28,12 @@ function padded(b: Bounds): Bounds {
 }
 
 /** The pan and zoom of the canvas, sized to its container; fits the section on first show. */
-export function useView(container: RefObject<HTMLElement | null>, height: number, bounds: Bounds, exaggeration: number): EditorView {
+export function useView(
+  container: RefObject<HTMLElement | null>,
+  height: number,
+  bounds: Bounds,
+  exaggeration: number,
+): EditorView {
   const [width, setWidth] = useState(0);
   const [view, setView] = useState<ViewTransform | null>(null);
 
@@ -50,7 +55,9 @@ export function useView(container: RefObject<HTMLElement | null>, height: number
   // Fit once the width is known, and again when the exaggeration changes the picture's shape.
   useEffect(() => {
     if (width <= 0) return;
-    setView((v) => (v === null || v.exaggeration !== exaggeration ? fitToBounds(padded(bounds), width, height, exaggeration) : v));
+    setView((v) =>
+      v === null || v.exaggeration !== exaggeration ? fitToBounds(padded(bounds), width, height, exaggeration) : v,
+    );
   }, [width, height, exaggeration, bounds]);
 
   const zoomBy = useCallback(

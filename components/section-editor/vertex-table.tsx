@@ -15,7 +15,15 @@ interface VertexTableProps {
 }
 
 /** Exact coordinates of the selected region or phreatic line, one row per vertex. */
-export function VertexTable({ doc, selection, readOnly, onSelectVertex, onMove, onInsertAfter, onDelete }: VertexTableProps) {
+export function VertexTable({
+  doc,
+  selection,
+  readOnly,
+  onSelectVertex,
+  onMove,
+  onInsertAfter,
+  onDelete,
+}: VertexTableProps) {
   const owner = selection ? ownerOf(selection) : null;
   const points = owner ? ownerPoints(doc, owner) : undefined;
   const title = owner?.kind === "region" ? `Region ${owner.region + 1} vertices` : "Phreatic line points";
@@ -41,21 +49,53 @@ export function VertexTable({ doc, selection, readOnly, onSelectVertex, onMove, 
                 const active = selection?.vertex === i;
                 const select = () => selection && onSelectVertex({ ...selection, vertex: i });
                 return (
-                  <tr key={i} data-testid={`vertex-row-${i}`} aria-selected={active} className={active ? "bg-clay-50" : undefined} onClick={select}>
+                  <tr
+                    key={i}
+                    data-testid={`vertex-row-${i}`}
+                    aria-selected={active}
+                    className={active ? "bg-clay-50" : undefined}
+                    onClick={select}
+                  >
                     <td className={`pl-1 font-mono ${active ? "text-clay-700" : "text-ink-faint"}`}>{i + 1}</td>
                     <td>
-                      <CoordinateInput value={p[0]} label={`x of vertex ${i + 1}`} testId={`vertex-x-${i}`} readOnly={readOnly} onFocus={select} onCommit={(x) => onMove(ref, [x, p[1]])} />
+                      <CoordinateInput
+                        value={p[0]}
+                        label={`x of vertex ${i + 1}`}
+                        testId={`vertex-x-${i}`}
+                        readOnly={readOnly}
+                        onFocus={select}
+                        onCommit={(x) => onMove(ref, [x, p[1]])}
+                      />
                     </td>
                     <td>
-                      <CoordinateInput value={p[1]} label={`elevation of vertex ${i + 1}`} testId={`vertex-y-${i}`} readOnly={readOnly} onFocus={select} onCommit={(y) => onMove(ref, [p[0], y])} />
+                      <CoordinateInput
+                        value={p[1]}
+                        label={`elevation of vertex ${i + 1}`}
+                        testId={`vertex-y-${i}`}
+                        readOnly={readOnly}
+                        onFocus={select}
+                        onCommit={(y) => onMove(ref, [p[0], y])}
+                      />
                     </td>
                     <td className="whitespace-nowrap text-right">
                       {!readOnly && (
                         <>
-                          <button type="button" className="rounded px-1 text-ink-soft hover:bg-paper-sunk" aria-label={`Add a vertex after vertex ${i + 1}`} title="Add a vertex after this one" onClick={() => onInsertAfter(owner, i)}>
+                          <button
+                            type="button"
+                            className="rounded px-1 text-ink-soft hover:bg-paper-sunk"
+                            aria-label={`Add a vertex after vertex ${i + 1}`}
+                            title="Add a vertex after this one"
+                            onClick={() => onInsertAfter(owner, i)}
+                          >
                             +
                           </button>
-                          <button type="button" className="rounded px-1 text-alarm-700 hover:bg-alarm-50" aria-label={`Delete vertex ${i + 1}`} title="Delete this vertex" onClick={() => onDelete(owner, i)}>
+                          <button
+                            type="button"
+                            className="rounded px-1 text-alarm-700 hover:bg-alarm-50"
+                            aria-label={`Delete vertex ${i + 1}`}
+                            title="Delete this vertex"
+                            onClick={() => onDelete(owner, i)}
+                          >
                             ×
                           </button>
                         </>

@@ -24,8 +24,8 @@ export function WaterPanel({ doc, readOnly, onApply }: WaterPanelProps) {
     <section className="panel p-3" data-testid="water-panel" aria-label="Reservoir level">
       <h3 className="label">Reservoir level</h3>
       <p className="mb-2 text-xs text-ink-soft">
-        Water above the ground surface is reservoir water. A level here reshapes the phreatic line on that side, from the edge
-        of the section to where the water meets the slope.
+        Water above the ground surface is reservoir water. A level here reshapes the phreatic line on that side, from
+        the edge of the section to where the water meets the slope.
       </p>
       <form
         className="flex items-end gap-1.5"
@@ -35,14 +35,25 @@ export function WaterPanel({ doc, readOnly, onApply }: WaterPanelProps) {
         }}
       >
         <div>
-          <label className="label" htmlFor="reservoir-side">Side</label>
-          <select id="reservoir-side" data-testid="reservoir-side" className="field py-1 text-xs" value={side} onChange={(e) => setSide(e.target.value as Side)} disabled={readOnly}>
+          <label className="label" htmlFor="reservoir-side">
+            Side
+          </label>
+          <select
+            id="reservoir-side"
+            data-testid="reservoir-side"
+            className="field py-1 text-xs"
+            value={side}
+            onChange={(e) => setSide(e.target.value as Side)}
+            disabled={readOnly}
+          >
             <option value="left">left</option>
             <option value="right">right</option>
           </select>
         </div>
         <div className="min-w-0 flex-1">
-          <label className="label" htmlFor="reservoir-elevation">Elevation (m)</label>
+          <label className="label" htmlFor="reservoir-elevation">
+            Elevation (m)
+          </label>
           <input
             id="reservoir-elevation"
             data-testid="reservoir-elevation"
@@ -55,7 +66,12 @@ export function WaterPanel({ doc, readOnly, onApply }: WaterPanelProps) {
             disabled={readOnly}
           />
         </div>
-        <button type="submit" className="btn-quiet px-2 py-1 text-xs" data-testid="reservoir-apply" disabled={readOnly || !valid}>
+        <button
+          type="submit"
+          className="btn-quiet px-2 py-1 text-xs"
+          data-testid="reservoir-apply"
+          disabled={readOnly || !valid}
+        >
           Set
         </button>
       </form>

@@ -26,11 +26,23 @@ export function ImportPanel({ knownMaterialIds, onApply }: ImportPanelProps) {
       const ids = new Set(knownMaterialIds);
       for (const file of ordered) {
         if (file.size > MAX_BYTES) {
-          parsed.push({ fileName: file.name, kind: "unknown", problems: [{ row: 0, column: null, message: `The file is ${(file.size / 1e6).toFixed(1)} MB; the limit is 2 MB.` }], warnings: [], preview: [], columns: [], summary: "Too large" });
+          parsed.push({
+            fileName: file.name,
+            kind: "unknown",
+            problems: [
+              { row: 0, column: null, message: `The file is ${(file.size / 1e6).toFixed(1)} MB; the limit is 2 MB.` },
+            ],
+            warnings: [],
+            preview: [],
+            columns: [],
+            summary: "Too large",
+          });
           continue;
         }
         const p = parseDroppedFile(file.name, await file.text(), [...ids]);
-        if (p.kind === "materials" && p.apply) for (const m of p.apply({ version: 1, materials: [], regions: [] } as unknown as SectionDocument).materials) ids.add(m.id);
+        if (p.kind === "materials" && p.apply)
+          for (const m of p.apply({ version: 1, materials: [], regions: [] } as unknown as SectionDocument).materials)
+            ids.add(m.id);
         parsed.push(p);
       }
       setDrops(parsed);
@@ -64,15 +76,34 @@ export function ImportPanel({ knownMaterialIds, onApply }: ImportPanelProps) {
       <p className="text-xs text-ink-faint">
         Templates:{" "}
         {(["geometry", "phreatic", "materials"] as const).map((k, i) => (
-          <span key={k}>{i > 0 ? " · " : ""}<a className="text-clay-600 hover:underline" href={`/api/templates/${k}`} download>{k}.csv</a></span>
+          <span key={k}>
+            {i > 0 ? " · " : ""}
+            <a className="text-clay-600 hover:underline" href={`/api/templates/${k}`} download>
+              {k}.csv
+            </a>
+          </span>
         ))}
       </p>
-      {drops.map((d) => <DropPreview key={d.fileName} drop={d} />)}
+      {drops.map((d) => (
+        <DropPreview key={d.fileName} drop={d} />
+      ))}
       {drops.length > 0 ? (
         <div className="flex items-center gap-2">
-          <button type="button" className="btn-primary" disabled={!clean} onClick={applyAll} data-testid="import-apply">Apply to the drawing</button>
-          <button type="button" className="btn-quiet" onClick={() => setDrops([])}>Discard</button>
-          {!clean ? <span className="text-xs text-alarm-700">Fix the problems listed and drop the files again; nothing has been changed.</span> : <span className="text-xs text-ink-faint">Applying changes the drawing only; save a version to keep it.</span>}
+          <button type="button" className="btn-primary" disabled={!clean} onClick={applyAll} data-testid="import-apply">
+            Apply to the drawing
+          </button>
+          <button type="button" className="btn-quiet" onClick={() => setDrops([])}>
+            Discard
+          </button>
+          {!clean ? (
+            <span className="text-xs text-alarm-700">
+              Fix the problems listed and drop the files again; nothing has been changed.
+            </span>
+          ) : (
+            <span className="text-xs text-ink-faint">
+              Applying changes the drawing only; save a version to keep it.
+            </span>
+          )}
         </div>
       ) : null}
     </section>

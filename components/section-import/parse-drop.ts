@@ -1,4 +1,12 @@
-import { parseGeometryCsv, parseMaterialsCsv, parsePhreaticCsv, detectSectionFile, type CsvPreviewRow, type CsvProblem, type SectionFileKind } from "@/lib/section-io";
+import {
+  parseGeometryCsv,
+  parseMaterialsCsv,
+  parsePhreaticCsv,
+  detectSectionFile,
+  type CsvPreviewRow,
+  type CsvProblem,
+  type SectionFileKind,
+} from "@/lib/section-io";
 import { validateSection, type SectionDocument } from "@/lib/stability";
 
 /** One dropped file after parsing: what it is, what it would change, and every problem found. */
@@ -22,33 +30,72 @@ const COLUMNS: Record<string, string[]> = {
 
 export function parseDroppedFile(fileName: string, text: string, knownMaterialIds: string[]): ParsedDrop {
   const kind = detectSectionFile(fileName, text);
-  const base = { fileName, kind, warnings: [] as CsvProblem[], preview: [] as CsvPreviewRow[], columns: COLUMNS[kind] ?? [] };
+  const base = {
+    fileName,
+    kind,
+    warnings: [] as CsvProblem[],
+    preview: [] as CsvPreviewRow[],
+    columns: COLUMNS[kind] ?? [],
+  };
   switch (kind) {
     case "geometry": {
       const r = parseGeometryCsv(text, { knownMaterialIds });
-      if (!r.ok) return { ...base, problems: r.problems, preview: r.preview, warnings: r.warnings, summary: "Geometry (regions)" };
+      if (!r.ok)
+        return {
+          ...base,
+          problems: r.problems,
+          preview: r.preview,
+          warnings: r.warnings,
+          summary: "Geometry (regions)",
+        };
       return {
-        ...base, problems: [], preview: r.preview, warnings: r.warnings,
+        ...base,
+        problems: [],
+        preview: r.preview,
+        warnings: r.warnings,
         summary: `Geometry: ${r.value.length} region${r.value.length === 1 ? "" : "s"}, ${r.value.reduce((n, g) => n + g.points.length, 0)} points`,
-        apply: (doc) => ({ ...doc, regions: r.value.map((g) => ({ material: g.material, points: g.points.map(([x, y]) => [x, y] as [number, number]) })) }),
+        apply: (doc) => ({
+          ...doc,
+          regions: r.value.map((g) => ({
+            material: g.material,
+            points: g.points.map(([x, y]) => [x, y] as [number, number]),
+          })),
+        }),
       };
     }
     case "phreatic": {
       const r = parsePhreaticCsv(text);
-      if (!r.ok) return { ...base, problems: r.problems, preview: r.preview, warnings: r.warnings, summary: "Phreatic line" };
+      if (!r.ok)
+        return { ...base, problems: r.problems, preview: r.preview, warnings: r.warnings, summary: "Phreatic line" };
       return {
-        ...base, problems: [], preview: r.preview, warnings: r.warnings,
+        ...base,
+        problems: [],
+        preview: r.preview,
+        warnings: r.warnings,
         summary: `Phreatic line: ${r.value.length} points`,
-        apply: (doc) => ({ ...doc, water: { ...(doc.water ?? {}), ru: undefined, phreatic: r.value.map(([x, y]) => [x, y] as [number, number]) } }),
+        apply: (doc) => ({
+          ...doc,
+          water: { ...(doc.water ?? {}), ru: undefined, phreatic: r.value.map(([x, y]) => [x, y] as [number, number]) },
+        }),
       };
     }
     case "materials": {
       const r = parseMaterialsCsv(text);
-      if (!r.ok) return { ...base, problems: r.problems, preview: r.preview, warnings: r.warnings, summary: "Materials" };
+      if (!r.ok)
+        return { ...base, problems: r.problems, preview: r.preview, warnings: r.warnings, summary: "Materials" };
       return {
-        ...base, problems: [], preview: r.preview, warnings: r.warnings,
+        ...base,
+        problems: [],
+        preview: r.preview,
+        warnings: r.warnings,
         summary: `Materials: ${r.value.materials.map((m) => m.id).join(", ")}`,
-        apply: (doc) => ({ ...doc, materials: r.value.materials.map((m) => ({ ...m, name: r.value.names[m.id] ?? undefined })) as SectionDocument["materials"] }),
+        apply: (doc) => ({
+          ...doc,
+          materials: r.value.materials.map((m) => ({
+            ...m,
+            name: r.value.names[m.id] ?? undefined,
+          })) as SectionDocument["materials"],
+        }),
       };
     }
     case "section-json": {
@@ -56,13 +103,38 @@ export function parseDroppedFile(fileName: string, text: string, knownMaterialId
       try {
         raw = JSON.parse(text);
       } catch (err) {
-        return { ...base, problems: [{ row: 1, column: null, message: `Not valid JSON: ${err instanceof Error ? err.message : err}` }], summary: "Section document" };
+        return {
+          ...base,
+          problems: [{ row: 1, column: null, message: `Not valid JSON: ${err instanceof Error ? err.message : err}` }],
+          summary: "Section document",
+        };
       }
       const v = validateSection(raw);
-      if (!v.ok) return { ...base, problems: v.errors.map((e) => ({ row: 0, column: e.path || null, message: e.message })), summary: "Section document" };
-      return { ...base, problems: [], summary: `Section document: ${v.section.regions.length} regions, ${v.section.materials.length} materials`, apply: () => v.section };
+      if (!v.ok)
+        return {
+          ...base,
+          problems: v.errors.map((e) => ({ row: 0, column: e.path || null, message: e.message })),
+          summary: "Section document",
+        };
+      return {
+        ...base,
+        problems: [],
+        summary: `Section document: ${v.section.regions.length} regions, ${v.section.materials.length} materials`,
+        apply: () => v.section,
+      };
     }
     default:
-      return { ...base, problems: [{ row: 1, column: null, message: "Not a section file: expected a geometry CSV (region,material,x,y), a phreatic line CSV (x,y), a materials CSV (id,name,model,…) or a section JSON document." }], summary: "Unknown file" };
+      return {
+        ...base,
+        problems: [
+          {
+            row: 1,
+            column: null,
+            message:
+              "Not a section file: expected a geometry CSV (region,material,x,y), a phreatic line CSV (x,y), a materials CSV (id,name,model,…) or a section JSON document.",
+          },
+        ],
+        summary: "Unknown file",
+      };
   }
 }

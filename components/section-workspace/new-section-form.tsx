@@ -18,7 +18,7 @@ export function NewSectionForm({ projectId }: { projectId: number }) {
   const [imported, setImported] = useState<{ doc: SectionDocument; description: string } | null>(null);
   const [fields, setFields] = useState<Record<string, string[]>>({});
   const [error, setError] = useState<string | null>(null);
-  const doc = start === "starter" ? starterSection() : imported?.doc ?? null;
+  const doc = start === "starter" ? starterSection() : (imported?.doc ?? null);
   const check = doc ? validateSection(doc) : null;
 
   async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
@@ -26,16 +26,26 @@ export function NewSectionForm({ projectId }: { projectId: number }) {
     const form = new FormData(event.currentTarget);
     setFields({});
     setError(null);
-    if (!doc) { setError("Drop the section's files first, or start from the starter drawing."); return; }
+    if (!doc) {
+      setError("Drop the section's files first, or start from the starter drawing.");
+      return;
+    }
     try {
       const r = await fetchJson<{ section: { id: number } }>(`/api/projects/${projectId}/sections`, {
         method: "POST",
-        json: { name: form.get("name"), description: form.get("description"), document: doc, summary: start === "files" ? imported?.description : "Started from the starter drawing" },
+        json: {
+          name: form.get("name"),
+          description: form.get("description"),
+          document: doc,
+          summary: start === "files" ? imported?.description : "Started from the starter drawing",
+        },
       });
       router.push(`/projects/${projectId}/sections/${r.section.id}`);
     } catch (err) {
-      if (err instanceof ApiClientError) { setFields(err.fields); setError(err.message); }
-      else setError("Could not reach the server.");
+      if (err instanceof ApiClientError) {
+        setFields(err.fields);
+        setError(err.message);
+      } else setError("Could not reach the server.");
     }
   }
 
@@ -43,32 +53,73 @@ export function NewSectionForm({ projectId }: { projectId: number }) {
     <form onSubmit={onSubmit} className="max-w-3xl space-y-4" noValidate>
       <div className="panel space-y-3 p-4">
         <div>
-          <label className="label" htmlFor="section-name">Name</label>
+          <label className="label" htmlFor="section-name">
+            Name
+          </label>
           <input id="section-name" name="name" className="field" placeholder="e.g. Right abutment, station 0+410" />
           <FieldError messages={fields.name} />
         </div>
         <div>
-          <label className="label" htmlFor="section-description">Description</label>
+          <label className="label" htmlFor="section-description">
+            Description
+          </label>
           <textarea id="section-description" name="description" rows={2} className="field" />
         </div>
         <div className="flex gap-4 text-sm" role="radiogroup" aria-label="Start from">
-          <label className="inline-flex items-center gap-1.5"><input type="radio" name="start" checked={start === "starter"} onChange={() => setStart("starter")} /> Starter drawing, then draw</label>
-          <label className="inline-flex items-center gap-1.5"><input type="radio" name="start" checked={start === "files"} onChange={() => setStart("files")} /> Import files</label>
+          <label className="inline-flex items-center gap-1.5">
+            <input type="radio" name="start" checked={start === "starter"} onChange={() => setStart("starter")} />{" "}
+            Starter drawing, then draw
+          </label>
+          <label className="inline-flex items-center gap-1.5">
+            <input type="radio" name="start" checked={start === "files"} onChange={() => setStart("files")} /> Import
+            files
+          </label>
         </div>
       </div>
       {start === "files" ? (
         <>
-          <ImportPanel knownMaterialIds={[]} onApply={(apply, description) => setImported({ doc: apply(EMPTY), description })} />
+          <ImportPanel
+            knownMaterialIds={[]}
+            onApply={(apply, description) => setImported({ doc: apply(EMPTY), description })}
+          />
           {imported && check && !check.ok ? (
             <div className="panel p-3 text-sm" data-testid="new-section-issues">
-              <p className="font-medium text-alarm-700">The imported section has {check.errors.length} problem{check.errors.length === 1 ? "" : "s"}; fix the files and drop them again:</p>
-              <ul className="mt-1 list-disc pl-5 text-xs">{check.errors.map((e, i) => <li key={i}>{e.path}: {e.message}</li>)}</ul>
+              <p className="font-medium text-alarm-700">
+                The imported section has {check.errors.length} problem{check.errors.length === 1 ? "" : "s"}; fix the
+                files and drop them again:
+              </p>
+              <ul className="mt-1 list-disc pl-5 text-xs">
+                {check.errors.map((e, i) => (
+                  <li key={i}>
+                    {e.path}: {e.message}
+                  </li>
+                ))}
+              </ul>
             </div>
-          ) : imported ? <p className="text-sm text-moss-700">✓ Imported: {imported.description}</p> : null}
+          ) : imported ? (
+            <p className="text-sm text-moss-700">✓ Imported: {imported.description}</p>
+          ) : null}
         </>
       ) : null}
-      {error ? <FormBanner kind="error">{error}{Object.keys(fields).some((k) => k.startsWith("document")) ? <ul className="mt-1 list-disc pl-5 text-xs">{Object.entries(fields).filter(([k]) => k.startsWith("document")).map(([k, v]) => <li key={k}>{k.replace(/^document\./, "")}: {v.join(" ")}</li>)}</ul> : null}</FormBanner> : null}
-      <button type="submit" className="btn-primary" disabled={start === "files" && !(check && check.ok)}>Create section</button>
+      {error ? (
+        <FormBanner kind="error">
+          {error}
+          {Object.keys(fields).some((k) => k.startsWith("document")) ? (
+            <ul className="mt-1 list-disc pl-5 text-xs">
+              {Object.entries(fields)
+                .filter(([k]) => k.startsWith("document"))
+                .map(([k, v]) => (
+                  <li key={k}>
+                    {k.replace(/^document\./, "")}: {v.join(" ")}
+                  </li>
+                ))}
+            </ul>
+          ) : null}
+        </FormBanner>
+      ) : null}
+      <button type="submit" className="btn-primary" disabled={start === "files" && !(check && check.ok)}>
+        Create section
+      </button>
     </form>
   );
 }

@@ -31,21 +31,36 @@ export function SectionWorkspace({ projectId, section, document: saved, material
   // A new saved version (ours, or a restore) becomes the drawing; the banner stays to say what happened.
   useEffect(() => setDoc(saved), [section.currentVersion]); // eslint-disable-line react-hooks/exhaustive-deps
   const dirty = JSON.stringify(doc) !== JSON.stringify(saved);
-  const palette = materials.length > 0 ? materials : doc.materials.map((m, i) => ({ key: m.id, name: m.name ?? m.id, color: ["#8fb3d9", "#d9b38f", "#9fc79f", "#c9a0c9", "#a0a0a0"][i % 5] }));
+  const palette =
+    materials.length > 0
+      ? materials
+      : doc.materials.map((m, i) => ({
+          key: m.id,
+          name: m.name ?? m.id,
+          color: ["#8fb3d9", "#d9b38f", "#9fc79f", "#c9a0c9", "#a0a0a0"][i % 5],
+        }));
 
   async function save() {
     setBusy(true);
     setBanner(null);
     try {
-      const r = await fetchJson<{ section: { version: number }; summary: string }>(`/api/projects/${projectId}/sections/${section.id}`, {
-        method: "PUT",
-        json: { baseVersion: section.currentVersion, document: doc, summary: summary || undefined },
-      });
+      const r = await fetchJson<{ section: { version: number }; summary: string }>(
+        `/api/projects/${projectId}/sections/${section.id}`,
+        {
+          method: "PUT",
+          json: { baseVersion: section.currentVersion, document: doc, summary: summary || undefined },
+        },
+      );
       setSummary("");
       setBanner({ kind: "ok", text: `Saved as version ${r.section.version}: ${r.summary}` });
       router.refresh();
     } catch (err) {
-      if (err instanceof ApiClientError) setBanner({ kind: "error", text: err.message, fields: Object.entries(err.fields).map(([k, v]) => `${k}: ${v.join(" ")}`) });
+      if (err instanceof ApiClientError)
+        setBanner({
+          kind: "error",
+          text: err.message,
+          fields: Object.entries(err.fields).map(([k, v]) => `${k}: ${v.join(" ")}`),
+        });
       else setBanner({ kind: "error", text: "Could not reach the server; your drawing is still here." });
     } finally {
       setBusy(false);
@@ -55,7 +70,10 @@ export function SectionWorkspace({ projectId, section, document: saved, material
   async function restore(version: number) {
     if (dirty && !window.confirm("Restoring replaces your unsaved changes in the drawing. Continue?")) return;
     try {
-      const r = await fetchJson<{ section: { version: number } }>(`/api/projects/${projectId}/sections/${section.id}/versions/${version}/restore`, { method: "POST" });
+      const r = await fetchJson<{ section: { version: number } }>(
+        `/api/projects/${projectId}/sections/${section.id}/versions/${version}/restore`,
+        { method: "POST" },
+      );
       setBanner({ kind: "ok", text: `Version ${version} restored as version ${r.section.version}.` });
       router.refresh();
     } catch (err) {
@@ -66,33 +84,75 @@ export function SectionWorkspace({ projectId, section, document: saved, material
   return (
     <div className="grid gap-4 xl:grid-cols-[1fr_18rem]">
       <div className="min-w-0 space-y-3">
-        <SectionEditor document={doc} onChange={setDoc} materials={palette} issues={[...errors, ...warnings]} readOnly={!canEdit} />
+        <SectionEditor
+          document={doc}
+          onChange={setDoc}
+          materials={palette}
+          issues={[...errors, ...warnings]}
+          readOnly={!canEdit}
+        />
         {canEdit ? (
           <div className="panel flex flex-wrap items-end gap-3 p-3" data-testid="save-bar">
             <div className="min-w-64 flex-1">
-              <label className="label" htmlFor="save-summary">What changed (optional)</label>
-              <input id="save-summary" className="field" value={summary} onChange={(e) => setSummary(e.target.value)} placeholder="Left blank, Scarpline describes the change" maxLength={300} />
+              <label className="label" htmlFor="save-summary">
+                What changed (optional)
+              </label>
+              <input
+                id="save-summary"
+                className="field"
+                value={summary}
+                onChange={(e) => setSummary(e.target.value)}
+                placeholder="Left blank, Scarpline describes the change"
+                maxLength={300}
+              />
             </div>
-            <button type="button" className="btn-primary" onClick={save} disabled={busy || !dirty || errors.length > 0} data-testid="save-version">
+            <button
+              type="button"
+              className="btn-primary"
+              onClick={save}
+              disabled={busy || !dirty || errors.length > 0}
+              data-testid="save-version"
+            >
               {busy ? "Saving…" : `Save as version ${section.currentVersion + 1}`}
             </button>
-            {errors.length > 0 ? <span className="text-xs text-alarm-700">Fix the {errors.length} problem{errors.length === 1 ? "" : "s"} listed beside the drawing to save.</span> : !dirty ? <span className="text-xs text-ink-faint">No unsaved changes.</span> : null}
+            {errors.length > 0 ? (
+              <span className="text-xs text-alarm-700">
+                Fix the {errors.length} problem{errors.length === 1 ? "" : "s"} listed beside the drawing to save.
+              </span>
+            ) : !dirty ? (
+              <span className="text-xs text-ink-faint">No unsaved changes.</span>
+            ) : null}
           </div>
         ) : null}
         {banner ? (
           <FormBanner kind={banner.kind}>
             {banner.text}
-            {banner.fields?.length ? <ul className="mt-1 list-disc pl-5 text-xs">{banner.fields.map((f) => <li key={f}>{f}</li>)}</ul> : null}
+            {banner.fields?.length ? (
+              <ul className="mt-1 list-disc pl-5 text-xs">
+                {banner.fields.map((f) => (
+                  <li key={f}>{f}</li>
+                ))}
+              </ul>
+            ) : null}
           </FormBanner>
         ) : null}
-        {canEdit ? <ImportPanel knownMaterialIds={doc.materials.map((m) => m.id)} onApply={(apply) => setDoc((d) => apply(d))} /> : null}
+        {canEdit ? (
+          <ImportPanel knownMaterialIds={doc.materials.map((m) => m.id)} onApply={(apply) => setDoc((d) => apply(d))} />
+        ) : null}
       </div>
       <aside className="space-y-3">
         <section className="panel space-y-2 p-3">
           <h2 className="text-sm font-semibold">Export</h2>
           <ExportButtons name={section.name} document={doc} />
         </section>
-        <VersionList projectId={projectId} sectionId={section.id} versions={section.versions} current={section.currentVersion} canRestore={canEdit} onRestore={restore} />
+        <VersionList
+          projectId={projectId}
+          sectionId={section.id}
+          versions={section.versions}
+          current={section.currentVersion}
+          canRestore={canEdit}
+          onRestore={restore}
+        />
       </aside>
     </div>
   );

@@ -21,15 +21,29 @@ export function VersionList({ projectId, sectionId, versions, current, canRestor
         {versions.map((v) => (
           <li key={v.version} className="border-t border-rule pt-2 first:border-0 first:pt-0">
             <div className="flex items-baseline justify-between gap-2">
-              <span className="font-medium">v{v.version}{v.version === current ? <span className="ml-1 text-xs text-moss-700">current</span> : null}</span>
-              <span className="text-xs text-ink-faint">{new Date(v.createdAt).toLocaleString("en-GB", { dateStyle: "short", timeStyle: "short" })}</span>
+              <span className="font-medium">
+                v{v.version}
+                {v.version === current ? <span className="ml-1 text-xs text-moss-700">current</span> : null}
+              </span>
+              <span className="text-xs text-ink-faint">
+                {new Date(v.createdAt).toLocaleString("en-GB", { dateStyle: "short", timeStyle: "short" })}
+              </span>
             </div>
             <p className="text-ink-soft">{v.summary}</p>
             <p className="text-xs text-ink-faint">{v.createdByName}</p>
             {v.version !== current ? (
               <div className="mt-1 flex gap-3 text-xs">
-                <Link className="text-clay-600 hover:underline" href={`/projects/${projectId}/sections/${sectionId}/versions/${v.version}`}>Open read-only</Link>
-                {canRestore ? <button type="button" className="text-clay-600 hover:underline" onClick={() => onRestore(v.version)}>Restore</button> : null}
+                <Link
+                  className="text-clay-600 hover:underline"
+                  href={`/projects/${projectId}/sections/${sectionId}/versions/${v.version}`}
+                >
+                  Open read-only
+                </Link>
+                {canRestore ? (
+                  <button type="button" className="text-clay-600 hover:underline" onClick={() => onRestore(v.version)}>
+                    Restore
+                  </button>
+                ) : null}
               </div>
             ) : null}
           </li>

@@ -12,9 +12,19 @@ export function AppHeader({ user }: { user: SessionUser }) {
           <Wordmark inverted />
         </Link>
         <nav className="flex items-center gap-4 text-sm" aria-label="Main">
-          <Link href="/projects" className="text-paper/80 hover:text-paper">Projects</Link>
-          {can(user.role, "users.manage") ? <Link href="/admin/users" className="text-paper/80 hover:text-paper">People</Link> : null}
-          {can(user.role, "mail.view") ? <Link href="/admin/mail" className="text-paper/80 hover:text-paper">Mail log</Link> : null}
+          <Link href="/projects" className="text-paper/80 hover:text-paper">
+            Projects
+          </Link>
+          {can(user.role, "users.manage") ? (
+            <Link href="/admin/users" className="text-paper/80 hover:text-paper">
+              People
+            </Link>
+          ) : null}
+          {can(user.role, "mail.view") ? (
+            <Link href="/admin/mail" className="text-paper/80 hover:text-paper">
+              Mail log
+            </Link>
+          ) : null}
         </nav>
         <div className="ml-auto flex items-center gap-4">
           <Link href="/account" className="text-sm text-paper/90 hover:text-paper" data-testid="account-link">

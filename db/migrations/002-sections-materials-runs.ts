@@ -63,7 +63,9 @@ export async function up(knex: Knex): Promise<void> {
     t.integer("section_version_id").unsigned().notNullable().references("section_versions.id");
     t.integer("revises_run_id").unsigned().nullable().references("runs.id");
     t.string("title", 200).notNullable();
-    t.enu("status", [...RUN_STATUSES]).notNullable().defaultTo("draft");
+    t.enu("status", [...RUN_STATUSES])
+      .notNullable()
+      .defaultTo("draft");
     t.enu("load_case", [...LOAD_CASES]).notNullable();
     t.enu("face", ["upstream", "downstream"]).notNullable();
     t.string("methods", 60).notNullable();

@@ -41,12 +41,22 @@ function toSummary(r: Record<string, unknown>): DesignStudySummary {
   };
 }
 
-export async function fetchDesignStudiesOfProject(projectId: number, db: Knex = getDb()): Promise<DesignStudySummary[]> {
-  const rows = await selectStudies(db).where("d.project_id", projectId).orderBy("d.updated_at", "desc").orderBy("d.id", "desc");
+export async function fetchDesignStudiesOfProject(
+  projectId: number,
+  db: Knex = getDb(),
+): Promise<DesignStudySummary[]> {
+  const rows = await selectStudies(db)
+    .where("d.project_id", projectId)
+    .orderBy("d.updated_at", "desc")
+    .orderBy("d.id", "desc");
   return rows.map(toSummary);
 }
 
-export async function fetchDesignStudy(projectId: number, studyId: number, db: Knex = getDb()): Promise<DesignStudy | null> {
+export async function fetchDesignStudy(
+  projectId: number,
+  studyId: number,
+  db: Knex = getDb(),
+): Promise<DesignStudy | null> {
   const row = await selectStudies(db).where({ "d.project_id": projectId, "d.id": studyId }).first();
   if (!row) return null;
   return {
@@ -57,7 +67,10 @@ export async function fetchDesignStudy(projectId: number, studyId: number, db: K
   };
 }
 
-export async function createDesignStudy(input: { projectId: number; name: string; parameters: EmbankmentParams; userId: number }, db: Knex = getDb()): Promise<number> {
+export async function createDesignStudy(
+  input: { projectId: number; name: string; parameters: EmbankmentParams; userId: number },
+  db: Knex = getDb(),
+): Promise<number> {
   const [id] = await db("design_studies").insert({
     project_id: input.projectId,
     name: input.name,
@@ -69,7 +82,10 @@ export async function createDesignStudy(input: { projectId: number; name: string
 }
 
 /** New parameters invalidate the kept sweep, which described another embankment. */
-export async function saveDesignParameters(input: { projectId: number; studyId: number; name?: string; parameters: EmbankmentParams }, db: Knex = getDb()): Promise<boolean> {
+export async function saveDesignParameters(
+  input: { projectId: number; studyId: number; name?: string; parameters: EmbankmentParams },
+  db: Knex = getDb(),
+): Promise<boolean> {
   const n = await db("design_studies")
     .where({ id: input.studyId, project_id: input.projectId })
     .update({
@@ -81,7 +97,10 @@ export async function saveDesignParameters(input: { projectId: number; studyId: 
   return n > 0;
 }
 
-export async function saveDesignSweep(input: { projectId: number; studyId: number; sweep: StoredSweep }, db: Knex = getDb()): Promise<boolean> {
+export async function saveDesignSweep(
+  input: { projectId: number; studyId: number; sweep: StoredSweep },
+  db: Knex = getDb(),
+): Promise<boolean> {
   const n = await db("design_studies")
     .where({ id: input.studyId, project_id: input.projectId })
     .update({ sweep_results: JSON.stringify(input.sweep), updated_at: db.fn.now() });
@@ -94,7 +113,14 @@ export async function deleteDesignStudy(projectId: number, studyId: number, db: 
 
 /** A section name not yet taken in the project: `base`, else `base (2)`, `base (3)`, … */
 export async function freeSectionName(projectId: number, base: string, db: Knex = getDb()): Promise<string> {
-  const taken = new Set((await db("sections").where("project_id", projectId).andWhere("name", "like", `${base.replace(/[%_\\]/g, "\\$&")}%`).select("name")).map((r: { name: string }) => r.name));
+  const taken = new Set(
+    (
+      await db("sections")
+        .where("project_id", projectId)
+        .andWhere("name", "like", `${base.replace(/[%_\\]/g, "\\$&")}%`)
+        .select("name")
+    ).map((r: { name: string }) => r.name),
+  );
   if (!taken.has(base)) return base;
   for (let i = 2; ; i++) if (!taken.has(`${base} (${i})`)) return `${base} (${i})`;
 }
@@ -116,12 +142,17 @@ export interface DesignContext {
 
 /** What a design study needs from its project: materials, required FS and compaction results. */
 export async function fetchDesignContext(projectId: number, db: Knex = getDb()): Promise<DesignContext> {
-  const [library, fsMap, sets] = await Promise.all([fetchMaterialsOfProject(projectId, db), fetchRequiredFsMap(projectId, db), fetchLabTestSetsOfProject(projectId, db)]);
+  const [library, fsMap, sets] = await Promise.all([
+    fetchMaterialsOfProject(projectId, db),
+    fetchRequiredFsMap(projectId, db),
+    fetchLabTestSetsOfProject(projectId, db),
+  ]);
   const keyOf = new Map(library.map((m) => [m.id, m.key]));
   const compaction = new Map<string, CompactionSource>();
   for (const set of sets) {
     const key = set.materialId === null ? undefined : keyOf.get(set.materialId);
-    if (set.kind === "compaction" && key) compaction.set(key, { materialKey: key, setName: set.name, result: set.result });
+    if (set.kind === "compaction" && key)
+      compaction.set(key, { materialKey: key, setName: set.name, result: set.result });
   }
   return {
     materials: library.map(toEngineMaterial),

@@ -57,16 +57,27 @@ function toRecord(r: Record<string, unknown>): DocumentRecord {
 }
 
 /** The project's documents, newest first; narrowed to one section or one material when asked. */
-export async function fetchDocumentsOfProject(projectId: number, filter: DocumentFilter = {}, db: Knex = getDb()): Promise<DocumentRecord[]> {
+export async function fetchDocumentsOfProject(
+  projectId: number,
+  filter: DocumentFilter = {},
+  db: Knex = getDb(),
+): Promise<DocumentRecord[]> {
   const query = baseQuery(db).where("d.project_id", projectId);
   if (filter.sectionId !== undefined) query.andWhere("d.section_id", filter.sectionId);
   if (filter.materialId !== undefined) query.andWhere("d.material_id", filter.materialId);
-  const rows = await query.orderBy([{ column: "d.uploaded_at", order: "desc" }, { column: "d.id", order: "desc" }]);
+  const rows = await query.orderBy([
+    { column: "d.uploaded_at", order: "desc" },
+    { column: "d.id", order: "desc" },
+  ]);
   return rows.map(toRecord);
 }
 
 /** One document of the project, or null (also when it belongs to another project). */
-export async function fetchDocument(projectId: number, documentId: number, db: Knex = getDb()): Promise<DocumentRecord | null> {
+export async function fetchDocument(
+  projectId: number,
+  documentId: number,
+  db: Knex = getDb(),
+): Promise<DocumentRecord | null> {
   const row = await baseQuery(db).where({ "d.id": documentId, "d.project_id": projectId }).first();
   return row ? toRecord(row) : null;
 }
@@ -106,7 +117,11 @@ export async function insertDocument(input: NewDocument, db: Knex = getDb()): Pr
  * Deletes the row inside a transaction and runs `removeStored` before committing, so a failure
  * to remove the stored bytes leaves the row in place and the delete can simply be retried.
  */
-export async function deleteDocument(documentId: number, removeStored: () => Promise<void>, db: Knex = getDb()): Promise<boolean> {
+export async function deleteDocument(
+  documentId: number,
+  removeStored: () => Promise<void>,
+  db: Knex = getDb(),
+): Promise<boolean> {
   return db.transaction(async (trx) => {
     const removed = await trx("documents").where({ id: documentId }).delete();
     if (removed === 0) return false;
@@ -116,11 +131,19 @@ export async function deleteDocument(documentId: number, removeStored: () => Pro
 }
 
 /** Whether the section exists and belongs to the project. */
-export async function sectionBelongsToProject(projectId: number, sectionId: number, db: Knex = getDb()): Promise<boolean> {
+export async function sectionBelongsToProject(
+  projectId: number,
+  sectionId: number,
+  db: Knex = getDb(),
+): Promise<boolean> {
   return Boolean(await db("sections").where({ id: sectionId, project_id: projectId }).first("id"));
 }
 
 /** Whether the material exists and belongs to the project. */
-export async function materialBelongsToProject(projectId: number, materialId: number, db: Knex = getDb()): Promise<boolean> {
+export async function materialBelongsToProject(
+  projectId: number,
+  materialId: number,
+  db: Knex = getDb(),
+): Promise<boolean> {
   return Boolean(await db("materials").where({ id: materialId, project_id: projectId }).first("id"));
 }

@@ -15,7 +15,11 @@ export type LabTestSet = LabTestRecord & {
 
 function toLabTestSet(r: Record<string, unknown>): LabTestSet {
   // data and result were written by createLabTestSet from one LabTestRecord of this kind.
-  const record = { kind: r.kind as LabTestKind, data: JSON.parse(r.data as string), result: JSON.parse(r.result as string) } as LabTestRecord;
+  const record = {
+    kind: r.kind as LabTestKind,
+    data: JSON.parse(r.data as string),
+    result: JSON.parse(r.result as string),
+  } as LabTestRecord;
   return {
     ...record,
     id: r.id as number,
@@ -31,7 +35,11 @@ function selectSets(db: Knex) {
   return db("lab_test_sets as l").join("users as u", "u.id", "l.created_by").select("l.*", "u.name as user_name");
 }
 
-export async function fetchLabTestSetsOfMaterial(projectId: number, materialId: number, db: Knex = getDb()): Promise<LabTestSet[]> {
+export async function fetchLabTestSetsOfMaterial(
+  projectId: number,
+  materialId: number,
+  db: Knex = getDb(),
+): Promise<LabTestSet[]> {
   const rows = await selectSets(db).where({ "l.project_id": projectId, "l.material_id": materialId }).orderBy("l.id");
   return rows.map(toLabTestSet);
 }
@@ -41,16 +49,31 @@ export async function fetchLabTestSetsOfProject(projectId: number, db: Knex = ge
   return rows.map(toLabTestSet);
 }
 
-export async function fetchLabTestSet(projectId: number, setId: number, db: Knex = getDb()): Promise<LabTestSet | null> {
+export async function fetchLabTestSet(
+  projectId: number,
+  setId: number,
+  db: Knex = getDb(),
+): Promise<LabTestSet | null> {
   const row = await selectSets(db).where({ "l.project_id": projectId, "l.id": setId }).first();
   return row ? toLabTestSet(row) : null;
 }
 
 /** Kind and owner of the given sets of a project, for checking claimed sources. */
-export async function fetchLabTestSetKinds(projectId: number, setIds: readonly number[], db: Knex = getDb()): Promise<{ id: number; kind: LabTestKind; materialId: number | null }[]> {
+export async function fetchLabTestSetKinds(
+  projectId: number,
+  setIds: readonly number[],
+  db: Knex = getDb(),
+): Promise<{ id: number; kind: LabTestKind; materialId: number | null }[]> {
   if (setIds.length === 0) return [];
-  const rows = await db("lab_test_sets").where("project_id", projectId).whereIn("id", [...setIds]).select("id", "kind", "material_id");
-  return rows.map((r: Record<string, unknown>) => ({ id: r.id as number, kind: r.kind as LabTestKind, materialId: (r.material_id as number | null) ?? null }));
+  const rows = await db("lab_test_sets")
+    .where("project_id", projectId)
+    .whereIn("id", [...setIds])
+    .select("id", "kind", "material_id");
+  return rows.map((r: Record<string, unknown>) => ({
+    id: r.id as number,
+    kind: r.kind as LabTestKind,
+    materialId: (r.material_id as number | null) ?? null,
+  }));
 }
 
 export async function createLabTestSet(
@@ -81,7 +104,10 @@ export async function deleteLabTestSet(projectId: number, setId: number, db: Kne
     for (const m of materials) {
       const sources = JSON.parse(m.sources) as ParameterSources;
       const kept = Object.fromEntries(Object.entries(sources).filter(([, id]) => id !== setId));
-      if (Object.keys(kept).length !== Object.keys(sources).length) await trx("materials").where({ id: m.id }).update({ sources: JSON.stringify(kept) });
+      if (Object.keys(kept).length !== Object.keys(sources).length)
+        await trx("materials")
+          .where({ id: m.id })
+          .update({ sources: JSON.stringify(kept) });
     }
     await trx("lab_test_sets").where({ id: setId }).delete();
     return true;

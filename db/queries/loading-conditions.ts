@@ -38,7 +38,10 @@ export async function fetchConditionSettings(projectId: number, db: Knex = getDb
   });
 }
 
-export async function fetchRequiredFsMap(projectId: number, db: Knex = getDb()): Promise<Record<LoadingConditionKey, number>> {
+export async function fetchRequiredFsMap(
+  projectId: number,
+  db: Knex = getDb(),
+): Promise<Record<LoadingConditionKey, number>> {
   const settings = await fetchConditionSettings(projectId, db);
   return Object.fromEntries(settings.map((s) => [s.key, s.requiredFs])) as Record<LoadingConditionKey, number>;
 }
@@ -54,7 +57,13 @@ export async function saveConditionSetting(
     return;
   }
   await db("project_loading_conditions")
-    .insert({ project_id: input.projectId, condition_key: input.key, required_fs: input.requiredFs, reason: input.reason, updated_by: input.userId })
+    .insert({
+      project_id: input.projectId,
+      condition_key: input.key,
+      required_fs: input.requiredFs,
+      reason: input.reason,
+      updated_by: input.userId,
+    })
     .onConflict(["project_id", "condition_key"])
     .merge({ required_fs: input.requiredFs, reason: input.reason, updated_by: input.userId, updated_at: db.fn.now() });
 }

@@ -53,7 +53,11 @@ function toMaterial(r: Record<string, unknown>): LibraryMaterial {
 function selectMaterials(db: Knex) {
   return db("materials as m")
     .join("users as u", "u.id", "m.updated_by")
-    .select("m.*", "u.name as user_name", db.raw("(select count(*) from lab_test_sets l where l.material_id = m.id) as lab_test_count"));
+    .select(
+      "m.*",
+      "u.name as user_name",
+      db.raw("(select count(*) from lab_test_sets l where l.material_id = m.id) as lab_test_count"),
+    );
 }
 
 export async function fetchMaterialsOfProject(projectId: number, db: Knex = getDb()): Promise<LibraryMaterial[]> {
@@ -61,7 +65,11 @@ export async function fetchMaterialsOfProject(projectId: number, db: Knex = getD
   return rows.map(toMaterial);
 }
 
-export async function fetchMaterial(projectId: number, materialId: number, db: Knex = getDb()): Promise<LibraryMaterial | null> {
+export async function fetchMaterial(
+  projectId: number,
+  materialId: number,
+  db: Knex = getDb(),
+): Promise<LibraryMaterial | null> {
   const row = await selectMaterials(db).where({ "m.project_id": projectId, "m.id": materialId }).first();
   return row ? toMaterial(row) : null;
 }
@@ -74,7 +82,12 @@ function isDuplicateEntry(err: unknown): boolean {
  * Inserts materials in one transaction: all of them or none (an import of a whole file).
  * @throws DuplicateMaterialKeyError when a key is taken, e.g. by someone saving meanwhile.
  */
-export async function createMaterials(projectId: number, userId: number, materials: readonly NewMaterial[], db: Knex = getDb()): Promise<number[]> {
+export async function createMaterials(
+  projectId: number,
+  userId: number,
+  materials: readonly NewMaterial[],
+  db: Knex = getDb(),
+): Promise<number[]> {
   return db.transaction(async (trx) => {
     const ids: number[] = [];
     for (const m of materials) {
@@ -99,7 +112,12 @@ export async function createMaterials(projectId: number, userId: number, materia
   });
 }
 
-export async function createMaterial(projectId: number, userId: number, material: NewMaterial, db: Knex = getDb()): Promise<number> {
+export async function createMaterial(
+  projectId: number,
+  userId: number,
+  material: NewMaterial,
+  db: Knex = getDb(),
+): Promise<number> {
   const [id] = await createMaterials(projectId, userId, [material], db);
   return id;
 }
@@ -109,7 +127,15 @@ export async function createMaterial(projectId: number, userId: number, material
  * material yet are attached to this one in the same transaction.
  */
 export async function updateMaterial(
-  input: { materialId: number; userId: number; name: string; color: string; notes: string; parameters: MaterialParameters; sources: ParameterSources },
+  input: {
+    materialId: number;
+    userId: number;
+    name: string;
+    color: string;
+    notes: string;
+    parameters: MaterialParameters;
+    sources: ParameterSources;
+  },
   db: Knex = getDb(),
 ): Promise<void> {
   await db.transaction(async (trx) => {
@@ -125,7 +151,11 @@ export async function updateMaterial(
         updated_at: trx.fn.now(),
       });
     const setIds = [...new Set(Object.values(input.sources))];
-    if (setIds.length > 0) await trx("lab_test_sets").whereIn("id", setIds).whereNull("material_id").update({ material_id: input.materialId });
+    if (setIds.length > 0)
+      await trx("lab_test_sets")
+        .whereIn("id", setIds)
+        .whereNull("material_id")
+        .update({ material_id: input.materialId });
   });
 }
 

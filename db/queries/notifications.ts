@@ -14,14 +14,23 @@ export interface NoticeRecipient {
 export async function fetchNoticePreferences(userId: number, db: Knex = getDb()): Promise<NoticePreferences> {
   const rows = await db("notification_preferences").where({ user_id: userId }).select("notice_kind", "enabled");
   const prefs = Object.fromEntries(NOTICE_KINDS.map((k) => [k, true])) as NoticePreferences;
-  for (const r of rows) if ((NOTICE_KINDS as readonly string[]).includes(r.notice_kind)) prefs[r.notice_kind as NoticeKind] = Boolean(r.enabled);
+  for (const r of rows)
+    if ((NOTICE_KINDS as readonly string[]).includes(r.notice_kind))
+      prefs[r.notice_kind as NoticeKind] = Boolean(r.enabled);
   return prefs;
 }
 
-export async function saveNoticePreferences(userId: number, prefs: readonly { kind: NoticeKind; enabled: boolean }[], db: Knex = getDb()): Promise<void> {
+export async function saveNoticePreferences(
+  userId: number,
+  prefs: readonly { kind: NoticeKind; enabled: boolean }[],
+  db: Knex = getDb(),
+): Promise<void> {
   await db.transaction(async (trx) => {
     for (const p of prefs) {
-      await trx("notification_preferences").insert({ user_id: userId, notice_kind: p.kind, enabled: p.enabled }).onConflict(["user_id", "notice_kind"]).merge(["enabled"]);
+      await trx("notification_preferences")
+        .insert({ user_id: userId, notice_kind: p.kind, enabled: p.enabled })
+        .onConflict(["user_id", "notice_kind"])
+        .merge(["enabled"]);
     }
   });
 }
@@ -41,6 +50,10 @@ export async function fetchNoticeRecipients(
     .select("u.id", "u.name", "u.email")
     .orderBy("u.id");
   if ("userIds" in who) q.whereIn("u.id", [...who.userIds]);
-  else q.join("project_members as m", "m.user_id", "u.id").where({ "m.project_id": who.projectId, "m.role": who.projectRole });
+  else
+    q.join("project_members as m", "m.user_id", "u.id").where({
+      "m.project_id": who.projectId,
+      "m.role": who.projectRole,
+    });
   return (await q) as NoticeRecipient[];
 }

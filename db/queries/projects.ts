@@ -67,7 +67,11 @@ export async function fetchProjectById(id: number, db: Knex = getDb()) {
   };
 }
 
-export async function fetchMemberRole(projectId: number, userId: number, db: Knex = getDb()): Promise<ProjectRole | null> {
+export async function fetchMemberRole(
+  projectId: number,
+  userId: number,
+  db: Knex = getDb(),
+): Promise<ProjectRole | null> {
   const row = await db("project_members").where({ project_id: projectId, user_id: userId }).first();
   return row ? (row.role as ProjectRole) : null;
 }
@@ -102,7 +106,10 @@ export async function createProject(
 
 /** Adds a member or changes the role of an existing one. */
 export async function upsertProjectMember(projectId: number, userId: number, role: ProjectRole, db: Knex = getDb()) {
-  await db("project_members").insert({ project_id: projectId, user_id: userId, role }).onConflict(["project_id", "user_id"]).merge({ role });
+  await db("project_members")
+    .insert({ project_id: projectId, user_id: userId, role })
+    .onConflict(["project_id", "user_id"])
+    .merge({ role });
 }
 
 export async function removeProjectMember(projectId: number, userId: number, db: Knex = getDb()): Promise<boolean> {

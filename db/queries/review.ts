@@ -58,7 +58,17 @@ export async function fetchReviewRecord(runId: number, db: Knex = getDb()): Prom
     .leftJoin("users as s", "s.id", "r.submitted_by")
     .leftJoin("users as v", "v.id", "r.reviewed_by")
     .where("r.id", runId)
-    .select("r.status", "r.created_by", "s.name as submitted_name", "r.submitted_at", "r.reviewed_by", "v.name as reviewed_name", "r.reviewed_at", "r.review_note", "r.material_sources")
+    .select(
+      "r.status",
+      "r.created_by",
+      "s.name as submitted_name",
+      "r.submitted_at",
+      "r.reviewed_by",
+      "v.name as reviewed_name",
+      "r.reviewed_at",
+      "r.review_note",
+      "r.material_sources",
+    )
     .first();
   if (!r) return null;
   return {
@@ -92,7 +102,14 @@ export async function fetchRunEvents(runId: number, db: Knex = getDb()): Promise
 }
 
 export async function recordRunEvent(
-  event: { runId: number; actorId: number | null; kind: string; note: string; fromStatus?: RunStatus; toStatus?: RunStatus },
+  event: {
+    runId: number;
+    actorId: number | null;
+    kind: string;
+    note: string;
+    fromStatus?: RunStatus;
+    toStatus?: RunStatus;
+  },
   db: Knex = getDb(),
 ): Promise<void> {
   await db("run_events").insert({
@@ -123,16 +140,24 @@ export async function applyTransition(w: TransitionWrite, db: Knex = getDb()): P
   await db.transaction(async (trx) => {
     const row = await trx("runs").where({ id: w.runId }).forUpdate().first("status");
     if (!row) throw new RunStateError("The run no longer exists.");
-    if (row.status !== w.from) throw new RunStateError(`The run is now ${row.status}, not ${w.from}; reload the page to see who changed it.`);
+    if (row.status !== w.from)
+      throw new RunStateError(`The run is now ${row.status}, not ${w.from}; reload the page to see who changed it.`);
     const now = trx.fn.now();
     const patch: Record<string, unknown> = { status: w.to };
     if (w.to === "submitted") {
-      Object.assign(patch, { submitted_by: w.actorId, submitted_at: now, material_sources: JSON.stringify(w.materialSources ?? []) });
+      Object.assign(patch, {
+        submitted_by: w.actorId,
+        submitted_at: now,
+        material_sources: JSON.stringify(w.materialSources ?? []),
+      });
     } else {
       Object.assign(patch, { reviewed_by: w.actorId, reviewed_at: now, review_note: w.note || null });
     }
     await trx("runs").where({ id: w.runId, status: w.from }).update(patch);
-    await recordRunEvent({ runId: w.runId, actorId: w.actorId, kind: "status", fromStatus: w.from, toStatus: w.to, note: w.note }, trx);
+    await recordRunEvent(
+      { runId: w.runId, actorId: w.actorId, kind: "status", fromStatus: w.from, toStatus: w.to, note: w.note },
+      trx,
+    );
   });
 }
 
@@ -144,13 +169,20 @@ function toComment(r: Record<string, unknown>): RunComment {
     authorName: r.author_name as string,
     body: r.body as string,
     pin: hasPin ? { x: Number(r.pin_x), y: Number(r.pin_y) } : null,
-    slice: r.slice_number !== null ? { number: r.slice_number as number, method: (r.slice_method as "bishop" | "fellenius") ?? "bishop" } : null,
+    slice:
+      r.slice_number !== null
+        ? { number: r.slice_number as number, method: (r.slice_method as "bishop" | "fellenius") ?? "bishop" }
+        : null,
     createdAt: iso(r.created_at)!,
   };
 }
 
 export async function fetchRunComments(runId: number, db: Knex = getDb()): Promise<RunComment[]> {
-  const rows = await db("run_comments as c").join("users as u", "u.id", "c.author_id").where("c.run_id", runId).orderBy("c.id").select("c.*", "u.name as author_name");
+  const rows = await db("run_comments as c")
+    .join("users as u", "u.id", "c.author_id")
+    .where("c.run_id", runId)
+    .orderBy("c.id")
+    .select("c.*", "u.name as author_name");
   return rows.map(toComment);
 }
 
@@ -177,14 +209,24 @@ export async function addRunComment(c: NewComment, db: Knex = getDb()): Promise<
       slice_number: c.slice?.number ?? null,
       slice_method: c.slice?.method ?? null,
     });
-    const where = c.pin ? ` at (${c.pin.x.toFixed(2)}, ${c.pin.y.toFixed(2)}) m` : c.slice ? ` on slice ${c.slice.number}` : "";
-    await recordRunEvent({ runId: c.runId, actorId: c.authorId, kind: "comment", note: `Comment${where}: ${c.body}` }, trx);
+    const where = c.pin
+      ? ` at (${c.pin.x.toFixed(2)}, ${c.pin.y.toFixed(2)}) m`
+      : c.slice
+        ? ` on slice ${c.slice.number}`
+        : "";
+    await recordRunEvent(
+      { runId: c.runId, actorId: c.authorId, kind: "comment", note: `Comment${where}: ${c.body}` },
+      trx,
+    );
     return id;
   });
 }
 
 export async function fetchChecklist(runId: number, db: Knex = getDb()): Promise<ChecklistEntry[]> {
-  const rows = await db("run_checklist_items as i").join("users as u", "u.id", "i.updated_by").where("i.run_id", runId).select("i.*", "u.name as user_name");
+  const rows = await db("run_checklist_items as i")
+    .join("users as u", "u.id", "i.updated_by")
+    .where("i.run_id", runId)
+    .select("i.*", "u.name as user_name");
   return rows.map((r: Record<string, unknown>) => ({
     key: r.item_key as ChecklistKey,
     state: r.state as CheckState,
@@ -195,13 +237,27 @@ export async function fetchChecklist(runId: number, db: Knex = getDb()): Promise
 }
 
 /** Upserts checklist items while the run is still awaiting review, with one audit line. */
-export async function saveChecklist(runId: number, userId: number, items: readonly { key: ChecklistKey; state: CheckState; note: string }[], summary: string, db: Knex = getDb()): Promise<void> {
+export async function saveChecklist(
+  runId: number,
+  userId: number,
+  items: readonly { key: ChecklistKey; state: CheckState; note: string }[],
+  summary: string,
+  db: Knex = getDb(),
+): Promise<void> {
   await db.transaction(async (trx) => {
     const row = await trx("runs").where({ id: runId }).forUpdate().first("status");
-    if (!row || row.status !== "submitted") throw new RunStateError("The checklist can only change while the run is awaiting review.");
+    if (!row || row.status !== "submitted")
+      throw new RunStateError("The checklist can only change while the run is awaiting review.");
     for (const item of items) {
       await trx("run_checklist_items")
-        .insert({ run_id: runId, item_key: item.key, state: item.state, note: item.note, updated_by: userId, updated_at: trx.raw("CURRENT_TIMESTAMP(3)") })
+        .insert({
+          run_id: runId,
+          item_key: item.key,
+          state: item.state,
+          note: item.note,
+          updated_by: userId,
+          updated_at: trx.raw("CURRENT_TIMESTAMP(3)"),
+        })
         .onConflict(["run_id", "item_key"])
         .merge(["state", "note", "updated_by", "updated_at"]);
     }

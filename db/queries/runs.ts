@@ -53,14 +53,32 @@ export function runSummaryQuery(db: Knex) {
     .join("section_versions as v", "v.id", "r.section_version_id")
     .join("users as u", "u.id", "r.created_by")
     .select(
-      "r.id", "r.project_id", "r.section_id", "s.name as section_name", "v.version as section_version", "r.title", "r.status",
-      "r.load_case", "r.face", "r.methods", "r.required_fs", "r.fs_bishop", "r.fs_fellenius", "r.created_by",
-      "u.name as author_name", "r.created_at", "r.revises_run_id", "r.loading_condition",
+      "r.id",
+      "r.project_id",
+      "r.section_id",
+      "s.name as section_name",
+      "v.version as section_version",
+      "r.title",
+      "r.status",
+      "r.load_case",
+      "r.face",
+      "r.methods",
+      "r.required_fs",
+      "r.fs_bishop",
+      "r.fs_fellenius",
+      "r.created_by",
+      "u.name as author_name",
+      "r.created_at",
+      "r.revises_run_id",
+      "r.loading_condition",
     );
 }
 
 export async function fetchRunsOfProject(projectId: number, db: Knex = getDb()): Promise<RunSummary[]> {
-  const rows = await runSummaryQuery(db).where("r.project_id", projectId).orderBy("r.created_at", "desc").orderBy("r.id", "desc");
+  const rows = await runSummaryQuery(db)
+    .where("r.project_id", projectId)
+    .orderBy("r.created_at", "desc")
+    .orderBy("r.id", "desc");
   return rows.map(toRunSummary);
 }
 
@@ -146,7 +164,12 @@ export async function renameDraftRun(runId: number, title: string, actorId: numb
     const row = await trx("runs").where({ id: runId }).forUpdate().first("status", "title");
     if (!row || row.status !== "draft") throw new Error("run_frozen: only a draft can be renamed");
     await trx("runs").where({ id: runId, status: "draft" }).update({ title });
-    await trx("run_events").insert({ run_id: runId, actor_id: actorId, kind: "renamed", note: `Renamed from “${row.title}” to “${title}”.` });
+    await trx("run_events").insert({
+      run_id: runId,
+      actor_id: actorId,
+      kind: "renamed",
+      note: `Renamed from “${row.title}” to “${title}”.`,
+    });
   });
 }
 
@@ -176,22 +199,33 @@ export interface ChainLink {
  * runs that revise it, forward along each first revision.
  */
 export async function fetchRevisionChain(projectId: number, runId: number, db: Knex = getDb()): Promise<ChainLink[]> {
-  const rows = (await db("runs").where({ project_id: projectId }).select("id", "title", "status", "created_at", "revises_run_id")) as {
-    id: number; title: string; status: RunSummary["status"]; created_at: Date; revises_run_id: number | null;
+  const rows = (await db("runs")
+    .where({ project_id: projectId })
+    .select("id", "title", "status", "created_at", "revises_run_id")) as {
+    id: number;
+    title: string;
+    status: RunSummary["status"];
+    created_at: Date;
+    revises_run_id: number | null;
   }[];
   const byId = new Map(rows.map((r) => [r.id, r]));
-  const link = (r: (typeof rows)[number]): ChainLink => ({ id: r.id, title: r.title, status: r.status, createdAt: new Date(r.created_at).toISOString() });
+  const link = (r: (typeof rows)[number]): ChainLink => ({
+    id: r.id,
+    title: r.title,
+    status: r.status,
+    createdAt: new Date(r.created_at).toISOString(),
+  });
   const start = byId.get(runId);
   if (!start) return [];
   const back: ChainLink[] = [];
   const seen = new Set<number>([runId]);
-  for (let r = start; r.revises_run_id !== null && byId.has(r.revises_run_id) && !seen.has(r.revises_run_id); ) {
+  for (let r = start; r.revises_run_id !== null && byId.has(r.revises_run_id) && !seen.has(r.revises_run_id);) {
     r = byId.get(r.revises_run_id)!;
     seen.add(r.id);
     back.unshift(link(r));
   }
   const forward: ChainLink[] = [];
-  for (let id: number | undefined = runId; id !== undefined; ) {
+  for (let id: number | undefined = runId; id !== undefined;) {
     const next = rows.filter((r) => r.revises_run_id === id && !seen.has(r.id)).sort((a, b) => a.id - b.id)[0];
     if (!next) break;
     seen.add(next.id);

@@ -18,7 +18,15 @@ export async function fetchSectionsOfProject(projectId: number, db: Knex = getDb
     })
     .join("users as u", "u.id", "v.created_by")
     .where("s.project_id", projectId)
-    .select("s.id", "s.project_id", "s.name", "s.description", "s.current_version", "v.created_at", "u.name as user_name")
+    .select(
+      "s.id",
+      "s.project_id",
+      "s.name",
+      "s.description",
+      "s.current_version",
+      "v.created_at",
+      "u.name as user_name",
+    )
     .orderBy("s.name");
   return rows.map((r: Record<string, unknown>) => ({
     id: r.id as number,
@@ -58,7 +66,11 @@ export interface StoredVersion {
   createdByName: string;
 }
 
-export async function fetchSection(projectId: number, sectionId: number, db: Knex = getDb()): Promise<SectionDetail | null> {
+export async function fetchSection(
+  projectId: number,
+  sectionId: number,
+  db: Knex = getDb(),
+): Promise<SectionDetail | null> {
   const s = await db("sections").where({ id: sectionId, project_id: projectId }).first();
   if (!s) return null;
   const versions = await db("section_versions as v")
@@ -82,7 +94,11 @@ export async function fetchSection(projectId: number, sectionId: number, db: Kne
   };
 }
 
-export async function fetchSectionVersion(sectionId: number, version: number, db: Knex = getDb()): Promise<StoredVersion | null> {
+export async function fetchSectionVersion(
+  sectionId: number,
+  version: number,
+  db: Knex = getDb(),
+): Promise<StoredVersion | null> {
   const v = await db("section_versions as v")
     .join("users as u", "u.id", "v.created_by")
     .where({ "v.section_id": sectionId, "v.version": version })
@@ -140,7 +156,15 @@ export class StaleVersionError extends Error {
  * a newer version would silently drop someone's work, so it is refused instead.
  */
 export async function saveSectionVersion(
-  input: { sectionId: number; baseVersion: number; document: unknown; summary: string; userId: number; name?: string; description?: string },
+  input: {
+    sectionId: number;
+    baseVersion: number;
+    document: unknown;
+    summary: string;
+    userId: number;
+    name?: string;
+    description?: string;
+  },
   db: Knex = getDb(),
 ): Promise<number> {
   return db.transaction(async (trx) => {

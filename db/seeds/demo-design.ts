@@ -11,7 +11,10 @@ export const DEMO_STUDY_NAME = "Main embankment: face slope options";
  */
 export async function seedDemoDesign(trx: Knex | Knex.Transaction, projectId: number, userId: number): Promise<number> {
   const library = await trx("materials").where("project_id", projectId).select("key", "parameters");
-  const keys = library.map((m: { key: string; parameters: string }) => ({ key: m.key, model: (JSON.parse(m.parameters) as { model: string }).model }));
+  const keys = library.map((m: { key: string; parameters: string }) => ({
+    key: m.key,
+    model: (JSON.parse(m.parameters) as { model: string }).model,
+  }));
   const [id] = await trx("design_studies").insert({
     project_id: projectId,
     name: DEMO_STUDY_NAME,

@@ -12,9 +12,42 @@ export const DEMO_POOL = { normal: 16, flood: 17, drawdownTo: 8 };
 
 /** The values the demo library derives from its lab sets (db/seeds/demo-materials.ts), for use without a database. */
 export const DEMO_MATERIALS: SectionDocument["materials"] = [
-  { id: "fill", name: "Compacted clay fill", model: "mohr-coulomb", gamma: 19, gammaSat: 20, c: 10.4, phi: 25.9, su: 60, cR: 22, phiR: 15 },
-  { id: "foundation", name: "Silty clay foundation", model: "mohr-coulomb", gamma: 18, gammaSat: 18.5, c: 4, phi: 24, su: 34.6, suGradient: 1.65, suDatum: 6, cR: 15, phiR: 13 },
-  { id: "drain", name: "Gravel blanket drain", model: "mohr-coulomb", gamma: 20, gammaSat: 21, c: 0, phi: 36, freeDraining: true },
+  {
+    id: "fill",
+    name: "Compacted clay fill",
+    model: "mohr-coulomb",
+    gamma: 19,
+    gammaSat: 20,
+    c: 10.4,
+    phi: 25.9,
+    su: 60,
+    cR: 22,
+    phiR: 15,
+  },
+  {
+    id: "foundation",
+    name: "Silty clay foundation",
+    model: "mohr-coulomb",
+    gamma: 18,
+    gammaSat: 18.5,
+    c: 4,
+    phi: 24,
+    su: 34.6,
+    suGradient: 1.65,
+    suDatum: 6,
+    cR: 15,
+    phiR: 13,
+  },
+  {
+    id: "drain",
+    name: "Gravel blanket drain",
+    model: "mohr-coulomb",
+    gamma: 20,
+    gammaSat: 21,
+    c: 0,
+    phi: 36,
+    freeDraining: true,
+  },
   { id: "rock", name: "Mudstone bedrock", model: "impenetrable", gamma: 23 },
 ];
 
@@ -48,10 +81,51 @@ export function buildDemoSection(materials: SectionDocument["materials"] = DEMO_
     version: 1,
     materials,
     regions: [
-      { name: "Bedrock", material: "rock", points: [[0, -4], [110, -4], [110, 0], [0, 0]] },
-      { name: "Foundation", material: "foundation", points: [[0, 0], [110, 0], [110, 6], [92, 6], [80, 6], [20, 6], [0, 6]] },
-      { name: "Embankment fill", material: "fill", points: [[20, 6], [80, 6], [80, 6.5], [90.75, 6.5], [62, 18], [56, 18]] },
-      { name: "Toe drain", material: "drain", points: [[80, 6], [92, 6], [90.75, 6.5], [80, 6.5]] },
+      {
+        name: "Bedrock",
+        material: "rock",
+        points: [
+          [0, -4],
+          [110, -4],
+          [110, 0],
+          [0, 0],
+        ],
+      },
+      {
+        name: "Foundation",
+        material: "foundation",
+        points: [
+          [0, 0],
+          [110, 0],
+          [110, 6],
+          [92, 6],
+          [80, 6],
+          [20, 6],
+          [0, 6],
+        ],
+      },
+      {
+        name: "Embankment fill",
+        material: "fill",
+        points: [
+          [20, 6],
+          [80, 6],
+          [80, 6.5],
+          [90.75, 6.5],
+          [62, 18],
+          [56, 18],
+        ],
+      },
+      {
+        name: "Toe drain",
+        material: "drain",
+        points: [
+          [80, 6],
+          [92, 6],
+          [90.75, 6.5],
+          [80, 6.5],
+        ],
+      },
     ],
     water: { gammaW: 9.81, phreatic: line },
   };

@@ -31,7 +31,13 @@ export async function seedDemo(knex: Knex): Promise<{ created: boolean }> {
     const hash = await bcrypt.hash(DEMO_PASSWORD, 10);
     const ids: Record<string, number> = {};
     for (const u of DEMO_USERS) {
-      const [id] = await trx("users").insert({ organisation_id: organisationId, email: u.email, name: u.name, role: u.role, password_hash: hash });
+      const [id] = await trx("users").insert({
+        organisation_id: organisationId,
+        email: u.email,
+        name: u.name,
+        role: u.role,
+        password_hash: hash,
+      });
       ids[u.role] = id;
     }
     const [projectId] = await trx("projects").insert({

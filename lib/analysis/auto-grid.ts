@@ -32,7 +32,11 @@ export function faceExtent(ground: XY[], direction: Side): { crest: XY; toe: XY 
   return { crest, toe };
 }
 
-export function suggestGrid(doc: SectionDocument, direction: Side, density = { nx: 15, ny: 15, nr: 10 }): GridSuggestion {
+export function suggestGrid(
+  doc: SectionDocument,
+  direction: Side,
+  density = { nx: 15, ny: 15, nr: 10 },
+): GridSuggestion {
   const ground = groundProfile(doc);
   const { crest, toe } = faceExtent(ground, direction);
   const H = Math.max(crest[1] - toe[1], 1);

@@ -7,17 +7,56 @@
  * projects may change each value with a stated reason.
  */
 export const LOADING_CONDITIONS = [
-  { key: "end-of-construction", label: "End of construction", engineCase: "undrained", faces: "both", requiredFs: 1.3, basis: "USACE EM 1110-2-1902 (2003), Table 3-1" },
-  { key: "steady-seepage", label: "Long-term steady seepage (maximum storage pool)", engineCase: "steady", faces: "downstream", requiredFs: 1.5, basis: "USACE EM 1110-2-1902 (2003), Table 3-1 (value from memory)" },
-  { key: "surcharge-pool", label: "Maximum surcharge pool", engineCase: "steady", faces: "downstream", requiredFs: 1.4, basis: "USACE EM 1110-2-1902 (2003), Table 3-1 (value from memory)" },
-  { key: "drawdown-storage", label: "Rapid drawdown from maximum storage pool", engineCase: "drawdown", faces: "upstream", requiredFs: 1.3, basis: "USACE EM 1110-2-1902 (2003), Table 3-1 (1.1–1.3 published; split from memory)" },
-  { key: "drawdown-surcharge", label: "Rapid drawdown from maximum surcharge pool", engineCase: "drawdown", faces: "upstream", requiredFs: 1.1, basis: "USACE EM 1110-2-1902 (2003), Table 3-1 (1.1–1.3 published; split from memory)" },
+  {
+    key: "end-of-construction",
+    label: "End of construction",
+    engineCase: "undrained",
+    faces: "both",
+    requiredFs: 1.3,
+    basis: "USACE EM 1110-2-1902 (2003), Table 3-1",
+  },
+  {
+    key: "steady-seepage",
+    label: "Long-term steady seepage (maximum storage pool)",
+    engineCase: "steady",
+    faces: "downstream",
+    requiredFs: 1.5,
+    basis: "USACE EM 1110-2-1902 (2003), Table 3-1 (value from memory)",
+  },
+  {
+    key: "surcharge-pool",
+    label: "Maximum surcharge pool",
+    engineCase: "steady",
+    faces: "downstream",
+    requiredFs: 1.4,
+    basis: "USACE EM 1110-2-1902 (2003), Table 3-1 (value from memory)",
+  },
+  {
+    key: "drawdown-storage",
+    label: "Rapid drawdown from maximum storage pool",
+    engineCase: "drawdown",
+    faces: "upstream",
+    requiredFs: 1.3,
+    basis: "USACE EM 1110-2-1902 (2003), Table 3-1 (1.1–1.3 published; split from memory)",
+  },
+  {
+    key: "drawdown-surcharge",
+    label: "Rapid drawdown from maximum surcharge pool",
+    engineCase: "drawdown",
+    faces: "upstream",
+    requiredFs: 1.1,
+    basis: "USACE EM 1110-2-1902 (2003), Table 3-1 (1.1–1.3 published; split from memory)",
+  },
 ] as const;
 
 export type LoadingConditionKey = (typeof LOADING_CONDITIONS)[number]["key"];
-export const LOADING_CONDITION_KEYS = LOADING_CONDITIONS.map((c) => c.key) as [LoadingConditionKey, ...LoadingConditionKey[]];
+export const LOADING_CONDITION_KEYS = LOADING_CONDITIONS.map((c) => c.key) as [
+  LoadingConditionKey,
+  ...LoadingConditionKey[],
+];
 
-export const GUIDANCE_NOTE = "Defaults follow one published guideline; local codes and the engineer of record decide the values that apply.";
+export const GUIDANCE_NOTE =
+  "Defaults follow one published guideline; local codes and the engineer of record decide the values that apply.";
 
 export function loadingCondition(key: LoadingConditionKey) {
   return LOADING_CONDITIONS.find((c) => c.key === key)!;
@@ -25,5 +64,9 @@ export function loadingCondition(key: LoadingConditionKey) {
 
 /** The loading condition a run's engine case falls under by default. */
 export function defaultConditionForCase(engineCase: "steady" | "drawdown" | "undrained"): LoadingConditionKey {
-  return engineCase === "undrained" ? "end-of-construction" : engineCase === "drawdown" ? "drawdown-storage" : "steady-seepage";
+  return engineCase === "undrained"
+    ? "end-of-construction"
+    : engineCase === "drawdown"
+      ? "drawdown-storage"
+      : "steady-seepage";
 }

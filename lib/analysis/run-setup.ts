@@ -12,28 +12,46 @@ export const runSetupSchema = z
     condition: z.enum(LOADING_CONDITION_KEYS, { error: "Choose a loading condition." }),
     face: z.enum(["upstream", "downstream"], { error: "Choose the face to check." }),
     methods: z.array(z.enum(["bishop", "fellenius"])).min(1, "Choose at least one method."),
-    slices: z.number({ error: "Enter a number of slices." }).int("Whole slices only.").min(10, "At least 10 slices.").max(500, "At most 500 slices."),
-    grid: gridSchema.refine((g) => g.x2 > g.x1 && g.y2 > g.y1, "The grid's second corner must be right of and above the first.")
-      .refine((g) => g.nx >= 2 && g.ny >= 2 && g.nx * g.ny <= 10000, "Use 2 to 100 points each way (at most 10,000 centres)."),
+    slices: z
+      .number({ error: "Enter a number of slices." })
+      .int("Whole slices only.")
+      .min(10, "At least 10 slices.")
+      .max(500, "At most 500 slices."),
+    grid: gridSchema
+      .refine((g) => g.x2 > g.x1 && g.y2 > g.y1, "The grid's second corner must be right of and above the first.")
+      .refine(
+        (g) => g.nx >= 2 && g.ny >= 2 && g.nx * g.ny <= 10000,
+        "Use 2 to 100 points each way (at most 10,000 centres).",
+      ),
     radii: radiiSchema,
     refine: z.boolean(),
     drawdownFrom: z.number().optional(),
     drawdownTo: z.number().optional(),
     /** effective: pore pressures held (ENGINE.md §7(a)); staged: Duncan–Wright–Wong total-stress stages (§7(b)). */
     drawdownMethod: z.enum(["effective", "staged"]).default("effective"),
-    requiredFs: z.number({ error: "Enter the required factor of safety." }).min(1, "At least 1.0.").max(5, "At most 5."),
+    requiredFs: z
+      .number({ error: "Enter the required factor of safety." })
+      .min(1, "At least 1.0.")
+      .max(5, "At most 5."),
     ordinaryForm: z.enum(["classical", "effective-weight"]).default("classical"),
   })
   .superRefine((v, ctx) => {
     if (loadingCondition(v.condition).engineCase === "drawdown") {
-      if (v.drawdownFrom === undefined) ctx.addIssue({ code: "custom", path: ["drawdownFrom"], message: "Enter the pool level before drawdown (m)." });
-      if (v.drawdownTo === undefined) ctx.addIssue({ code: "custom", path: ["drawdownTo"], message: "Enter the pool level after drawdown (m)." });
+      if (v.drawdownFrom === undefined)
+        ctx.addIssue({ code: "custom", path: ["drawdownFrom"], message: "Enter the pool level before drawdown (m)." });
+      if (v.drawdownTo === undefined)
+        ctx.addIssue({ code: "custom", path: ["drawdownTo"], message: "Enter the pool level after drawdown (m)." });
       if (v.drawdownFrom !== undefined && v.drawdownTo !== undefined && v.drawdownTo > v.drawdownFrom) {
-        ctx.addIssue({ code: "custom", path: ["drawdownTo"], message: "The pool after drawdown must not be above the pool before it." });
+        ctx.addIssue({
+          code: "custom",
+          path: ["drawdownTo"],
+          message: "The pool after drawdown must not be above the pool before it.",
+        });
       }
     }
     const n = v.radii.n;
-    if (!Number.isInteger(n) || n < 1 || n > 100) ctx.addIssue({ code: "custom", path: ["radii", "n"], message: "Use 1 to 100 radii per centre." });
+    if (!Number.isInteger(n) || n < 1 || n > 100)
+      ctx.addIssue({ code: "custom", path: ["radii", "n"], message: "Use 1 to 100 radii per centre." });
   });
 
 export type RunSetup = z.infer<typeof runSetupSchema>;

@@ -12,6 +12,7 @@ export class ApiError extends Error {
 }
 
 export const unauthorized = () => new ApiError(401, "unauthorized", "Sign in to continue.");
-export const forbidden = (what = "do this") => new ApiError(403, "forbidden", `Your role does not allow you to ${what}.`);
+export const forbidden = (what = "do this") =>
+  new ApiError(403, "forbidden", `Your role does not allow you to ${what}.`);
 export const notFound = (what = "The item") => new ApiError(404, "not_found", `${what} was not found.`);
 export const conflict = (message: string) => new ApiError(409, "conflict", message);

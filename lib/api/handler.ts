@@ -19,7 +19,10 @@ export function fieldErrors(error: ZodError): Record<string, string[]> {
 
 export function errorResponse(err: unknown): NextResponse<ErrorBody> {
   if (err instanceof ApiError) {
-    return NextResponse.json({ error: { code: err.code, message: err.message, fields: err.fields } }, { status: err.status });
+    return NextResponse.json(
+      { error: { code: err.code, message: err.message, fields: err.fields } },
+      { status: err.status },
+    );
   }
   if (err instanceof ZodError) {
     return NextResponse.json(
@@ -28,7 +31,10 @@ export function errorResponse(err: unknown): NextResponse<ErrorBody> {
     );
   }
   console.error("[api] unexpected error", err);
-  return NextResponse.json({ error: { code: "internal", message: "Something went wrong on the server." } }, { status: 500 });
+  return NextResponse.json(
+    { error: { code: "internal", message: "Something went wrong on the server." } },
+    { status: 500 },
+  );
 }
 
 /** Reads and validates a JSON body; a body that is not JSON is a 400 like any other bad field. */

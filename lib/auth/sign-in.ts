@@ -45,5 +45,11 @@ export async function authenticate(raw: unknown): Promise<SignedInUser> {
     throw new SignInError(SIGN_IN_FAILED);
   }
   await clearSignInFailures(email);
-  return { id: String(user.id), email: user.email, name: user.name, role: user.role, organisationId: user.organisation_id };
+  return {
+    id: String(user.id),
+    email: user.email,
+    name: user.name,
+    role: user.role,
+    organisationId: user.organisation_id,
+  };
 }

@@ -11,4 +11,9 @@ export function downloadText(fileName: string, text: string, type = "text/plain"
 }
 
 /** A file-name-safe slug of a title. */
-export const slug = (s: string) => s.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "section";
+export const slug = (s: string) =>
+  s
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-|-$/g, "")
+    .slice(0, 60) || "section";

@@ -22,9 +22,14 @@ export async function fetchJson<T>(url: string, init?: RequestInit & { json?: un
   const body = await response.json().catch(() => null);
   if (!response.ok) {
     const e = body?.error ?? {};
-    throw new ApiClientError(response.status, e.code ?? "http_error", e.message ?? `Request failed (${response.status}).`, e.fields ?? {});
+    throw new ApiClientError(
+      response.status,
+      e.code ?? "http_error",
+      e.message ?? `Request failed (${response.status}).`,
+      e.fields ?? {},
+    );
   }
   return body as T;
 }
 
-export const swrFetcher = <T,>(url: string) => fetchJson<T>(url);
+export const swrFetcher = <T>(url: string) => fetchJson<T>(url);

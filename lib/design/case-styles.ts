@@ -15,6 +15,16 @@ export interface CaseStyle {
 
 export const CASE_STYLES: Record<SweepCaseKey, CaseStyle> = {
   "steady-seepage": { colour: "#0072B2", dash: "", marker: "circle", short: "Downstream, steady seepage" },
-  "drawdown-storage": { colour: "#D55E00", dash: "8 4", marker: "square", short: "Upstream, drawdown from normal pool" },
-  "drawdown-surcharge": { colour: "#009E73", dash: "2 3", marker: "triangle", short: "Upstream, drawdown from flood pool" },
+  "drawdown-storage": {
+    colour: "#D55E00",
+    dash: "8 4",
+    marker: "square",
+    short: "Upstream, drawdown from normal pool",
+  },
+  "drawdown-surcharge": {
+    colour: "#009E73",
+    dash: "2 3",
+    marker: "triangle",
+    short: "Upstream, drawdown from flood pool",
+  },
 };

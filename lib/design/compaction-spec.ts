@@ -27,7 +27,12 @@ export interface CompactionSpec {
  * @param result the compaction set's derived result
  * @param fillVolume compacted fill volume (m³), or null when unknown
  */
-export function compactionSpec(setName: string, materialKey: string, result: CompactionResult, fillVolume: number | null): CompactionSpec {
+export function compactionSpec(
+  setName: string,
+  materialKey: string,
+  result: CompactionResult,
+  fillVolume: number | null,
+): CompactionSpec {
   const a = result.acceptance;
   return {
     setName,

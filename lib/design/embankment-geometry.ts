@@ -73,7 +73,12 @@ export function embankmentGeometry(p: EmbankmentParams): EmbankmentGeometry {
   const drainFaceX = downstreamToe[0] - p.downstreamSlope * p.drainThickness;
   const drainPolygon: XY[] = [drainStart, downstreamToe, [drainFaceX, drainTop], [drainStart[0], drainTop]];
 
-  const outline: XY[] = [upstreamToe, downstreamToe, ...[...downstreamFace].reverse().slice(1), ...[...upstreamFace].reverse().slice(0, -1)];
+  const outline: XY[] = [
+    upstreamToe,
+    downstreamToe,
+    ...[...downstreamFace].reverse().slice(1),
+    ...[...upstreamFace].reverse().slice(0, -1),
+  ];
 
   let core: EmbankmentGeometry["core"] = null;
   if (p.zoning.kind === "zoned") {
@@ -84,7 +89,13 @@ export function embankmentGeometry(p: EmbankmentParams): EmbankmentGeometry {
     const downstreamBase: XY = [xc + half + spread, ft];
     const upstreamTop: XY = [xc - half, p.crestElevation];
     const downstreamTop: XY = [xc + half, p.crestElevation];
-    core = { polygon: [upstreamBase, downstreamBase, downstreamTop, upstreamTop], upstreamBase, downstreamBase, upstreamTop, downstreamTop };
+    core = {
+      polygon: [upstreamBase, downstreamBase, downstreamTop, upstreamTop],
+      upstreamBase,
+      downstreamBase,
+      upstreamTop,
+      downstreamTop,
+    };
   }
 
   return {

@@ -45,10 +45,16 @@ export function lineToText(line: readonly [number, number][] | null): string {
 
 /** Reads "x, y" lines; a line that is not two numbers becomes NaN so the schema reports it. */
 export function textToLine(text: string): [number, number][] | null {
-  const rows = text.split(/\r?\n/).map((r) => r.trim()).filter(Boolean);
+  const rows = text
+    .split(/\r?\n/)
+    .map((r) => r.trim())
+    .filter(Boolean);
   if (rows.length === 0) return null;
   return rows.map((r) => {
-    const parts = r.split(/[\s,;]+/).filter(Boolean).map(Number);
+    const parts = r
+      .split(/[\s,;]+/)
+      .filter(Boolean)
+      .map(Number);
     return parts.length === 2 ? [parts[0], parts[1]] : [NaN, NaN];
   });
 }
@@ -89,10 +95,19 @@ function num(text: string | undefined): number | undefined {
 export function fromFormValues(v: FormValues): unknown {
   const berm = (side: "upstream" | "downstream") =>
     v[`${side}Berm.on`] ? { elevation: num(v[`${side}Berm.elevation`]), width: num(v[`${side}Berm.width`]) } : null;
-  const zoning = v["zoning.kind"] === "zoned"
-    ? { kind: "zoned", core: v["zoning.core"], shell: v["zoning.shell"], coreTopWidth: num(v["zoning.coreTopWidth"]), coreSlope: num(v["zoning.coreSlope"]) }
-    : { kind: "homogeneous", fill: v["zoning.fill"] };
-  const plain = Object.fromEntries((Object.keys(NUMBER_FIELDS) as NumberField[]).filter((k) => !k.includes(".")).map((k) => [k, num(v[k])]));
+  const zoning =
+    v["zoning.kind"] === "zoned"
+      ? {
+          kind: "zoned",
+          core: v["zoning.core"],
+          shell: v["zoning.shell"],
+          coreTopWidth: num(v["zoning.coreTopWidth"]),
+          coreSlope: num(v["zoning.coreSlope"]),
+        }
+      : { kind: "homogeneous", fill: v["zoning.fill"] };
+  const plain = Object.fromEntries(
+    (Object.keys(NUMBER_FIELDS) as NumberField[]).filter((k) => !k.includes(".")).map((k) => [k, num(v[k])]),
+  );
   return {
     ...plain,
     upstreamBerm: berm("upstream"),

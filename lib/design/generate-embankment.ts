@@ -26,7 +26,10 @@ export interface GeneratedEmbankment {
 }
 
 export class DesignInputError extends Error {
-  constructor(readonly field: string, message: string) {
+  constructor(
+    readonly field: string,
+    message: string,
+  ) {
     super(message);
     this.name = "DesignInputError";
   }
@@ -37,8 +40,16 @@ function pickMaterials(p: EmbankmentParams, library: readonly Material[]): Mater
   const used: Material[] = [];
   for (const { key, role, field } of materialRoles(p)) {
     const m = byId.get(key);
-    if (!m) throw new DesignInputError(field, `The ${role} material '${key}' is not in the project's materials library: choose another or add it to the library.`);
-    if (role !== "base" && m.model === "impenetrable") throw new DesignInputError(field, `The ${role} material '${key}' is impenetrable: only the base may be. Choose a soil.`);
+    if (!m)
+      throw new DesignInputError(
+        field,
+        `The ${role} material '${key}' is not in the project's materials library: choose another or add it to the library.`,
+      );
+    if (role !== "base" && m.model === "impenetrable")
+      throw new DesignInputError(
+        field,
+        `The ${role} material '${key}' is impenetrable: only the base may be. Choose a soil.`,
+      );
     if (!used.some((u) => u.id === m.id)) used.push(m);
   }
   return used;
@@ -70,7 +81,10 @@ function zoneRegions(p: EmbankmentParams, g: EmbankmentGeometry): Region[] {
   const drain: Region = { name: "Toe drain", material: p.drainMaterial, points: g.drain.polygon };
   if (p.zoning.kind === "homogeneous" || !g.core) {
     const fill = p.zoning.kind === "homogeneous" ? p.zoning.fill : p.zoning.shell;
-    return [{ name: "Embankment fill", material: fill, points: [g.upstreamToe, ...drainCut, g.upstreamCrest, ...upMid] }, drain];
+    return [
+      { name: "Embankment fill", material: fill, points: [g.upstreamToe, ...drainCut, g.upstreamCrest, ...upMid] },
+      drain,
+    ];
   }
   const c = g.core;
   const upstreamShell: XY[] = [g.upstreamToe, c.upstreamBase, c.upstreamTop];
@@ -90,13 +104,32 @@ function groundRegions(p: EmbankmentParams, g: EmbankmentGeometry): Region[] {
   const ft = p.foundationTop;
   const fb = ft - p.foundationThickness;
   const regions: Region[] = [
-    { name: "Base", material: p.baseMaterial, points: [[0, fb - p.baseThickness], [g.xmax, fb - p.baseThickness], [g.xmax, fb], [0, fb]] },
+    {
+      name: "Base",
+      material: p.baseMaterial,
+      points: [
+        [0, fb - p.baseThickness],
+        [g.xmax, fb - p.baseThickness],
+        [g.xmax, fb],
+        [0, fb],
+      ],
+    },
   ];
   if (p.foundationThickness > 0) {
-    regions.push({ name: "Foundation", material: p.foundationMaterial, points: [[0, fb], [g.xmax, fb], [g.xmax, ft], ...baseVertices(g), [0, ft]] });
+    regions.push({
+      name: "Foundation",
+      material: p.foundationMaterial,
+      points: [[0, fb], [g.xmax, fb], [g.xmax, ft], ...baseVertices(g), [0, ft]],
+    });
   } else {
     // Without a foundation layer the base itself carries the dam: give it the dam's base vertices.
-    regions[0].points = [[0, fb - p.baseThickness], [g.xmax, fb - p.baseThickness], [g.xmax, fb], ...baseVertices(g), [0, fb]];
+    regions[0].points = [
+      [0, fb - p.baseThickness],
+      [g.xmax, fb - p.baseThickness],
+      [g.xmax, fb],
+      ...baseVertices(g),
+      [0, fb],
+    ];
   }
   return regions;
 }
@@ -105,9 +138,18 @@ function freeboardWarnings(p: EmbankmentParams): DesignWarning[] {
   const out: DesignWarning[] = [];
   const freeboard = p.crestElevation - p.floodPool;
   if (freeboard < p.minFreeboard) {
-    out.push({ code: "W_DESIGN_LOW_FREEBOARD", field: "floodPool", message: `Freeboard above the flood pool is ${freeboard.toFixed(2)} m, less than the ${p.minFreeboard.toFixed(2)} m asked for: raise the crest or lower the flood pool.` });
+    out.push({
+      code: "W_DESIGN_LOW_FREEBOARD",
+      field: "floodPool",
+      message: `Freeboard above the flood pool is ${freeboard.toFixed(2)} m, less than the ${p.minFreeboard.toFixed(2)} m asked for: raise the crest or lower the flood pool.`,
+    });
   }
-  if (p.crestWidth < 3) out.push({ code: "W_DESIGN_NARROW_CREST", field: "crestWidth", message: `A crest ${p.crestWidth} m wide is narrow for construction plant and access; 3 m or more is usual.` });
+  if (p.crestWidth < 3)
+    out.push({
+      code: "W_DESIGN_NARROW_CREST",
+      field: "crestWidth",
+      message: `A crest ${p.crestWidth} m wide is narrow for construction plant and access; 3 m or more is usual.`,
+    });
   return out;
 }
 
@@ -118,14 +160,26 @@ function freeboardWarnings(p: EmbankmentParams): DesignWarning[] {
  * @param options.pool which pool's phreatic line the document carries (normal by default)
  * @throws DesignInputError naming the field when a material is missing or unfit
  */
-export function generateEmbankment(params: EmbankmentParams, materials: readonly Material[], options: { pool?: PoolName } = {}): GeneratedEmbankment {
+export function generateEmbankment(
+  params: EmbankmentParams,
+  materials: readonly Material[],
+  options: { pool?: PoolName } = {},
+): GeneratedEmbankment {
   const used = pickMaterials(params, materials);
   const g = embankmentGeometry(params);
   if (g.core && g.core.downstreamBase[0] > g.drain.start[0] - 0.5) {
-    throw new DesignInputError("drainLength", `The toe drain reaches under the core (drain starts at x = ${g.drain.start[0].toFixed(2)} m, core base ends at x = ${g.core.downstreamBase[0].toFixed(2)} m): shorten the drain or narrow the core.`);
+    throw new DesignInputError(
+      "drainLength",
+      `The toe drain reaches under the core (drain starts at x = ${g.drain.start[0].toFixed(2)} m, core base ends at x = ${g.core.downstreamBase[0].toFixed(2)} m): shorten the drain or narrow the core.`,
+    );
   }
   const fillKey = params.zoning.kind === "homogeneous" ? params.zoning.fill : params.zoning.core;
-  const seepage = phreaticForPool(params, g, options.pool ?? "normal", saturatedUnitWeight(used.find((m) => m.id === fillKey)));
+  const seepage = phreaticForPool(
+    params,
+    g,
+    options.pool ?? "normal",
+    saturatedUnitWeight(used.find((m) => m.id === fillKey)),
+  );
   const document: SectionDocument = {
     version: 1,
     materials: used,

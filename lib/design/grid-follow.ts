@@ -17,7 +17,11 @@ export function slideDirection(face: DesignFace): "left" | "right" {
   return face === "upstream" ? "left" : "right";
 }
 
-export function gridForFace(doc: SectionDocument, face: DesignFace, density: { nx: number; ny: number; radii: number }): JobGrid {
+export function gridForFace(
+  doc: SectionDocument,
+  face: DesignFace,
+  density: { nx: number; ny: number; radii: number },
+): JobGrid {
   const s = suggestGrid(doc, slideDirection(face), { nx: density.nx, ny: density.ny, nr: density.radii });
   return { grid: s.grid, radii: s.radii };
 }

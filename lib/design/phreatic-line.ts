@@ -54,25 +54,43 @@ export function spanSection(line: readonly XY[], xmax: number): XY[] {
 function methodLimits(p: EmbankmentParams): SeepageLimit[] {
   const limits: SeepageLimit[] = [];
   if (p.zoning.kind === "zoned") {
-    limits.push({ code: "E_DESIGN_ZONED", severity: "error", message: `A zoned dam (core and shells) is outside the basic parabola's limits: it assumes one homogeneous fill. ${HAND_LINE_REQUEST}` });
+    limits.push({
+      code: "E_DESIGN_ZONED",
+      severity: "error",
+      message: `A zoned dam (core and shells) is outside the basic parabola's limits: it assumes one homogeneous fill. ${HAND_LINE_REQUEST}`,
+    });
   }
   if (!p.foundationImpervious) {
-    limits.push({ code: "E_DESIGN_PERVIOUS_FOUNDATION", severity: "error", message: `The foundation is marked as not much less permeable than the fill: the method needs an impervious base under the fill. ${HAND_LINE_REQUEST}` });
+    limits.push({
+      code: "E_DESIGN_PERVIOUS_FOUNDATION",
+      severity: "error",
+      message: `The foundation is marked as not much less permeable than the fill: the method needs an impervious base under the fill. ${HAND_LINE_REQUEST}`,
+    });
   }
   return limits;
 }
 
 /** The upstream face as the seepage construction sees it: a berm above the pool leaves the wetted face plane. */
-function wettedUpstreamFace(g: EmbankmentGeometry, p: EmbankmentParams, pool: number): { toe: XY; crest: XY } | { points: XY[] } {
+function wettedUpstreamFace(
+  g: EmbankmentGeometry,
+  p: EmbankmentParams,
+  pool: number,
+): { toe: XY; crest: XY } | { points: XY[] } {
   if (!p.upstreamBerm) return { toe: g.upstreamToe, crest: g.upstreamCrest };
   if (p.upstreamBerm.elevation >= pool) return { toe: g.upstreamToe, crest: g.upstreamFace[1] };
   return { points: g.upstreamFace };
 }
 
-export function phreaticForPool(p: EmbankmentParams, g: EmbankmentGeometry, pool: PoolName, fillGammaSat: number): PhreaticOutcome {
+export function phreaticForPool(
+  p: EmbankmentParams,
+  g: EmbankmentGeometry,
+  pool: PoolName,
+  fillGammaSat: number,
+): PhreaticOutcome {
   const poolLevel = pool === "normal" ? p.normalPool : p.floodPool;
   const hand = p.handLines[pool];
-  if (hand) return { pool, poolLevel, source: "hand-drawn", line: spanSection(hand, g.xmax), seepage: null, limits: [] };
+  if (hand)
+    return { pool, poolLevel, source: "hand-drawn", line: spanSection(hand, g.xmax), seepage: null, limits: [] };
 
   const refused = methodLimits(p);
   if (refused.length > 0) return { pool, poolLevel, source: "none", line: null, seepage: null, limits: refused };
@@ -89,8 +107,19 @@ export function phreaticForPool(p: EmbankmentParams, g: EmbankmentGeometry, pool
     requiredPipingFactor: p.requiredPipingFactor,
   });
   if (!seepage.ok) {
-    const limits = seepage.limits.map((l) => (l.severity === "error" && !l.message.includes("by hand") && !l.message.includes("draw the line") ? { ...l, message: `${l.message} ${HAND_LINE_REQUEST}` } : l));
+    const limits = seepage.limits.map((l) =>
+      l.severity === "error" && !l.message.includes("by hand") && !l.message.includes("draw the line")
+        ? { ...l, message: `${l.message} ${HAND_LINE_REQUEST}` }
+        : l,
+    );
     return { pool, poolLevel, source: "none", line: null, seepage, limits };
   }
-  return { pool, poolLevel, source: "constructed", line: spanSection(seepage.construction.waterLine, g.xmax), seepage, limits: seepage.limits };
+  return {
+    pool,
+    poolLevel,
+    source: "constructed",
+    line: spanSection(seepage.construction.waterLine, g.xmax),
+    seepage,
+    limits: seepage.limits,
+  };
 }

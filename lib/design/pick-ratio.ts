@@ -12,7 +12,10 @@ export type RequiredFs = Record<SweepCaseKey, number>;
  * The steepest passing ratio of one case's points, or null when the flattest ratio tried fails
  * (or no point has a result). A point without an FS counts as failing.
  */
-export function steepestPassingRatio(points: readonly { ratio: number; fs: number | null }[], required: number): number | null {
+export function steepestPassingRatio(
+  points: readonly { ratio: number; fs: number | null }[],
+  required: number,
+): number | null {
   const sorted = [...points].sort((a, b) => a.ratio - b.ratio);
   let answer: number | null = null;
   for (let i = sorted.length - 1; i >= 0; i--) {
@@ -57,7 +60,12 @@ export function readSweep(points: readonly SweepPoint[], required: RequiredFs): 
       caseKey: c.key,
       face: c.face,
       required: required[c.key],
-      steepest: own.length ? steepestPassingRatio(own.map((p) => ({ ratio: p.ratio, fs: p.fsBishop })), required[c.key]) : null,
+      steepest: own.length
+        ? steepestPassingRatio(
+            own.map((p) => ({ ratio: p.ratio, fs: p.fsBishop })),
+            required[c.key],
+          )
+        : null,
       points: own,
     };
   });
@@ -72,13 +80,22 @@ export function readSweep(points: readonly SweepPoint[], required: RequiredFs): 
     return { face, ratio, governing: governing.caseKey, fillArea: at?.fillArea ?? null };
   };
   const faces = { upstream: faceChoice("upstream"), downstream: faceChoice("downstream") };
-  const pair = faces.upstream.ratio !== null && faces.downstream.ratio !== null ? { upstream: faces.upstream.ratio, downstream: faces.downstream.ratio } : null;
+  const pair =
+    faces.upstream.ratio !== null && faces.downstream.ratio !== null
+      ? { upstream: faces.upstream.ratio, downstream: faces.downstream.ratio }
+      : null;
   return { cases, faces, pair };
 }
 
 /** Whether every recheck point of the pair meets its required FS; null until all have run. */
-export function recheckPasses(points: readonly SweepPoint[], pair: { upstream: number; downstream: number }, required: RequiredFs): boolean | null {
-  const own = points.filter((p) => p.phase === "recheck" && p.upstreamRatio === pair.upstream && p.downstreamRatio === pair.downstream);
+export function recheckPasses(
+  points: readonly SweepPoint[],
+  pair: { upstream: number; downstream: number },
+  required: RequiredFs,
+): boolean | null {
+  const own = points.filter(
+    (p) => p.phase === "recheck" && p.upstreamRatio === pair.upstream && p.downstreamRatio === pair.downstream,
+  );
   if (own.length < SWEEP_CASES.length) return null;
   return own.every((p) => p.fsBishop !== null && p.fsBishop >= required[p.caseKey]);
 }

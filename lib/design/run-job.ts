@@ -4,7 +4,16 @@
  * function runs in a browser Web Worker, in a server worker thread and in the "open as a run"
  * route, so all three give the same numbers.
  */
-import { runGridSearch, type Analysis, type Circle, type GridSearchSuccess, type Grid, type Material, type Radii, type SectionDocument } from "../stability";
+import {
+  runGridSearch,
+  type Analysis,
+  type Circle,
+  type GridSearchSuccess,
+  type Grid,
+  type Material,
+  type Radii,
+  type SectionDocument,
+} from "../stability";
 import { DesignInputError, generateEmbankment, type GeneratedEmbankment } from "./generate-embankment";
 import { gridForFace, gridResolution, shiftTowardEdge, slideDirection } from "./grid-follow";
 import type { EmbankmentParams } from "./parameters";
@@ -38,12 +47,21 @@ export interface SweepPoint {
 export type JobSettings = Pick<SweepSettings, "nx" | "ny" | "radii" | "slices" | "refine">;
 
 /** The parameters with the job's two ratios. */
-export function paramsForJob(params: EmbankmentParams, job: Pick<SweepJob, "upstreamRatio" | "downstreamRatio">): EmbankmentParams {
+export function paramsForJob(
+  params: EmbankmentParams,
+  job: Pick<SweepJob, "upstreamRatio" | "downstreamRatio">,
+): EmbankmentParams {
   return { ...params, upstreamSlope: job.upstreamRatio, downstreamSlope: job.downstreamRatio };
 }
 
 /** The analysis block of a job: its case, sliding direction, pools and search density. */
-export function analysisForJob(params: EmbankmentParams, job: Pick<SweepJob, "caseKey">, grid: Grid, radii: Radii, settings: JobSettings): Analysis {
+export function analysisForJob(
+  params: EmbankmentParams,
+  job: Pick<SweepJob, "caseKey">,
+  grid: Grid,
+  radii: Radii,
+  settings: JobSettings,
+): Analysis {
   const c = sweepCase(job.caseKey);
   const analysis: Analysis = {
     case: c.engineCase,
@@ -56,7 +74,11 @@ export function analysisForJob(params: EmbankmentParams, job: Pick<SweepJob, "ca
     ordinaryForm: "classical",
   };
   if (c.engineCase === "drawdown") {
-    analysis.drawdown = { from: c.pool === "flood" ? params.floodPool : params.normalPool, to: params.drawdownTo, method: "effective" };
+    analysis.drawdown = {
+      from: c.pool === "flood" ? params.floodPool : params.normalPool,
+      to: params.drawdownTo,
+      method: "effective",
+    };
   }
   return analysis;
 }
@@ -68,10 +90,16 @@ export interface JobSearch {
   result: GridSearchSuccess;
 }
 
-export type JobSearchOutcome = { ok: true; search: JobSearch } | { ok: false; error: string; generated: GeneratedEmbankment | null };
+export type JobSearchOutcome =
+  { ok: true; search: JobSearch } | { ok: false; error: string; generated: GeneratedEmbankment | null };
 
 /** Generates the job's section and runs its grid search, moving the grid once if the minimum is on its edge. */
-export function searchJob(params: EmbankmentParams, materials: readonly Material[], job: SweepJob, settings: JobSettings): JobSearchOutcome {
+export function searchJob(
+  params: EmbankmentParams,
+  materials: readonly Material[],
+  job: SweepJob,
+  settings: JobSettings,
+): JobSearchOutcome {
   const c = sweepCase(job.caseKey);
   let generated: GeneratedEmbankment;
   try {
@@ -81,16 +109,21 @@ export function searchJob(params: EmbankmentParams, materials: readonly Material
     throw err;
   }
   if (!generated.seepage.line) {
-    const why = generated.seepage.limits.find((l) => l.severity === "error")?.message ?? "No phreatic line for this pool.";
+    const why =
+      generated.seepage.limits.find((l) => l.severity === "error")?.message ?? "No phreatic line for this pool.";
     return { ok: false, error: why, generated };
   }
   const first = gridForFace(generated.document, c.face, settings);
   const run = (grid: Grid, radii: Radii) => {
-    const document: SectionDocument = { ...generated.document, analysis: analysisForJob(params, job, grid, radii, settings) };
+    const document: SectionDocument = {
+      ...generated.document,
+      analysis: analysisForJob(params, job, grid, radii, settings),
+    };
     return { document, result: runGridSearch(document) };
   };
   let best = run(first.grid, first.radii);
-  if (!best.result.ok) return { ok: false, error: best.result.errors.map((e) => `${e.path}: ${e.message}`).join("; "), generated };
+  if (!best.result.ok)
+    return { ok: false, error: best.result.errors.map((e) => `${e.path}: ${e.message}`).join("; "), generated };
   const map = best.result.fsMap.bishop;
   const moved = map ? shiftTowardEdge(first.grid, map, params.crestElevation) : null;
   if (moved) {
@@ -103,7 +136,12 @@ export function searchJob(params: EmbankmentParams, materials: readonly Material
 }
 
 /** Runs one job and condenses it to a sweep point (plain JSON). */
-export function runSweepJob(params: EmbankmentParams, materials: readonly Material[], job: SweepJob, settings: JobSettings): SweepPoint {
+export function runSweepJob(
+  params: EmbankmentParams,
+  materials: readonly Material[],
+  job: SweepJob,
+  settings: JobSettings,
+): SweepPoint {
   const t0 = Date.now();
   const outcome = searchJob(params, materials, job, settings);
   const base = {
@@ -116,7 +154,19 @@ export function runSweepJob(params: EmbankmentParams, materials: readonly Materi
     ratio: job.face === "upstream" ? job.upstreamRatio : job.downstreamRatio,
   };
   if (!outcome.ok) {
-    return { ...base, fsBishop: null, fsOrdinary: null, circle: null, resolution: null, grid: null, radii: null, fillArea: outcome.generated?.quantities.fillArea ?? 0, warnings: [], error: outcome.error, elapsedMs: Date.now() - t0 };
+    return {
+      ...base,
+      fsBishop: null,
+      fsOrdinary: null,
+      circle: null,
+      resolution: null,
+      grid: null,
+      radii: null,
+      fillArea: outcome.generated?.quantities.fillArea ?? 0,
+      warnings: [],
+      error: outcome.error,
+      elapsedMs: Date.now() - t0,
+    };
   }
   const { result, document, generated } = outcome.search;
   const bishop = result.results.bishop ?? null;

@@ -46,5 +46,9 @@ export type StoredSweep = z.infer<typeof storedSweepSchema>;
 
 /** The required FS of each sweep case from the project's loading conditions (their keys coincide). */
 export function requiredFsForSweep(map: Record<SweepCaseKey, number>): RequiredFs {
-  return { "steady-seepage": map["steady-seepage"], "drawdown-storage": map["drawdown-storage"], "drawdown-surcharge": map["drawdown-surcharge"] };
+  return {
+    "steady-seepage": map["steady-seepage"],
+    "drawdown-storage": map["drawdown-storage"],
+    "drawdown-surcharge": map["drawdown-surcharge"],
+  };
 }

@@ -31,7 +31,13 @@ export interface SweepRunOutcome {
 }
 
 /** Runs jobs with at most `concurrency` in flight; results come back in the jobs' order. */
-export async function runPooled(jobs: readonly SweepJob[], execute: (job: SweepJob) => Promise<SweepPoint>, concurrency: number, onDone: () => void, isCancelled: () => boolean): Promise<SweepPoint[] | null> {
+export async function runPooled(
+  jobs: readonly SweepJob[],
+  execute: (job: SweepJob) => Promise<SweepPoint>,
+  concurrency: number,
+  onDone: () => void,
+  isCancelled: () => boolean,
+): Promise<SweepPoint[] | null> {
   const results: (SweepPoint | undefined)[] = new Array(jobs.length);
   let next = 0;
   const lane = async () => {

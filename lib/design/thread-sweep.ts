@@ -44,11 +44,18 @@ interface ThreadPool {
   close: () => Promise<void>;
 }
 
-function startPool(file: string, size: number, params: EmbankmentParams, materials: Material[], settings: SweepSettings): ThreadPool {
+function startPool(
+  file: string,
+  size: number,
+  params: EmbankmentParams,
+  materials: Material[],
+  settings: SweepSettings,
+): ThreadPool {
   const workers = Array.from({ length: size }, () => new Worker(file));
   const idle = [...workers];
   const waiting: ((w: Worker) => void)[] = [];
-  const take = () => new Promise<Worker>((resolve) => (idle.length ? resolve(idle.pop() as Worker) : waiting.push(resolve)));
+  const take = () =>
+    new Promise<Worker>((resolve) => (idle.length ? resolve(idle.pop() as Worker) : waiting.push(resolve)));
   const give = (w: Worker) => {
     const next = waiting.shift();
     if (next) next(w);
@@ -80,7 +87,13 @@ function startPool(file: string, size: number, params: EmbankmentParams, materia
       give(w);
     }
   };
-  return { execute, size, close: async () => { await Promise.all(workers.map((w) => w.terminate())); } };
+  return {
+    execute,
+    size,
+    close: async () => {
+      await Promise.all(workers.map((w) => w.terminate()));
+    },
+  };
 }
 
 export interface ServerSweepOutcome {

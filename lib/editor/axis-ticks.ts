@@ -37,7 +37,12 @@ export function decimalsFor(step: number): number {
  * Tick values covering [min, max] with a 1-2-5 step chosen so ticks are at least
  * `minSpacing` apart in pixels, given `pixelsPerUnit`.
  */
-export function axisTicks(min: number, max: number, pixelsPerUnit: number, minSpacing = 60): { step: number; values: number[] } {
+export function axisTicks(
+  min: number,
+  max: number,
+  pixelsPerUnit: number,
+  minSpacing = 60,
+): { step: number; values: number[] } {
   if (!(max >= min) || !(pixelsPerUnit > 0)) return { step: 1, values: [] };
   const step = niceStep(minSpacing / pixelsPerUnit);
   const first = Math.ceil(min / step - 1e-9);

@@ -10,7 +10,13 @@ export function pointsBounds(points: Iterable<Point>): Bounds | null {
   for (const [x, y] of points) {
     if (!Number.isFinite(x) || !Number.isFinite(y)) continue;
     if (!b) b = { minX: x, minY: y, maxX: x, maxY: y };
-    else b = { minX: Math.min(b.minX, x), minY: Math.min(b.minY, y), maxX: Math.max(b.maxX, x), maxY: Math.max(b.maxY, y) };
+    else
+      b = {
+        minX: Math.min(b.minX, x),
+        minY: Math.min(b.minY, y),
+        maxX: Math.max(b.maxX, x),
+        maxY: Math.max(b.maxY, y),
+      };
   }
   return b;
 }

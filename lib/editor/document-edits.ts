@@ -28,7 +28,8 @@ function withOwnerPoints(doc: SectionDocument, owner: Owner, points: Point[]): S
 
 function requirePoints(doc: SectionDocument, owner: Owner): Point[] {
   const pts = ownerPoints(doc, owner);
-  if (!pts) throw new Error(owner.kind === "region" ? `region ${owner.region} does not exist` : "there is no phreatic line");
+  if (!pts)
+    throw new Error(owner.kind === "region" ? `region ${owner.region} does not exist` : "there is no phreatic line");
   return pts;
 }
 
@@ -43,7 +44,11 @@ export function moveVertex(doc: SectionDocument, ref: VertexRef, p: Point): Sect
   const owner = ownerOf(ref);
   const pts = requirePoints(doc, owner);
   if (ref.index < 0 || ref.index >= pts.length) throw new Error(`vertex ${ref.index} does not exist`);
-  return withOwnerPoints(doc, owner, pts.map((q, i) => (i === ref.index ? copyPoint(p) : q)));
+  return withOwnerPoints(
+    doc,
+    owner,
+    pts.map((q, i) => (i === ref.index ? copyPoint(p) : q)),
+  );
 }
 
 /**
@@ -84,7 +89,14 @@ export function deletePoint(doc: SectionDocument, owner: Owner, index: number): 
           : "The phreatic line needs at least 2 points. Remove the whole line instead.",
     };
   }
-  return { ok: true, doc: withOwnerPoints(doc, owner, pts.filter((_, i) => i !== index)) };
+  return {
+    ok: true,
+    doc: withOwnerPoints(
+      doc,
+      owner,
+      pts.filter((_, i) => i !== index),
+    ),
+  };
 }
 
 /** Inserts p into region `regionIndex` after vertex `afterIndex`. */

@@ -16,7 +16,8 @@ const MATERIAL = /^materials\[(\d+)\]/;
 
 export function parseIssuePath(path: string): IssueTarget {
   const region = REGION.exec(path);
-  if (region) return { kind: "region", region: Number(region[1]), vertex: region[2] !== undefined ? Number(region[2]) : null };
+  if (region)
+    return { kind: "region", region: Number(region[1]), vertex: region[2] !== undefined ? Number(region[2]) : null };
   const phreatic = PHREATIC.exec(path);
   if (phreatic) return { kind: "phreatic", vertex: phreatic[1] !== undefined ? Number(phreatic[1]) : null };
   const material = MATERIAL.exec(path);

@@ -40,7 +40,9 @@ export function pondedWater(phreatic: readonly Point[], ground: readonly Point[]
   const lo = Math.max(phreatic[0][0], ground[0][0]);
   const hi = Math.min(phreatic[phreatic.length - 1][0], ground[ground.length - 1][0]);
   if (!(hi > lo)) return [];
-  const xs = [...new Set([...phreatic, ...ground].map((p) => p[0]).filter((x) => x >= lo && x <= hi))].sort((a, b) => a - b);
+  const xs = [...new Set([...phreatic, ...ground].map((p) => p[0]).filter((x) => x >= lo && x <= hi))].sort(
+    (a, b) => a - b,
+  );
 
   const polygons: Point[][] = [];
   let top: Point[] | null = null;

@@ -10,8 +10,7 @@ export type VertexRef = { kind: "region"; region: number; index: number } | { ki
 
 /** What is selected: an owner, and optionally one of its vertices. */
 export type Selection =
-  | { kind: "region"; region: number; vertex: number | null }
-  | { kind: "phreatic"; vertex: number | null };
+  { kind: "region"; region: number; vertex: number | null } | { kind: "phreatic"; vertex: number | null };
 
 /** The points of an owner, or undefined when it does not exist in the document. */
 export function ownerPoints(doc: SectionDocument, owner: Owner): Point[] | undefined {
@@ -51,7 +50,9 @@ export function pointAt(doc: SectionDocument, ref: VertexRef): Point | undefined
 /** Every vertex of the document with its reference, regions first, then the phreatic line. */
 export function allVertices(doc: SectionDocument): { ref: VertexRef; point: Point }[] {
   const out: { ref: VertexRef; point: Point }[] = [];
-  doc.regions.forEach((r, region) => r.points.forEach((point, index) => out.push({ ref: { kind: "region", region, index }, point })));
+  doc.regions.forEach((r, region) =>
+    r.points.forEach((point, index) => out.push({ ref: { kind: "region", region, index }, point })),
+  );
   (doc.water?.phreatic ?? []).forEach((point, index) => out.push({ ref: { kind: "phreatic", index }, point }));
   return out;
 }

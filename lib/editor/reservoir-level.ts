@@ -51,9 +51,16 @@ export function setReservoirLevel(doc: SectionDocument, side: Side, y: number): 
     const farGround = groundAt(ground, far) ?? y;
     rest = shore === far ? [] : [[far, Math.min(y, farGround)]];
   }
-  const pool: Point[] = shore === edge ? [[edge, y]] : [[edge, y], [shore, y]];
+  const pool: Point[] =
+    shore === edge
+      ? [[edge, y]]
+      : [
+          [edge, y],
+          [shore, y],
+        ];
   const line = side === "left" ? [...pool, ...rest] : [...rest.slice().sort((a, b) => a[0] - b[0]), ...pool.reverse()];
-  if (line.length < 2) return { ok: false, reason: "The level leaves no room for a phreatic line. Choose another level." };
+  if (line.length < 2)
+    return { ok: false, reason: "The level leaves no room for a phreatic line. Choose another level." };
   return { ok: true, doc: setPhreatic(doc, line) };
 }
 

@@ -40,7 +40,8 @@ export function uLine(liquidLimit: number): number {
   return 0.9 * (liquidLimit - 8);
 }
 
-const ORGANIC_NOTE = "Organic silts and clays (OL, OH) cannot be told from the limits alone: ASTM D2487 compares the liquid limit after oven drying (ratio below 0.75).";
+const ORGANIC_NOTE =
+  "Organic silts and clays (OL, OH) cannot be told from the limits alone: ASTM D2487 compares the liquid limit after oven drying (ratio below 0.75).";
 
 /**
  * Plasticity index, liquidity index and the fine-grained group the limits point to on the
@@ -53,8 +54,10 @@ export function classifyAtterbergLimits(input: AtterbergInput): AtterbergResult 
   const where = input.specimen ? `sample (${input.specimen})` : "sample";
   const problems = new ProblemList();
   problems.requirePositive(where, "liquidLimit", "liquid limit", input.liquidLimit);
-  if (input.plasticLimit !== undefined) problems.requireNonNegative(where, "plasticLimit", "plastic limit", input.plasticLimit);
-  if (input.waterContent !== undefined) problems.requireNonNegative(where, "waterContent", "water content", input.waterContent);
+  if (input.plasticLimit !== undefined)
+    problems.requireNonNegative(where, "plasticLimit", "plastic limit", input.plasticLimit);
+  if (input.waterContent !== undefined)
+    problems.requireNonNegative(where, "waterContent", "water content", input.waterContent);
   problems.throwIfAny();
 
   const ll = input.liquidLimit;
@@ -62,16 +65,36 @@ export function classifyAtterbergLimits(input: AtterbergInput): AtterbergResult 
   const warnings: string[] = [];
   const a = aLine(ll);
   const u = uLine(ll);
-  const base = { liquidLimit: ll, plasticLimit: pl, aLinePI: a, uLinePI: u, sourceIds: input.id === undefined ? [] : [input.id], warnings };
+  const base = {
+    liquidLimit: ll,
+    plasticLimit: pl,
+    aLinePI: a,
+    uLinePI: u,
+    sourceIds: input.id === undefined ? [] : [input.id],
+    warnings,
+  };
 
   if (input.nonPlastic === true || pl === null || pl >= ll) {
-    const why = input.nonPlastic === true ? "the lab reported the sample as non-plastic" : pl === null ? "no plastic limit was found" : `the plastic limit (${pl}) is not below the liquid limit (${ll})`;
-    return { ...base, plasticityIndex: 0, liquidityIndex: null, hint: { group: "NP", explanation: `Non-plastic: ${why}. Classify by grading (silt or sand).` } };
+    const why =
+      input.nonPlastic === true
+        ? "the lab reported the sample as non-plastic"
+        : pl === null
+          ? "no plastic limit was found"
+          : `the plastic limit (${pl}) is not below the liquid limit (${ll})`;
+    return {
+      ...base,
+      plasticityIndex: 0,
+      liquidityIndex: null,
+      hint: { group: "NP", explanation: `Non-plastic: ${why}. Classify by grading (silt or sand).` },
+    };
   }
 
   const pi = ll - pl;
   const li = input.waterContent === undefined ? null : (input.waterContent - pl) / pi;
-  if (pi > u + 1e-9) warnings.push(`PI ${fmt(pi)} lies above the U-line (${fmt(u)} at LL ${fmt(ll)}): natural soils rarely plot there; check the limits`);
+  if (pi > u + 1e-9)
+    warnings.push(
+      `PI ${fmt(pi)} lies above the U-line (${fmt(u)} at LL ${fmt(ll)}): natural soils rarely plot there; check the limits`,
+    );
   if (ll > 120) warnings.push(`LL ${fmt(ll)} is beyond the usual chart (up to about 100–120)`);
   return { ...base, plasticityIndex: pi, liquidityIndex: li, hint: pickGroup(ll, pi, a) };
 }

@@ -1,5 +1,13 @@
 import { evaluatePolynomial, fitPolynomial, type PolynomialFit } from "./least-squares";
-import { LabInputError, ProblemList, collectSourceIds, describeRow, sourcedPoint, type LabRowRef, type SourcedPoint } from "./lab-input";
+import {
+  LabInputError,
+  ProblemList,
+  collectSourceIds,
+  describeRow,
+  sourcedPoint,
+  type LabRowRef,
+  type SourcedPoint,
+} from "./lab-input";
 
 /** Standard gravity (m/s²) and unit weight of water (kN/m³) used for unit weights. */
 export const GRAVITY = 9.81;
@@ -88,20 +96,32 @@ export function deriveCompactionCurve(input: CompactionInput): CompactionResult 
   const rows = raw.map((p, i) => {
     const rho = dryDensityOf(p, describeRow(p, i), problems, warnings);
     // A value in kg/m³ or t/m³ typed by mistake is caught here rather than as a bad Gs later.
-    if (rho > 3) problems.add(describeRow(p, i), "dryDensity", `dry density ${rho.toFixed(3)} is not plausible in Mg/m³ (enter e.g. 1.85, not 1850)`);
+    if (rho > 3)
+      problems.add(
+        describeRow(p, i),
+        "dryDensity",
+        `dry density ${rho.toFixed(3)} is not plausible in Mg/m³ (enter e.g. 1.85, not 1850)`,
+      );
     return { p, i, rho };
   });
   problems.throwIfAny();
 
   rows.sort((a, b) => a.p.moistureContent - b.p.moistureContent);
-  if (new Set(rows.map((r) => r.p.moistureContent)).size !== rows.length) fail("points", "two points have the same moisture content: merge or remove one");
+  if (new Set(rows.map((r) => r.p.moistureContent)).size !== rows.length)
+    fail("points", "two points have the same moisture content: merge or remove one");
   const peak = rows.reduce((best, r, k) => (r.rho > rows[best].rho ? k : best), 0);
   if (peak === 0) fail("points", "the densest point is the driest: the peak is not bracketed; add a drier test");
-  if (peak === rows.length - 1) fail("points", "the densest point is the wettest: the peak is not bracketed; add a wetter test");
-  if (rows.length < 4) warnings.push(`only ${rows.length} points: 4 or more (two on each side of the optimum) are usual`);
+  if (peak === rows.length - 1)
+    fail("points", "the densest point is the wettest: the peak is not bracketed; add a wetter test");
+  if (rows.length < 4)
+    warnings.push(`only ${rows.length} points: 4 or more (two on each side of the optimum) are usual`);
 
   const local = rows.slice(Math.max(0, peak - 2), peak + 3);
-  const curveFit = fitPolynomial(local.map((r) => r.p.moistureContent), local.map((r) => r.rho), 2);
+  const curveFit = fitPolynomial(
+    local.map((r) => r.p.moistureContent),
+    local.map((r) => r.rho),
+    2,
+  );
   const [c0, c1, c2] = curveFit.coefficients;
   if (!(c2 < 0)) fail("points", "the points near the peak do not form a curve that opens downward");
   const wOpt = -c1 / (2 * c2);
@@ -114,12 +134,20 @@ export function deriveCompactionCurve(input: CompactionInput): CompactionResult 
   const limit = (w: number): AcceptanceLimit => ({ moistureContent: w, extrapolated: w < wMin || w > wMax });
   const dryLimit = limit(wOpt - half);
   const wetLimit = limit(wOpt + half);
-  if (dryLimit.extrapolated) warnings.push(`the dry-side limit (${dryLimit.moistureContent.toFixed(1)} %) lies outside the tested range: test a drier point to confirm it`);
-  if (wetLimit.extrapolated) warnings.push(`the wet-side limit (${wetLimit.moistureContent.toFixed(1)} %) lies outside the tested range: test a wetter point to confirm it`);
+  if (dryLimit.extrapolated)
+    warnings.push(
+      `the dry-side limit (${dryLimit.moistureContent.toFixed(1)} %) lies outside the tested range: test a drier point to confirm it`,
+    );
+  if (wetLimit.extrapolated)
+    warnings.push(
+      `the wet-side limit (${wetLimit.moistureContent.toFixed(1)} %) lies outside the tested range: test a wetter point to confirm it`,
+    );
 
   rows.forEach((r) => {
     if (r.rho > zeroAirVoidsDensity(r.p.moistureContent, gs) * 1.001) {
-      warnings.push(`${describeRow(r.p, r.i)} plots above the zero-air-voids line for Gs = ${gs}: check Gs, w or the density`);
+      warnings.push(
+        `${describeRow(r.p, r.i)} plots above the zero-air-voids line for Gs = ${gs}: check Gs, w or the density`,
+      );
     }
   });
 
@@ -131,7 +159,8 @@ export function deriveCompactionCurve(input: CompactionInput): CompactionResult 
       return [w, f(w)];
     });
   const voidRatio = (gs * WATER_DENSITY) / rhoMax - 1;
-  if (!(voidRatio > 0)) fail("points", `the maximum dry density ${rhoMax.toFixed(3)} Mg/m³ is not below Gs·ρw: check Gs`);
+  if (!(voidRatio > 0))
+    fail("points", `the maximum dry density ${rhoMax.toFixed(3)} Mg/m³ is not below Gs·ρw: check Gs`);
 
   return {
     maxDryDensity: rhoMax,
@@ -162,7 +191,10 @@ function dryDensityOf(p: CompactionPoint, where: string, problems: ProblemList, 
     if (!problems.requirePositive(where, "dryDensity", "dry density", p.dryDensity)) return 0;
     if (p.bulkDensity !== undefined && Number.isFinite(p.bulkDensity)) {
       const implied = p.bulkDensity / (1 + p.moistureContent / 100);
-      if (Math.abs(implied - p.dryDensity) > 0.005 * p.dryDensity) warnings.push(`${where}: bulk density and moisture content imply ρd = ${implied.toFixed(3)} Mg/m³, not the ${p.dryDensity} given; the dry density was used`);
+      if (Math.abs(implied - p.dryDensity) > 0.005 * p.dryDensity)
+        warnings.push(
+          `${where}: bulk density and moisture content imply ρd = ${implied.toFixed(3)} Mg/m³, not the ${p.dryDensity} given; the dry density was used`,
+        );
     }
     return p.dryDensity;
   }

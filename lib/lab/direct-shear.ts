@@ -59,7 +59,9 @@ export function deriveDirectShearStrength(input: DirectShearInput): DirectShearR
   const zeroCohesion = input.zeroCohesion === true;
   const distinct = new Set(tests.map((t) => t.normalStress)).size;
   if (!zeroCohesion && distinct < 2) {
-    throw new LabInputError([{ where: "input", field: "normalStress", message: "the tests need at least 2 different normal stresses" }]);
+    throw new LabInputError([
+      { where: "input", field: "normalStress", message: "the tests need at least 2 different normal stresses" },
+    ]);
   }
   const fit = fitLine(
     tests.map((t) => t.normalStress),
@@ -67,13 +69,21 @@ export function deriveDirectShearStrength(input: DirectShearInput): DirectShearR
     { throughOrigin: zeroCohesion },
   );
   if (fit.slope <= 0) {
-    throw new LabInputError([{ where: "input", field: "shearStress", message: "shear stress does not rise with normal stress: no friction angle can be fitted" }]);
+    throw new LabInputError([
+      {
+        where: "input",
+        field: "shearStress",
+        message: "shear stress does not rise with normal stress: no friction angle can be fitted",
+      },
+    ]);
   }
 
   const warnings: string[] = [];
   if (tests.length < 3) warnings.push(`only ${tests.length} tests: 3 or more are recommended`);
-  if (fit.intercept < 0) warnings.push(`the fitted cohesion is negative (${fit.intercept.toFixed(1)} kPa): consider forcing c' = 0`);
-  if (fit.rSquared < 0.9) warnings.push(`the points scatter about the line (R² = ${fit.rSquared.toFixed(3)}): check the tests`);
+  if (fit.intercept < 0)
+    warnings.push(`the fitted cohesion is negative (${fit.intercept.toFixed(1)} kPa): consider forcing c' = 0`);
+  if (fit.rSquared < 0.9)
+    warnings.push(`the points scatter about the line (R² = ${fit.rSquared.toFixed(3)}): check the tests`);
 
   const sigmaMax = Math.max(...tests.map((t) => t.normalStress));
   return {

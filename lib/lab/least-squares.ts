@@ -40,7 +40,8 @@ function checkData(xs: readonly number[], ys: readonly number[], minPoints: numb
   if (xs.length !== ys.length) throw new Error(`x and y must have the same length (${xs.length} vs ${ys.length})`);
   if (xs.length < minPoints) throw new Error(`at least ${minPoints} points are needed, got ${xs.length}`);
   xs.forEach((x, i) => {
-    if (!Number.isFinite(x) || !Number.isFinite(ys[i])) throw new Error(`point ${i + 1}: x and y must be finite numbers`);
+    if (!Number.isFinite(x) || !Number.isFinite(ys[i]))
+      throw new Error(`point ${i + 1}: x and y must be finite numbers`);
   });
 }
 
@@ -59,7 +60,12 @@ function rSquaredOf(ys: readonly number[], fitted: readonly number[]): { sse: nu
 }
 
 /** Solves the least-squares problem for design matrix rows; returns coefficients and (XᵀX)⁻¹ diagonal. */
-function solveLeastSquares(rows: number[][], ys: readonly number[], xs: readonly number[], throughOrigin = false): { beta: number[]; covDiag: number[] } {
+function solveLeastSquares(
+  rows: number[][],
+  ys: readonly number[],
+  xs: readonly number[],
+  throughOrigin = false,
+): { beta: number[]; covDiag: number[] } {
   // Rank is decided on the data, not by a numerical tolerance: p parameters need p distinct x (a forced line, one x ≠ 0).
   const distinct = new Set(xs.filter((x) => !throughOrigin || x !== 0)).size;
   if (distinct < rows[0].length) throw new Error("the points do not determine the fit (x values too few or all equal)");
@@ -77,7 +83,11 @@ function solveLeastSquares(rows: number[][], ys: readonly number[], xs: readonly
  * @param ys ordinates (any unit)
  * @throws Error when fewer than 2 points (1 through the origin) or when x cannot fix the slope.
  */
-export function fitLine(xs: readonly number[], ys: readonly number[], options: { throughOrigin?: boolean } = {}): LinearFit {
+export function fitLine(
+  xs: readonly number[],
+  ys: readonly number[],
+  options: { throughOrigin?: boolean } = {},
+): LinearFit {
   const throughOrigin = options.throughOrigin === true;
   const p = throughOrigin ? 1 : 2;
   checkData(xs, ys, p);

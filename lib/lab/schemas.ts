@@ -20,7 +20,12 @@ export const directShearInputSchema = z.object({
   zeroCohesion: z.boolean().optional(),
 });
 
-export const triaxialCuSpecimenSchema = z.object({ ...rowRef, cellPressure: nonNegative, deviatorStress: positive, porePressure: kPa });
+export const triaxialCuSpecimenSchema = z.object({
+  ...rowRef,
+  cellPressure: nonNegative,
+  deviatorStress: positive,
+  porePressure: kPa,
+});
 export const triaxialCuInputSchema = z.object({
   specimens: z.array(triaxialCuSpecimenSchema).min(2).max(200),
   space: z.enum(["p-q", "s-t"]),
@@ -45,13 +50,26 @@ export const undrainedStrengthInputSchema = z
   .superRefine((input, ctx) => {
     const field = input.source === "uu" ? "deviatorStress" : "su";
     input.tests.forEach((t, i) => {
-      if (t[field] === undefined) ctx.addIssue({ code: "custom", path: ["tests", i, field], message: `${field} is required for ${input.source} tests` });
+      if (t[field] === undefined)
+        ctx.addIssue({
+          code: "custom",
+          path: ["tests", i, field],
+          message: `${field} is required for ${input.source} tests`,
+        });
     });
   });
 
 export const compactionPointSchema = z
-  .object({ ...rowRef, moistureContent: nonNegative, dryDensity: positive.optional(), bulkDensity: positive.optional() })
-  .refine((p) => p.dryDensity !== undefined || p.bulkDensity !== undefined, { message: "dry density or bulk density is needed", path: ["dryDensity"] });
+  .object({
+    ...rowRef,
+    moistureContent: nonNegative,
+    dryDensity: positive.optional(),
+    bulkDensity: positive.optional(),
+  })
+  .refine((p) => p.dryDensity !== undefined || p.bulkDensity !== undefined, {
+    message: "dry density or bulk density is needed",
+    path: ["dryDensity"],
+  });
 export const compactionInputSchema = z.object({
   points: z.array(compactionPointSchema).min(3).max(100),
   specificGravity: z.number().min(2).max(3.2).optional(),

@@ -67,7 +67,8 @@ export function deriveTriaxialCuStrength(input: TriaxialCuInput): TriaxialCuResu
   const problems = new ProblemList();
   const specimens = input.specimens ?? [];
   if (input.space !== "p-q" && input.space !== "s-t") problems.add("input", "space", "space must be 'p-q' or 's-t'");
-  if (specimens.length < 2) problems.add("input", "specimens", `at least 2 specimens are needed, got ${specimens.length}`);
+  if (specimens.length < 2)
+    problems.add("input", "specimens", `at least 2 specimens are needed, got ${specimens.length}`);
   specimens.forEach((s, i) => {
     const where = describeRow(s, i);
     const okCell = problems.requireNonNegative(where, "cellPressure", "cell pressure", s.cellPressure);
@@ -86,15 +87,26 @@ export function deriveTriaxialCuStrength(input: TriaxialCuInput): TriaxialCuResu
     return { ...sourcedPoint(s, i, x, y), sigma3Effective: s3, sigma1Effective: s1 };
   });
   if (new Set(points.map((p) => p.x)).size < 2) {
-    throw new LabInputError([{ where: "input", field: "specimens", message: "the specimens need at least 2 different mean effective stresses" }]);
+    throw new LabInputError([
+      {
+        where: "input",
+        field: "specimens",
+        message: "the specimens need at least 2 different mean effective stresses",
+      },
+    ]);
   }
-  const fit = fitLine(points.map((p) => p.x), points.map((p) => p.y));
+  const fit = fitLine(
+    points.map((p) => p.x),
+    points.map((p) => p.y),
+  );
   const { cohesion, frictionAngle } = toMohrCoulomb(input.space, fit.intercept, fit.slope);
 
   const warnings: string[] = [];
   if (specimens.length < 3) warnings.push(`only ${specimens.length} specimens: 3 or more are recommended`);
-  if (cohesion < 0) warnings.push(`the fitted cohesion is negative (${cohesion.toFixed(1)} kPa): check the specimens or take c' = 0`);
-  if (fit.rSquared < 0.9) warnings.push(`the points scatter about the line (R² = ${fit.rSquared.toFixed(3)}): check the tests`);
+  if (cohesion < 0)
+    warnings.push(`the fitted cohesion is negative (${cohesion.toFixed(1)} kPa): check the specimens or take c' = 0`);
+  if (fit.rSquared < 0.9)
+    warnings.push(`the points scatter about the line (R² = ${fit.rSquared.toFixed(3)}): check the tests`);
 
   const xMax = Math.max(...points.map((p) => p.x));
   return {
@@ -115,12 +127,22 @@ export function deriveTriaxialCuStrength(input: TriaxialCuInput): TriaxialCuResu
 }
 
 /** Converts a fitted line in p'–q or s'–t space to c' (kPa) and φ' (degrees). */
-export function toMohrCoulomb(space: TriaxialStressSpace, intercept: number, slope: number): { cohesion: number; frictionAngle: number } {
+export function toMohrCoulomb(
+  space: TriaxialStressSpace,
+  intercept: number,
+  slope: number,
+): { cohesion: number; frictionAngle: number } {
   // sin φ' must lie in (0, 1): M in (0, 3) for p'–q, tan α in (0, 1) for s'–t.
   const sinPhi = space === "p-q" ? (3 * slope) / (6 + slope) : slope;
   if (!(sinPhi > 0 && sinPhi < 1)) {
     const limit = space === "p-q" ? "M must lie between 0 and 3" : "tan α must lie between 0 and 1";
-    throw new LabInputError([{ where: "input", field: "specimens", message: `the fitted slope ${slope.toFixed(3)} gives no friction angle (${limit})` }]);
+    throw new LabInputError([
+      {
+        where: "input",
+        field: "specimens",
+        message: `the fitted slope ${slope.toFixed(3)} gives no friction angle (${limit})`,
+      },
+    ]);
   }
   const cosPhi = Math.sqrt(1 - sinPhi * sinPhi);
   const cohesion = space === "p-q" ? (intercept * (3 - sinPhi)) / (6 * cosPhi) : intercept / cosPhi;

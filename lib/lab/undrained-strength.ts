@@ -88,18 +88,25 @@ export function deriveUndrainedStrength(input: UndrainedStrengthInput): Undraine
   const tests = input.tests ?? [];
   const factor = input.vaneCorrectionFactor ?? 1;
   const needPosition = input.model === "linear";
-  if (input.source !== "uu" && input.source !== "vane") problems.add("input", "source", "source must be 'uu' or 'vane'");
-  if (input.model !== "constant" && input.model !== "linear") problems.add("input", "model", "model must be 'constant' or 'linear'");
-  if (tests.length < (needPosition ? 2 : 1)) problems.add("input", "tests", `at least ${needPosition ? 2 : 1} tests are needed, got ${tests.length}`);
-  if (input.source === "vane") problems.requirePositive("input", "vaneCorrectionFactor", "vane correction factor", factor);
-  if (input.groundElevation !== undefined) problems.requireFinite("input", "groundElevation", "ground elevation", input.groundElevation);
-  if (input.datumElevation !== undefined) problems.requireFinite("input", "datumElevation", "datum elevation", input.datumElevation);
+  if (input.source !== "uu" && input.source !== "vane")
+    problems.add("input", "source", "source must be 'uu' or 'vane'");
+  if (input.model !== "constant" && input.model !== "linear")
+    problems.add("input", "model", "model must be 'constant' or 'linear'");
+  if (tests.length < (needPosition ? 2 : 1))
+    problems.add("input", "tests", `at least ${needPosition ? 2 : 1} tests are needed, got ${tests.length}`);
+  if (input.source === "vane")
+    problems.requirePositive("input", "vaneCorrectionFactor", "vane correction factor", factor);
+  if (input.groundElevation !== undefined)
+    problems.requireFinite("input", "groundElevation", "ground elevation", input.groundElevation);
+  if (input.datumElevation !== undefined)
+    problems.requireFinite("input", "datumElevation", "datum elevation", input.datumElevation);
 
   const points: UndrainedPoint[] = tests.map((t, i) => {
     const where = describeRow(t, i);
     let su = 0;
     if (input.source === "uu") {
-      if (problems.requirePositive(where, "deviatorStress", "deviator stress", t.deviatorStress)) su = (t.deviatorStress as number) / 2;
+      if (problems.requirePositive(where, "deviatorStress", "deviator stress", t.deviatorStress))
+        su = (t.deviatorStress as number) / 2;
     } else if (problems.requirePositive(where, "su", "vane su", t.su)) {
       su = (t.su as number) * factor;
     }
@@ -116,8 +123,15 @@ export function deriveUndrainedStrength(input: UndrainedStrengthInput): Undraine
   return linearSu(common, input, problems);
 }
 
-function elevationOf(t: UndrainedTest, ground: number | undefined, where: string, problems: ProblemList, required: boolean): number | null {
-  if (t.elevation !== undefined) return problems.requireFinite(where, "elevation", "elevation", t.elevation) ? t.elevation : null;
+function elevationOf(
+  t: UndrainedTest,
+  ground: number | undefined,
+  where: string,
+  problems: ProblemList,
+  required: boolean,
+): number | null {
+  if (t.elevation !== undefined)
+    return problems.requireFinite(where, "elevation", "elevation", t.elevation) ? t.elevation : null;
   if (t.depth !== undefined) {
     if (!problems.requireNonNegative(where, "depth", "depth", t.depth)) return null;
     if (ground !== undefined && Number.isFinite(ground)) return ground - t.depth;
@@ -135,30 +149,54 @@ function constantSu(common: Omit<CommonResult, "engineFields" | "warnings">): Co
   const sd = n > 1 ? Math.sqrt(values.reduce((s, v) => s + (v - mean) ** 2, 0) / (n - 1)) : null;
   const warnings: string[] = [];
   if (n < 3) warnings.push(`only ${n} test${n === 1 ? "" : "s"}: 3 or more are recommended`);
-  if (sd !== null && sd / mean > 0.3) warnings.push(`su varies widely (CoV ${(sd / mean).toFixed(2)}): consider su rising with depth or a lower value`);
-  return { model: "constant", su: mean, standardDeviation: sd, coefficientOfVariation: sd === null ? null : sd / mean, engineFields: { su: mean }, ...common, warnings };
+  if (sd !== null && sd / mean > 0.3)
+    warnings.push(`su varies widely (CoV ${(sd / mean).toFixed(2)}): consider su rising with depth or a lower value`);
+  return {
+    model: "constant",
+    su: mean,
+    standardDeviation: sd,
+    coefficientOfVariation: sd === null ? null : sd / mean,
+    engineFields: { su: mean },
+    ...common,
+    warnings,
+  };
 }
 
-function linearSu(common: Omit<CommonResult, "engineFields" | "warnings">, input: UndrainedStrengthInput, problems: ProblemList): LinearSuResult {
+function linearSu(
+  common: Omit<CommonResult, "engineFields" | "warnings">,
+  input: UndrainedStrengthInput,
+  problems: ProblemList,
+): LinearSuResult {
   const elevations = common.points.map((p) => p.elevation as number);
   if (new Set(elevations).size < 2) {
     problems.add("input", "tests", "the tests need at least 2 different elevations to fit su against depth");
     problems.throwIfAny();
   }
-  const fit = fitLine(elevations, common.points.map((p) => p.su));
+  const fit = fitLine(
+    elevations,
+    common.points.map((p) => p.su),
+  );
   const top = Math.max(...elevations);
   const bottom = Math.min(...elevations);
   const datum = input.datumElevation ?? input.groundElevation ?? top;
   const suAtDatum = fit.intercept + fit.slope * datum;
   const gradient = -fit.slope;
   if (!(suAtDatum > 0)) {
-    problems.add("input", "datumElevation", `the fitted su at the datum (${datum.toFixed(2)} m) is ${suAtDatum.toFixed(1)} kPa: choose a lower datum or a constant su`);
+    problems.add(
+      "input",
+      "datumElevation",
+      `the fitted su at the datum (${datum.toFixed(2)} m) is ${suAtDatum.toFixed(1)} kPa: choose a lower datum or a constant su`,
+    );
     problems.throwIfAny();
   }
   const warnings: string[] = [];
   if (common.n < 3) warnings.push(`only ${common.n} tests: 3 or more are recommended`);
-  if (gradient < 0) warnings.push("su falls with depth in these tests; the engine's model expects it to rise: consider a constant su");
-  if (datum < top) warnings.push(`the datum (${datum.toFixed(2)} m) is below the highest test (${top.toFixed(2)} m): above the datum the engine holds su constant`);
+  if (gradient < 0)
+    warnings.push("su falls with depth in these tests; the engine's model expects it to rise: consider a constant su");
+  if (datum < top)
+    warnings.push(
+      `the datum (${datum.toFixed(2)} m) is below the highest test (${top.toFixed(2)} m): above the datum the engine holds su constant`,
+    );
   const lowest = Math.min(bottom, datum);
   return {
     model: "linear",

@@ -33,7 +33,9 @@ export interface ComposedNotice {
 }
 
 const fsLine = (label: string, fs: number | null, required: number) =>
-  fs === null ? null : `  ${label}: FS ${fs.toFixed(3)} ${fs >= required ? "meets" : "is below"} the required ${required.toFixed(2)}`;
+  fs === null
+    ? null
+    : `  ${label}: FS ${fs.toFixed(3)} ${fs >= required ? "meets" : "is below"} the required ${required.toFixed(2)}`;
 
 function runLines(f: NoticeFacts): string[] {
   return [
@@ -42,7 +44,10 @@ function runLines(f: NoticeFacts): string[] {
     `Section:           ${f.section}`,
     `Loading condition: ${f.condition}, ${f.face} face`,
     "Factors of safety:",
-    ...[fsLine("Bishop's simplified", f.fs.bishop, f.requiredFs), fsLine("Ordinary method", f.fs.fellenius, f.requiredFs)].filter((l): l is string => l !== null),
+    ...[
+      fsLine("Bishop's simplified", f.fs.bishop, f.requiredFs),
+      fsLine("Ordinary method", f.fs.fellenius, f.requiredFs),
+    ].filter((l): l is string => l !== null),
   ];
 }
 
@@ -56,12 +61,18 @@ export function composeNotice(kind: NoticeKind, f: NoticeFacts): ComposedNotice 
   switch (kind) {
     case "run-submitted":
       subject = `Review requested: ${f.runTitle} — ${f.projectName}`;
-      opening = [`${f.actorName} submitted a run for review on ${when(f.at)}.`, ...(note ? ["", `Note from the author: ${note}`] : [])];
+      opening = [
+        `${f.actorName} submitted a run for review on ${when(f.at)}.`,
+        ...(note ? ["", `Note from the author: ${note}`] : []),
+      ];
       action = `Open the review: ${f.link}`;
       break;
     case "run-approved":
       subject = `Signed off: ${f.runTitle} — ${f.projectName}`;
-      opening = [`${f.actorName} signed off your run on ${when(f.at)}. Its record is now frozen.`, ...(note ? ["", `Reviewer's note: ${note}`] : [])];
+      opening = [
+        `${f.actorName} signed off your run on ${when(f.at)}. Its record is now frozen.`,
+        ...(note ? ["", `Reviewer's note: ${note}`] : []),
+      ];
       action = `Open the run and its calculation report: ${f.link}`;
       break;
     case "run-returned":

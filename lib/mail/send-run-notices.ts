@@ -10,7 +10,11 @@ import { commentLabel } from "../review/comment-label";
 import { composeNotice, type NoticeFacts } from "./compose-notice";
 import { mailFrom, mailTransport } from "./transport";
 
-const KIND: Record<TransitionAction, NoticeKind> = { submit: "run-submitted", approve: "run-approved", return: "run-returned" };
+const KIND: Record<TransitionAction, NoticeKind> = {
+  submit: "run-submitted",
+  approve: "run-approved",
+  return: "run-returned",
+};
 
 export interface TransitionNoticeInput {
   action: TransitionAction;
@@ -22,7 +26,10 @@ export interface TransitionNoticeInput {
 }
 
 async function recipientsFor(kind: NoticeKind, input: TransitionNoticeInput): Promise<NoticeRecipient[]> {
-  const who = kind === "run-submitted" ? { projectId: input.run.projectId, projectRole: "reviewer" as const } : { userIds: [input.run.authorId] };
+  const who =
+    kind === "run-submitted"
+      ? { projectId: input.run.projectId, projectRole: "reviewer" as const }
+      : { userIds: [input.run.authorId] };
   // Nobody is told about what they did themselves.
   return (await fetchNoticeRecipients(kind, who)).filter((r) => r.id !== input.actor.id);
 }
@@ -31,7 +38,10 @@ async function factsFor(kind: NoticeKind, input: TransitionNoticeInput): Promise
   const base = readServerEnv().APP_URL.replace(/\/+$/, "");
   const { run } = input;
   const runPath = `${base}/projects/${run.projectId}/runs/${run.id}`;
-  const comments = kind === "run-returned" ? (await fetchRunComments(run.id)).map((c, i) => ({ label: commentLabel(c, i), body: c.body })) : undefined;
+  const comments =
+    kind === "run-returned"
+      ? (await fetchRunComments(run.id)).map((c, i) => ({ label: commentLabel(c, i), body: c.body }))
+      : undefined;
   return {
     projectName: input.projectName,
     runId: run.id,
@@ -61,7 +71,12 @@ export async function sendTransitionNotices(input: TransitionNoticeInput): Promi
   try {
     const recipients = await recipientsFor(kind, input);
     if (recipients.length === 0) {
-      await recordRunEvent({ runId, actorId: null, kind: "mail-skipped", note: `No notice sent: nobody ${kind === "run-submitted" ? "among the project's reviewers" : "(the author)"} receives “${kind}” notices.` });
+      await recordRunEvent({
+        runId,
+        actorId: null,
+        kind: "mail-skipped",
+        note: `No notice sent: nobody ${kind === "run-submitted" ? "among the project's reviewers" : "(the author)"} receives “${kind}” notices.`,
+      });
       return;
     }
     const message = composeNotice(kind, await factsFor(kind, input));
@@ -69,15 +84,35 @@ export async function sendTransitionNotices(input: TransitionNoticeInput): Promi
     for (const r of recipients) {
       const to = `${r.name} <${r.email}>`;
       try {
-        await transport.sendMail({ from: mailFrom(), to: { name: r.name, address: r.email }, subject: message.subject, text: message.text });
-        await recordRunEvent({ runId, actorId: null, kind: "mail-sent", note: `Notice “${message.subject}” sent to ${to}.` });
+        await transport.sendMail({
+          from: mailFrom(),
+          to: { name: r.name, address: r.email },
+          subject: message.subject,
+          text: message.text,
+        });
+        await recordRunEvent({
+          runId,
+          actorId: null,
+          kind: "mail-sent",
+          note: `Notice “${message.subject}” sent to ${to}.`,
+        });
       } catch (err) {
         const reason = err instanceof Error ? err.message : String(err);
-        await recordRunEvent({ runId, actorId: null, kind: "mail-failed", note: `Notice to ${to} could not be sent: ${reason}` });
+        await recordRunEvent({
+          runId,
+          actorId: null,
+          kind: "mail-failed",
+          note: `Notice to ${to} could not be sent: ${reason}`,
+        });
       }
     }
   } catch (err) {
     console.error("[mail] notices for run", runId, "failed", err);
-    await recordRunEvent({ runId, actorId: null, kind: "mail-failed", note: `Notices could not be prepared: ${err instanceof Error ? err.message : String(err)}` }).catch(() => undefined);
+    await recordRunEvent({
+      runId,
+      actorId: null,
+      kind: "mail-failed",
+      note: `Notices could not be prepared: ${err instanceof Error ? err.message : String(err)}`,
+    }).catch(() => undefined);
   }
 }

@@ -37,16 +37,37 @@ export function checkMaterialsImport(text: string, existingKeys: readonly string
     if (!rowOf.has(key)) rowOf.set(key, row);
     if (key === "") continue;
     const at = { row: row.row, column: "id" };
-    if (!isMaterialKey(key)) problems.push({ ...at, message: `Id '${key}' is not a material key. ${MATERIAL_KEY_HINT}` });
-    else if (existing.has(key)) problems.push({ ...at, message: `The library already has a material '${key}': rename it in the file or delete the one in the library.` });
+    if (!isMaterialKey(key))
+      problems.push({ ...at, message: `Id '${key}' is not a material key. ${MATERIAL_KEY_HINT}` });
+    else if (existing.has(key))
+      problems.push({
+        ...at,
+        message: `The library already has a material '${key}': rename it in the file or delete the one in the library.`,
+      });
   }
-  if (parsed.preview.length > MAX_IMPORT_ROWS) problems.push({ row: parsed.preview[MAX_IMPORT_ROWS].row, column: null, message: `At most ${MAX_IMPORT_ROWS} materials can be imported at once.` });
+  if (parsed.preview.length > MAX_IMPORT_ROWS)
+    problems.push({
+      row: parsed.preview[MAX_IMPORT_ROWS].row,
+      column: null,
+      message: `At most ${MAX_IMPORT_ROWS} materials can be imported at once.`,
+    });
   problems.sort((a, b) => a.row - b.row);
 
   const materials: ImportedMaterial[] = parsed.ok
-    ? parsed.value.materials.map((m) => ({ row: rowOf.get(m.id)?.row ?? 0, key: m.id, name: parsed.value.names[m.id] ?? m.id, parameters: withoutId(m) }))
+    ? parsed.value.materials.map((m) => ({
+        row: rowOf.get(m.id)?.row ?? 0,
+        key: m.id,
+        name: parsed.value.names[m.id] ?? m.id,
+        parameters: withoutId(m),
+      }))
     : [];
-  return { ok: problems.length === 0, materials: problems.length === 0 ? materials : [], problems, warnings: parsed.warnings, preview: parsed.preview };
+  return {
+    ok: problems.length === 0,
+    materials: problems.length === 0 ? materials : [],
+    problems,
+    warnings: parsed.warnings,
+    preview: parsed.preview,
+  };
 }
 
 function withoutId(m: SectionMaterial): MaterialParameters {
@@ -56,5 +77,9 @@ function withoutId(m: SectionMaterial): MaterialParameters {
 
 /** CSV problems in the shape the API's `fields` carry ("row 3, column c"). */
 export function csvProblemsToTable(problems: readonly CsvProblem[]): TableProblem[] {
-  return problems.map((p) => ({ row: p.row, column: p.column, message: p.cell ? `${p.cell}: ${p.message}` : p.message }));
+  return problems.map((p) => ({
+    row: p.row,
+    column: p.column,
+    message: p.cell ? `${p.cell}: ${p.message}` : p.message,
+  }));
 }

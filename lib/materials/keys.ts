@@ -1,7 +1,8 @@
 /** A material key: a lowercase slug, as the section document refers to materials by it. */
 export const MATERIAL_KEY_PATTERN = /^[a-z][a-z0-9-]{0,59}$/;
 
-export const MATERIAL_KEY_HINT = "Use 1–60 characters: a lowercase letter first, then lowercase letters, digits or hyphens (e.g. core-clay).";
+export const MATERIAL_KEY_HINT =
+  "Use 1–60 characters: a lowercase letter first, then lowercase letters, digits or hyphens (e.g. core-clay).";
 
 /** Whether `key` is a valid material key. */
 export function isMaterialKey(key: string): boolean {

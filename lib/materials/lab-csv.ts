@@ -10,10 +10,28 @@ import type { LabRow } from "./lab-rows";
 
 /** Invented example rows for each kind's template. */
 const EXAMPLES: Record<LabTestKind, (string | number)[][]> = {
-  "direct-shear": [["DS-1", 50, 36], ["DS-2", 100, 59], ["DS-3", 200, 108]],
-  "triaxial-cu": [["CU-1", 250, 114, 200], ["CU-2", 320, 194, 220], ["CU-3", 450, 361, 250]],
-  undrained: [["V-1", 1.0, "", "", 31], ["V-2", 2.5, "", "", 36], ["V-3", 4.0, "", "", 42]],
-  compaction: [["P-1", 13, 1.58, ""], ["P-2", 15, 1.63, ""], ["P-3", 17, 1.66, ""], ["P-4", 19, 1.64, ""], ["P-5", 21, 1.59, ""]],
+  "direct-shear": [
+    ["DS-1", 50, 36],
+    ["DS-2", 100, 59],
+    ["DS-3", 200, 108],
+  ],
+  "triaxial-cu": [
+    ["CU-1", 250, 114, 200],
+    ["CU-2", 320, 194, 220],
+    ["CU-3", 450, 361, 250],
+  ],
+  undrained: [
+    ["V-1", 1.0, "", "", 31],
+    ["V-2", 2.5, "", "", 36],
+    ["V-3", 4.0, "", "", 42],
+  ],
+  compaction: [
+    ["P-1", 13, 1.58, ""],
+    ["P-2", 15, 1.63, ""],
+    ["P-3", 17, 1.66, ""],
+    ["P-4", 19, 1.64, ""],
+    ["P-5", 21, 1.59, ""],
+  ],
   atterberg: [["AL-1", 42, 20, 18]],
 };
 
@@ -27,10 +45,14 @@ export function labCsvTemplate(kind: LabTestKind): string {
 /** The rows of a stored or typed table as a CSV in the same format. */
 export function labRowsToCsv(kind: LabTestKind, rows: readonly LabRow[]): string {
   const keys = keysOf(kind);
-  return writeCsv(keys, rows.map((r) => keys.map((k) => r[k] ?? "")));
+  return writeCsv(
+    keys,
+    rows.map((r) => keys.map((k) => r[k] ?? "")),
+  );
 }
 
-export type LabCsvOutcome = { ok: true; rows: LabRow[]; warnings: CsvProblem[] } | { ok: false; problems: CsvProblem[]; warnings: CsvProblem[] };
+export type LabCsvOutcome =
+  { ok: true; rows: LabRow[]; warnings: CsvProblem[] } | { ok: false; problems: CsvProblem[]; warnings: CsvProblem[] };
 
 /** Reads a CSV of test results into table rows; every bad cell is listed with its row and column. */
 export function parseLabCsv(kind: LabTestKind, text: string): LabCsvOutcome {
@@ -41,7 +63,11 @@ export function parseLabCsv(kind: LabTestKind, text: string): LabCsvOutcome {
   const table = readCsvTable(text, keysOf(kind), [firstNumeric], problems, warnings);
   if (!table) return { ok: false, problems, warnings };
   if (info.rowsKey === null && table.rows.length > 1) {
-    problems.push({ row: table.rows[1].row, column: null, message: "An Atterberg set holds one sample: put each sample in a set of its own." });
+    problems.push({
+      row: table.rows[1].row,
+      column: null,
+      message: "An Atterberg set holds one sample: put each sample in a set of its own.",
+    });
   }
   const rows = table.rows.map((r) => {
     const row: LabRow = {};
@@ -52,7 +78,12 @@ export function parseLabCsv(kind: LabTestKind, text: string): LabCsvOutcome {
       const n = parseDecimal(text);
       if (!n.ok) {
         const index = table.columns.get(col.key);
-        problems.push({ row: r.row, column: col.key, cell: index === undefined ? undefined : `${columnLetter(index)}${r.row}`, message: n.message });
+        problems.push({
+          row: r.row,
+          column: col.key,
+          cell: index === undefined ? undefined : `${columnLetter(index)}${r.row}`,
+          message: n.message,
+        });
       }
     }
     return row;

@@ -23,7 +23,8 @@ const INPUT_SCHEMAS: { [K in LabTestKind]: ZodType<LabInputByKind[K]> } = {
   atterberg: atterbergInputSchema,
 };
 
-export type LabDeriveOutcome = { ok: true; record: LabTestRecord; warnings: string[] } | { ok: false; problems: TableProblem[] };
+export type LabDeriveOutcome =
+  { ok: true; record: LabTestRecord; warnings: string[] } | { ok: false; problems: TableProblem[] };
 
 /**
  * Checks a lab test set with lib/lab's zod schema, then derives its result with lib/lab.

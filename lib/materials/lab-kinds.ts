@@ -33,7 +33,9 @@ export interface LabResultByKind {
 }
 
 /** A lab test set's input and what was derived from it, tied together by `kind`. */
-export type LabTestRecord = { [K in LabTestKind]: { kind: K; data: LabInputByKind[K]; result: LabResultByKind[K] } }[LabTestKind];
+export type LabTestRecord = {
+  [K in LabTestKind]: { kind: K; data: LabInputByKind[K]; result: LabResultByKind[K] };
+}[LabTestKind];
 
 /** One column of a kind's rows table; `unit` is shown in the header. */
 export interface LabColumn {
@@ -61,35 +63,60 @@ export const LAB_KIND_INFO: Record<LabTestKind, LabKindInfo> = {
   "direct-shear": {
     label: "Direct shear (shear box)",
     rowsKey: "tests",
-    columns: [specimen, num("normalStress", "Normal stress σn", "kPa"), num("shearStress", "Peak shear stress τ", "kPa")],
+    columns: [
+      specimen,
+      num("normalStress", "Normal stress σn", "kPa"),
+      num("shearStress", "Peak shear stress τ", "kPa"),
+    ],
     feeds: ["c", "phi"],
     startRows: 3,
   },
   "triaxial-cu": {
     label: "Triaxial, consolidated undrained, pore pressures measured",
     rowsKey: "specimens",
-    columns: [specimen, num("cellPressure", "Cell pressure σ3", "kPa"), num("deviatorStress", "Deviator stress at failure q", "kPa"), num("porePressure", "Pore pressure at failure u", "kPa")],
+    columns: [
+      specimen,
+      num("cellPressure", "Cell pressure σ3", "kPa"),
+      num("deviatorStress", "Deviator stress at failure q", "kPa"),
+      num("porePressure", "Pore pressure at failure u", "kPa"),
+    ],
     feeds: ["c", "phi"],
     startRows: 3,
   },
   undrained: {
     label: "Undrained strength (UU triaxial or field vane)",
     rowsKey: "tests",
-    columns: [specimen, num("depth", "Depth", "m"), num("elevation", "Elevation", "m"), num("deviatorStress", "UU deviator stress q", "kPa"), num("su", "Vane su", "kPa")],
+    columns: [
+      specimen,
+      num("depth", "Depth", "m"),
+      num("elevation", "Elevation", "m"),
+      num("deviatorStress", "UU deviator stress q", "kPa"),
+      num("su", "Vane su", "kPa"),
+    ],
     feeds: ["su", "suGradient", "suDatum"],
     startRows: 3,
   },
   compaction: {
     label: "Compaction test",
     rowsKey: "points",
-    columns: [specimen, num("moistureContent", "Moisture content w", "%"), num("dryDensity", "Dry density ρd", "Mg/m³"), num("bulkDensity", "Bulk density ρ", "Mg/m³")],
+    columns: [
+      specimen,
+      num("moistureContent", "Moisture content w", "%"),
+      num("dryDensity", "Dry density ρd", "Mg/m³"),
+      num("bulkDensity", "Bulk density ρ", "Mg/m³"),
+    ],
     feeds: ["gamma", "gammaSat"],
     startRows: 5,
   },
   atterberg: {
     label: "Atterberg limits",
     rowsKey: null,
-    columns: [specimen, num("liquidLimit", "Liquid limit LL", "%"), num("plasticLimit", "Plastic limit PL", "%"), num("waterContent", "Natural water content w", "%")],
+    columns: [
+      specimen,
+      num("liquidLimit", "Liquid limit LL", "%"),
+      num("plasticLimit", "Plastic limit PL", "%"),
+      num("waterContent", "Natural water content w", "%"),
+    ],
     feeds: [],
     startRows: 1,
   },

@@ -54,7 +54,12 @@ export function buildLabInput(kind: LabTestKind, rows: readonly LabRow[], option
   const used = rows.slice(0, info.rowsKey === null ? Math.min(last, 1) : last);
 
   const records = used.map((row, i) => {
-    if (isBlank(row)) problems.push({ row: i + 1, column: null, message: `${LAB_ROW_NOUN} ${i + 1} is empty: fill it in or remove it.` });
+    if (isBlank(row))
+      problems.push({
+        row: i + 1,
+        column: null,
+        message: `${LAB_ROW_NOUN} ${i + 1} is empty: fill it in or remove it.`,
+      });
     const out: Record<string, unknown> = {};
     for (const col of info.columns) {
       const text = (row[col.key] ?? "").trim();
@@ -65,7 +70,8 @@ export function buildLabInput(kind: LabTestKind, rows: readonly LabRow[], option
       }
       const n = parseDecimal(text);
       if (n.ok) out[col.key] = n.value;
-      else problems.push({ row: i + 1, column: col.key, message: `${LAB_ROW_NOUN} ${i + 1}: ${col.label}: ${n.message}` });
+      else
+        problems.push({ row: i + 1, column: col.key, message: `${LAB_ROW_NOUN} ${i + 1}: ${col.label}: ${n.message}` });
     }
     return out;
   });
@@ -93,7 +99,10 @@ export function buildLabInput(kind: LabTestKind, rows: readonly LabRow[], option
         model: options.model,
         groundElevation: setting("groundElevation", options.groundElevation, "Ground elevation"),
         datumElevation: setting("datumElevation", options.datumElevation, "Datum elevation"),
-        vaneCorrectionFactor: options.source === "vane" ? setting("vaneCorrectionFactor", options.vaneCorrectionFactor, "Vane correction factor") : undefined,
+        vaneCorrectionFactor:
+          options.source === "vane"
+            ? setting("vaneCorrectionFactor", options.vaneCorrectionFactor, "Vane correction factor")
+            : undefined,
       };
       break;
     case "compaction":
@@ -113,10 +122,15 @@ export function buildLabInput(kind: LabTestKind, rows: readonly LabRow[], option
 }
 
 /** The table and settings that show a stored input again (the reverse of {@link buildLabInput}). */
-export function labInputToRows(kind: LabTestKind, data: Record<string, unknown>): { rows: LabRow[]; options: LabOptions } {
+export function labInputToRows(
+  kind: LabTestKind,
+  data: Record<string, unknown>,
+): { rows: LabRow[]; options: LabOptions } {
   const info = LAB_KIND_INFO[kind];
   const raw = info.rowsKey === null ? [data] : ((data[info.rowsKey] as Record<string, unknown>[] | undefined) ?? []);
-  const rows = raw.map((r) => Object.fromEntries(info.columns.map((c) => [c.key, r[c.key] === undefined ? "" : String(r[c.key])])));
+  const rows = raw.map((r) =>
+    Object.fromEntries(info.columns.map((c) => [c.key, r[c.key] === undefined ? "" : String(r[c.key])])),
+  );
   const text = (v: unknown, fallback: string) => (v === undefined ? fallback : String(v));
   const options: LabOptions = {
     zeroCohesion: data.zeroCohesion === true,

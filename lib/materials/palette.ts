@@ -3,7 +3,17 @@
  * the common colour-vision deficiencies (P. Tol, "Colour Schemes", SRON/EPS/TN/09-002, 2021).
  * Pale grey is left out: it is reserved for impenetrable ground.
  */
-export const MATERIAL_COLORS = ["#CC6677", "#332288", "#DDCC77", "#117733", "#88CCEE", "#882255", "#44AA99", "#999933", "#AA4499"] as const;
+export const MATERIAL_COLORS = [
+  "#CC6677",
+  "#332288",
+  "#DDCC77",
+  "#117733",
+  "#88CCEE",
+  "#882255",
+  "#44AA99",
+  "#999933",
+  "#AA4499",
+] as const;
 
 /** Colour for impenetrable materials (rock): Tol's pale grey. */
 export const IMPENETRABLE_COLOR = "#DDDDDD";

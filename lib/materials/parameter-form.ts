@@ -1,5 +1,13 @@
 import { parseDecimal } from "@/lib/section-io";
-import { MODEL_PARAMETERS, PARAMETER_INFO, PARAMETER_KEYS, parameterValue, type MaterialModel, type MaterialParameters, type ParameterKey } from "./parameters";
+import {
+  MODEL_PARAMETERS,
+  PARAMETER_INFO,
+  PARAMETER_KEYS,
+  parameterValue,
+  type MaterialModel,
+  type MaterialParameters,
+  type ParameterKey,
+} from "./parameters";
 
 /** What a parameters form holds: numbers as typed, so a half-typed "12." is not lost. */
 export type ParameterFormValues = { model: MaterialModel; freeDraining: boolean } & Record<ParameterKey, string>;
@@ -20,7 +28,11 @@ export const EMPTY_PARAMETER_FORM: ParameterFormValues = {
 
 /** The form's values for stored parameters. */
 export function formValuesFrom(p: MaterialParameters): ParameterFormValues {
-  const values = { ...EMPTY_PARAMETER_FORM, model: p.model, freeDraining: "freeDraining" in p && p.freeDraining === true };
+  const values = {
+    ...EMPTY_PARAMETER_FORM,
+    model: p.model,
+    freeDraining: "freeDraining" in p && p.freeDraining === true,
+  };
   for (const key of PARAMETER_KEYS) {
     const v = parameterValue(p, key);
     values[key] = v === undefined ? "" : String(v);
@@ -28,7 +40,8 @@ export function formValuesFrom(p: MaterialParameters): ParameterFormValues {
   return values;
 }
 
-export type ParametersFromForm = { ok: true; parameters: MaterialParameters } | { ok: false; fields: Record<string, string[]> };
+export type ParametersFromForm =
+  { ok: true; parameters: MaterialParameters } | { ok: false; fields: Record<string, string[]> };
 
 /**
  * Parameters from the form: only the model's own fields, blanks left out, numbers strict

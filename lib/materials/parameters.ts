@@ -1,5 +1,10 @@
 import { z } from "zod";
-import { impenetrableMaterialSchema, mohrCoulombMaterialSchema, undrainedMaterialSchema, type Material } from "@/lib/stability";
+import {
+  impenetrableMaterialSchema,
+  mohrCoulombMaterialSchema,
+  undrainedMaterialSchema,
+  type Material,
+} from "@/lib/stability";
 import { checkMaterials } from "@/lib/stability/validate-materials";
 import type { Issue } from "@/lib/stability";
 
@@ -80,5 +85,8 @@ export function checkMaterialParameters(key: string, parameters: MaterialParamet
   checkMaterials([material], gammaW, errors, warnings);
   const fields: Record<string, string[]> = {};
   for (const e of errors) (fields[e.path.replace(/^materials\[0\]/, "parameters")] ??= []).push(e.message);
-  return { errors: fields, warnings: warnings.map((w) => ({ ...w, path: w.path.replace(/^materials\[0\]/, "parameters") })) };
+  return {
+    errors: fields,
+    warnings: warnings.map((w) => ({ ...w, path: w.path.replace(/^materials\[0\]/, "parameters") })),
+  };
 }

@@ -5,7 +5,10 @@
  */
 
 /** Maps a value linearly from `domain` to `range` (pixels); a zero-width domain maps to the range's middle. */
-export function linearScale(domain: readonly [number, number], range: readonly [number, number]): (value: number) => number {
+export function linearScale(
+  domain: readonly [number, number],
+  range: readonly [number, number],
+): (value: number) => number {
   const [d0, d1] = domain;
   const [r0, r1] = range;
   const span = d1 - d0;
@@ -38,7 +41,10 @@ export function niceTicks(min: number, max: number, count = 5): number[] {
  * A domain that holds every value, widened outward to nice steps, optionally reaching zero
  * (a strength envelope reads best with the origin in view).
  */
-export function niceDomain(values: readonly number[], options: { includeZero?: boolean; count?: number } = {}): [number, number] {
+export function niceDomain(
+  values: readonly number[],
+  options: { includeZero?: boolean; count?: number } = {},
+): [number, number] {
   const finite = values.filter(Number.isFinite);
   if (options.includeZero) finite.push(0);
   if (finite.length === 0) return [0, 1];

@@ -42,7 +42,11 @@ export const importMaterialsSchema = z.object({ csv: z.string().max(200_000, "Th
 export const createLabTestSchema = z.object({
   materialId: z.number().int().positive().nullable().default(null),
   kind: z.enum(LAB_TEST_KINDS),
-  name: z.string().trim().min(1, "Give the test set a name, e.g. the borehole and depth.").max(200, "At most 200 characters."),
+  name: z
+    .string()
+    .trim()
+    .min(1, "Give the test set a name, e.g. the borehole and depth.")
+    .max(200, "At most 200 characters."),
   /** Checked against lib/lab's schema for `kind`. */
   data: z.unknown(),
 });

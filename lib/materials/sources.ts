@@ -1,5 +1,12 @@
 import { LAB_KIND_INFO, type LabTestKind, type LabTestRecord } from "./lab-kinds";
-import { MODEL_PARAMETERS, PARAMETER_INFO, PARAMETER_KEYS, parameterValue, type MaterialParameters, type ParameterKey } from "./parameters";
+import {
+  MODEL_PARAMETERS,
+  PARAMETER_INFO,
+  PARAMETER_KEYS,
+  parameterValue,
+  type MaterialParameters,
+  type ParameterKey,
+} from "./parameters";
 
 /** Which lab test set each parameter came from, e.g. {"c": 12, "phi": 12, "gamma": 14}. */
 export type ParameterSources = Partial<Record<ParameterKey, number>>;
@@ -13,7 +20,12 @@ export function kindsThatFeed(key: ParameterKey): LabTestKind[] {
  * The sources after an edit: a parameter keeps its source only while its value is unchanged (a
  * value typed over a derived one no longer comes from the lab), and `given` sets new ones.
  */
-export function mergeSources(before: MaterialParameters, beforeSources: ParameterSources, after: MaterialParameters, given: ParameterSources = {}): ParameterSources {
+export function mergeSources(
+  before: MaterialParameters,
+  beforeSources: ParameterSources,
+  after: MaterialParameters,
+  given: ParameterSources = {},
+): ParameterSources {
   const out: ParameterSources = {};
   for (const key of PARAMETER_KEYS) {
     const now = parameterValue(after, key);
@@ -36,7 +48,12 @@ export interface SourceCandidate {
  * project, belong to this material (or to none yet) and be of a kind that yields that parameter.
  * @returns field errors keyed `sources.<parameter>`, empty when all hold.
  */
-export function checkSources(materialId: number, parameters: MaterialParameters, given: ParameterSources, sets: ReadonlyMap<number, SourceCandidate>): Record<string, string[]> {
+export function checkSources(
+  materialId: number,
+  parameters: MaterialParameters,
+  given: ParameterSources,
+  sets: ReadonlyMap<number, SourceCandidate>,
+): Record<string, string[]> {
   const fields: Record<string, string[]> = {};
   const add = (key: string, message: string) => (fields[`sources.${key}`] ??= []).push(message);
   for (const [key, setId] of Object.entries(given) as [ParameterKey, number][]) {
@@ -47,8 +64,10 @@ export function checkSources(materialId: number, parameters: MaterialParameters,
     }
     const set = sets.get(setId);
     if (!set) add(key, `Lab test set ${setId} was not found in this project.`);
-    else if (set.materialId !== null && set.materialId !== materialId) add(key, `Lab test set ${setId} belongs to another material.`);
-    else if (!LAB_KIND_INFO[set.kind].feeds.includes(key)) add(key, `A ${LAB_KIND_INFO[set.kind].label.toLowerCase()} set does not give ${info.symbol}.`);
+    else if (set.materialId !== null && set.materialId !== materialId)
+      add(key, `Lab test set ${setId} belongs to another material.`);
+    else if (!LAB_KIND_INFO[set.kind].feeds.includes(key))
+      add(key, `A ${LAB_KIND_INFO[set.kind].label.toLowerCase()} set does not give ${info.symbol}.`);
   }
   return fields;
 }
@@ -84,10 +103,27 @@ export function suggestedValues(record: LabTestRecord): SuggestedValues[] {
     case "undrained": {
       const r = record.result;
       if (r.model === "constant") return [{ label: "su", values: { su: tidy(round(r.su, 0.1), 1) } }];
-      return [{ label: "su with depth", values: { su: tidy(round(r.su, 0.1), 1), suGradient: tidy(Math.max(0, r.suGradient), 2), suDatum: tidy(r.suDatum, 2) } }];
+      return [
+        {
+          label: "su with depth",
+          values: {
+            su: tidy(round(r.su, 0.1), 1),
+            suGradient: tidy(Math.max(0, r.suGradient), 2),
+            suDatum: tidy(r.suDatum, 2),
+          },
+        },
+      ];
     }
     case "compaction":
-      return [{ label: "γ and γsat", values: { gamma: tidy(round(record.result.unitWeight, 0.1), 1), gammaSat: tidy(round(record.result.saturatedUnitWeight, 0.1), 1) } }];
+      return [
+        {
+          label: "γ and γsat",
+          values: {
+            gamma: tidy(round(record.result.unitWeight, 0.1), 1),
+            gammaSat: tidy(round(record.result.saturatedUnitWeight, 0.1), 1),
+          },
+        },
+      ];
     case "atterberg":
       return [];
   }

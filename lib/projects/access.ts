@@ -14,7 +14,11 @@ export interface ProjectAccess {
  * A project the user may not see answers 404, so its existence is not disclosed; a visible
  * project where the role falls short answers 403.
  */
-export async function requireProjectAccess(user: SessionUser, projectId: number, action: Action): Promise<ProjectAccess> {
+export async function requireProjectAccess(
+  user: SessionUser,
+  projectId: number,
+  action: Action,
+): Promise<ProjectAccess> {
   const project = await fetchProjectById(projectId);
   if (!project || project.organisationId !== user.organisationId) throw notFound("The project");
   const role = effectiveProjectRole(user.role, await fetchMemberRole(projectId, user.id));

@@ -58,19 +58,32 @@ const m2 = (v: number) => v.toFixed(2);
 
 function radiiText(r: Radii | undefined): string {
   if (!r) return "—";
-  return "tangentY1" in r ? `${r.n} tangent levels from ${m2(r.tangentY1)} m to ${m2(r.tangentY2)} m` : `${r.n} radii from ${m2(r.r1)} m to ${m2(r.r2)} m`;
+  return "tangentY1" in r
+    ? `${r.n} tangent levels from ${m2(r.tangentY1)} m to ${m2(r.tangentY2)} m`
+    : `${r.n} radii from ${m2(r.r1)} m to ${m2(r.r2)} m`;
 }
 
 function writeStatus(w: ReportWriter, input: ReportInput): void {
   const { run, review } = input;
   if (run.status === "approved") {
     const note = review.reviewNote ? ` Reviewer's note: ${review.reviewNote}` : "";
-    w.box(`Review status: SIGNED OFF by ${review.reviewedByName ?? "—"} on ${day(review.reviewedAt)}`, `Submitted by ${review.submittedByName ?? "—"} on ${day(review.submittedAt)}.${note}`, MOSS);
+    w.box(
+      `Review status: SIGNED OFF by ${review.reviewedByName ?? "—"} on ${day(review.reviewedAt)}`,
+      `Submitted by ${review.submittedByName ?? "—"} on ${day(review.submittedAt)}.${note}`,
+      MOSS,
+    );
   } else {
-    const detail = run.status === "returned"
-      ? `Returned by ${review.reviewedByName ?? "—"} on ${day(review.reviewedAt)}: ${review.reviewNote ?? ""}`
-      : run.status === "submitted" ? `Submitted by ${review.submittedByName ?? "—"} on ${day(review.submittedAt)}; no reviewer has decided yet.` : "Not yet submitted for review.";
-    w.box(`Review status: NOT SIGNED OFF (${STATUS_WORDS[run.status]})`, `${detail} This report must not be relied on as a checked calculation.`, ALARM);
+    const detail =
+      run.status === "returned"
+        ? `Returned by ${review.reviewedByName ?? "—"} on ${day(review.reviewedAt)}: ${review.reviewNote ?? ""}`
+        : run.status === "submitted"
+          ? `Submitted by ${review.submittedByName ?? "—"} on ${day(review.submittedAt)}; no reviewer has decided yet.`
+          : "Not yet submitted for review.";
+    w.box(
+      `Review status: NOT SIGNED OFF (${STATUS_WORDS[run.status]})`,
+      `${detail} This report must not be relied on as a checked calculation.`,
+      ALARM,
+    );
   }
 }
 
@@ -84,19 +97,32 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
     ["Section", `${run.sectionName}, version ${run.sectionVersion}`],
     ["Run", `${run.title} (run ${run.id})${run.revisesRunId ? `, revising run ${run.revisesRunId}` : ""}`],
     ["Analysed by", `${run.authorName}, ${day(run.createdAt)}, engine ${run.engineVersion}`],
-    ["Loading condition", `${condition?.label ?? run.loadingCondition} (engine case: ${run.result.case}), ${run.face} face`],
-    ["Required FS", `${run.requiredFs.toFixed(2)}${condition ? ` — default from ${condition.basis}; the project may have set its own value` : ""}`],
+    [
+      "Loading condition",
+      `${condition?.label ?? run.loadingCondition} (engine case: ${run.result.case}), ${run.face} face`,
+    ],
+    [
+      "Required FS",
+      `${run.requiredFs.toFixed(2)}${condition ? ` — default from ${condition.basis}; the project may have set its own value` : ""}`,
+    ],
   ]);
   w.heading("Water conditions");
   const water = doc.water;
   const rows: [string, string][] = [];
   if (water?.phreatic?.length) {
     const ys = water.phreatic.map((p) => p[1]);
-    rows.push(["Phreatic line", `${water.phreatic.length} points, x ${m2(water.phreatic[0][0])} to ${m2(water.phreatic.at(-1)![0])} m, elevation ${m2(Math.min(...ys))} to ${m2(Math.max(...ys))} m`]);
+    rows.push([
+      "Phreatic line",
+      `${water.phreatic.length} points, x ${m2(water.phreatic[0][0])} to ${m2(water.phreatic.at(-1)![0])} m, elevation ${m2(Math.min(...ys))} to ${m2(Math.max(...ys))} m`,
+    ]);
     if (water.cos2Correction) rows.push(["Pore pressure", "phreatic head reduced by cos² of the line's slope"]);
   }
   if (water?.ru !== undefined) rows.push(["Pore-pressure ratio ru", String(water.ru)]);
-  if (doc.analysis?.drawdown) rows.push(["Drawdown", `pool from ${m2(doc.analysis.drawdown.from)} m to ${m2(doc.analysis.drawdown.to)} m (${doc.analysis.drawdown.method ?? "effective"} method)`]);
+  if (doc.analysis?.drawdown)
+    rows.push([
+      "Drawdown",
+      `pool from ${m2(doc.analysis.drawdown.from)} m to ${m2(doc.analysis.drawdown.to)} m (${doc.analysis.drawdown.method ?? "effective"} method)`,
+    ]);
   rows.push(["Unit weight of water", `${(water?.gammaW ?? 9.81).toFixed(2)} kN/m³`]);
   if (!water?.phreatic?.length && water?.ru === undefined) rows.unshift(["Water", "dry: no phreatic line and no ru"]);
   w.keyValues(rows);
@@ -104,12 +130,25 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
   w.heading("Method and search settings");
   const g = doc.analysis?.grid;
   w.keyValues([
-    ["Methods", run.result.methods.map((m) => (m === "fellenius" ? `${METHOD_NAME[m]} (${ordinaryFormText(run.result.ordinaryForm)})` : METHOD_NAME[m])).join("; ")],
+    [
+      "Methods",
+      run.result.methods
+        .map((m) =>
+          m === "fellenius" ? `${METHOD_NAME[m]} (${ordinaryFormText(run.result.ordinaryForm)})` : METHOD_NAME[m],
+        )
+        .join("; "),
+    ],
     ["Slices", String(setup?.slices ?? doc.analysis?.slices ?? "—")],
-    ["Grid of centres", g ? `(${m2(g.x1)}, ${m2(g.y1)}) to (${m2(g.x2)}, ${m2(g.y2)}) m, ${g.nx} × ${g.ny} centres` : "—"],
+    [
+      "Grid of centres",
+      g ? `(${m2(g.x1)}, ${m2(g.y1)}) to (${m2(g.x2)}, ${m2(g.y2)}) m, ${g.nx} × ${g.ny} centres` : "—",
+    ],
     ["Radii", radiiText(doc.analysis?.radii)],
     ["Refinement", doc.analysis?.refine ? "finer nested grids around the best centres" : "none"],
-    ["Circles", `${run.result.circles.tried.toLocaleString("en-GB")} tried, ${run.result.circles.valid.toLocaleString("en-GB")} valid`],
+    [
+      "Circles",
+      `${run.result.circles.tried.toLocaleString("en-GB")} tried, ${run.result.circles.valid.toLocaleString("en-GB")} valid`,
+    ],
     ...rejectionList(run.result.circles.rejected).map((r): [string, string] => ["Rejected", `${r.count} — ${r.text}`]),
   ]);
 }
@@ -121,50 +160,98 @@ function writeResults(w: ReportWriter, input: ReportInput): void {
     const r = run.result.results[m];
     const fs = m === "bishop" ? run.fsBishop : run.fsFellenius;
     return [
-      METHOD_NAME[m], formatFs(fs), run.requiredFs.toFixed(2), verdictWords(verdictOf(fs, run.requiredFs), run.requiredFs),
+      METHOD_NAME[m],
+      formatFs(fs),
+      run.requiredFs.toFixed(2),
+      verdictWords(verdictOf(fs, run.requiredFs), run.requiredFs),
       r ? `(${m2(r.circle.xc)}, ${m2(r.circle.yc)}) m, R ${m2(r.circle.r)} m` : "—",
       r ? `${m2(r.entry[0])} to ${m2(r.exit[0])} m` : "—",
     ];
   });
   w.table(
     [
-      { header: "Method", width: 120 }, { header: "FS", width: 40, align: "right" }, { header: "Required", width: 45, align: "right" },
-      { header: "Verdict", width: 110 }, { header: "Critical circle", width: 120 }, { header: "Slip from x", width: w.width - 435 },
+      { header: "Method", width: 120 },
+      { header: "FS", width: 40, align: "right" },
+      { header: "Required", width: 45, align: "right" },
+      { header: "Verdict", width: 110 },
+      { header: "Critical circle", width: 120 },
+      { header: "Slip from x", width: w.width - 435 },
     ],
     rows,
     8.5,
   );
   w.ensure(360);
   w.heading("Section with the critical circles");
-  drawSection(w, { document: run.document, critical: run.result.results, grid: run.document.analysis?.grid, drawdownTo: run.document.analysis?.drawdown?.to });
-  w.paragraph("Regions filled by material; blue line: phreatic surface; dotted blue: pool after drawdown; dashed grey rectangle: grid of trial centres; bold arcs: critical slip surfaces with their centres marked.", { size: 7.5, color: SOFT });
+  drawSection(w, {
+    document: run.document,
+    critical: run.result.results,
+    grid: run.document.analysis?.grid,
+    drawdownTo: run.document.analysis?.drawdown?.to,
+  });
+  w.paragraph(
+    "Regions filled by material; blue line: phreatic surface; dotted blue: pool after drawdown; dashed grey rectangle: grid of trial centres; bold arcs: critical slip surfaces with their centres marked.",
+    { size: 7.5, color: SOFT },
+  );
   w.heading("Warnings");
   const warnings = describeWarnings(run.result.warnings);
   if (warnings.length === 0) w.paragraph("The engine raised no warning for this search.");
-  for (const wn of warnings) w.paragraph(`${wn.weight === "check" ? "CHECK" : "Note"}: ${wn.headline}${wn.action ? ` ${wn.action}` : ""}${wn.detail ? ` (${wn.detail})` : ""}`, { color: wn.weight === "check" ? ALARM : INK });
+  for (const wn of warnings)
+    w.paragraph(
+      `${wn.weight === "check" ? "CHECK" : "Note"}: ${wn.headline}${wn.action ? ` ${wn.action}` : ""}${wn.detail ? ` (${wn.detail})` : ""}`,
+      { color: wn.weight === "check" ? ALARM : INK },
+    );
 }
 
 function writeMaterials(w: ReportWriter, input: ReportInput): void {
   w.heading("Materials and where their values come from");
-  if (!input.sourcesFrozen) w.paragraph("Sources read from the project's library now; they are frozen with the run when it is submitted for review.", { size: 8, color: SOFT });
+  if (!input.sourcesFrozen)
+    w.paragraph(
+      "Sources read from the project's library now; they are frozen with the run when it is submitted for review.",
+      { size: 8, color: SOFT },
+    );
   const rows: string[][] = [];
   for (const m of input.materials) {
-    m.parameters.forEach((p, i) => rows.push([i === 0 ? `${m.name} (${m.key})` : "", i === 0 ? m.model : "", `${p.symbol} = ${p.value} ${p.unit}`, p.source ?? (m.inLibrary ? "typed value, no lab set" : "not in the library: value of the section")]));
+    m.parameters.forEach((p, i) =>
+      rows.push([
+        i === 0 ? `${m.name} (${m.key})` : "",
+        i === 0 ? m.model : "",
+        `${p.symbol} = ${p.value} ${p.unit}`,
+        p.source ?? (m.inLibrary ? "typed value, no lab set" : "not in the library: value of the section"),
+      ]),
+    );
     if (m.notes) rows.push(["", "", "Notes", m.notes]);
   }
-  w.table([{ header: "Material", width: 130 }, { header: "Model", width: 70 }, { header: "Value", width: 95 }, { header: "Source", width: w.width - 295 }], rows, 8);
+  w.table(
+    [
+      { header: "Material", width: 130 },
+      { header: "Model", width: 70 },
+      { header: "Value", width: 95 },
+      { header: "Source", width: w.width - 295 },
+    ],
+    rows,
+    8,
+  );
 }
 
 function writeReview(w: ReportWriter, input: ReportInput): void {
   w.heading("Review checklist");
   w.table(
-    [{ header: "Item", width: 170 }, { header: "State", width: 60 }, { header: "Note", width: w.width - 230 }],
-    fullChecklist(input.checklist).map((c) => [c.label, c.state === "ok" ? "confirmed" : c.state === "concern" ? "CONCERN" : "open", c.note]),
+    [
+      { header: "Item", width: 170 },
+      { header: "State", width: 60 },
+      { header: "Note", width: w.width - 230 },
+    ],
+    fullChecklist(input.checklist).map((c) => [
+      c.label,
+      c.state === "ok" ? "confirmed" : c.state === "concern" ? "CONCERN" : "open",
+      c.note,
+    ]),
     8,
   );
   w.heading("Review comments");
   if (input.comments.length === 0) w.paragraph("No comments.");
-  for (const c of input.comments) w.paragraph(`${c.label} — ${c.authorName}, ${day(c.createdAt)}: ${c.body}`, { size: 8.5 });
+  for (const c of input.comments)
+    w.paragraph(`${c.label} — ${c.authorName}, ${day(c.createdAt)}: ${c.body}`, { size: 8.5 });
 }
 
 export async function buildRunReport(input: ReportInput): Promise<Uint8Array> {
@@ -182,5 +269,8 @@ export async function buildRunReport(input: ReportInput): Promise<Uint8Array> {
   writeMaterials(w, input);
   writeReview(w, input);
   writeSliceTable(w, run.sliceTables, run.result.methods);
-  return w.finish(`Scarpline calculation report — run ${run.id}, ${STATUS_WORDS[run.status]} — ${input.projectName}`, `Caution: ${CAUTION_TEXT}`);
+  return w.finish(
+    `Scarpline calculation report — run ${run.id}, ${STATUS_WORDS[run.status]} — ${input.projectName}`,
+    `Caution: ${CAUTION_TEXT}`,
+  );
 }

@@ -8,11 +8,20 @@ import type { ReportInput } from "./build-report";
 
 /** Everything the report of one run shows, read from the database. */
 export async function gatherReport(run: RunDetail, projectName: string, generatedBy: string): Promise<ReportInput> {
-  const [review, checklist, comments] = await Promise.all([fetchReviewRecord(run.id), fetchChecklist(run.id), fetchRunComments(run.id)]);
+  const [review, checklist, comments] = await Promise.all([
+    fetchReviewRecord(run.id),
+    fetchChecklist(run.id),
+    fetchRunComments(run.id),
+  ]);
   const frozen = review?.materialSources ?? null;
   return {
     projectName,
-    run: { ...run, document: run.document as SectionDocument, result: run.result as ReportInput["run"]["result"], sliceTables: run.sliceTables as ReportInput["run"]["sliceTables"] },
+    run: {
+      ...run,
+      document: run.document as SectionDocument,
+      result: run.result as ReportInput["run"]["result"],
+      sliceTables: run.sliceTables as ReportInput["run"]["sliceTables"],
+    },
     review: {
       submittedByName: review?.submittedByName ?? null,
       submittedAt: review?.submittedAt ?? null,
@@ -21,7 +30,12 @@ export async function gatherReport(run: RunDetail, projectName: string, generate
       reviewNote: review?.reviewNote ?? null,
     },
     checklist,
-    comments: comments.map((c, i) => ({ label: commentLabel(c, i), authorName: c.authorName, body: c.body, createdAt: c.createdAt })),
+    comments: comments.map((c, i) => ({
+      label: commentLabel(c, i),
+      authorName: c.authorName,
+      body: c.body,
+      createdAt: c.createdAt,
+    })),
     materials: frozen ?? (await collectMaterialSources(run.projectId, run.document as SectionDocument)),
     sourcesFrozen: frozen !== null,
     generatedAt: new Date().toISOString(),

@@ -5,8 +5,26 @@
 import type { PDFFont } from "pdf-lib";
 
 const SPELT: Record<string, string> = {
-  "φ": "phi", "γ": "gamma", "α": "alpha", "σ": "sigma", "τ": "tau", "Σ": "Sum ", "θ": "theta", "β": "beta", "Δ": "Delta ",
-  "′": "'", "″": "\"", "≥": ">=", "≤": "<=", "−": "-", "✓": "ok", "✕": "x", "→": "->", "←": "<-", "≈": "~", "ᵣ": "r",
+  φ: "phi",
+  γ: "gamma",
+  α: "alpha",
+  σ: "sigma",
+  τ: "tau",
+  Σ: "Sum ",
+  θ: "theta",
+  β: "beta",
+  Δ: "Delta ",
+  "′": "'",
+  "″": '"',
+  "≥": ">=",
+  "≤": "<=",
+  "−": "-",
+  "✓": "ok",
+  "✕": "x",
+  "→": "->",
+  "←": "<-",
+  "≈": "~",
+  ᵣ: "r",
 };
 
 // Code points WinAnsi holds beyond Latin-1's printable range.
@@ -37,13 +55,19 @@ export function wrapText(text: string, font: PDFFont, size: number, width: numbe
     while (!fits(word)) {
       let cut = word.length - 1;
       while (cut > 1 && !fits(word.slice(0, cut))) cut--;
-      if (line) { lines.push(line); line = ""; }
+      if (line) {
+        lines.push(line);
+        line = "";
+      }
       lines.push(word.slice(0, cut));
       word = word.slice(cut);
     }
     const next = line ? `${line} ${word}` : word;
     if (fits(next)) line = next;
-    else { lines.push(line); line = word; }
+    else {
+      lines.push(line);
+      line = word;
+    }
   }
   if (line) lines.push(line);
   return lines.length ? lines : [""];

@@ -25,20 +25,32 @@ export interface TableColumn {
 export class ReportWriter {
   page!: PDFPage;
   y = 0;
-  private constructor(readonly doc: PDFDocument, readonly regular: PDFFont, readonly bold: PDFFont) {}
+  private constructor(
+    readonly doc: PDFDocument,
+    readonly regular: PDFFont,
+    readonly bold: PDFFont,
+  ) {}
 
   static async create(title: string): Promise<ReportWriter> {
     const doc = await PDFDocument.create();
     doc.setTitle(pdfSafe(title));
     doc.setCreator("Scarpline");
     doc.setProducer("Scarpline calculation report (pdf-lib)");
-    const w = new ReportWriter(doc, await doc.embedFont(StandardFonts.Helvetica), await doc.embedFont(StandardFonts.HelveticaBold));
+    const w = new ReportWriter(
+      doc,
+      await doc.embedFont(StandardFonts.Helvetica),
+      await doc.embedFont(StandardFonts.HelveticaBold),
+    );
     w.newPage();
     return w;
   }
 
-  get left(): number { return MARGIN; }
-  get width(): number { return this.page.getWidth() - 2 * MARGIN; }
+  get left(): number {
+    return MARGIN;
+  }
+  get width(): number {
+    return this.page.getWidth() - 2 * MARGIN;
+  }
 
   newPage(size: [number, number] = A4): void {
     this.page = this.doc.addPage(size);
@@ -51,7 +63,13 @@ export class ReportWriter {
   }
 
   text(s: string, x: number, y: number, size: number, opts: { bold?: boolean; color?: RGB } = {}): void {
-    this.page.drawText(pdfSafe(s), { x, y, size, font: opts.bold ? this.bold : this.regular, color: opts.color ?? INK });
+    this.page.drawText(pdfSafe(s), {
+      x,
+      y,
+      size,
+      font: opts.bold ? this.bold : this.regular,
+      color: opts.color ?? INK,
+    });
   }
 
   heading(s: string, size = 12): void {
@@ -59,7 +77,12 @@ export class ReportWriter {
     this.y -= 10;
     this.text(s, this.left, this.y - size, size, { bold: true });
     this.y -= size + 4;
-    this.page.drawLine({ start: { x: this.left, y: this.y }, end: { x: this.left + this.width, y: this.y }, thickness: 0.5, color: RULE });
+    this.page.drawLine({
+      start: { x: this.left, y: this.y },
+      end: { x: this.left + this.width, y: this.y },
+      thickness: 0.5,
+      color: RULE,
+    });
     this.y -= 6;
   }
 
@@ -97,7 +120,14 @@ export class ReportWriter {
     const height = 20 + lines.length * (size + 3) + 6;
     this.ensure(height + 6);
     const top = this.y - 4;
-    this.page.drawRectangle({ x: this.left, y: top - height, width: this.width, height, borderColor: color, borderWidth: 1.2 });
+    this.page.drawRectangle({
+      x: this.left,
+      y: top - height,
+      width: this.width,
+      height,
+      borderColor: color,
+      borderWidth: 1.2,
+    });
     this.text(title, this.left + 8, top - 15, 10, { bold: true, color });
     let y = top - 20;
     for (const line of lines) {
@@ -125,7 +155,12 @@ export class ReportWriter {
         x += c.width;
       }
       this.y -= rowHeight + (headerLines - 1) * (size + 2);
-      this.page.drawLine({ start: { x: this.left, y: this.y + 2 }, end: { x: this.left + columns.reduce((s, c) => s + c.width, 0), y: this.y + 2 }, thickness: 0.5, color: RULE });
+      this.page.drawLine({
+        start: { x: this.left, y: this.y + 2 },
+        end: { x: this.left + columns.reduce((s, c) => s + c.width, 0), y: this.y + 2 },
+        thickness: 0.5,
+        color: RULE,
+      });
     };
     drawHeader();
     for (const row of rows) {
@@ -155,11 +190,34 @@ export class ReportWriter {
     const pages = this.doc.getPages();
     pages.forEach((p, i) => {
       const w = p.getWidth();
-      p.drawLine({ start: { x: MARGIN, y: MARGIN + 14 }, end: { x: w - MARGIN, y: MARGIN + 14 }, thickness: 0.4, color: RULE });
-      p.drawText(clipText(caution, this.regular, 6.5, w - 2 * MARGIN), { x: MARGIN, y: MARGIN + 4, size: 6.5, font: this.regular, color: SOFT });
+      p.drawLine({
+        start: { x: MARGIN, y: MARGIN + 14 },
+        end: { x: w - MARGIN, y: MARGIN + 14 },
+        thickness: 0.4,
+        color: RULE,
+      });
+      p.drawText(clipText(caution, this.regular, 6.5, w - 2 * MARGIN), {
+        x: MARGIN,
+        y: MARGIN + 4,
+        size: 6.5,
+        font: this.regular,
+        color: SOFT,
+      });
       const right = `page ${i + 1} of ${pages.length}`;
-      p.drawText(clipText(footer, this.regular, 7, w - 2 * MARGIN - 70), { x: MARGIN, y: MARGIN - 6, size: 7, font: this.regular, color: SOFT });
-      p.drawText(right, { x: w - MARGIN - this.regular.widthOfTextAtSize(right, 7), y: MARGIN - 6, size: 7, font: this.regular, color: SOFT });
+      p.drawText(clipText(footer, this.regular, 7, w - 2 * MARGIN - 70), {
+        x: MARGIN,
+        y: MARGIN - 6,
+        size: 7,
+        font: this.regular,
+        color: SOFT,
+      });
+      p.drawText(right, {
+        x: w - MARGIN - this.regular.widthOfTextAtSize(right, 7),
+        y: MARGIN - 6,
+        size: 7,
+        font: this.regular,
+        color: SOFT,
+      });
     });
     return this.doc.save();
   }

@@ -29,8 +29,23 @@ export interface RunCsvRow {
 }
 
 const HEADERS = [
-  "Run", "Title", "Section", "Section version", "Loading condition", "Face", "Methods", "Required FS",
-  "FS Bishop", "FS ordinary", "Meets required FS", "Status", "Author", "Run at (UTC)", "Decided by", "Decided at (UTC)", "Revises run",
+  "Run",
+  "Title",
+  "Section",
+  "Section version",
+  "Loading condition",
+  "Face",
+  "Methods",
+  "Required FS",
+  "FS Bishop",
+  "FS ordinary",
+  "Meets required FS",
+  "Status",
+  "Author",
+  "Run at (UTC)",
+  "Decided by",
+  "Decided at (UTC)",
+  "Revises run",
 ];
 
 const fs3 = (v: number | null) => (v === null ? "" : v.toFixed(3));
@@ -43,13 +58,30 @@ function meets(r: RunCsvRow): string {
 
 /** CSV text with CRLF line ends and no byte-order mark. */
 export function runsToCsv(rows: readonly RunCsvRow[], projectName: string): string {
-  const out = [escapeCsvText(`# Caution: ${CAUTION_TEXT}`), escapeCsvText(`# Project: ${projectName.replace(/[\r\n]+/g, " ")}`), HEADERS.join(",")];
+  const out = [
+    escapeCsvText(`# Caution: ${CAUTION_TEXT}`),
+    escapeCsvText(`# Project: ${projectName.replace(/[\r\n]+/g, " ")}`),
+    HEADERS.join(","),
+  ];
   for (const r of rows) {
     const text = [
-      String(r.id), r.title, r.sectionName, String(r.sectionVersion),
+      String(r.id),
+      r.title,
+      r.sectionName,
+      String(r.sectionVersion),
       LOADING_CONDITIONS.find((c) => c.key === r.loadingCondition)?.label ?? r.loadingCondition,
-      r.face, r.methods.join(" "), r.requiredFs.toFixed(2), fs3(r.fsBishop), fs3(r.fsFellenius), meets(r),
-      STATUS_WORDS[r.status], r.authorName, r.createdAt, r.reviewedByName ?? "", r.reviewedAt ?? "", r.revisesRunId ? String(r.revisesRunId) : "",
+      r.face,
+      r.methods.join(" "),
+      r.requiredFs.toFixed(2),
+      fs3(r.fsBishop),
+      fs3(r.fsFellenius),
+      meets(r),
+      STATUS_WORDS[r.status],
+      r.authorName,
+      r.createdAt,
+      r.reviewedByName ?? "",
+      r.reviewedAt ?? "",
+      r.revisesRunId ? String(r.revisesRunId) : "",
     ];
     out.push(text.map(escapeCsvText).join(","));
   }

@@ -30,14 +30,30 @@ function hexToRgb(hex: string): RGB {
   return rgb(((n >> 16) & 255) / 255, ((n >> 8) & 255) / 255, (n & 255) / 255);
 }
 
-interface Bounds { x0: number; x1: number; y0: number; y1: number }
+interface Bounds {
+  x0: number;
+  x1: number;
+  y0: number;
+  y1: number;
+}
 
 function boundsOf(input: DrawingInput): Bounds {
   const xs: number[] = [];
   const ys: number[] = [];
-  for (const r of input.document.regions) for (const [x, y] of r.points) { xs.push(x); ys.push(y); }
-  if (input.grid) { xs.push(input.grid.x1, input.grid.x2); ys.push(input.grid.y1, input.grid.y2); }
-  for (const c of Object.values(input.critical)) if (c) { xs.push(c.circle.xc); ys.push(c.circle.yc); }
+  for (const r of input.document.regions)
+    for (const [x, y] of r.points) {
+      xs.push(x);
+      ys.push(y);
+    }
+  if (input.grid) {
+    xs.push(input.grid.x1, input.grid.x2);
+    ys.push(input.grid.y1, input.grid.y2);
+  }
+  for (const c of Object.values(input.critical))
+    if (c) {
+      xs.push(c.circle.xc);
+      ys.push(c.circle.yc);
+    }
   return { x0: Math.min(...xs), x1: Math.max(...xs), y0: Math.min(...ys), y1: Math.max(...ys) };
 }
 
@@ -61,16 +77,43 @@ export function drawSection(w: ReportWriter, input: DrawingInput, height = 300):
 
   const colors = Object.fromEntries(materialPalette(input.document.materials).map((m) => [m.key, m.color]));
   for (const r of input.document.regions) {
-    page.drawSvgPath(path(r.points, true), { ...at, color: hexToRgb(colors[r.material] ?? "#cccccc"), opacity: 0.6, borderColor: INK, borderWidth: 0.5 });
+    page.drawSvgPath(path(r.points, true), {
+      ...at,
+      color: hexToRgb(colors[r.material] ?? "#cccccc"),
+      opacity: 0.6,
+      borderColor: INK,
+      borderWidth: 0.5,
+    });
   }
   const phreatic = input.document.water?.phreatic;
-  if (phreatic && phreatic.length >= 2) page.drawSvgPath(path(phreatic, false), { ...at, borderColor: WATER, borderWidth: 1.2 });
+  if (phreatic && phreatic.length >= 2)
+    page.drawSvgPath(path(phreatic, false), { ...at, borderColor: WATER, borderWidth: 1.2 });
   if (input.drawdownTo !== undefined) {
-    page.drawSvgPath(path([[b.x0, input.drawdownTo], [b.x1, input.drawdownTo]], false), { ...at, borderColor: WATER, borderWidth: 0.8, borderDashArray: [2, 2] });
+    page.drawSvgPath(
+      path(
+        [
+          [b.x0, input.drawdownTo],
+          [b.x1, input.drawdownTo],
+        ],
+        false,
+      ),
+      { ...at, borderColor: WATER, borderWidth: 0.8, borderDashArray: [2, 2] },
+    );
   }
   if (input.grid) {
     const g = input.grid;
-    page.drawSvgPath(path([[g.x1, g.y1], [g.x2, g.y1], [g.x2, g.y2], [g.x1, g.y2]], true), { ...at, borderColor: SOFT, borderWidth: 0.5, borderDashArray: [3, 2] });
+    page.drawSvgPath(
+      path(
+        [
+          [g.x1, g.y1],
+          [g.x2, g.y1],
+          [g.x2, g.y2],
+          [g.x1, g.y2],
+        ],
+        true,
+      ),
+      { ...at, borderColor: SOFT, borderWidth: 0.5, borderDashArray: [3, 2] },
+    );
   }
   for (const m of ["fellenius", "bishop"] as const) {
     const c = input.critical[m];
@@ -79,10 +122,22 @@ export function drawSection(w: ReportWriter, input: DrawingInput, height = 300):
     const flat = arcPoints(c.circle, c.entry, c.exit, 1);
     const pts: [number, number][] = [];
     for (let i = 0; i + 1 < flat.length; i += 2) pts.push([flat[i], flat[i + 1]]);
-    page.drawSvgPath(path(pts, false), { ...at, borderColor: style.color, borderWidth: 1.8, borderDashArray: style.dash });
-    const cx = sx(c.circle.xc), cy = sy(c.circle.yc);
-    page.drawSvgPath(`M${cx - 3},${cy} L${cx + 3},${cy} M${cx},${cy - 3} L${cx},${cy + 3}`, { ...at, borderColor: style.color, borderWidth: 0.8 });
-    w.text(`${style.label} FS ${c.fs.toFixed(3)}`, originX + cx + 5, originY - cy + (m === "bishop" ? 2 : -9), 7, { color: style.color });
+    page.drawSvgPath(path(pts, false), {
+      ...at,
+      borderColor: style.color,
+      borderWidth: 1.8,
+      borderDashArray: style.dash,
+    });
+    const cx = sx(c.circle.xc),
+      cy = sy(c.circle.yc);
+    page.drawSvgPath(`M${cx - 3},${cy} L${cx + 3},${cy} M${cx},${cy - 3} L${cx},${cy + 3}`, {
+      ...at,
+      borderColor: style.color,
+      borderWidth: 0.8,
+    });
+    w.text(`${style.label} FS ${c.fs.toFixed(3)}`, originX + cx + 5, originY - cy + (m === "bishop" ? 2 : -9), 7, {
+      color: style.color,
+    });
   }
   drawAxes(w, b, { originX, originY, scale, sx, sy, boxH });
   w.y = top - height - 4;
@@ -91,7 +146,14 @@ export function drawSection(w: ReportWriter, input: DrawingInput, height = 300):
 function drawAxes(
   w: ReportWriter,
   b: Bounds,
-  t: { originX: number; originY: number; scale: number; sx: (x: number) => number; sy: (y: number) => number; boxH: number },
+  t: {
+    originX: number;
+    originY: number;
+    scale: number;
+    sx: (x: number) => number;
+    sy: (y: number) => number;
+    boxH: number;
+  },
 ): void {
   const page = w.page;
   const baseY = t.originY - t.boxH - 4;

@@ -6,19 +6,31 @@ import { A4_LANDSCAPE, SOFT, type ReportWriter } from "./report-writer";
 
 type Method = "bishop" | "fellenius";
 
-export function writeSliceTable(w: ReportWriter, tables: Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>, methods: readonly Method[]): void {
+export function writeSliceTable(
+  w: ReportWriter,
+  tables: Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>,
+  methods: readonly Method[],
+): void {
   for (const method of methods) {
     const table = tables[method];
     if (!table) continue;
     w.newPage(A4_LANDSCAPE);
     w.heading(`Slices of the critical circle — ${METHOD_NAME[method]}`);
-    w.paragraph("Lengths m, forces kN per metre run, pressures kPa, angles degrees. Slices numbered from the first slice of the slip mass.", { size: 7.5, color: SOFT });
-    if (method === "bishop" && table.minMAlpha !== null) w.paragraph(`Smallest m-alpha on this circle: ${table.minMAlpha.toFixed(3)}.`, { size: 7.5, color: SOFT });
+    w.paragraph(
+      "Lengths m, forces kN per metre run, pressures kPa, angles degrees. Slices numbered from the first slice of the slip mass.",
+      { size: 7.5, color: SOFT },
+    );
+    if (method === "bishop" && table.minMAlpha !== null)
+      w.paragraph(`Smallest m-alpha on this circle: ${table.minMAlpha.toFixed(3)}.`, { size: 7.5, color: SOFT });
     const cols = sliceColumns(method);
     const widths = cols.map((c): number => (c.key === "material" ? 80 : c.key === "index" ? 30 : 0));
     const rest = (w.width - widths.reduce((s, v) => s + v, 0)) / widths.filter((v) => v === 0).length;
     w.table(
-      cols.map((c, i) => ({ header: c.unit ? `${c.label}\n(${c.unit})` : c.label, width: widths[i] || rest, align: c.decimals === null ? "left" as const : "right" as const })),
+      cols.map((c, i) => ({
+        header: c.unit ? `${c.label}\n(${c.unit})` : c.label,
+        width: widths[i] || rest,
+        align: c.decimals === null ? ("left" as const) : ("right" as const),
+      })),
       numberSlices(table.slices).map((s) => cols.map((c) => formatCell(c, c.value(s, method)))),
       7,
     );

@@ -18,11 +18,33 @@ export interface ChecklistItem {
 }
 
 export const CHECKLIST_ITEMS: readonly ChecklistItem[] = [
-  { key: "geometry", label: "Geometry matches the drawings", prompt: "Outline, crest and toe levels and layer boundaries agree with the issued drawings for this section version." },
-  { key: "strengths", label: "Strengths traced to lab results", prompt: "Each material's c′ and φ′ or su comes from a named lab test set or a stated design value." },
-  { key: "water", label: "Water conditions fit the load case", prompt: "Phreatic line, pool and drawdown levels are those of the loading condition checked." },
-  { key: "grid", label: "Grid not bounded by its edge", prompt: "The lowest FS lies inside the grid of trial centres and the radius range, not on their limits." },
-  { key: "fs", label: "FS against the required value", prompt: "Each method's FS is compared with the required FS for this loading condition, and the margin is acceptable." },
+  {
+    key: "geometry",
+    label: "Geometry matches the drawings",
+    prompt:
+      "Outline, crest and toe levels and layer boundaries agree with the issued drawings for this section version.",
+  },
+  {
+    key: "strengths",
+    label: "Strengths traced to lab results",
+    prompt: "Each material's c′ and φ′ or su comes from a named lab test set or a stated design value.",
+  },
+  {
+    key: "water",
+    label: "Water conditions fit the load case",
+    prompt: "Phreatic line, pool and drawdown levels are those of the loading condition checked.",
+  },
+  {
+    key: "grid",
+    label: "Grid not bounded by its edge",
+    prompt: "The lowest FS lies inside the grid of trial centres and the radius range, not on their limits.",
+  },
+  {
+    key: "fs",
+    label: "FS against the required value",
+    prompt:
+      "Each method's FS is compared with the required FS for this loading condition, and the margin is acceptable.",
+  },
 ];
 
 export interface ChecklistEntry {
@@ -37,7 +59,14 @@ export interface ChecklistEntry {
 export function fullChecklist(saved: readonly ChecklistEntry[]): (ChecklistItem & ChecklistEntry)[] {
   return CHECKLIST_ITEMS.map((item) => {
     const s = saved.find((e) => e.key === item.key);
-    return { ...item, key: item.key, state: s?.state ?? "open", note: s?.note ?? "", updatedByName: s?.updatedByName, updatedAt: s?.updatedAt };
+    return {
+      ...item,
+      key: item.key,
+      state: s?.state ?? "open",
+      note: s?.note ?? "",
+      updatedByName: s?.updatedByName,
+      updatedAt: s?.updatedAt,
+    };
   });
 }
 
@@ -63,9 +92,10 @@ const METHOD_LABEL = { bishop: "Bishop", fellenius: "Ordinary" } as const;
 /** What the run itself says about the grid and FS items. */
 export function checklistHints(input: HintInput): Partial<Record<ChecklistKey, ChecklistHint>> {
   const edge = input.warnings.filter((w) => EDGE_CODES.has(w.code));
-  const grid: ChecklistHint = edge.length > 0
-    ? { tone: "check", text: edge.map((w) => w.message).join(" ") }
-    : { tone: "good", text: "The search found its lowest FS inside the grid and the radius range." };
+  const grid: ChecklistHint =
+    edge.length > 0
+      ? { tone: "check", text: edge.map((w) => w.message).join(" ") }
+      : { tone: "good", text: "The search found its lowest FS inside the grid and the radius range." };
   const parts: string[] = [];
   let allPass = true;
   for (const m of ["bishop", "fellenius"] as const) {
@@ -75,8 +105,12 @@ export function checklistHints(input: HintInput): Partial<Record<ChecklistKey, C
     if (v !== "pass") allPass = false;
     parts.push(`${METHOD_LABEL[m]} ${fs.toFixed(3)} ${v === "pass" ? "≥" : "<"} ${input.requiredFs.toFixed(2)}`);
   }
-  const fs: ChecklistHint = parts.length === 0
-    ? { tone: "check", text: "No method gave a factor of safety." }
-    : { tone: allPass ? "good" : "check", text: `${parts.join("; ")}${allPass ? "" : " — below the required value"}.` };
+  const fs: ChecklistHint =
+    parts.length === 0
+      ? { tone: "check", text: "No method gave a factor of safety." }
+      : {
+          tone: allPass ? "good" : "check",
+          text: `${parts.join("; ")}${allPass ? "" : " — below the required value"}.`,
+        };
   return { grid, fs };
 }

@@ -39,7 +39,11 @@ export interface LabSetName {
   kind: LabTestKind;
 }
 
-export function buildMaterialSources(materials: readonly Material[], library: readonly LibraryEntry[], sets: readonly LabSetName[]): MaterialSourceRecord[] {
+export function buildMaterialSources(
+  materials: readonly Material[],
+  library: readonly LibraryEntry[],
+  sets: readonly LabSetName[],
+): MaterialSourceRecord[] {
   return materials.map((m) => {
     const lib = library.find((l) => l.key === m.id);
     const asParams = m as unknown as MaterialParameters;
@@ -56,6 +60,13 @@ export function buildMaterialSources(materials: readonly Material[], library: re
         source: set ? `${LAB_KIND_INFO[set.kind].label} set '${set.name}' (#${set.id})` : null,
       });
     }
-    return { key: m.id, name: m.name ?? lib?.name ?? m.id, model: m.model, notes: lib?.notes ?? "", inLibrary: Boolean(lib), parameters };
+    return {
+      key: m.id,
+      name: m.name ?? lib?.name ?? m.id,
+      model: m.model,
+      notes: lib?.notes ?? "",
+      inLibrary: Boolean(lib),
+      parameters,
+    };
   });
 }

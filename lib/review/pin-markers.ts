@@ -18,7 +18,10 @@ interface PinnedComment {
   slice: { number: number; method: "bishop" | "fellenius" } | null;
 }
 
-export function pinMarkers(comments: readonly PinnedComment[], tables: Partial<Record<"bishop" | "fellenius", { slices: readonly SliceRow[] }>>): PinMarker[] {
+export function pinMarkers(
+  comments: readonly PinnedComment[],
+  tables: Partial<Record<"bishop" | "fellenius", { slices: readonly SliceRow[] }>>,
+): PinMarker[] {
   const out: PinMarker[] = [];
   comments.forEach((c, i) => {
     if (c.pin) out.push({ n: i + 1, x: c.pin.x, y: c.pin.y, label: c.body });

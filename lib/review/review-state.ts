@@ -1,8 +1,22 @@
 import "server-only";
-import { fetchChecklist, fetchReviewRecord, fetchRunComments, fetchRunEvents, type ReviewRecord, type RunComment, type RunEvent } from "@/db/queries/review";
+import {
+  fetchChecklist,
+  fetchReviewRecord,
+  fetchRunComments,
+  fetchRunEvents,
+  type ReviewRecord,
+  type RunComment,
+  type RunEvent,
+} from "@/db/queries/review";
 import { fetchRevisionChain, type ChainLink, type RunDetail } from "@/db/queries/runs";
 import { availableActions, checkChecklistEdit, checkComment, checkDraftChange, type Actor } from "./rules";
-import { checklistHints, fullChecklist, type ChecklistHint, type ChecklistItem, type ChecklistEntry } from "./checklist";
+import {
+  checklistHints,
+  fullChecklist,
+  type ChecklistHint,
+  type ChecklistItem,
+  type ChecklistEntry,
+} from "./checklist";
 import type { TransitionAction } from "./status";
 
 /** What the run and review pages show about a run's review, and what this person may do. */
@@ -17,11 +31,19 @@ export interface ReviewState {
 
 export async function loadReviewState(run: RunDetail, actor: Actor): Promise<ReviewState> {
   const [record, saved, comments, events, chain] = await Promise.all([
-    fetchReviewRecord(run.id), fetchChecklist(run.id), fetchRunComments(run.id), fetchRunEvents(run.id), fetchRevisionChain(run.projectId, run.id),
+    fetchReviewRecord(run.id),
+    fetchChecklist(run.id),
+    fetchRunComments(run.id),
+    fetchRunEvents(run.id),
+    fetchRevisionChain(run.projectId, run.id),
   ]);
   const facts = { status: run.status, authorId: run.authorId };
   const result = run.result as { warnings?: { code: string; message: string }[] };
-  const hints = checklistHints({ warnings: result.warnings ?? [], fs: { bishop: run.fsBishop, fellenius: run.fsFellenius }, requiredFs: run.requiredFs });
+  const hints = checklistHints({
+    warnings: result.warnings ?? [],
+    fs: { bishop: run.fsBishop, fellenius: run.fsFellenius },
+    requiredFs: run.requiredFs,
+  });
   return {
     record: record!,
     checklist: fullChecklist(saved).map((c) => ({ ...c, hint: hints[c.key] })),

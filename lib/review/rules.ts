@@ -23,7 +23,13 @@ export type Refusal = { ok: false; status: 403 | 409 | 422; code: string; messag
 export type Verdict = { ok: true } | Refusal;
 
 const OK: Verdict = { ok: true };
-const refuse = (status: Refusal["status"], code: string, message: string, field?: string): Refusal => ({ ok: false, status, code, message, field });
+const refuse = (status: Refusal["status"], code: string, message: string, field?: string): Refusal => ({
+  ok: false,
+  status,
+  code,
+  message,
+  field,
+});
 
 /** Why a run in this status cannot move or change; null for a draft. */
 function frozenReason(status: RunStatus): string | null {
@@ -49,20 +55,31 @@ const WRONG_STATE: Record<TransitionAction, Partial<Record<RunStatus, string>>> 
 export function checkTransition(action: TransitionAction, actor: Actor, run: RunFacts): Verdict {
   const t = TRANSITIONS[action];
   if (action === "submit") {
-    if (!can(actor.role, "run.submit")) return refuse(403, "forbidden", "Only engineers and designers submit runs for review.");
+    if (!can(actor.role, "run.submit"))
+      return refuse(403, "forbidden", "Only engineers and designers submit runs for review.");
     if (actor.userId !== run.authorId) return refuse(403, "not_author", "Only the run's author submits it for review.");
   } else {
     if (!can(actor.role, "run.review")) return refuse(403, "forbidden", "Only reviewers approve or return runs.");
-    if (actor.userId === run.authorId) return refuse(403, "self_review", "Nobody reviews their own run: ask another reviewer.");
+    if (actor.userId === run.authorId)
+      return refuse(403, "self_review", "Nobody reviews their own run: ask another reviewer.");
   }
   if (run.status !== t.from) {
-    return refuse(409, "wrong_status", WRONG_STATE[action][run.status] ?? frozenReason(run.status) ?? "This run cannot make that move.");
+    return refuse(
+      409,
+      "wrong_status",
+      WRONG_STATE[action][run.status] ?? frozenReason(run.status) ?? "This run cannot make that move.",
+    );
   }
   return OK;
 }
 
 /** The full check for a decision, including what the decision itself must carry. */
-export function checkDecision(action: TransitionAction, actor: Actor, run: RunFacts, input: { note: string; checklist: readonly ChecklistEntry[] }): Verdict {
+export function checkDecision(
+  action: TransitionAction,
+  actor: Actor,
+  run: RunFacts,
+  input: { note: string; checklist: readonly ChecklistEntry[] },
+): Verdict {
   const base = checkTransition(action, actor, run);
   if (!base.ok) return base;
   if (action === "return" && input.note.trim().length < 3) {
@@ -71,7 +88,11 @@ export function checkDecision(action: TransitionAction, actor: Actor, run: RunFa
   if (action === "approve") {
     const open = openChecklistItems(input.checklist);
     if (open.length > 0) {
-      return refuse(409, "checklist_open", `Confirm every checklist item before signing off. Still open or of concern: ${open.map((i) => i.label.toLowerCase()).join("; ")}.`);
+      return refuse(
+        409,
+        "checklist_open",
+        `Confirm every checklist item before signing off. Still open or of concern: ${open.map((i) => i.label.toLowerCase()).join("; ")}.`,
+      );
     }
   }
   return OK;
@@ -87,22 +108,38 @@ export function checkDraftChange(actor: Actor, run: RunFacts, change: "rename" |
   const frozen = frozenReason(run.status);
   if (frozen) return refuse(409, "run_frozen", frozen);
   if (!can(actor.role, "run.create") || actor.userId !== run.authorId) {
-    return refuse(403, "not_author", change === "delete" ? "Only the run's author deletes a draft." : "Only the run's author renames a draft.");
+    return refuse(
+      403,
+      "not_author",
+      change === "delete" ? "Only the run's author deletes a draft." : "Only the run's author renames a draft.",
+    );
   }
   return OK;
 }
 
 /** Comments: any engineer, designer or reviewer of the project, until the run is signed off. */
 export function checkComment(actor: Actor, run: RunFacts): Verdict {
-  if (!can(actor.role, "run.comment")) return refuse(403, "forbidden", "Your role does not allow you to comment on runs.");
-  if (run.status === "approved") return refuse(409, "run_frozen", "This run is signed off and takes no more comments. Comment on a revision instead.");
+  if (!can(actor.role, "run.comment"))
+    return refuse(403, "forbidden", "Your role does not allow you to comment on runs.");
+  if (run.status === "approved")
+    return refuse(
+      409,
+      "run_frozen",
+      "This run is signed off and takes no more comments. Comment on a revision instead.",
+    );
   return OK;
 }
 
 /** The checklist belongs to the review: reviewers other than the author, while it is awaiting review. */
 export function checkChecklistEdit(actor: Actor, run: RunFacts): Verdict {
   if (!can(actor.role, "run.review")) return refuse(403, "forbidden", "Only reviewers fill in the review checklist.");
-  if (actor.userId === run.authorId) return refuse(403, "self_review", "Nobody reviews their own run: ask another reviewer.");
-  if (run.status !== "submitted") return refuse(409, "wrong_status", frozenReason(run.status) ?? "The checklist opens when the run is submitted for review.");
+  if (actor.userId === run.authorId)
+    return refuse(403, "self_review", "Nobody reviews their own run: ask another reviewer.");
+  if (run.status !== "submitted")
+    return refuse(
+      409,
+      "wrong_status",
+      frozenReason(run.status) ?? "The checklist opens when the run is submitted for review.",
+    );
   return OK;
 }

@@ -14,13 +14,21 @@ export interface RunAccess {
 }
 
 /** The run of a route's params, visible to the user, with the facts the review rules need. */
-export async function requireRunAccess(user: SessionUser, params: { projectId: string; runId: string }): Promise<RunAccess> {
+export async function requireRunAccess(
+  user: SessionUser,
+  params: { projectId: string; runId: string },
+): Promise<RunAccess> {
   const projectId = parseId(params.projectId, "The project");
   const runId = parseId(params.runId, "The run");
   const access = await requireProjectAccess(user, projectId, "project.view");
   const run = await fetchRun(projectId, runId);
   if (!run) throw notFound("The run");
-  return { access, run, actor: { userId: user.id, role: access.role }, facts: { status: run.status, authorId: run.authorId } };
+  return {
+    access,
+    run,
+    actor: { userId: user.id, role: access.role },
+    facts: { status: run.status, authorId: run.authorId },
+  };
 }
 
 /** A refusal of the review rules as the API's error answer. */

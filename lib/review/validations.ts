@@ -13,15 +13,26 @@ export const renameRunSchema = z.object({
   title: z.string().trim().min(3, "At least 3 characters.").max(200, "At most 200 characters."),
 });
 
-const finite = (what: string) => z.number({ error: `${what} must be a number (m).` }).finite().min(-1e6).max(1e6);
+const finite = (what: string) =>
+  z
+    .number({ error: `${what} must be a number (m).` })
+    .finite()
+    .min(-1e6)
+    .max(1e6);
 
 export const commentSchema = z
   .object({
     body: z.string().trim().min(1, "Write the comment.").max(4000, "At most 4,000 characters."),
-    pin: z.object({ x: finite("x"), y: finite("y") }).nullable().default(null),
+    pin: z
+      .object({ x: finite("x"), y: finite("y") })
+      .nullable()
+      .default(null),
     slice: z
       .object({
-        number: z.number({ error: "Enter the slice number." }).int("Whole slice numbers only.").min(1, "Slices are numbered from 1."),
+        number: z
+          .number({ error: "Enter the slice number." })
+          .int("Whole slice numbers only.")
+          .min(1, "Slices are numbered from 1."),
         method: z.enum(["bishop", "fellenius"]),
       })
       .nullable()
@@ -43,7 +54,10 @@ export const checklistSchema = z.object({
 });
 
 export const noticePrefsSchema = z.object({
-  preferences: z.array(z.object({ kind: z.enum(NOTICE_KINDS, { error: "Unknown notice." }), enabled: z.boolean() })).min(1).max(NOTICE_KINDS.length),
+  preferences: z
+    .array(z.object({ kind: z.enum(NOTICE_KINDS, { error: "Unknown notice." }), enabled: z.boolean() }))
+    .min(1)
+    .max(NOTICE_KINDS.length),
 });
 
 export type CommentInput = z.infer<typeof commentSchema>;

@@ -8,7 +8,13 @@ import { z } from "zod";
 const finite = z.number();
 const point = z.tuple([finite, finite]);
 const circle = z.object({ xc: finite, yc: finite, r: finite.positive() });
-const circleFs = z.object({ fs: finite.positive(), circle, entry: point, exit: point, direction: z.enum(["left", "right"]) });
+const circleFs = z.object({
+  fs: finite.positive(),
+  circle,
+  entry: point,
+  exit: point,
+  direction: z.enum(["left", "right"]),
+});
 const fsMap = z.object({
   nx: z.number().int().positive(),
   ny: z.number().int().positive(),
@@ -26,7 +32,11 @@ export const searchResultSchema = z.object({
   results: z.object({ bishop: circleFs.nullable().optional(), fellenius: circleFs.nullable().optional() }),
   fsMap: z.object({ bishop: fsMap.optional(), fellenius: fsMap.optional() }),
   lowest: z.object({ bishop: z.array(circleFs).max(100).optional(), fellenius: z.array(circleFs).max(100).optional() }),
-  circles: z.object({ tried: z.number().int().nonnegative(), valid: z.number().int().nonnegative(), rejected: z.record(z.string(), z.number().int().nonnegative()) }),
+  circles: z.object({
+    tried: z.number().int().nonnegative(),
+    valid: z.number().int().nonnegative(),
+    rejected: z.record(z.string(), z.number().int().nonnegative()),
+  }),
   warnings: z.array(z.object({ code: z.string(), message: z.string() })).max(200),
   cancelled: z.literal(false, { error: "A cancelled search cannot be saved; run it to the end." }),
 });

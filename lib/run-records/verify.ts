@@ -16,20 +16,27 @@ export interface VerifiedCircle {
   minMAlpha: number | null;
 }
 
-export type VerifyOutcome =
-  | { ok: true; circles: VerifiedCircle[] }
-  | { ok: false; message: string; field: string };
+export type VerifyOutcome = { ok: true; circles: VerifiedCircle[] } | { ok: false; message: string; field: string };
 
 export function verifyCriticalCircles(doc: SectionDocument, result: StoredSearchResult): VerifyOutcome {
   if (result.engineVersion !== ENGINE_VERSION) {
-    return { ok: false, field: "result.engineVersion", message: `The result came from engine ${result.engineVersion}; this server runs ${ENGINE_VERSION}. Run the search again.` };
+    return {
+      ok: false,
+      field: "result.engineVersion",
+      message: `The result came from engine ${result.engineVersion}; this server runs ${ENGINE_VERSION}. Run the search again.`,
+    };
   }
   const circles: VerifiedCircle[] = [];
   for (const method of result.methods) {
     const claimed = result.results[method];
     if (!claimed) continue;
     const check = analyzeCircle(doc, claimed.circle);
-    if (!check.ok) return { ok: false, field: `result.results.${method}`, message: `The section does not validate: ${check.errors[0]?.message}` };
+    if (!check.ok)
+      return {
+        ok: false,
+        field: `result.results.${method}`,
+        message: `The section does not validate: ${check.errors[0]?.message}`,
+      };
     const fs = check.fs[method];
     if (fs === null || Math.abs(fs - claimed.fs) > FS_TOLERANCE * Math.max(1, Math.abs(fs))) {
       return {
@@ -40,6 +47,11 @@ export function verifyCriticalCircles(doc: SectionDocument, result: StoredSearch
     }
     circles.push({ method, fs, slices: check.slices, minMAlpha: check.minMAlpha ?? null });
   }
-  if (circles.length === 0) return { ok: false, field: "result.results", message: "The search found no valid circle; there is nothing to save." };
+  if (circles.length === 0)
+    return {
+      ok: false,
+      field: "result.results",
+      message: "The search found no valid circle; there is nothing to save.",
+    };
   return { ok: true, circles };
 }

@@ -59,7 +59,11 @@ export interface SliceSide {
  * @param bounds slice limits in order (xLeft, xRight), m
  * @param topAt ground elevation at x (m)
  */
-export function sliceSides(c: Circle, bounds: ReadonlyArray<{ xLeft: number; xRight: number }>, topAt: (x: number) => number): SliceSide[] {
+export function sliceSides(
+  c: Circle,
+  bounds: ReadonlyArray<{ xLeft: number; xRight: number }>,
+  topAt: (x: number) => number,
+): SliceSide[] {
   if (bounds.length === 0) return [];
   const xs = bounds.map((s) => s.xLeft);
   xs.push(bounds[bounds.length - 1].xRight);

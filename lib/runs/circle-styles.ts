@@ -59,36 +59,62 @@ interface CriticalLike {
 }
 
 /** The critical circles per method of a result, Bishop first. */
-export function methodCircles(results: Partial<Record<"bishop" | "fellenius", CriticalLike | null>> | undefined): DrawnCircle[] {
+export function methodCircles(
+  results: Partial<Record<"bishop" | "fellenius", CriticalLike | null>> | undefined,
+): DrawnCircle[] {
   if (!results) return [];
   const out: DrawnCircle[] = [];
   for (const m of ["bishop", "fellenius"] as const) {
     const r = results[m];
     if (!r) continue;
     out.push({
-      key: m, method: m, fs: r.fs,
+      key: m,
+      method: m,
+      fs: r.fs,
       label: r.fs !== undefined ? `${METHOD_SHORT[m]} ${r.fs.toFixed(3)}` : METHOD_SHORT[m],
-      circle: r.circle, entry: r.entry, exit: r.exit, style: METHOD_STYLE[m],
+      circle: r.circle,
+      entry: r.entry,
+      exit: r.exit,
+      style: METHOD_STYLE[m],
     });
   }
   return out;
 }
 
 /** Circles of runs laid over each other. */
-export function overlayCircles(overlays: ReadonlyArray<{ label: string; color?: string; circle: Circle; entry: [number, number]; exit: [number, number] }>): DrawnCircle[] {
-  return overlays.map((o, i) => ({ key: `overlay-${i}`, label: o.label, circle: o.circle, entry: o.entry, exit: o.exit, style: overlayStyle(i, o.color) }));
+export function overlayCircles(
+  overlays: ReadonlyArray<{
+    label: string;
+    color?: string;
+    circle: Circle;
+    entry: [number, number];
+    exit: [number, number];
+  }>,
+): DrawnCircle[] {
+  return overlays.map((o, i) => ({
+    key: `overlay-${i}`,
+    label: o.label,
+    circle: o.circle,
+    entry: o.entry,
+    exit: o.exit,
+    style: overlayStyle(i, o.color),
+  }));
 }
 
 /** The JSON recorded in `data-critical`: what is drawn, rounded to the millimetre. */
 export function criticalAttribute(circles: readonly DrawnCircle[]): string {
   const r3 = (v: number) => Math.round(v * 1000) / 1000;
-  return JSON.stringify(circles.map((c) => ({
-    label: c.label,
-    ...(c.method ? { method: c.method } : {}),
-    ...(c.fs !== undefined ? { fs: c.fs } : {}),
-    xc: r3(c.circle.xc), yc: r3(c.circle.yc), r: r3(c.circle.r),
-    entry: [r3(c.entry[0]), r3(c.entry[1])],
-    exit: [r3(c.exit[0]), r3(c.exit[1])],
-    dashed: c.style.dash.length > 0,
-  })));
+  return JSON.stringify(
+    circles.map((c) => ({
+      label: c.label,
+      ...(c.method ? { method: c.method } : {}),
+      ...(c.fs !== undefined ? { fs: c.fs } : {}),
+      xc: r3(c.circle.xc),
+      yc: r3(c.circle.yc),
+      r: r3(c.circle.r),
+      entry: [r3(c.entry[0]), r3(c.entry[1])],
+      exit: [r3(c.exit[0]), r3(c.exit[1])],
+      dashed: c.style.dash.length > 0,
+    })),
+  );
 }

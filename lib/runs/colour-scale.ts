@@ -21,7 +21,10 @@ export interface ColourScale {
   stops: readonly { t: number; rgb: Rgb }[];
 }
 
-function fromTable(name: ColourScale["name"], rows: readonly (readonly [number, number, number, number])[]): ColourScale {
+function fromTable(
+  name: ColourScale["name"],
+  rows: readonly (readonly [number, number, number, number])[],
+): ColourScale {
   // Each row is [table index 0–255, r, g, b]; the index fixes where the colour sits on t.
   return { name, stops: rows.map(([i, r, g, b]) => ({ t: i / 255, rgb: [r, g, b] as const })) };
 }
@@ -75,12 +78,19 @@ export function sampleScale(scale: ColourScale, t: number): Rgb {
   const a = s[k];
   const b = s[k + 1];
   const f = b.t === a.t ? 0 : (u - a.t) / (b.t - a.t);
-  return [a.rgb[0] + (b.rgb[0] - a.rgb[0]) * f, a.rgb[1] + (b.rgb[1] - a.rgb[1]) * f, a.rgb[2] + (b.rgb[2] - a.rgb[2]) * f];
+  return [
+    a.rgb[0] + (b.rgb[0] - a.rgb[0]) * f,
+    a.rgb[1] + (b.rgb[1] - a.rgb[1]) * f,
+    a.rgb[2] + (b.rgb[2] - a.rgb[2]) * f,
+  ];
 }
 
 /** `#rrggbb` of an sRGB colour. */
 export function rgbToHex(rgb: Rgb): string {
-  const h = (v: number) => Math.round(Math.min(1, Math.max(0, v)) * 255).toString(16).padStart(2, "0");
+  const h = (v: number) =>
+    Math.round(Math.min(1, Math.max(0, v)) * 255)
+      .toString(16)
+      .padStart(2, "0");
   return `#${h(rgb[0])}${h(rgb[1])}${h(rgb[2])}`;
 }
 

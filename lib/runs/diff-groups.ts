@@ -8,7 +8,7 @@ export const AREA_ORDER: readonly DiffArea[] = ["materials", "geometry", "water"
 
 /** Non-empty groups in AREA_ORDER, each keeping the differences' own order. */
 export function groupDifferences(diffs: readonly Difference[]): { area: DiffArea; items: Difference[] }[] {
-  return AREA_ORDER
-    .map((area) => ({ area, items: diffs.filter((d) => d.area === area) }))
-    .filter((g) => g.items.length > 0);
+  return AREA_ORDER.map((area) => ({ area, items: diffs.filter((d) => d.area === area) })).filter(
+    (g) => g.items.length > 0,
+  );
 }

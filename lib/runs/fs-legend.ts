@@ -29,15 +29,29 @@ const fmt2 = (v: number) => v.toFixed(2);
  * The legend of an FS map's colour range.
  * @param requiredFs marked on the bar; pinned to an end (with `outside` set) when off the range
  */
-export function buildFsLegend(range: FsRange, requiredFs?: number, scale: ColourScale = FS_MAP_SCALE, stops = 24): FsLegend {
+export function buildFsLegend(
+  range: FsRange,
+  requiredFs?: number,
+  scale: ColourScale = FS_MAP_SCALE,
+  stops = 24,
+): FsLegend {
   const ticks = niceTicks(range.lo, range.hi, 5)
     .filter((v) => v >= range.lo - 1e-9 && v <= range.hi + 1e-9)
     .map((v) => ({ value: v, at: fsToUnit(v, range), label: fmt2(v) }));
-  const gradient = Array.from({ length: stops + 1 }, (_, i) => ({ offset: i / stops, colour: scaleHex(scale, i / stops) }));
+  const gradient = Array.from({ length: stops + 1 }, (_, i) => ({
+    offset: i / stops,
+    colour: scaleHex(scale, i / stops),
+  }));
   let required: FsLegend["required"] = null;
   if (requiredFs !== undefined && Number.isFinite(requiredFs)) {
     const outside = requiredFs < range.lo ? "below" : requiredFs > range.hi ? "above" : null;
     required = { value: requiredFs, at: fsToUnit(requiredFs, range), outside };
   }
-  return { ticks, gradient, required, lowLabel: fmt2(range.lo), highLabel: `${range.clipped ? "≥ " : ""}${fmt2(range.hi)}` };
+  return {
+    ticks,
+    gradient,
+    required,
+    lowLabel: fmt2(range.lo),
+    highLabel: `${range.clipped ? "≥ " : ""}${fmt2(range.hi)}`,
+  };
 }

@@ -40,10 +40,15 @@ export interface FsCell {
 export function fsRange(values: ReadonlyArray<number | null>, requiredFs?: number): FsRange | null {
   let min = Infinity;
   let max = -Infinity;
-  for (const v of values) if (v !== null && Number.isFinite(v)) { min = Math.min(min, v); max = Math.max(max, v); }
+  for (const v of values)
+    if (v !== null && Number.isFinite(v)) {
+      min = Math.min(min, v);
+      max = Math.max(max, v);
+    }
   if (!Number.isFinite(min)) return null;
   let hi = Math.min(max, min + FS_RANGE_SPAN);
-  if (requiredFs !== undefined && requiredFs > hi && requiredFs <= min + 2 * FS_RANGE_SPAN) hi = requiredFs + FS_RANGE_MIN_SPAN;
+  if (requiredFs !== undefined && requiredFs > hi && requiredFs <= min + 2 * FS_RANGE_SPAN)
+    hi = requiredFs + FS_RANGE_MIN_SPAN;
   hi = Math.max(hi, min + FS_RANGE_MIN_SPAN);
   return { lo: min, hi, clipped: max > hi };
 }
@@ -86,9 +91,12 @@ export function fsMapCells(map: FsMap, range: FsRange | null, scale: ColourScale
       const v = map.values[iy * map.nx + ix];
       const fs = v === null || v === undefined || !Number.isFinite(v) ? null : v;
       cells.push({
-        ix, iy,
-        x1: Math.min(ex[ix], ex[ix + 1]), x2: Math.max(ex[ix], ex[ix + 1]),
-        y1: Math.min(ey[iy], ey[iy + 1]), y2: Math.max(ey[iy], ey[iy + 1]),
+        ix,
+        iy,
+        x1: Math.min(ex[ix], ex[ix + 1]),
+        x2: Math.max(ex[ix], ex[ix + 1]),
+        y1: Math.min(ey[iy], ey[iy + 1]),
+        y2: Math.max(ey[iy], ey[iy + 1]),
         fs,
         colour: fs === null || range === null ? null : fsColour(fs, range, scale),
       });

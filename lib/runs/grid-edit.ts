@@ -16,7 +16,13 @@ export function snap(v: number, step = SNAP_STEP): number {
 
 /** The grid with x1 ≤ x2 and y1 ≤ y2. */
 export function normaliseGrid(g: Grid): Grid {
-  return { ...g, x1: Math.min(g.x1, g.x2), x2: Math.max(g.x1, g.x2), y1: Math.min(g.y1, g.y2), y2: Math.max(g.y1, g.y2) };
+  return {
+    ...g,
+    x1: Math.min(g.x1, g.x2),
+    x2: Math.max(g.x1, g.x2),
+    y1: Math.min(g.y1, g.y2),
+    y2: Math.max(g.y1, g.y2),
+  };
 }
 
 export type GridCorner = "lower-left" | "lower-right" | "upper-left" | "upper-right";
@@ -67,9 +73,16 @@ export interface BandLine {
  * where such circles reach deepest.
  */
 export function bandLines(radii: Radii, g: Grid): BandLine[] {
-  if ("tangentY1" in radii) return [{ key: "tangentY1", y: radii.tangentY1 }, { key: "tangentY2", y: radii.tangentY2 }];
+  if ("tangentY1" in radii)
+    return [
+      { key: "tangentY1", y: radii.tangentY1 },
+      { key: "tangentY2", y: radii.tangentY2 },
+    ];
   const yMid = (g.y1 + g.y2) / 2;
-  return [{ key: "r1", y: yMid - radii.r1 }, { key: "r2", y: yMid - radii.r2 }];
+  return [
+    { key: "r1", y: yMid - radii.r1 },
+    { key: "r2", y: yMid - radii.r2 },
+  ];
 }
 
 /** The radii with one band line dragged to elevation y (m), snapped; a radius stays ≥ one step. */
@@ -86,9 +99,13 @@ export function dragBandLine(radii: Radii, g: Grid, key: BandKey, y: number): Ra
 /** Plain words for a band line, for its label and its accessible name. */
 export function bandLineLabel(line: BandLine): string {
   switch (line.key) {
-    case "tangentY1": return `tangent level 1: ${line.y.toFixed(1)} m`;
-    case "tangentY2": return `tangent level 2: ${line.y.toFixed(1)} m`;
-    case "r1": return `deepest reach of radius 1: ${line.y.toFixed(1)} m`;
-    case "r2": return `deepest reach of radius 2: ${line.y.toFixed(1)} m`;
+    case "tangentY1":
+      return `tangent level 1: ${line.y.toFixed(1)} m`;
+    case "tangentY2":
+      return `tangent level 2: ${line.y.toFixed(1)} m`;
+    case "r1":
+      return `deepest reach of radius 1: ${line.y.toFixed(1)} m`;
+    case "r2":
+      return `deepest reach of radius 2: ${line.y.toFixed(1)} m`;
   }
 }

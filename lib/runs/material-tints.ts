@@ -11,7 +11,8 @@ const EARTH_TONES = ["#e6d7b4", "#cfd8c2", "#dcc4b2", "#cbd3da", "#e2d2c4", "#d8
 export function materialFills(doc: SectionDocument, given?: Record<string, string>): Record<string, string> {
   const out: Record<string, string> = {};
   doc.materials.forEach((m, i) => {
-    out[m.id] = given?.[m.id] ?? m.color ?? (m.model === "impenetrable" ? "#bdb7ab" : EARTH_TONES[i % EARTH_TONES.length]);
+    out[m.id] =
+      given?.[m.id] ?? m.color ?? (m.model === "impenetrable" ? "#bdb7ab" : EARTH_TONES[i % EARTH_TONES.length]);
   });
   return out;
 }

@@ -24,7 +24,8 @@ export function niceTicks(lo: number, hi: number, count = 5): number[] {
   const digits = Math.max(0, -Math.floor(Math.log10(step) + 1e-9));
   const out: number[] = [];
   // Stepping by index, not by repeated addition, keeps the values free of drift.
-  for (let i = Math.ceil(lo / step - 1e-9); i * step <= hi + step * 1e-9; i++) out.push(Number((i * step).toFixed(digits)));
+  for (let i = Math.ceil(lo / step - 1e-9); i * step <= hi + step * 1e-9; i++)
+    out.push(Number((i * step).toFixed(digits)));
   return out;
 }
 

@@ -67,7 +67,8 @@ export function gridCentres(g: Grid): [number, number][] {
   const n = normaliseGrid(g);
   const at = (a: number, b: number, k: number, i: number) => (k <= 1 ? a : a + ((b - a) * i) / (k - 1));
   const out: [number, number][] = [];
-  for (let iy = 0; iy < n.ny; iy++) for (let ix = 0; ix < n.nx; ix++) out.push([at(n.x1, n.x2, n.nx, ix), at(n.y1, n.y2, n.ny, iy)]);
+  for (let iy = 0; iy < n.ny; iy++)
+    for (let ix = 0; ix < n.nx; ix++) out.push([at(n.x1, n.x2, n.nx, ix), at(n.y1, n.y2, n.ny, iy)]);
   return out;
 }
 
@@ -84,31 +85,56 @@ export function buildRunScene(input: RunSceneInput): RunScene {
   const groundPts = groundLine(doc);
   const phreaticPts = doc.water?.phreatic ?? null;
   const ponds = phreaticPts ? pondedWater(phreaticPts, groundPts) : [];
-  const pool = input.drawdownTo !== undefined && Number.isFinite(input.drawdownTo)
-    ? { level: input.drawdownTo, spans: poolLevelSpans(input.drawdownTo, groundPts, ponds) }
-    : null;
+  const pool =
+    input.drawdownTo !== undefined && Number.isFinite(input.drawdownTo)
+      ? { level: input.drawdownTo, spans: poolLevelSpans(input.drawdownTo, groundPts, ponds) }
+      : null;
   const method = pickMethod(input.result, input.method);
   const map = method ? input.result?.fsMap[method] : undefined;
   const range = map ? fsRange(map.values, input.requiredFs) : null;
   const cells = map ? fsMapCells(map, range) : [];
   const grid = input.grid ?? input.document.analysis?.grid;
-  const gridBox = map && map.xs.length > 0
-    ? unionBoxes(cells.map((c) => ({ minX: c.x1, minY: c.y1, maxX: c.x2, maxY: c.y2 })))
-    : grid ? (() => { const n = normaliseGrid(grid); return { minX: n.x1, minY: n.y1, maxX: n.x2, maxY: n.y2 }; })() : null;
+  const gridBox =
+    map && map.xs.length > 0
+      ? unionBoxes(cells.map((c) => ({ minX: c.x1, minY: c.y1, maxX: c.x2, maxY: c.y2 })))
+      : grid
+        ? (() => {
+            const n = normaliseGrid(grid);
+            return { minX: n.x1, minY: n.y1, maxX: n.x2, maxY: n.y2 };
+          })()
+        : null;
   const radii = input.radii ?? (input.grid ? input.document.analysis?.radii : undefined);
   const band = radii && grid ? bandLines(radii, grid) : [];
-  const critical = input.overlays && input.overlays.length > 0 ? overlayCircles(input.overlays) : methodCircles(input.result?.results);
-  const lowest = method && input.result ? (input.result.lowest[method] ?? []).map((c) => arcPoints(c.circle, c.entry, c.exit)) : [];
+  const critical =
+    input.overlays && input.overlays.length > 0 ? overlayCircles(input.overlays) : methodCircles(input.result?.results);
+  const lowest =
+    method && input.result ? (input.result.lowest[method] ?? []).map((c) => arcPoints(c.circle, c.entry, c.exit)) : [];
   const sliceCircle = critical.find((c) => c.method === method) ?? critical[0];
-  const slices = sliceCircle && input.slices ? sliceSides(sliceCircle.circle, input.slices, (x) => groundAt(groundPts, x)) : [];
+  const slices =
+    sliceCircle && input.slices ? sliceSides(sliceCircle.circle, input.slices, (x) => groundAt(groundPts, x)) : [];
   const section = sectionBox(doc);
-  const bandBox = section && band.length > 0
-    ? { minX: section.minX, maxX: section.maxX, minY: Math.min(...band.map((b) => b.y)), maxY: Math.max(...band.map((b) => b.y)) }
-    : null;
-  const centreBoxes = critical.map((c) => ({ minX: c.circle.xc, maxX: c.circle.xc, minY: c.circle.yc, maxY: c.circle.yc }));
+  const bandBox =
+    section && band.length > 0
+      ? {
+          minX: section.minX,
+          maxX: section.maxX,
+          minY: Math.min(...band.map((b) => b.y)),
+          maxY: Math.max(...band.map((b) => b.y)),
+        }
+      : null;
+  const centreBoxes = critical.map((c) => ({
+    minX: c.circle.xc,
+    maxX: c.circle.xc,
+    minY: c.circle.yc,
+    maxY: c.circle.yc,
+  }));
   const fitBox = unionBoxes([section, gridBox, bandBox, ...centreBoxes]) ?? { minX: 0, minY: 0, maxX: 10, maxY: 10 };
   return {
-    regions: doc.regions.map((r) => ({ material: r.material, points: r.points.flat(), fill: fills[r.material] ?? "#ddd6c8" })),
+    regions: doc.regions.map((r) => ({
+      material: r.material,
+      points: r.points.flat(),
+      fill: fills[r.material] ?? "#ddd6c8",
+    })),
     ground: groundPts.flat(),
     phreatic: phreaticPts ? phreaticPts.flat() : null,
     ponds,
@@ -123,6 +149,11 @@ export function buildRunScene(input: RunSceneInput): RunScene {
     lowest,
     slices,
     fitBox,
-    fitKey: JSON.stringify([section, map ? gridBox : null, critical.map((c) => [c.circle.xc, c.circle.yc, c.circle.r]), grid !== undefined]),
+    fitKey: JSON.stringify([
+      section,
+      map ? gridBox : null,
+      critical.map((c) => [c.circle.xc, c.circle.yc, c.circle.r]),
+      grid !== undefined,
+    ]),
   };
 }

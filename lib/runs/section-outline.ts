@@ -31,7 +31,11 @@ export function groundLimits(ground: readonly Pt[], x: number): { left: number; 
   if (x >= ground[n - 1][0]) return { left: ground[n - 1][1], right: ground[n - 1][1] };
   let first = -1;
   let last = -1;
-  for (let i = 0; i < n; i++) if (ground[i][0] === x) { if (first < 0) first = i; last = i; }
+  for (let i = 0; i < n; i++)
+    if (ground[i][0] === x) {
+      if (first < 0) first = i;
+      last = i;
+    }
   if (first >= 0) return { left: ground[first][1], right: ground[last][1] };
   for (let i = 0; i + 1 < n; i++) {
     const [xa, ya] = ground[i];
@@ -62,7 +66,11 @@ export function lineAt(line: readonly Pt[], x: number): number {
   return xb === xa ? yb : ya + ((yb - ya) * (x - xa)) / (xb - xa);
 }
 
-interface Column { x: number; top: number; bot: number }
+interface Column {
+  x: number;
+  top: number;
+  bot: number;
+}
 
 function columnsToPolygon(cols: Column[]): number[] {
   const out: number[] = [];
@@ -80,7 +88,9 @@ export function pondedWater(water: readonly Pt[], ground: readonly Pt[]): number
   if (water.length < 2 || ground.length < 2) return [];
   const x0 = ground[0][0];
   const xN = ground[ground.length - 1][0];
-  const xs = [...new Set([...ground.map((p) => p[0]), ...water.map((p) => p[0]).filter((x) => x > x0 && x < xN)])].sort((a, b) => a - b);
+  const xs = [...new Set([...ground.map((p) => p[0]), ...water.map((p) => p[0]).filter((x) => x > x0 && x < xN)])].sort(
+    (a, b) => a - b,
+  );
   const out: number[][] = [];
   let cur: Column[] | null = null;
   const close = () => {
@@ -100,7 +110,10 @@ export function pondedWater(water: readonly Pt[], ground: readonly Pt[]): number
       if (dA > 0 !== dB > 0 && dA !== dB) {
         const t = dA / (dA - dB);
         const cross: Column = { x: xa + t * (x - xa), top: pa + t * (p - pa), bot: pa + t * (p - pa) };
-        if (dA > 0) { cur?.push(cross); close(); } else cur = [cross];
+        if (dA > 0) {
+          cur?.push(cross);
+          close();
+        } else cur = [cross];
       }
       if (cur && dB > 0) cur.push({ x, top: p, bot: g.left });
     }
@@ -118,7 +131,10 @@ export function pondedWater(water: readonly Pt[], ground: readonly Pt[]): number
 function ringSpan(ring: number[]): [number, number] {
   let lo = Infinity;
   let hi = -Infinity;
-  for (let i = 0; i < ring.length; i += 2) { lo = Math.min(lo, ring[i]); hi = Math.max(hi, ring[i]); }
+  for (let i = 0; i < ring.length; i += 2) {
+    lo = Math.min(lo, ring[i]);
+    hi = Math.max(hi, ring[i]);
+  }
   return [lo, hi];
 }
 
@@ -130,7 +146,10 @@ function ringSpan(ring: number[]): [number, number] {
  */
 export function poolLevelSpans(level: number, ground: readonly Pt[], ponds: readonly number[][]): [number, number][] {
   if (ground.length < 2 || !Number.isFinite(level)) return [];
-  const flat: Pt[] = [[ground[0][0], level], [ground[ground.length - 1][0], level]];
+  const flat: Pt[] = [
+    [ground[0][0], level],
+    [ground[ground.length - 1][0], level],
+  ];
   const spans = pondedWater(flat, ground).map(ringSpan);
   if (ponds.length === 0) return spans;
   const pondSpans = ponds.map(ringSpan);

@@ -7,8 +7,21 @@ import type { SliceRow } from "@/lib/stability";
 export type SliceMethod = "bishop" | "fellenius";
 
 export type SliceColumnKey =
-  | "index" | "xLeft" | "xRight" | "width" | "material" | "weight" | "alpha" | "baseLength"
-  | "porePressure" | "c" | "phi" | "mAlpha" | "normal" | "resisting" | "driving";
+  | "index"
+  | "xLeft"
+  | "xRight"
+  | "width"
+  | "material"
+  | "weight"
+  | "alpha"
+  | "baseLength"
+  | "porePressure"
+  | "c"
+  | "phi"
+  | "mAlpha"
+  | "normal"
+  | "resisting"
+  | "driving";
 
 /** A slice with its number counted from the first slice of the mass (1-based). */
 export interface NumberedSlice {
@@ -47,11 +60,17 @@ export function sliceColumns(method: SliceMethod): SliceColumn[] {
     { key: "phi", label: "φ′", unit: "°", decimals: 1, value: (s) => s.row.phi },
     { key: "mAlpha", label: "mα", unit: "", decimals: 3, value: (s) => num(s.row.mAlpha) },
     {
-      key: "normal", label: `N′ (${m})`, unit: "kN/m", decimals: 1,
+      key: "normal",
+      label: `N′ (${m})`,
+      unit: "kN/m",
+      decimals: 1,
       value: (s, md) => (md === "bishop" ? num(s.row.normalBishop) : num(s.row.normalOrdinary)),
     },
     {
-      key: "resisting", label: `Resisting (${m})`, unit: "kN/m", decimals: 1,
+      key: "resisting",
+      label: `Resisting (${m})`,
+      unit: "kN/m",
+      decimals: 1,
       value: (s, md) => (md === "bishop" ? num(s.row.resistingBishop) : num(s.row.resistingOrdinary)),
     },
     { key: "driving", label: "Driving", unit: "kN/m", decimals: 1, value: (s) => s.row.driving },
@@ -82,7 +101,12 @@ export type SortDirection = "ascending" | "descending";
 /**
  * Slices sorted by a column; stable, with empty cells last in either direction.
  */
-export function sortSlices(slices: readonly NumberedSlice[], column: SliceColumn, dir: SortDirection, method: SliceMethod): NumberedSlice[] {
+export function sortSlices(
+  slices: readonly NumberedSlice[],
+  column: SliceColumn,
+  dir: SortDirection,
+  method: SliceMethod,
+): NumberedSlice[] {
   const sign = dir === "ascending" ? 1 : -1;
   return slices
     .map((s, i) => ({ s, i, v: column.value(s, method) }))

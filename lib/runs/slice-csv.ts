@@ -40,7 +40,8 @@ function commentLine(text: string): string {
   return escapeCsvText(`# ${text.replace(/[\r\n]+/g, " ")}`);
 }
 
-const fs3 = (v: number | null | undefined) => (v === null || v === undefined || !Number.isFinite(v) ? "none" : v.toFixed(3));
+const fs3 = (v: number | null | undefined) =>
+  v === null || v === undefined || !Number.isFinite(v) ? "none" : v.toFixed(3);
 
 function metaLines(meta: SliceCsvMeta): string[] {
   const lines = [`Caution: ${CAUTION_TEXT}`];
@@ -49,10 +50,18 @@ function metaLines(meta: SliceCsvMeta): string[] {
   if (meta.loadCase) lines.push(`Load case: ${meta.loadCase}`);
   if (meta.runAt) lines.push(`Run at: ${meta.runAt}`);
   if (meta.engineVersion) lines.push(`Engine version: ${meta.engineVersion}`);
-  lines.push(`Slice forces by: ${meta.method === "bishop" ? "Bishop's simplified method" : "ordinary method of slices"}`);
-  if (meta.fs) lines.push(`FS: Bishop ${fs3(meta.fs.bishop)}; ordinary ${fs3(meta.fs.fellenius)}${meta.ordinaryForm ? ` (${meta.ordinaryForm} form)` : ""}`);
+  lines.push(
+    `Slice forces by: ${meta.method === "bishop" ? "Bishop's simplified method" : "ordinary method of slices"}`,
+  );
+  if (meta.fs)
+    lines.push(
+      `FS: Bishop ${fs3(meta.fs.bishop)}; ordinary ${fs3(meta.fs.fellenius)}${meta.ordinaryForm ? ` (${meta.ordinaryForm} form)` : ""}`,
+    );
   if (meta.requiredFs !== undefined) lines.push(`Required FS: ${meta.requiredFs.toFixed(2)}`);
-  if (meta.circle) lines.push(`Circle: centre (${meta.circle.xc.toFixed(2)}, ${meta.circle.yc.toFixed(2)}) m, radius ${meta.circle.r.toFixed(2)} m`);
+  if (meta.circle)
+    lines.push(
+      `Circle: centre (${meta.circle.xc.toFixed(2)}, ${meta.circle.yc.toFixed(2)}) m, radius ${meta.circle.r.toFixed(2)} m`,
+    );
   lines.push("Units: lengths m, forces kN per metre run, pressures kPa, angles degrees");
   return lines;
 }
@@ -66,17 +75,26 @@ export function sliceTableToCsv(rows: readonly SliceRow[], meta: SliceCsvMeta): 
   const out = metaLines(meta).map(commentLine);
   out.push(cols.map((c) => escapeCsvText(columnHeader(c))).join(","));
   for (const s of numberSlices(rows)) {
-    out.push(cols.map((c) => {
-      const v = c.value(s, meta.method);
-      // Numbers come from our own formatting and may start with "-": only text is escaped.
-      return typeof v === "string" ? escapeCsvText(v) : formatCell(c, v);
-    }).join(","));
+    out.push(
+      cols
+        .map((c) => {
+          const v = c.value(s, meta.method);
+          // Numbers come from our own formatting and may start with "-": only text is escaped.
+          return typeof v === "string" ? escapeCsvText(v) : formatCell(c, v);
+        })
+        .join(","),
+    );
   }
   return out.join("\r\n") + "\r\n";
 }
 
 /** A file name for the download, made of safe characters only. */
 export function sliceCsvFileName(title: string | undefined, method: SliceMethod): string {
-  const base = (title ?? "run").toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 60) || "run";
+  const base =
+    (title ?? "run")
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-+|-+$/g, "")
+      .slice(0, 60) || "run";
   return `${base}-slices-${method === "bishop" ? "bishop" : "ordinary"}.csv`;
 }

@@ -44,7 +44,12 @@ export function unionBoxes(boxes: ReadonlyArray<Box | null | undefined>): Box | 
   for (const b of boxes) {
     if (!b) continue;
     out = out
-      ? { minX: Math.min(out.minX, b.minX), minY: Math.min(out.minY, b.minY), maxX: Math.max(out.maxX, b.maxX), maxY: Math.max(out.maxY, b.maxY) }
+      ? {
+          minX: Math.min(out.minX, b.minX),
+          minY: Math.min(out.minY, b.minY),
+          maxX: Math.max(out.maxX, b.maxX),
+          maxY: Math.max(out.maxY, b.maxY),
+        }
       : { ...b };
   }
   return out;
@@ -53,8 +58,16 @@ export function unionBoxes(boxes: ReadonlyArray<Box | null | undefined>): Box | 
 /** Box around a list of points; null when empty. */
 export function boxOfPoints(points: ReadonlyArray<readonly [number, number]>): Box | null {
   if (points.length === 0) return null;
-  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
-  for (const [x, y] of points) { minX = Math.min(minX, x); maxX = Math.max(maxX, x); minY = Math.min(minY, y); maxY = Math.max(maxY, y); }
+  let minX = Infinity,
+    minY = Infinity,
+    maxX = -Infinity,
+    maxY = -Infinity;
+  for (const [x, y] of points) {
+    minX = Math.min(minX, x);
+    maxX = Math.max(maxX, x);
+    minY = Math.min(minY, y);
+    maxY = Math.max(maxY, y);
+  }
   return { minX, minY, maxX, maxY };
 }
 

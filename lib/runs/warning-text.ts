@@ -32,7 +32,8 @@ const KNOWN: Record<string, { headline: string; action: string; weight: WarningW
   },
   "m-alpha-low": {
     headline: "mα is small on part of the critical circle, where Bishop's simplified method can overstate the FS.",
-    action: "The exit is steep: move the grid so circles exit less steeply, or check the surface with a method that satisfies force equilibrium.",
+    action:
+      "The exit is steep: move the grid so circles exit less steeply, or check the surface with a method that satisfies force equilibrium.",
     weight: "check",
   },
   "negative-normal": {
@@ -79,7 +80,7 @@ const REASON_WORDS: Record<string, string> = {
   "no-slip-mass": "did not cut the ground",
   "upper-arc": "the ground crossed the upper half of the circle",
   "out-of-section": "the slip mass reached a side of the section, or the arc left its bottom",
-  "impenetrable": "entered impenetrable material",
+  impenetrable: "entered impenetrable material",
   "too-shallow": "slip mass thinner than the minimum depth",
   "no-driving-moment": "nothing drives the mass in the sliding direction",
   "radius-not-positive": "radius not positive (tangent level above the centre)",

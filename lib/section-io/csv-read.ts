@@ -50,7 +50,13 @@ export function unescapeText(value: string): string {
  * (case-insensitive), and returns the non-blank data rows. Problems go to `problems`, warnings
  * (unknown columns) to `warnings`; returns null when there is nothing to read.
  */
-export function readCsvTable(text: string, expected: readonly string[], required: readonly string[], problems: CsvProblem[], warnings: CsvProblem[]): CsvTable | null {
+export function readCsvTable(
+  text: string,
+  expected: readonly string[],
+  required: readonly string[],
+  problems: CsvProblem[],
+  warnings: CsvProblem[],
+): CsvTable | null {
   const clean = (text ?? "").replace(/^\uFEFF/, "");
   const headerText = `expected the header ${expected.join(",")}`;
   if (clean.trim() === "") {
@@ -75,12 +81,24 @@ export function readCsvTable(text: string, expected: readonly string[], required
     if (raw === "") return;
     const name = byLower.get(raw.toLowerCase());
     const cell = `${columnLetter(index)}${header.row}`;
-    if (!name) warnings.push({ row: header.row, column: raw, cell, message: `Column '${raw}' is not used and was ignored (${headerText}).` });
-    else if (columns.has(name)) problems.push({ row: header.row, column: name, cell, message: `Column '${name}' appears twice in the header.` });
+    if (!name)
+      warnings.push({
+        row: header.row,
+        column: raw,
+        cell,
+        message: `Column '${raw}' is not used and was ignored (${headerText}).`,
+      });
+    else if (columns.has(name))
+      problems.push({ row: header.row, column: name, cell, message: `Column '${name}' appears twice in the header.` });
     else columns.set(name, index);
   });
   const missing = required.filter((name) => !columns.has(name));
-  for (const name of missing) problems.push({ row: header.row, column: name, message: `Column '${name}' is missing from the header: ${headerText}.` });
+  for (const name of missing)
+    problems.push({
+      row: header.row,
+      column: name,
+      message: `Column '${name}' is missing from the header: ${headerText}.`,
+    });
   // Without a required column the rows cannot be read; listing every row's gap would only be noise.
   if (missing.length > 0) return null;
 
@@ -88,13 +106,18 @@ export function readCsvTable(text: string, expected: readonly string[], required
   const rows: CsvPreviewRow[] = nonBlank.slice(1).map((r) => {
     const extra = r.cells.slice(width).filter((c) => c !== "");
     if (extra.length > 0) {
-      problems.push({ row: r.row, column: null, message: `Row ${r.row} has ${width + extra.length} cells but the header has ${width}: is a decimal comma splitting a number? Write decimals with a point (12.5).` });
+      problems.push({
+        row: r.row,
+        column: null,
+        message: `Row ${r.row} has ${width + extra.length} cells but the header has ${width}: is a decimal comma splitting a number? Write decimals with a point (12.5).`,
+      });
     }
     const cells: Record<string, string> = {};
     for (const [name, index] of columns) cells[name] = r.cells[index] ?? "";
     return { row: r.row, cells };
   });
-  if (rows.length === 0) problems.push({ row: header.row + 1, column: null, message: "The file has a header but no data rows." });
+  if (rows.length === 0)
+    problems.push({ row: header.row + 1, column: null, message: "The file has a header but no data rows." });
   return { headerRow: header.row, columns, rows };
 }
 
@@ -108,7 +131,8 @@ export function parseDecimal(raw: string): { ok: true; value: number } | { ok: f
     if (Number.isFinite(value)) return { ok: true, value };
     return { ok: false, message: `'${raw}' is too large.` };
   }
-  if (/^[+-]?\d*,\d+$/.test(raw)) return { ok: false, message: `'${raw}' uses a comma as the decimal mark: write ${raw.replace(",", ".")}.` };
+  if (/^[+-]?\d*,\d+$/.test(raw))
+    return { ok: false, message: `'${raw}' uses a comma as the decimal mark: write ${raw.replace(",", ".")}.` };
   return { ok: false, message: `'${raw}' is not a number.` };
 }
 
@@ -154,7 +178,12 @@ export class RowReader {
 }
 
 /** Wraps problems and a value into the parse result. */
-export function finish<V>(value: V, preview: CsvPreviewRow[], problems: CsvProblem[], warnings: CsvProblem[]): CsvParseResult<V> {
+export function finish<V>(
+  value: V,
+  preview: CsvPreviewRow[],
+  problems: CsvProblem[],
+  warnings: CsvProblem[],
+): CsvParseResult<V> {
   if (problems.length > 0) {
     const sorted = [...problems].sort((a, b) => a.row - b.row);
     return { ok: false, problems: sorted, preview, warnings };

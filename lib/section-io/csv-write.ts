@@ -19,6 +19,8 @@ export function escapeText(value: string): string {
 
 /** Writes a CSV with the given header; text cells are guarded, numbers pass through, null is blank. */
 export function writeCsv(fields: readonly string[], rows: readonly CsvCell[][]): string {
-  const data = rows.map((row) => row.map((cell) => (typeof cell === "string" ? escapeText(cell) : typeof cell === "number" ? cell : "")));
+  const data = rows.map((row) =>
+    row.map((cell) => (typeof cell === "string" ? escapeText(cell) : typeof cell === "number" ? cell : "")),
+  );
   return Papa.unparse({ fields: [...fields], data }, { newline: "\r\n" });
 }

@@ -8,7 +8,10 @@ export function detectSectionFile(name: string, text: string): SectionFileKind {
   const lower = name.toLowerCase();
   const trimmed = text.replace(/^\uFEFF/, "").trimStart();
   if (lower.endsWith(".json") || trimmed.startsWith("{")) return "section-json";
-  const header = (trimmed.split(/\r?\n/, 1)[0] ?? "").toLowerCase().split(/[;,]/).map((c) => c.trim());
+  const header = (trimmed.split(/\r?\n/, 1)[0] ?? "")
+    .toLowerCase()
+    .split(/[;,]/)
+    .map((c) => c.trim());
   if (header.includes("region") && header.includes("x") && header.includes("y")) return "geometry";
   if (header.includes("model") || (header.includes("id") && header.includes("phi"))) return "materials";
   if (header.length >= 2 && header[0] === "x" && header[1] === "y") return "phreatic";

@@ -47,16 +47,29 @@ export function parseGeometryCsv(text: string, options: GeometryCsvOptions = {})
     if (!current || current.label !== label) {
       const earlier = seen.get(label);
       if (earlier) {
-        r.problem("region", `Region '${label}' continues here after other regions (it began on row ${earlier.firstRow}): keep each region's rows together.`);
+        r.problem(
+          "region",
+          `Region '${label}' continues here after other regions (it began on row ${earlier.firstRow}): keep each region's rows together.`,
+        );
         earlier.incomplete = true;
         continue;
       }
-      current = { label, material: r.text("material"), firstRow: r.rowNumber, materialRow: r.rowNumber, incomplete: false, points: [] };
+      current = {
+        label,
+        material: r.text("material"),
+        firstRow: r.rowNumber,
+        materialRow: r.rowNumber,
+        incomplete: false,
+        points: [],
+      };
       if (current.material === "") r.problem("material", `Region '${label}' needs a material on its first row.`);
       drafts.push(current);
       seen.set(label, current);
     } else if (r.has("material") && r.text("material") !== current.material) {
-      r.problem("material", `Material '${r.text("material")}' differs from '${current.material}' given for region '${label}' on row ${current.materialRow}.`);
+      r.problem(
+        "material",
+        `Material '${r.text("material")}' differs from '${current.material}' given for region '${label}' on row ${current.materialRow}.`,
+      );
     }
     if (x !== null && y !== null) current.points.push({ row: r.rowNumber, p: [x, y] });
     else current.incomplete = true;
@@ -67,12 +80,21 @@ export function parseGeometryCsv(text: string, options: GeometryCsvOptions = {})
   return finish(regions, table.rows, problems, warnings);
 }
 
-function closeRegion(d: RegionDraft, warnings: CsvProblem[], problems: CsvProblem[], known: Set<string> | null): SectionRegion {
+function closeRegion(
+  d: RegionDraft,
+  warnings: CsvProblem[],
+  problems: CsvProblem[],
+  known: Set<string> | null,
+): SectionRegion {
   const kept: { row: number; p: Point }[] = [];
   for (const v of d.points) {
     const prev = kept[kept.length - 1];
     if (prev && prev.p[0] === v.p[0] && prev.p[1] === v.p[1]) {
-      warnings.push({ row: v.row, column: null, message: `Row ${v.row} repeats the previous point of region '${d.label}'; it was dropped.` });
+      warnings.push({
+        row: v.row,
+        column: null,
+        message: `Row ${v.row} repeats the previous point of region '${d.label}'; it was dropped.`,
+      });
     } else kept.push(v);
   }
   if (kept.length > 1) {
@@ -80,16 +102,28 @@ function closeRegion(d: RegionDraft, warnings: CsvProblem[], problems: CsvProble
     const last = kept[kept.length - 1];
     if (last.p[0] === first[0] && last.p[1] === first[1]) {
       kept.pop();
-      warnings.push({ row: last.row, column: null, message: `Row ${last.row} repeats the first point of region '${d.label}'; regions close by themselves, so it was dropped.` });
+      warnings.push({
+        row: last.row,
+        column: null,
+        message: `Row ${last.row} repeats the first point of region '${d.label}'; regions close by themselves, so it was dropped.`,
+      });
     }
   }
   const at = (message: string): CsvProblem => ({ row: d.firstRow, column: "region", message });
   if (known && d.material !== "" && !known.has(d.material)) {
-    problems.push({ row: d.materialRow, column: "material", message: `Region '${d.label}' uses material '${d.material}', which the section does not define.` });
+    problems.push({
+      row: d.materialRow,
+      column: "material",
+      message: `Region '${d.label}' uses material '${d.material}', which the section does not define.`,
+    });
   }
   if (d.incomplete) return { material: d.material, points: kept.map((v) => v.p) };
-  if (kept.length < 3) problems.push(at(`Region '${d.label}' has ${kept.length} point${kept.length === 1 ? "" : "s"}; a region needs at least 3.`));
-  else if (Math.abs(polygonArea(kept.map((v) => v.p))) < 1e-6) problems.push(at(`Region '${d.label}' has no area: its points lie on one line.`));
+  if (kept.length < 3)
+    problems.push(
+      at(`Region '${d.label}' has ${kept.length} point${kept.length === 1 ? "" : "s"}; a region needs at least 3.`),
+    );
+  else if (Math.abs(polygonArea(kept.map((v) => v.p))) < 1e-6)
+    problems.push(at(`Region '${d.label}' has no area: its points lie on one line.`));
   return { material: d.material, points: kept.map((v) => v.p) };
 }
 

@@ -2,7 +2,18 @@ import { RowReader, finish, readCsvTable, type CsvParseResult, type CsvProblem }
 import { writeCsv, type CsvCell } from "./csv-write";
 import { MATERIAL_MODELS, type SectionMaterial } from "./section-types";
 
-export const MATERIAL_COLUMNS = ["id", "name", "model", "gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum"] as const;
+export const MATERIAL_COLUMNS = [
+  "id",
+  "name",
+  "model",
+  "gamma",
+  "gammaSat",
+  "c",
+  "phi",
+  "su",
+  "suGradient",
+  "suDatum",
+] as const;
 type NumberColumn = "gamma" | "gammaSat" | "c" | "phi" | "su" | "suGradient" | "suDatum";
 type Model = (typeof MATERIAL_MODELS)[number];
 
@@ -40,13 +51,19 @@ export function parseMaterialsCsv(text: string): CsvParseResult<MaterialsCsvValu
     const r = new RowReader(table, row, problems);
     const id = r.text("id");
     if (id === "") r.problem("id", "The material id is missing.");
-    else if (idRows.has(id)) r.problem("id", `Id '${id}' is already used on row ${idRows.get(id)}: each material needs its own id.`);
+    else if (idRows.has(id))
+      r.problem("id", `Id '${id}' is already used on row ${idRows.get(id)}: each material needs its own id.`);
     else idRows.set(id, r.rowNumber);
 
     const modelText = r.text("model");
     const model = MATERIAL_MODELS.find((m) => m === modelText.toLowerCase());
     if (!model) {
-      r.problem("model", modelText === "" ? "The model is missing: use mohr-coulomb, undrained or impenetrable." : `Model '${modelText}' is not one of mohr-coulomb, undrained, impenetrable.`);
+      r.problem(
+        "model",
+        modelText === ""
+          ? "The model is missing: use mohr-coulomb, undrained or impenetrable."
+          : `Model '${modelText}' is not one of mohr-coulomb, undrained, impenetrable.`,
+      );
       continue;
     }
     const numbers = readNumbers(r, model, table.columns, problems, warnings);
@@ -55,12 +72,24 @@ export function parseMaterialsCsv(text: string): CsvParseResult<MaterialsCsvValu
     checkBounds(r, material, warnings);
     value.materials.push(material);
     // defineProperty, not assignment: an id such as "__proto__" must stay an ordinary key.
-    if (r.text("name") !== "") Object.defineProperty(value.names, id, { value: r.text("name"), enumerable: true, writable: true, configurable: true });
+    if (r.text("name") !== "")
+      Object.defineProperty(value.names, id, {
+        value: r.text("name"),
+        enumerable: true,
+        writable: true,
+        configurable: true,
+      });
   }
   return finish(value, table.rows, problems, warnings);
 }
 
-function readNumbers(r: RowReader, model: Model, columns: Map<string, number>, problems: CsvProblem[], warnings: CsvProblem[]): Partial<Record<NumberColumn, number>> | null {
+function readNumbers(
+  r: RowReader,
+  model: Model,
+  columns: Map<string, number>,
+  problems: CsvProblem[],
+  warnings: CsvProblem[],
+): Partial<Record<NumberColumn, number>> | null {
   const need = NEEDS[model];
   const before = problems.length;
   const out: Partial<Record<NumberColumn, number>> = {};
@@ -129,13 +158,18 @@ function checkBounds(r: RowReader, m: SectionMaterial, warnings: CsvProblem[]): 
   }
   if (!(m.su > 0)) r.problem("su", `su = ${m.su} kPa must be positive.`);
   else if (m.su > 500) warn("su", `su = ${m.su} kPa is unusually high (over 500).`);
-  if (m.suGradient !== undefined && m.suGradient < 0) r.problem("suGradient", `suGradient = ${m.suGradient} kPa/m must not be negative: su rises with depth in this model.`);
+  if (m.suGradient !== undefined && m.suGradient < 0)
+    r.problem(
+      "suGradient",
+      `suGradient = ${m.suGradient} kPa/m must not be negative: su rises with depth in this model.`,
+    );
 }
 
 /** Writes materials as a CSV with the full header; `names` fills the name column. */
 export function materialsToCsv(materials: readonly SectionMaterial[], names: Record<string, string> = {}): string {
   const rows = materials.map((m): CsvCell[] => {
-    const get = (key: NumberColumn): number | undefined => (key in m ? (m as unknown as Record<string, number | undefined>)[key] : undefined);
+    const get = (key: NumberColumn): number | undefined =>
+      key in m ? (m as unknown as Record<string, number | undefined>)[key] : undefined;
     return [m.id, names[m.id] ?? "", m.model, ...NUMBER_COLUMNS.map((k) => get(k))];
   });
   return writeCsv(MATERIAL_COLUMNS, rows);

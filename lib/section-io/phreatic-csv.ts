@@ -22,7 +22,10 @@ export function parsePhreaticCsv(text: string): CsvParseResult<Point[]> {
     const y = r.number("y");
     if (x === null || y === null) continue;
     if (previous && !(x > previous.x)) {
-      r.problem("x", `x = ${x} is not greater than x = ${previous.x} on row ${previous.row}: list the points left to right without repeats.`);
+      r.problem(
+        "x",
+        `x = ${x} is not greater than x = ${previous.x} on row ${previous.row}: list the points left to right without repeats.`,
+      );
       continue;
     }
     points.push([x, y]);
@@ -36,5 +39,8 @@ export function parsePhreaticCsv(text: string): CsvParseResult<Point[]> {
 
 /** Writes a phreatic line as a CSV with header `x,y`. */
 export function phreaticToCsv(points: readonly Point[]): string {
-  return writeCsv(PHREATIC_COLUMNS, points.map(([x, y]) => [x, y]));
+  return writeCsv(
+    PHREATIC_COLUMNS,
+    points.map(([x, y]) => [x, y]),
+  );
 }

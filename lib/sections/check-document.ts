@@ -10,7 +10,12 @@ export function requireValidSection(raw: unknown): { document: SectionDocument; 
   if (!result.ok) {
     const fields: Record<string, string[]> = {};
     for (const issue of result.errors) (fields[`document.${issue.path || "_"}`] ??= []).push(issue.message);
-    throw new ApiError(400, "invalid_section", `The section has ${result.errors.length} problem${result.errors.length === 1 ? "" : "s"}; nothing was saved.`, fields);
+    throw new ApiError(
+      400,
+      "invalid_section",
+      `The section has ${result.errors.length} problem${result.errors.length === 1 ? "" : "s"}; nothing was saved.`,
+      fields,
+    );
   }
   return { document: result.section, warnings: result.warnings };
 }

@@ -28,7 +28,8 @@ const MATERIAL_KEYS: { key: string; label: string; unit: string }[] = [
   { key: "freeDraining", label: "free-draining", unit: "" },
 ];
 
-const show = (v: unknown, unit = "") => (v === undefined || v === null ? "—" : `${typeof v === "number" ? +v.toFixed(4) : String(v)}${unit}`);
+const show = (v: unknown, unit = "") =>
+  v === undefined || v === null ? "—" : `${typeof v === "number" ? +v.toFixed(4) : String(v)}${unit}`;
 const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
 
 function diffMaterials(a: Material[], b: Material[], out: Difference[]): void {
@@ -44,11 +45,18 @@ function diffMaterials(a: Material[], b: Material[], out: Difference[]): void {
       const x = (old as Record<string, unknown>)[key];
       const y = (m as Record<string, unknown>)[key];
       if (!same(x, y)) {
-        out.push({ area: "materials", path: `materials[${id}].${key}`, text: `${id}: ${label} ${show(x, unit)} → ${show(y, unit)}`, before: show(x, unit), after: show(y, unit) });
+        out.push({
+          area: "materials",
+          path: `materials[${id}].${key}`,
+          text: `${id}: ${label} ${show(x, unit)} → ${show(y, unit)}`,
+          before: show(x, unit),
+          after: show(y, unit),
+        });
       }
     }
   }
-  for (const id of before.keys()) if (!after.has(id)) out.push({ area: "materials", path: `materials[${id}]`, text: `material '${id}' removed` });
+  for (const id of before.keys())
+    if (!after.has(id)) out.push({ area: "materials", path: `materials[${id}]`, text: `material '${id}' removed` });
 }
 
 function diffRegions(a: SectionDocument, b: SectionDocument, out: Difference[]): void {
@@ -57,16 +65,32 @@ function diffRegions(a: SectionDocument, b: SectionDocument, out: Difference[]):
     const r0 = a.regions[i];
     const r1 = b.regions[i];
     const label = r1?.name ?? r0?.name ?? `region ${i + 1}`;
-    if (!r0) out.push({ area: "geometry", path: `regions[${i}]`, text: `${label} added (${r1!.points.length} points, ${r1!.material})` });
+    if (!r0)
+      out.push({
+        area: "geometry",
+        path: `regions[${i}]`,
+        text: `${label} added (${r1!.points.length} points, ${r1!.material})`,
+      });
     else if (!r1) out.push({ area: "geometry", path: `regions[${i}]`, text: `${label} removed` });
     else {
-      if (r0.material !== r1.material) out.push({ area: "geometry", path: `regions[${i}].material`, text: `${label}: material ${r0.material} → ${r1.material}`, before: r0.material, after: r1.material });
+      if (r0.material !== r1.material)
+        out.push({
+          area: "geometry",
+          path: `regions[${i}].material`,
+          text: `${label}: material ${r0.material} → ${r1.material}`,
+          before: r0.material,
+          after: r1.material,
+        });
       if (!same(r0.points, r1.points)) {
-        const moved = r0.points.length === r1.points.length ? r1.points.filter((p, j) => !same(p, r0.points[j])).length : null;
+        const moved =
+          r0.points.length === r1.points.length ? r1.points.filter((p, j) => !same(p, r0.points[j])).length : null;
         out.push({
           area: "geometry",
           path: `regions[${i}].points`,
-          text: moved !== null ? `${label}: ${moved} point${moved === 1 ? "" : "s"} moved` : `${label}: ${r0.points.length} → ${r1.points.length} points`,
+          text:
+            moved !== null
+              ? `${label}: ${moved} point${moved === 1 ? "" : "s"} moved`
+              : `${label}: ${r0.points.length} → ${r1.points.length} points`,
         });
       }
     }
@@ -77,15 +101,29 @@ function diffWater(a: SectionDocument, b: SectionDocument, out: Difference[]): v
   const wa = a.water ?? {};
   const wb = b.water ?? {};
   if (!same(wa.phreatic, wb.phreatic)) {
-    out.push({ area: "water", path: "water.phreatic", text: !wa.phreatic ? "phreatic line added" : !wb.phreatic ? "phreatic line removed" : "phreatic line changed" });
+    out.push({
+      area: "water",
+      path: "water.phreatic",
+      text: !wa.phreatic ? "phreatic line added" : !wb.phreatic ? "phreatic line removed" : "phreatic line changed",
+    });
   }
-  if (!same(wa.ru, wb.ru)) out.push({ area: "water", path: "water.ru", text: `ru ${show(wa.ru)} → ${show(wb.ru)}`, before: show(wa.ru), after: show(wb.ru) });
-  if (!same(wa.gammaW, wb.gammaW)) out.push({ area: "water", path: "water.gammaW", text: `γw ${show(wa.gammaW)} → ${show(wb.gammaW)}` });
+  if (!same(wa.ru, wb.ru))
+    out.push({
+      area: "water",
+      path: "water.ru",
+      text: `ru ${show(wa.ru)} → ${show(wb.ru)}`,
+      before: show(wa.ru),
+      after: show(wb.ru),
+    });
+  if (!same(wa.gammaW, wb.gammaW))
+    out.push({ area: "water", path: "water.gammaW", text: `γw ${show(wa.gammaW)} → ${show(wb.gammaW)}` });
 }
 
 function diffLoads(a: SectionDocument, b: SectionDocument, out: Difference[]): void {
-  if (!same(a.loads?.surcharges, b.loads?.surcharges)) out.push({ area: "loads", path: "loads.surcharges", text: "surcharges changed" });
-  if (!same(a.loads?.kh, b.loads?.kh)) out.push({ area: "loads", path: "loads.kh", text: `kh ${show(a.loads?.kh)} → ${show(b.loads?.kh)}` });
+  if (!same(a.loads?.surcharges, b.loads?.surcharges))
+    out.push({ area: "loads", path: "loads.surcharges", text: "surcharges changed" });
+  if (!same(a.loads?.kh, b.loads?.kh))
+    out.push({ area: "loads", path: "loads.kh", text: `kh ${show(a.loads?.kh)} → ${show(b.loads?.kh)}` });
 }
 
 function diffAnalysis(a: SectionDocument, b: SectionDocument, out: Difference[]): void {
@@ -94,7 +132,13 @@ function diffAnalysis(a: SectionDocument, b: SectionDocument, out: Difference[])
   for (const key of new Set([...Object.keys(x), ...Object.keys(y)])) {
     if (!same(x[key], y[key])) {
       const simple = (v: unknown) => (typeof v === "object" && v !== null ? JSON.stringify(v) : show(v));
-      out.push({ area: "analysis", path: `analysis.${key}`, text: `${key}: ${simple(x[key])} → ${simple(y[key])}`, before: simple(x[key]), after: simple(y[key]) });
+      out.push({
+        area: "analysis",
+        path: `analysis.${key}`,
+        text: `${key}: ${simple(x[key])} → ${simple(y[key])}`,
+        before: simple(x[key]),
+        after: simple(y[key]),
+      });
     }
   }
 }
@@ -114,6 +158,9 @@ export function diffDocuments(a: SectionDocument, b: SectionDocument): Differenc
 export function summarizeChange(a: SectionDocument, b: SectionDocument, max = 3): string {
   const d = diffDocuments(a, b);
   if (d.length === 0) return "No change to the section";
-  const head = d.slice(0, max).map((x) => x.text).join("; ");
+  const head = d
+    .slice(0, max)
+    .map((x) => x.text)
+    .join("; ");
   return d.length > max ? `${head}; and ${d.length - max} more` : head;
 }

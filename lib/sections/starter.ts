@@ -12,8 +12,28 @@ export function starterSection(): SectionDocument {
       { id: "base", name: "Firm base", model: "impenetrable", gamma: 22 },
     ],
     regions: [
-      { name: "Base", material: "base", points: [[0, -2], [60, -2], [60, 0], [0, 0]] },
-      { name: "Bank", material: "fill", points: [[10, 0], [60, 0], [60, 4], [42, 4], [34, 8], [26, 8]] },
+      {
+        name: "Base",
+        material: "base",
+        points: [
+          [0, -2],
+          [60, -2],
+          [60, 0],
+          [0, 0],
+        ],
+      },
+      {
+        name: "Bank",
+        material: "fill",
+        points: [
+          [10, 0],
+          [60, 0],
+          [60, 4],
+          [42, 4],
+          [34, 8],
+          [26, 8],
+        ],
+      },
     ],
     water: { gammaW: 9.81 },
   };

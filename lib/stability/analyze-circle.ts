@@ -89,13 +89,33 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
   const S = createScratch();
   const c: Circle = { xc: circle.xc, yc: circle.yc, r: circle.r };
   const warnings: EngineWarning[] = [...issuesToWarnings(v.warnings), ...P.warnings];
-  const base = { ok: true as const, engineVersion: ENGINE_VERSION, circle: c, ordinaryForm: P.analysis.ordinaryForm, warnings };
+  const base = {
+    ok: true as const,
+    engineVersion: ENGINE_VERSION,
+    circle: c,
+    ordinaryForm: P.analysis.ordinaryForm,
+    warnings,
+  };
   if (![c.xc, c.yc, c.r].every(Number.isFinite)) {
-    return { ...base, fs: { bishop: null, fellenius: null }, reason: "radius-not-positive", reasonText: "The circle needs finite xc, yc and r.", masses: 0, slices: [] };
+    return {
+      ...base,
+      fs: { bishop: null, fellenius: null },
+      reason: "radius-not-positive",
+      reasonText: "The circle needs finite xc, yc and r.",
+      masses: 0,
+      slices: [],
+    };
   }
   const st = evaluateCircle(P, S, c.xc, c.yc, c.r, true);
   if (st !== OK) {
-    return { ...base, fs: { bishop: null, fellenius: null }, reason: REASONS[st], reasonText: REASON_TEXT[st], masses: S.nMass, slices: [] };
+    return {
+      ...base,
+      fs: { bishop: null, fellenius: null },
+      reason: REASONS[st],
+      reasonText: REASON_TEXT[st],
+      masses: S.nMass,
+      slices: [],
+    };
   }
   const fsB = S.fsB;
   const fsO = S.fsO;
@@ -117,11 +137,26 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
   const a: [number, number] = [xa, arcY(c.xc, c.yc, c.r, xa)];
   const b: [number, number] = [xb, arcY(c.xc, c.yc, c.r, xb)];
   if (Number.isFinite(fsB) && minMa < M_ALPHA_WARN) {
-    warnings.push({ code: "m-alpha-low", message: `mα falls to ${minMa.toFixed(3)} (below ${M_ALPHA_WARN}) at x = ${fmt(minMaX)} m, base angle ${minMaAlpha.toFixed(1)}°: exit too steep; move the circle or check with a method that satisfies force equilibrium.` });
+    warnings.push({
+      code: "m-alpha-low",
+      message: `mα falls to ${minMa.toFixed(3)} (below ${M_ALPHA_WARN}) at x = ${fmt(minMaX)} m, base angle ${minMaAlpha.toFixed(1)}°: exit too steep; move the circle or check with a method that satisfies force equilibrium.`,
+    });
   }
-  if (negO > 0) warnings.push({ code: "negative-normal", message: `Ordinary method: N' came out negative on ${negO} slice(s) and was set to zero.` });
-  if (Number.isFinite(fsB) && negB > 0) warnings.push({ code: "negative-normal", message: `Bishop's simplified method: N' came out negative on ${negB} slice(s); their shear strength is c'·l only.` });
-  if (S.nMass > 1) warnings.push({ code: "several-slip-masses", message: `The circle cuts ${S.nMass} separate pieces of soil; each was analysed and the lowest FS is reported. The slices shown are those of the governing piece.` });
+  if (negO > 0)
+    warnings.push({
+      code: "negative-normal",
+      message: `Ordinary method: N' came out negative on ${negO} slice(s) and was set to zero.`,
+    });
+  if (Number.isFinite(fsB) && negB > 0)
+    warnings.push({
+      code: "negative-normal",
+      message: `Bishop's simplified method: N' came out negative on ${negB} slice(s); their shear strength is c'·l only.`,
+    });
+  if (S.nMass > 1)
+    warnings.push({
+      code: "several-slip-masses",
+      message: `The circle cuts ${S.nMass} separate pieces of soil; each was analysed and the lowest FS is reported. The slices shown are those of the governing piece.`,
+    });
   return {
     ...base,
     fs: { bishop: finiteOrNull(fsB), fellenius: finiteOrNull(fsO) },

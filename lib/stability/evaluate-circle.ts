@@ -25,7 +25,15 @@ export { arcY };
  * Slices mass m of the circle and computes its driving term; returns a status code.
  * On OK, S holds the slices and S.D the driving term (kN, may be ≤ 0).
  */
-export function sliceMass(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, m: number, dir: number): number {
+export function sliceMass(
+  P: PreparedSection,
+  S: Scratch,
+  xc: number,
+  yc: number,
+  r: number,
+  m: number,
+  dir: number,
+): number {
   const st = buildSlices(P, S, xc, yc, r, S.massA[m], S.massB[m], dir);
   if (st !== OK) return st;
   let D = 0;
@@ -40,7 +48,14 @@ export function sliceMass(P: PreparedSection, S: Scratch, xc: number, yc: number
  * A staged drawdown (ENGINE.md §7(b)) goes to the staged evaluator: its FS is the final stage's.
  * @returns OK when the circle has at least one slip mass with a driving moment, else the reason.
  */
-export function evaluateCircle(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, wantBishop: boolean): number {
+export function evaluateCircle(
+  P: PreparedSection,
+  S: Scratch,
+  xc: number,
+  yc: number,
+  r: number,
+  wantBishop: boolean,
+): number {
   if (P.staged !== null) return evaluateStagedCircle(P, S, xc, yc, r, wantBishop);
   S.fsO = NaN;
   S.fsB = NaN;
@@ -68,7 +83,15 @@ function reject(S: Scratch, st: number): number {
 }
 
 /** Runs every mass in direction dir and keeps each method's lowest factor. */
-function runMasses(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, dir: number, wantBishop: boolean): number {
+function runMasses(
+  P: PreparedSection,
+  S: Scratch,
+  xc: number,
+  yc: number,
+  r: number,
+  dir: number,
+  wantBishop: boolean,
+): number {
   let fo = Infinity;
   let fb = Infinity;
   let mo = -1;
@@ -89,12 +112,22 @@ function runMasses(P: PreparedSection, S: Scratch, xc: number, yc: number, r: nu
     if (!(D > 1e-12)) continue;
     driving = true;
     const f0 = ordinaryFactor(S, D, eff);
-    if (f0 < fo) { fo = f0; mo = m; negO = S.negO; }
+    if (f0 < fo) {
+      fo = f0;
+      mo = m;
+      negO = S.negO;
+    }
     if (wantBishop) {
       const f1 = bishopFactor(S, D, f0);
       if (Number.isNaN(f1)) failB = S.reasonB;
       else if (f1 < fb) {
-        fb = f1; mb = m; minMa = S.minMa; minMaX = S.minMaX; minMaAlpha = S.minMaAlpha; negB = S.negB; iterations = S.iterations;
+        fb = f1;
+        mb = m;
+        minMa = S.minMa;
+        minMaX = S.minMaX;
+        minMaAlpha = S.minMaAlpha;
+        negB = S.negB;
+        iterations = S.iterations;
       }
     }
   }

@@ -10,7 +10,15 @@ import { evaluateCircle } from "./evaluate-circle";
 import type { EngineWarning } from "./issues";
 import { prepareSection } from "./prepare";
 import { refineFrom } from "./refine";
-import { describeCircle, finiteOrNull, issuesToWarnings, type CircleFs, type EngineFailure, type FsMap, type MethodRecord } from "./results";
+import {
+  describeCircle,
+  finiteOrNull,
+  issuesToWarnings,
+  type CircleFs,
+  type EngineFailure,
+  type FsMap,
+  type MethodRecord,
+} from "./results";
 import type { Grid, Method, Radii, SectionDocument } from "./schema";
 import { createScratch } from "./scratch";
 import { stageWarnings } from "./drawdown/staged-report";
@@ -78,7 +86,8 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
   const wantB = methods.includes("bishop");
   const xs = spaced(grid.x1, grid.x2, grid.nx);
   const ys = spaced(grid.y1, grid.y2, grid.ny);
-  const rv = "tangentY1" in radii ? spaced(radii.tangentY1, radii.tangentY2, radii.n) : spaced(radii.r1, radii.r2, radii.n);
+  const rv =
+    "tangentY1" in radii ? spaced(radii.tangentY1, radii.tangentY2, radii.n) : spaced(radii.r1, radii.r2, radii.n);
   const cells = grid.nx * grid.ny;
   const states = methods.map((m) => createMethodState(m, cells, analysis.lowestCount));
   const stO = states.find((s) => s.method === "fellenius");
@@ -109,7 +118,11 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
     }
     if (opts.onProgress && opts.onProgress((share * (iy + 1)) / grid.ny) === false) cancelled = true;
   }
-  for (const M of states) { M.coarseIx = M.bestIx; M.coarseIy = M.bestIy; M.coarseIr = M.bestIr; }
+  for (const M of states) {
+    M.coarseIx = M.bestIx;
+    M.coarseIy = M.bestIy;
+    M.coarseIr = M.bestIr;
+  }
   const fsOf = (m: Method) => (m === "bishop" ? S.fsB : S.fsO);
   if (analysis.refine && !cancelled) cancelled = !refineAll(states, grid, rv, xs, ys, visit, fsOf, opts);
   if (!cancelled && opts.onProgress) opts.onProgress(1);
@@ -118,7 +131,9 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
   const fsMap: MethodRecord<FsMap> = {};
   const lowest: MethodRecord<CircleFs[]> = {};
   for (const M of states) {
-    const crit = Number.isFinite(M.bestFs) ? describeCircle(P, S, { xc: M.bestXc, yc: M.bestYc, r: M.bestR }, M.method) : null;
+    const crit = Number.isFinite(M.bestFs)
+      ? describeCircle(P, S, { xc: M.bestXc, yc: M.bestYc, r: M.bestR }, M.method)
+      : null;
     results[M.method] = crit;
     fsMap[M.method] = { nx: grid.nx, ny: grid.ny, xs, ys, values: Array.from(M.map, finiteOrNull) };
     const list: CircleFs[] = [];
@@ -131,7 +146,11 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
     criticalWarnings(P, S, M.method, crit, warnings);
     stageWarnings(M.method, crit?.stages, "critical circle", warnings);
   }
-  if (cancelled) warnings.push({ code: "search-cancelled", message: "The search was cancelled; results cover the circles tried so far." });
+  if (cancelled)
+    warnings.push({
+      code: "search-cancelled",
+      message: "The search was cancelled; results cover the circles tried so far.",
+    });
   return {
     ok: true,
     engineVersion: ENGINE_VERSION,
@@ -150,7 +169,11 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
 
 /** Refines around up to 3 local minima of each method's map; false when cancelled. */
 function refineAll(
-  states: MethodState[], grid: Grid, rv: number[], xs: number[], ys: number[],
+  states: MethodState[],
+  grid: Grid,
+  rv: number[],
+  xs: number[],
+  ys: number[],
   visit: (xc: number, yc: number, r: number, cell: number, ix: number, iy: number, ir: number) => boolean,
   fsOf: (m: Method) => number,
   opts: GridSearchOptions,
@@ -164,10 +187,18 @@ function refineAll(
   let stop = false;
   for (const { M, cell } of starts) {
     const start = { xc: xs[cell % grid.nx], yc: ys[Math.floor(cell / grid.nx)], r: M.mapR[cell] };
-    const ok = refineFrom(start, M.map[cell], dx, dy, dr, (x, y, r) => {
-      const f = visit(x, y, r, -1, -1, -1, -1) ? fsOf(M.method) : NaN;
-      return f > 0 ? f : Infinity;
-    }, () => stop);
+    const ok = refineFrom(
+      start,
+      M.map[cell],
+      dx,
+      dy,
+      dr,
+      (x, y, r) => {
+        const f = visit(x, y, r, -1, -1, -1, -1) ? fsOf(M.method) : NaN;
+        return f > 0 ? f : Infinity;
+      },
+      () => stop,
+    );
     if (!ok) return false;
     done++;
     if (opts.onProgress && opts.onProgress(0.8 + (0.2 * done) / starts.length) === false) stop = true;

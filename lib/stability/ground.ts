@@ -22,8 +22,12 @@ export function deriveGround(t: StripTable): GroundLine {
     const x = t.xs[k];
     const yl = top(k - 1, x);
     const yr = top(k, x);
-    xs.push(x); ys.push(yl);
-    if (Math.abs(yl - yr) > 1e-9) { xs.push(x); ys.push(yr); }
+    xs.push(x);
+    ys.push(yl);
+    if (Math.abs(yl - yr) > 1e-9) {
+      xs.push(x);
+      ys.push(yr);
+    }
   }
   xs.push(t.xs[t.n]);
   ys.push(top(t.n - 1, t.xs[t.n]));
@@ -41,7 +45,8 @@ function simplify(xs: number[], ys: number[]): GroundLine {
     const scale = Math.hypot(xs[i + 1] - ax, ys[i + 1] - ay) * Math.hypot(xs[i] - ax, ys[i] - ay);
     const forward = (xs[i] - ax) * (xs[i + 1] - xs[i]) + (ys[i] - ay) * (ys[i + 1] - ys[i]) > 0;
     if (Math.abs(cross) <= 1e-12 * scale && forward) continue;
-    ox.push(xs[i]); oy.push(ys[i]);
+    ox.push(xs[i]);
+    oy.push(ys[i]);
   }
   ox.push(xs[xs.length - 1]);
   oy.push(ys[ys.length - 1]);

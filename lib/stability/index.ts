@@ -3,7 +3,14 @@ export * from "./schema";
 export { ENGINE_VERSION } from "./version";
 export type { Issue, EngineWarning } from "./issues";
 export { validateSection, type ValidationResult } from "./validate";
-export { resolveAnalysis, DEFAULT_SLICES, DEFAULT_GAMMA_W, DEFAULT_LOWEST_COUNT, MAX_SLICES, type ResolvedAnalysis } from "./defaults";
+export {
+  resolveAnalysis,
+  DEFAULT_SLICES,
+  DEFAULT_GAMMA_W,
+  DEFAULT_LOWEST_COUNT,
+  MAX_SLICES,
+  type ResolvedAnalysis,
+} from "./defaults";
 export { runGridSearch, type GridSearchOptions, type GridSearchResult, type GridSearchSuccess } from "./grid-search";
 export { analyzeCircle, type CircleResult, type CircleSuccess, type SliceRow } from "./analyze-circle";
 export type { Circle, CircleFs, FsMap, EngineFailure, MethodRecord } from "./results";

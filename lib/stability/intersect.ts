@@ -54,7 +54,10 @@ export function findMasses(P: PreparedSection, S: Scratch, xc: number, yc: numbe
   for (let i = 1; i < nr; i++) {
     const v = roots[i];
     let j = i - 1;
-    while (j >= 0 && roots[j] > v) { roots[j + 1] = roots[j]; j--; }
+    while (j >= 0 && roots[j] > v) {
+      roots[j + 1] = roots[j];
+      j--;
+    }
     roots[j + 1] = v;
   }
   const lo = Math.max(P.xmin, xc - r);

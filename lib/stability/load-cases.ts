@@ -28,7 +28,10 @@ export interface MaterialTable {
 }
 
 /** Builds the strength table for one load case, with the warnings that case calls for. */
-export function buildMaterialTable(materials: ReadonlyArray<Material>, loadCase: LoadCase): { table: MaterialTable; warnings: EngineWarning[] } {
+export function buildMaterialTable(
+  materials: ReadonlyArray<Material>,
+  loadCase: LoadCase,
+): { table: MaterialTable; warnings: EngineWarning[] } {
   const n = materials.length;
   const t: MaterialTable = {
     kind: new Uint8Array(n),

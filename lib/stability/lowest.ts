@@ -12,7 +12,14 @@ export interface LowestList {
 }
 
 export function createLowest(cap: number): LowestList {
-  return { cap, n: 0, fs: new Float64Array(cap), xc: new Float64Array(cap), yc: new Float64Array(cap), r: new Float64Array(cap) };
+  return {
+    cap,
+    n: 0,
+    fs: new Float64Array(cap),
+    xc: new Float64Array(cap),
+    yc: new Float64Array(cap),
+    r: new Float64Array(cap),
+  };
 }
 
 /** Offers a circle; kept if among the cap lowest. Ties keep the earlier circle first. */
@@ -21,8 +28,14 @@ export function offerLowest(L: LowestList, fs: number, xc: number, yc: number, r
   if (L.n === L.cap && fs >= L.fs[L.n - 1]) return;
   let i = L.n < L.cap ? L.n++ : L.n - 1;
   while (i > 0 && L.fs[i - 1] > fs) {
-    L.fs[i] = L.fs[i - 1]; L.xc[i] = L.xc[i - 1]; L.yc[i] = L.yc[i - 1]; L.r[i] = L.r[i - 1];
+    L.fs[i] = L.fs[i - 1];
+    L.xc[i] = L.xc[i - 1];
+    L.yc[i] = L.yc[i - 1];
+    L.r[i] = L.r[i - 1];
     i--;
   }
-  L.fs[i] = fs; L.xc[i] = xc; L.yc[i] = yc; L.r[i] = r;
+  L.fs[i] = fs;
+  L.xc[i] = xc;
+  L.yc[i] = yc;
+  L.r[i] = r;
 }

@@ -86,7 +86,10 @@ export function prepareSection(doc: SectionDocument, analysisIn?: ResolvedAnalys
   const water = buildWaterModel(doc.water, ground, analysis.case, analysis.drawdown, gammaW);
   // A drawdown also breaks slices at the pre-drawdown line, whichever method: stage 1 of a
   // staged analysis needs it, and so both methods cut a circle into the same slices.
-  const preWater = analysis.case === "drawdown" && analysis.drawdown && water.surface ? buildWaterModel(doc.water, ground, "steady", undefined, gammaW) : null;
+  const preWater =
+    analysis.case === "drawdown" && analysis.drawdown && water.surface
+      ? buildWaterModel(doc.water, ground, "steady", undefined, gammaW)
+      : null;
   const surcharges = doc.loads?.surcharges ?? [];
   const breaks = [...water.breaks];
   if (preWater) breaks.push(...preWater.breaks);
@@ -103,14 +106,25 @@ export function prepareSection(doc: SectionDocument, analysisIn?: ResolvedAnalys
     pre.extraWaterA = P.waterA;
     pre.extraWaterB = P.waterB;
     if (isStagedDrawdown(analysis)) {
-      P.staged = buildStagedModel(doc.materials, pre, analysis.drawdown?.stagedVariant === "usace-two-stage" ? VARIANT_TWO_STAGE : VARIANT_THREE_STAGE);
+      P.staged = buildStagedModel(
+        doc.materials,
+        pre,
+        analysis.drawdown?.stagedVariant === "usace-two-stage" ? VARIANT_TWO_STAGE : VARIANT_THREE_STAGE,
+      );
     }
   }
   return P;
 }
 
 /** Fills the per-strip water, surcharge and face arrays of one water model. */
-function assemble(doc: SectionDocument, analysis: ResolvedAnalysis, table: StripTable, water: WaterModel, mat: MaterialTable, warnings: EngineWarning[]): PreparedSection {
+function assemble(
+  doc: SectionDocument,
+  analysis: ResolvedAnalysis,
+  table: StripTable,
+  water: WaterModel,
+  mat: MaterialTable,
+  warnings: EngineWarning[],
+): PreparedSection {
   const surcharges = doc.loads?.surcharges ?? [];
   const n = table.n;
   const waterA = new Float64Array(n);

@@ -15,7 +15,15 @@ const MIN_GAIN = 0.0005;
  * Refines from a start circle with FS f0, grid spacings dx, dy and radius step dr (m).
  * @returns false when cancelled
  */
-export function refineFrom(start: { xc: number; yc: number; r: number }, f0: number, dx: number, dy: number, dr: number, tryCircle: TryCircle, cancelled: () => boolean): boolean {
+export function refineFrom(
+  start: { xc: number; yc: number; r: number },
+  f0: number,
+  dx: number,
+  dy: number,
+  dr: number,
+  tryCircle: TryCircle,
+  cancelled: () => boolean,
+): boolean {
   let cx = start.xc;
   let cy = start.yc;
   let cr = start.r;
@@ -39,13 +47,21 @@ export function refineFrom(start: { xc: number; yc: number; r: number }, f0: num
           const y = cy + j * hy;
           const r = cr + k * hr;
           const f = tryCircle(x, y, r);
-          if (f < bf) { bf = f; bx = x; by = y; br = r; }
+          if (f < bf) {
+            bf = f;
+            bx = x;
+            by = y;
+            br = r;
+          }
         }
       }
       if (cancelled()) return false;
     }
     const gain = cf - bf;
-    cx = bx; cy = by; cr = br; cf = bf;
+    cx = bx;
+    cy = by;
+    cr = br;
+    cf = bf;
     if (gain < MIN_GAIN) break;
   }
   return true;

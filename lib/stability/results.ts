@@ -65,7 +65,13 @@ export function describeCircle(P: PreparedSection, S: Scratch, c: Circle, method
   const a: [number, number] = [xa, arcY(c.xc, c.yc, c.r, xa)];
   const b: [number, number] = [xb, arcY(c.xc, c.yc, c.r, xb)];
   const right = S.dir >= 0;
-  const out: CircleFs = { fs, circle: { ...c }, entry: right ? a : b, exit: right ? b : a, direction: right ? "right" : "left" };
+  const out: CircleFs = {
+    fs,
+    circle: { ...c },
+    entry: right ? a : b,
+    exit: right ? b : a,
+    direction: right ? "right" : "left",
+  };
   if (P.staged !== null) out.stages = stageSummary(method === "bishop" ? S.stage.govB : S.stage.govO);
   return out;
 }

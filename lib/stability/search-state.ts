@@ -27,8 +27,16 @@ export interface MethodState {
 export function createMethodState(method: Method, cells: number, lowestCount: number): MethodState {
   return {
     method,
-    bestFs: Infinity, bestXc: NaN, bestYc: NaN, bestR: NaN,
-    bestIx: -1, bestIy: -1, bestIr: -1, coarseIx: -1, coarseIy: -1, coarseIr: -1,
+    bestFs: Infinity,
+    bestXc: NaN,
+    bestYc: NaN,
+    bestR: NaN,
+    bestIx: -1,
+    bestIy: -1,
+    bestIr: -1,
+    coarseIx: -1,
+    coarseIy: -1,
+    coarseIr: -1,
     map: new Float64Array(cells).fill(NaN),
     mapR: new Float64Array(cells).fill(NaN),
     lowest: createLowest(lowestCount),
@@ -36,14 +44,32 @@ export function createMethodState(method: Method, cells: number, lowestCount: nu
 }
 
 /** Records one valid FS; cell < 0 for refinement circles, which stay off the map. */
-export function recordFs(M: MethodState, fs: number, xc: number, yc: number, r: number, cell: number, ix: number, iy: number, ir: number): void {
+export function recordFs(
+  M: MethodState,
+  fs: number,
+  xc: number,
+  yc: number,
+  r: number,
+  cell: number,
+  ix: number,
+  iy: number,
+  ir: number,
+): void {
   if (cell >= 0) {
     const cur = M.map[cell];
-    if (!(cur <= fs)) { M.map[cell] = fs; M.mapR[cell] = r; }
+    if (!(cur <= fs)) {
+      M.map[cell] = fs;
+      M.mapR[cell] = r;
+    }
   }
   if (fs < M.bestFs) {
-    M.bestFs = fs; M.bestXc = xc; M.bestYc = yc; M.bestR = r;
-    M.bestIx = ix; M.bestIy = iy; M.bestIr = ir;
+    M.bestFs = fs;
+    M.bestXc = xc;
+    M.bestYc = yc;
+    M.bestR = r;
+    M.bestIx = ix;
+    M.bestIy = iy;
+    M.bestIr = ir;
   }
   offerLowest(M.lowest, fs, xc, yc, r);
 }
@@ -61,7 +87,10 @@ export function localMinima(M: MethodState, nx: number, ny: number, count: numbe
           const jx = ix + dx;
           const jy = iy + dy;
           if ((dx === 0 && dy === 0) || jx < 0 || jy < 0 || jx >= nx || jy >= ny) continue;
-          if (M.map[jy * nx + jx] < v) { isMin = false; break; }
+          if (M.map[jy * nx + jx] < v) {
+            isMin = false;
+            break;
+          }
         }
       }
       if (isMin) cells.push(iy * nx + ix);

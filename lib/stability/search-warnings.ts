@@ -27,29 +27,50 @@ export function gridEdgeWarnings(M: MethodState, grid: Grid, nr: number, out: En
   if (grid.ny > 1 && M.coarseIy === 0) sides.push(`bottom (move the grid about ${fmt(h / 2)} m down)`);
   if (grid.ny > 1 && M.coarseIy === grid.ny - 1) sides.push(`top (move the grid about ${fmt(h / 2)} m up)`);
   if (sides.length > 0) {
-    out.push({ code: "minimum-on-grid-edge", message: `${LABEL[M.method]}: the lowest factor of safety lies on the ${sides.join(" and ")} edge of the centre grid; a lower one may lie outside it. Move the grid and run again.` });
+    out.push({
+      code: "minimum-on-grid-edge",
+      message: `${LABEL[M.method]}: the lowest factor of safety lies on the ${sides.join(" and ")} edge of the centre grid; a lower one may lie outside it. Move the grid and run again.`,
+    });
   }
   if (nr > 1 && (M.coarseIr === 0 || M.coarseIr === nr - 1)) {
-    out.push({ code: "minimum-at-radius-limit", message: `${LABEL[M.method]}: the lowest factor of safety uses the ${M.coarseIr === 0 ? "first" : "last"} radius of the range; widen the radii and run again.` });
+    out.push({
+      code: "minimum-at-radius-limit",
+      message: `${LABEL[M.method]}: the lowest factor of safety uses the ${M.coarseIr === 0 ? "first" : "last"} radius of the range; widen the radii and run again.`,
+    });
   }
 }
 
 /** Warnings about a method's critical circle itself. */
-export function criticalWarnings(P: PreparedSection, S: Scratch, method: Method, crit: CircleFs | null, out: EngineWarning[]): void {
+export function criticalWarnings(
+  P: PreparedSection,
+  S: Scratch,
+  method: Method,
+  crit: CircleFs | null,
+  out: EngineWarning[],
+): void {
   if (!crit) {
-    out.push({ code: "no-valid-circle", message: `${LABEL[method]}: no trial circle gave a factor of safety. Check that the grid lies above the slope and the radii reach the ground.` });
+    out.push({
+      code: "no-valid-circle",
+      message: `${LABEL[method]}: no trial circle gave a factor of safety. Check that the grid lies above the slope and the radii reach the ground.`,
+    });
     return;
   }
   const width = P.xmax - P.xmin;
   const lo = Math.min(crit.entry[0], crit.exit[0]);
   const hi = Math.max(crit.entry[0], crit.exit[0]);
   if (lo - P.xmin < 0.01 * width || P.xmax - hi < 0.01 * width) {
-    out.push({ code: "mass-near-section-side", message: `${LABEL[method]}: the critical slip mass comes within 1% of a side of the section; extend the section so the side does not limit the circle.` });
+    out.push({
+      code: "mass-near-section-side",
+      message: `${LABEL[method]}: the critical slip mass comes within 1% of a side of the section; extend the section so the side does not limit the circle.`,
+    });
   }
   if (method === "bishop") {
     evaluateCircle(P, S, crit.circle.xc, crit.circle.yc, crit.circle.r, true);
     if (S.minMa < M_ALPHA_WARN) {
-      out.push({ code: "m-alpha-low", message: `Bishop's simplified method: mα falls to ${S.minMa.toFixed(3)} (below ${M_ALPHA_WARN}) at x = ${fmt(S.minMaX)} m, base angle ${S.minMaAlpha.toFixed(1)}°, on the critical circle: exit too steep; move the grid or check with a method that satisfies force equilibrium.` });
+      out.push({
+        code: "m-alpha-low",
+        message: `Bishop's simplified method: mα falls to ${S.minMa.toFixed(3)} (below ${M_ALPHA_WARN}) at x = ${fmt(S.minMaX)} m, base angle ${S.minMaAlpha.toFixed(1)}°, on the critical circle: exit too steep; move the grid or check with a method that satisfies force equilibrium.`,
+      });
     }
   }
 }

@@ -11,9 +11,7 @@ export type Point = [number, number];
 
 /** The upstream face: two points, a toe with an H:V slope and a crest elevation, or a polyline. */
 export type UpstreamFace =
-  | { toe: Point; crest: Point }
-  | { toe: Point; slopeHV: number; crestElevation: number }
-  | { points: Point[] };
+  { toe: Point; crest: Point } | { toe: Point; slopeHV: number; crestElevation: number } | { points: Point[] };
 
 /** The downstream face from its crest corner down to its toe (x increasing). */
 export type DownstreamFace = { crest: Point; toe: Point } | { points: Point[] };
@@ -135,13 +133,20 @@ export function freeSurfaceGradientAt(p: BasicParabola, x: number): number {
 
 /** Exit gradient from a flow net: i = (H/Nd)/Δl (ENGINE.md §6). */
 export function flowNetExitGradient(headLoss: number, equipotentialDrops: number, lastElementLength: number): number {
-  if (!(headLoss > 0 && equipotentialDrops > 0 && lastElementLength > 0)) throw new Error("flow net: H, Nd and Δl must be positive");
+  if (!(headLoss > 0 && equipotentialDrops > 0 && lastElementLength > 0))
+    throw new Error("flow net: H, Nd and Δl must be positive");
   return headLoss / equipotentialDrops / lastElementLength;
 }
 
 /** Seepage from a flow net: q = k·H·Nf/Nd (m³/s per metre). */
-export function flowNetDischarge(k: number, headLoss: number, flowChannels: number, equipotentialDrops: number): number {
-  if (!(k > 0 && headLoss > 0 && flowChannels > 0 && equipotentialDrops > 0)) throw new Error("flow net: k, H, Nf and Nd must be positive");
+export function flowNetDischarge(
+  k: number,
+  headLoss: number,
+  flowChannels: number,
+  equipotentialDrops: number,
+): number {
+  if (!(k > 0 && headLoss > 0 && flowChannels > 0 && equipotentialDrops > 0))
+    throw new Error("flow net: k, H, Nf and Nd must be positive");
   return (k * headLoss * flowChannels) / equipotentialDrops;
 }
 
@@ -167,13 +172,30 @@ export function computeFilterSeepage(input: SeepageInput): SeepageResult {
   const base = input.baseElevation;
   const pool = input.poolElevation;
   const [toe, crest] = up;
-  if (Math.abs(toe[1] - base) > TOL) error("E_SEEP_FACE_TOE", `The upstream face starts at y = ${f2(toe[1])} m, not on the base (y = ${f2(base)} m). ${HAND_DRAWN}`);
-  if (pool <= base) error("E_SEEP_POOL_BELOW_BASE", `The pool (${f2(pool)} m) is not above the base (${f2(base)} m): there is no seepage to construct.`);
-  if (pool > crest[1] + TOL) error("E_SEEP_POOL_ABOVE_CREST", `The pool (${f2(pool)} m) is above the crest (${f2(crest[1])} m): the dam overtops and the method does not apply. ${HAND_DRAWN}`);
+  if (Math.abs(toe[1] - base) > TOL)
+    error(
+      "E_SEEP_FACE_TOE",
+      `The upstream face starts at y = ${f2(toe[1])} m, not on the base (y = ${f2(base)} m). ${HAND_DRAWN}`,
+    );
+  if (pool <= base)
+    error(
+      "E_SEEP_POOL_BELOW_BASE",
+      `The pool (${f2(pool)} m) is not above the base (${f2(base)} m): there is no seepage to construct.`,
+    );
+  if (pool > crest[1] + TOL)
+    error(
+      "E_SEEP_POOL_ABOVE_CREST",
+      `The pool (${f2(pool)} m) is above the crest (${f2(crest[1])} m): the dam overtops and the method does not apply. ${HAND_DRAWN}`,
+    );
   const xF = input.filterStartX;
   const downToe = down[down.length - 1];
-  if (xF === undefined || xF === null) error("E_SEEP_NO_FILTER", `No toe filter is given: the basic parabola needs one. ${HAND_DRAWN}`);
-  else if (xF >= downToe[0] - TOL) error("E_SEEP_NO_FILTER", `The filter starts at x = ${f2(xF)} m, at or beyond the downstream toe (x = ${f2(downToe[0])} m): there is no filter under the dam. ${HAND_DRAWN}`);
+  if (xF === undefined || xF === null)
+    error("E_SEEP_NO_FILTER", `No toe filter is given: the basic parabola needs one. ${HAND_DRAWN}`);
+  else if (xF >= downToe[0] - TOL)
+    error(
+      "E_SEEP_NO_FILTER",
+      `The filter starts at x = ${f2(xF)} m, at or beyond the downstream toe (x = ${f2(downToe[0])} m): there is no filter under the dam. ${HAND_DRAWN}`,
+    );
   if (limits.length) return { ok: false, limits };
   if (Math.abs(pool - crest[1]) <= TOL) warn("W_SEEP_NO_FREEBOARD", "The pool is at the crest: no freeboard.");
 
@@ -183,14 +205,20 @@ export function computeFilterSeepage(input: SeepageInput): SeepageResult {
   const m = xB - toe[0];
   const xJ = xB + 0.3 * m;
   if ((xF as number) <= xJ + TOL) {
-    error("E_SEEP_FILTER_UPSTREAM", `The filter starts at x = ${f2(xF as number)} m, upstream of the end of the entry zone (x = ${f2(xJ)} m): move it downstream. ${HAND_DRAWN}`);
+    error(
+      "E_SEEP_FILTER_UPSTREAM",
+      `The filter starts at x = ${f2(xF as number)} m, upstream of the end of the entry zone (x = ${f2(xJ)} m): move it downstream. ${HAND_DRAWN}`,
+    );
     return { ok: false, limits };
   }
   const construction = buildConstruction(base, pool, h, m, xB, xF as number, s, toe, downToe, warn);
 
   const crossing = findEmergence(construction.waterLine, down);
   if (crossing) {
-    error("E_SEEP_EMERGES", `The phreatic line crosses the downstream face near (${f2(crossing[0])}, ${f2(crossing[1])}): lengthen the filter or draw the line.`);
+    error(
+      "E_SEEP_EMERGES",
+      `The phreatic line crosses the downstream face near (${f2(crossing[0])}, ${f2(crossing[1])}): lengthen the filter or draw the line.`,
+    );
     return { ok: false, limits, construction };
   }
 
@@ -207,12 +235,36 @@ function pipingCheck(input: SeepageInput, c: SeepageConstruction, h: number, lim
     ? flowNetExitGradient(net.headLoss ?? h, net.equipotentialDrops, net.lastElementLength)
     : freeSurfaceGradientAt(c.parabola, c.vertex[0]);
   const required = input.requiredPipingFactor ?? 3;
-  if (!net) limits.push({ code: "W_SEEP_EXIT_INTO_FILTER", severity: "warning", message: "The exit gradient is taken where the top flow line enters the filter (i = 1 there): that exit is safe only if the filter meets filter criteria. Give a flow net (Nd, Δl) for an unprotected exit." });
+  if (!net)
+    limits.push({
+      code: "W_SEEP_EXIT_INTO_FILTER",
+      severity: "warning",
+      message:
+        "The exit gradient is taken where the top flow line enters the filter (i = 1 there): that exit is safe only if the filter meets filter criteria. Give a flow net (Nd, Δl) for an unprotected exit.",
+    });
   const pipingFactor = iCr / exitGradient;
-  return { criticalGradient: iCr, exitGradient, exitGradientMethod: net ? "flow-net" : "free-surface-at-filter", pipingFactor, required, adequate: pipingFactor >= required };
+  return {
+    criticalGradient: iCr,
+    exitGradient,
+    exitGradientMethod: net ? "flow-net" : "free-surface-at-filter",
+    pipingFactor,
+    required,
+    adequate: pipingFactor >= required,
+  };
 }
 
-function buildConstruction(base: number, pool: number, h: number, m: number, xB: number, xF: number, s: number, upToe: Point, downToe: Point, warn: (code: string, message: string) => void): SeepageConstruction {
+function buildConstruction(
+  base: number,
+  pool: number,
+  h: number,
+  m: number,
+  xB: number,
+  xF: number,
+  s: number,
+  upToe: Point,
+  downToe: Point,
+  warn: (code: string, message: string) => void,
+): SeepageConstruction {
   // Construct in the transformed section (x scaled by s = √(kv/kh)), then map x back.
   const xA = xB - 0.3 * m;
   const d = s * (xF - xA);
@@ -238,14 +290,35 @@ function buildConstruction(base: number, pool: number, h: number, m: number, xB:
   waterLine.push(...phreatic);
   if (downToe[0] > vertexX + TOL) waterLine.push([downToe[0], base]);
 
-  return { h, m, d, y0, pointA: [xA, pool], pointB: [xB, pool], entryEnd: [xJ, yJ], focus: [xF, base], vertex: [vertexX, base], parabola, phreatic, waterLine };
+  return {
+    h,
+    m,
+    d,
+    y0,
+    pointA: [xA, pool],
+    pointB: [xB, pool],
+    entryEnd: [xJ, yJ],
+    focus: [xF, base],
+    vertex: [vertexX, base],
+    parabola,
+    phreatic,
+    waterLine,
+  };
 }
 
 /**
  * Entry from B normal to the face, joined tangentially to the parabola at J: a cubic Hermite on
  * [xB, xJ] with Fritsch–Carlson limiting of the end slopes so the line keeps falling.
  */
-function entryCurve(x0: number, y0: number, x1: number, y1: number, slope0: number, slope1: number, warn: (code: string, message: string) => void): Point[] {
+function entryCurve(
+  x0: number,
+  y0: number,
+  x1: number,
+  y1: number,
+  slope0: number,
+  slope1: number,
+  warn: (code: string, message: string) => void,
+): Point[] {
   const width = x1 - x0;
   const secant = (y1 - y0) / width;
   let d0 = slope0;
@@ -256,7 +329,10 @@ function entryCurve(x0: number, y0: number, x1: number, y1: number, slope0: numb
     const t = 3 / Math.hypot(a, b);
     d0 *= t;
     d1 *= t;
-    warn("W_SEEP_ENTRY_LIMITED", "The entry curve was flattened to keep the line falling; it leaves B less steeply than normal to the face.");
+    warn(
+      "W_SEEP_ENTRY_LIMITED",
+      "The entry curve was flattened to keep the line falling; it leaves B less steeply than normal to the face.",
+    );
   }
   const points: Point[] = [];
   const n = 16;
@@ -303,33 +379,59 @@ function upstreamFacePoints(face: UpstreamFace, error: (code: string, message: s
   let toe: Point;
   let crest: Point;
   if ("points" in face) {
-    if (face.points.length < 2 || !face.points.every(isPoint)) return refuse(error, "E_SEEP_INPUT", "The upstream face needs at least two points with finite coordinates.");
+    if (face.points.length < 2 || !face.points.every(isPoint))
+      return refuse(error, "E_SEEP_INPUT", "The upstream face needs at least two points with finite coordinates.");
     toe = face.points[0];
     crest = face.points[face.points.length - 1];
     const off = face.points.slice(1, -1).some((p) => distanceToLine(p, toe, crest) > TOL);
-    if (off) return refuse(error, "E_SEEP_FACE_NOT_PLANE", `The upstream face is not one plane (berms or bends): the entry correction assumes a plane face. ${HAND_DRAWN}`);
+    if (off)
+      return refuse(
+        error,
+        "E_SEEP_FACE_NOT_PLANE",
+        `The upstream face is not one plane (berms or bends): the entry correction assumes a plane face. ${HAND_DRAWN}`,
+      );
   } else if ("slopeHV" in face) {
-    if (!isPoint(face.toe) || !(face.slopeHV > 0) || !Number.isFinite(face.slopeHV) || !Number.isFinite(face.crestElevation)) {
-      return refuse(error, "E_SEEP_INPUT", "The upstream face needs a toe point, a positive H:V slope and a crest elevation.");
+    if (
+      !isPoint(face.toe) ||
+      !(face.slopeHV > 0) ||
+      !Number.isFinite(face.slopeHV) ||
+      !Number.isFinite(face.crestElevation)
+    ) {
+      return refuse(
+        error,
+        "E_SEEP_INPUT",
+        "The upstream face needs a toe point, a positive H:V slope and a crest elevation.",
+      );
     }
     toe = face.toe;
     crest = [toe[0] + face.slopeHV * (face.crestElevation - toe[1]), face.crestElevation];
   } else {
-    if (!isPoint(face.toe) || !isPoint(face.crest)) return refuse(error, "E_SEEP_INPUT", "The upstream face needs toe and crest points with finite coordinates.");
+    if (!isPoint(face.toe) || !isPoint(face.crest))
+      return refuse(error, "E_SEEP_INPUT", "The upstream face needs toe and crest points with finite coordinates.");
     toe = face.toe;
     crest = face.crest;
   }
   if (!(crest[1] > toe[1]) || crest[0] < toe[0]) {
-    return refuse(error, "E_SEEP_FACE_DIRECTION", "The upstream face must rise to the right from its toe (reservoir on the left): mirror the section.");
+    return refuse(
+      error,
+      "E_SEEP_FACE_DIRECTION",
+      "The upstream face must rise to the right from its toe (reservoir on the left): mirror the section.",
+    );
   }
   return [toe, crest];
 }
 
 function downstreamFacePoints(face: DownstreamFace, error: (code: string, message: string) => void): Point[] | null {
   const points = "points" in face ? face.points : [face.crest, face.toe];
-  if (points.length < 2 || !points.every(isPoint)) return refuse(error, "E_SEEP_INPUT", "The downstream face needs at least two points with finite coordinates.");
+  if (points.length < 2 || !points.every(isPoint))
+    return refuse(error, "E_SEEP_INPUT", "The downstream face needs at least two points with finite coordinates.");
   for (let i = 1; i < points.length; i++) {
-    if (!(points[i][0] > points[i - 1][0])) return refuse(error, "E_SEEP_INPUT", `Downstream face point ${i + 1} is not right of point ${i}: list it from the crest to the toe.`);
+    if (!(points[i][0] > points[i - 1][0]))
+      return refuse(
+        error,
+        "E_SEEP_INPUT",
+        `Downstream face point ${i + 1} is not right of point ${i}: list it from the crest to the toe.`,
+      );
   }
   return points;
 }
@@ -338,18 +440,22 @@ function checkNumbers(input: SeepageInput, error: (code: string, message: string
   const finite = (v: unknown) => typeof v === "number" && Number.isFinite(v);
   if (!finite(input.baseElevation)) error("E_SEEP_INPUT", "The base elevation must be a finite number.");
   if (!finite(input.poolElevation)) error("E_SEEP_INPUT", "The pool elevation must be a finite number.");
-  if (input.filterStartX !== undefined && input.filterStartX !== null && !finite(input.filterStartX)) error("E_SEEP_INPUT", "The filter's start x must be a finite number.");
-  if (!(finite(input.permeability) && input.permeability > 0)) error("E_SEEP_INPUT", "The permeability k must be a positive number (m/s).");
+  if (input.filterStartX !== undefined && input.filterStartX !== null && !finite(input.filterStartX))
+    error("E_SEEP_INPUT", "The filter's start x must be a finite number.");
+  if (!(finite(input.permeability) && input.permeability > 0))
+    error("E_SEEP_INPUT", "The permeability k must be a positive number (m/s).");
   const ratio = input.anisotropyRatio ?? 1;
   if (!(finite(ratio) && ratio > 0)) error("E_SEEP_INPUT", "The anisotropy ratio kv/kh must be a positive number.");
   const gw = input.gammaW ?? 9.81;
   if (!(finite(gw) && gw >= 9.7 && gw <= 10.3)) error("E_SEEP_INPUT", "γw must lie between 9.7 and 10.3 kN/m³.");
-  if (!(finite(input.gammaSat) && input.gammaSat > gw && input.gammaSat <= 30)) error("E_SEEP_INPUT", "γsat must be above γw and at most 30 kN/m³.");
-  if (input.crestLength !== undefined && !(finite(input.crestLength) && input.crestLength > 0)) error("E_SEEP_INPUT", "The crest length must be a positive number (m).");
+  if (!(finite(input.gammaSat) && input.gammaSat > gw && input.gammaSat <= 30))
+    error("E_SEEP_INPUT", "γsat must be above γw and at most 30 kN/m³.");
+  if (input.crestLength !== undefined && !(finite(input.crestLength) && input.crestLength > 0))
+    error("E_SEEP_INPUT", "The crest length must be a positive number (m).");
   const req = input.requiredPipingFactor ?? 3;
   if (!(finite(req) && req > 0)) error("E_SEEP_INPUT", "The required piping factor must be a positive number.");
   const net = input.flowNet;
-  if (net && !([net.equipotentialDrops, net.lastElementLength, net.headLoss ?? 1].every((v) => finite(v) && v > 0))) {
+  if (net && ![net.equipotentialDrops, net.lastElementLength, net.headLoss ?? 1].every((v) => finite(v) && v > 0)) {
     error("E_SEEP_INPUT", "The flow net's Nd, Δl and H must be positive numbers.");
   }
 }

@@ -24,7 +24,15 @@ const SHALLOW = status.SHALLOW;
 const TOO_MANY_BREAKS = status.TOO_MANY_BREAKS;
 
 /** Collects the slice boundaries of mass [xA, xB]; returns how many are in S.kept (−1 if too many). */
-function collectBreaks(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, xA: number, xB: number): number {
+function collectBreaks(
+  P: PreparedSection,
+  S: Scratch,
+  xc: number,
+  yc: number,
+  r: number,
+  xA: number,
+  xB: number,
+): number {
   const T = P.table;
   const brk = S.brk;
   const cap = brk.length - 4;
@@ -72,7 +80,10 @@ function collectBreaks(P: PreparedSection, S: Scratch, xc: number, yc: number, r
     for (let i = start + 1; i < nb; i++) {
       const v = brk[i];
       let j = i - 1;
-      while (j >= start && brk[j] > v) { brk[j + 1] = brk[j]; j--; }
+      while (j >= start && brk[j] > v) {
+        brk[j + 1] = brk[j];
+        j--;
+      }
       brk[j + 1] = v;
     }
     if (nb >= cap) return -1;
@@ -100,7 +111,16 @@ function collectBreaks(P: PreparedSection, S: Scratch, xc: number, yc: number, r
  * Builds the slices of mass [xA, xB] of circle (xc, yc, r) sliding in direction dir.
  * @returns a status code; on OK, S.n slices are filled and S.depth is the mass thickness (m).
  */
-export function buildSlices(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, xA: number, xB: number, dir: number): number {
+export function buildSlices(
+  P: PreparedSection,
+  S: Scratch,
+  xc: number,
+  yc: number,
+  r: number,
+  xA: number,
+  xB: number,
+  dir: number,
+): number {
   const nk = collectBreaks(P, S, xc, yc, r, xA, xB);
   if (nk < 0) return TOO_MANY_BREAKS;
   const kept = S.kept;
@@ -156,7 +176,10 @@ export function buildSlices(P: PreparedSection, S: Scratch, xc: number, yc: numb
       let baseMat = layerMat[e - 1];
       for (let li = o; li < e; li++) {
         const top = lineA[li] + lineB[li] * xm;
-        if (top <= ym) { baseMat = li > o ? layerMat[li - 1] : layerMat[o]; break; }
+        if (top <= ym) {
+          baseMat = li > o ? layerMat[li - 1] : layerMat[o];
+          break;
+        }
         const bot = lineA[li + 1] + lineB[li + 1] * xm;
         const mi = layerMat[li];
         const last = bot <= ym + 1e-9;
@@ -172,7 +195,10 @@ export function buildSlices(P: PreparedSection, S: Scratch, xc: number, yc: numb
           wsum += g * ha + gs * hb;
           if (kh !== 0) wy += g * ha * (top - ha / 2) + gs * hb * (lowBot + hb / 2);
         }
-        if (last) { baseMat = mi; break; }
+        if (last) {
+          baseMat = mi;
+          break;
+        }
       }
       const kind = M.kind[baseMat];
       if (kind === KIND_RIGID) return RIGID;
@@ -219,10 +245,24 @@ export function buildSlices(P: PreparedSection, S: Scratch, xc: number, yc: numb
         c = M.c[baseMat];
         tp = M.tanPhi[baseMat];
       }
-      S.xL[n] = xl; S.xR[n] = xr; S.ym[n] = ym; S.b[n] = b;
-      S.sinA[n] = sinA; S.cosA[n] = cosA; S.len[n] = b / cosA;
-      S.W[n] = W; S.Ww[n] = Ww; S.Q[n] = Q; S.V[n] = V; S.Fw[n] = Fw; S.Hs[n] = Hs;
-      S.u[n] = uEff; S.uRaw[n] = u; S.c[n] = c; S.tanPhi[n] = tp; S.mat[n] = baseMat;
+      S.xL[n] = xl;
+      S.xR[n] = xr;
+      S.ym[n] = ym;
+      S.b[n] = b;
+      S.sinA[n] = sinA;
+      S.cosA[n] = cosA;
+      S.len[n] = b / cosA;
+      S.W[n] = W;
+      S.Ww[n] = Ww;
+      S.Q[n] = Q;
+      S.V[n] = V;
+      S.Fw[n] = Fw;
+      S.Hs[n] = Hs;
+      S.u[n] = uEff;
+      S.uRaw[n] = u;
+      S.c[n] = c;
+      S.tanPhi[n] = tp;
+      S.mat[n] = baseMat;
       S.Hn[n] = Fw + Hs;
       S.dD[n] = V * sinA + dH / r;
       if (P.hasFaces) addFaceThrust(P, S, n, ks, xl, xr, xc, yc, r, dir);

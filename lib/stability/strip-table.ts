@@ -35,21 +35,33 @@ export const CONTACT_TOL = 1e-3;
 export const X_MERGE_TOL = 1e-6;
 
 interface Interval {
-  ta: number; tb: number; ba: number; bb: number;
-  material: number; region: number;
+  ta: number;
+  tb: number;
+  ba: number;
+  bb: number;
+  material: number;
+  region: number;
 }
 
 /**
  * Builds the strip table from region rings plus extra break abscissae (water, loads).
  * @returns the table (null when the regions leave an x range uncovered) and every problem found.
  */
-export function buildStripTable(rings: ReadonlyArray<RingInput>, extraBreaks: ReadonlyArray<number> = []): { table: StripTable | null; issues: Issue[] } {
+export function buildStripTable(
+  rings: ReadonlyArray<RingInput>,
+  extraBreaks: ReadonlyArray<number> = [],
+): { table: StripTable | null; issues: Issue[] } {
   const issues: Issue[] = [];
   const seen = new Set<string>();
   let xmin = Infinity;
   let xmax = -Infinity;
   const xsAll: number[] = [];
-  for (const r of rings) for (const p of r.points) { xsAll.push(p[0]); xmin = Math.min(xmin, p[0]); xmax = Math.max(xmax, p[0]); }
+  for (const r of rings)
+    for (const p of r.points) {
+      xsAll.push(p[0]);
+      xmin = Math.min(xmin, p[0]);
+      xmax = Math.max(xmax, p[0]);
+    }
   for (const x of extraBreaks) if (x > xmin && x < xmax) xsAll.push(x);
   const xs = uniqueSorted(xsAll, X_MERGE_TOL);
   const lineA: number[] = [];
@@ -64,7 +76,14 @@ export function buildStripTable(rings: ReadonlyArray<RingInput>, extraBreaks: Re
     const ivs = stripIntervals(rings, x0, x1);
     if (ivs.length === 0) {
       covered = false;
-      issues.push(issue("regions-not-covering", "regions", `No region covers x = ${x0.toFixed(2)} to ${x1.toFixed(2)} m: the regions must form one section without side gaps.`, [(x0 + x1) / 2, 0]));
+      issues.push(
+        issue(
+          "regions-not-covering",
+          "regions",
+          `No region covers x = ${x0.toFixed(2)} to ${x1.toFixed(2)} m: the regions must form one section without side gaps.`,
+          [(x0 + x1) / 2, 0],
+        ),
+      );
       lineOff.push(lineA.length);
       continue;
     }
@@ -79,9 +98,15 @@ export function buildStripTable(rings: ReadonlyArray<RingInput>, extraBreaks: Re
     }
     const last = ivs[ivs.length - 1];
     for (let i = 0; i < tops.length; i++) {
-      lineA.push(tops[i][0]); lineB.push(tops[i][1]); layerMat.push(mats[i]); lineBreak.push(i === 0 ? 0 : 1);
+      lineA.push(tops[i][0]);
+      lineB.push(tops[i][1]);
+      layerMat.push(mats[i]);
+      lineBreak.push(i === 0 ? 0 : 1);
     }
-    lineA.push(last.ba); lineB.push(last.bb); layerMat.push(-1); lineBreak.push(1);
+    lineA.push(last.ba);
+    lineB.push(last.bb);
+    layerMat.push(-1);
+    lineBreak.push(1);
     lineOff.push(lineA.length);
   }
   if (!covered) return { table: null, issues };
@@ -118,7 +143,14 @@ function stripIntervals(rings: ReadonlyArray<RingInput>, x0: number, x1: number)
     }
     lines.sort((u, v) => v.y - u.y);
     for (let i = 0; i + 1 < lines.length; i += 2) {
-      out.push({ ta: lines[i].a, tb: lines[i].b, ba: lines[i + 1].a, bb: lines[i + 1].b, material: r.material, region: r.region });
+      out.push({
+        ta: lines[i].a,
+        tb: lines[i].b,
+        ba: lines[i + 1].a,
+        bb: lines[i + 1].b,
+        material: r.material,
+        region: r.region,
+      });
     }
   }
   out.sort((u, v) => v.ta + v.tb * xm - (u.ta + u.tb * xm));
@@ -144,16 +176,23 @@ function checkContacts(ivs: Interval[], x0: number, x1: number, issues: Issue[],
       const key = `o${a}-${b}`;
       if (seen.has(key)) continue;
       seen.add(key);
-      const msg = a === b
-        ? `regions[${a}] overlaps itself near ${fmtPoint(x, y)}. Redraw it as one simple polygon.`
-        : `regions[${a}] and regions[${b}] overlap near ${fmtPoint(x, y)}. Move the shared boundary so each point of the section belongs to one region.`;
+      const msg =
+        a === b
+          ? `regions[${a}] overlaps itself near ${fmtPoint(x, y)}. Redraw it as one simple polygon.`
+          : `regions[${a}] and regions[${b}] overlap near ${fmtPoint(x, y)}. Move the shared boundary so each point of the section belongs to one region.`;
       issues.push(issue("regions-overlap", `regions[${b}]`, msg, [x, y]));
     } else {
       const key = `g${a}-${b}`;
       if (seen.has(key)) continue;
       seen.add(key);
-      issues.push(issue("regions-void", `regions[${dn.region}]`,
-        `Void below the ground at ${fmtPoint(x, y)} between regions[${up.region}] and regions[${dn.region}]. Regions must fill the section from the ground down to its base: no holes or overhangs.`, [x, y]));
+      issues.push(
+        issue(
+          "regions-void",
+          `regions[${dn.region}]`,
+          `Void below the ground at ${fmtPoint(x, y)} between regions[${up.region}] and regions[${dn.region}]. Regions must fill the section from the ground down to its base: no holes or overhangs.`,
+          [x, y],
+        ),
+      );
     }
   }
 }

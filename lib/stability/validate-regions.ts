@@ -15,7 +15,8 @@ const MIN_AREA = 0.01; // m²
 export function cleanRegions(regions: ReadonlyArray<Region>, errors: Issue[], warnings: Issue[]): Region[] {
   const snapped: [number, number][] = [];
   const snap = (p: readonly [number, number]): [number, number] => {
-    for (const s of snapped) if (Math.abs(s[0] - p[0]) <= SNAP_TOL && Math.abs(s[1] - p[1]) <= SNAP_TOL) return [s[0], s[1]];
+    for (const s of snapped)
+      if (Math.abs(s[0] - p[0]) <= SNAP_TOL && Math.abs(s[1] - p[1]) <= SNAP_TOL) return [s[0], s[1]];
     snapped.push([p[0], p[1]]);
     return [p[0], p[1]];
   };
@@ -25,18 +26,38 @@ export function cleanRegions(regions: ReadonlyArray<Region>, errors: Issue[], wa
     const first = raw[0];
     const last = raw[raw.length - 1];
     if (raw.length > 3 && Math.abs(first[0] - last[0]) <= SNAP_TOL && Math.abs(first[1] - last[1]) <= SNAP_TOL) {
-      warnings.push(issue("region-closing-point", `${p}.points[${raw.length - 1}]`, `${p}: the last point repeats the first; it was dropped (regions close themselves).`, [last[0], last[1]]));
+      warnings.push(
+        issue(
+          "region-closing-point",
+          `${p}.points[${raw.length - 1}]`,
+          `${p}: the last point repeats the first; it was dropped (regions close themselves).`,
+          [last[0], last[1]],
+        ),
+      );
     }
     const points = cleanRing(raw.map(snap), 1e-9);
     if (points.length < 3) {
-      errors.push(issue("region-too-few-points", `${p}.points`, `${p} has fewer than 3 distinct points; a region needs at least 3.`));
+      errors.push(
+        issue(
+          "region-too-few-points",
+          `${p}.points`,
+          `${p} has fewer than 3 distinct points; a region needs at least 3.`,
+        ),
+      );
       return { ...r, points };
     }
     // A crossing ring's signed area means nothing, so the area is checked only on simple rings.
     if (checkSelfCrossing(points, p, errors)) return { ...r, points };
     const area = Math.abs(signedArea(points));
     if (area <= MIN_AREA) {
-      errors.push(issue("region-too-small", `${p}.points`, `${p} has an area of ${area.toFixed(4)} m² (at most 0.01 m²). Remove it or draw it larger.`, points[0]));
+      errors.push(
+        issue(
+          "region-too-small",
+          `${p}.points`,
+          `${p} has an area of ${area.toFixed(4)} m² (at most 0.01 m²). Remove it or draw it larger.`,
+          points[0],
+        ),
+      );
     }
     return { ...r, points };
   });
@@ -54,8 +75,14 @@ function checkSelfCrossing(points: [number, number][], p: string, errors: Issue[
       const b2 = points[(j + 1) % n];
       const hit = adjacent ? foldBack(a1, a2, b1, b2, j === i + 1) : segmentCrossing(a1, a2, b1, b2, 1e-9);
       if (hit) {
-        errors.push(issue("polygon-self-crossing", `${p}.points[${j}]`,
-          `${p}: edges ${i}–${(i + 1) % n} and ${j}–${(j + 1) % n} cross at ${fmtPoint(hit[0], hit[1])}. Redraw the region without crossings.`, hit));
+        errors.push(
+          issue(
+            "polygon-self-crossing",
+            `${p}.points[${j}]`,
+            `${p}: edges ${i}–${(i + 1) % n} and ${j}–${(j + 1) % n} cross at ${fmtPoint(hit[0], hit[1])}. Redraw the region without crossings.`,
+            hit,
+          ),
+        );
         return true;
       }
     }
@@ -64,7 +91,13 @@ function checkSelfCrossing(points: [number, number][], p: string, errors: Issue[
 }
 
 /** Adjacent edges only meet at their shared vertex unless one folds back along the other. */
-function foldBack(a1: [number, number], a2: [number, number], b1: [number, number], b2: [number, number], aThenB: boolean): [number, number] | null {
+function foldBack(
+  a1: [number, number],
+  a2: [number, number],
+  b1: [number, number],
+  b2: [number, number],
+  aThenB: boolean,
+): [number, number] | null {
   // The shared vertex, and the other ends u (of edge a) and w (of edge b).
   const shared = aThenB ? a2 : a1;
   const u = aThenB ? a1 : a2;
@@ -88,7 +121,14 @@ function foldBack(a1: [number, number], a2: [number, number], b1: [number, numbe
 export function checkRegionMaterials(regions: ReadonlyArray<Region>, ids: ReadonlySet<string>, errors: Issue[]): void {
   regions.forEach((r, i) => {
     if (!ids.has(r.material)) {
-      errors.push(issue("unknown-material", `regions[${i}].material`, `regions[${i}] uses material '${r.material}', which is not in materials. Add it or pick an existing id.`, r.points[0] as [number, number]));
+      errors.push(
+        issue(
+          "unknown-material",
+          `regions[${i}].material`,
+          `regions[${i}] uses material '${r.material}', which is not in materials. Add it or pick an existing id.`,
+          r.points[0] as [number, number],
+        ),
+      );
     }
   });
 }

@@ -20,8 +20,7 @@ export type { Issue };
 
 /** Outcome of validation: the cleaned section, or every error; warnings either way. */
 export type ValidationResult =
-  | { ok: true; section: SectionDocument; warnings: Issue[] }
-  | { ok: false; errors: Issue[]; warnings: Issue[] };
+  { ok: true; section: SectionDocument; warnings: Issue[] } | { ok: false; errors: Issue[]; warnings: Issue[] };
 
 /**
  * Checks a section document of unknown shape.
@@ -50,13 +49,21 @@ export function validateSection(doc: unknown): ValidationResult {
   }
   let xmin = Infinity;
   let xmax = -Infinity;
-  for (const r of regions) for (const [x] of r.points) { xmin = Math.min(xmin, x); xmax = Math.max(xmax, x); }
+  for (const r of regions)
+    for (const [x] of r.points) {
+      xmin = Math.min(xmin, x);
+      xmax = Math.max(xmax, x);
+    }
   checkWater(src.water, xmin, xmax, errors, warnings);
   checkLoads(src.loads, xmin, xmax, errors, warnings);
   checkAnalysis(src.analysis, src.water, errors.length === 0 ? ground : null, errors, warnings);
   checkStagedMaterials(src, src.analysis, errors, warnings);
   if (errors.length === 0 && !sectionDocumentSchema.safeParse(section).success) {
-    errors.push({ code: "invalid-document", path: "", message: "The section does not match the document format after cleaning; please report this." });
+    errors.push({
+      code: "invalid-document",
+      path: "",
+      message: "The section does not match the document format after cleaning; please report this.",
+    });
   }
   if (errors.length > 0) return { ok: false, errors, warnings };
   return { ok: true, section, warnings };

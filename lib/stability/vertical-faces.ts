@@ -9,12 +9,24 @@ import type { Scratch } from "./scratch";
 const EDGE_TOL = 1e-9;
 
 /** Adds the face thrust (kN/m, with its moment about the centre) to slice i if it borders a wet face. */
-export function addFaceThrust(P: PreparedSection, S: Scratch, i: number, ks: number, xl: number, xr: number, xc: number, yc: number, r: number, dir: number): void {
+export function addFaceThrust(
+  P: PreparedSection,
+  S: Scratch,
+  i: number,
+  ks: number,
+  xl: number,
+  xr: number,
+  xc: number,
+  yc: number,
+  r: number,
+  dir: number,
+): void {
   const T = P.table;
   // Face on the slice's left edge with soil on its right, or on its right edge with soil on its left.
   let k = -1;
   if (ks > 0 && P.faceSoil[ks] === 1 && Math.abs(xl - T.xs[ks]) <= EDGE_TOL * (1 + Math.abs(xl))) k = ks;
-  else if (ks + 1 < T.n && P.faceSoil[ks + 1] === -1 && Math.abs(xr - T.xs[ks + 1]) <= EDGE_TOL * (1 + Math.abs(xr))) k = ks + 1;
+  else if (ks + 1 < T.n && P.faceSoil[ks + 1] === -1 && Math.abs(xr - T.xs[ks + 1]) <= EDGE_TOL * (1 + Math.abs(xr)))
+    k = ks + 1;
   if (k < 0) return;
   const x = T.xs[k];
   // The water against the face stands on its open (lower) side.

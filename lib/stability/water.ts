@@ -36,7 +36,11 @@ export interface PoolSide {
  * above the ground (the nearer to `from` if both), and the first x inward where the
  * ground reaches the pre-drawdown pool level. Null when neither side is ponded.
  */
-export function findPoolSide(phreatic: ReadonlyArray<readonly [number, number]>, ground: GroundLine, from: number): PoolSide | null {
+export function findPoolSide(
+  phreatic: ReadonlyArray<readonly [number, number]>,
+  ground: GroundLine,
+  from: number,
+): PoolSide | null {
   const n = ground.x.length;
   const xl = ground.x[0];
   const xr = ground.x[n - 1];
@@ -47,7 +51,10 @@ export function findPoolSide(phreatic: ReadonlyArray<readonly [number, number]>,
   if (!pondL && !pondR) return null;
   let side: "left" | "right";
   if (pondL && pondR) {
-    side = Math.abs(interpolatePolyline(phreatic, xl) - from) <= Math.abs(interpolatePolyline(phreatic, xr) - from) ? "left" : "right";
+    side =
+      Math.abs(interpolatePolyline(phreatic, xl) - from) <= Math.abs(interpolatePolyline(phreatic, xr) - from)
+        ? "left"
+        : "right";
   } else side = pondL ? "left" : "right";
   if (side === "left") {
     for (let i = 0; i + 1 < n; i++) {
@@ -68,7 +75,13 @@ export function findPoolSide(phreatic: ReadonlyArray<readonly [number, number]>,
 }
 
 /** Builds the water model for a case; the section must already be valid. */
-export function buildWaterModel(water: Water | undefined, ground: GroundLine, loadCase: LoadCase, drawdown: Drawdown | undefined, gammaW: number): WaterModel {
+export function buildWaterModel(
+  water: Water | undefined,
+  ground: GroundLine,
+  loadCase: LoadCase,
+  drawdown: Drawdown | undefined,
+  gammaW: number,
+): WaterModel {
   if (water?.ru !== undefined && !water.phreatic) {
     return { kind: WATER_RU, gammaW, ru: water.ru, breaks: [], surface: null };
   }

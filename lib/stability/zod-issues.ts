@@ -20,12 +20,21 @@ export function fromZodIssues(issues: ReadonlyArray<z.core.$ZodIssue>): Issue[] 
       }
       case "invalid_union": {
         const options = raw.options as unknown[] | undefined;
-        if (options) return issue("unknown-option", path, `${where} must be one of ${options.map((o) => `"${String(o)}"`).join(", ")}.`);
+        if (options)
+          return issue(
+            "unknown-option",
+            path,
+            `${where} must be one of ${options.map((o) => `"${String(o)}"`).join(", ")}.`,
+          );
         return issue("invalid-value", path, `${where} does not match any allowed form: ${zi.message}.`);
       }
       case "invalid_value": {
         const values = raw.values as unknown[] | undefined;
-        return issue("invalid-value", path, `${where} must be ${values ? values.map((v) => JSON.stringify(v)).join(" or ") : "a listed value"}.`);
+        return issue(
+          "invalid-value",
+          path,
+          `${where} must be ${values ? values.map((v) => JSON.stringify(v)).join(" or ") : "a listed value"}.`,
+        );
       }
       case "too_small":
       case "too_big":

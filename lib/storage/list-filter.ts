@@ -3,7 +3,12 @@ import { ApiError } from "../api/errors";
 import { fieldErrors } from "../api/handler";
 import type { DocumentFilter } from "@/db/queries/documents";
 
-const optionalId = (what: string) => z.string().regex(/^[1-9]\d{0,9}$/, `${what} must be a positive whole number.`).transform(Number).optional();
+const optionalId = (what: string) =>
+  z
+    .string()
+    .regex(/^[1-9]\d{0,9}$/, `${what} must be a positive whole number.`)
+    .transform(Number)
+    .optional();
 
 const listQuerySchema = z
   .object({ sectionId: optionalId("sectionId"), materialId: optionalId("materialId") })
@@ -19,6 +24,7 @@ export function readListFilter(url: string): DocumentFilter {
     sectionId: params.get("sectionId") ?? undefined,
     materialId: params.get("materialId") ?? undefined,
   });
-  if (!parsed.success) throw new ApiError(400, "invalid_input", "The list filter is not valid.", fieldErrors(parsed.error));
+  if (!parsed.success)
+    throw new ApiError(400, "invalid_input", "The list filter is not valid.", fieldErrors(parsed.error));
   return parsed.data;
 }

@@ -1,5 +1,12 @@
 import "server-only";
-import { DeleteObjectCommand, GetObjectCommand, NoSuchKey, PutObjectCommand, S3Client, S3ServiceException } from "@aws-sdk/client-s3";
+import {
+  DeleteObjectCommand,
+  GetObjectCommand,
+  NoSuchKey,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
+} from "@aws-sdk/client-s3";
 import { readS3Settings, type S3Settings } from "./s3-config";
 
 // One client per server process, like the database pool in db/index.ts.
@@ -27,7 +34,13 @@ function store(): { client: S3Client; settings: S3Settings } {
 export async function putObject(key: string, body: Uint8Array, contentType: string): Promise<void> {
   const { client, settings } = store();
   await client.send(
-    new PutObjectCommand({ Bucket: settings.S3_BUCKET, Key: key, Body: body, ContentType: contentType, ContentLength: body.byteLength }),
+    new PutObjectCommand({
+      Bucket: settings.S3_BUCKET,
+      Key: key,
+      Body: body,
+      ContentType: contentType,
+      ContentLength: body.byteLength,
+    }),
   );
 }
 

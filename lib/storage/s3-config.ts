@@ -10,7 +10,10 @@ const s3Schema = z.object({
   // S3 bucket names: 3–63 characters, lower-case letters, digits, dots and hyphens.
   S3_BUCKET: z
     .string()
-    .regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, "must be a valid bucket name (3–63 lower-case letters, digits, '.' or '-')")
+    .regex(
+      /^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/,
+      "must be a valid bucket name (3–63 lower-case letters, digits, '.' or '-')",
+    )
     .default("scarpline-documents"),
   S3_ACCESS_KEY_ID: z.string().min(1).default("S3RVER"),
   S3_SECRET_ACCESS_KEY: z.string().min(1).default("S3RVER"),

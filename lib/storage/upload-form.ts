@@ -9,7 +9,13 @@ import { formatBytes, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, MULTIPART_OVERHEAD_BYT
 /** A form field holding an id: absent or "" means none. */
 const optionalId = (what: string) =>
   z
-    .union([z.literal("").transform(() => undefined), z.string().regex(/^[1-9]\d{0,9}$/, `${what} must be a positive whole number.`).transform(Number)])
+    .union([
+      z.literal("").transform(() => undefined),
+      z
+        .string()
+        .regex(/^[1-9]\d{0,9}$/, `${what} must be a positive whole number.`)
+        .transform(Number),
+    ])
     .optional();
 
 /** The text fields sent beside the file. */
@@ -36,7 +42,8 @@ export interface UploadedFile {
 const MAX_NAME_LENGTH = 255;
 const BODY_CAP = MAX_UPLOAD_BYTES + MULTIPART_OVERHEAD_BYTES;
 
-const badForm = (message: string, field = "file") => new ApiError(400, "invalid_upload", message, { [field]: [message] });
+const badForm = (message: string, field = "file") =>
+  new ApiError(400, "invalid_upload", message, { [field]: [message] });
 
 function tooLarge(name: string | null, bytes: number | null): ApiError {
   const what = name ? `'${name}'` : "The upload";
@@ -93,7 +100,8 @@ export async function readUploadForm(request: Request): Promise<{ file: Uploaded
 
   const name = cleanFileName(entry.name);
   if (!name) throw badForm("The file has no usable name.");
-  if (name.length > MAX_NAME_LENGTH) throw badForm(`The file name '${name.slice(0, 40)}…' is longer than ${MAX_NAME_LENGTH} characters.`);
+  if (name.length > MAX_NAME_LENGTH)
+    throw badForm(`The file name '${name.slice(0, 40)}…' is longer than ${MAX_NAME_LENGTH} characters.`);
   if (entry.size > MAX_UPLOAD_BYTES) throw tooLarge(name, entry.size);
   if (entry.size === 0) throw badForm(`'${name}' is empty (0 bytes).`);
 
@@ -104,7 +112,15 @@ export async function readUploadForm(request: Request): Promise<{ file: Uploaded
     note: form.get("note") ?? undefined,
   });
   if (!parsed.success) {
-    throw new ApiError(400, "invalid_input", `'${name}' was not stored: some fields are not valid.`, fieldErrors(parsed.error));
+    throw new ApiError(
+      400,
+      "invalid_input",
+      `'${name}' was not stored: some fields are not valid.`,
+      fieldErrors(parsed.error),
+    );
   }
-  return { file: { name, claimedType: entry.type, bytes: new Uint8Array(await entry.arrayBuffer()) }, fields: parsed.data };
+  return {
+    file: { name, claimedType: entry.type, bytes: new Uint8Array(await entry.arrayBuffer()) },
+    fields: parsed.data,
+  };
 }

@@ -14,7 +14,8 @@ export const HOST = "127.0.0.1";
 /** A port number from an environment variable, or the default; a clear error names the variable. */
 export function readPort(env: NodeJS.ProcessEnv, name: string, fallback: number): number {
   const port = Number(env[name] ?? fallback);
-  if (!Number.isInteger(port) || port <= 0 || port > 65535) throw new Error(`${name} must be a port number, got '${env[name]}'`);
+  if (!Number.isInteger(port) || port <= 0 || port > 65535)
+    throw new Error(`${name} must be a port number, got '${env[name]}'`);
   return port;
 }
 
@@ -39,9 +40,15 @@ export function livePid(pidFile: string): number | null {
 export function portAnswers(port: number): Promise<boolean> {
   return new Promise((resolve) => {
     const socket = net.connect({ host: HOST, port, timeout: 2000 });
-    socket.once("connect", () => { socket.destroy(); resolve(true); });
+    socket.once("connect", () => {
+      socket.destroy();
+      resolve(true);
+    });
     socket.once("error", () => resolve(false));
-    socket.once("timeout", () => { socket.destroy(); resolve(false); });
+    socket.once("timeout", () => {
+      socket.destroy();
+      resolve(false);
+    });
   });
 }
 

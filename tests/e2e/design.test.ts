@@ -4,8 +4,12 @@ import { appUrl, launchBrowser, signInAs, watchConsole } from "../support/browse
 import { steepestPassingRatio } from "@/lib/design";
 
 let browser: Browser;
-beforeAll(async () => { browser = await launchBrowser(); });
-afterAll(async () => { await browser?.close(); });
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
 
 describe("slope design as a new designer would use it", () => {
   test("from the demo embankment's numbers to a recommended pair of face slopes, with the evidence", async () => {
@@ -26,20 +30,36 @@ describe("slope design as a new designer would use it", () => {
     expect(await page.getByLabel("Downstream slope (H:1V)").inputValue()).toBe("2.5");
     await page.getByTestId("run-canvas").waitFor();
     await expect.poll(() => page.getByTestId("seepage-normal").textContent()).toContain("Factor against piping");
-    await expect.poll(() => page.getByTestId("compaction-spec").textContent()).toMatch(/dry density ≥ \d\.\d{3} Mg\/m³/);
+    await expect
+      .poll(() => page.getByTestId("compaction-spec").textContent())
+      .toMatch(/dry density ≥ \d\.\d{3} Mg\/m³/);
 
     const started = Date.now();
     await page.getByRole("button", { name: "Sweep slopes" }).click();
     await page.getByTestId("recommendation").waitFor({ timeout: 60_000 });
-    await expect.poll(() => page.getByTestId("sweep-timing").textContent(), { timeout: 60_000 }).toMatch(/in this browser with \d worker/);
+    await expect
+      .poll(() => page.getByTestId("sweep-timing").textContent(), { timeout: 60_000 })
+      .toMatch(/in this browser with \d worker/);
     const seconds = (Date.now() - started) / 1000;
     console.log(`browser sweep of the demo embankment: ${seconds.toFixed(1)} s`);
 
     // Read the table and apply the rule independently of the page: n* per case, the flattest per face.
-    const rows = await page.getByTestId("sweep-row").evaluateAll((els) => els.map((e) => ({ caseKey: e.getAttribute("data-case")!, ratio: Number(e.getAttribute("data-ratio")), fs: e.getAttribute("data-fs") ? Number(e.getAttribute("data-fs")) : null })));
+    const rows = await page
+      .getByTestId("sweep-row")
+      .evaluateAll((els) =>
+        els.map((e) => ({
+          caseKey: e.getAttribute("data-case")!,
+          ratio: Number(e.getAttribute("data-ratio")),
+          fs: e.getAttribute("data-fs") ? Number(e.getAttribute("data-fs")) : null,
+        })),
+      );
     expect(rows).toHaveLength(27);
     const required = { "steady-seepage": 1.5, "drawdown-storage": 1.3, "drawdown-surcharge": 1.1 } as const;
-    const nStar = (k: keyof typeof required) => steepestPassingRatio(rows.filter((r) => r.caseKey === k), required[k]);
+    const nStar = (k: keyof typeof required) =>
+      steepestPassingRatio(
+        rows.filter((r) => r.caseKey === k),
+        required[k],
+      );
     const downstream = nStar("steady-seepage");
     const upstream = Math.max(nStar("drawdown-storage") ?? Infinity, nStar("drawdown-surcharge") ?? Infinity);
 
@@ -55,7 +75,11 @@ describe("slope design as a new designer would use it", () => {
     await page.getByTestId("caution").first().waitFor();
 
     // The evidence behind the downstream choice opens as a saved run with its canvas.
-    await page.getByRole("button", { name: `Open Downstream, long-term steady seepage (normal pool) at ${shownDown.toFixed(2)}:1 as a saved run` }).click();
+    await page
+      .getByRole("button", {
+        name: `Open Downstream, long-term steady seepage (normal pool) at ${shownDown.toFixed(2)}:1 as a saved run`,
+      })
+      .click();
     await page.waitForURL(/\/runs\/\d+$/, { timeout: 30_000 });
     await page.getByTestId("run-canvas").waitFor();
     expect(errors).toEqual([]);

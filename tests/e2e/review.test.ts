@@ -12,25 +12,42 @@ import { listCaughtMail, type CaughtMail } from "@/lib/mail/caught-mail";
 const WAIT = { timeout: 15_000 };
 
 let browser: Browser;
-beforeAll(async () => { browser = await launchBrowser(); });
-afterAll(async () => { await browser?.close(); });
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
 
 /** Saves a quick draft run of the demo section as the engineer, the way the browser would. */
 async function createDraft(client: AppClient, title: string): Promise<{ projectId: number; runId: number }> {
   const projects = (await (await client.request("/api/projects")).json()).projects as { id: number; name: string }[];
   const projectId = projects.find((p) => p.name === "Lower Wendle Reservoir embankment")!.id;
-  const sections = (await (await client.request(`/api/projects/${projectId}/sections`)).json()).sections as { id: number; name: string }[];
+  const sections = (await (await client.request(`/api/projects/${projectId}/sections`)).json()).sections as {
+    id: number;
+    name: string;
+  }[];
   const sectionId = sections.find((s) => s.name.startsWith("Main embankment"))!.id;
   const body = await (await client.request(`/api/projects/${projectId}/sections/${sectionId}`)).json();
   const doc = body.document as SectionDocument;
   const g = suggestGrid(doc, directionForFace(doc, "downstream"), { nx: 6, ny: 6, nr: 5 });
   // Parsed, so settings the form defaults are filled in as the browser's form would.
   const setup: RunSetup = runSetupSchema.parse({
-    condition: "steady-seepage", face: "downstream", methods: ["bishop", "fellenius"], slices: 30, ordinaryForm: "classical",
-    grid: g.grid, radii: g.radii, refine: false, requiredFs: 1.5,
+    condition: "steady-seepage",
+    face: "downstream",
+    methods: ["bishop", "fellenius"],
+    slices: 30,
+    ordinaryForm: "classical",
+    grid: g.grid,
+    radii: g.radii,
+    refine: false,
+    requiredFs: 1.5,
   });
   const result = runGridSearch(documentForRun(doc, setup));
-  const res = await client.request(`/api/projects/${projectId}/runs`, { method: "POST", json: { sectionId, sectionVersion: body.section.currentVersion, title, setup, result } });
+  const res = await client.request(`/api/projects/${projectId}/runs`, {
+    method: "POST",
+    json: { sectionId, sectionVersion: body.section.currentVersion, title, setup, result },
+  });
   expect(res.status).toBe(201);
   return { projectId, runId: (await res.json()).run.id };
 }
@@ -38,14 +55,22 @@ async function createDraft(client: AppClient, title: string): Promise<{ projectI
 /** Waits for the notice with this subject start to reach the SMTP fake, and returns it. */
 async function waitForMail(subjectStart: string, to: string): Promise<CaughtMail> {
   let found: CaughtMail | undefined;
-  await expect.poll(async () => {
-    found = (await listCaughtMail(process.env.SMTP_MAIL_DIR!)).find((m) => m.subject.startsWith(subjectStart) && m.envelope.to.includes(to));
-    return Boolean(found);
-  }, { timeout: 10_000 }).toBe(true);
+  await expect
+    .poll(
+      async () => {
+        found = (await listCaughtMail(process.env.SMTP_MAIL_DIR!)).find(
+          (m) => m.subject.startsWith(subjectStart) && m.envelope.to.includes(to),
+        );
+        return Boolean(found);
+      },
+      { timeout: 10_000 },
+    )
+    .toBe(true);
   return found!;
 }
 
-const linkIn = (mail: CaughtMail) => /http:\/\/127\.0\.0\.1:\d+\/projects\/\d+\/runs\/\d+(\/review)?/.exec(mail.text)![0];
+const linkIn = (mail: CaughtMail) =>
+  /http:\/\/127\.0\.0\.1:\d+\/projects\/\d+\/runs\/\d+(\/review)?/.exec(mail.text)![0];
 
 async function statusText(page: Page) {
   return page.getByTestId("review-status-note").textContent();
@@ -77,7 +102,11 @@ describe("carrying a run from draft to sign-off in the browser", () => {
     const overlay = reviewer.getByTestId("pin-overlay");
     await expect.poll(() => overlay.getAttribute("data-placing"), WAIT).toBe("true");
     const box = (await overlay.boundingBox())!;
-    const view = JSON.parse((await reviewer.getByTestId("run-canvas").getAttribute("data-view"))!) as { scale: number; offsetX: number; offsetY: number };
+    const view = JSON.parse((await reviewer.getByTestId("run-canvas").getAttribute("data-view"))!) as {
+      scale: number;
+      offsetX: number;
+      offsetY: number;
+    };
     const click = { x: Math.round(box.width * 0.6), y: Math.round(box.height * 0.55) };
     await overlay.click({ position: click });
     const expectedX = (click.x - view.offsetX) / view.scale;
@@ -85,9 +114,13 @@ describe("carrying a run from draft to sign-off in the browser", () => {
     // The pin lands where the click was, in section metres (RunCanvas's view transform).
     const pinnedX = Number(/x = (-?[\d.]+) m/.exec((await reviewer.getByTestId("pin-status").textContent())!)![1]);
     expect(pinnedX).toBeCloseTo(expectedX, 1);
-    await reviewer.getByRole("textbox", { name: "New comment" }).fill("Toe drain level here differs from drawing D-102.");
+    await reviewer
+      .getByRole("textbox", { name: "New comment" })
+      .fill("Toe drain level here differs from drawing D-102.");
     await reviewer.getByRole("button", { name: "Add comment" }).click();
-    await expect.poll(() => reviewer.getByTestId("comment-list").textContent(), WAIT).toContain("Toe drain level here differs");
+    await expect
+      .poll(() => reviewer.getByTestId("comment-list").textContent(), WAIT)
+      .toContain("Toe drain level here differs");
     await reviewer.getByTestId("comment-pin-1").waitFor();
     await reviewer.getByLabel("Note to the author").fill("Recheck the toe drain, then resubmit.");
     await reviewer.getByRole("button", { name: "Return with comments" }).click();

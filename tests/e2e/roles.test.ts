@@ -3,8 +3,12 @@ import type { Browser } from "playwright-core";
 import { appUrl, launchBrowser, signInAs, watchConsole } from "../support/browser";
 
 let browser: Browser;
-beforeAll(async () => { browser = await launchBrowser(); });
-afterAll(async () => { await browser?.close(); });
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
 
 describe("signing in as each role", () => {
   test("a wrong password shows the generic message and stays on the sign-in page", async () => {
@@ -23,7 +27,9 @@ describe("signing in as each role", () => {
       const page = await browser.newPage();
       const errors = watchConsole(page);
       await signInAs(page, `${role}@scarpline.test`);
-      await expect.poll(() => page.getByTestId("project-list").textContent()).toContain("Lower Wendle Reservoir embankment");
+      await expect
+        .poll(() => page.getByTestId("project-list").textContent())
+        .toContain("Lower Wendle Reservoir embankment");
       expect(await page.getByRole("link", { name: "People" }).count()).toBe(0);
       await page.getByRole("link", { name: "Lower Wendle Reservoir embankment" }).click();
       await page.getByRole("heading", { name: "Sections" }).waitFor();

@@ -3,8 +3,12 @@ import type { Browser, Page } from "playwright-core";
 import { keepScreenshotOnFailure, launchBrowser, signInAs, watchConsole } from "../support/browser";
 
 let browser: Browser;
-beforeAll(async () => { browser = await launchBrowser(); });
-afterAll(async () => { await browser?.close(); });
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
 
 async function runAndKeep(page: Page, title: string, denseGrid: boolean): Promise<void> {
   await page.getByRole("link", { name: "New run" }).click();
@@ -18,7 +22,10 @@ async function runAndKeep(page: Page, title: string, denseGrid: boolean): Promis
   await page.getByRole("button", { name: "Run the search" }).click();
   if (denseGrid) await page.getByTestId("search-progress").waitFor();
   await page.getByTestId("search-outcome").waitFor({ timeout: 60_000 });
-  const drawn = JSON.parse((await page.getByTestId("run-canvas").getAttribute("data-critical")) ?? "[]") as { method?: string; fs?: number }[];
+  const drawn = JSON.parse((await page.getByTestId("run-canvas").getAttribute("data-critical")) ?? "[]") as {
+    method?: string;
+    fs?: number;
+  }[];
   expect(drawn.map((c) => c.method)).toEqual(expect.arrayContaining(["bishop", "fellenius"]));
   expect(drawn.every((c) => typeof c.fs === "number" && c.fs > 0.5 && c.fs < 5)).toBe(true);
   await page.getByLabel("Name of the run").fill(title);
@@ -73,7 +80,9 @@ describe("runs", () => {
       expect(compare).toContain("flatter face");
       const overlays = JSON.parse((await page.getByTestId("run-canvas").getAttribute("data-critical")) ?? "[]");
       expect(overlays).toHaveLength(2);
-      await expect.poll(() => page.getByTestId("input-diff").first().textContent()).toMatch(/Embankment fill: 1 point moved/);
+      await expect
+        .poll(() => page.getByTestId("input-diff").first().textContent())
+        .toMatch(/Embankment fill: 1 point moved/);
     });
     expect(errors).toEqual([]);
     await page.close();

@@ -5,10 +5,16 @@ import { appUrl, keepScreenshotOnFailure, launchBrowser, signInAs, watchConsole 
 import { clickWorld } from "../support/canvas";
 
 let browser: Browser;
-beforeAll(async () => { browser = await launchBrowser(); });
-afterAll(async () => { await browser?.close(); });
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
 
-const DEMO_FILES = ["demo-materials.csv", "demo-geometry.csv", "demo-phreatic.csv"].map((f) => path.resolve(__dirname, "../../public/demo", f));
+const DEMO_FILES = ["demo-materials.csv", "demo-geometry.csv", "demo-phreatic.csv"].map((f) =>
+  path.resolve(__dirname, "../../public/demo", f),
+);
 
 async function openDemoProject(page: Page) {
   await page.getByRole("link", { name: "Lower Wendle Reservoir embankment" }).click();
@@ -63,7 +69,9 @@ describe("drawing and importing a section", () => {
 
       // Reopen: the current version holds the imported section; version 2 opens read-only.
       await page.reload();
-      await expect.poll(() => page.getByTestId("version-list").textContent()).toMatch(/v3.*current.*Replaced by the demo files/s);
+      await expect
+        .poll(() => page.getByTestId("version-list").textContent())
+        .toMatch(/v3.*current.*Replaced by the demo files/s);
       await page.getByTestId("version-list").getByRole("link", { name: "Open read-only" }).first().click();
       await expect.poll(() => page.getByTestId("version-meta").textContent()).toMatch(/Read-only/);
       expect(await page.getByTestId("save-version").count()).toBe(0);
@@ -77,7 +85,13 @@ describe("drawing and importing a section", () => {
     await signInAs(page, "engineer@scarpline.test");
     await openDemoProject(page);
     await page.getByRole("link", { name: /Main embankment/ }).click();
-    await page.getByTestId("import-input").setInputFiles({ name: "broken-geometry.csv", mimeType: "text/csv", buffer: Buffer.from("region,material,x,y\nbank,fill,0,0\nbank,,twelve,0\nbank,,6,4\n") });
+    await page
+      .getByTestId("import-input")
+      .setInputFiles({
+        name: "broken-geometry.csv",
+        mimeType: "text/csv",
+        buffer: Buffer.from("region,material,x,y\nbank,fill,0,0\nbank,,twelve,0\nbank,,6,4\n"),
+      });
     await expect.poll(() => page.getByTestId("import-problems").textContent()).toMatch(/Row 3, column x/);
     expect(await page.getByTestId("import-apply").isDisabled()).toBe(true);
     expect(await page.getByTestId("save-version").isDisabled()).toBe(true);

@@ -52,7 +52,10 @@ describe("API answers to bad requests", () => {
 
   test("POST /api/projects by an engineer is 403", async () => {
     const client = await signedIn("engineer@scarpline.test");
-    const res = await client.request("/api/projects", { method: "POST", json: { name: "Not allowed", description: "" } });
+    const res = await client.request("/api/projects", {
+      method: "POST",
+      json: { name: "Not allowed", description: "" },
+    });
     expect(res.status).toBe(403);
     expect((await res.json()).error.code).toBe("forbidden");
   });
@@ -65,7 +68,11 @@ describe("API answers to bad requests", () => {
     const body = await res.json();
     expect(body.error.fields.name).toBeDefined();
     expect(body.error.fields.description).toBeDefined();
-    const bad = await client.request("/api/projects", { method: "POST", body: "{not json", headers: { "content-type": "application/json" } });
+    const bad = await client.request("/api/projects", {
+      method: "POST",
+      body: "{not json",
+      headers: { "content-type": "application/json" },
+    });
     expect(bad.status).toBe(400);
     expect((await bad.json()).error.code).toBe("invalid_json");
     const after = await getDb()("projects").count({ n: "*" }).first();
@@ -74,7 +81,10 @@ describe("API answers to bad requests", () => {
 
   test("a project the user is not a member of answers 404", async () => {
     const admin = await signedIn("admin@scarpline.test");
-    const created = await admin.request("/api/projects", { method: "POST", json: { name: "Spillway channel cut", description: "Side slopes of a channel." } });
+    const created = await admin.request("/api/projects", {
+      method: "POST",
+      json: { name: "Spillway channel cut", description: "Side slopes of a channel." },
+    });
     expect(created.status).toBe(201);
     const { project } = await created.json();
     const engineer = await signedIn("engineer@scarpline.test");
@@ -86,10 +96,15 @@ describe("API answers to bad requests", () => {
 describe("members and users", () => {
   test("an admin adds a member; the member then sees the project; a designer may not manage members", async () => {
     const admin = await signedIn("admin@scarpline.test");
-    const { project } = await (await admin.request("/api/projects", { method: "POST", json: { name: "Levee reach 4", description: "" } })).json();
+    const { project } = await (
+      await admin.request("/api/projects", { method: "POST", json: { name: "Levee reach 4", description: "" } })
+    ).json();
     const users = (await (await admin.request("/api/users")).json()).users as { id: number; email: string }[];
     const reviewer = users.find((u) => u.email === "reviewer@scarpline.test")!;
-    const add = await admin.request(`/api/projects/${project.id}/members`, { method: "POST", json: { userId: reviewer.id, role: "reviewer" } });
+    const add = await admin.request(`/api/projects/${project.id}/members`, {
+      method: "POST",
+      json: { userId: reviewer.id, role: "reviewer" },
+    });
     expect(add.status).toBe(201);
     const asReviewer = await signedIn("reviewer@scarpline.test");
     const list = (await (await asReviewer.request("/api/projects")).json()).projects as { id: number }[];
@@ -97,27 +112,45 @@ describe("members and users", () => {
 
     const designer = await signedIn("designer@scarpline.test");
     const demo = (await (await designer.request("/api/projects")).json()).projects[0];
-    const denied = await designer.request(`/api/projects/${demo.id}/members`, { method: "POST", json: { userId: reviewer.id, role: "engineer" } });
+    const denied = await designer.request(`/api/projects/${demo.id}/members`, {
+      method: "POST",
+      json: { userId: reviewer.id, role: "engineer" },
+    });
     expect(denied.status).toBe(403);
   });
 
   test("POST /api/users refuses a duplicate e-mail with 409 and a weak password with 400", async () => {
     const admin = await signedIn("admin@scarpline.test");
-    const dup = await admin.request("/api/users", { method: "POST", json: { email: "engineer@scarpline.test", name: "Copy", role: "engineer", password: "abcdefgh12" } });
+    const dup = await admin.request("/api/users", {
+      method: "POST",
+      json: { email: "engineer@scarpline.test", name: "Copy", role: "engineer", password: "abcdefgh12" },
+    });
     expect(dup.status).toBe(409);
-    const weak = await admin.request("/api/users", { method: "POST", json: { email: "new@scarpline.test", name: "New", role: "engineer", password: "short" } });
+    const weak = await admin.request("/api/users", {
+      method: "POST",
+      json: { email: "new@scarpline.test", name: "New", role: "engineer", password: "short" },
+    });
     expect(weak.status).toBe(400);
     expect((await weak.json()).error.fields.password).toBeDefined();
   });
 
   test("a new user changes their password and signs in with the new one only", async () => {
     const admin = await signedIn("admin@scarpline.test");
-    const created = await admin.request("/api/users", { method: "POST", json: { email: "pw@scarpline.test", name: "Pat Word", role: "designer", password: "first-pass-1" } });
+    const created = await admin.request("/api/users", {
+      method: "POST",
+      json: { email: "pw@scarpline.test", name: "Pat Word", role: "designer", password: "first-pass-1" },
+    });
     expect(created.status).toBe(201);
     const me = await signedIn("pw@scarpline.test", "first-pass-1");
-    const wrong = await me.request("/api/account/password", { method: "POST", json: { currentPassword: "nope", newPassword: "second-pass-2", confirmPassword: "second-pass-2" } });
+    const wrong = await me.request("/api/account/password", {
+      method: "POST",
+      json: { currentPassword: "nope", newPassword: "second-pass-2", confirmPassword: "second-pass-2" },
+    });
     expect(wrong.status).toBe(400);
-    const ok = await me.request("/api/account/password", { method: "POST", json: { currentPassword: "first-pass-1", newPassword: "second-pass-2", confirmPassword: "second-pass-2" } });
+    const ok = await me.request("/api/account/password", {
+      method: "POST",
+      json: { currentPassword: "first-pass-1", newPassword: "second-pass-2", confirmPassword: "second-pass-2" },
+    });
     expect(ok.status).toBe(200);
     expect((await new AppClient().signIn("pw@scarpline.test", "first-pass-1")).ok).toBe(false);
     expect((await new AppClient().signIn("pw@scarpline.test", "second-pass-2")).ok).toBe(true);

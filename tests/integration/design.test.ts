@@ -5,8 +5,14 @@ import { DEMO_PROJECT } from "@/db/seeds/demo";
 import { DEMO_MATERIALS } from "@/db/seeds/demo-section";
 import { seedDemoDesign } from "@/db/seeds/demo-design";
 import {
-  DEFAULT_PARAMS, DEFAULT_SWEEP, readSweep, runSweepJob, planSweep, steepestPassingRatio,
-  type StoredSweep, type SweepPoint,
+  DEFAULT_PARAMS,
+  DEFAULT_SWEEP,
+  readSweep,
+  runSweepJob,
+  planSweep,
+  steepestPassingRatio,
+  type StoredSweep,
+  type SweepPoint,
 } from "@/lib/design";
 import { ENGINE_VERSION } from "@/lib/stability";
 
@@ -30,12 +36,20 @@ async function createStudy(name: string): Promise<number> {
 }
 
 /** Reads the streamed NDJSON answer of a server sweep. */
-async function sweepOnServer(studyId: number, settings = DEFAULT_SWEEP): Promise<{ lines: { type: string; done?: number; total?: number; sweep?: StoredSweep; mode?: string }[] }> {
+async function sweepOnServer(
+  studyId: number,
+  settings = DEFAULT_SWEEP,
+): Promise<{ lines: { type: string; done?: number; total?: number; sweep?: StoredSweep; mode?: string }[] }> {
   const res = await designer.request(`${base}/${studyId}/sweep`, { method: "POST", json: { settings } });
   expect(res.status).toBe(200);
   expect(res.headers.get("content-type")).toContain("application/x-ndjson");
   const text = await res.text();
-  return { lines: text.trim().split("\n").map((l) => JSON.parse(l)) };
+  return {
+    lines: text
+      .trim()
+      .split("\n")
+      .map((l) => JSON.parse(l)),
+  };
 }
 
 describe("design studies", () => {
@@ -50,16 +64,28 @@ describe("design studies", () => {
 
   test("bad parameters are a 400 naming the field; a reviewer may look but not change or sweep", async () => {
     const id = await createStudy("Validation study");
-    const bad = await designer.request(`${base}/${id}`, { method: "PATCH", json: { parameters: { ...DEFAULT_PARAMS, floodPool: 25 } } });
+    const bad = await designer.request(`${base}/${id}`, {
+      method: "PATCH",
+      json: { parameters: { ...DEFAULT_PARAMS, floodPool: 25 } },
+    });
     expect(bad.status).toBe(400);
     expect((await bad.json()).error.fields["parameters.floodPool"][0]).toMatch(/above the crest/);
-    const missing = await designer.request(`${base}/${id}`, { method: "PATCH", json: { parameters: { ...DEFAULT_PARAMS, drainMaterial: "nowhere" } } });
+    const missing = await designer.request(`${base}/${id}`, {
+      method: "PATCH",
+      json: { parameters: { ...DEFAULT_PARAMS, drainMaterial: "nowhere" } },
+    });
     expect(missing.status).toBe(400);
-    expect((await missing.json()).error.fields["parameters.drainMaterial"][0]).toMatch(/'nowhere' is not in the project's materials library/);
+    expect((await missing.json()).error.fields["parameters.drainMaterial"][0]).toMatch(
+      /'nowhere' is not in the project's materials library/,
+    );
 
     expect((await reviewer.request(`${base}/${id}`)).status).toBe(200);
-    expect((await reviewer.request(`${base}/${id}`, { method: "PATCH", json: { parameters: DEFAULT_PARAMS } })).status).toBe(403);
-    expect((await reviewer.request(`${base}/${id}/sweep`, { method: "POST", json: { settings: DEFAULT_SWEEP } })).status).toBe(403);
+    expect(
+      (await reviewer.request(`${base}/${id}`, { method: "PATCH", json: { parameters: DEFAULT_PARAMS } })).status,
+    ).toBe(403);
+    expect(
+      (await reviewer.request(`${base}/${id}/sweep`, { method: "POST", json: { settings: DEFAULT_SWEEP } })).status,
+    ).toBe(403);
   });
 
   test("a server sweep streams progress, runs in worker threads, keeps the result and agrees with the engine run here", async () => {
@@ -75,7 +101,9 @@ describe("design studies", () => {
     expect(sweep.points.filter((p) => p.phase === "sweep")).toHaveLength(27);
 
     // The same job run in this process with the engine gives the same FS (deterministic engine).
-    const job = planSweep(DEFAULT_PARAMS, DEFAULT_SWEEP).find((j) => j.caseKey === "steady-seepage" && j.downstreamRatio === 2.5)!;
+    const job = planSweep(DEFAULT_PARAMS, DEFAULT_SWEEP).find(
+      (j) => j.caseKey === "steady-seepage" && j.downstreamRatio === 2.5,
+    )!;
     const local = runSweepJob(DEFAULT_PARAMS, DEMO_MATERIALS, job, DEFAULT_SWEEP);
     expect(sweep.points.find((p) => p.id === job.id)!.fsBishop).toBeCloseTo(local.fsBishop!, 9);
 
@@ -86,8 +114,18 @@ describe("design studies", () => {
   test("PUT results keeps a browser sweep after re-running its circles, and refuses a doctored FS", async () => {
     const id = await createStudy("Browser sweep study");
     const settings = { ...DEFAULT_SWEEP, from: 2.5, to: 3.5, step: 0.5 };
-    const points: SweepPoint[] = planSweep(DEFAULT_PARAMS, settings).map((job) => runSweepJob(DEFAULT_PARAMS, DEMO_MATERIALS, job, settings));
-    const sweep: StoredSweep = { settings, points, ranOn: "browser", elapsedMs: 1, workers: 1, engineVersion: ENGINE_VERSION, finishedAt: new Date().toISOString() };
+    const points: SweepPoint[] = planSweep(DEFAULT_PARAMS, settings).map((job) =>
+      runSweepJob(DEFAULT_PARAMS, DEMO_MATERIALS, job, settings),
+    );
+    const sweep: StoredSweep = {
+      settings,
+      points,
+      ranOn: "browser",
+      elapsedMs: 1,
+      workers: 1,
+      engineVersion: ENGINE_VERSION,
+      finishedAt: new Date().toISOString(),
+    };
 
     const doctored = structuredClone(sweep);
     doctored.points[0].fsBishop = doctored.points[0].fsBishop! + 0.2;
@@ -102,7 +140,10 @@ describe("design studies", () => {
     expect(study.sweep.points).toHaveLength(9);
 
     // Changing the parameters clears the sweep, which described the old embankment.
-    const patched = await designer.request(`${base}/${id}`, { method: "PATCH", json: { parameters: { ...DEFAULT_PARAMS, crestWidth: 7 } } });
+    const patched = await designer.request(`${base}/${id}`, {
+      method: "PATCH",
+      json: { parameters: { ...DEFAULT_PARAMS, crestWidth: 7 } },
+    });
     expect(patched.status).toBe(200);
     expect((await patched.json()).study.sweep).toBeNull();
   });
@@ -111,27 +152,47 @@ describe("design studies", () => {
     const id = await createStudy("Open study");
     const { lines } = await sweepOnServer(id, { ...DEFAULT_SWEEP, from: 3, to: 4, step: 0.5 });
     const sweep = lines.at(-1)!.sweep!;
-    const reading = readSweep(sweep.points, { "steady-seepage": 1.5, "drawdown-storage": 1.3, "drawdown-surcharge": 1.1 });
+    const reading = readSweep(sweep.points, {
+      "steady-seepage": 1.5,
+      "drawdown-storage": 1.3,
+      "drawdown-surcharge": 1.1,
+    });
     const downstream = reading.cases.find((c) => c.caseKey === "steady-seepage")!;
-    expect(downstream.steepest).toBe(steepestPassingRatio(downstream.points.map((p) => ({ ratio: p.ratio, fs: p.fsBishop })), 1.5));
+    expect(downstream.steepest).toBe(
+      steepestPassingRatio(
+        downstream.points.map((p) => ({ ratio: p.ratio, fs: p.fsBishop })),
+        1.5,
+      ),
+    );
     const point = downstream.points[0];
 
-    const res = await designer.request(`${base}/${id}/open`, { method: "POST", json: { pointId: point.id, target: "run" } });
+    const res = await designer.request(`${base}/${id}/open`, {
+      method: "POST",
+      json: { pointId: point.id, target: "run" },
+    });
     expect(res.status).toBe(201);
     const body = await res.json();
     expect(body.location).toBe(`/projects/${projectId}/runs/${body.run.id}`);
-    const run = (await (await designer.request(`/api/projects/${projectId}/runs`)).json()).runs.find((r: { id: number }) => r.id === body.run.id);
+    const run = (await (await designer.request(`/api/projects/${projectId}/runs`)).json()).runs.find(
+      (r: { id: number }) => r.id === body.run.id,
+    );
     expect(run).toMatchObject({ face: "downstream", loadingCondition: "steady-seepage", requiredFs: 1.5 });
     expect(run.fsBishop).toBeCloseTo(point.fsBishop!, 3); // the run list keeps FS to four decimals
     expect(run.sectionName).toContain("downstream 3.00:1");
 
-    const editor = await designer.request(`${base}/${id}/open`, { method: "POST", json: { pointId: point.id, target: "editor" } });
+    const editor = await designer.request(`${base}/${id}/open`, {
+      method: "POST",
+      json: { pointId: point.id, target: "editor" },
+    });
     expect(editor.status).toBe(201);
     const { section } = await editor.json();
     const stored = await getDb()("sections").where({ id: section.id }).first();
     expect(stored.name).toMatch(/\(2\)$/); // the first open took the plain name
 
-    const unknown = await designer.request(`${base}/${id}/open`, { method: "POST", json: { pointId: "sweep:nothing", target: "run" } });
+    const unknown = await designer.request(`${base}/${id}/open`, {
+      method: "POST",
+      json: { pointId: "sweep:nothing", target: "run" },
+    });
     expect(unknown.status).toBe(404);
   }, 60_000);
 

@@ -31,15 +31,25 @@ function minimalPdf(): Uint8Array {
 
 /** A 1×1 PNG. */
 const PNG_1PX = Uint8Array.from(
-  Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==", "base64"),
+  Buffer.from(
+    "iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==",
+    "base64",
+  ),
 );
 const CSV = new TextEncoder().encode("depth_m,moisture_pct,dry_density_kN_m3\n0.5,18.2,16.9\n1.0,19.4,16.6\n");
 /** The start of a Windows program: "MZ" then NUL-padded header fields. */
-const PROGRAM = Uint8Array.from([0x4d, 0x5a, 0x90, 0x00, 0x03, 0x00, 0x00, 0x00, 0x04, 0x00, 0x00, 0x00, 0xff, 0xff, 0x00, 0x00]);
+const PROGRAM = Uint8Array.from([
+  0x4d, 0x5a, 0x90, 0x00, 0x03, 0x00, 0x00, 0x00, 0x04, 0x00, 0x00, 0x00, 0xff, 0xff, 0x00, 0x00,
+]);
 
 // ---- Helpers --------------------------------------------------------------------
 
-function form(bytes: Uint8Array, name: string, type: string, fields: Record<string, string> = { kind: "other" }): FormData {
+function form(
+  bytes: Uint8Array,
+  name: string,
+  type: string,
+  fields: Record<string, string> = { kind: "other" },
+): FormData {
   const data = new FormData();
   data.append("file", new Blob([bytes.slice()], { type }), name);
   for (const [k, v] of Object.entries(fields)) data.append(k, v);
@@ -111,13 +121,23 @@ afterAll(() => s3.destroy());
 describe("POST then GET /api/projects/:id/documents", () => {
   test("a PDF, a CSV sent as text/plain and a PNG are stored, listed and downloaded byte for byte", async () => {
     const files = [
-      { bytes: minimalPdf(), name: "shear box B-3 4.5 m.pdf", type: "application/pdf", kind: "lab-sheet", stored: "application/pdf" },
+      {
+        bytes: minimalPdf(),
+        name: "shear box B-3 4.5 m.pdf",
+        type: "application/pdf",
+        kind: "lab-sheet",
+        stored: "application/pdf",
+      },
       { bytes: CSV, name: "crest levels.csv", type: "text/plain", kind: "survey", stored: "text/csv" },
       { bytes: PNG_1PX, name: "toe seepage.png", type: "image/png", kind: "photo", stored: "image/png" },
     ];
     const ids: number[] = [];
     for (const f of files) {
-      const { status, body } = await upload(engineer, projectId, form(f.bytes, f.name, f.type, { kind: f.kind, note: "from the field book" }));
+      const { status, body } = await upload(
+        engineer,
+        projectId,
+        form(f.bytes, f.name, f.type, { kind: f.kind, note: "from the field book" }),
+      );
       expect(status, JSON.stringify(body)).toBe(201);
       expect(body.document).toMatchObject({
         originalName: f.name,
@@ -157,10 +177,20 @@ describe("POST then GET /api/projects/:id/documents", () => {
 
   test("a document attached to a material is listed under ?materialId= and only there", async () => {
     const [materialId] = await getDb()("materials").insert({
-      project_id: projectId, key: `docs-clay-${Date.now()}`, name: "Docs test clay core", color: "#8a6d4b",
-      parameters: "{}", sources: "{}", notes: "", updated_by: engineerId,
+      project_id: projectId,
+      key: `docs-clay-${Date.now()}`,
+      name: "Docs test clay core",
+      color: "#8a6d4b",
+      parameters: "{}",
+      sources: "{}",
+      notes: "",
+      updated_by: engineerId,
     });
-    const { status, body } = await upload(designer, projectId, form(CSV, "atterberg limits.csv", "text/csv", { kind: "lab-sheet", materialId: String(materialId) }));
+    const { status, body } = await upload(
+      designer,
+      projectId,
+      form(CSV, "atterberg limits.csv", "text/csv", { kind: "lab-sheet", materialId: String(materialId) }),
+    );
     expect(status, JSON.stringify(body)).toBe(201);
     expect(body.document.materialId).toBe(materialId);
     const mine = await (await engineer.request(`/api/projects/${projectId}/documents?materialId=${materialId}`)).json();
@@ -187,7 +217,11 @@ describe("uploads that are refused leave nothing behind", () => {
 
   test("a body far over the limit is 413 before it is read", async () => {
     await expectNothingStored(projectId, async () => {
-      const { status, body } = await upload(engineer, projectId, form(new Uint8Array(26 * 1024 * 1024), "huge.pdf", "application/pdf"));
+      const { status, body } = await upload(
+        engineer,
+        projectId,
+        form(new Uint8Array(26 * 1024 * 1024), "huge.pdf", "application/pdf"),
+      );
       expect(status).toBe(413);
       expect(body.error.message).toContain("20 MB");
     });
@@ -210,17 +244,33 @@ describe("uploads that are refused leave nothing behind", () => {
   });
 
   test("bad fields, an empty file and a material of another project are 400 with the field named", async () => {
-    const other = await admin.request("/api/projects", { method: "POST", json: { name: `Docs side project ${Date.now()}`, description: "Another cut slope." } });
+    const other = await admin.request("/api/projects", {
+      method: "POST",
+      json: { name: `Docs side project ${Date.now()}`, description: "Another cut slope." },
+    });
     const otherId = (await other.json()).project.id;
     const [foreignMaterial] = await getDb()("materials").insert({
-      project_id: otherId, key: "foreign-sand", name: "Foreign sand", color: "#c8b27a", parameters: "{}", sources: "{}", notes: "", updated_by: engineerId,
+      project_id: otherId,
+      key: "foreign-sand",
+      name: "Foreign sand",
+      color: "#c8b27a",
+      parameters: "{}",
+      sources: "{}",
+      notes: "",
+      updated_by: engineerId,
     });
     const cases: { body: FormData; field: string }[] = [
       { body: form(CSV, "a.csv", "text/csv", { kind: "drawing" }), field: "kind" },
       { body: form(CSV, "a.csv", "text/csv", { kind: "survey", sectionId: "-4" }), field: "sectionId" },
-      { body: form(CSV, "a.csv", "text/csv", { kind: "survey", sectionId: "1", materialId: "1" }), field: "materialId" },
+      {
+        body: form(CSV, "a.csv", "text/csv", { kind: "survey", sectionId: "1", materialId: "1" }),
+        field: "materialId",
+      },
       { body: form(new Uint8Array(0), "empty.csv", "text/csv", { kind: "survey" }), field: "file" },
-      { body: form(CSV, "a.csv", "text/csv", { kind: "lab-sheet", materialId: String(foreignMaterial) }), field: "materialId" },
+      {
+        body: form(CSV, "a.csv", "text/csv", { kind: "lab-sheet", materialId: String(foreignMaterial) }),
+        field: "materialId",
+      },
       { body: form(CSV, "a.csv", "text/csv", { kind: "survey", sectionId: "987654" }), field: "sectionId" },
     ];
     await expectNothingStored(projectId, async () => {
@@ -229,7 +279,10 @@ describe("uploads that are refused leave nothing behind", () => {
         expect(status, JSON.stringify(body)).toBe(400);
         expect(body.error.fields[c.field], JSON.stringify(body)).toBeDefined();
       }
-      const notMultipart = await engineer.request(`/api/projects/${projectId}/documents`, { method: "POST", json: { kind: "other" } });
+      const notMultipart = await engineer.request(`/api/projects/${projectId}/documents`, {
+        method: "POST",
+        json: { kind: "other" },
+      });
       expect(notMultipart.status).toBe(400);
     });
   });
@@ -240,7 +293,13 @@ describe("uploads that are refused leave nothing behind", () => {
     await expectNothingStored(projectId, async () => {
       // A section id that does not exist fails the foreign key after the object was written.
       await expect(
-        storeDocument({ projectId, userId: engineerId, file: { name: "orphan.pdf", claimedType: "application/pdf", bytes: pdf }, type: pdfType, fields: { kind: "other", sectionId: 987654, note: "" } }),
+        storeDocument({
+          projectId,
+          userId: engineerId,
+          file: { name: "orphan.pdf", claimedType: "application/pdf", bytes: pdf },
+          type: pdfType,
+          fields: { kind: "other", sectionId: 987654, note: "" },
+        }),
       ).rejects.toThrow();
     });
   });
@@ -248,7 +307,11 @@ describe("uploads that are refused leave nothing behind", () => {
 
 describe("DELETE /api/projects/:id/documents/:documentId and access", () => {
   test("a designer may not delete an engineer's document (403); the uploader may (204) and the object is gone", async () => {
-    const { body } = await upload(engineer, projectId, form(minimalPdf(), "triaxial CU set 2.pdf", "application/pdf", { kind: "lab-sheet" }));
+    const { body } = await upload(
+      engineer,
+      projectId,
+      form(minimalPdf(), "triaxial CU set 2.pdf", "application/pdf", { kind: "lab-sheet" }),
+    );
     const id = body.document.id;
     const key = (await getDb()("documents").where({ id }).first()).storage_key;
     expect(await objectExists(key)).toBe(true);
@@ -266,7 +329,11 @@ describe("DELETE /api/projects/:id/documents/:documentId and access", () => {
   });
 
   test("an administrator may delete anyone's document", async () => {
-    const { body } = await upload(designer, projectId, form(PNG_1PX, "spillway crack.png", "image/png", { kind: "photo" }));
+    const { body } = await upload(
+      designer,
+      projectId,
+      form(PNG_1PX, "spillway crack.png", "image/png", { kind: "photo" }),
+    );
     const res = await admin.request(`/api/projects/${projectId}/documents/${body.document.id}`, { method: "DELETE" });
     expect(res.status).toBe(204);
   });
@@ -278,21 +345,33 @@ describe("DELETE /api/projects/:id/documents/:documentId and access", () => {
   });
 
   test("someone outside the project gets 404 for the list, an upload and a download", async () => {
-    const created = await admin.request("/api/projects", { method: "POST", json: { name: `Docs closed project ${Date.now()}`, description: "Nobody else is a member." } });
+    const created = await admin.request("/api/projects", {
+      method: "POST",
+      json: { name: `Docs closed project ${Date.now()}`, description: "Nobody else is a member." },
+    });
     const closedId = (await created.json()).project.id;
     const { status, body } = await upload(admin, closedId, form(CSV, "a.csv", "text/csv"));
     // Administrators see every project but do not upload (the permission matrix).
     expect(status).toBe(403);
     expect(body.error.code).toBe("forbidden");
     const [docId] = await getDb()("documents").insert({
-      project_id: closedId, kind: "other", original_name: "x.csv", content_type: "text/csv", size_bytes: 3,
-      storage_key: `projects/${closedId}/documents/not-stored`, sha256: "0".repeat(64), uploaded_by: engineerId,
+      project_id: closedId,
+      kind: "other",
+      original_name: "x.csv",
+      content_type: "text/csv",
+      size_bytes: 3,
+      storage_key: `projects/${closedId}/documents/not-stored`,
+      sha256: "0".repeat(64),
+      uploaded_by: engineerId,
     });
     for (const res of [
       await engineer.request(`/api/projects/${closedId}/documents`),
       await engineer.request(`/api/projects/${closedId}/documents/${docId}`),
       await engineer.request(`/api/projects/${closedId}/documents/${docId}`, { method: "DELETE" }),
-      await engineer.request(`/api/projects/${closedId}/documents`, { method: "POST", body: form(CSV, "a.csv", "text/csv") }),
+      await engineer.request(`/api/projects/${closedId}/documents`, {
+        method: "POST",
+        body: form(CSV, "a.csv", "text/csv"),
+      }),
     ]) {
       expect(res.status).toBe(404);
       expect((await res.json()).error.code).toBe("not_found");

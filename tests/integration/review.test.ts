@@ -13,15 +13,28 @@ import { CHECKLIST_KEYS } from "@/lib/review/checklist";
 
 // ---- helpers: the demo project, a quick run made by the engine as the browser would ----------
 
-interface Demo { projectId: number; sectionId: number; version: number; document: SectionDocument }
+interface Demo {
+  projectId: number;
+  sectionId: number;
+  version: number;
+  document: SectionDocument;
+}
 
 async function demoProject(client: AppClient): Promise<Demo> {
   const projects = (await (await client.request("/api/projects")).json()).projects as { id: number; name: string }[];
   const project = projects.find((p) => p.name === "Lower Wendle Reservoir embankment")!;
-  const sections = (await (await client.request(`/api/projects/${project.id}/sections`)).json()).sections as { id: number; name: string }[];
+  const sections = (await (await client.request(`/api/projects/${project.id}/sections`)).json()).sections as {
+    id: number;
+    name: string;
+  }[];
   const section = sections.find((s) => s.name.startsWith("Main embankment"))!;
   const body = await (await client.request(`/api/projects/${project.id}/sections/${section.id}`)).json();
-  return { projectId: project.id, sectionId: section.id, version: body.section.currentVersion, document: body.document };
+  return {
+    projectId: project.id,
+    sectionId: section.id,
+    version: body.section.currentVersion,
+    document: body.document,
+  };
 }
 
 let cachedBody: { setup: RunSetup; result: unknown } | null = null;
@@ -30,8 +43,15 @@ function quickRunBody(doc: SectionDocument) {
     const g = suggestGrid(doc, directionForFace(doc, "downstream"), { nx: 6, ny: 6, nr: 5 });
     // Parsed, so settings the form defaults are filled in as the browser's form would.
     const setup: RunSetup = runSetupSchema.parse({
-      condition: "steady-seepage", face: "downstream", methods: ["bishop", "fellenius"], slices: 30, ordinaryForm: "classical",
-      grid: g.grid, radii: g.radii, refine: false, requiredFs: 1.5,
+      condition: "steady-seepage",
+      face: "downstream",
+      methods: ["bishop", "fellenius"],
+      slices: 30,
+      ordinaryForm: "classical",
+      grid: g.grid,
+      radii: g.radii,
+      refine: false,
+      requiredFs: 1.5,
     });
     const result = runGridSearch(documentForRun(doc, setup));
     if (!result.ok) throw new Error("search failed");
@@ -43,7 +63,13 @@ function quickRunBody(doc: SectionDocument) {
 async function createDraft(client: AppClient, demo: Demo, title: string, revisesRunId?: number): Promise<number> {
   const res = await client.request(`/api/projects/${demo.projectId}/runs`, {
     method: "POST",
-    json: { sectionId: demo.sectionId, sectionVersion: demo.version, title, ...quickRunBody(demo.document), revisesRunId },
+    json: {
+      sectionId: demo.sectionId,
+      sectionVersion: demo.version,
+      title,
+      ...quickRunBody(demo.document),
+      revisesRunId,
+    },
   });
   expect(res.status).toBe(201);
   return (await res.json()).run.id;
@@ -59,7 +85,9 @@ async function move(client: AppClient, demo: Demo, runId: number, action: string
 async function confirmChecklist(reviewer: AppClient, demo: Demo, runId: number) {
   const res = await reviewer.request(api(demo, runId, "/checklist"), {
     method: "PUT",
-    json: { items: CHECKLIST_KEYS.map((key) => ({ key, state: "ok", note: key === "geometry" ? "Drawing D-102 rev C" : "" })) },
+    json: {
+      items: CHECKLIST_KEYS.map((key) => ({ key, state: "ok", note: key === "geometry" ? "Drawing D-102 rev C" : "" })),
+    },
   });
   expect(res.status).toBe(200);
 }
@@ -74,7 +102,11 @@ async function mailAbout(runTitle: string): Promise<CaughtMail[]> {
 }
 
 async function pdfText(bytes: ArrayBuffer): Promise<string> {
-  const doc = await getDocument({ data: new Uint8Array(bytes), isEvalSupported: false, standardFontDataUrl: path.resolve("node_modules/pdfjs-dist/standard_fonts") + "/" }).promise;
+  const doc = await getDocument({
+    data: new Uint8Array(bytes),
+    isEvalSupported: false,
+    standardFontDataUrl: path.resolve("node_modules/pdfjs-dist/standard_fonts") + "/",
+  }).promise;
   let text = "";
   for (let i = 1; i <= doc.numPages; i++) {
     const content = await (await doc.getPage(i)).getTextContent();
@@ -110,7 +142,9 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     const [toReviewer] = await mailAbout(title);
     expect(toReviewer.envelope.to).toEqual(["reviewer@scarpline.test"]);
     expect(toReviewer.subject).toBe(`Review requested: ${title} — Lower Wendle Reservoir embankment`);
-    expect(toReviewer.text).toMatch(new RegExp(`http://127\\.0\\.0\\.1:\\d+/projects/${demo.projectId}/runs/${first}/review`));
+    expect(toReviewer.text).toMatch(
+      new RegExp(`http://127\\.0\\.0\\.1:\\d+/projects/${demo.projectId}/runs/${first}/review`),
+    );
     expect(toReviewer.text).toContain("Please check the foundation strengths.");
     expect(toReviewer.text).toContain(CAUTION_TEXT);
 
@@ -119,7 +153,14 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     expect(byDesigner.status).toBe(403);
     expect(byDesigner.body.error.message).toMatch(/Only reviewers/);
     expect((await move(engineer, demo, first, "return", "Looks fine to me")).status).toBe(403);
-    expect((await designer.request(api(demo, first, "/checklist"), { method: "PUT", json: { items: [{ key: "fs", state: "ok" }] } })).status).toBe(403);
+    expect(
+      (
+        await designer.request(api(demo, first, "/checklist"), {
+          method: "PUT",
+          json: { items: [{ key: "fs", state: "ok" }] },
+        })
+      ).status,
+    ).toBe(403);
 
     // Sign-off needs the checklist; a return needs a note.
     const early = await move(reviewer, demo, first, "approve");
@@ -130,11 +171,20 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     expect(noNote.body.error.fields.note).toBeDefined();
 
     // Pinned comments: a place on the section and a slice; a slice that does not exist is refused.
-    const place = await reviewer.request(api(demo, first, "/comments"), { method: "POST", json: { body: "Toe drain level differs from drawing D-102.", pin: { x: 62.5, y: 4.25 } } });
+    const place = await reviewer.request(api(demo, first, "/comments"), {
+      method: "POST",
+      json: { body: "Toe drain level differs from drawing D-102.", pin: { x: 62.5, y: 4.25 } },
+    });
     expect(place.status).toBe(201);
-    const slice = await reviewer.request(api(demo, first, "/comments"), { method: "POST", json: { body: "Pore pressure on this slice looks high.", slice: { number: 5, method: "bishop" } } });
+    const slice = await reviewer.request(api(demo, first, "/comments"), {
+      method: "POST",
+      json: { body: "Pore pressure on this slice looks high.", slice: { number: 5, method: "bishop" } },
+    });
     expect(slice.status).toBe(201);
-    const badSlice = await reviewer.request(api(demo, first, "/comments"), { method: "POST", json: { body: "x", slice: { number: 9999, method: "bishop" } } });
+    const badSlice = await reviewer.request(api(demo, first, "/comments"), {
+      method: "POST",
+      json: { body: "x", slice: { number: 9999, method: "bishop" } },
+    });
     expect(badSlice.status).toBe(400);
     expect((await badSlice.json()).error.fields["slice.number"]).toBeDefined();
 
@@ -152,7 +202,9 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
 
     // A returned run stays returned: it cannot be submitted again, renamed or deleted.
     expect((await move(engineer, demo, first, "submit")).status).toBe(409);
-    expect((await engineer.request(api(demo, first), { method: "PATCH", json: { title: "New name" } })).status).toBe(409);
+    expect((await engineer.request(api(demo, first), { method: "PATCH", json: { title: "New name" } })).status).toBe(
+      409,
+    );
     expect((await engineer.request(api(demo, first), { method: "DELETE" })).status).toBe(409);
 
     // The revision is a new run linked to the returned one.
@@ -160,7 +212,10 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     const second = await createDraft(engineer, demo, revTitle, first);
     expect((await move(engineer, demo, second, "submit")).status).toBe(200);
     const chain = (await review(engineer, demo, second)).chain as { id: number; status: string }[];
-    expect(chain.map((c) => [c.id, c.status])).toEqual([[first, "returned"], [second, "submitted"]]);
+    expect(chain.map((c) => [c.id, c.status])).toEqual([
+      [first, "returned"],
+      [second, "submitted"],
+    ]);
 
     await confirmChecklist(reviewer, demo, second);
     const approved = await move(reviewer, demo, second, "approve", "Agrees with the drawings and the lab sets.");
@@ -172,9 +227,17 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     expect(signedOff.text).toMatch(new RegExp(`/projects/${demo.projectId}/runs/${second}`));
 
     // The audit trail has every change with who did it.
-    const events = (await review(engineer, demo, second)).events as { kind: string; toStatus: string | null; actorName: string | null; createdAt: string }[];
+    const events = (await review(engineer, demo, second)).events as {
+      kind: string;
+      toStatus: string | null;
+      actorName: string | null;
+      createdAt: string;
+    }[];
     const statusEvents = events.filter((e) => e.kind === "status").map((e) => [e.toStatus, e.actorName]);
-    expect(statusEvents).toEqual([["submitted", "Demo Engineer"], ["approved", "Demo Reviewer"]]);
+    expect(statusEvents).toEqual([
+      ["submitted", "Demo Engineer"],
+      ["approved", "Demo Reviewer"],
+    ]);
     expect(events.some((e) => e.kind === "checklist" && e.actorName === "Demo Reviewer")).toBe(true);
     expect(events.filter((e) => e.kind === "mail-sent")).toHaveLength(2);
     const firstEvents = (await review(engineer, demo, first)).events as { kind: string }[];
@@ -182,14 +245,21 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
 
     // An approved run and its inputs are frozen for everyone, and in the database itself.
     expect((await move(reviewer, demo, second, "return", "Changed my mind")).status).toBe(409);
-    const rename = await engineer.request(api(demo, second), { method: "PATCH", json: { title: "Renamed after sign-off" } });
+    const rename = await engineer.request(api(demo, second), {
+      method: "PATCH",
+      json: { title: "Renamed after sign-off" },
+    });
     expect(rename.status).toBe(409);
     expect((await rename.json()).error.message).toMatch(/signed off/);
     expect((await engineer.request(api(demo, second), { method: "DELETE" })).status).toBe(409);
-    expect((await reviewer.request(api(demo, second, "/comments"), { method: "POST", json: { body: "late" } })).status).toBe(409);
+    expect(
+      (await reviewer.request(api(demo, second, "/comments"), { method: "POST", json: { body: "late" } })).status,
+    ).toBe(409);
     const admin = await signedIn("admin@scarpline.test");
     expect((await admin.request(api(demo, second), { method: "DELETE" })).status).toBe(409);
-    await expect(getDb()("runs").where({ id: second }).update({ fs_bishop: 9.99 })).rejects.toThrow(/signed-off run cannot be changed/);
+    await expect(getDb()("runs").where({ id: second }).update({ fs_bishop: 9.99 })).rejects.toThrow(
+      /signed-off run cannot be changed/,
+    );
     await expect(getDb()("runs").where({ id: second }).delete()).rejects.toThrow(/only a draft run can be deleted/);
     const row = await getDb()("runs").where({ id: second }).first();
     expect(row.status).toBe("approved");
@@ -208,7 +278,10 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
       const self = await move(engineer, demo, runId, "approve");
       expect(self.status).toBe(403);
       expect(self.body.error.code).toBe("self_review");
-      const checklist = await engineer.request(api(demo, runId, "/checklist"), { method: "PUT", json: { items: [{ key: "fs", state: "ok" }] } });
+      const checklist = await engineer.request(api(demo, runId, "/checklist"), {
+        method: "PUT",
+        json: { items: [{ key: "fs", state: "ok" }] },
+      });
       expect(checklist.status).toBe(403);
     } finally {
       await getDb()("project_members").where(membership).update({ role: "engineer" });
@@ -221,11 +294,15 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     const designer = await signedIn("designer@scarpline.test");
     const demo = await demoProject(engineer);
     const runId = await createDraft(engineer, demo, `Draft to tidy ${Date.now()}`);
-    expect((await designer.request(api(demo, runId), { method: "PATCH", json: { title: "Not mine" } })).status).toBe(403);
+    expect((await designer.request(api(demo, runId), { method: "PATCH", json: { title: "Not mine" } })).status).toBe(
+      403,
+    );
     const bad = await engineer.request(api(demo, runId), { method: "PATCH", json: { title: "x" } });
     expect(bad.status).toBe(400);
     expect((await bad.json()).error.fields.title).toBeDefined();
-    expect((await engineer.request(api(demo, runId), { method: "PATCH", json: { title: "Tidied draft name" } })).status).toBe(200);
+    expect(
+      (await engineer.request(api(demo, runId), { method: "PATCH", json: { title: "Tidied draft name" } })).status,
+    ).toBe(200);
     expect((await getDb()("runs").where({ id: runId }).first()).title).toBe("Tidied draft name");
     expect((await designer.request(api(demo, runId), { method: "DELETE" })).status).toBe(403);
     expect((await engineer.request(api(demo, runId), { method: "DELETE" })).status).toBe(204);
@@ -236,9 +313,19 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const reviewer = await signedIn("reviewer@scarpline.test");
     const demo = await demoProject(engineer);
-    const off = await reviewer.request("/api/account/notifications", { method: "PUT", json: { preferences: [{ kind: "run-submitted", enabled: false }] } });
-    expect((await off.json()).preferences).toEqual({ "run-submitted": false, "run-approved": true, "run-returned": true });
-    const bad = await reviewer.request("/api/account/notifications", { method: "PUT", json: { preferences: [{ kind: "everything", enabled: true }] } });
+    const off = await reviewer.request("/api/account/notifications", {
+      method: "PUT",
+      json: { preferences: [{ kind: "run-submitted", enabled: false }] },
+    });
+    expect((await off.json()).preferences).toEqual({
+      "run-submitted": false,
+      "run-approved": true,
+      "run-returned": true,
+    });
+    const bad = await reviewer.request("/api/account/notifications", {
+      method: "PUT",
+      json: { preferences: [{ kind: "everything", enabled: true }] },
+    });
     expect(bad.status).toBe(400);
     try {
       const title = `Quiet submission ${Date.now()}`;
@@ -248,7 +335,10 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
       const events = (await review(engineer, demo, runId)).events as { kind: string }[];
       expect(events.map((e) => e.kind)).toEqual(["status", "mail-skipped"]);
     } finally {
-      await reviewer.request("/api/account/notifications", { method: "PUT", json: { preferences: [{ kind: "run-submitted", enabled: true }] } });
+      await reviewer.request("/api/account/notifications", {
+        method: "PUT",
+        json: { preferences: [{ kind: "run-submitted", enabled: true }] },
+      });
     }
   });
 
@@ -288,17 +378,19 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
   test("the runs CSV escapes cells a spreadsheet would run as formulas", async () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const demo = await demoProject(engineer);
-    await createDraft(engineer, demo, "=HYPERLINK(\"http://example.invalid\",\"x\")");
+    await createDraft(engineer, demo, '=HYPERLINK("http://example.invalid","x")');
     await createDraft(engineer, demo, "@SUM(A1:A2) run");
     const res = await engineer.request(`/api/projects/${demo.projectId}/runs/export`);
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toMatch(/text\/csv/);
     const csv = await res.text();
-    expect(csv.startsWith("# Caution:") || csv.startsWith("\"# Caution:")).toBe(true);
+    expect(csv.startsWith("# Caution:") || csv.startsWith('"# Caution:')).toBe(true);
     expect(csv).toContain(`"'=HYPERLINK(""http://example.invalid"",""x"")"`);
     expect(csv).toContain("'@SUM(A1:A2) run");
     expect(csv).not.toMatch(/(^|,)=HYPERLINK/m);
-    const slices = await engineer.request(`${api(demo, (await getDb()("runs").max({ id: "id" }).first())!.id, "/slices")}?method=bishop`);
+    const slices = await engineer.request(
+      `${api(demo, (await getDb()("runs").max({ id: "id" }).first())!.id, "/slices")}?method=bishop`,
+    );
     expect(slices.status).toBe(200);
     expect(await slices.text()).toContain("Slice,x left (m)");
   });

@@ -16,7 +16,13 @@ describe("runs", () => {
     const result = searchFor(demo.document, setup);
     const res = await engineer.request(`/api/projects/${demo.projectId}/runs`, {
       method: "POST",
-      json: { sectionId: demo.sectionId, sectionVersion: demo.version, title: "Downstream, steady seepage", setup, result },
+      json: {
+        sectionId: demo.sectionId,
+        sectionVersion: demo.version,
+        title: "Downstream, steady seepage",
+        setup,
+        result,
+      },
     });
     expect(res.status).toBe(201);
     const { run } = await res.json();
@@ -70,7 +76,9 @@ describe("runs", () => {
       json: { sectionId: demo.sectionId, sectionVersion: demo.version, title: "Upstream drawdown", setup, result },
     });
     expect(res.status).toBe(201);
-    const stored = (await (await designer.request(`/api/projects/${demo.projectId}/runs/${(await res.json()).run.id}`)).json()).run;
+    const stored = (
+      await (await designer.request(`/api/projects/${demo.projectId}/runs/${(await res.json()).run.id}`)).json()
+    ).run;
     expect(stored.document.analysis.case).toBe("drawdown");
     expect(stored.document.analysis.drawdown).toEqual({ from: 16, to: 8, method: "effective" });
     expect(stored.document.analysis.direction).toBe("left");
@@ -83,9 +91,14 @@ describe("runs", () => {
     const setup = quickSetup(demo.document, "downstream");
     const result = searchFor(demo.document, setup);
     const body = { sectionId: demo.sectionId, sectionVersion: demo.version, title: "Not mine to run", setup, result };
-    expect((await reviewer.request(`/api/projects/${demo.projectId}/runs`, { method: "POST", json: body })).status).toBe(403);
+    expect(
+      (await reviewer.request(`/api/projects/${demo.projectId}/runs`, { method: "POST", json: body })).status,
+    ).toBe(403);
     const engineer = await signedIn("engineer@scarpline.test");
-    const bad = await engineer.request(`/api/projects/${demo.projectId}/runs`, { method: "POST", json: { ...body, setup: { ...setup, slices: 3, methods: [] } } });
+    const bad = await engineer.request(`/api/projects/${demo.projectId}/runs`, {
+      method: "POST",
+      json: { ...body, setup: { ...setup, slices: 3, methods: [] } },
+    });
     expect(bad.status).toBe(400);
     const fields = (await bad.json()).error.fields;
     expect(Object.keys(fields)).toEqual(expect.arrayContaining(["setup.slices", "setup.methods"]));
@@ -96,9 +109,17 @@ describe("runs", () => {
     const demo = await demoProject(engineer);
     const setup = quickSetup(demo.document, "downstream");
     const result = searchFor(demo.document, setup);
-    const { run } = await (await engineer.request(`/api/projects/${demo.projectId}/runs`, { method: "POST", json: { sectionId: demo.sectionId, sectionVersion: demo.version, title: "Visible to members", setup, result } })).json();
+    const { run } = await (
+      await engineer.request(`/api/projects/${demo.projectId}/runs`, {
+        method: "POST",
+        json: { sectionId: demo.sectionId, sectionVersion: demo.version, title: "Visible to members", setup, result },
+      })
+    ).json();
     const admin = await signedIn("admin@scarpline.test");
-    await admin.request("/api/users", { method: "POST", json: { email: "stranger@scarpline.test", name: "Stran Ger", role: "reviewer", password: "stranger-pass-1" } });
+    await admin.request("/api/users", {
+      method: "POST",
+      json: { email: "stranger@scarpline.test", name: "Stran Ger", role: "reviewer", password: "stranger-pass-1" },
+    });
     const stranger = await signedIn("stranger@scarpline.test", "stranger-pass-1");
     expect((await stranger.request(`/api/projects/${demo.projectId}/runs/${run.id}`)).status).toBe(404);
     expect((await stranger.request(`/api/projects/${demo.projectId}/runs`)).status).toBe(404);
@@ -107,16 +128,36 @@ describe("runs", () => {
   test("required FS per loading condition: a reviewer changes one with a reason; an engineer may not", async () => {
     const reviewer = await signedIn("reviewer@scarpline.test");
     const { projectId } = await demoProject(reviewer);
-    const noReason = await reviewer.request(`/api/projects/${projectId}/loading-conditions/steady-seepage`, { method: "PUT", json: { requiredFs: 1.6, reason: "" } });
+    const noReason = await reviewer.request(`/api/projects/${projectId}/loading-conditions/steady-seepage`, {
+      method: "PUT",
+      json: { requiredFs: 1.6, reason: "" },
+    });
     expect(noReason.status).toBe(400);
-    const ok = await reviewer.request(`/api/projects/${projectId}/loading-conditions/steady-seepage`, { method: "PUT", json: { requiredFs: 1.6, reason: "Owner's standard asks for 1.6 on this dam." } });
+    const ok = await reviewer.request(`/api/projects/${projectId}/loading-conditions/steady-seepage`, {
+      method: "PUT",
+      json: { requiredFs: 1.6, reason: "Owner's standard asks for 1.6 on this dam." },
+    });
     expect(ok.status).toBe(200);
     const steady = (await ok.json()).conditions.find((c: { key: string }) => c.key === "steady-seepage");
-    expect(steady).toMatchObject({ requiredFs: 1.6, defaultFs: 1.5, reason: "Owner's standard asks for 1.6 on this dam." });
+    expect(steady).toMatchObject({
+      requiredFs: 1.6,
+      defaultFs: 1.5,
+      reason: "Owner's standard asks for 1.6 on this dam.",
+    });
     const engineer = await signedIn("engineer@scarpline.test");
-    expect((await engineer.request(`/api/projects/${projectId}/loading-conditions/steady-seepage`, { method: "PUT", json: { requiredFs: 1.2, reason: "I would like it lower please." } })).status).toBe(403);
+    expect(
+      (
+        await engineer.request(`/api/projects/${projectId}/loading-conditions/steady-seepage`, {
+          method: "PUT",
+          json: { requiredFs: 1.2, reason: "I would like it lower please." },
+        })
+      ).status,
+    ).toBe(403);
     // Back to the default removes the project's own value.
-    await reviewer.request(`/api/projects/${projectId}/loading-conditions/steady-seepage`, { method: "PUT", json: { requiredFs: 1.5, reason: "Back to the guideline value." } });
+    await reviewer.request(`/api/projects/${projectId}/loading-conditions/steady-seepage`, {
+      method: "PUT",
+      json: { requiredFs: 1.5, reason: "Back to the guideline value." },
+    });
     const list = (await (await reviewer.request(`/api/projects/${projectId}/loading-conditions`)).json()).conditions;
     expect(list.find((c: { key: string }) => c.key === "steady-seepage").reason).toBeNull();
   });

@@ -7,7 +7,19 @@ import type { SectionDocument } from "@/lib/stability";
 const bank = (): SectionDocument => ({
   version: 1,
   materials: [{ id: "clay", model: "mohr-coulomb", gamma: 19, gammaSat: 20, c: 8, phi: 26 }],
-  regions: [{ material: "clay", points: [[0, 0], [40, 0], [40, 5], [25, 5], [15, 10], [0, 10]] }],
+  regions: [
+    {
+      material: "clay",
+      points: [
+        [0, 0],
+        [40, 0],
+        [40, 5],
+        [25, 5],
+        [15, 10],
+        [0, 10],
+      ],
+    },
+  ],
 });
 
 async function count(table: string): Promise<number> {
@@ -19,21 +31,38 @@ describe("sections and their versions", () => {
   test("create, save twice, read every version, restore the first", async () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const { projectId } = await demoProject(engineer);
-    const created = await engineer.request(`/api/projects/${projectId}/sections`, { method: "POST", json: { name: "Canal bank km 2.1", description: "Left bank", document: bank() } });
+    const created = await engineer.request(`/api/projects/${projectId}/sections`, {
+      method: "POST",
+      json: { name: "Canal bank km 2.1", description: "Left bank", document: bank() },
+    });
     expect(created.status).toBe(201);
     const { section } = await created.json();
 
     const v2 = bank();
     (v2.materials[0] as { phi: number }).phi = 30;
-    const save2 = await engineer.request(`/api/projects/${projectId}/sections/${section.id}`, { method: "PUT", json: { baseVersion: 1, document: v2 } });
+    const save2 = await engineer.request(`/api/projects/${projectId}/sections/${section.id}`, {
+      method: "PUT",
+      json: { baseVersion: 1, document: v2 },
+    });
     expect(save2.status).toBe(200);
     const s2 = await save2.json();
     expect(s2.section.version).toBe(2);
     // The one-line summary names what changed when the user gives none.
     expect(s2.summary).toMatch(/φ' 26° → 30°/);
 
-    const v3 = { ...v2, water: { phreatic: [[0, 8], [40, 3]] as [number, number][] } };
-    const save3 = await engineer.request(`/api/projects/${projectId}/sections/${section.id}`, { method: "PUT", json: { baseVersion: 2, document: v3, summary: "Added the seepage line" } });
+    const v3 = {
+      ...v2,
+      water: {
+        phreatic: [
+          [0, 8],
+          [40, 3],
+        ] as [number, number][],
+      },
+    };
+    const save3 = await engineer.request(`/api/projects/${projectId}/sections/${section.id}`, {
+      method: "PUT",
+      json: { baseVersion: 2, document: v3, summary: "Added the seepage line" },
+    });
     expect((await save3.json()).section.version).toBe(3);
 
     const detail = await (await engineer.request(`/api/projects/${projectId}/sections/${section.id}`)).json();
@@ -45,7 +74,9 @@ describe("sections and their versions", () => {
     const first = await (await engineer.request(`/api/projects/${projectId}/sections/${section.id}/versions/1`)).json();
     expect(first.version.document.materials[0].phi).toBe(26);
 
-    const restored = await engineer.request(`/api/projects/${projectId}/sections/${section.id}/versions/1/restore`, { method: "POST" });
+    const restored = await engineer.request(`/api/projects/${projectId}/sections/${section.id}/versions/1/restore`, {
+      method: "POST",
+    });
     expect(restored.status).toBe(201);
     const now = await (await engineer.request(`/api/projects/${projectId}/sections/${section.id}`)).json();
     expect(now.section.currentVersion).toBe(4);
@@ -57,7 +88,10 @@ describe("sections and their versions", () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const { projectId, sectionId, version, document } = await demoProject(engineer);
     const before = await count("section_versions");
-    const res = await engineer.request(`/api/projects/${projectId}/sections/${sectionId}`, { method: "PUT", json: { baseVersion: version + 5, document } });
+    const res = await engineer.request(`/api/projects/${projectId}/sections/${sectionId}`, {
+      method: "PUT",
+      json: { baseVersion: version + 5, document },
+    });
     expect(res.status).toBe(409);
     expect(await count("section_versions")).toBe(before);
   });
@@ -66,10 +100,18 @@ describe("sections and their versions", () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const { projectId } = await demoProject(engineer);
     const bad = bank();
-    bad.regions[0].points = [[0, 0], [10, 10], [10, 0], [0, 10]]; // edges cross
+    bad.regions[0].points = [
+      [0, 0],
+      [10, 10],
+      [10, 0],
+      [0, 10],
+    ]; // edges cross
     (bad.materials[0] as { phi: number }).phi = 75;
     const sectionsBefore = await count("sections");
-    const res = await engineer.request(`/api/projects/${projectId}/sections`, { method: "POST", json: { name: "Broken", description: "", document: bad } });
+    const res = await engineer.request(`/api/projects/${projectId}/sections`, {
+      method: "POST",
+      json: { name: "Broken", description: "", document: bad },
+    });
     expect(res.status).toBe(400);
     const body = await res.json();
     expect(body.error.code).toBe("invalid_section");
@@ -84,10 +126,20 @@ describe("sections and their versions", () => {
     const { projectId, sectionId, version, document } = await demoProject(engineer);
     const reviewer = await signedIn("reviewer@scarpline.test");
     expect((await reviewer.request(`/api/projects/${projectId}/sections/${sectionId}`)).status).toBe(200);
-    expect((await reviewer.request(`/api/projects/${projectId}/sections/${sectionId}`, { method: "PUT", json: { baseVersion: version, document } })).status).toBe(403);
+    expect(
+      (
+        await reviewer.request(`/api/projects/${projectId}/sections/${sectionId}`, {
+          method: "PUT",
+          json: { baseVersion: version, document },
+        })
+      ).status,
+    ).toBe(403);
 
     const admin = await signedIn("admin@scarpline.test");
-    await admin.request("/api/users", { method: "POST", json: { email: "outsider@scarpline.test", name: "Out Sider", role: "engineer", password: "outsider-pass-1" } });
+    await admin.request("/api/users", {
+      method: "POST",
+      json: { email: "outsider@scarpline.test", name: "Out Sider", role: "engineer", password: "outsider-pass-1" },
+    });
     const outsider = await signedIn("outsider@scarpline.test", "outsider-pass-1");
     expect((await outsider.request(`/api/projects/${projectId}/sections/${sectionId}`)).status).toBe(404);
     expect((await new AppClient().request(`/api/projects/${projectId}/sections/${sectionId}`)).status).toBe(401);

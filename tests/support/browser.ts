@@ -23,7 +23,9 @@ export async function signInAs(page: Page, email: string, password = "scarpline-
 /** Collects console errors and failed requests so a test can assert the page stayed clean. */
 export function watchConsole(page: Page): string[] {
   const errors: string[] = [];
-  page.on("console", (m) => { if (m.type() === "error") errors.push(m.text()); });
+  page.on("console", (m) => {
+    if (m.type() === "error") errors.push(m.text());
+  });
   page.on("pageerror", (e) => errors.push(e.message));
   return errors;
 }
@@ -33,7 +35,9 @@ export async function keepScreenshotOnFailure<T>(page: Page, name: string, body:
   try {
     return await body();
   } catch (err) {
-    await page.screenshot({ path: `test-results/${name.replace(/[^a-z0-9]+/gi, "-")}.png`, fullPage: true }).catch(() => undefined);
+    await page
+      .screenshot({ path: `test-results/${name.replace(/[^a-z0-9]+/gi, "-")}.png`, fullPage: true })
+      .catch(() => undefined);
     throw err;
   }
 }

@@ -8,4 +8,3 @@ export default async function setup(project: TestProject) {
   project.provide("appUrl", stack.appUrl);
   return releaseStack;
 }
-

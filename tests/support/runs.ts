@@ -4,7 +4,11 @@ import { directionForFace } from "@/lib/analysis/face";
 import { suggestGrid } from "@/lib/analysis/auto-grid";
 
 /** A small, quick set-up for a face of a section (the grid placed as the app places it). */
-export function quickSetup(doc: SectionDocument, face: "upstream" | "downstream", overrides: Partial<RunSetup> = {}): RunSetup {
+export function quickSetup(
+  doc: SectionDocument,
+  face: "upstream" | "downstream",
+  overrides: Partial<RunSetup> = {},
+): RunSetup {
   const g = suggestGrid(doc, directionForFace(doc, face), { nx: 8, ny: 8, nr: 6 });
   return {
     condition: face === "downstream" ? "steady-seepage" : "drawdown-storage",

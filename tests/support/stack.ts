@@ -125,7 +125,11 @@ async function startFakeS3(): Promise<FakeS3> {
  * node --import tsx keeps the fake in one process, so killing it leaves nothing behind.
  */
 async function startFake(script: string, readyText: string, env: Record<string, string>): Promise<ChildProcess> {
-  const child = spawn(process.execPath, ["--import", "tsx", script], { cwd: ROOT, env: { ...process.env, ...env }, stdio: ["ignore", "pipe", "pipe"] });
+  const child = spawn(process.execPath, ["--import", "tsx", script], {
+    cwd: ROOT,
+    env: { ...process.env, ...env },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
   // Should the run die before releaseStack, the fake must not outlive it.
   process.once("exit", () => child.kill("SIGKILL"));
   let output = "";
@@ -172,7 +176,13 @@ async function startFakeSmtp(): Promise<FakeSmtp> {
 
 /** The app's mail settings (lib/env.ts) for the run's fake; tests read SMTP_MAIL_DIR too. */
 function smtpEnv(fake: FakeSmtp): Record<string, string> {
-  return { SMTP_HOST: "127.0.0.1", SMTP_PORT: String(fake.port), SMTP_SECURE: "false", SMTP_IGNORE_TLS: "true", SMTP_MAIL_DIR: fake.mailDir };
+  return {
+    SMTP_HOST: "127.0.0.1",
+    SMTP_PORT: String(fake.port),
+    SMTP_SECURE: "false",
+    SMTP_IGNORE_TLS: "true",
+    SMTP_MAIL_DIR: fake.mailDir,
+  };
 }
 
 async function stopChild(child: ChildProcess): Promise<void> {
@@ -217,21 +227,25 @@ async function start(withServer: boolean, state: State): Promise<Stack> {
   const port = await freePort();
   const appUrl = `http://127.0.0.1:${port}`;
   let output = "";
-  const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(port)], {
-    cwd: ROOT,
-    env: {
-      ...process.env,
-      NODE_ENV: "production",
-      NEXT_DIST_DIR: DIST_DIR,
-      DATABASE_NAME: state.dbName,
-      NEXTAUTH_URL: appUrl,
-      APP_URL: appUrl,
-      NEXTAUTH_SECRET: randomBytes(24).toString("base64url"),
-      ...s3Env(state.s3),
-      ...smtpEnv(state.smtp),
+  const server = spawn(
+    process.execPath,
+    ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(port)],
+    {
+      cwd: ROOT,
+      env: {
+        ...process.env,
+        NODE_ENV: "production",
+        NEXT_DIST_DIR: DIST_DIR,
+        DATABASE_NAME: state.dbName,
+        NEXTAUTH_URL: appUrl,
+        APP_URL: appUrl,
+        NEXTAUTH_SECRET: randomBytes(24).toString("base64url"),
+        ...s3Env(state.s3),
+        ...smtpEnv(state.smtp),
+      },
+      stdio: ["ignore", "pipe", "pipe"],
     },
-    stdio: ["ignore", "pipe", "pipe"],
-  });
+  );
   server.stdout?.on("data", (d) => (output += d));
   server.stderr?.on("data", (d) => (output += d));
   state.server = server;
@@ -242,7 +256,11 @@ async function start(withServer: boolean, state: State): Promise<Stack> {
 /** Starts (or joins) the stack. The first caller decides whether the app server is needed. */
 export function acquireStack(withServer: boolean): Promise<Stack> {
   if (!g.scarplineStack) {
-    const state: State = { users: 0, dbName: `scarpline_test_${process.pid}_${randomBytes(3).toString("hex")}`, stack: Promise.resolve() as never };
+    const state: State = {
+      users: 0,
+      dbName: `scarpline_test_${process.pid}_${randomBytes(3).toString("hex")}`,
+      stack: Promise.resolve() as never,
+    };
     state.stack = start(withServer, state);
     g.scarplineStack = state;
   }

@@ -36,6 +36,10 @@ describe("decideThrottle(record, now)", () => {
     const later = new Date(now.getTime() + 16 * 60000);
     expect(decideThrottle({ failures: LOCK_AFTER, lastFailureAt: now }, later).locked).toBe(false);
     const muchLater = new Date(now.getTime() + 120 * 60000);
-    expect(decideThrottle({ failures: 50, lastFailureAt: now }, muchLater)).toEqual({ locked: false, delayMs: 0, retryInMinutes: 0 });
+    expect(decideThrottle({ failures: 50, lastFailureAt: now }, muchLater)).toEqual({
+      locked: false,
+      delayMs: 0,
+      retryInMinutes: 0,
+    });
   });
 });

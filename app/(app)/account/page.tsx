@@ -17,9 +17,12 @@ export default async function AccountPage() {
       <div className="grid gap-6 md:grid-cols-2">
         <div className="space-y-6 self-start">
           <dl className="panel grid grid-cols-[8rem_1fr] gap-y-2 p-4 text-sm">
-            <dt className="text-ink-soft">Name</dt><dd>{user.name}</dd>
-            <dt className="text-ink-soft">E-mail</dt><dd>{user.email}</dd>
-            <dt className="text-ink-soft">Role</dt><dd data-testid="account-role">{ROLE_LABELS[user.role]}</dd>
+            <dt className="text-ink-soft">Name</dt>
+            <dd>{user.name}</dd>
+            <dt className="text-ink-soft">E-mail</dt>
+            <dd>{user.email}</dd>
+            <dt className="text-ink-soft">Role</dt>
+            <dd data-testid="account-role">{ROLE_LABELS[user.role]}</dd>
           </dl>
           <NotificationPrefs initial={notices} />
         </div>

@@ -21,7 +21,9 @@ export default async function SignInPage() {
             <SignInForm />
           </Suspense>
         </div>
-        <p className="mt-4 text-center text-xs text-ink-faint">Accounts are created by your team&apos;s administrator.</p>
+        <p className="mt-4 text-center text-xs text-ink-faint">
+          Accounts are created by your team&apos;s administrator.
+        </p>
       </div>
     </main>
   );

@@ -12,21 +12,51 @@ export function CompactionPlot({ result }: { result: CompactionResult }) {
   // The zero-air-voids line climbs steeply on the dry side; the frame follows the test data instead.
   const y = niceDomain([...result.points.map((p) => p.y), result.maxDryDensity, acceptance.dryDensity], { count: 4 });
   return (
-    <PlotFrame title="Compaction curve" x={{ domain: x, label: "Moisture content w (%)" }} y={{ domain: y, label: "Dry density ρd (Mg/m³)" }}>
+    <PlotFrame
+      title="Compaction curve"
+      x={{ domain: x, label: "Moisture content w (%)" }}
+      y={{ domain: y, label: "Dry density ρd (Mg/m³)" }}
+    >
       {(sx, sy) => {
         const left = sx(acceptance.dryLimit.moistureContent);
         const right = sx(acceptance.wetLimit.moistureContent);
         return (
           <>
-            <rect x={left} y={sy(y[1])} width={Math.max(0, right - left)} height={Math.max(0, sy(acceptance.dryDensity) - sy(y[1]))} fill={PLOT_COLORS.band} opacity={0.35}>
+            <rect
+              x={left}
+              y={sy(y[1])}
+              width={Math.max(0, right - left)}
+              height={Math.max(0, sy(acceptance.dryDensity) - sy(y[1]))}
+              fill={PLOT_COLORS.band}
+              opacity={0.35}
+            >
               <title>{`Acceptance window: ${formatTick(acceptance.percent)} % of the maximum dry density, w ${acceptance.dryLimit.moistureContent.toFixed(1)}–${acceptance.wetLimit.moistureContent.toFixed(1)} %`}</title>
             </rect>
-            <DataLine points={[[x[0], acceptance.dryDensity], [x[1], acceptance.dryDensity]]} sx={sx} sy={sy} color={PLOT_COLORS.band} dashed width={1.2} />
+            <DataLine
+              points={[
+                [x[0], acceptance.dryDensity],
+                [x[1], acceptance.dryDensity],
+              ]}
+              sx={sx}
+              sy={sy}
+              color={PLOT_COLORS.band}
+              dashed
+              width={1.2}
+            />
             <DataLine points={result.zeroAirVoids} sx={sx} sy={sy} color={PLOT_COLORS.second} dashed />
             <DataLine points={result.curve} sx={sx} sy={sy} color={PLOT_COLORS.line} />
-            <line x1={sx(result.optimumMoistureContent)} x2={sx(result.optimumMoistureContent)} y1={sy(y[0])} y2={sy(result.maxDryDensity)} stroke={PLOT_COLORS.accent} strokeDasharray="2 3" />
+            <line
+              x1={sx(result.optimumMoistureContent)}
+              x2={sx(result.optimumMoistureContent)}
+              y1={sy(y[0])}
+              y2={sy(result.maxDryDensity)}
+              stroke={PLOT_COLORS.accent}
+              strokeDasharray="2 3"
+            />
             <DataPoints points={result.points} sx={sx} sy={sy} />
-            <text x={sx(x[1]) - 4} y={sy(y[1]) + 12} fontSize={9} textAnchor="end" fill={PLOT_COLORS.second}>zero air voids, Gs {result.specificGravity}</text>
+            <text x={sx(x[1]) - 4} y={sy(y[1]) + 12} fontSize={9} textAnchor="end" fill={PLOT_COLORS.second}>
+              zero air voids, Gs {result.specificGravity}
+            </text>
           </>
         );
       }}

@@ -13,19 +13,87 @@ export function PlasticityChart({ result }: { result: AtterbergResult }) {
   const uTop = Math.min(llMax, piMax / 0.9 + 8);
   const aAt = (pi: number) => pi / 0.73 + 20;
   return (
-    <PlotFrame title="Plasticity chart" x={{ domain: [0, llMax], label: "Liquid limit LL (%)" }} y={{ domain: [0, piMax], label: "Plasticity index PI (%)" }}>
+    <PlotFrame
+      title="Plasticity chart"
+      x={{ domain: [0, llMax], label: "Liquid limit LL (%)" }}
+      y={{ domain: [0, piMax], label: "Plasticity index PI (%)" }}
+    >
       {(sx, sy) => (
         <>
-          <polygon points={[[16, 4], [aStart, 4], [aAt(7), 7], [16, 7]].map(([x, y]) => `${sx(x)},${sy(y)}`).join(" ")} fill={PLOT_COLORS.band} opacity={0.45} />
-          <DataLine points={[[50, 0], [50, piMax]]} sx={sx} sy={sy} color={PLOT_COLORS.axis} width={1} />
-          <DataLine points={[[aStart, 4], [llMax, aLine(llMax)]]} sx={sx} sy={sy} color={PLOT_COLORS.line} />
-          <DataLine points={[[16, 0], [16, uLine(16)], [uTop, uLine(uTop)]]} sx={sx} sy={sy} color={PLOT_COLORS.accent} dashed />
-          <text x={sx(llMax) - 4} y={sy(aLine(llMax)) + 12} fontSize={9} textAnchor="end" fill={PLOT_COLORS.line}>A-line</text>
-          <text x={sx(uTop) - 4} y={sy(uLine(uTop)) + 12} fontSize={9} textAnchor="end" fill={PLOT_COLORS.accent}>U-line</text>
-          {[["CL", 38, 22], ["CH", 70, 42], ["ML", 38, 4], ["MH", 75, 12], ["CL-ML", 9, 5.5]].map(([t, x, y]) => (
-            <text key={t as string} x={sx(x as number)} y={sy(y as number)} fontSize={9} textAnchor="middle" fill={PLOT_COLORS.axis}>{t}</text>
+          <polygon
+            points={[
+              [16, 4],
+              [aStart, 4],
+              [aAt(7), 7],
+              [16, 7],
+            ]
+              .map(([x, y]) => `${sx(x)},${sy(y)}`)
+              .join(" ")}
+            fill={PLOT_COLORS.band}
+            opacity={0.45}
+          />
+          <DataLine
+            points={[
+              [50, 0],
+              [50, piMax],
+            ]}
+            sx={sx}
+            sy={sy}
+            color={PLOT_COLORS.axis}
+            width={1}
+          />
+          <DataLine
+            points={[
+              [aStart, 4],
+              [llMax, aLine(llMax)],
+            ]}
+            sx={sx}
+            sy={sy}
+            color={PLOT_COLORS.line}
+          />
+          <DataLine
+            points={[
+              [16, 0],
+              [16, uLine(16)],
+              [uTop, uLine(uTop)],
+            ]}
+            sx={sx}
+            sy={sy}
+            color={PLOT_COLORS.accent}
+            dashed
+          />
+          <text x={sx(llMax) - 4} y={sy(aLine(llMax)) + 12} fontSize={9} textAnchor="end" fill={PLOT_COLORS.line}>
+            A-line
+          </text>
+          <text x={sx(uTop) - 4} y={sy(uLine(uTop)) + 12} fontSize={9} textAnchor="end" fill={PLOT_COLORS.accent}>
+            U-line
+          </text>
+          {[
+            ["CL", 38, 22],
+            ["CH", 70, 42],
+            ["ML", 38, 4],
+            ["MH", 75, 12],
+            ["CL-ML", 9, 5.5],
+          ].map(([t, x, y]) => (
+            <text
+              key={t as string}
+              x={sx(x as number)}
+              y={sy(y as number)}
+              fontSize={9}
+              textAnchor="middle"
+              fill={PLOT_COLORS.axis}
+            >
+              {t}
+            </text>
           ))}
-          <circle cx={sx(result.liquidLimit)} cy={sy(result.plasticityIndex)} r={5} fill={PLOT_COLORS.points} stroke="#1f1d1a" strokeWidth={1}>
+          <circle
+            cx={sx(result.liquidLimit)}
+            cy={sy(result.plasticityIndex)}
+            r={5}
+            fill={PLOT_COLORS.points}
+            stroke="#1f1d1a"
+            strokeWidth={1}
+          >
             <title>{`LL ${result.liquidLimit} %, PI ${result.plasticityIndex.toFixed(1)} %`}</title>
           </circle>
         </>

@@ -1,7 +1,15 @@
 import { formatTick, linearScale, niceTicks } from "@/lib/materials/plot-scale";
 
 /** Colours of the lab plots (Tol's muted scheme, as the material colours). */
-export const PLOT_COLORS = { points: "#CC6677", line: "#332288", second: "#117733", band: "#DDCC77", accent: "#882255", grid: "#d9d3c7", axis: "#7b756c" } as const;
+export const PLOT_COLORS = {
+  points: "#CC6677",
+  line: "#332288",
+  second: "#117733",
+  band: "#DDCC77",
+  accent: "#882255",
+  grid: "#d9d3c7",
+  axis: "#7b756c",
+} as const;
 
 export type Scale = (value: number) => number;
 
@@ -31,7 +39,13 @@ export function PlotFrame({ title, x, y, width = 380, height = 260, children }: 
   const yTicks = niceTicks(Math.min(...y.domain), Math.max(...y.domain), 5);
   const clipId = `clip-${title.replace(/[^a-z0-9]+/gi, "-").toLowerCase()}`;
   return (
-    <svg viewBox={`0 0 ${width} ${height}`} className="h-auto w-full max-w-md" role="img" aria-label={title} data-testid="lab-plot">
+    <svg
+      viewBox={`0 0 ${width} ${height}`}
+      className="h-auto w-full max-w-md"
+      role="img"
+      aria-label={title}
+      data-testid="lab-plot"
+    >
       <title>{title}</title>
       <defs>
         <clipPath id={clipId}>
@@ -41,34 +55,95 @@ export function PlotFrame({ title, x, y, width = 380, height = 260, children }: 
       {xTicks.map((t) => (
         <g key={`x${t}`}>
           <line x1={sx(t)} x2={sx(t)} y1={M.top} y2={height - M.bottom} stroke={PLOT_COLORS.grid} strokeWidth={0.5} />
-          <text x={sx(t)} y={height - M.bottom + 13} fontSize={10} textAnchor="middle" fill={PLOT_COLORS.axis}>{formatTick(t)}</text>
+          <text x={sx(t)} y={height - M.bottom + 13} fontSize={10} textAnchor="middle" fill={PLOT_COLORS.axis}>
+            {formatTick(t)}
+          </text>
         </g>
       ))}
       {yTicks.map((t) => (
         <g key={`y${t}`}>
           <line x1={M.left} x2={width - M.right} y1={sy(t)} y2={sy(t)} stroke={PLOT_COLORS.grid} strokeWidth={0.5} />
-          <text x={M.left - 5} y={sy(t) + 3} fontSize={10} textAnchor="end" fill={PLOT_COLORS.axis}>{formatTick(t)}</text>
+          <text x={M.left - 5} y={sy(t) + 3} fontSize={10} textAnchor="end" fill={PLOT_COLORS.axis}>
+            {formatTick(t)}
+          </text>
         </g>
       ))}
-      <rect x={M.left} y={M.top} width={width - M.left - M.right} height={height - M.top - M.bottom} fill="none" stroke={PLOT_COLORS.axis} strokeWidth={0.8} />
-      <text x={(M.left + width - M.right) / 2} y={height - 6} fontSize={11} textAnchor="middle" fill="#4a4640">{x.label}</text>
-      <text x={12} y={(M.top + height - M.bottom) / 2} fontSize={11} textAnchor="middle" fill="#4a4640" transform={`rotate(-90 12 ${(M.top + height - M.bottom) / 2})`}>{y.label}</text>
+      <rect
+        x={M.left}
+        y={M.top}
+        width={width - M.left - M.right}
+        height={height - M.top - M.bottom}
+        fill="none"
+        stroke={PLOT_COLORS.axis}
+        strokeWidth={0.8}
+      />
+      <text x={(M.left + width - M.right) / 2} y={height - 6} fontSize={11} textAnchor="middle" fill="#4a4640">
+        {x.label}
+      </text>
+      <text
+        x={12}
+        y={(M.top + height - M.bottom) / 2}
+        fontSize={11}
+        textAnchor="middle"
+        fill="#4a4640"
+        transform={`rotate(-90 12 ${(M.top + height - M.bottom) / 2})`}
+      >
+        {y.label}
+      </text>
       <g clipPath={`url(#${clipId})`}>{children(sx, sy)}</g>
     </svg>
   );
 }
 
 /** A polyline through [x, y] pairs in data units. */
-export function DataLine({ points, sx, sy, color, dashed = false, width = 1.6 }: { points: readonly (readonly [number, number])[]; sx: Scale; sy: Scale; color: string; dashed?: boolean; width?: number }) {
-  return <polyline points={points.map(([x, y]) => `${sx(x)},${sy(y)}`).join(" ")} fill="none" stroke={color} strokeWidth={width} strokeDasharray={dashed ? "5 4" : undefined} />;
+export function DataLine({
+  points,
+  sx,
+  sy,
+  color,
+  dashed = false,
+  width = 1.6,
+}: {
+  points: readonly (readonly [number, number])[];
+  sx: Scale;
+  sy: Scale;
+  color: string;
+  dashed?: boolean;
+  width?: number;
+}) {
+  return (
+    <polyline
+      points={points.map(([x, y]) => `${sx(x)},${sy(y)}`).join(" ")}
+      fill="none"
+      stroke={color}
+      strokeWidth={width}
+      strokeDasharray={dashed ? "5 4" : undefined}
+    />
+  );
 }
 
 /** Measured points as open circles, each with a tooltip naming its test. */
-export function DataPoints({ points, sx, sy }: { points: readonly { x: number; y: number; index: number; specimen?: string }[]; sx: Scale; sy: Scale }) {
+export function DataPoints({
+  points,
+  sx,
+  sy,
+}: {
+  points: readonly { x: number; y: number; index: number; specimen?: string }[];
+  sx: Scale;
+  sy: Scale;
+}) {
   return (
     <>
       {points.map((p) => (
-        <circle key={p.index} cx={sx(p.x)} cy={sy(p.y)} r={4} fill="#fffdf8" stroke={PLOT_COLORS.points} strokeWidth={2}>
+        <circle
+          key={p.index}
+          cx={sx(p.x)}
+          cy={sy(p.y)}
+          r={4}
+          fill="#fffdf8"
+          stroke={PLOT_COLORS.points}
+          strokeWidth={2}
+        >
           <title>{`test ${p.index}${p.specimen ? ` (${p.specimen})` : ""}: ${formatTick(p.x)}, ${formatTick(p.y)}`}</title>
         </circle>
       ))}

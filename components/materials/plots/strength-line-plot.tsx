@@ -16,7 +16,10 @@ export function StrengthLinePlot({ title, xLabel, yLabel, points, line }: Streng
   const y = niceDomain([...points.map((p) => p.y), line[0][1], line[1][1]], { includeZero: true });
   // Extend the line to the plot's right edge so the envelope reads across the whole frame.
   const slope = line[1][0] === line[0][0] ? 0 : (line[1][1] - line[0][1]) / (line[1][0] - line[0][0]);
-  const extended: [number, number][] = [[line[0][0], line[0][1]], [x[1], line[0][1] + slope * (x[1] - line[0][0])]];
+  const extended: [number, number][] = [
+    [line[0][0], line[0][1]],
+    [x[1], line[0][1] + slope * (x[1] - line[0][0])],
+  ];
   return (
     <PlotFrame title={title} x={{ domain: x, label: xLabel }} y={{ domain: y, label: yLabel }}>
       {(sx, sy) => (

@@ -8,12 +8,20 @@ import { DataLine, DataPoints, PLOT_COLORS, PlotFrame } from "./plot-frame";
  */
 export function SuProfilePlot({ result }: { result: UndrainedStrengthResult }) {
   const placed = result.points.every((p) => p.elevation !== null);
-  const points = result.points.map((p) => ({ x: p.su, y: placed ? (p.elevation as number) : p.index, index: p.index, specimen: p.specimen }));
+  const points = result.points.map((p) => ({
+    x: p.su,
+    y: placed ? (p.elevation as number) : p.index,
+    index: p.index,
+    specimen: p.specimen,
+  }));
   const ys = points.map((p) => p.y);
   const line: [number, number][] =
     result.model === "linear"
       ? [result.line[0], result.line[1]]
-      : [[result.su, Math.min(...ys)], [result.su, Math.max(...ys)]];
+      : [
+          [result.su, Math.min(...ys)],
+          [result.su, Math.max(...ys)],
+        ];
   const x = niceDomain([...points.map((p) => p.x), ...line.map((l) => l[0])], { includeZero: true });
   const yDomain = niceDomain([...ys, ...line.map((l) => l[1])]);
   return (

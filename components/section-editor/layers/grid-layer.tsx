@@ -21,11 +21,25 @@ export function GridLayer({ view, width, height }: GridLayerProps) {
       <Rect x={0} y={0} width={width} height={height} fill={CANVAS_COLORS.paper} />
       {xs.map((x) => {
         const sx = worldToScreen(view, x, 0)[0];
-        return <Line key={`x${x}`} points={[sx, 0, sx, height]} stroke={x === 0 ? CANVAS_COLORS.gridStrong : CANVAS_COLORS.grid} strokeWidth={1} />;
+        return (
+          <Line
+            key={`x${x}`}
+            points={[sx, 0, sx, height]}
+            stroke={x === 0 ? CANVAS_COLORS.gridStrong : CANVAS_COLORS.grid}
+            strokeWidth={1}
+          />
+        );
       })}
       {ys.map((y) => {
         const sy = worldToScreen(view, 0, y)[1];
-        return <Line key={`y${y}`} points={[0, sy, width, sy]} stroke={y === 0 ? CANVAS_COLORS.gridStrong : CANVAS_COLORS.grid} strokeWidth={1} />;
+        return (
+          <Line
+            key={`y${y}`}
+            points={[0, sy, width, sy]}
+            stroke={y === 0 ? CANVAS_COLORS.gridStrong : CANVAS_COLORS.grid}
+            strokeWidth={1}
+          />
+        );
       })}
     </Layer>
   );

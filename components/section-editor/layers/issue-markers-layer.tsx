@@ -41,7 +41,18 @@ export function IssueMarkersLayer({ issues, view, focused }: IssueMarkersLayerPr
         if (!issue.at) return null;
         const [x, y] = worldToScreen(view, issue.at[0], issue.at[1]);
         const color = issue.severity === "warning" ? CANVAS_COLORS.warning : CANVAS_COLORS.error;
-        return <Text key={`n${i}`} x={x + 11} y={y - 22} text={String(i + 1)} fontSize={11} fontStyle="bold" fontFamily={CANVAS_FONT} fill={color} />;
+        return (
+          <Text
+            key={`n${i}`}
+            x={x + 11}
+            y={y - 22}
+            text={String(i + 1)}
+            fontSize={11}
+            fontStyle="bold"
+            fontFamily={CANVAS_FONT}
+            fill={color}
+          />
+        );
       })}
     </Layer>
   );

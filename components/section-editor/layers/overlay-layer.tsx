@@ -70,7 +70,13 @@ export function OverlayLayer({ doc, view, tool, selection, draft, hover, reservo
       {draft && <DraftShape draft={draft} view={view} hover={hover} />}
       {reservoirPreview && <ReservoirPreview {...reservoirPreview} view={view} />}
       {hover && hover.snap === "vertex" && (
-        <Circle x={worldToScreen(view, ...hover.snapped)[0]} y={worldToScreen(view, ...hover.snapped)[1]} radius={7} stroke={CANVAS_COLORS.accent} strokeWidth={2} />
+        <Circle
+          x={worldToScreen(view, ...hover.snapped)[0]}
+          y={worldToScreen(view, ...hover.snapped)[1]}
+          radius={7}
+          stroke={CANVAS_COLORS.accent}
+          strokeWidth={2}
+        />
       )}
       {hover && hover.snap === "grid" && <GridCross view={view} at={hover.snapped} />}
     </Layer>
@@ -83,13 +89,29 @@ function DraftShape({ draft, view, hover }: { draft: Draft; view: ViewTransform;
   const color = draft.kind === "phreatic" ? CANVAS_COLORS.waterLine : CANVAS_COLORS.accent;
   return (
     <>
-      <Line points={pts} stroke={color} strokeWidth={2} closed={false} dash={draft.kind === "phreatic" ? [10, 6] : undefined} />
+      <Line
+        points={pts}
+        stroke={color}
+        strokeWidth={2}
+        closed={false}
+        dash={draft.kind === "phreatic" ? [10, 6] : undefined}
+      />
       {last && hover && (
         <Line points={toScreenList([last, hover.snapped], view)} stroke={color} strokeWidth={1.5} dash={[4, 4]} />
       )}
       {draft.points.map((p, i) => {
         const [x, y] = worldToScreen(view, p[0], p[1]);
-        return <Circle key={i} x={x} y={y} radius={i === 0 ? 6 : 4} fill={CANVAS_COLORS.paper} stroke={color} strokeWidth={2} />;
+        return (
+          <Circle
+            key={i}
+            x={x}
+            y={y}
+            radius={i === 0 ? 6 : 4}
+            fill={CANVAS_COLORS.paper}
+            stroke={color}
+            strokeWidth={2}
+          />
+        );
       })}
     </>
   );
@@ -101,7 +123,14 @@ function ReservoirPreview({ y, x1, x2, view }: { y: number; x1: number; x2: numb
   return (
     <>
       <Line points={[ax, ay, bx, ay]} stroke={CANVAS_COLORS.waterLine} strokeWidth={2} dash={[3, 3]} />
-      <Text x={Math.min(ax, bx) + 4} y={ay - 16} text={`${y.toFixed(2)} m`} fontSize={11} fontFamily={CANVAS_FONT} fill={CANVAS_COLORS.waterLine} />
+      <Text
+        x={Math.min(ax, bx) + 4}
+        y={ay - 16}
+        text={`${y.toFixed(2)} m`}
+        fontSize={11}
+        fontFamily={CANVAS_FONT}
+        fill={CANVAS_COLORS.waterLine}
+      />
     </>
   );
 }

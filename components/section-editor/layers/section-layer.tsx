@@ -32,13 +32,30 @@ export function SectionLayer({ doc, view, colorOf, ground, ponds }: SectionLayer
         />
       ))}
       {ponds.map((p, i) => (
-        <Line key={`p${i}`} points={toScreenList(p, view)} closed fill={withAlpha(CANVAS_COLORS.pondFill, POND_FILL_OPACITY)} />
+        <Line
+          key={`p${i}`}
+          points={toScreenList(p, view)}
+          closed
+          fill={withAlpha(CANVAS_COLORS.pondFill, POND_FILL_OPACITY)}
+        />
       ))}
       {ground.length > 1 && (
-        <Line points={toScreenList(ground, view)} stroke={CANVAS_COLORS.ink} strokeWidth={2.75} lineJoin="round" lineCap="round" />
+        <Line
+          points={toScreenList(ground, view)}
+          stroke={CANVAS_COLORS.ink}
+          strokeWidth={2.75}
+          lineJoin="round"
+          lineCap="round"
+        />
       )}
       {phreatic && phreatic.length > 1 && (
-        <Line points={toScreenList(phreatic, view)} stroke={CANVAS_COLORS.waterLine} strokeWidth={2} dash={[10, 6]} lineJoin="round" />
+        <Line
+          points={toScreenList(phreatic, view)}
+          stroke={CANVAS_COLORS.waterLine}
+          strokeWidth={2}
+          dash={[10, 6]}
+          lineJoin="round"
+        />
       )}
     </Layer>
   );

@@ -61,7 +61,16 @@ export function copyFactors(a: StageFactors, b: StageFactors): void {
 export function createStageScratch(cap: number): StageScratch {
   const f = () => new Float64Array(cap);
   return {
-    sigB: f(), tauB: f(), sigO: f(), tauO: f(), tau2: f(), taud: f(), gov: new Uint8Array(cap),
-    curB: factors(), curO: factors(), govB: factors(), govO: factors(),
+    sigB: f(),
+    tauB: f(),
+    sigO: f(),
+    tauO: f(),
+    tau2: f(),
+    taud: f(),
+    gov: new Uint8Array(cap),
+    curB: factors(),
+    curO: factors(),
+    govB: factors(),
+    govO: factors(),
   };
 }

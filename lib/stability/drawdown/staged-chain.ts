@@ -37,7 +37,17 @@ const KIND_UNDRAINED = cases.KIND_UNDRAINED;
  * Results go to S.stage.curO / curB; `final` is NaN where the method has no valid result.
  * @returns OK, or the geometric reason the mass cannot be sliced; S.D is the post-drawdown driving term (kN).
  */
-export function stageMass(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, xA: number, xB: number, dir: number, wantB: boolean): number {
+export function stageMass(
+  P: PreparedSection,
+  S: Scratch,
+  xc: number,
+  yc: number,
+  r: number,
+  xA: number,
+  xB: number,
+  dir: number,
+  wantB: boolean,
+): number {
   const St = S.stage;
   const pre = P.staged!.pre;
   gov.clearFactors(St.curO);
@@ -113,7 +123,16 @@ function runChain(P: PreparedSection, S: Scratch, D: number, bishop: boolean, ou
     if (kind === DRAIN_LOW) {
       const t2 = two
         ? twoStageStrength(sig[i], M.c[mi], M.tanPhi[mi], SM.cR[mi], SM.tanPhiR[mi])
-        : threeStageStrength(sig[i], tau[i], M.c[mi], SM.sinPhi[mi], SM.cosPhi[mi], M.tanPhi[mi], SM.d[mi], SM.tanPsi[mi]);
+        : threeStageStrength(
+            sig[i],
+            tau[i],
+            M.c[mi],
+            SM.sinPhi[mi],
+            SM.cosPhi[mi],
+            M.tanPhi[mi],
+            SM.d[mi],
+            SM.tanPsi[mi],
+          );
       St.tau2[i] = t2;
       S.c[i] = t2;
       S.tanPhi[i] = 0;

@@ -23,7 +23,14 @@ const OK = status.OK;
  * Evaluates circle (xc, yc, r) (m) of a staged-drawdown section.
  * @returns OK when at least one slip mass has a driving moment after drawdown, else the reason
  */
-export function evaluateStagedCircle(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, wantBishop: boolean): number {
+export function evaluateStagedCircle(
+  P: PreparedSection,
+  S: Scratch,
+  xc: number,
+  yc: number,
+  r: number,
+  wantBishop: boolean,
+): number {
   S.fsO = NaN;
   S.fsB = NaN;
   S.govO = -1;
@@ -48,7 +55,16 @@ export function evaluateStagedCircle(P: PreparedSection, S: Scratch, xc: number,
  * Re-stages mass m of a circle already evaluated, leaving its slices and Bishop's final-stage
  * strengths (or the ordinary method's when Bishop is not wanted) in S, for the slice table.
  */
-export function replayStagedMass(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, m: number, dir: number, wantBishop: boolean): number {
+export function replayStagedMass(
+  P: PreparedSection,
+  S: Scratch,
+  xc: number,
+  yc: number,
+  r: number,
+  m: number,
+  dir: number,
+  wantBishop: boolean,
+): number {
   return stageMass(P, S, xc, yc, r, S.massA[m], S.massB[m], dir, wantBishop);
 }
 
@@ -59,7 +75,15 @@ function reject(S: Scratch, st: number): number {
 }
 
 /** Stages every mass in direction dir and keeps each method's lowest final-stage factor. */
-function runMasses(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, dir: number, wantBishop: boolean): number {
+function runMasses(
+  P: PreparedSection,
+  S: Scratch,
+  xc: number,
+  yc: number,
+  r: number,
+  dir: number,
+  wantBishop: boolean,
+): number {
   const St = S.stage;
   let fo = Infinity;
   let fb = Infinity;
@@ -79,12 +103,23 @@ function runMasses(P: PreparedSection, S: Scratch, xc: number, yc: number, r: nu
     if (!(S.D > 1e-12)) continue;
     driving = true;
     const f0 = St.curO.final;
-    if (f0 < fo) { fo = f0; mo = m; negO = S.negO; copyFactors(St.curO, St.govO); }
+    if (f0 < fo) {
+      fo = f0;
+      mo = m;
+      negO = S.negO;
+      copyFactors(St.curO, St.govO);
+    }
     if (wantBishop) {
       const f1 = St.curB.final;
       if (Number.isNaN(f1)) failB = S.reasonB !== OK ? S.reasonB : NOT_CONVERGED;
       else if (f1 < fb) {
-        fb = f1; mb = m; minMa = S.minMa; minMaX = S.minMaX; minMaAlpha = S.minMaAlpha; negB = S.negB; iterations = S.iterations;
+        fb = f1;
+        mb = m;
+        minMa = S.minMa;
+        minMaX = S.minMaX;
+        minMaAlpha = S.minMaAlpha;
+        negB = S.negB;
+        iterations = S.iterations;
         copyFactors(St.curB, St.govB);
       }
     }

@@ -40,7 +40,11 @@ export interface StagedModel {
  * Builds the staged model of a valid section. Materials without an R envelope that are not
  * free-draining are rejected by validation before this runs; here they fall back to drained.
  */
-export function buildStagedModel(materials: ReadonlyArray<Material>, pre: PreparedSection, variant: number): StagedModel {
+export function buildStagedModel(
+  materials: ReadonlyArray<Material>,
+  pre: PreparedSection,
+  variant: number,
+): StagedModel {
   const n = materials.length;
   const m: StagedModel = {
     variant,

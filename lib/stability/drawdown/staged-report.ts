@@ -65,7 +65,19 @@ export function sliceStage(P: PreparedSection, S: Scratch, i: number, bishop: bo
   const kind = SM.drainage[mi];
   const drainage = kind === DRAIN_FIXED ? "fixed" : kind === DRAIN_FREE ? "free-draining" : "low-permeability";
   const governing = St.gov[i] === GOV_UNDRAINED || kind === DRAIN_FIXED ? "undrained" : "drained";
-  const empty: SliceStage = { drainage, sigmaFc: null, tauFc: null, kc: null, kf: null, tauK1: null, tauR: null, tauKf: null, tau2: null, tauDrained: null, governing };
+  const empty: SliceStage = {
+    drainage,
+    sigmaFc: null,
+    tauFc: null,
+    kc: null,
+    kf: null,
+    tauK1: null,
+    tauR: null,
+    tauKf: null,
+    tau2: null,
+    tauDrained: null,
+    governing,
+  };
   if (kind === DRAIN_FIXED) return empty;
   const sig = bishop ? St.sigB[i] : St.sigO[i];
   const tau = bishop ? St.tauB[i] : St.tauO[i];
@@ -89,7 +101,12 @@ export function sliceStage(P: PreparedSection, S: Scratch, i: number, bishop: bo
 const LABEL = { bishop: "Bishop's simplified method", fellenius: "The ordinary method" } as const;
 
 /** Warnings about the stages of one method's result (one circle or a search's critical circle). */
-export function stageWarnings(method: "bishop" | "fellenius", f: StageFs | null | undefined, where: string, out: EngineWarning[]): void {
+export function stageWarnings(
+  method: "bishop" | "fellenius",
+  f: StageFs | null | undefined,
+  where: string,
+  out: EngineWarning[],
+): void {
   if (!f) return;
   if (f.fs1 !== null && f.fs1 < 1) {
     out.push({

@@ -58,7 +58,14 @@ export function failureRatio(sigFc: number, c: number, sinPhi: number, cosPhi: n
  * @param d, tanPsi the Kc = 1 envelope (from kc1Intercept / kc1Slope)
  */
 export function threeStageStrength(
-  sigFc: number, tauFc: number, c: number, sinPhi: number, cosPhi: number, tanPhi: number, d: number, tanPsi: number,
+  sigFc: number,
+  tauFc: number,
+  c: number,
+  sinPhi: number,
+  cosPhi: number,
+  tanPhi: number,
+  d: number,
+  tanPsi: number,
 ): number {
   const tauKf = c + sigFc * tanPhi;
   const k1 = d + sigFc * tanPsi;
@@ -91,7 +98,12 @@ export interface StageTwoDetail {
 
 /** The three-stage interpolation with its intermediates (allocates: not for the hot loop). */
 export function threeStageDetail(
-  sigFc: number, tauFc: number, c: number, phi: number, d: number, tanPsi: number,
+  sigFc: number,
+  tauFc: number,
+  c: number,
+  phi: number,
+  d: number,
+  tanPsi: number,
 ): StageTwoDetail {
   const sinPhi = Math.sin(phi);
   const cosPhi = Math.cos(phi);

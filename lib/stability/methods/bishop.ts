@@ -95,7 +95,10 @@ function finish(S: Scratch, F: number): number {
   for (let i = 0; i < S.n; i++) {
     const tp = S.tanPhi[i];
     const ma = S.cosA[i] + (S.sinA[i] * tp) / F;
-    if (ma < minMa) { minMa = ma; at = i; }
+    if (ma < minMa) {
+      minMa = ma;
+      at = i;
+    }
     if (tp !== 0 && (S.V[i] - S.u[i] * S.b[i]) * S.cosA[i] - (S.c[i] * S.b[i] * S.sinA[i]) / F < 0) neg++;
   }
   S.minMa = minMa;
@@ -129,7 +132,10 @@ function bisect(S: Scratch, D: number): number {
     const mid = (lo + hi) / 2;
     const gm = g(mid);
     if (gm * glo <= 0) hi = mid;
-    else { lo = mid; glo = gm; }
+    else {
+      lo = mid;
+      glo = gm;
+    }
   }
   return (lo + hi) / 2;
 }

@@ -12,22 +12,33 @@ describe("property: a flatter face never lowers the critical FS of the same case
     const ratio = fc.integer({ min: 0, max: 8 }).map((i) => 2 + i * 0.25);
     fc.assert(
       fc.property(
-        fc.record({
-          c: fc.double({ min: 2, max: 20, noNaN: true }),
-          phi: fc.double({ min: 20, max: 34, noNaN: true }),
-          caseIndex: fc.integer({ min: 0, max: SWEEP_CASES.length - 1 }),
-          a: ratio,
-          b: ratio,
-        }).filter((r) => r.a !== r.b),
+        fc
+          .record({
+            c: fc.double({ min: 2, max: 20, noNaN: true }),
+            phi: fc.double({ min: 20, max: 34, noNaN: true }),
+            caseIndex: fc.integer({ min: 0, max: SWEEP_CASES.length - 1 }),
+            a: ratio,
+            b: ratio,
+          })
+          .filter((r) => r.a !== r.b),
         ({ c, phi, caseIndex, a, b }) => {
           const steep = Math.min(a, b);
           const flat = Math.max(a, b);
-          const materials: Material[] = MATERIALS.map((m) => (m.id === "fill" && m.model === "mohr-coulomb" ? { ...m, c, phi } : m));
+          const materials: Material[] = MATERIALS.map((m) =>
+            m.id === "fill" && m.model === "mohr-coulomb" ? { ...m, c, phi } : m,
+          );
           const sc = SWEEP_CASES[caseIndex];
           const job = (n: number): SweepJob => {
             const u = sc.face === "upstream" ? n : 3;
             const d = sc.face === "downstream" ? n : 2.5;
-            return { id: jobId(sc.key, u, d, "sweep"), face: sc.face, caseKey: sc.key, upstreamRatio: u, downstreamRatio: d, phase: "sweep" };
+            return {
+              id: jobId(sc.key, u, d, "sweep"),
+              face: sc.face,
+              caseKey: sc.key,
+              upstreamRatio: u,
+              downstreamRatio: d,
+              phase: "sweep",
+            };
           };
           const p1 = runSweepJob(params(), materials, job(steep), DEFAULT_SWEEP);
           const p2 = runSweepJob(params(), materials, job(flat), DEFAULT_SWEEP);

@@ -7,7 +7,13 @@ describe("toFormValues / fromFormValues", () => {
     const p = params({
       upstreamBerm: { elevation: 12, width: 4 },
       zoning: { kind: "zoned", core: "fill", shell: "foundation", coreTopWidth: 3, coreSlope: 0.4 },
-      handLines: { normal: [[0, 16], [50, 10.5]], flood: null },
+      handLines: {
+        normal: [
+          [0, 16],
+          [50, 10.5],
+        ],
+        flood: null,
+      },
     });
     expect(embankmentParamsSchema.parse(fromFormValues(toFormValues(p)))).toEqual(p);
   });
@@ -19,7 +25,11 @@ describe("toFormValues / fromFormValues", () => {
   });
 
   test("textToLine turns a malformed row into NaN so the schema names it", () => {
-    expect(textToLine("0, 16\n10 15\nabc")).toEqual([[0, 16], [10, 15], [NaN, NaN]]);
+    expect(textToLine("0, 16\n10 15\nabc")).toEqual([
+      [0, 16],
+      [10, 15],
+      [NaN, NaN],
+    ]);
     expect(textToLine("  \n")).toBeNull();
   });
 });

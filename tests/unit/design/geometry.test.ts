@@ -1,5 +1,12 @@
 import { describe, expect, test } from "vitest";
-import { embankmentGeometry, embankmentParamsSchema, fillQuantities, generateEmbankment, polygonArea, DesignInputError } from "@/lib/design";
+import {
+  embankmentGeometry,
+  embankmentParamsSchema,
+  fillQuantities,
+  generateEmbankment,
+  polygonArea,
+  DesignInputError,
+} from "@/lib/design";
 import { validateSection } from "@/lib/stability";
 import { assertInDelta, MATERIALS, params } from "./helpers";
 
@@ -37,18 +44,30 @@ describe("embankmentGeometry with berms and a core", () => {
   test("an upstream berm 4 m wide at 12.0 m adds a 4 × 6 m parallelogram of fill", () => {
     const g = embankmentGeometry(params({ upstreamBerm: { elevation: 12, width: 4 } }));
     // Toe at 24; 3 × 6 = 18 m up to the berm's outer edge at 42; berm to 46; 18 m more to the crest at 64.
-    expect(g.upstreamFace).toEqual([[24, 6], [42, 12], [46, 12], [64, 18]]);
+    expect(g.upstreamFace).toEqual([
+      [24, 6],
+      [42, 12],
+      [46, 12],
+      [64, 18],
+    ]);
     assertInDelta(polygonArea(g.outline), 468 + 4 * 6, 1e-9);
   });
 
   test("a downstream berm at 10.0 m, 3 m wide, moves the toe 3 m out", () => {
     const g = embankmentGeometry(params({ downstreamBerm: { elevation: 10, width: 3 } }));
-    expect(g.downstreamFace).toEqual([[66, 18], [86, 10], [89, 10], [99, 6]]);
+    expect(g.downstreamFace).toEqual([
+      [66, 18],
+      [86, 10],
+      [89, 10],
+      [99, 6],
+    ]);
     assertInDelta(polygonArea(g.outline), 468 + 3 * 4, 1e-9);
   });
 
   test("a core 4 m wide at the top with 0.5:1 sides has (4 + 16)/2 × 12 = 120 m²", () => {
-    const g = embankmentGeometry(params({ zoning: { kind: "zoned", core: "fill", shell: "drain", coreTopWidth: 4, coreSlope: 0.5 } }));
+    const g = embankmentGeometry(
+      params({ zoning: { kind: "zoned", core: "fill", shell: "drain", coreTopWidth: 4, coreSlope: 0.5 } }),
+    );
     assertInDelta(polygonArea(g.core!.polygon), 120, 1e-9);
     // Crest centre at (60 + 66)/2 = 63; the core top runs 2 m either side of it.
     expect(g.core!.upstreamTop).toEqual([61, 18]);
@@ -56,16 +75,39 @@ describe("embankmentGeometry with berms and a core", () => {
   });
 
   test("polygonArea(unit square) is 1 in either orientation", () => {
-    expect(polygonArea([[0, 0], [1, 0], [1, 1], [0, 1]])).toBe(1);
-    expect(polygonArea([[0, 1], [1, 1], [1, 0], [0, 0]])).toBe(1);
+    expect(
+      polygonArea([
+        [0, 0],
+        [1, 0],
+        [1, 1],
+        [0, 1],
+      ]),
+    ).toBe(1);
+    expect(
+      polygonArea([
+        [0, 1],
+        [1, 1],
+        [1, 0],
+        [0, 0],
+      ]),
+    ).toBe(1);
   });
 });
 
 describe("generateEmbankment(params, materials)", () => {
   for (const [name, p] of [
     ["homogeneous demo", params()],
-    ["berms on both faces", params({ upstreamBerm: { elevation: 17, width: 3 }, downstreamBerm: { elevation: 11, width: 3 } })],
-    ["zoned, no foundation layer", params({ foundationThickness: 0, zoning: { kind: "zoned", core: "fill", shell: "foundation", coreTopWidth: 4, coreSlope: 0.5 } })],
+    [
+      "berms on both faces",
+      params({ upstreamBerm: { elevation: 17, width: 3 }, downstreamBerm: { elevation: 11, width: 3 } }),
+    ],
+    [
+      "zoned, no foundation layer",
+      params({
+        foundationThickness: 0,
+        zoning: { kind: "zoned", core: "fill", shell: "foundation", coreTopWidth: 4, coreSlope: 0.5 },
+      }),
+    ],
   ] as const) {
     test(`${name}: the document validates with the engine`, () => {
       const out = generateEmbankment(p, MATERIALS);

@@ -9,5 +9,6 @@ export function params(overrides: Partial<EmbankmentParams> = {}): EmbankmentPar
 }
 
 export function assertInDelta(actual: number, expected: number, delta: number): void {
-  if (!(Math.abs(actual - expected) <= delta)) throw new Error(`expected ${actual} to be within ${delta} of ${expected}`);
+  if (!(Math.abs(actual - expected) <= delta))
+    throw new Error(`expected ${actual} to be within ${delta} of ${expected}`);
 }

@@ -36,19 +36,40 @@ describe("planSweep and readSweep", () => {
 
   test("each face takes the flattest n* of its cases", () => {
     const point = (caseKey: SweepPoint["caseKey"], ratio: number, fs: number): SweepPoint => ({
-      id: `${caseKey}${ratio}`, phase: "sweep", face: caseKey === "steady-seepage" ? "downstream" : "upstream", caseKey,
-      upstreamRatio: ratio, downstreamRatio: ratio, ratio, fsBishop: fs, fsOrdinary: fs, circle: null, resolution: null,
-      grid: null, radii: null, fillArea: 100 * ratio, warnings: [], error: null, elapsedMs: 1,
+      id: `${caseKey}${ratio}`,
+      phase: "sweep",
+      face: caseKey === "steady-seepage" ? "downstream" : "upstream",
+      caseKey,
+      upstreamRatio: ratio,
+      downstreamRatio: ratio,
+      ratio,
+      fsBishop: fs,
+      fsOrdinary: fs,
+      circle: null,
+      resolution: null,
+      grid: null,
+      radii: null,
+      fillArea: 100 * ratio,
+      warnings: [],
+      error: null,
+      elapsedMs: 1,
     });
     const points = [
-      point("steady-seepage", 2, 1.4), point("steady-seepage", 3, 1.6),
-      point("drawdown-storage", 2, 1.35), point("drawdown-storage", 3, 1.4),
-      point("drawdown-surcharge", 2, 1.0), point("drawdown-surcharge", 3, 1.2),
+      point("steady-seepage", 2, 1.4),
+      point("steady-seepage", 3, 1.6),
+      point("drawdown-storage", 2, 1.35),
+      point("drawdown-storage", 3, 1.4),
+      point("drawdown-surcharge", 2, 1.0),
+      point("drawdown-surcharge", 3, 1.2),
     ];
     const r = readSweep(points, { "steady-seepage": 1.5, "drawdown-storage": 1.3, "drawdown-surcharge": 1.1 });
     expect(r.faces.downstream).toMatchObject({ ratio: 3, governing: "steady-seepage", fillArea: 300 });
     expect(r.faces.upstream).toMatchObject({ ratio: 3, governing: "drawdown-surcharge" });
     expect(r.pair).toEqual({ upstream: 3, downstream: 3 });
-    expect(planRecheck(r.pair!).map((j) => j.caseKey)).toEqual(["steady-seepage", "drawdown-storage", "drawdown-surcharge"]);
+    expect(planRecheck(r.pair!).map((j) => j.caseKey)).toEqual([
+      "steady-seepage",
+      "drawdown-storage",
+      "drawdown-surcharge",
+    ]);
   });
 });

@@ -20,9 +20,19 @@ import { assertInDelta, MATERIALS, params } from "./helpers";
 describe("generated seepage against Craig's worked example (from memory)", () => {
   // Toe at margin x0; pool edge x0 + 36; point A x0 + 25.2; crest x0 + 40 … x0 + 46; toe x0 + 86.
   const dam = params({
-    foundationTop: 10, crestElevation: 30, crestWidth: 6, upstreamSlope: 2, downstreamSlope: 2,
-    normalPool: 28, floodPool: 28, drawdownTo: 12, drainLength: 86 - 65.2, drainThickness: 0.5,
-    fillPermeability: 4.5e-8, anisotropy: 1.6 / 4.5, crestLength: 100,
+    foundationTop: 10,
+    crestElevation: 30,
+    crestWidth: 6,
+    upstreamSlope: 2,
+    downstreamSlope: 2,
+    normalPool: 28,
+    floodPool: 28,
+    drawdownTo: 12,
+    drainLength: 86 - 65.2,
+    drainThickness: 0.5,
+    fillPermeability: 4.5e-8,
+    anisotropy: 1.6 / 4.5,
+    crestLength: 100,
   });
   const out = generateEmbankment(dam, MATERIALS);
   const s = out.seepage.seepage;
@@ -68,7 +78,10 @@ describe("piping at the exit (critical gradient from Craig's definition)", () =>
 
 describe("outside the method's limits the app asks for a hand-drawn line", () => {
   test("a zoned dam gets no constructed line and a request to draw one", () => {
-    const out = generateEmbankment(params({ zoning: { kind: "zoned", core: "fill", shell: "drain", coreTopWidth: 4, coreSlope: 0.5 } }), MATERIALS);
+    const out = generateEmbankment(
+      params({ zoning: { kind: "zoned", core: "fill", shell: "drain", coreTopWidth: 4, coreSlope: 0.5 } }),
+      MATERIALS,
+    );
     expect(out.seepage.source).toBe("none");
     expect(out.document.water).toBeUndefined();
     expect(out.seepage.limits[0].message).toContain(HAND_LINE_REQUEST);
@@ -83,9 +96,24 @@ describe("outside the method's limits the app asks for a hand-drawn line", () =>
   });
 
   test("a hand-drawn line replaces the construction and spans the section", () => {
-    const p = params({ handLines: { normal: [[24, 16], [70, 12], [90, 6.2]], flood: null } });
+    const p = params({
+      handLines: {
+        normal: [
+          [24, 16],
+          [70, 12],
+          [90, 6.2],
+        ],
+        flood: null,
+      },
+    });
     const out = generateEmbankment(p, MATERIALS);
     expect(out.seepage.source).toBe("hand-drawn");
-    expect(out.document.water!.phreatic).toEqual([[0, 16], [24, 16], [70, 12], [90, 6.2], [120, 6.2]]);
+    expect(out.document.water!.phreatic).toEqual([
+      [0, 16],
+      [24, 16],
+      [70, 12],
+      [90, 6.2],
+      [120, 6.2],
+    ]);
   });
 });

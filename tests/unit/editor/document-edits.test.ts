@@ -22,7 +22,11 @@ describe("document edits", () => {
   it("addRegion(doc) appends a copy and leaves the input untouched", () => {
     const doc = embankment();
     const before = structuredClone(doc);
-    const pts: Point[] = [[0, 20], [10, 20], [10, 25]];
+    const pts: Point[] = [
+      [0, 20],
+      [10, 20],
+      [10, 25],
+    ];
     const next = addRegion(doc, "fill", pts);
     expect(next.regions).toHaveLength(3);
     expect(next.regions[2]).toEqual({ material: "fill", points: pts });
@@ -62,7 +66,11 @@ describe("document edits", () => {
   });
 
   it("deleteVertex(doc) refuses to leave a region with fewer than 3 vertices", () => {
-    const doc = addRegion(embankment(), "fill", [[0, 20], [5, 20], [5, 25]]);
+    const doc = addRegion(embankment(), "fill", [
+      [0, 20],
+      [5, 20],
+      [5, 25],
+    ]);
     const r = deleteVertex(doc, 2, 0);
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.reason).toMatch(/at least 3 vertices/);
@@ -94,8 +102,17 @@ describe("document edits", () => {
 
   it("setPhreatic(doc, points) replaces ru, and null removes the line", () => {
     const doc: SectionDocument = { ...embankment(), water: { gammaW: 10, ru: 0.2 } };
-    const wet = setPhreatic(doc, [[0, 5], [60, 5]]);
-    expect(wet.water).toEqual({ gammaW: 10, phreatic: [[0, 5], [60, 5]] });
+    const wet = setPhreatic(doc, [
+      [0, 5],
+      [60, 5],
+    ]);
+    expect(wet.water).toEqual({
+      gammaW: 10,
+      phreatic: [
+        [0, 5],
+        [60, 5],
+      ],
+    });
     expect(setPhreatic(wet, null).water).toEqual({ gammaW: 10 });
     expect(setPhreatic(embankment(), null).water).toBeUndefined();
     expect(setPhreatic(doc, null).water).toEqual({ gammaW: 10, ru: 0.2 });

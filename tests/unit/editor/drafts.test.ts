@@ -4,11 +4,20 @@ import { appendDraftPoint, closesDraft, draftProblem, dropLastDraftPoint, type D
 describe("drafts", () => {
   it("appendDraftPoint adds points and ignores a repeated click", () => {
     let d: Draft = { kind: "region", points: [] };
-    for (const p of [[0, 0], [10, 0], [10, 0], [10, 5]] as [number, number][]) {
+    for (const p of [
+      [0, 0],
+      [10, 0],
+      [10, 0],
+      [10, 5],
+    ] as [number, number][]) {
       const r = appendDraftPoint(d, p);
       if (r.ok) d = r.draft;
     }
-    expect(d.points).toEqual([[0, 0], [10, 0], [10, 5]]);
+    expect(d.points).toEqual([
+      [0, 0],
+      [10, 0],
+      [10, 5],
+    ]);
     expect(closesDraft(d, [0, 0])).toBe(true);
     expect(appendDraftPoint(d, [0, 0])).toEqual({ ok: true, draft: d });
     expect(draftProblem(d)).toBeNull();

@@ -12,9 +12,34 @@ export function embankment(): SectionDocument {
       { id: "clay", model: "undrained", gamma: 17, su: 30 },
     ],
     regions: [
-      { material: "fill", points: [[20, 10], [25, 20], [35, 20], [50, 10]] },
-      { material: "clay", points: [[0, 0], [60, 0], [60, 10], [50, 10], [20, 10], [0, 10]] },
+      {
+        material: "fill",
+        points: [
+          [20, 10],
+          [25, 20],
+          [35, 20],
+          [50, 10],
+        ],
+      },
+      {
+        material: "clay",
+        points: [
+          [0, 0],
+          [60, 0],
+          [60, 10],
+          [50, 10],
+          [20, 10],
+          [0, 10],
+        ],
+      },
     ],
-    water: { phreatic: [[0, 12], [22, 12], [50, 9], [60, 9]] },
+    water: {
+      phreatic: [
+        [0, 12],
+        [22, 12],
+        [50, 9],
+        [60, 9],
+      ],
+    },
   };
 }

@@ -16,18 +16,56 @@ function area(ring: Point[]): number {
 
 describe("ground surface", () => {
   it("groundSurface(regions) is the top of all regions, without inner edges", () => {
-    expect(groundSurface(embankment().regions)).toEqual([[0, 10], [20, 10], [25, 20], [35, 20], [50, 10], [60, 10]]);
+    expect(groundSurface(embankment().regions)).toEqual([
+      [0, 10],
+      [20, 10],
+      [25, 20],
+      [35, 20],
+      [50, 10],
+      [60, 10],
+    ]);
   });
 
   it("groundSurface(regions) keeps a vertical face as two points", () => {
-    const regions: Region[] = [{ material: "a", points: [[0, 0], [10, 0], [10, 5], [4, 5], [4, 8], [0, 8]] }];
-    expect(groundSurface(regions)).toEqual([[0, 8], [4, 8], [4, 5], [10, 5]]);
+    const regions: Region[] = [
+      {
+        material: "a",
+        points: [
+          [0, 0],
+          [10, 0],
+          [10, 5],
+          [4, 5],
+          [4, 8],
+          [0, 8],
+        ],
+      },
+    ];
+    expect(groundSurface(regions)).toEqual([
+      [0, 8],
+      [4, 8],
+      [4, 5],
+      [10, 5],
+    ]);
   });
 
   it("groundSurface(regions) switches edge where two top edges cross", () => {
     const regions: Region[] = [
-      { material: "a", points: [[0, 0], [10, 0], [10, 10]] },
-      { material: "b", points: [[0, 0], [10, 0], [0, 10]] },
+      {
+        material: "a",
+        points: [
+          [0, 0],
+          [10, 0],
+          [10, 10],
+        ],
+      },
+      {
+        material: "b",
+        points: [
+          [0, 0],
+          [10, 0],
+          [0, 10],
+        ],
+      },
     ];
     const g = groundSurface(regions);
     expect(g[0]).toEqual([0, 10]);
@@ -53,13 +91,36 @@ describe("ponded water", () => {
   });
 
   it("pondedWater is empty when the line stays below the ground", () => {
-    const ground: Point[] = [[0, 10], [60, 10]];
-    expect(pondedWater([[0, 5], [60, 2]], ground)).toEqual([]);
+    const ground: Point[] = [
+      [0, 10],
+      [60, 10],
+    ];
+    expect(
+      pondedWater(
+        [
+          [0, 5],
+          [60, 2],
+        ],
+        ground,
+      ),
+    ).toEqual([]);
   });
 
   it("pondedWater splits into two pools on either side of a crest", () => {
-    const ground: Point[] = [[0, 0], [10, 0], [15, 10], [20, 0], [30, 0]];
-    const pools = pondedWater([[0, 4], [30, 4]], ground);
+    const ground: Point[] = [
+      [0, 0],
+      [10, 0],
+      [15, 10],
+      [20, 0],
+      [30, 0],
+    ];
+    const pools = pondedWater(
+      [
+        [0, 4],
+        [30, 4],
+      ],
+      ground,
+    );
     expect(pools).toHaveLength(2);
     expect(area(pools[0])).toBeCloseTo(4 * 10 + 0.5 * 4 * 2, 6);
   });
@@ -78,7 +139,12 @@ describe("reservoir level", () => {
     const r = setReservoirLevel(embankment(), "left", 15);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
-    expect(r.doc.water?.phreatic).toEqual([[0, 15], [22.5, 15], [50, 9], [60, 9]]);
+    expect(r.doc.water?.phreatic).toEqual([
+      [0, 15],
+      [22.5, 15],
+      [50, 9],
+      [60, 9],
+    ]);
     expect(reservoirLevel(r.doc, "left")).toBe(15);
     expect(reservoirLevel(r.doc, "right")).toBeNull();
   });
@@ -88,7 +154,10 @@ describe("reservoir level", () => {
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     const line = r.doc.water!.phreatic!;
-    expect(line.slice(-2)).toEqual([[47, 12], [60, 12]]);
+    expect(line.slice(-2)).toEqual([
+      [47, 12],
+      [60, 12],
+    ]);
     expect(line[0]).toEqual([0, 12]);
     expect(line.every((p, i) => i === 0 || p[0] > line[i - 1][0])).toBe(true);
   });
@@ -96,7 +165,11 @@ describe("reservoir level", () => {
   it("setReservoirLevel starts a line when there is none, and refuses to flood everything", () => {
     const { water: _w, ...dry } = embankment();
     const r = setReservoirLevel(dry, "left", 14);
-    expect(r.ok && r.doc.water?.phreatic).toEqual([[0, 14], [22, 14], [60, 10]]);
+    expect(r.ok && r.doc.water?.phreatic).toEqual([
+      [0, 14],
+      [22, 14],
+      [60, 10],
+    ]);
     const over = setReservoirLevel(dry, "left", 30);
     expect(over.ok).toBe(false);
     if (!over.ok) expect(over.reason).toMatch(/whole section/);

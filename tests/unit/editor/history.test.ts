@@ -11,13 +11,25 @@ const finite = (min: number, max: number) => fc.double({ min, max, noNaN: true, 
 const pointArb: fc.Arbitrary<Point> = fc.tuple(finite(-100, 100), finite(-100, 100));
 
 const editArb: fc.Arbitrary<Edit> = fc.oneof(
-  fc.tuple(fc.nat(), pointArb).map(([i, p]): Edit => (d) => moveVertex(d, { kind: "region", region: 1, index: i % d.regions[1].points.length }, p)),
-  fc.tuple(fc.nat(), pointArb).map(([i, p]): Edit => (d) => insertVertex(d, 0, i % d.regions[0].points.length, p)),
+  fc.tuple(fc.nat(), pointArb).map(
+    ([i, p]): Edit =>
+      (d) =>
+        moveVertex(d, { kind: "region", region: 1, index: i % d.regions[1].points.length }, p),
+  ),
+  fc.tuple(fc.nat(), pointArb).map(
+    ([i, p]): Edit =>
+      (d) =>
+        insertVertex(d, 0, i % d.regions[0].points.length, p),
+  ),
   fc.nat().map((i): Edit => (d) => {
     const r = deleteVertex(d, 0, i % d.regions[0].points.length);
     return r.ok ? r.doc : d;
   }),
-  fc.constantFrom("fill", "clay").map((m): Edit => (d) => setRegionMaterial(d, 0, m)),
+  fc.constantFrom("fill", "clay").map(
+    (m): Edit =>
+      (d) =>
+        setRegionMaterial(d, 0, m),
+  ),
 );
 
 describe("history", () => {

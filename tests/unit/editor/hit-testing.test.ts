@@ -10,8 +10,16 @@ describe("hit testing", () => {
   it("hitVertex prefers the selected region where two regions share a vertex", () => {
     const doc = embankment();
     const [sx, sy] = worldToScreen(view, 20, 10);
-    expect(hitVertex(doc, view, sx + 2, sy, 8, { kind: "region", region: 1 })).toEqual({ kind: "region", region: 1, index: 4 });
-    expect(hitVertex(doc, view, sx + 2, sy, 8, { kind: "region", region: 0 })).toEqual({ kind: "region", region: 0, index: 0 });
+    expect(hitVertex(doc, view, sx + 2, sy, 8, { kind: "region", region: 1 })).toEqual({
+      kind: "region",
+      region: 1,
+      index: 4,
+    });
+    expect(hitVertex(doc, view, sx + 2, sy, 8, { kind: "region", region: 0 })).toEqual({
+      kind: "region",
+      region: 0,
+      index: 0,
+    });
     expect(hitVertex(doc, view, sx + 40, sy - 40, 8)).toBeNull();
   });
 
@@ -39,13 +47,27 @@ describe("hit testing", () => {
     expect(hitRegion(doc, [30, 15])).toBe(0);
     expect(hitRegion(doc, [5, 5])).toBe(1);
     expect(hitRegion(doc, [5, 15])).toBe(-1);
-    expect(pointInPolygon([1, 1], [[0, 0], [2, 0], [2, 2], [0, 2]])).toBe(true);
+    expect(
+      pointInPolygon(
+        [1, 1],
+        [
+          [0, 0],
+          [2, 0],
+          [2, 2],
+          [0, 2],
+        ],
+      ),
+    ).toBe(true);
   });
 
   it("clampSelection drops indices that no longer exist", () => {
     const doc = embankment();
     expect(clampSelection(doc, { kind: "region", region: 5, vertex: null })).toBeNull();
-    expect(clampSelection(doc, { kind: "region", region: 0, vertex: 9 })).toEqual({ kind: "region", region: 0, vertex: null });
+    expect(clampSelection(doc, { kind: "region", region: 0, vertex: 9 })).toEqual({
+      kind: "region",
+      region: 0,
+      vertex: null,
+    });
     const sel = { kind: "phreatic" as const, vertex: 2 };
     expect(clampSelection(doc, sel)).toBe(sel);
     expect(pointAt(doc, selectedVertex(sel)!)).toEqual([50, 9]);

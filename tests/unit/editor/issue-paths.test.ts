@@ -23,6 +23,8 @@ describe("issue paths", () => {
     const issues = collectIssues(validateSection(doc));
     expect(issues.length).toBeGreaterThan(0);
     expect(issues.every((i) => i.severity === "error" || i.severity === "warning")).toBe(true);
-    expect(collectIssues({ warnings: [{ code: "w", path: "x", message: "m" }] })).toEqual([{ code: "w", path: "x", message: "m", severity: "warning" }]);
+    expect(collectIssues({ warnings: [{ code: "w", path: "x", message: "m" }] })).toEqual([
+      { code: "w", path: "x", message: "m", severity: "warning" },
+    ]);
   });
 });

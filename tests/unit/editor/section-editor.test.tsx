@@ -62,7 +62,9 @@ function view(): ViewTransform {
 async function mouse(type: "mousedown" | "mousemove" | "mouseup" | "dblclick", x: number, y: number) {
   const [sx, sy] = worldToScreen(view(), x, y);
   await act(async () => {
-    byTestId("editor-canvas").dispatchEvent(new MouseEvent(type, { bubbles: true, clientX: sx, clientY: sy, button: 0, detail: type === "dblclick" ? 2 : 1 }));
+    byTestId("editor-canvas").dispatchEvent(
+      new MouseEvent(type, { bubbles: true, clientX: sx, clientY: sy, button: 0, detail: type === "dblclick" ? 2 : 1 }),
+    );
   });
 }
 
@@ -92,8 +94,10 @@ afterEach(async () => {
 describe("SectionEditor", () => {
   it("renders its parts with stable test ids and a view contract", async () => {
     await mount();
-    for (const id of ["section-editor", "editor-canvas", "vertex-table", "issue-list", "undo", "redo", "zoom-fit"]) byTestId(id);
-    for (const t of ["select", "region", "phreatic", "reservoir", "pan"]) expect(byTestId(`tool-${t}`).getAttribute("aria-label")).toMatch(/\(.\)$/);
+    for (const id of ["section-editor", "editor-canvas", "vertex-table", "issue-list", "undo", "redo", "zoom-fit"])
+      byTestId(id);
+    for (const t of ["select", "region", "phreatic", "reservoir", "pan"])
+      expect(byTestId(`tool-${t}`).getAttribute("aria-label")).toMatch(/\(.\)$/);
     const v = view();
     expect(v.exaggeration).toBe(1);
     expect(v.scale).toBeGreaterThan(0);
@@ -146,7 +150,14 @@ describe("SectionEditor", () => {
     await click(10, 25);
     await key("Enter");
     expect(latest.regions).toHaveLength(3);
-    expect(latest.regions[2]).toEqual({ material: "fill", points: [[0, 20], [10, 20], [10, 25]] });
+    expect(latest.regions[2]).toEqual({
+      material: "fill",
+      points: [
+        [0, 20],
+        [10, 20],
+        [10, 25],
+      ],
+    });
     await click(40, 30);
     await key("Escape");
     await key("Enter");
@@ -180,7 +191,9 @@ describe("SectionEditor", () => {
   });
 
   it("picking an issue selects the vertex its path names", async () => {
-    const issues: EditorIssue[] = [{ code: "x", path: "regions[1].points[2]", message: "Edges cross here.", at: [60, 10] }];
+    const issues: EditorIssue[] = [
+      { code: "x", path: "regions[1].points[2]", message: "Edges cross here.", at: [60, 10] },
+    ];
     await mount({ issues });
     await act(async () => byTestId("issue-0").click());
     expect(byTestId("vertex-row-2").getAttribute("aria-selected")).toBe("true");
@@ -197,7 +210,10 @@ describe("SectionEditor", () => {
       input.dispatchEvent(new Event("input", { bubbles: true }));
     });
     await act(async () => byTestId("reservoir-apply").click());
-    expect(latest.water?.phreatic?.slice(0, 2)).toEqual([[0, 15], [22.5, 15]]);
+    expect(latest.water?.phreatic?.slice(0, 2)).toEqual([
+      [0, 15],
+      [22.5, 15],
+    ]);
   });
 
   it("changes nothing when read-only", async () => {

@@ -38,20 +38,32 @@ describe("snapping", () => {
 
   it("snapPoint(p) to a vertex never moves the point farther than the pixel tolerance", () => {
     fc.assert(
-      fc.property(pointArb, fc.array(pointArb, { maxLength: 20 }), viewArb, fc.integer({ min: 1, max: 20 }), (p, vertices, view, tol) => {
-        const r = snapPoint(p, { gridStep: 0, vertices, view, tolerancePx: tol });
-        if (r.kind === "vertex") expect(screenDistance(view, p, r.point)).toBeLessThanOrEqual(tol + 1e-9);
-        else expect(r.point).toEqual(p);
-      }),
+      fc.property(
+        pointArb,
+        fc.array(pointArb, { maxLength: 20 }),
+        viewArb,
+        fc.integer({ min: 1, max: 20 }),
+        (p, vertices, view, tol) => {
+          const r = snapPoint(p, { gridStep: 0, vertices, view, tolerancePx: tol });
+          if (r.kind === "vertex") expect(screenDistance(view, p, r.point)).toBeLessThanOrEqual(tol + 1e-9);
+          else expect(r.point).toEqual(p);
+        },
+      ),
     );
   });
 
   it("snapPoint(p) prefers a nearby vertex over the grid and picks the nearest one", () => {
     const view = { scale: 10, offsetX: 0, offsetY: 0, exaggeration: 1 };
-    const vertices: Point[] = [[1.13, 2.07], [1.2, 2.0]];
+    const vertices: Point[] = [
+      [1.13, 2.07],
+      [1.2, 2.0],
+    ];
     const r = snapPoint([1.14, 2.06], { gridStep: 0.5, vertices, view, tolerancePx: 8 });
     expect(r).toEqual({ point: [1.13, 2.07], kind: "vertex", vertexIndex: 0 });
-    expect(snapPoint([4.1, 4.1], { gridStep: 0.5, vertices, view, tolerancePx: 8 })).toEqual({ point: [4, 4], kind: "grid" });
+    expect(snapPoint([4.1, 4.1], { gridStep: 0.5, vertices, view, tolerancePx: 8 })).toEqual({
+      point: [4, 4],
+      kind: "grid",
+    });
   });
 
   it("nearestVertexWithin(p) measures in screen pixels, so exaggeration matters", () => {

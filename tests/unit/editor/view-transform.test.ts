@@ -65,7 +65,11 @@ describe("view transform", () => {
   it("fitToBounds(bounds) puts the whole box inside the margins and centres it", () => {
     fc.assert(
       fc.property(
-        finite(-500, 500), finite(-500, 500), finite(0.1, 800), finite(0.1, 300), fc.constantFrom(1, 2, 5),
+        finite(-500, 500),
+        finite(-500, 500),
+        finite(0.1, 800),
+        finite(0.1, 300),
+        fc.constantFrom(1, 2, 5),
         (x0, y0, w, h, ex) => {
           const b = { minX: x0, minY: y0, maxX: x0 + w, maxY: y0 + h };
           const m = { left: 50, right: 20, top: 20, bottom: 40 };

@@ -1,7 +1,8 @@
 import { describe, expect, test } from "vitest";
 import { aLine, classifyAtterbergLimits, uLine } from "@/lib/lab";
 
-const group = (liquidLimit: number, plasticLimit?: number) => classifyAtterbergLimits({ liquidLimit, plasticLimit }).hint.group;
+const group = (liquidLimit: number, plasticLimit?: number) =>
+  classifyAtterbergLimits({ liquidLimit, plasticLimit }).hint.group;
 
 describe("classifyAtterbergLimits: ASTM D2487 plasticity chart rules (fine-grained, inorganic)", () => {
   test("A-line PI = 0.73(LL − 20) and U-line PI = 0.9(LL − 8) (ASTM D2487 Fig. 3; hand calculation)", () => {
@@ -43,7 +44,11 @@ describe("classifyAtterbergLimits: ASTM D2487 plasticity chart rules (fine-grain
   });
 
   test("a point above the U-line warns; bad limits throw with the field", () => {
-    expect(classifyAtterbergLimits({ liquidLimit: 30, plasticLimit: 5 }).warnings.join(" ")).toMatch(/above the U-line/);
-    expect(() => classifyAtterbergLimits({ liquidLimit: 0, plasticLimit: 5, specimen: "BH1-2" })).toThrow("sample (BH1-2): liquid limit must be positive");
+    expect(classifyAtterbergLimits({ liquidLimit: 30, plasticLimit: 5 }).warnings.join(" ")).toMatch(
+      /above the U-line/,
+    );
+    expect(() => classifyAtterbergLimits({ liquidLimit: 0, plasticLimit: 5, specimen: "BH1-2" })).toThrow(
+      "sample (BH1-2): liquid limit must be positive",
+    );
   });
 });

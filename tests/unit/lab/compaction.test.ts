@@ -24,7 +24,9 @@ describe("deriveCompactionCurve", () => {
 
   test("an exact parabola gives its vertex and its 95 % crossings (ASTM D698: the peak of the curve; hand calculation)", () => {
     const ws = [10, 12, 14, 16, 18];
-    const r = deriveCompactionCurve({ points: ws.map((w) => ({ moistureContent: w, dryDensity: 1.9 - 0.002 * (w - 14) ** 2 })) });
+    const r = deriveCompactionCurve({
+      points: ws.map((w) => ({ moistureContent: w, dryDensity: 1.9 - 0.002 * (w - 14) ** 2 })),
+    });
     expect(r.optimumMoistureContent).toBeCloseTo(14, 9);
     expect(r.maxDryDensity).toBeCloseTo(1.9, 12);
     const half = Math.sqrt((0.05 * 1.9) / 0.002); // 0.002·Δw² = 5 % of 1.9
@@ -33,7 +35,10 @@ describe("deriveCompactionCurve", () => {
     expect(r.acceptance.wetLimit.moistureContent).toBeCloseTo(14 + half, 8);
     expect(r.acceptance.dryLimit.extrapolated).toBe(true); // 7.1 % lies outside the tested 10–18 %
     expect(r.warnings.join(" ")).toMatch(/dry-side limit/);
-    const r90 = deriveCompactionCurve({ points: ws.map((w) => ({ moistureContent: w, dryDensity: 1.9 - 0.002 * (w - 14) ** 2 })), acceptancePercent: 99 });
+    const r90 = deriveCompactionCurve({
+      points: ws.map((w) => ({ moistureContent: w, dryDensity: 1.9 - 0.002 * (w - 14) ** 2 })),
+      acceptancePercent: 99,
+    });
     expect(r90.acceptance.wetLimit.moistureContent).toBeCloseTo(14 + Math.sqrt(0.019 / 0.002), 8);
     expect(r90.acceptance.wetLimit.extrapolated).toBe(false);
   });
@@ -59,7 +64,10 @@ describe("deriveCompactionCurve", () => {
   });
 
   test("bulk density with w gives the same result as the equivalent dry density", () => {
-    const dry = craigPoints.map((p) => ({ moistureContent: p.moistureContent, dryDensity: p.bulkDensity / (1 + p.moistureContent / 100) }));
+    const dry = craigPoints.map((p) => ({
+      moistureContent: p.moistureContent,
+      dryDensity: p.bulkDensity / (1 + p.moistureContent / 100),
+    }));
     const a = deriveCompactionCurve({ points: craigPoints });
     const b = deriveCompactionCurve({ points: dry });
     expect(b.maxDryDensity).toBeCloseTo(a.maxDryDensity, 12);
@@ -69,9 +77,19 @@ describe("deriveCompactionCurve", () => {
   test("an unbracketed peak, missing densities, kg/m³ values and points above the zero-air-voids line are reported", () => {
     const rising = [10, 12, 14].map((w, i) => ({ moistureContent: w, dryDensity: 1.7 + 0.05 * i }));
     expect(() => deriveCompactionCurve({ points: rising })).toThrow(/not bracketed; add a wetter test/);
-    expect(() => deriveCompactionCurve({ points: [...craigPoints.slice(0, 4), { moistureContent: 20 }] })).toThrow("test 5: dry density or bulk density is needed");
-    expect(() => deriveCompactionCurve({ points: craigPoints.map((p) => ({ ...p, bulkDensity: p.bulkDensity * 1000 })) })).toThrow(/not plausible in Mg\/m³/);
-    const tooDense = deriveCompactionCurve({ points: [{ moistureContent: 10, dryDensity: 1.9 }, { moistureContent: 14, dryDensity: 2.05 }, { moistureContent: 18, dryDensity: 1.9 }] });
+    expect(() => deriveCompactionCurve({ points: [...craigPoints.slice(0, 4), { moistureContent: 20 }] })).toThrow(
+      "test 5: dry density or bulk density is needed",
+    );
+    expect(() =>
+      deriveCompactionCurve({ points: craigPoints.map((p) => ({ ...p, bulkDensity: p.bulkDensity * 1000 })) }),
+    ).toThrow(/not plausible in Mg\/m³/);
+    const tooDense = deriveCompactionCurve({
+      points: [
+        { moistureContent: 10, dryDensity: 1.9 },
+        { moistureContent: 14, dryDensity: 2.05 },
+        { moistureContent: 18, dryDensity: 1.9 },
+      ],
+    });
     expect(tooDense.warnings.join(" ")).toMatch(/test 3 plots above the zero-air-voids line/);
   });
 });

@@ -36,15 +36,40 @@ describe("deriveDirectShearStrength", () => {
   });
 
   test("two tests work with a warning; bad rows are all named", () => {
-    const two = deriveDirectShearStrength({ tests: [{ normalStress: 50, shearStress: 40 }, { normalStress: 100, shearStress: 70 }] });
+    const two = deriveDirectShearStrength({
+      tests: [
+        { normalStress: 50, shearStress: 40 },
+        { normalStress: 100, shearStress: 70 },
+      ],
+    });
     expect(two.cohesion).toBeCloseTo(10, 10); // hand calculation: slope 0.6, c' = 40 − 0.6·50
     expect(two.warnings).toEqual([expect.stringMatching(/3 or more/)]);
     expect(() =>
-      deriveDirectShearStrength({ tests: [{ normalStress: 50, shearStress: 40 }, { normalStress: 100, shearStress: 70 }, { normalStress: -5, shearStress: 10, specimen: "S-3" }] }),
+      deriveDirectShearStrength({
+        tests: [
+          { normalStress: 50, shearStress: 40 },
+          { normalStress: 100, shearStress: 70 },
+          { normalStress: -5, shearStress: 10, specimen: "S-3" },
+        ],
+      }),
     ).toThrow("test 3 (S-3): normal stress must be positive");
     expect(() => deriveDirectShearStrength({ tests: [{ normalStress: 50, shearStress: 40 }] })).toThrow(LabInputError);
-    expect(() => deriveDirectShearStrength({ tests: [{ normalStress: 50, shearStress: 40 }, { normalStress: 50, shearStress: 45 }] })).toThrow(/different normal stresses/);
-    expect(() => deriveDirectShearStrength({ tests: [{ normalStress: 50, shearStress: 40 }, { normalStress: 100, shearStress: 20 }] })).toThrow(/does not rise/);
+    expect(() =>
+      deriveDirectShearStrength({
+        tests: [
+          { normalStress: 50, shearStress: 40 },
+          { normalStress: 50, shearStress: 45 },
+        ],
+      }),
+    ).toThrow(/different normal stresses/);
+    expect(() =>
+      deriveDirectShearStrength({
+        tests: [
+          { normalStress: 50, shearStress: 40 },
+          { normalStress: 100, shearStress: 20 },
+        ],
+      }),
+    ).toThrow(/does not rise/);
   });
 
   test("property: exact Mohr–Coulomb data give back c' and φ'; scaling σ and τ by k scales c' by k and keeps φ'", () => {
@@ -59,7 +84,9 @@ describe("deriveDirectShearStrength", () => {
           const base = deriveDirectShearStrength({ tests });
           expect(base.cohesion).toBeCloseTo(c, 6);
           expect(base.frictionAngle).toBeCloseTo(phi, 8);
-          const scaled = deriveDirectShearStrength({ tests: tests.map((t) => ({ normalStress: k * t.normalStress, shearStress: k * t.shearStress })) });
+          const scaled = deriveDirectShearStrength({
+            tests: tests.map((t) => ({ normalStress: k * t.normalStress, shearStress: k * t.shearStress })),
+          });
           expect(scaled.cohesion).toBeCloseTo(k * base.cohesion, 5);
           expect(scaled.frictionAngle).toBeCloseTo(base.frictionAngle, 8);
         },

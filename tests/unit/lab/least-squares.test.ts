@@ -52,7 +52,12 @@ describe("fitLine", () => {
 
   test("two points: exact line, no standard error (n − 2 = 0); bad input throws with the point", () => {
     const fit = fitLine([1, 3], [2, 6]);
-    expect([fit.intercept, fit.slope, fit.rSquared, fit.standardError]).toEqual([expect.closeTo(0, 12), expect.closeTo(2, 12), 1, null]);
+    expect([fit.intercept, fit.slope, fit.rSquared, fit.standardError]).toEqual([
+      expect.closeTo(0, 12),
+      expect.closeTo(2, 12),
+      1,
+      null,
+    ]);
     expect(() => fitLine([1, 1], [2, 3])).toThrow(/do not determine/);
     expect(() => fitLine([1, Number.NaN], [2, 3])).toThrow(/point 2/);
     expect(() => fitLine([1], [2])).toThrow(/at least 2/);
@@ -65,7 +70,10 @@ describe("fitLine", () => {
         fc.double({ min: -50, max: 50, noNaN: true }),
         fc.uniqueArray(fc.integer({ min: -500, max: 500 }), { minLength: 3, maxLength: 12 }),
         (a, b, xs) => {
-          const fit = fitLine(xs, xs.map((x) => a + b * x));
+          const fit = fitLine(
+            xs,
+            xs.map((x) => a + b * x),
+          );
           expect(fit.intercept).toBeCloseTo(a, 6);
           expect(fit.slope).toBeCloseTo(b, 8);
           expect(fit.rSquared).toBeCloseTo(1, 9);
@@ -78,11 +86,19 @@ describe("fitLine", () => {
 describe("fitPolynomial", () => {
   test("recovers an exact quadratic and cubic (hand calculation)", () => {
     const xs = [8, 10, 12, 14, 16, 18];
-    const quad = fitPolynomial(xs, xs.map((w) => 1.9 - 0.002 * (w - 14) ** 2), 2);
+    const quad = fitPolynomial(
+      xs,
+      xs.map((w) => 1.9 - 0.002 * (w - 14) ** 2),
+      2,
+    );
     expect(quad.coefficients[0]).toBeCloseTo(1.9 - 0.002 * 196, 10);
     expect(quad.coefficients[1]).toBeCloseTo(0.056, 10);
     expect(quad.coefficients[2]).toBeCloseTo(-0.002, 12);
-    const cubic = fitPolynomial(xs, xs.map((x) => 1 - x + 0.5 * x * x + 0.01 * x ** 3), 3);
+    const cubic = fitPolynomial(
+      xs,
+      xs.map((x) => 1 - x + 0.5 * x * x + 0.01 * x ** 3),
+      3,
+    );
     expect(evaluatePolynomial(cubic.coefficients, 11)).toBeCloseTo(1 - 11 + 60.5 + 13.31, 8);
     expect(() => fitPolynomial(xs, xs, 4)).toThrow(/degree/);
   });

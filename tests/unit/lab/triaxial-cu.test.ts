@@ -24,8 +24,16 @@ describe("deriveTriaxialCuStrength", () => {
   test("s'–t points and line match a hand calculation of the same data", () => {
     const r = deriveTriaxialCuStrength({ specimens: craigSpecimens, space: "s-t" });
     // hand calculation: σ3' = 70, 146, 228; σ1' = 262, 487, 732
-    expect(r.points.map((p) => [p.x, p.y])).toEqual([[166, 96], [316.5, 170.5], [480, 252]]);
-    expect(r.points.map((p) => [p.sigma3Effective, p.sigma1Effective])).toEqual([[70, 262], [146, 487], [228, 732]]);
+    expect(r.points.map((p) => [p.x, p.y])).toEqual([
+      [166, 96],
+      [316.5, 170.5],
+      [480, 252],
+    ]);
+    expect(r.points.map((p) => [p.sigma3Effective, p.sigma1Effective])).toEqual([
+      [70, 262],
+      [146, 487],
+      [228, 732],
+    ]);
     const xs = [166, 316.5, 480];
     const ys = [96, 170.5, 252];
     const mx = (166 + 316.5 + 480) / 3;
@@ -58,7 +66,11 @@ describe("deriveTriaxialCuStrength", () => {
         (c, phiDeg, sigma3s, u) => {
           const sinPhi = Math.sin(phiDeg / DEG);
           const N = (1 + sinPhi) / (1 - sinPhi); // Rankine's passive coefficient, Craig ch. 4
-          const specimens = sigma3s.map((s3) => ({ cellPressure: s3 + Math.max(u, 0), porePressure: Math.max(u, 0), deviatorStress: s3 * N + 2 * c * Math.sqrt(N) - s3 }));
+          const specimens = sigma3s.map((s3) => ({
+            cellPressure: s3 + Math.max(u, 0),
+            porePressure: Math.max(u, 0),
+            deviatorStress: s3 * N + 2 * c * Math.sqrt(N) - s3,
+          }));
           const pq = deriveTriaxialCuStrength({ specimens, space: "p-q" });
           const st = deriveTriaxialCuStrength({ specimens, space: "s-t" });
           expect(pq.frictionAngle).toBeCloseTo(phiDeg, 7);
@@ -73,11 +85,17 @@ describe("deriveTriaxialCuStrength", () => {
 
   test("bad specimens are named with their label", () => {
     expect(() =>
-      deriveTriaxialCuStrength({ specimens: [...craigSpecimens, { cellPressure: 100, deviatorStress: 50, porePressure: 120, specimen: "T4" }], space: "p-q" }),
+      deriveTriaxialCuStrength({
+        specimens: [...craigSpecimens, { cellPressure: 100, deviatorStress: 50, porePressure: 120, specimen: "T4" }],
+        space: "p-q",
+      }),
     ).toThrow("test 4 (T4): effective cell pressure σ3 − u must be positive");
-    expect(() => deriveTriaxialCuStrength({ specimens: [{ cellPressure: 100, deviatorStress: 0, porePressure: 0 }, craigSpecimens[0]], space: "p-q" })).toThrow(
-      "test 1: deviator stress must be positive",
-    );
+    expect(() =>
+      deriveTriaxialCuStrength({
+        specimens: [{ cellPressure: 100, deviatorStress: 0, porePressure: 0 }, craigSpecimens[0]],
+        space: "p-q",
+      }),
+    ).toThrow("test 1: deviator stress must be positive");
     expect(() => deriveTriaxialCuStrength({ specimens: craigSpecimens, space: "x" as "p-q" })).toThrow(/space/);
   });
 });

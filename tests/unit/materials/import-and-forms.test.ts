@@ -11,27 +11,54 @@ const HEADER = "id,name,model,gamma,gammaSat,c,phi,su,suGradient,suDatum";
 
 describe("checkMaterialsImport", () => {
   test("checkMaterialsImport(csv, keys) reads a clean file into materials with their rows", () => {
-    const check = checkMaterialsImport([HEADER, "core,Core clay,mohr-coulomb,19,20,8,27,,,", "rock,,impenetrable,,,,,,,"].join("\n"), []);
+    const check = checkMaterialsImport(
+      [HEADER, "core,Core clay,mohr-coulomb,19,20,8,27,,,", "rock,,impenetrable,,,,,,,"].join("\n"),
+      [],
+    );
     expect(check.ok).toBe(true);
     expect(check.materials).toEqual([
-      { row: 2, key: "core", name: "Core clay", parameters: { model: "mohr-coulomb", gamma: 19, gammaSat: 20, c: 8, phi: 27 } },
+      {
+        row: 2,
+        key: "core",
+        name: "Core clay",
+        parameters: { model: "mohr-coulomb", gamma: 19, gammaSat: 20, c: 8, phi: 27 },
+      },
       { row: 3, key: "rock", name: "rock", parameters: { model: "impenetrable" } },
     ]);
   });
 
   test("checkMaterialsImport(...) lists a non-slug id and a key already in the library with the CSV's own problems", () => {
-    const check = checkMaterialsImport([HEADER, "Core,x,impenetrable,,,,,,,", "rock,x,impenetrable,,,,,,,", "soft,x,undrained,17,,,,-5,,"].join("\n"), ["rock"]);
+    const check = checkMaterialsImport(
+      [HEADER, "Core,x,impenetrable,,,,,,,", "rock,x,impenetrable,,,,,,,", "soft,x,undrained,17,,,,-5,,"].join("\n"),
+      ["rock"],
+    );
     expect(check.ok).toBe(false);
     expect(check.materials).toEqual([]);
-    expect(check.problems.map((p) => [p.row, p.column])).toEqual([[2, "id"], [3, "id"], [4, "su"]]);
+    expect(check.problems.map((p) => [p.row, p.column])).toEqual([
+      [2, "id"],
+      [3, "id"],
+      [4, "su"],
+    ]);
     expect(csvProblemsToTable(check.problems)[2].message).toMatch(/^H4: /);
   });
 
   test("libraryToCsv(materials) is read back by the import unchanged", () => {
-    const lib = [{ key: "core", name: "Core, zone 1", color: "#CC6677", parameters: { model: "undrained" as const, gamma: 17, su: 25, suGradient: 1.5, suDatum: 10 } }];
+    const lib = [
+      {
+        key: "core",
+        name: "Core, zone 1",
+        color: "#CC6677",
+        parameters: { model: "undrained" as const, gamma: 17, su: 25, suGradient: 1.5, suDatum: 10 },
+      },
+    ];
     const back = checkMaterialsImport(libraryToCsv(lib), []);
     expect(back.materials).toEqual([{ row: 2, key: "core", name: "Core, zone 1", parameters: lib[0].parameters }]);
-    expect(toEngineMaterial(lib[0])).toEqual({ id: "core", name: "Core, zone 1", color: "#CC6677", ...lib[0].parameters });
+    expect(toEngineMaterial(lib[0])).toEqual({
+      id: "core",
+      name: "Core, zone 1",
+      color: "#CC6677",
+      ...lib[0].parameters,
+    });
   });
 });
 
@@ -46,7 +73,10 @@ describe("checkMaterialParameters", () => {
 
 describe("parameter form", () => {
   test("parametersFromForm(values) keeps only the model's fields and refuses a decimal comma", () => {
-    const values = { ...formValuesFrom({ model: "mohr-coulomb", gamma: 19, c: 8, phi: 27, su: 60 }), model: "undrained" as const };
+    const values = {
+      ...formValuesFrom({ model: "mohr-coulomb", gamma: 19, c: 8, phi: 27, su: 60 }),
+      model: "undrained" as const,
+    };
     expect(parametersFromForm(values)).toEqual({ ok: true, parameters: { model: "undrained", gamma: 19, su: 60 } });
     const bad = parametersFromForm({ ...values, su: "60,5" });
     expect(bad.ok).toBe(false);
@@ -83,6 +113,7 @@ describe("lab CSV", () => {
   test("parseLabCsv(...) names the cell of a bad number", () => {
     const out = parseLabCsv("direct-shear", "specimen,normalStress,shearStress\nA,50,36\nB,1OO,59");
     expect(out.ok).toBe(false);
-    if (!out.ok) expect(out.problems).toEqual([{ row: 3, column: "normalStress", cell: "B3", message: "'1OO' is not a number." }]);
+    if (!out.ok)
+      expect(out.problems).toEqual([{ row: 3, column: "normalStress", cell: "B3", message: "'1OO' is not a number." }]);
   });
 });

@@ -50,13 +50,24 @@ describe("checkSources", () => {
 
 describe("suggestedValues", () => {
   test("suggestedValues(direct shear) rounds c' and φ' to 0.1 (hand least squares: slope 0.9 → φ' = 41.99°, c' = 0.33 kPa)", () => {
-    const r = derive("direct-shear", { tests: [{ normalStress: 100, shearStress: 90 }, { normalStress: 200, shearStress: 181 }, { normalStress: 300, shearStress: 270 }] });
+    const r = derive("direct-shear", {
+      tests: [
+        { normalStress: 100, shearStress: 90 },
+        { normalStress: 200, shearStress: 181 },
+        { normalStress: 300, shearStress: 270 },
+      ],
+    });
     expect(suggestedValues(r)).toEqual([{ label: "c' and φ'", values: { c: 0.3, phi: 42 }, note: undefined }]);
   });
 
   test("suggestedValues(...) takes c' = 0 with a note when the fit gives a negative intercept", () => {
     // Hand calculation: through (100, 40) and (200, 100) the line is τ = −20 + 0.6σn.
-    const r = derive("direct-shear", { tests: [{ normalStress: 100, shearStress: 40 }, { normalStress: 200, shearStress: 100 }] });
+    const r = derive("direct-shear", {
+      tests: [
+        { normalStress: 100, shearStress: 40 },
+        { normalStress: 200, shearStress: 100 },
+      ],
+    });
     const [s] = suggestedValues(r);
     expect(s.values.c).toBe(0);
     expect(s.values.phi).toBeCloseTo((Math.atan(0.6) * 180) / Math.PI, 1);
@@ -64,7 +75,11 @@ describe("suggestedValues", () => {
   });
 
   test("suggestedValues(UU, constant) gives su = mean of q/2 (ASTM D2850: su is half the deviator stress)", () => {
-    const r = derive("undrained", { source: "uu", model: "constant", tests: [{ deviatorStress: 60 }, { deviatorStress: 70 }, { deviatorStress: 80 }] });
+    const r = derive("undrained", {
+      source: "uu",
+      model: "constant",
+      tests: [{ deviatorStress: 60 }, { deviatorStress: 70 }, { deviatorStress: 80 }],
+    });
     expect(suggestedValues(r)).toEqual([{ label: "su", values: { su: 35 } }]);
   });
 

@@ -1,5 +1,12 @@
 import { describe, expect, test } from "vitest";
-import { availableActions, checkChecklistEdit, checkComment, checkDecision, checkDraftChange, checkTransition } from "@/lib/review/rules";
+import {
+  availableActions,
+  checkChecklistEdit,
+  checkComment,
+  checkDecision,
+  checkDraftChange,
+  checkTransition,
+} from "@/lib/review/rules";
 import { CHECKLIST_KEYS, checklistHints, openChecklistItems } from "@/lib/review/checklist";
 import { pinMarkers, toScreen, toWorld } from "@/lib/review/pin-markers";
 import { composeNotice } from "@/lib/mail/compose-notice";
@@ -22,13 +29,21 @@ describe("checkTransition(action, actor, run)", () => {
   });
 
   test("refuses a designer's or an admin's decision with 403", () => {
-    expect(checkTransition("approve", designer, run("submitted"))).toMatchObject({ ok: false, status: 403, code: "forbidden" });
+    expect(checkTransition("approve", designer, run("submitted"))).toMatchObject({
+      ok: false,
+      status: 403,
+      code: "forbidden",
+    });
     expect(checkTransition("return", admin, run("submitted"))).toMatchObject({ ok: false, status: 403 });
     expect(checkTransition("submit", reviewer, run("draft"))).toMatchObject({ ok: false, status: 403 });
   });
 
   test("refuses self-review even when the author holds a reviewer's role", () => {
-    expect(checkTransition("approve", { userId: 1, role: "reviewer" }, run("submitted"))).toMatchObject({ ok: false, status: 403, code: "self_review" });
+    expect(checkTransition("approve", { userId: 1, role: "reviewer" }, run("submitted"))).toMatchObject({
+      ok: false,
+      status: 403,
+      code: "self_review",
+    });
   });
 
   test("refuses moves out of the wrong status with 409 and says why", () => {
@@ -52,7 +67,11 @@ describe("checkTransition(action, actor, run)", () => {
 
 describe("checkDecision(action, actor, run, input)", () => {
   test("a return needs a note; a sign-off needs every checklist item confirmed", () => {
-    expect(checkDecision("return", reviewer, run("submitted"), { note: "  ", checklist: [] })).toMatchObject({ ok: false, status: 422, field: "note" });
+    expect(checkDecision("return", reviewer, run("submitted"), { note: "  ", checklist: [] })).toMatchObject({
+      ok: false,
+      status: 422,
+      field: "note",
+    });
     expect(checkDecision("return", reviewer, run("submitted"), { note: "Fix the toe", checklist: [] }).ok).toBe(true);
     const open = checkDecision("approve", reviewer, run("submitted"), { note: "", checklist: allOk.slice(1) });
     expect(open).toMatchObject({ ok: false, status: 409, code: "checklist_open" });
@@ -88,7 +107,11 @@ describe("draft changes, comments and the checklist", () => {
   });
 
   test("checklistHints flags a minimum on the grid edge and an FS below the required value", () => {
-    const h = checklistHints({ warnings: [{ code: "minimum-on-grid-edge", message: "on the right edge" }], fs: { bishop: 1.42, fellenius: 1.61 }, requiredFs: 1.5 });
+    const h = checklistHints({
+      warnings: [{ code: "minimum-on-grid-edge", message: "on the right edge" }],
+      fs: { bishop: 1.42, fellenius: 1.61 },
+      requiredFs: 1.5,
+    });
     expect(h.grid).toEqual({ tone: "check", text: "on the right edge" });
     expect(h.fs?.tone).toBe("check");
     expect(h.fs?.text).toContain("Bishop 1.420 < 1.50");
@@ -100,10 +123,17 @@ describe("pins, notices and exports", () => {
   test("pinMarkers places slice comments at the slice's base middle, and toWorld inverts toScreen", () => {
     const slice = { xLeft: 10, xRight: 12, baseY: 3 } as never;
     const markers = pinMarkers(
-      [{ body: "a", pin: { x: 1, y: 2 }, slice: null }, { body: "b", pin: null, slice: null }, { body: "c", pin: null, slice: { number: 1, method: "bishop" } }],
+      [
+        { body: "a", pin: { x: 1, y: 2 }, slice: null },
+        { body: "b", pin: null, slice: null },
+        { body: "c", pin: null, slice: { number: 1, method: "bishop" } },
+      ],
       { bishop: { slices: [slice] } },
     );
-    expect(markers).toEqual([{ n: 1, x: 1, y: 2, label: "a" }, { n: 3, x: 11, y: 3, label: "c" }]);
+    expect(markers).toEqual([
+      { n: 1, x: 1, y: 2, label: "a" },
+      { n: 3, x: 11, y: 3, label: "c" },
+    ]);
     const view = { scale: 7.5, offsetX: 40, offsetY: 300 };
     const s = toScreen(view, 12.3, 4.5);
     const w = toWorld(view, s.left, s.top);
@@ -113,9 +143,20 @@ describe("pins, notices and exports", () => {
 
   test("composeNotice(run-returned) carries the note, the comments, the link and the caution", () => {
     const n = composeNotice("run-returned", {
-      projectName: "Test dam", runId: 9, runTitle: "Steady seepage", section: "Main v2", condition: "Long-term steady seepage", face: "downstream",
-      requiredFs: 1.5, fs: { bishop: 1.42, fellenius: null }, actorName: "Demo Reviewer", note: "Recheck the drain.", at: "2026-01-05T10:00:00Z",
-      link: "http://127.0.0.1:3000/projects/1/runs/9", accountLink: "http://127.0.0.1:3000/account", comments: [{ label: "#1 on slice 4 (Bishop)", body: "High u" }],
+      projectName: "Test dam",
+      runId: 9,
+      runTitle: "Steady seepage",
+      section: "Main v2",
+      condition: "Long-term steady seepage",
+      face: "downstream",
+      requiredFs: 1.5,
+      fs: { bishop: 1.42, fellenius: null },
+      actorName: "Demo Reviewer",
+      note: "Recheck the drain.",
+      at: "2026-01-05T10:00:00Z",
+      link: "http://127.0.0.1:3000/projects/1/runs/9",
+      accountLink: "http://127.0.0.1:3000/account",
+      comments: [{ label: "#1 on slice 4 (Bishop)", body: "High u" }],
     });
     expect(n.subject).toBe("Returned with comments: Steady seepage — Test dam");
     expect(n.text).toContain("Reviewer's note: Recheck the drain.");
@@ -127,10 +168,26 @@ describe("pins, notices and exports", () => {
 
   test("runsToCsv escapes text cells that start with =, +, - or @", () => {
     const base = {
-      id: 1, sectionName: "S", sectionVersion: 1, loadingCondition: "steady-seepage", face: "downstream", methods: ["bishop"], requiredFs: 1.5,
-      fsBishop: 1.6, fsFellenius: null, status: "approved" as const, authorName: "A", createdAt: "2026-01-01T00:00:00.000Z", reviewedByName: "R", reviewedAt: null, revisesRunId: null,
+      id: 1,
+      sectionName: "S",
+      sectionVersion: 1,
+      loadingCondition: "steady-seepage",
+      face: "downstream",
+      methods: ["bishop"],
+      requiredFs: 1.5,
+      fsBishop: 1.6,
+      fsFellenius: null,
+      status: "approved" as const,
+      authorName: "A",
+      createdAt: "2026-01-01T00:00:00.000Z",
+      reviewedByName: "R",
+      reviewedAt: null,
+      revisesRunId: null,
     };
-    const csv = runsToCsv(["=1+1", "+x", "-y", "@z"].map((title, i) => ({ ...base, id: i + 1, title })), "P");
+    const csv = runsToCsv(
+      ["=1+1", "+x", "-y", "@z"].map((title, i) => ({ ...base, id: i + 1, title })),
+      "P",
+    );
     const lines = csv.split("\r\n");
     expect(lines[3].split(",")[1]).toBe("'=1+1");
     expect(lines[4].split(",")[1]).toBe("'+x");

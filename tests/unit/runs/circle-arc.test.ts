@@ -20,31 +20,37 @@ const circleWithEnds = fc
 
 describe("arcPoints", () => {
   it("puts every point on the circle, on its lower half, between entry and exit", () => {
-    fc.assert(fc.property(circleWithEnds, ({ c, entry, exit }) => {
-      const pts = arcPoints(c, entry, exit);
-      const lo = Math.min(entry[0], exit[0]);
-      const hi = Math.max(entry[0], exit[0]);
-      const tol = 1e-9 * Math.max(1, c.r, Math.abs(c.xc), Math.abs(c.yc));
-      for (let i = 0; i < pts.length; i += 2) {
-        const [x, y] = [pts[i], pts[i + 1]];
-        expect(Math.abs(Math.hypot(x - c.xc, y - c.yc) - c.r)).toBeLessThan(1e-7 * Math.max(1, c.r));
-        expect(y).toBeLessThanOrEqual(c.yc + tol);
-        expect(x).toBeGreaterThanOrEqual(lo - tol * 10);
-        expect(x).toBeLessThanOrEqual(hi + tol * 10);
-      }
-    }), { numRuns: 400 });
+    fc.assert(
+      fc.property(circleWithEnds, ({ c, entry, exit }) => {
+        const pts = arcPoints(c, entry, exit);
+        const lo = Math.min(entry[0], exit[0]);
+        const hi = Math.max(entry[0], exit[0]);
+        const tol = 1e-9 * Math.max(1, c.r, Math.abs(c.xc), Math.abs(c.yc));
+        for (let i = 0; i < pts.length; i += 2) {
+          const [x, y] = [pts[i], pts[i + 1]];
+          expect(Math.abs(Math.hypot(x - c.xc, y - c.yc) - c.r)).toBeLessThan(1e-7 * Math.max(1, c.r));
+          expect(y).toBeLessThanOrEqual(c.yc + tol);
+          expect(x).toBeGreaterThanOrEqual(lo - tol * 10);
+          expect(x).toBeLessThanOrEqual(hi + tol * 10);
+        }
+      }),
+      { numRuns: 400 },
+    );
   });
 
   it("starts at the entry and ends at the exit", () => {
-    fc.assert(fc.property(circleWithEnds, ({ c, entry, exit }) => {
-      const pts = arcPoints(c, entry, exit);
-      const n = pts.length;
-      const tol = 1e-6 * Math.max(1, c.r);
-      expect(Math.abs(pts[0] - entry[0])).toBeLessThan(tol);
-      expect(Math.abs(pts[1] - entry[1])).toBeLessThan(tol);
-      expect(Math.abs(pts[n - 2] - exit[0])).toBeLessThan(tol);
-      expect(Math.abs(pts[n - 1] - exit[1])).toBeLessThan(tol);
-    }), { numRuns: 300 });
+    fc.assert(
+      fc.property(circleWithEnds, ({ c, entry, exit }) => {
+        const pts = arcPoints(c, entry, exit);
+        const n = pts.length;
+        const tol = 1e-6 * Math.max(1, c.r);
+        expect(Math.abs(pts[0] - entry[0])).toBeLessThan(tol);
+        expect(Math.abs(pts[1] - entry[1])).toBeLessThan(tol);
+        expect(Math.abs(pts[n - 2] - exit[0])).toBeLessThan(tol);
+        expect(Math.abs(pts[n - 1] - exit[1])).toBeLessThan(tol);
+      }),
+      { numRuns: 300 },
+    );
   });
 
   it("follows the arc closely: no chord strays more than r·(1 − cos 1°) from it", () => {
@@ -61,7 +67,11 @@ describe("arcPoints", () => {
 describe("sliceSides", () => {
   it("runs each side from the arc up to the ground, with n + 1 sides for n slices", () => {
     const c = { xc: 0, yc: 10, r: 10 };
-    const bounds = [{ xLeft: -6, xRight: -2 }, { xLeft: -2, xRight: 2 }, { xLeft: 2, xRight: 6 }];
+    const bounds = [
+      { xLeft: -6, xRight: -2 },
+      { xLeft: -2, xRight: 2 },
+      { xLeft: 2, xRight: 6 },
+    ];
     const sides = sliceSides(c, bounds, () => 5);
     expect(sides.map((s) => s.x)).toEqual([-6, -2, 2, 6]);
     // Lower arc at x = ±6: 10 − √(100 − 36) = 2 (a 6-8-10 triangle).

@@ -8,7 +8,13 @@ import { SliceTable } from "@/components/runs/slice-table";
 import { smallRun } from "./engine-run";
 import { SLICES } from "./fixtures";
 
-const text = (html: string) => html.replace(/<[^>]+>/g, " ").replace(/&#x27;/g, "'").replace(/&quot;/g, '"').replace(/&amp;/g, "&").replace(/\s+/g, " ");
+const text = (html: string) =>
+  html
+    .replace(/<[^>]+>/g, " ")
+    .replace(/&#x27;/g, "'")
+    .replace(/&quot;/g, '"')
+    .replace(/&amp;/g, "&")
+    .replace(/\s+/g, " ");
 
 describe("FsSummary", () => {
   const { result, bishop } = smallRun();
@@ -50,10 +56,14 @@ describe("SliceTable", () => {
 
 describe("CompareTable and InputDiff", () => {
   it("puts runs in columns with the required FS, verdicts and the lowest marked", () => {
-    const html = renderToStaticMarkup(<CompareTable runs={[
-      { id: 1, label: "Run A", requiredFs: 1.5, fs: { bishop: 1.62, fellenius: 1.48 } },
-      { id: 2, label: "Run B", requiredFs: 1.5, fs: { bishop: 1.41, fellenius: 1.33 } },
-    ]} />);
+    const html = renderToStaticMarkup(
+      <CompareTable
+        runs={[
+          { id: 1, label: "Run A", requiredFs: 1.5, fs: { bishop: 1.62, fellenius: 1.48 } },
+          { id: 2, label: "Run B", requiredFs: 1.5, fs: { bishop: 1.41, fellenius: 1.33 } },
+        ]}
+      />,
+    );
     const t = text(html);
     expect(t).toMatch(/Run A .*Run B/);
     expect(t).toContain("1.620");
@@ -63,10 +73,14 @@ describe("CompareTable and InputDiff", () => {
   });
 
   it("groups differences by area in reading order", () => {
-    const html = renderToStaticMarkup(<InputDiff differences={[
-      { area: "analysis", path: "analysis.grid", text: "grid moved" },
-      { area: "materials", path: "materials[fill].phi", text: "fill: φ' 30° → 28°", before: "30°", after: "28°" },
-    ]} />);
+    const html = renderToStaticMarkup(
+      <InputDiff
+        differences={[
+          { area: "analysis", path: "analysis.grid", text: "grid moved" },
+          { area: "materials", path: "materials[fill].phi", text: "fill: φ' 30° → 28°", before: "30°", after: "28°" },
+        ]}
+      />,
+    );
     expect(html.indexOf('data-area="materials"')).toBeLessThan(html.indexOf('data-area="analysis"'));
     expect(text(html)).toContain("fill: φ' 30° → 28°");
   });

@@ -1,7 +1,13 @@
 /** A small grid search on the three-material embankment fixture, shared by the run-view tests. */
 import { readFileSync } from "node:fs";
 import path from "node:path";
-import { analyzeCircle, runGridSearch, type CircleSuccess, type GridSearchSuccess, type SectionDocument } from "@/lib/stability";
+import {
+  analyzeCircle,
+  runGridSearch,
+  type CircleSuccess,
+  type GridSearchSuccess,
+  type SectionDocument,
+} from "@/lib/stability";
 
 export function embankment(): SectionDocument {
   const file = path.resolve(__dirname, "../../fixtures/sections/three-material-embankment.json");
@@ -14,7 +20,12 @@ let cached: { doc: SectionDocument; result: GridSearchSuccess; bishop: CircleSuc
 export function smallRun() {
   if (cached) return cached;
   const doc = embankment();
-  doc.analysis = { ...doc.analysis, grid: { x1: 55, y1: 25, x2: 85, y2: 45, nx: 8, ny: 6 }, radii: { tangentY1: 10, tangentY2: 1, n: 6 }, refine: false };
+  doc.analysis = {
+    ...doc.analysis,
+    grid: { x1: 55, y1: 25, x2: 85, y2: 45, nx: 8, ny: 6 },
+    radii: { tangentY1: 10, tangentY2: 1, n: 6 },
+    refine: false,
+  };
   const result = runGridSearch(doc);
   if (!result.ok) throw new Error("fixture search failed");
   const crit = result.results.bishop!;

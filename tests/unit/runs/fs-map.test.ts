@@ -24,7 +24,10 @@ describe("fsMapCells on the engine's map (values[iy·nx + ix], ENGINE-IO.md)", (
   });
 
   it("reads row by row and leaves empty centres uncoloured", () => {
-    const cells = fsMapCells({ nx: 3, ny: 2, xs: [0, 1, 2], ys: [10, 12], values: [1, 2, null, 4, 5, 6] }, { lo: 1, hi: 6, clipped: false });
+    const cells = fsMapCells(
+      { nx: 3, ny: 2, xs: [0, 1, 2], ys: [10, 12], values: [1, 2, null, 4, 5, 6] },
+      { lo: 1, hi: 6, clipped: false },
+    );
     const at = (ix: number, iy: number) => cells.find((c) => c.ix === ix && c.iy === iy)!;
     expect(at(2, 1).fs).toBe(6);
     expect(at(2, 0).colour).toBeNull();
@@ -37,7 +40,9 @@ describe("fsMapCells on the engine's map (values[iy·nx + ix], ENGINE-IO.md)", (
     const range = fsRange(map.values)!;
     const cells = fsMapCells(map, range);
     const crit = result.results.bishop!;
-    const cell = cells.find((c) => crit.circle.xc >= c.x1 && crit.circle.xc <= c.x2 && crit.circle.yc >= c.y1 && crit.circle.yc <= c.y2)!;
+    const cell = cells.find(
+      (c) => crit.circle.xc >= c.x1 && crit.circle.xc <= c.x2 && crit.circle.yc >= c.y1 && crit.circle.yc <= c.y2,
+    )!;
     expect(cell.fs).toBeCloseTo(crit.fs, 9);
     expect(cell.colour).toBe(scaleHex(CIVIDIS, 0));
   });
@@ -49,7 +54,10 @@ describe("buildFsLegend", () => {
     for (const t of l.ticks) expect(t.at).toBeCloseTo((t.value - 1.1) / 1.5, 12);
     expect(l.required).toEqual({ value: 1.5, at: expect.closeTo(0.4 / 1.5, 12), outside: null });
     expect(l.highLabel).toBe("≥ 2.60");
-    expect(buildFsLegend({ lo: 1.6, hi: 2.1, clipped: false }, 1.3).required).toMatchObject({ at: 0, outside: "below" });
+    expect(buildFsLegend({ lo: 1.6, hi: 2.1, clipped: false }, 1.3).required).toMatchObject({
+      at: 0,
+      outside: "below",
+    });
     expect(l.gradient[0].colour).toBe(scaleHex(CIVIDIS, 0));
   });
 });

@@ -13,17 +13,22 @@ describe("niceTicks (Heckbert 1990, 'Nice numbers for graph labels')", () => {
 
   it("keeps every tick inside the range, equally spaced, without float noise", () => {
     fc.assert(
-      fc.property(fc.double({ min: -1e4, max: 1e4, noNaN: true }), fc.double({ min: 1e-3, max: 1e4, noNaN: true }), fc.integer({ min: 2, max: 12 }), (lo, span, n) => {
-        const t = niceTicks(lo, lo + span, n);
-        expect(t.length).toBeGreaterThan(0);
-        const step = niceStep(span / n);
-        for (const v of t) {
-          expect(v).toBeGreaterThanOrEqual(lo - step * 1e-6);
-          expect(v).toBeLessThanOrEqual(lo + span + step * 1e-6);
-          expect(String(v).length).toBeLessThan(20);
-        }
-        for (let i = 1; i < t.length; i++) expect(t[i] - t[i - 1]).toBeCloseTo(step, 6);
-      }),
+      fc.property(
+        fc.double({ min: -1e4, max: 1e4, noNaN: true }),
+        fc.double({ min: 1e-3, max: 1e4, noNaN: true }),
+        fc.integer({ min: 2, max: 12 }),
+        (lo, span, n) => {
+          const t = niceTicks(lo, lo + span, n);
+          expect(t.length).toBeGreaterThan(0);
+          const step = niceStep(span / n);
+          for (const v of t) {
+            expect(v).toBeGreaterThanOrEqual(lo - step * 1e-6);
+            expect(v).toBeLessThanOrEqual(lo + span + step * 1e-6);
+            expect(String(v).length).toBeLessThan(20);
+          }
+          for (let i = 1; i < t.length; i++) expect(t[i] - t[i - 1]).toBeCloseTo(step, 6);
+        },
+      ),
       { numRuns: 300 },
     );
   });

@@ -26,7 +26,8 @@ afterEach(() => {
 async function mount(props: RunCanvasProps) {
   await act(async () => root.render(<RunCanvas {...props} />));
   // next/dynamic loads the konva stage asynchronously.
-  for (let i = 0; i < 100 && !container.querySelector("canvas"); i++) await act(async () => new Promise((r) => setTimeout(r, 30)));
+  for (let i = 0; i < 100 && !container.querySelector("canvas"); i++)
+    await act(async () => new Promise((r) => setTimeout(r, 30)));
 }
 
 const canvasEl = () => container.querySelector('[data-testid="run-canvas"]') as HTMLElement;

@@ -4,16 +4,29 @@ import { criticalAttribute } from "@/lib/runs/circle-styles";
 import { buildRunScene, gridCentres } from "@/lib/runs/run-scene";
 import { embankment, smallRun } from "./engine-run";
 
-const inside = (b: { minX: number; minY: number; maxX: number; maxY: number }, x: number, y: number) => x >= b.minX - 1e-9 && x <= b.maxX + 1e-9 && y >= b.minY - 1e-9 && y <= b.maxY + 1e-9;
+const inside = (b: { minX: number; minY: number; maxX: number; maxY: number }, x: number, y: number) =>
+  x >= b.minX - 1e-9 && x <= b.maxX + 1e-9 && y >= b.minY - 1e-9 && y <= b.maxY + 1e-9;
 
 describe("buildRunScene with a grid search of the embankment fixture", () => {
   const { doc, result, bishop } = smallRun();
   const scene = buildRunScene({ document: doc, result, slices: bishop.slices, requiredFs: 1.5 });
 
   it("draws each method's critical circle as the engine reports it, Bishop solid and the ordinary method dashed", () => {
-    const drawn = JSON.parse(criticalAttribute(scene.critical)) as { method: string; xc: number; yc: number; r: number; fs: number; dashed: boolean }[];
+    const drawn = JSON.parse(criticalAttribute(scene.critical)) as {
+      method: string;
+      xc: number;
+      yc: number;
+      r: number;
+      fs: number;
+      dashed: boolean;
+    }[];
     expect(drawn.map((d) => d.method)).toEqual(["bishop", "fellenius"]);
-    expect(drawn[0]).toMatchObject({ xc: expect.closeTo(result.results.bishop!.circle.xc, 3), r: expect.closeTo(result.results.bishop!.circle.r, 3), fs: result.results.bishop!.fs, dashed: false });
+    expect(drawn[0]).toMatchObject({
+      xc: expect.closeTo(result.results.bishop!.circle.xc, 3),
+      r: expect.closeTo(result.results.bishop!.circle.r, 3),
+      fs: result.results.bishop!.fs,
+      dashed: false,
+    });
     expect(drawn[1].dashed).toBe(true);
   });
 
@@ -21,8 +34,13 @@ describe("buildRunScene with a grid search of the embankment fixture", () => {
     expect(scene.method).toBe("bishop");
     expect(scene.cells).toHaveLength(8 * 6);
     const section = { minX: 0, minY: 0, maxX: 100, maxY: 22 };
-    for (const [x, y] of [[section.minX, section.minY], [section.maxX, section.maxY]]) expect(inside(scene.fitBox, x, y)).toBe(true);
-    for (const c of scene.cells) expect(inside(scene.fitBox, c.x1, c.y1) && inside(scene.fitBox, c.x2, c.y2)).toBe(true);
+    for (const [x, y] of [
+      [section.minX, section.minY],
+      [section.maxX, section.maxY],
+    ])
+      expect(inside(scene.fitBox, x, y)).toBe(true);
+    for (const c of scene.cells)
+      expect(inside(scene.fitBox, c.x1, c.y1) && inside(scene.fitBox, c.x2, c.y2)).toBe(true);
   });
 
   it("draws the lowest circles and one side per slice boundary, each from the arc up to the ground", () => {
@@ -49,7 +67,14 @@ describe("buildRunScene in set-up and compare modes", () => {
     const grid = { x1: 60, y1: 30, x2: 70, y2: 40, nx: 3, ny: 2 };
     const scene = buildRunScene({ document: doc, grid, radii: { tangentY1: 2, tangentY2: 9, n: 4 } });
     expect(scene.centres).toEqual(gridCentres(grid));
-    expect(scene.centres).toEqual([[60, 30], [65, 30], [70, 30], [60, 40], [65, 40], [70, 40]]);
+    expect(scene.centres).toEqual([
+      [60, 30],
+      [65, 30],
+      [70, 30],
+      [60, 40],
+      [65, 40],
+      [70, 40],
+    ]);
     expect(scene.band.map((b) => b.y)).toEqual([2, 9]);
     expect(scene.cells).toEqual([]);
     expect(scene.critical).toEqual([]);
@@ -65,7 +90,10 @@ describe("buildRunScene in set-up and compare modes", () => {
       ],
       drawdownTo: 14,
     });
-    expect(scene.critical.map((c) => [c.label, c.style.colour])).toEqual([["Run A 1.41", "#0072B2"], ["Run B 1.38", "#D55E00"]]);
+    expect(scene.critical.map((c) => [c.label, c.style.colour])).toEqual([
+      ["Run A 1.41", "#0072B2"],
+      ["Run B 1.38", "#D55E00"],
+    ]);
     expect(scene.critical[0].style.dash).not.toEqual(scene.critical[1].style.dash);
     expect(scene.pool?.spans).toHaveLength(1);
   });

@@ -14,13 +14,34 @@ function area(ring: number[]): number {
 
 describe("pondedWater", () => {
   it("fills a V-shaped valley up to a level line: a triangle of ½·10·5 = 25 m²", () => {
-    const ponds = pondedWater([[0, 5], [20, 5]], [[0, 10], [10, 0], [20, 10]]);
+    const ponds = pondedWater(
+      [
+        [0, 5],
+        [20, 5],
+      ],
+      [
+        [0, 10],
+        [10, 0],
+        [20, 10],
+      ],
+    );
     expect(ponds).toHaveLength(1);
     expect(area(ponds[0])).toBeCloseTo(25, 9);
   });
 
   it("stops at a vertical face: water 5 m deep over 10 m against a wall is 50 m²", () => {
-    const ponds = pondedWater([[0, 5], [20, 5]], [[0, 0], [10, 0], [10, 8], [20, 8]]);
+    const ponds = pondedWater(
+      [
+        [0, 5],
+        [20, 5],
+      ],
+      [
+        [0, 0],
+        [10, 0],
+        [10, 8],
+        [20, 8],
+      ],
+    );
     expect(ponds).toHaveLength(1);
     expect(area(ponds[0])).toBeCloseTo(50, 9);
     const xs = ponds[0].filter((_, i) => i % 2 === 0);
@@ -37,7 +58,18 @@ describe("pondedWater", () => {
   });
 
   it("is empty when the water line stays below the ground", () => {
-    expect(pondedWater([[0, -1], [20, -1]], [[0, 0], [20, 0]])).toEqual([]);
+    expect(
+      pondedWater(
+        [
+          [0, -1],
+          [20, -1],
+        ],
+        [
+          [0, 0],
+          [20, 0],
+        ],
+      ),
+    ).toEqual([]);
   });
 });
 

@@ -10,7 +10,19 @@ describe("slice table columns", () => {
   it("derive width as xRight − xLeft and carry a unit for every physical quantity", () => {
     const s = numberSlices([slice({ xLeft: 3.25, xRight: 4.5 })])[0];
     expect(col("width").value(s, "bishop")).toBeCloseTo(1.25, 12);
-    for (const k of ["xLeft", "weight", "alpha", "baseLength", "porePressure", "c", "phi", "normal", "resisting", "driving"]) expect(col(k).unit).not.toBe("");
+    for (const k of [
+      "xLeft",
+      "weight",
+      "alpha",
+      "baseLength",
+      "porePressure",
+      "c",
+      "phi",
+      "normal",
+      "resisting",
+      "driving",
+    ])
+      expect(col(k).unit).not.toBe("");
   });
 
   it("formatCell uses fixed decimals and never prints a negative zero", () => {
@@ -29,11 +41,14 @@ describe("sortSlices", () => {
   });
 
   it("gives a permutation in non-decreasing order for any weights (property)", () => {
-    fc.assert(fc.property(fc.array(fc.double({ min: -1e4, max: 1e4, noNaN: true }), { maxLength: 60 }), (ws) => {
-      const n = numberSlices(ws.map((w) => slice({ weight: w })));
-      const sorted = sortSlices(n, col("weight"), "ascending", "bishop");
-      expect(sorted.map((s) => s.n).sort((a, b) => a - b)).toEqual(n.map((s) => s.n));
-      for (let i = 1; i < sorted.length; i++) expect(sorted[i].row.weight).toBeGreaterThanOrEqual(sorted[i - 1].row.weight);
-    }));
+    fc.assert(
+      fc.property(fc.array(fc.double({ min: -1e4, max: 1e4, noNaN: true }), { maxLength: 60 }), (ws) => {
+        const n = numberSlices(ws.map((w) => slice({ weight: w })));
+        const sorted = sortSlices(n, col("weight"), "ascending", "bishop");
+        expect(sorted.map((s) => s.n).sort((a, b) => a - b)).toEqual(n.map((s) => s.n));
+        for (let i = 1; i < sorted.length; i++)
+          expect(sorted[i].row.weight).toBeGreaterThanOrEqual(sorted[i - 1].row.weight);
+      }),
+    );
   });
 });

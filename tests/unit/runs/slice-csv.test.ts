@@ -8,7 +8,8 @@ import { SLICES } from "./fixtures";
 
 describe("escapeCsvText (RFC 4180 quoting, OWASP CSV-injection guidance)", () => {
   it("prefixes text that starts a formula with a single quote", () => {
-    for (const lead of ["=", "+", "-", "@", "\t", "\r"]) expect(escapeCsvText(`${lead}SUM(A1)`).replace(/^"/, "").startsWith(`'${lead}`)).toBe(true);
+    for (const lead of ["=", "+", "-", "@", "\t", "\r"])
+      expect(escapeCsvText(`${lead}SUM(A1)`).replace(/^"/, "").startsWith(`'${lead}`)).toBe(true);
     expect(escapeCsvText("clay core")).toBe("clay core");
   });
 
@@ -18,20 +19,28 @@ describe("escapeCsvText (RFC 4180 quoting, OWASP CSV-injection guidance)", () =>
   });
 
   it("round-trips any text through an independent CSV parser (papaparse), formula prefix aside", () => {
-    fc.assert(fc.property(fc.string(), fc.string(), (a, b) => {
-      const line = `${escapeCsvText(a)},${escapeCsvText(b)}`;
-      const parsed = Papa.parse<string[]>(line, { newline: "\r\n", delimiter: "," }).data[0] ?? [""];
-      const undo = (s: string, orig: string) => (/^[=+\-@\t\r]/.test(orig) ? s.slice(1) : s);
-      expect(undo(parsed[0] ?? "", a)).toBe(a);
-      expect(undo(parsed[1] ?? "", b)).toBe(b);
-    }), { numRuns: 500 });
+    fc.assert(
+      fc.property(fc.string(), fc.string(), (a, b) => {
+        const line = `${escapeCsvText(a)},${escapeCsvText(b)}`;
+        const parsed = Papa.parse<string[]>(line, { newline: "\r\n", delimiter: "," }).data[0] ?? [""];
+        const undo = (s: string, orig: string) => (/^[=+\-@\t\r]/.test(orig) ? s.slice(1) : s);
+        expect(undo(parsed[0] ?? "", a)).toBe(a);
+        expect(undo(parsed[1] ?? "", b)).toBe(b);
+      }),
+      { numRuns: 500 },
+    );
   });
 });
 
 describe("sliceTableToCsv", () => {
   const csv = sliceTableToCsv(SLICES, {
-    method: "bishop", title: "Downstream, steady, run 3", section: "Demo dam v2", fs: { bishop: 1.4123, fellenius: 1.3291 },
-    requiredFs: 1.5, circle: { xc: 31, yc: 37.5, r: 26.1 }, ordinaryForm: "classical",
+    method: "bishop",
+    title: "Downstream, steady, run 3",
+    section: "Demo dam v2",
+    fs: { bishop: 1.4123, fellenius: 1.3291 },
+    requiredFs: 1.5,
+    circle: { xc: 31, yc: 37.5, r: 26.1 },
+    ordinaryForm: "classical",
   });
   const rows = Papa.parse<string[]>(csv.trimEnd(), { newline: "\r\n", delimiter: "," }).data;
 
@@ -67,7 +76,10 @@ describe("sliceTableToCsv", () => {
   });
 
   it("fills N′ from the ordinary method when asked", () => {
-    const o = Papa.parse<string[]>(sliceTableToCsv(SLICES, { method: "fellenius" }).trimEnd(), { newline: "\r\n", delimiter: "," }).data.filter((r) => !r[0].startsWith("#"));
+    const o = Papa.parse<string[]>(sliceTableToCsv(SLICES, { method: "fellenius" }).trimEnd(), {
+      newline: "\r\n",
+      delimiter: ",",
+    }).data.filter((r) => !r[0].startsWith("#"));
     expect(o[0]).toContain("N′ (ordinary) (kN/m)");
     expect(o[1][o[0].indexOf("N′ (ordinary) (kN/m)")]).toBe("91.4");
   });

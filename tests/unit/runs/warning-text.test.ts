@@ -1,6 +1,12 @@
 import { describe, expect, it } from "vitest";
 import { REASONS, runGridSearch } from "@/lib/stability";
-import { describeWarning, describeWarnings, ordinaryFormText, rejectionList, rejectionText } from "@/lib/runs/warning-text";
+import {
+  describeWarning,
+  describeWarnings,
+  ordinaryFormText,
+  rejectionList,
+  rejectionText,
+} from "@/lib/runs/warning-text";
 import { embankment } from "./engine-run";
 
 describe("warning sentences", () => {
@@ -11,7 +17,12 @@ describe("warning sentences", () => {
   it("turn the engine's grid-edge warning into a check with the suggested move kept", () => {
     const doc = embankment();
     // A grid far left of the downstream face puts the minimum on its right edge.
-    doc.analysis = { ...doc.analysis, grid: { x1: 45, y1: 25, x2: 55, y2: 35, nx: 4, ny: 4 }, radii: { tangentY1: 10, tangentY2: 2, n: 4 }, refine: false };
+    doc.analysis = {
+      ...doc.analysis,
+      grid: { x1: 45, y1: 25, x2: 55, y2: 35, nx: 4, ny: 4 },
+      radii: { tangentY1: 10, tangentY2: 2, n: 4 },
+      refine: false,
+    };
     const result = runGridSearch(doc);
     if (!result.ok) throw new Error("search failed");
     const edge = result.warnings.find((w) => w.code === "minimum-on-grid-edge");

@@ -9,33 +9,65 @@ function problemsOf(text: string, options?: Parameters<typeof parseGeometryCsv>[
 
 describe("parseGeometryCsv: well-formed files (shape of ENGINE-IO.md regions)", () => {
   test("parseGeometryCsv(text) gives {material, points}[] with the material taken from each region's first row", () => {
-    const text = "region,material,x,y\nbank,fill,0,0\nbank,,20,0\nbank,,10,5\nbed,clay,0,0\nbed,clay,20,0\nbed,,20,-4\nbed,,0,-4\n";
+    const text =
+      "region,material,x,y\nbank,fill,0,0\nbank,,20,0\nbank,,10,5\nbed,clay,0,0\nbed,clay,20,0\nbed,,20,-4\nbed,,0,-4\n";
     const r = parseGeometryCsv(text);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.value).toEqual([
-      { material: "fill", points: [[0, 0], [20, 0], [10, 5]] },
-      { material: "clay", points: [[0, 0], [20, 0], [20, -4], [0, -4]] },
+      {
+        material: "fill",
+        points: [
+          [0, 0],
+          [20, 0],
+          [10, 5],
+        ],
+      },
+      {
+        material: "clay",
+        points: [
+          [0, 0],
+          [20, 0],
+          [20, -4],
+          [0, -4],
+        ],
+      },
     ]);
     expect(r.preview[0]).toEqual({ row: 2, cells: { region: "bank", material: "fill", x: "0", y: "0" } });
     expect(r.warnings).toEqual([]);
   });
 
   test("semicolons, a BOM, CRLF, blank lines and trailing spaces are accepted; rows keep their spreadsheet numbers", () => {
-    const text = "\uFEFFRegion ; Material ; X ; Y\r\n\r\nbank ; fill ; 0 ; 0\r\nbank;;20.5;0\r\n\r\nbank;;10;5.25  \r\n";
+    const text =
+      "\uFEFFRegion ; Material ; X ; Y\r\n\r\nbank ; fill ; 0 ; 0\r\nbank;;20.5;0\r\n\r\nbank;;10;5.25  \r\n";
     const r = parseGeometryCsv(text);
-    expect(r.ok && r.value).toEqual([{ material: "fill", points: [[0, 0], [20.5, 0], [10, 5.25]] }]);
+    expect(r.ok && r.value).toEqual([
+      {
+        material: "fill",
+        points: [
+          [0, 0],
+          [20.5, 0],
+          [10, 5.25],
+        ],
+      },
+    ]);
     expect(r.preview.map((p) => p.row)).toEqual([3, 4, 6]);
   });
 
   test("a repeated closing point is dropped with a warning (ENGINE-IO.md: first point not repeated)", () => {
     const r = parseGeometryCsv("region,material,x,y\nA,m,0,0\nA,,4,0\nA,,0,3\nA,,0,0\n");
-    expect(r.ok && r.value[0].points).toEqual([[0, 0], [4, 0], [0, 3]]);
+    expect(r.ok && r.value[0].points).toEqual([
+      [0, 0],
+      [4, 0],
+      [0, 3],
+    ]);
     expect(r.warnings).toEqual([expect.objectContaining({ row: 5 })]);
   });
 
   test("map-grid coordinates keep a small region's area (regression: a fast-check counterexample lost 0.125 m² to cancellation)", () => {
-    const r = parseGeometryCsv("region,material,x,y\nA,m,-2652274.66,-758498409.2\nA,,-2652274.16,-758498409.2\nA,,-2652274.66,-758498408.7\n");
+    const r = parseGeometryCsv(
+      "region,material,x,y\nA,m,-2652274.66,-758498409.2\nA,,-2652274.16,-758498409.2\nA,,-2652274.66,-758498408.7\n",
+    );
     expect(r.ok).toBe(true);
   });
 
@@ -48,16 +80,22 @@ describe("parseGeometryCsv: well-formed files (shape of ENGINE-IO.md regions)", 
 
 describe("parseGeometryCsv: every problem with its row and column", () => {
   test("an empty file (or only blank lines) asks for the header on row 1", () => {
-    expect(problemsOf("")).toEqual([{ row: 1, column: null, message: expect.stringMatching(/empty.*region,material,x,y/) }]);
+    expect(problemsOf("")).toEqual([
+      { row: 1, column: null, message: expect.stringMatching(/empty.*region,material,x,y/) },
+    ]);
     expect(problemsOf("\uFEFF\n\n  \n")[0].row).toBe(1);
   });
 
   test("a header without data rows is reported on row 2", () => {
-    expect(problemsOf("region,material,x,y\n")).toEqual([{ row: 2, column: null, message: expect.stringMatching(/no data rows/) }]);
+    expect(problemsOf("region,material,x,y\n")).toEqual([
+      { row: 2, column: null, message: expect.stringMatching(/no data rows/) },
+    ]);
   });
 
   test("a missing column is reported on the header row by name", () => {
-    expect(problemsOf("region,material,x\nA,m,0\nA,,1\nA,,2\n")).toEqual([{ row: 1, column: "y", message: expect.stringMatching(/'y' is missing/) }]);
+    expect(problemsOf("region,material,x\nA,m,0\nA,,1\nA,,2\n")).toEqual([
+      { row: 1, column: "y", message: expect.stringMatching(/'y' is missing/) },
+    ]);
   });
 
   test("non-numeric and decimal-comma cells name their cell (C3, D4)", () => {
@@ -70,11 +108,15 @@ describe("parseGeometryCsv: every problem with its row and column", () => {
 
   test("a decimal comma in a comma-separated file shows up as an extra cell on that row", () => {
     const problems = problemsOf("region,material,x,y\nA,m,0,0\nA,,12,5,3\nA,,1,4\n");
-    expect(problems).toEqual([{ row: 3, column: null, message: expect.stringMatching(/5 cells but the header has 4.*decimal comma/) }]);
+    expect(problems).toEqual([
+      { row: 3, column: null, message: expect.stringMatching(/5 cells but the header has 4.*decimal comma/) },
+    ]);
   });
 
   test("an empty numeric cell is a problem at its cell", () => {
-    expect(problemsOf("region,material,x,y\nA,m,0,0\nA,,,1\nA,,2,2\n")).toEqual([{ row: 3, column: "x", cell: "C3", message: "A number is needed here." }]);
+    expect(problemsOf("region,material,x,y\nA,m,0,0\nA,,,1\nA,,2,2\n")).toEqual([
+      { row: 3, column: "x", cell: "C3", message: "A number is needed here." },
+    ]);
   });
 
   test("a region with 2 points is reported on its first row, column region", () => {
@@ -85,7 +127,9 @@ describe("parseGeometryCsv: every problem with its row and column", () => {
 
   test("a region whose rows are split by another region is reported where it comes back", () => {
     const problems = problemsOf("region,material,x,y\nA,m,0,0\nA,,1,0\nB,m,5,5\nB,,6,5\nB,,6,6\nA,,0,1\n");
-    expect(problems).toEqual([{ row: 7, column: "region", cell: "A7", message: expect.stringMatching(/continues here.*began on row 2/) }]);
+    expect(problems).toEqual([
+      { row: 7, column: "region", cell: "A7", message: expect.stringMatching(/continues here.*began on row 2/) },
+    ]);
   });
 
   test("a region without a material on its first row, or with a conflicting one later, is reported", () => {
@@ -94,13 +138,20 @@ describe("parseGeometryCsv: every problem with its row and column", () => {
       { row: 3, column: "material", cell: "B3", message: expect.stringMatching(/differs/) },
     ]);
     expect(problemsOf("region,material,x,y\nA,m,0,0\nA,n,1,0\nA,,0,1\n")).toEqual([
-      { row: 3, column: "material", cell: "B3", message: "Material 'n' differs from 'm' given for region 'A' on row 2." },
+      {
+        row: 3,
+        column: "material",
+        cell: "B3",
+        message: "Material 'n' differs from 'm' given for region 'A' on row 2.",
+      },
     ]);
   });
 
   test("a missing region name, collinear points and an unknown material are reported", () => {
     expect(problemsOf("region,material,x,y\n,m,0,0\n")[0]).toMatchObject({ row: 2, column: "region", cell: "A2" });
-    expect(problemsOf("region,material,x,y\nA,m,0,0\nA,,1,1\nA,,2,2\n")).toEqual([{ row: 2, column: "region", message: expect.stringMatching(/no area/) }]);
+    expect(problemsOf("region,material,x,y\nA,m,0,0\nA,,1,1\nA,,2,2\n")).toEqual([
+      { row: 2, column: "region", message: expect.stringMatching(/no area/) },
+    ]);
     expect(problemsOf("region,material,x,y\nA,rock,0,0\nA,,1,0\nA,,0,1\n", { knownMaterialIds: ["fill"] })).toEqual([
       { row: 2, column: "material", message: expect.stringMatching(/'rock'.*does not define/) },
     ]);
@@ -120,14 +171,47 @@ describe("parseGeometryCsv: every problem with its row and column", () => {
 
 describe("geometryToCsv", () => {
   test("negative coordinates stay numbers while text starting with - is guarded (OWASP CSV injection)", () => {
-    const text = geometryToCsv([{ material: "-fill", points: [[-1.5, -2], [3, 0], [0, 4]] }], ["=bank"]);
-    expect(text.split("\r\n")).toEqual(["region,material,x,y", "'=bank,'-fill,-1.5,-2", "'=bank,'-fill,3,0", "'=bank,'-fill,0,4"]);
+    const text = geometryToCsv(
+      [
+        {
+          material: "-fill",
+          points: [
+            [-1.5, -2],
+            [3, 0],
+            [0, 4],
+          ],
+        },
+      ],
+      ["=bank"],
+    );
+    expect(text.split("\r\n")).toEqual([
+      "region,material,x,y",
+      "'=bank,'-fill,-1.5,-2",
+      "'=bank,'-fill,3,0",
+      "'=bank,'-fill,0,4",
+    ]);
     const back = parseGeometryCsv(text);
-    expect(back.ok && back.value).toEqual([{ material: "-fill", points: [[-1.5, -2], [3, 0], [0, 4]] }]);
+    expect(back.ok && back.value).toEqual([
+      {
+        material: "-fill",
+        points: [
+          [-1.5, -2],
+          [3, 0],
+          [0, 4],
+        ],
+      },
+    ]);
   });
 
   test("labels must be unique", () => {
-    const square = { material: "m", points: [[0, 0], [1, 0], [0, 1]] as [number, number][] };
+    const square = {
+      material: "m",
+      points: [
+        [0, 0],
+        [1, 0],
+        [0, 1],
+      ] as [number, number][],
+    };
     expect(() => geometryToCsv([square, square], ["A", "A"])).toThrow(/unique/);
   });
 });

@@ -4,7 +4,11 @@ import { csvTemplates, materialsToCsv, parseMaterialsCsv, parsePhreaticCsv, phre
 describe("parsePhreaticCsv (ENGINE-IO.md water.phreatic; ENGINE.md §1: x increasing)", () => {
   test("reads x,y rows into [x, y][] and accepts semicolons and exponents", () => {
     const r = parsePhreaticCsv("x;y\n0;18\n30.5;14\n6e1;1e1\n");
-    expect(r.ok && r.value).toEqual([[0, 18], [30.5, 14], [60, 10]]);
+    expect(r.ok && r.value).toEqual([
+      [0, 18],
+      [30.5, 14],
+      [60, 10],
+    ]);
   });
 
   test("x not increasing is reported at the offending row's x cell", () => {
@@ -12,18 +16,27 @@ describe("parsePhreaticCsv (ENGINE-IO.md water.phreatic; ENGINE.md §1: x increa
     expect(r.ok).toBe(false);
     if (r.ok) return;
     expect(r.problems).toEqual([
-      { row: 4, column: "x", cell: "A4", message: "x = 30 is not greater than x = 30 on row 3: list the points left to right without repeats." },
+      {
+        row: 4,
+        column: "x",
+        cell: "A4",
+        message: "x = 30 is not greater than x = 30 on row 3: list the points left to right without repeats.",
+      },
       { row: 5, column: "x", cell: "A5", message: expect.stringMatching(/x = 20 is not greater than x = 30 on row 3/) },
     ]);
   });
 
   test("one point, an empty file, text cells and a missing column are all reported", () => {
     const one = parsePhreaticCsv("x,y\n0,1\n");
-    expect(!one.ok && one.problems).toEqual([{ row: 2, column: null, message: "A phreatic line needs at least 2 points." }]);
+    expect(!one.ok && one.problems).toEqual([
+      { row: 2, column: null, message: "A phreatic line needs at least 2 points." },
+    ]);
     const empty = parsePhreaticCsv("");
     expect(!empty.ok && empty.problems[0]).toMatchObject({ row: 1, column: null });
     const text = parsePhreaticCsv("x,y\n0,high\n1,2\n");
-    expect(!text.ok && text.problems).toEqual([{ row: 2, column: "y", cell: "B2", message: "'high' is not a number." }]);
+    expect(!text.ok && text.problems).toEqual([
+      { row: 2, column: "y", cell: "B2", message: "'high' is not a number." },
+    ]);
     const noY = parsePhreaticCsv("x\n0\n1\n");
     expect(!noY.ok && noY.problems).toEqual([{ row: 1, column: "y", message: expect.stringMatching(/missing/) }]);
     const inf = parsePhreaticCsv("x,y\n0,Infinity\n1,NaN\n");
@@ -31,7 +44,12 @@ describe("parsePhreaticCsv (ENGINE-IO.md water.phreatic; ENGINE.md §1: x increa
   });
 
   test("phreaticToCsv writes negative elevations as plain numbers", () => {
-    expect(phreaticToCsv([[-5, -1.25], [10, 0]])).toBe("x,y\r\n-5,-1.25\r\n10,0");
+    expect(
+      phreaticToCsv([
+        [-5, -1.25],
+        [10, 0],
+      ]),
+    ).toBe("x,y\r\n-5,-1.25\r\n10,0");
     expect(parsePhreaticCsv(csvTemplates.phreatic).ok).toBe(true);
   });
 });
@@ -40,7 +58,12 @@ const HEADER = "id,name,model,gamma,gammaSat,c,phi,su,suGradient,suDatum";
 
 describe("parseMaterialsCsv (ENGINE-IO.md materials; bounds of ENGINE.md §1)", () => {
   test("reads each model with only the fields it uses, names kept aside", () => {
-    const text = [HEADER, "fill,Fill,mohr-coulomb,19.5,20.5,8,28,,,", "soft,Soft clay,undrained,17,,,,25,1.5,10", "rock,,impenetrable,,,,,,,"].join("\n");
+    const text = [
+      HEADER,
+      "fill,Fill,mohr-coulomb,19.5,20.5,8,28,,,",
+      "soft,Soft clay,undrained,17,,,,25,1.5,10",
+      "rock,,impenetrable,,,,,,,",
+    ].join("\n");
     const r = parseMaterialsCsv(text);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
@@ -60,24 +83,49 @@ describe("parseMaterialsCsv (ENGINE-IO.md materials; bounds of ENGINE.md §1)", 
   });
 
   test("a wrong model, a duplicate id and a missing id are reported at their cells", () => {
-    const text = [HEADER, "fill,,MC,19,,5,30,,,", "clay,,undrained,17,,,,20,,", "clay,,undrained,17,,,,30,,", ",,impenetrable,,,,,,,"].join("\n");
+    const text = [
+      HEADER,
+      "fill,,MC,19,,5,30,,,",
+      "clay,,undrained,17,,,,20,,",
+      "clay,,undrained,17,,,,30,,",
+      ",,impenetrable,,,,,,,",
+    ].join("\n");
     const r = parseMaterialsCsv(text);
     expect(!r.ok && r.problems).toEqual([
-      { row: 2, column: "model", cell: "C2", message: "Model 'MC' is not one of mohr-coulomb, undrained, impenetrable." },
-      { row: 4, column: "id", cell: "A4", message: "Id 'clay' is already used on row 3: each material needs its own id." },
+      {
+        row: 2,
+        column: "model",
+        cell: "C2",
+        message: "Model 'MC' is not one of mohr-coulomb, undrained, impenetrable.",
+      },
+      {
+        row: 4,
+        column: "id",
+        cell: "A4",
+        message: "Id 'clay' is already used on row 3: each material needs its own id.",
+      },
       { row: 5, column: "id", cell: "A5", message: "The material id is missing." },
     ]);
   });
 
   test("a value the model requires is reported when blank, when not a number, and when its column is absent", () => {
-    const r = parseMaterialsCsv([HEADER, "fill,,mohr-coulomb,19,,,30,,,", "clay,,undrained,17,,,,12,5,,", "bank,,mohr-coulomb,19,,5,thirty,,,"].join("\n"));
+    const r = parseMaterialsCsv(
+      [
+        HEADER,
+        "fill,,mohr-coulomb,19,,,30,,,",
+        "clay,,undrained,17,,,,12,5,,",
+        "bank,,mohr-coulomb,19,,5,thirty,,,",
+      ].join("\n"),
+    );
     expect(!r.ok && r.problems).toEqual([
       { row: 2, column: "c", cell: "F2", message: "A number is needed here." },
       { row: 3, column: "suDatum", cell: "J3", message: expect.stringMatching(/suDatum.*needed when suGradient/) },
       { row: 4, column: "phi", cell: "G4", message: "'thirty' is not a number." },
     ]);
     const noPhi = parseMaterialsCsv("id,model,gamma,c\nfill,mohr-coulomb,19,5\n");
-    expect(!noPhi.ok && noPhi.problems).toEqual([{ row: 2, column: "phi", message: expect.stringMatching(/needs 'phi'.*no such column/) }]);
+    expect(!noPhi.ok && noPhi.problems).toEqual([
+      { row: 2, column: "phi", message: expect.stringMatching(/needs 'phi'.*no such column/) },
+    ]);
   });
 
   test("values outside ENGINE.md §1's error bounds are problems; outside the usual range, warnings", () => {
@@ -91,7 +139,10 @@ describe("parseMaterialsCsv (ENGINE-IO.md materials; bounds of ENGINE.md §1)", 
   test("values a model ignores are warnings at their cells", () => {
     const r = parseMaterialsCsv([HEADER, "rock,,impenetrable,22,,,,,,", "clay,,undrained,17,,5,,20,,"].join("\n"));
     expect(r.ok).toBe(true);
-    expect(r.warnings.map((w) => [w.row, w.column])).toEqual([[2, "gamma"], [3, "c"]]);
+    expect(r.warnings.map((w) => [w.row, w.column])).toEqual([
+      [2, "gamma"],
+      [3, "c"],
+    ]);
   });
 
   test("an empty file and a header-only file are reported", () => {
@@ -102,7 +153,10 @@ describe("parseMaterialsCsv (ENGINE-IO.md materials; bounds of ENGINE.md §1)", 
   });
 
   test("materialsToCsv writes the full header, blank cells for absent fields, and guards text only", () => {
-    const text = materialsToCsv([{ id: "-weak", model: "undrained", gamma: 17, su: 20, suGradient: 1.2, suDatum: -3 }], { "-weak": "@layer" });
+    const text = materialsToCsv(
+      [{ id: "-weak", model: "undrained", gamma: 17, su: 20, suGradient: 1.2, suDatum: -3 }],
+      { "-weak": "@layer" },
+    );
     expect(text.split("\r\n")).toEqual([HEADER, "'-weak,'@layer,undrained,17,,,,20,1.2,-3"]);
     expect(parseMaterialsCsv(csvTemplates.materials).ok).toBe(true);
   });

@@ -47,7 +47,11 @@ describe("runGridSearch(doc) results", () => {
 describe("runGridSearch(doc, { onProgress })", () => {
   test("reports rising fractions ending at 1", () => {
     const seen: number[] = [];
-    runGridSearch(embankment, { onProgress: (f) => { seen.push(f); } });
+    runGridSearch(embankment, {
+      onProgress: (f) => {
+        seen.push(f);
+      },
+    });
     expect(seen.length).toBeGreaterThanOrEqual(40);
     for (let i = 1; i < seen.length; i++) expect(seen[i]).toBeGreaterThanOrEqual(seen[i - 1]);
     expect(seen[seen.length - 1]).toBe(1);
@@ -66,7 +70,14 @@ describe("runGridSearch(doc, { onProgress })", () => {
 describe("analysis defaults and inputs", () => {
   test("resolveAnalysis fills slices 50, direction auto, both methods, steady", () => {
     const a = resolveAnalysis(undefined);
-    expect(a).toMatchObject({ slices: 50, direction: "auto", methods: ["bishop", "fellenius"], case: "steady", ordinaryForm: "classical", lowestCount: 10 });
+    expect(a).toMatchObject({
+      slices: 50,
+      direction: "auto",
+      methods: ["bishop", "fellenius"],
+      case: "steady",
+      ordinaryForm: "classical",
+      lowestCount: 10,
+    });
   });
 
   test("a search without grid or radii returns an error list, not an exception", () => {

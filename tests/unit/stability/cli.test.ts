@@ -12,7 +12,12 @@ import { FIXTURES } from "./helpers";
 const ROOT = path.resolve(__dirname, "../../..");
 
 function run(args: string[], input?: string) {
-  const r = spawnSync("npx", ["tsx", "scripts/analyze.ts", ...args], { cwd: ROOT, input, encoding: "utf8", timeout: 60_000 });
+  const r = spawnSync("npx", ["tsx", "scripts/analyze.ts", ...args], {
+    cwd: ROOT,
+    input,
+    encoding: "utf8",
+    timeout: 60_000,
+  });
   return { status: r.status, json: JSON.parse(r.stdout) as Record<string, any>, stdout: r.stdout };
 }
 
@@ -40,7 +45,11 @@ describe("scripts/analyze.ts", () => {
     const r = run([path.join(FIXTURES, "bad-many-errors.json")]);
     expect(r.status).toBe(2);
     expect(r.json.ok).toBe(false);
-    expect(r.json.errors.map((e: { code: string }) => e.code).sort()).toEqual(["missing-unit-weight", "phi-out-of-range", "phreatic-not-spanning"]);
+    expect(r.json.errors.map((e: { code: string }) => e.code).sort()).toEqual([
+      "missing-unit-weight",
+      "phi-out-of-range",
+      "phreatic-not-spanning",
+    ]);
     expect(r.json.errors[0].path).toBe("materials[0].gamma");
   }, 60_000);
 

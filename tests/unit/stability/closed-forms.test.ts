@@ -51,9 +51,19 @@ describe("ordinaryFactor / bishopFactor on synthetic slices at α = β (ENGINE.m
     const n = 10;
     const z = 3;
     for (let i = 0; i < n; i++) {
-      S.b[i] = 1; S.sinA[i] = Math.sin(beta); S.cosA[i] = Math.cos(beta); S.len[i] = 1 / Math.cos(beta);
-      S.W[i] = 20 * z; S.V[i] = 20 * z; S.u[i] = uOverDepth * z; S.c[i] = 0; S.tanPhi[i] = tp;
-      S.Hn[i] = 0; S.Hs[i] = 0; S.xL[i] = i; S.xR[i] = i + 1;
+      S.b[i] = 1;
+      S.sinA[i] = Math.sin(beta);
+      S.cosA[i] = Math.cos(beta);
+      S.len[i] = 1 / Math.cos(beta);
+      S.W[i] = 20 * z;
+      S.V[i] = 20 * z;
+      S.u[i] = uOverDepth * z;
+      S.c[i] = 0;
+      S.tanPhi[i] = tp;
+      S.Hn[i] = 0;
+      S.Hs[i] = 0;
+      S.xL[i] = i;
+      S.xR[i] = i + 1;
     }
     S.n = n;
     let D = 0;
@@ -77,11 +87,20 @@ describe("ordinaryFactor / bishopFactor on synthetic slices at α = β (ENGINE.m
 describe("runGridSearch(long slope) approaches the infinite slope from above", () => {
   // ENGINE.md §10.1: on a long c' = 0 slope with minDepth = 0 the search must come within +1.5 %
   // of the infinite-slope value (tan β = 0.5, φ' = 30°, γ = γsat = 20).
-  const phreaticAtSurface: [number, number][] = [[0, 50], [100, 50], [200, 0], [300, 0]];
+  const phreaticAtSurface: [number, number][] = [
+    [0, 50],
+    [100, 50],
+    [200, 0],
+    [300, 0],
+  ];
   test.each([
     ["dry: tan φ'/tan β", undefined, 1.1547],
     ["ru = 0.25", { ru: 0.25 }, 0.7939],
-    ["seepage parallel to the slope (cos² on): (γ'/γsat)·tan φ'/tan β", { phreatic: phreaticAtSurface, cos2Correction: true }, 0.5883],
+    [
+      "seepage parallel to the slope (cos² on): (γ'/γsat)·tan φ'/tan β",
+      { phreatic: phreaticAtSurface, cos2Correction: true },
+      0.5883,
+    ],
     ["water table at the surface, vertical hydrostatic", { phreatic: phreaticAtSurface }, 0.4467],
   ])("%s", (_label, water, exact) => {
     const doc = clone(loadFixture("long-slope-dry.json"));

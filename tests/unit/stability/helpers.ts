@@ -2,7 +2,13 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { expect } from "vitest";
-import { analyzeCircle, runGridSearch, type CircleSuccess, type GridSearchSuccess, type SectionDocument } from "@/lib/stability";
+import {
+  analyzeCircle,
+  runGridSearch,
+  type CircleSuccess,
+  type GridSearchSuccess,
+  type SectionDocument,
+} from "@/lib/stability";
 
 export const FIXTURES = path.resolve(__dirname, "../../fixtures/sections");
 
@@ -43,7 +49,10 @@ export function expectRelative(actual: number | null | undefined, expected: numb
   expect(actual).toBeDefined();
   const a = actual as number;
   const err = Math.abs(a - expected) / Math.abs(expected);
-  if (!(err <= rel)) throw new Error(`expected ${a} within ${(rel * 100).toFixed(3)}% of ${expected} (off by ${(err * 100).toFixed(3)}%)`);
+  if (!(err <= rel))
+    throw new Error(
+      `expected ${a} within ${(rel * 100).toFixed(3)}% of ${expected} (off by ${(err * 100).toFixed(3)}%)`,
+    );
 }
 
 /** Replaces every x by sign·x + dx and y by y + dy in a section (regions, water, loads, grid). */
@@ -55,7 +64,12 @@ export function transform(doc: SectionDocument, sign: 1 | -1, dx: number, dy: nu
     const pts = d.water.phreatic.map(([x, y]) => [X(x), y + dy] as [number, number]);
     d.water.phreatic = sign === 1 ? pts : pts.reverse();
   }
-  if (d.loads?.surcharges) d.loads.surcharges = d.loads.surcharges.map((s) => ({ ...s, x1: Math.min(X(s.x1), X(s.x2)), x2: Math.max(X(s.x1), X(s.x2)) }));
+  if (d.loads?.surcharges)
+    d.loads.surcharges = d.loads.surcharges.map((s) => ({
+      ...s,
+      x1: Math.min(X(s.x1), X(s.x2)),
+      x2: Math.max(X(s.x1), X(s.x2)),
+    }));
   for (const m of d.materials) if (m.model !== "impenetrable" && m.suDatum !== undefined) m.suDatum += dy;
   const a = d.analysis;
   if (a?.grid) {
@@ -63,7 +77,9 @@ export function transform(doc: SectionDocument, sign: 1 | -1, dx: number, dy: nu
     const [x1, x2] = sign === 1 ? [X(g.x1), X(g.x2)] : [X(g.x2), X(g.x1)];
     a.grid = { ...g, x1, x2, y1: g.y1 + dy, y2: g.y2 + dy };
   }
-  if (a?.radii && "tangentY1" in a.radii) a.radii = { ...a.radii, tangentY1: a.radii.tangentY1 + dy, tangentY2: a.radii.tangentY2 + dy };
-  if (a?.direction === "left" || a?.direction === "right") a.direction = sign === 1 ? a.direction : a.direction === "left" ? "right" : "left";
+  if (a?.radii && "tangentY1" in a.radii)
+    a.radii = { ...a.radii, tangentY1: a.radii.tangentY1 + dy, tangentY2: a.radii.tangentY2 + dy };
+  if (a?.direction === "left" || a?.direction === "right")
+    a.direction = sign === 1 ? a.direction : a.direction === "left" ? "right" : "left";
   return d;
 }

@@ -11,7 +11,12 @@ const GW = 9.81;
 /** The demo embankment analysed on its upstream face (pool on the left at 20 m). */
 function upstream(): SectionDocument {
   const doc = clone(loadFixture("three-material-embankment.json"));
-  doc.analysis = { ...doc.analysis, direction: "left", grid: { x1: 15, y1: 25, x2: 45, y2: 45, nx: 16, ny: 11 }, radii: { tangentY1: 10, tangentY2: 2, n: 9 } };
+  doc.analysis = {
+    ...doc.analysis,
+    direction: "left",
+    grid: { x1: 15, y1: 25, x2: 45, y2: 45, nx: 16, ny: 11 },
+    radii: { tangentY1: 10, tangentY2: 2, n: 9 },
+  };
   return doc;
 }
 
@@ -64,7 +69,12 @@ describe("end of construction (undrained case)", () => {
   test("materials with su use it; the rest are free-draining with a warning", () => {
     const doc = upstream();
     doc.materials = doc.materials.map((m) => (m.id === "core" && m.model === "mohr-coulomb" ? { ...m, su: 40 } : m));
-    doc.analysis = { ...doc.analysis, case: "undrained", direction: "right", grid: { x1: 55, y1: 25, x2: 85, y2: 45, nx: 16, ny: 11 } };
+    doc.analysis = {
+      ...doc.analysis,
+      case: "undrained",
+      direction: "right",
+      grid: { x1: 55, y1: 25, x2: 85, y2: 45, nx: 16, ny: 11 },
+    };
     const r = circle(doc, 65, 30, 19);
     const warning = r.warnings.find((w) => w.code === "treated-as-free-draining");
     expect(warning?.message).toMatch(/'shell', 'foundation'/);

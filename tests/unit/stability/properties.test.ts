@@ -45,13 +45,18 @@ describe("factor of safety properties", () => {
 
   test("moving the whole section leaves FS unchanged", () => {
     fc.assert(
-      fc.property(embankmentCircle, fc.double({ min: -500, max: 500, noNaN: true }), fc.double({ min: -200, max: 200, noNaN: true }), ({ xc, yc, depth }, dx, dy) => {
-        const a = circle(embankment, xc, yc, yc - 10 + depth);
-        const b = circle(transform(embankment, 1, dx, dy), xc + dx, yc + dy, yc - 10 + depth);
-        expect(b.fs.bishop === null).toBe(a.fs.bishop === null);
-        if (a.fs.bishop !== null) expectRelative(b.fs.bishop, a.fs.bishop, 1e-8);
-        if (a.fs.fellenius !== null) expectRelative(b.fs.fellenius, a.fs.fellenius, 1e-8);
-      }),
+      fc.property(
+        embankmentCircle,
+        fc.double({ min: -500, max: 500, noNaN: true }),
+        fc.double({ min: -200, max: 200, noNaN: true }),
+        ({ xc, yc, depth }, dx, dy) => {
+          const a = circle(embankment, xc, yc, yc - 10 + depth);
+          const b = circle(transform(embankment, 1, dx, dy), xc + dx, yc + dy, yc - 10 + depth);
+          expect(b.fs.bishop === null).toBe(a.fs.bishop === null);
+          if (a.fs.bishop !== null) expectRelative(b.fs.bishop, a.fs.bishop, 1e-8);
+          if (a.fs.fellenius !== null) expectRelative(b.fs.fellenius, a.fs.fellenius, 1e-8);
+        },
+      ),
       { numRuns: 60 },
     );
   });
@@ -79,13 +84,26 @@ describe("factor of safety properties", () => {
 
   test("with φ = 0 everywhere Bishop equals the ordinary method", () => {
     fc.assert(
-      fc.property(embankmentCircle, fc.double({ min: 5, max: 200, noNaN: true }), fc.double({ min: 0, max: 5, noNaN: true }), ({ xc, yc, depth }, su, grad) => {
-        const d = clone(embankment);
-        d.materials = d.materials.map((m) => ({ id: m.id, model: "undrained" as const, gamma: 19, gammaSat: 20, su, suGradient: grad, suDatum: 22 }));
-        const r = circle(d, xc, yc, yc - 10 + depth);
-        if (r.fs.bishop === null) return;
-        expectRelative(r.fs.bishop, r.fs.fellenius!, 1e-12);
-      }),
+      fc.property(
+        embankmentCircle,
+        fc.double({ min: 5, max: 200, noNaN: true }),
+        fc.double({ min: 0, max: 5, noNaN: true }),
+        ({ xc, yc, depth }, su, grad) => {
+          const d = clone(embankment);
+          d.materials = d.materials.map((m) => ({
+            id: m.id,
+            model: "undrained" as const,
+            gamma: 19,
+            gammaSat: 20,
+            su,
+            suGradient: grad,
+            suDatum: 22,
+          }));
+          const r = circle(d, xc, yc, yc - 10 + depth);
+          if (r.fs.bishop === null) return;
+          expectRelative(r.fs.bishop, r.fs.fellenius!, 1e-12);
+        },
+      ),
       { numRuns: 60 },
     );
   });
@@ -133,15 +151,43 @@ const randomSection = fc
           : { id: "lower", model: "mohr-coulomb", gamma: 20, gammaSat: 21, c: 5, phi: 30 },
       ],
       regions: [
-        { material: "upper", points: [...top.slice().reverse(), [0, p.split], [100, p.split]].reverse() as [number, number][] },
-        { material: "lower", points: [[0, p.split], [100, p.split], [100, -20], [0, -20]] },
+        {
+          material: "upper",
+          points: [...top.slice().reverse(), [0, p.split], [100, p.split]].reverse() as [number, number][],
+        },
+        {
+          material: "lower",
+          points: [
+            [0, p.split],
+            [100, p.split],
+            [100, -20],
+            [0, -20],
+          ],
+        },
       ],
       loads: { kh: p.kh, surcharges: [{ x1: 10, x2: 30, q: p.q }] },
-      analysis: { grid: { x1: 10, y1: 35, x2: 90, y2: 60, nx: 5, ny: 4 }, radii: { tangentY1: -15, tangentY2: 8, n: 6 }, refine: true },
+      analysis: {
+        grid: { x1: 10, y1: 35, x2: 90, y2: 60, nx: 5, ny: 4 },
+        radii: { tangentY1: -15, tangentY2: 8, n: 6 },
+        refine: true,
+      },
     };
     if (p.water === "ru") doc.water = { ru: 0.3 };
-    if (p.water === "phreatic") doc.water = { phreatic: [[0, p.wl], [50, p.wl / 2], [100, 0]] };
-    if (p.water === "pond") doc.water = { phreatic: [[0, p.wl], [100, p.wl]] };
+    if (p.water === "phreatic")
+      doc.water = {
+        phreatic: [
+          [0, p.wl],
+          [50, p.wl / 2],
+          [100, 0],
+        ],
+      };
+    if (p.water === "pond")
+      doc.water = {
+        phreatic: [
+          [0, p.wl],
+          [100, p.wl],
+        ],
+      };
     return doc;
   });
 
@@ -157,17 +203,23 @@ describe("robustness", () => {
     let searched = 0;
     let validCircles = 0;
     fc.assert(
-      fc.property(randomSection, fc.double({ min: -10, max: 110, noNaN: true }), fc.double({ min: 0, max: 80, noNaN: true }), fc.double({ min: 0.1, max: 100, noNaN: true }), (doc, xc, yc, r) => {
-        const s = runGridSearch(doc);
-        expect(allFinite(s)).toBe(true);
-        if (!s.ok) return; // an invalid random section must at least report errors
-        searched++;
-        validCircles += s.circles.valid;
-        expect(s.circles.tried).toBe(s.circles.valid + Object.values(s.circles.rejected).reduce((a, b) => a + b, 0));
-        const one = analyzeCircle(doc, { xc, yc, r });
-        expect(allFinite(one)).toBe(true);
-        expect(JSON.stringify(one)).not.toMatch(/NaN|Infinity/);
-      }),
+      fc.property(
+        randomSection,
+        fc.double({ min: -10, max: 110, noNaN: true }),
+        fc.double({ min: 0, max: 80, noNaN: true }),
+        fc.double({ min: 0.1, max: 100, noNaN: true }),
+        (doc, xc, yc, r) => {
+          const s = runGridSearch(doc);
+          expect(allFinite(s)).toBe(true);
+          if (!s.ok) return; // an invalid random section must at least report errors
+          searched++;
+          validCircles += s.circles.valid;
+          expect(s.circles.tried).toBe(s.circles.valid + Object.values(s.circles.rejected).reduce((a, b) => a + b, 0));
+          const one = analyzeCircle(doc, { xc, yc, r });
+          expect(allFinite(one)).toBe(true);
+          expect(JSON.stringify(one)).not.toMatch(/NaN|Infinity/);
+        },
+      ),
       { numRuns: 60 },
     );
     // The generator must mostly produce valid sections with valid circles, or the test proves little;

@@ -43,9 +43,15 @@ describe("runGridSearch(section) against Taylor's φ > 0 chart", () => {
   // Source: Taylor (1948), φ > 0 toe circles (memory). REFERENCES.md: Bishop agrees within about
   // 2 % for β ≤ 45°. The fixtures set c' = N·γ·H, so the chart predicts F = 1.00.
   test.each([
-    ["taylor-phi5-beta45-deep.json"], ["taylor-phi10-beta45-deep.json"], ["taylor-phi15-beta45-deep.json"],
-    ["taylor-phi20-beta45-deep.json"], ["taylor-phi25-beta45-deep.json"], ["taylor-phi5-beta30-deep.json"],
-    ["taylor-phi10-beta30-deep.json"], ["taylor-phi15-beta30-deep.json"], ["taylor-phi20-beta30-deep.json"],
+    ["taylor-phi5-beta45-deep.json"],
+    ["taylor-phi10-beta45-deep.json"],
+    ["taylor-phi15-beta45-deep.json"],
+    ["taylor-phi20-beta45-deep.json"],
+    ["taylor-phi25-beta45-deep.json"],
+    ["taylor-phi5-beta30-deep.json"],
+    ["taylor-phi10-beta30-deep.json"],
+    ["taylor-phi15-beta30-deep.json"],
+    ["taylor-phi20-beta30-deep.json"],
   ])("%s gives Bishop FS 1.00 ± 2 %", (file) => {
     expectRelative(search(loadFixture(file)).results.bishop?.fs, 1.0, 0.02);
   });

@@ -31,7 +31,9 @@ function okResult(input: SeepageInput) {
 }
 
 function codes(input: SeepageInput): string[] {
-  return computeFilterSeepage(input).limits.filter((l) => l.severity === "error").map((l) => l.code);
+  return computeFilterSeepage(input)
+    .limits.filter((l) => l.severity === "error")
+    .map((l) => l.code);
 }
 
 describe("computeFilterSeepage(referenceDam): REFERENCES.md derived example", () => {
@@ -81,7 +83,9 @@ describe("computeFilterSeepage(referenceDam): REFERENCES.md derived example", ()
     expect(xJ).toBeCloseTo(9.5 + 0.3 * 9.5, 10);
     expect(yJ).toBeCloseTo(parabolaHeightAt(r.construction.parabola, xJ), 10);
     // Every point past J lies on the parabola (to 1e-6 m: √ near the vertex magnifies rounding).
-    line.filter(([x]) => x > xJ).forEach(([x, y]) => expect(y).toBeCloseTo(parabolaHeightAt(r.construction.parabola, x), 6));
+    line
+      .filter(([x]) => x > xJ)
+      .forEach(([x, y]) => expect(y).toBeCloseTo(parabolaHeightAt(r.construction.parabola, x), 6));
   });
 
   test("the entry leaves B about normal to the 0.5H:1V face, i.e. with slope −0.5 (ENGINE.md §6; hand calculation)", () => {
@@ -163,7 +167,11 @@ describe("computeFilterSeepage: ENGINE.md §10.8 and other checks", () => {
     fc.assert(
       fc.property(fc.double({ min: 0.05, max: 1, noNaN: true }), (ratio) => {
         const s = Math.sqrt(ratio);
-        const aniso = okResult({ ...engineCase, anisotropyRatio: ratio, downstreamFace: { crest: [36, 12], toe: [200, 0] } });
+        const aniso = okResult({
+          ...engineCase,
+          anisotropyRatio: ratio,
+          downstreamFace: { crest: [36, 12], toe: [200, 0] },
+        });
         const scaled = okResult({
           ...engineCase,
           upstreamFace: { toe: [0, 0], crest: [24 * s, 12] },
@@ -201,14 +209,37 @@ describe("computeFilterSeepage: limits of the method", () => {
   });
 
   test("a bermed (non-plane) upstream face is refused; a plane one given as three collinear points is accepted", () => {
-    expect(codes({ ...referenceDam, upstreamFace: { points: [[0, 0], [4, 8], [7, 8], [10, 20]] } })).toEqual(["E_SEEP_FACE_NOT_PLANE"]);
-    const r = okResult({ ...referenceDam, upstreamFace: { points: [[0, 0], [5, 10], [10, 20]] } });
+    expect(
+      codes({
+        ...referenceDam,
+        upstreamFace: {
+          points: [
+            [0, 0],
+            [4, 8],
+            [7, 8],
+            [10, 20],
+          ],
+        },
+      }),
+    ).toEqual(["E_SEEP_FACE_NOT_PLANE"]);
+    const r = okResult({
+      ...referenceDam,
+      upstreamFace: {
+        points: [
+          [0, 0],
+          [5, 10],
+          [10, 20],
+        ],
+      },
+    });
     expect(r.construction.y0).toBeCloseTo(okResult(referenceDam).construction.y0, 12);
   });
 
   test("a filter starting inside the entry zone, a face falling to the right, and bad numbers are refused", () => {
     expect(codes({ ...referenceDam, filterStartX: 12 })).toEqual(["E_SEEP_FILTER_UPSTREAM"]);
-    expect(codes({ ...referenceDam, upstreamFace: { toe: [10, 20], crest: [0, 0] } })).toContain("E_SEEP_FACE_DIRECTION");
+    expect(codes({ ...referenceDam, upstreamFace: { toe: [10, 20], crest: [0, 0] } })).toContain(
+      "E_SEEP_FACE_DIRECTION",
+    );
     expect(codes({ ...referenceDam, permeability: 0 })).toEqual(["E_SEEP_INPUT"]);
     expect(codes({ ...referenceDam, gammaSat: 9 })).toEqual(["E_SEEP_INPUT"]);
     expect(codes({ ...referenceDam, poolElevation: Number.NaN })).toEqual(["E_SEEP_INPUT"]);

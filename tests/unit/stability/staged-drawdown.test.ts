@@ -24,7 +24,11 @@ function withDrawdown(doc: SectionDocument, patch: Record<string, unknown>): Sec
 /** R envelopes far above the effective ones: the Kc = Kf (effective) envelope then governs stage 2. */
 function highR(doc: SectionDocument): SectionDocument {
   const d = clone(doc);
-  for (const m of d.materials) if (m.model === "mohr-coulomb" && m.cR !== undefined) { m.cR = 5000; m.phiR = 59; }
+  for (const m of d.materials)
+    if (m.model === "mohr-coulomb" && m.cR !== undefined) {
+      m.cR = 5000;
+      m.phiR = 59;
+    }
   return d;
 }
 
@@ -45,12 +49,46 @@ const sinR = kPsi / (1 + kPsi); // φR, cR that give ψ = 20°, d = 2000 psf (EN
 const cRExample = (2000 * 0.04788026 * (1 - sinR)) / (Math.sqrt(1 - sinR * sinR) * Math.cos(40 * RAD));
 const longSlope: SectionDocument = {
   version: 1,
-  materials: [{ id: "fill", model: "mohr-coulomb", gamma, gammaSat: gamma, c: 0, phi: 40, cR: cRExample, phiR: Math.asin(sinR) / RAD }],
-  regions: [{ material: "fill", points: [[0, 0], [30, 0], [210, 60], [260, 60], [260, -20], [0, -20]] }],
-  water: { gammaW: gw, phreatic: [[0, 90.48], [260, 90.48]] },
+  materials: [
+    {
+      id: "fill",
+      model: "mohr-coulomb",
+      gamma,
+      gammaSat: gamma,
+      c: 0,
+      phi: 40,
+      cR: cRExample,
+      phiR: Math.asin(sinR) / RAD,
+    },
+  ],
+  regions: [
+    {
+      material: "fill",
+      points: [
+        [0, 0],
+        [30, 0],
+        [210, 60],
+        [260, 60],
+        [260, -20],
+        [0, -20],
+      ],
+    },
+  ],
+  water: {
+    gammaW: gw,
+    phreatic: [
+      [0, 90.48],
+      [260, 90.48],
+    ],
+  },
   analysis: {
-    case: "drawdown", drawdown: { from: 90.48, to: -5, method: "staged" }, direction: "left", methods: ["bishop"],
-    grid: { x1: 80, y1: 70, x2: 170, y2: 130, nx: 10, ny: 7 }, radii: { r1: 30, r2: 150, n: 25 }, refine: true,
+    case: "drawdown",
+    drawdown: { from: 90.48, to: -5, method: "staged" },
+    direction: "left",
+    methods: ["bishop"],
+    grid: { x1: 80, y1: 70, x2: 170, y2: 130, nx: 10, ny: 7 },
+    radii: { r1: 30, r2: 150, n: 25 },
+    refine: true,
   },
 };
 
@@ -111,19 +149,24 @@ describe("staged drawdown properties (derived from the equations of ENGINE.md §
     const eff = withDrawdown(longSlope, { method: "effective" });
     let allDrained = 0;
     fc.assert(
-      fc.property(fc.double({ min: 60, max: 200, noNaN: true }), fc.double({ min: 0.5, max: 12, noNaN: true }), fc.double({ min: 25, max: 120, noNaN: true }), (x, depth, r) => {
-        // A circle through the face point at x, reaching `depth` below it, centre on the face normal.
-        const yg = (x - 30) / 3;
-        const n = [1 / Math.sqrt(10), 3 / Math.sqrt(10)];
-        const [xc, yc] = [x - n[0] * (r - depth), yg + n[1] * (r - depth)];
-        const s = circle(hi, xc, yc, r);
-        if (s.fs.bishop === null) return;
-        const undrained = s.slices.filter((row) => row.stage!.governing === "undrained");
-        for (const row of undrained) expectRelative(row.stage!.tau2, row.stage!.tauKf!, 1e-12);
-        if (undrained.length > 0) return;
-        allDrained++;
-        expectRelative(s.fs.bishop, circle(eff, xc, yc, r).fs.bishop!, 1e-6);
-      }),
+      fc.property(
+        fc.double({ min: 60, max: 200, noNaN: true }),
+        fc.double({ min: 0.5, max: 12, noNaN: true }),
+        fc.double({ min: 25, max: 120, noNaN: true }),
+        (x, depth, r) => {
+          // A circle through the face point at x, reaching `depth` below it, centre on the face normal.
+          const yg = (x - 30) / 3;
+          const n = [1 / Math.sqrt(10), 3 / Math.sqrt(10)];
+          const [xc, yc] = [x - n[0] * (r - depth), yg + n[1] * (r - depth)];
+          const s = circle(hi, xc, yc, r);
+          if (s.fs.bishop === null) return;
+          const undrained = s.slices.filter((row) => row.stage!.governing === "undrained");
+          for (const row of undrained) expectRelative(row.stage!.tau2, row.stage!.tauKf!, 1e-12);
+          if (undrained.length > 0) return;
+          allDrained++;
+          expectRelative(s.fs.bishop, circle(eff, xc, yc, r).fs.bishop!, 1e-6);
+        },
+      ),
       // A fixed seed keeps the share of all-drained circles, and so this check, reproducible.
       { numRuns: 80, seed: 20261202 },
     );
@@ -209,7 +252,11 @@ describe("staged drawdown results", () => {
 
   test("a slope that would fail before drawdown is flagged stage1-unstable", () => {
     const weak = clone(staged);
-    for (const m of weak.materials) if (m.model === "mohr-coulomb") { m.c *= 0.2; m.phi = 12; }
+    for (const m of weak.materials)
+      if (m.model === "mohr-coulomb") {
+        m.c *= 0.2;
+        m.phi = 12;
+      }
     const crit = result.results.bishop!.circle;
     const r = circle(weak, crit.xc, crit.yc, crit.r);
     expect(r.stages!.bishop!.fs1!).toBeLessThan(1);
@@ -226,7 +273,10 @@ describe("validateSection: staged drawdown inputs", () => {
   test("a low-permeability material without cR/phiR is an error that names it and says what to add", () => {
     const doc = clone(staged);
     const core = doc.materials[1];
-    if (core.model === "mohr-coulomb") { delete core.cR; delete core.phiR; }
+    if (core.model === "mohr-coulomb") {
+      delete core.cR;
+      delete core.phiR;
+    }
     const v = validateSection(doc);
     expect(v.ok).toBe(false);
     if (v.ok) return;
@@ -250,17 +300,26 @@ describe("validateSection: staged drawdown inputs", () => {
 
   test("the effective method stays the default and needs no R envelope (a version-1 file stays valid)", () => {
     const doc = withDrawdown(staged, { method: undefined });
-    for (const m of doc.materials) if (m.model === "mohr-coulomb") { delete m.cR; delete m.phiR; delete m.freeDraining; }
+    for (const m of doc.materials)
+      if (m.model === "mohr-coulomb") {
+        delete m.cR;
+        delete m.phiR;
+        delete m.freeDraining;
+      }
     expect(codes(doc)).toEqual([]);
     const r = analyzeCircle(doc, { xc: 27, yc: 31, r: 23 });
     expect(r.ok && r.stages).toBeUndefined();
   });
 });
 
-describe("scripts/analyze.ts with \"method\": \"staged\" (ENGINE-IO.md command line)", () => {
+describe('scripts/analyze.ts with "method": "staged" (ENGINE-IO.md command line)', () => {
   const ROOT = path.resolve(__dirname, "../../..");
   const run = (args: string[]) => {
-    const r = spawnSync("npx", ["tsx", "scripts/analyze.ts", ...args], { cwd: ROOT, encoding: "utf8", timeout: 60_000 });
+    const r = spawnSync("npx", ["tsx", "scripts/analyze.ts", ...args], {
+      cwd: ROOT,
+      encoding: "utf8",
+      timeout: 60_000,
+    });
     return { status: r.status, json: JSON.parse(r.stdout) as Record<string, any> };
   };
 

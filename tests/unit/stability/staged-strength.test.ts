@@ -106,7 +106,9 @@ describe("threeStageStrength(): properties of the interpolation (ENGINE.md §7(b
           const kf = failureRatio(sig, c, s, co);
           const kc = consolidationRatio(sig, tauKf, s, co);
           if (kf < 1e6) expect(Math.abs(kc - kf)).toBeLessThanOrEqual(1e-6 * kf);
-          expect(Math.abs(threeStageStrength(sig, tauKf, c, s, co, t, d, tanPsi) - tauKf)).toBeLessThanOrEqual(1e-6 * Math.max(1, tauKf));
+          expect(Math.abs(threeStageStrength(sig, tauKf, c, s, co, t, d, tanPsi) - tauKf)).toBeLessThanOrEqual(
+            1e-6 * Math.max(1, tauKf),
+          );
         }
       }),
       { numRuns: 300 },

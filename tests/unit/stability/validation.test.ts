@@ -58,23 +58,58 @@ describe("validateSection(doc)", () => {
   });
 
   test("reports shape errors from the schema with their paths", () => {
-    const errs = errorsOf({ version: 1, materials: [{ id: "a", model: "clay" }], regions: [{ material: "a", points: [[0, 0], [1, "x"]] }] });
-    expect(errs.find((e) => e.path === "materials[0].model")?.message).toMatch(/must be one of "mohr-coulomb", "undrained", "impenetrable"/);
+    const errs = errorsOf({
+      version: 1,
+      materials: [{ id: "a", model: "clay" }],
+      regions: [
+        {
+          material: "a",
+          points: [
+            [0, 0],
+            [1, "x"],
+          ],
+        },
+      ],
+    });
+    expect(errs.find((e) => e.path === "materials[0].model")?.message).toMatch(
+      /must be one of "mohr-coulomb", "undrained", "impenetrable"/,
+    );
     expect(errs.find((e) => e.path === "regions[0].points[1][1]")?.code).toBe("wrong-type");
   });
 
   test("reports a void below the ground (an overhang)", () => {
     const doc = clone(loadFixture("acads-1a.json"));
     doc.regions = [
-      { material: "soil", points: [[20, 20], [70, 20], [70, 25], [20, 25]] },
-      { material: "soil", points: [[20, 30], [70, 30], [70, 35], [20, 35]] },
+      {
+        material: "soil",
+        points: [
+          [20, 20],
+          [70, 20],
+          [70, 25],
+          [20, 25],
+        ],
+      },
+      {
+        material: "soil",
+        points: [
+          [20, 30],
+          [70, 30],
+          [70, 35],
+          [20, 35],
+        ],
+      },
     ];
     expect(errorsOf(doc).map((e) => e.code)).toContain("regions-void");
   });
 
   test("a drawdown case without a pool is an error", () => {
     const doc = clone(loadFixture("acads-1a.json"));
-    doc.water = { phreatic: [[20, 22], [70, 22]] };
+    doc.water = {
+      phreatic: [
+        [20, 22],
+        [70, 22],
+      ],
+    };
     doc.analysis = { ...doc.analysis, case: "drawdown", drawdown: { from: 30, to: 24 } };
     expect(errorsOf(doc).map((e) => e.code)).toContain("drawdown-no-pool");
   });

@@ -42,8 +42,20 @@ describe("classifyUpload(name, claimedType, head)", () => {
   });
 
   test.each([
-    ["a program renamed to .pdf", "report.pdf", "application/pdf", PROGRAM, /'report.pdf' is named as PDF but its content is not PDF/],
-    ["a program as itself", "tool.exe", "application/x-msdownload", PROGRAM, /'tool.exe' is of type application\/x-msdownload/],
+    [
+      "a program renamed to .pdf",
+      "report.pdf",
+      "application/pdf",
+      PROGRAM,
+      /'report.pdf' is named as PDF but its content is not PDF/,
+    ],
+    [
+      "a program as itself",
+      "tool.exe",
+      "application/x-msdownload",
+      PROGRAM,
+      /'tool.exe' is of type application\/x-msdownload/,
+    ],
     ["a program with no type", "tool.exe", "", PROGRAM, /'tool.exe' is a \.exe/],
     ["binary content named .csv", "data.csv", "text/csv", PROGRAM, /content is not CSV/],
     ["a PDF named .csv", "data.csv", "text/csv", PDF, /content is not CSV/],

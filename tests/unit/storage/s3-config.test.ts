@@ -14,7 +14,11 @@ describe("readS3Settings(env)", () => {
   });
 
   test("reads the variables given, including a false path-style switch", () => {
-    const s = readS3Settings({ S3_ENDPOINT: "http://127.0.0.1:9100", S3_BUCKET: "scarpline-test-1", S3_FORCE_PATH_STYLE: "false" });
+    const s = readS3Settings({
+      S3_ENDPOINT: "http://127.0.0.1:9100",
+      S3_BUCKET: "scarpline-test-1",
+      S3_FORCE_PATH_STYLE: "false",
+    });
     expect(s.S3_ENDPOINT).toBe("http://127.0.0.1:9100");
     expect(s.S3_BUCKET).toBe("scarpline-test-1");
     expect(s.S3_FORCE_PATH_STYLE).toBe(false);

@@ -5,7 +5,10 @@ import { formatBytes, MAX_UPLOAD_BYTES } from "@/lib/storage/upload-limits";
 
 const URL_ = "http://127.0.0.1/api/projects/1/documents";
 
-function formRequest(fields: Record<string, string>, file?: { bytes: Uint8Array; name: string; type: string }): Request {
+function formRequest(
+  fields: Record<string, string>,
+  file?: { bytes: Uint8Array; name: string; type: string },
+): Request {
   const form = new FormData();
   if (file) form.append("file", new Blob([file.bytes.slice()], { type: file.type }), file.name);
   for (const [k, v] of Object.entries(fields)) form.append(k, v);
@@ -13,7 +16,10 @@ function formRequest(fields: Record<string, string>, file?: { bytes: Uint8Array;
 }
 
 async function refusal(request: Request): Promise<ApiError> {
-  const err = await readUploadForm(request).then(() => null, (e: unknown) => e);
+  const err = await readUploadForm(request).then(
+    () => null,
+    (e: unknown) => e,
+  );
   expect(err).toBeInstanceOf(ApiError);
   return err as ApiError;
 }
@@ -22,7 +28,9 @@ const csv = { bytes: new TextEncoder().encode("a,b\n1,2\n"), name: "levels.csv",
 
 describe("readUploadForm(request)", () => {
   test("returns the file's bytes and the parsed fields", async () => {
-    const { file, fields } = await readUploadForm(formRequest({ kind: "survey", sectionId: "12", note: "  crest  " }, csv));
+    const { file, fields } = await readUploadForm(
+      formRequest({ kind: "survey", sectionId: "12", note: "  crest  " }, csv),
+    );
     expect(file).toEqual({ name: "levels.csv", claimedType: "text/csv", bytes: csv.bytes });
     expect(fields).toEqual({ kind: "survey", sectionId: 12, materialId: undefined, note: "crest" });
   });
@@ -34,7 +42,9 @@ describe("readUploadForm(request)", () => {
   });
 
   test("refuses a body that is not multipart", async () => {
-    const err = await refusal(new Request(URL_, { method: "POST", body: "{}", headers: { "content-type": "application/json" } }));
+    const err = await refusal(
+      new Request(URL_, { method: "POST", body: "{}", headers: { "content-type": "application/json" } }),
+    );
     expect([err.status, err.code]).toEqual([400, "invalid_upload"]);
   });
 
@@ -57,7 +67,12 @@ describe("readUploadForm(request)", () => {
   });
 
   test("refuses a file one byte over 20 MB with 413, naming it and the limit", async () => {
-    const err = await refusal(formRequest({ kind: "other" }, { bytes: new Uint8Array(MAX_UPLOAD_BYTES + 1), name: "scan.pdf", type: "application/pdf" }));
+    const err = await refusal(
+      formRequest(
+        { kind: "other" },
+        { bytes: new Uint8Array(MAX_UPLOAD_BYTES + 1), name: "scan.pdf", type: "application/pdf" },
+      ),
+    );
     expect(err.status).toBe(413);
     expect(err.message).toBe(`'scan.pdf' is ${formatBytes(MAX_UPLOAD_BYTES + 1)}; a document may be at most 20 MB.`);
   });

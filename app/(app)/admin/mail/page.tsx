@@ -17,7 +17,9 @@ export default async function MailLogPage() {
     return (
       <div className="panel p-6" data-testid="forbidden">
         <h1 className="text-lg font-semibold">Administrators only</h1>
-        <p className="mt-1 text-sm text-ink-soft">The mail log shows every notice the app sent; ask your administrator.</p>
+        <p className="mt-1 text-sm text-ink-soft">
+          The mail log shows every notice the app sent; ask your administrator.
+        </p>
       </div>
     );
   }
@@ -27,7 +29,8 @@ export default async function MailLogPage() {
     <>
       <PageTitle title="Mail log" kicker="Administration" />
       <p className="mb-4 text-sm text-ink-soft">
-        Mail caught by the local test mail server (scripts/smtp-fake.ts), newest first. Nothing here was delivered to anyone.
+        Mail caught by the local test mail server (scripts/smtp-fake.ts), newest first. Nothing here was delivered to
+        anyone.
       </p>
       <MailLog messages={messages} />
     </>

@@ -23,19 +23,44 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
 
   return (
     <>
-      <PageTitle title={project.name} kicker={<Link href="/projects" className="hover:text-ink">Projects</Link>}>
-        <Link href={`/projects/${project.id}/materials`} className="btn-quiet">Materials</Link>
-        <Link href={`/projects/${project.id}/design`} className="btn-quiet">Slope design</Link>
-        <Link href={`/projects/${project.id}/documents`} className="btn-quiet">Documents</Link>
-        <Link href={`/projects/${project.id}/settings`} className="btn-quiet">Required FS</Link>
-        {can(role, "members.manage") ? <Link href={`/projects/${project.id}/members`} className="btn-quiet">Members</Link> : null}
+      <PageTitle
+        title={project.name}
+        kicker={
+          <Link href="/projects" className="hover:text-ink">
+            Projects
+          </Link>
+        }
+      >
+        <Link href={`/projects/${project.id}/materials`} className="btn-quiet">
+          Materials
+        </Link>
+        <Link href={`/projects/${project.id}/design`} className="btn-quiet">
+          Slope design
+        </Link>
+        <Link href={`/projects/${project.id}/documents`} className="btn-quiet">
+          Documents
+        </Link>
+        <Link href={`/projects/${project.id}/settings`} className="btn-quiet">
+          Required FS
+        </Link>
+        {can(role, "members.manage") ? (
+          <Link href={`/projects/${project.id}/members`} className="btn-quiet">
+            Members
+          </Link>
+        ) : null}
       </PageTitle>
       <p className="-mt-3 mb-6 max-w-3xl text-sm text-ink-soft">{project.description}</p>
 
       <section className="mb-8" aria-labelledby="sections-heading">
         <div className="mb-3 flex items-center justify-between">
-          <h2 id="sections-heading" className="text-lg font-semibold">Sections</h2>
-          {canEditSections ? <Link href={`/projects/${project.id}/sections/new`} className="btn-primary">New section</Link> : null}
+          <h2 id="sections-heading" className="text-lg font-semibold">
+            Sections
+          </h2>
+          {canEditSections ? (
+            <Link href={`/projects/${project.id}/sections/new`} className="btn-primary">
+              New section
+            </Link>
+          ) : null}
         </div>
         {sections.length === 0 ? (
           <EmptyState title="No cross-sections yet">
@@ -50,8 +75,14 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
 
       <section aria-labelledby="runs-heading">
         <div className="mb-3 flex items-center justify-between">
-          <h2 id="runs-heading" className="text-lg font-semibold">Runs</h2>
-          {runs.length > 0 ? <Link href={`/projects/${project.id}/runs`} className="btn-quiet">All runs, filters and compare</Link> : null}
+          <h2 id="runs-heading" className="text-lg font-semibold">
+            Runs
+          </h2>
+          {runs.length > 0 ? (
+            <Link href={`/projects/${project.id}/runs`} className="btn-quiet">
+              All runs, filters and compare
+            </Link>
+          ) : null}
         </div>
         {runs.length === 0 ? (
           <EmptyState title="No analyses run yet">

@@ -11,7 +11,9 @@ export const POST = apiRoute(async (request: Request) => {
   const input = await parseJson(request, changePasswordSchema);
   const row = await fetchUserById(user.id);
   if (!row || !(await verifyPassword(input.currentPassword, row.password_hash))) {
-    throw new ApiError(400, "invalid_input", "Some fields are not valid.", { currentPassword: ["This is not your current password."] });
+    throw new ApiError(400, "invalid_input", "Some fields are not valid.", {
+      currentPassword: ["This is not your current password."],
+    });
   }
   await updatePasswordHash(user.id, await hashPassword(input.newPassword));
   return NextResponse.json({ ok: true });

@@ -7,6 +7,10 @@ type Ctx = { params: Promise<{ projectId: string }> };
 
 export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
   const user = await requireUser();
-  const { project, role } = await requireProjectAccess(user, parseId((await params).projectId, "The project"), "project.view");
+  const { project, role } = await requireProjectAccess(
+    user,
+    parseId((await params).projectId, "The project"),
+    "project.view",
+  );
   return NextResponse.json({ project, role });
 });

@@ -9,6 +9,9 @@ export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
   const kind = (await params).kind as CsvTemplateKind;
   if (!(kind in csvTemplates)) throw notFound("The template");
   return new Response(csvTemplates[kind] + "\r\n", {
-    headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="scarpline-${kind}-template.csv"` },
+    headers: {
+      "content-type": "text/csv; charset=utf-8",
+      "content-disposition": `attachment; filename="scarpline-${kind}-template.csv"`,
+    },
   });
 });

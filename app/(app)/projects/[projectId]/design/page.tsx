@@ -20,21 +20,41 @@ export default async function DesignStudiesPage({ params }: { params: Promise<{ 
   const canSweep = can(role, "design.sweep");
   return (
     <>
-      <PageTitle title="Slope design" kicker={<Link href={`/projects/${project.id}`} className="hover:text-ink">{project.name}</Link>} />
+      <PageTitle
+        title="Slope design"
+        kicker={
+          <Link href={`/projects/${project.id}`} className="hover:text-ink">
+            {project.name}
+          </Link>
+        }
+      />
       <p className="-mt-3 mb-6 max-w-3xl text-sm text-ink-soft">
-        Describe an embankment by its dimensions and let the app try face slopes: each study generates the section with its phreatic line, sweeps the H:V ratios of both faces under their load cases, and names the steepest pair that meets every required factor of safety.
+        Describe an embankment by its dimensions and let the app try face slopes: each study generates the section with
+        its phreatic line, sweeps the H:V ratios of both faces under their load cases, and names the steepest pair that
+        meets every required factor of safety.
       </p>
-      {canSweep ? <div className="mb-6"><NewStudyForm projectId={project.id} /></div> : null}
+      {canSweep ? (
+        <div className="mb-6">
+          <NewStudyForm projectId={project.id} />
+        </div>
+      ) : null}
       {studies.length === 0 ? (
         <EmptyState title="No design studies yet">
-          {canSweep ? "Start one above: it opens with the demo embankment's dimensions and this project's materials." : "Designers and engineers start design studies; they appear here."}
+          {canSweep
+            ? "Start one above: it opens with the demo embankment's dimensions and this project's materials."
+            : "Designers and engineers start design studies; they appear here."}
         </EmptyState>
       ) : (
         <ul className="panel divide-y divide-rule" data-testid="study-list">
           {studies.map((s) => (
             <li key={s.id} className="flex flex-wrap items-center justify-between gap-2 px-4 py-3">
-              <Link href={`/projects/${project.id}/design/${s.id}`} className="font-medium hover:underline">{s.name}</Link>
-              <span className="text-xs text-ink-soft">{s.hasSweep ? "swept" : "not swept yet"} · {s.createdByName} · updated {new Date(s.updatedAt).toLocaleDateString("en-GB")}</span>
+              <Link href={`/projects/${project.id}/design/${s.id}`} className="font-medium hover:underline">
+                {s.name}
+              </Link>
+              <span className="text-xs text-ink-soft">
+                {s.hasSweep ? "swept" : "not swept yet"} · {s.createdByName} · updated{" "}
+                {new Date(s.updatedAt).toLocaleDateString("en-GB")}
+              </span>
             </li>
           ))}
         </ul>

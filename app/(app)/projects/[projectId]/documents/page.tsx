@@ -20,9 +20,17 @@ export default async function ProjectDocumentsPage({ params }: { params: Promise
   const documents = await fetchDocumentsOfProject(project.id);
   return (
     <>
-      <PageTitle title="Documents" kicker={<Link href={`/projects/${project.id}`} className="hover:text-ink">{project.name}</Link>} />
+      <PageTitle
+        title="Documents"
+        kicker={
+          <Link href={`/projects/${project.id}`} className="hover:text-ink">
+            {project.name}
+          </Link>
+        }
+      />
       <p className="-mt-3 mb-6 max-w-3xl text-sm text-ink-soft">
-        Lab sheets, survey files and photographs behind this project&apos;s sections and materials. Files added on this page belong to the project as a whole.
+        Lab sheets, survey files and photographs behind this project&apos;s sections and materials. Files added on this
+        page belong to the project as a whole.
       </p>
       <DocumentsPanel
         projectId={project.id}

@@ -19,12 +19,21 @@ export default async function MaterialsPage({ params }: { params: Promise<{ proj
     <>
       <PageTitle
         title="Materials library"
-        kicker={<Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link>}
+        kicker={
+          <Link href={`/projects/${access.project.id}`} className="hover:text-ink">
+            {access.project.name}
+          </Link>
+        }
       />
       <p className="-mt-3 mb-6 max-w-3xl text-sm text-ink-soft">
-        The soils and rock of this project, with the unit weights and strengths the analyses use. Units: kN/m³, kPa, degrees.
+        The soils and rock of this project, with the unit weights and strengths the analyses use. Units: kN/m³, kPa,
+        degrees.
       </p>
-      <MaterialsLibrary projectId={access.project.id} canEdit={can(access.role, "material.edit")} initialMaterials={materials} />
+      <MaterialsLibrary
+        projectId={access.project.id}
+        canEdit={can(access.role, "material.edit")}
+        initialMaterials={materials}
+      />
     </>
   );
 }

@@ -23,17 +23,26 @@ export default async function MembersPage({ params }: { params: Promise<{ projec
       </div>
     );
   }
-  const [members, users] = await Promise.all([fetchProjectMembers(access.project.id), fetchUsersOfOrganisation(user.organisationId)]);
+  const [members, users] = await Promise.all([
+    fetchProjectMembers(access.project.id),
+    fetchUsersOfOrganisation(user.organisationId),
+  ]);
   return (
     <>
       <PageTitle
         title="Members"
-        kicker={<Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link>}
+        kicker={
+          <Link href={`/projects/${access.project.id}`} className="hover:text-ink">
+            {access.project.name}
+          </Link>
+        }
       />
       <MembersManager
         projectId={access.project.id}
         initialMembers={members}
-        candidates={users.filter((u) => u.role !== "admin" && u.active).map((u) => ({ id: u.id, name: u.name, email: u.email, role: u.role }))}
+        candidates={users
+          .filter((u) => u.role !== "admin" && u.active)
+          .map((u) => ({ id: u.id, name: u.name, email: u.email, role: u.role }))}
       />
     </>
   );

@@ -10,7 +10,13 @@ import { RunsTable } from "@/components/run-list/runs-table";
 
 export const metadata: Metadata = { title: "Runs" };
 
-export default async function RunsPage({ params, searchParams }: { params: Promise<{ projectId: string }>; searchParams: Promise<{ section?: string }> }) {
+export default async function RunsPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ projectId: string }>;
+  searchParams: Promise<{ section?: string }>;
+}) {
   const user = await requirePageUser();
   const access = await findProjectAccess(user, Number((await params).projectId));
   if (!access) notFound();
@@ -18,7 +24,14 @@ export default async function RunsPage({ params, searchParams }: { params: Promi
   const runs = (await fetchRunsOfProject(access.project.id)).filter((r) => !sectionId || r.sectionId === sectionId);
   return (
     <>
-      <PageTitle title={sectionId && runs[0] ? `Runs of ${runs[0].sectionName}` : "Runs"} kicker={<Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link>} />
+      <PageTitle
+        title={sectionId && runs[0] ? `Runs of ${runs[0].sectionName}` : "Runs"}
+        kicker={
+          <Link href={`/projects/${access.project.id}`} className="hover:text-ink">
+            {access.project.name}
+          </Link>
+        }
+      />
       {runs.length === 0 ? (
         <EmptyState title="No runs yet">Open a section and run a search for the critical circle of a face.</EmptyState>
       ) : (

@@ -17,9 +17,25 @@ export default async function SettingsPage({ params }: { params: Promise<{ proje
   if (!access) notFound();
   return (
     <>
-      <PageTitle title="Required factors of safety" kicker={<Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link>} />
-      <p className="mb-4 max-w-3xl rounded-md border-l-4 border-clay-500 bg-clay-50 px-4 py-2 text-sm text-ink-soft" data-testid="guidance-note">{GUIDANCE_NOTE} Every run keeps the value it was judged against.</p>
-      <RequiredFsTable projectId={access.project.id} initial={await fetchConditionSettings(access.project.id)} canEdit={can(access.role, "settings.edit")} />
+      <PageTitle
+        title="Required factors of safety"
+        kicker={
+          <Link href={`/projects/${access.project.id}`} className="hover:text-ink">
+            {access.project.name}
+          </Link>
+        }
+      />
+      <p
+        className="mb-4 max-w-3xl rounded-md border-l-4 border-clay-500 bg-clay-50 px-4 py-2 text-sm text-ink-soft"
+        data-testid="guidance-note"
+      >
+        {GUIDANCE_NOTE} Every run keeps the value it was judged against.
+      </p>
+      <RequiredFsTable
+        projectId={access.project.id}
+        initial={await fetchConditionSettings(access.project.id)}
+        canEdit={can(access.role, "settings.edit")}
+      />
     </>
   );
 }

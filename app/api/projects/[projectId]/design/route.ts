@@ -10,7 +10,11 @@ import { checkAgainstLibrary } from "./study-access";
 type Ctx = { params: Promise<{ projectId: string }> };
 
 const createStudySchema = z.object({
-  name: z.string({ error: "Name the study." }).trim().min(3, "At least 3 characters.").max(200, "At most 200 characters."),
+  name: z
+    .string({ error: "Name the study." })
+    .trim()
+    .min(3, "At least 3 characters.")
+    .max(200, "At most 200 characters."),
   /** Omitted: the demo embankment's dimensions with the project's own materials. */
   parameters: embankmentParamsSchema.optional(),
 });

@@ -9,7 +9,10 @@ import type { Material } from "@/lib/stability";
 import { fetchDesignStudy, type DesignStudy } from "@/db/queries/design-studies";
 
 /** Checks the session and the action on the project, then loads the study or answers 404. */
-export async function requireStudy(params: Promise<{ projectId: string; studyId: string }>, action: Action): Promise<{ study: DesignStudy; projectId: number; userId: number }> {
+export async function requireStudy(
+  params: Promise<{ projectId: string; studyId: string }>,
+  action: Action,
+): Promise<{ study: DesignStudy; projectId: number; userId: number }> {
   const user = await requireUser();
   const p = await params;
   const projectId = parseId(p.projectId, "The project");
@@ -25,7 +28,8 @@ export function checkAgainstLibrary(parameters: EmbankmentParams, materials: rea
   try {
     generateEmbankment(parameters, materials);
   } catch (err) {
-    if (err instanceof DesignInputError) throw new ApiError(400, "invalid_parameters", err.message, { [`parameters.${err.field}`]: [err.message] });
+    if (err instanceof DesignInputError)
+      throw new ApiError(400, "invalid_parameters", err.message, { [`parameters.${err.field}`]: [err.message] });
     throw err;
   }
 }

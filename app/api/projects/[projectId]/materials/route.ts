@@ -6,7 +6,12 @@ import { requireProjectAccess } from "@/lib/projects/access";
 import { createMaterialSchema } from "@/lib/materials/schemas";
 import { checkMaterialParameters } from "@/lib/materials/parameters";
 import { IMPENETRABLE_COLOR, pickMaterialColor } from "@/lib/materials/palette";
-import { DuplicateMaterialKeyError, createMaterial, fetchMaterial, fetchMaterialsOfProject } from "@/db/queries/materials";
+import {
+  DuplicateMaterialKeyError,
+  createMaterial,
+  fetchMaterial,
+  fetchMaterialsOfProject,
+} from "@/db/queries/materials";
 
 type Ctx = { params: Promise<{ projectId: string }> };
 
@@ -26,14 +31,33 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   const input = await parseJson(request, createMaterialSchema);
   const check = checkMaterialParameters(input.key, input.parameters);
   if (Object.keys(check.errors).length > 0) {
-    throw new ApiError(400, "invalid_material", "Some parameters are outside what the analysis accepts; nothing was saved.", check.errors);
+    throw new ApiError(
+      400,
+      "invalid_material",
+      "Some parameters are outside what the analysis accepts; nothing was saved.",
+      check.errors,
+    );
   }
   const existing = await fetchMaterialsOfProject(projectId);
-  if (existing.some((m) => m.key === input.key)) throw new ApiError(409, "conflict", `The library already has a material '${input.key}'.`, { key: ["Choose another key."] });
-  const color = input.color ?? (input.parameters.model === "impenetrable" ? IMPENETRABLE_COLOR : pickMaterialColor(existing.map((m) => m.color)));
+  if (existing.some((m) => m.key === input.key))
+    throw new ApiError(409, "conflict", `The library already has a material '${input.key}'.`, {
+      key: ["Choose another key."],
+    });
+  const color =
+    input.color ??
+    (input.parameters.model === "impenetrable" ? IMPENETRABLE_COLOR : pickMaterialColor(existing.map((m) => m.color)));
   try {
-    const id = await createMaterial(projectId, user.id, { key: input.key, name: input.name, color, notes: input.notes, parameters: input.parameters });
-    return NextResponse.json({ material: await fetchMaterial(projectId, id), warnings: check.warnings }, { status: 201 });
+    const id = await createMaterial(projectId, user.id, {
+      key: input.key,
+      name: input.name,
+      color,
+      notes: input.notes,
+      parameters: input.parameters,
+    });
+    return NextResponse.json(
+      { material: await fetchMaterial(projectId, id), warnings: check.warnings },
+      { status: 201 },
+    );
   } catch (err) {
     if (err instanceof DuplicateMaterialKeyError) throw conflict(err.message);
     throw err;

@@ -23,10 +23,14 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   const input = await parseJson(request, memberSchema);
   const member = await fetchUserById(input.userId);
   if (!member || member.organisation_id !== user.organisationId) {
-    throw new ApiError(400, "invalid_input", "Some fields are not valid.", { userId: ["No such user in your organisation."] });
+    throw new ApiError(400, "invalid_input", "Some fields are not valid.", {
+      userId: ["No such user in your organisation."],
+    });
   }
   if (member.role === "admin") {
-    throw new ApiError(400, "invalid_input", "Some fields are not valid.", { userId: ["Administrators see every project already."] });
+    throw new ApiError(400, "invalid_input", "Some fields are not valid.", {
+      userId: ["Administrators see every project already."],
+    });
   }
   await upsertProjectMember(projectId, input.userId, input.role);
   return NextResponse.json({ members: await fetchProjectMembers(projectId) }, { status: 201 });

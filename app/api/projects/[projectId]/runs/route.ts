@@ -43,7 +43,8 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
     });
   }
   const verified = verifyCriticalCircles(valid.section, input.result);
-  if (!verified.ok) throw new ApiError(422, "result_mismatch", verified.message, { [verified.field]: [verified.message] });
+  if (!verified.ok)
+    throw new ApiError(422, "result_mismatch", verified.message, { [verified.field]: [verified.message] });
 
   const fsOf = (m: "bishop" | "fellenius") => verified.circles.find((c) => c.method === m)?.fs ?? null;
   const condition = loadingCondition(input.setup.condition);
@@ -62,7 +63,9 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
     engineVersion: ENGINE_VERSION,
     document: valid.section,
     result: { ...input.result, setup: input.setup },
-    sliceTables: Object.fromEntries(verified.circles.map((c) => [c.method, { slices: c.slices, minMAlpha: c.minMAlpha }])),
+    sliceTables: Object.fromEntries(
+      verified.circles.map((c) => [c.method, { slices: c.slices, minMAlpha: c.minMAlpha }]),
+    ),
     userId: user.id,
     revisesRunId: input.revisesRunId ?? null,
   });

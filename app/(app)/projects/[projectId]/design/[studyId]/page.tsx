@@ -17,13 +17,26 @@ export default async function DesignStudyPage({ params }: { params: Promise<{ pr
   if (!access) notFound();
   const studyId = Number(p.studyId);
   if (!Number.isInteger(studyId) || studyId <= 0) notFound();
-  const [study, context] = await Promise.all([fetchDesignStudy(access.project.id, studyId), fetchDesignContext(access.project.id)]);
+  const [study, context] = await Promise.all([
+    fetchDesignStudy(access.project.id, studyId),
+    fetchDesignContext(access.project.id),
+  ]);
   if (!study) notFound();
   return (
     <>
       <PageTitle
         title={study.name}
-        kicker={<><Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link> / <Link href={`/projects/${access.project.id}/design`} className="hover:text-ink">Slope design</Link></>}
+        kicker={
+          <>
+            <Link href={`/projects/${access.project.id}`} className="hover:text-ink">
+              {access.project.name}
+            </Link>{" "}
+            /{" "}
+            <Link href={`/projects/${access.project.id}/design`} className="hover:text-ink">
+              Slope design
+            </Link>
+          </>
+        }
       />
       <DesignStudio
         projectId={access.project.id}

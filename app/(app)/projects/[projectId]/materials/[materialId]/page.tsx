@@ -20,7 +20,10 @@ export default async function MaterialPage({ params }: { params: Promise<{ proje
   if (!access) notFound();
   const materialId = Number(p.materialId);
   if (!Number.isInteger(materialId) || materialId <= 0) notFound();
-  const [material, labTests] = await Promise.all([fetchMaterial(access.project.id, materialId), fetchLabTestSetsOfMaterial(access.project.id, materialId)]);
+  const [material, labTests] = await Promise.all([
+    fetchMaterial(access.project.id, materialId),
+    fetchLabTestSetsOfMaterial(access.project.id, materialId),
+  ]);
   if (!material) notFound();
   return (
     <>
@@ -28,19 +31,37 @@ export default async function MaterialPage({ params }: { params: Promise<{ proje
         title={material.name}
         kicker={
           <>
-            <Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link>
+            <Link href={`/projects/${access.project.id}`} className="hover:text-ink">
+              {access.project.name}
+            </Link>
             {" / "}
-            <Link href={`/projects/${access.project.id}/materials`} className="hover:text-ink">Materials</Link>
+            <Link href={`/projects/${access.project.id}/materials`} className="hover:text-ink">
+              Materials
+            </Link>
           </>
         }
       >
         <span className="font-mono text-sm text-ink-faint">{material.key}</span>
       </PageTitle>
-      <div className="mb-6"><Caution compact /></div>
-      <MaterialWorkbench projectId={access.project.id} canEdit={can(access.role, "material.edit")} initial={{ material, labTests }} />
+      <div className="mb-6">
+        <Caution compact />
+      </div>
+      <MaterialWorkbench
+        projectId={access.project.id}
+        canEdit={can(access.role, "material.edit")}
+        initial={{ material, labTests }}
+      />
       <section className="mt-8" aria-labelledby="material-documents">
-        <h2 id="material-documents" className="mb-2 text-lg font-semibold">Lab sheets and other sources</h2>
-        <DocumentsPanel projectId={access.project.id} materialId={material.id} canUpload={can(access.role, "document.upload")} currentUserId={user.id} isAdmin={user.role === "admin"} />
+        <h2 id="material-documents" className="mb-2 text-lg font-semibold">
+          Lab sheets and other sources
+        </h2>
+        <DocumentsPanel
+          projectId={access.project.id}
+          materialId={material.id}
+          canUpload={can(access.role, "document.upload")}
+          currentUserId={user.id}
+          isAdmin={user.role === "admin"}
+        />
       </section>
     </>
   );

@@ -23,7 +23,20 @@ export default async function RunPage({ params }: { params: Promise<{ projectId:
   const review = await loadReviewState(run, { userId: user.id, role: access.role });
   return (
     <>
-      <PageTitle title={run.title} kicker={<><Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link> / <Link href={`/projects/${access.project.id}/runs`} className="hover:text-ink">Runs</Link></>} />
+      <PageTitle
+        title={run.title}
+        kicker={
+          <>
+            <Link href={`/projects/${access.project.id}`} className="hover:text-ink">
+              {access.project.name}
+            </Link>{" "}
+            /{" "}
+            <Link href={`/projects/${access.project.id}/runs`} className="hover:text-ink">
+              Runs
+            </Link>
+          </>
+        }
+      />
       <div className="space-y-4">
         <ReviewWorkspace run={run} review={review} mode="run" canRevise={can(access.role, "run.create")} />
         <RevisionChain projectId={run.projectId} chain={review.chain} currentId={run.id} />

@@ -25,9 +25,22 @@ export default async function SectionPage({ params }: { params: Promise<{ projec
   const base = `/projects/${access.project.id}`;
   return (
     <>
-      <PageTitle title={section.name} kicker={<Link href={base} className="hover:text-ink">{access.project.name}</Link>}>
-        <Link href={`${base}/runs?section=${section.id}`} className="btn-quiet">Runs of this section</Link>
-        {can(access.role, "run.create") ? <Link href={`${base}/sections/${section.id}/runs/new`} className="btn-primary">New run</Link> : null}
+      <PageTitle
+        title={section.name}
+        kicker={
+          <Link href={base} className="hover:text-ink">
+            {access.project.name}
+          </Link>
+        }
+      >
+        <Link href={`${base}/runs?section=${section.id}`} className="btn-quiet">
+          Runs of this section
+        </Link>
+        {can(access.role, "run.create") ? (
+          <Link href={`${base}/sections/${section.id}/runs/new`} className="btn-primary">
+            New run
+          </Link>
+        ) : null}
       </PageTitle>
       {section.description ? <p className="-mt-3 mb-4 max-w-3xl text-sm text-ink-soft">{section.description}</p> : null}
       <SectionWorkspace
@@ -38,8 +51,16 @@ export default async function SectionPage({ params }: { params: Promise<{ projec
         canEdit={can(access.role, "section.edit")}
       />
       <section className="mt-8" aria-labelledby="section-documents">
-        <h2 id="section-documents" className="mb-2 text-lg font-semibold">Survey files, drawings and photographs</h2>
-        <DocumentsPanel projectId={access.project.id} sectionId={section.id} canUpload={can(access.role, "document.upload")} currentUserId={user.id} isAdmin={user.role === "admin"} />
+        <h2 id="section-documents" className="mb-2 text-lg font-semibold">
+          Survey files, drawings and photographs
+        </h2>
+        <DocumentsPanel
+          projectId={access.project.id}
+          sectionId={section.id}
+          canUpload={can(access.role, "document.upload")}
+          currentUserId={user.id}
+          isAdmin={user.role === "admin"}
+        />
       </section>
     </>
   );

@@ -13,10 +13,22 @@ export default async function NewSectionPage({ params }: { params: Promise<{ pro
   const user = await requirePageUser();
   const access = await findProjectAccess(user, Number((await params).projectId));
   if (!access) notFound();
-  if (!can(access.role, "section.edit")) return <div className="panel p-6" data-testid="forbidden">Engineers and designers add sections.</div>;
+  if (!can(access.role, "section.edit"))
+    return (
+      <div className="panel p-6" data-testid="forbidden">
+        Engineers and designers add sections.
+      </div>
+    );
   return (
     <>
-      <PageTitle title="New section" kicker={<Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link>} />
+      <PageTitle
+        title="New section"
+        kicker={
+          <Link href={`/projects/${access.project.id}`} className="hover:text-ink">
+            {access.project.name}
+          </Link>
+        }
+      />
       <NewSectionForm projectId={access.project.id} />
     </>
   );

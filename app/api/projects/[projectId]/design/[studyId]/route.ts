@@ -3,7 +3,12 @@ import { z } from "zod";
 import { apiRoute, parseJson } from "@/lib/api/handler";
 import { notFound } from "@/lib/api/errors";
 import { embankmentParamsSchema } from "@/lib/design";
-import { deleteDesignStudy, fetchDesignContext, fetchDesignStudy, saveDesignParameters } from "@/db/queries/design-studies";
+import {
+  deleteDesignStudy,
+  fetchDesignContext,
+  fetchDesignStudy,
+  saveDesignParameters,
+} from "@/db/queries/design-studies";
 import { checkAgainstLibrary, requireStudy } from "../study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };
@@ -23,7 +28,8 @@ export const PATCH = apiRoute(async (request: Request, { params }: Ctx) => {
   const { study, projectId } = await requireStudy(params, "design.sweep");
   const input = await parseJson(request, updateStudySchema);
   checkAgainstLibrary(input.parameters, (await fetchDesignContext(projectId)).materials);
-  if (!(await saveDesignParameters({ projectId, studyId: study.id, name: input.name, parameters: input.parameters }))) throw notFound("The design study");
+  if (!(await saveDesignParameters({ projectId, studyId: study.id, name: input.name, parameters: input.parameters })))
+    throw notFound("The design study");
   return NextResponse.json({ study: await fetchDesignStudy(projectId, study.id) });
 });
 

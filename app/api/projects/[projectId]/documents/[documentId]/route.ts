@@ -25,9 +25,18 @@ export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
   const { document } = await loadDocument(params);
   const stored = await getObjectStream(document.storageKey).catch((err: unknown) => {
     console.error(`[documents] reading ${document.storageKey} failed`, err);
-    throw new ApiError(503, "storage_unavailable", `The document store did not answer; '${document.originalName}' cannot be downloaded now.`);
+    throw new ApiError(
+      503,
+      "storage_unavailable",
+      `The document store did not answer; '${document.originalName}' cannot be downloaded now.`,
+    );
   });
-  if (!stored) throw new ApiError(410, "file_missing", `The stored file of '${document.originalName}' is missing; upload it again.`);
+  if (!stored)
+    throw new ApiError(
+      410,
+      "file_missing",
+      `The stored file of '${document.originalName}' is missing; upload it again.`,
+    );
   return new Response(stored.body, {
     headers: {
       "content-type": document.contentType,

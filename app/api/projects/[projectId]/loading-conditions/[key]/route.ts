@@ -22,6 +22,12 @@ export const PUT = apiRoute(async (request: Request, { params }: Ctx) => {
   await requireProjectAccess(user, projectId, "settings.edit");
   if (!(LOADING_CONDITION_KEYS as string[]).includes(p.key)) throw notFound("The loading condition");
   const input = await parseJson(request, bodySchema);
-  await saveConditionSetting({ projectId, key: p.key as LoadingConditionKey, requiredFs: input.requiredFs, reason: input.reason, userId: user.id });
+  await saveConditionSetting({
+    projectId,
+    key: p.key as LoadingConditionKey,
+    requiredFs: input.requiredFs,
+    reason: input.reason,
+    userId: user.id,
+  });
   return NextResponse.json({ conditions: await fetchConditionSettings(projectId) });
 });

@@ -44,7 +44,12 @@ export const PUT = apiRoute(async (request: Request, { params }: Ctx) => {
   const sourceErrors = checkSources(materialId, input.parameters, given, new Map(sets.map((s) => [s.id, s])));
   const errors = { ...check.errors, ...sourceErrors };
   if (Object.keys(errors).length > 0) {
-    throw new ApiError(400, "invalid_material", "Some parameters or their sources are not valid; nothing was saved.", errors);
+    throw new ApiError(
+      400,
+      "invalid_material",
+      "Some parameters or their sources are not valid; nothing was saved.",
+      errors,
+    );
   }
   await updateMaterial({
     materialId,

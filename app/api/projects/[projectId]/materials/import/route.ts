@@ -21,12 +21,23 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   await requireProjectAccess(user, projectId, "material.edit");
   const { csv } = await parseJson(request, importMaterialsSchema);
   const existing = await fetchMaterialsOfProject(projectId);
-  const check = checkMaterialsImport(csv, existing.map((m) => m.key));
+  const check = checkMaterialsImport(
+    csv,
+    existing.map((m) => m.key),
+  );
   if (!check.ok) {
     const n = check.problems.length;
-    throw new ApiError(400, "invalid_csv", `The file has ${n} problem${n === 1 ? "" : "s"}; nothing was saved.`, problemsToFields(csvProblemsToTable(check.problems)));
+    throw new ApiError(
+      400,
+      "invalid_csv",
+      `The file has ${n} problem${n === 1 ? "" : "s"}; nothing was saved.`,
+      problemsToFields(csvProblemsToTable(check.problems)),
+    );
   }
-  const colors = pickMaterialColors(existing.map((m) => m.color), check.materials.length);
+  const colors = pickMaterialColors(
+    existing.map((m) => m.color),
+    check.materials.length,
+  );
   try {
     await createMaterials(
       projectId,
@@ -40,7 +51,8 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
       })),
     );
   } catch (err) {
-    if (err instanceof DuplicateMaterialKeyError) throw conflict(`${err.message} Someone added it meanwhile; nothing was saved.`);
+    if (err instanceof DuplicateMaterialKeyError)
+      throw conflict(`${err.message} Someone added it meanwhile; nothing was saved.`);
     throw err;
   }
   const keys = new Set(check.materials.map((m) => m.key));

@@ -39,7 +39,8 @@ export const DELETE = apiRoute(async (_request: Request, { params }: Ctx) => {
   const verdict = checkDraftChange(actor, facts, "delete");
   if (!verdict.ok) throw refusalError(verdict);
   const revisions = await fetchRevisionIds(run.id);
-  if (revisions.length > 0) throw conflict(`Run ${revisions.join(", ")} revises this draft, so it is kept as part of that history.`);
+  if (revisions.length > 0)
+    throw conflict(`Run ${revisions.join(", ")} revises this draft, so it is kept as part of that history.`);
   try {
     if (!(await deleteDraftRun(run.id))) throw conflict("The run left draft meanwhile and can no longer be deleted.");
   } catch (err) {

@@ -13,6 +13,9 @@ export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
   const { project } = await requireProjectAccess(user, projectId, "project.view");
   const csv = runsToCsv(await fetchRunsForExport(projectId), project.name);
   return new Response(csv, {
-    headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="runs-project-${projectId}.csv"` },
+    headers: {
+      "content-type": "text/csv; charset=utf-8",
+      "content-disposition": `attachment; filename="runs-project-${projectId}.csv"`,
+    },
   });
 });

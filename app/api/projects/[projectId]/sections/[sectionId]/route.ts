@@ -38,7 +38,15 @@ export const PUT = apiRoute(async (request: Request, { params }: Ctx) => {
   const previous = await fetchSectionVersion(sectionId, section.currentVersion);
   const summary = input.summary || summarizeChange(previous!.document as SectionDocument, document);
   try {
-    const version = await saveSectionVersion({ sectionId, baseVersion: input.baseVersion, document, summary, userId: user.id, name: input.name, description: input.description });
+    const version = await saveSectionVersion({
+      sectionId,
+      baseVersion: input.baseVersion,
+      document,
+      summary,
+      userId: user.id,
+      name: input.name,
+      description: input.description,
+    });
     return NextResponse.json({ section: { id: sectionId, version }, summary, warnings });
   } catch (err) {
     if (err instanceof StaleVersionError) throw conflict(`${err.message} Reload it, then apply your change again.`);

@@ -27,10 +27,27 @@ export default async function RunReviewPage({ params }: { params: Promise<{ proj
     <>
       <PageTitle
         title={`Review: ${run.title}`}
-        kicker={<><Link href={base} className="hover:text-ink">{access.project.name}</Link> / <Link href={`${base}/runs`} className="hover:text-ink">Runs</Link> / <Link href={`${base}/runs/${run.id}`} className="hover:text-ink">Run {run.id}</Link></>}
+        kicker={
+          <>
+            <Link href={base} className="hover:text-ink">
+              {access.project.name}
+            </Link>{" "}
+            /{" "}
+            <Link href={`${base}/runs`} className="hover:text-ink">
+              Runs
+            </Link>{" "}
+            /{" "}
+            <Link href={`${base}/runs/${run.id}`} className="hover:text-ink">
+              Run {run.id}
+            </Link>
+          </>
+        }
       />
       {!can(access.role, "run.review") ? (
-        <p className="mb-4 rounded-md border border-rule bg-paper-raised px-4 py-2 text-sm text-ink-soft" data-testid="review-read-only">
+        <p
+          className="mb-4 rounded-md border border-rule bg-paper-raised px-4 py-2 text-sm text-ink-soft"
+          data-testid="review-read-only"
+        >
           Reviewers fill in the checklist and decide; you can read the review and comment.
         </p>
       ) : null}

@@ -41,7 +41,15 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
           isCancelled: () => closed || request.signal.aborted,
         });
         if (out.cancelled) return;
-        const sweep: StoredSweep = { settings, points: out.points, ranOn: "server", elapsedMs: out.elapsedMs, workers: out.workers, engineVersion: ENGINE_VERSION, finishedAt: new Date().toISOString() };
+        const sweep: StoredSweep = {
+          settings,
+          points: out.points,
+          ranOn: "server",
+          elapsedMs: out.elapsedMs,
+          workers: out.workers,
+          engineVersion: ENGINE_VERSION,
+          finishedAt: new Date().toISOString(),
+        };
         await saveDesignSweep({ projectId, studyId: study.id, sweep });
         send({ type: "done", sweep, mode: out.mode });
       } catch (err) {
@@ -56,5 +64,7 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
       closed = true;
     },
   });
-  return new Response(stream, { headers: { "content-type": "application/x-ndjson; charset=utf-8", "cache-control": "no-store" } });
+  return new Response(stream, {
+    headers: { "content-type": "application/x-ndjson; charset=utf-8", "cache-control": "no-store" },
+  });
 });

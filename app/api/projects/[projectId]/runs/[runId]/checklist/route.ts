@@ -20,7 +20,10 @@ export const PUT = apiRoute(async (request: Request, { params }: Ctx) => {
   if (!verdict.ok) throw refusalError(verdict);
   const input = await parseJson(request, checklistSchema);
   const summary = input.items
-    .map((i) => `${STATE_WORDS[i.state]} “${CHECKLIST_ITEMS.find((c) => c.key === i.key)!.label}”${i.note ? ` (${i.note})` : ""}`)
+    .map(
+      (i) =>
+        `${STATE_WORDS[i.state]} “${CHECKLIST_ITEMS.find((c) => c.key === i.key)!.label}”${i.note ? ` (${i.note})` : ""}`,
+    )
     .join("; ");
   try {
     await saveChecklist(run.id, user.id, input.items, `Checklist: ${summary}.`);

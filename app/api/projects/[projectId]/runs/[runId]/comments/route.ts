@@ -25,16 +25,31 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   if (input.slice) {
     const tables = run.sliceTables as Partial<Record<string, { slices: unknown[] }>>;
     const count = tables[input.slice.method]?.slices.length ?? 0;
-    if (count === 0) throw new ApiError(400, "invalid_input", "This run has no slices for that method.", { "slice.method": ["This run has no slices for that method."] });
+    if (count === 0)
+      throw new ApiError(400, "invalid_input", "This run has no slices for that method.", {
+        "slice.method": ["This run has no slices for that method."],
+      });
     if (input.slice.number > count) {
-      throw new ApiError(400, "invalid_input", `The critical circle has ${count} slices; slice ${input.slice.number} does not exist.`, { "slice.number": [`Use a slice from 1 to ${count}.`] });
+      throw new ApiError(
+        400,
+        "invalid_input",
+        `The critical circle has ${count} slices; slice ${input.slice.number} does not exist.`,
+        { "slice.number": [`Use a slice from 1 to ${count}.`] },
+      );
     }
   }
   try {
-    const id = await addRunComment({ runId: run.id, authorId: user.id, body: input.body, pin: input.pin, slice: input.slice });
+    const id = await addRunComment({
+      runId: run.id,
+      authorId: user.id,
+      body: input.body,
+      pin: input.pin,
+      slice: input.slice,
+    });
     return NextResponse.json({ comment: { id } }, { status: 201 });
   } catch (err) {
-    if (err instanceof RunStateError || isFrozenRunError(err)) throw conflict(err instanceof Error ? err.message : "The run is frozen.");
+    if (err instanceof RunStateError || isFrozenRunError(err))
+      throw conflict(err instanceof Error ? err.message : "The run is frozen.");
     throw err;
   }
 });

@@ -13,6 +13,10 @@ export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
   const pdf = await buildRunReport(await gatherReport(run, access.project.name, user.name));
   const name = `run-${run.id}-calculation-report.pdf`;
   return new Response(Buffer.from(pdf), {
-    headers: { "content-type": "application/pdf", "content-disposition": `inline; filename="${name}"`, "cache-control": "no-store" },
+    headers: {
+      "content-type": "application/pdf",
+      "content-disposition": `inline; filename="${name}"`,
+      "cache-control": "no-store",
+    },
   });
 });

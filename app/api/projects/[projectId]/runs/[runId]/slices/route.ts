@@ -14,10 +14,17 @@ export const GET = apiRoute(async (request: Request, { params }: Ctx) => {
   const { run } = await requireRunAccess(user, await params);
   const method = new URL(request.url).searchParams.get("method") ?? "bishop";
   if (method !== "bishop" && method !== "fellenius") {
-    throw new ApiError(400, "invalid_input", "method must be bishop or fellenius.", { method: ["Use bishop or fellenius."] });
+    throw new ApiError(400, "invalid_input", "method must be bishop or fellenius.", {
+      method: ["Use bishop or fellenius."],
+    });
   }
   const table = (run.sliceTables as Partial<Record<string, { slices: SliceRow[] }>>)[method];
-  if (!table) throw new ApiError(404, "not_found", `This run has no ${method === "bishop" ? "Bishop" : "ordinary-method"} slices.`);
+  if (!table)
+    throw new ApiError(
+      404,
+      "not_found",
+      `This run has no ${method === "bishop" ? "Bishop" : "ordinary-method"} slices.`,
+    );
   const result = run.result as { results: Partial<Record<string, { circle: Circle } | null>>; ordinaryForm?: string };
   const csv = sliceTableToCsv(table.slices, {
     method,
@@ -32,6 +39,9 @@ export const GET = apiRoute(async (request: Request, { params }: Ctx) => {
     runAt: run.createdAt,
   });
   return new Response(csv, {
-    headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${sliceCsvFileName(run.title, method)}"` },
+    headers: {
+      "content-type": "text/csv; charset=utf-8",
+      "content-disposition": `attachment; filename="${sliceCsvFileName(run.title, method)}"`,
+    },
   });
 });

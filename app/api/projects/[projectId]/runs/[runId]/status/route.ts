@@ -26,7 +26,10 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   if (!verdict.ok) throw refusalError(verdict);
 
   const { from, to } = TRANSITIONS[input.action];
-  const materialSources = input.action === "submit" ? await collectMaterialSources(run.projectId, run.document as SectionDocument) : undefined;
+  const materialSources =
+    input.action === "submit"
+      ? await collectMaterialSources(run.projectId, run.document as SectionDocument)
+      : undefined;
   try {
     await applyTransition({ runId: run.id, actorId: user.id, from, to, note: input.note, materialSources });
   } catch (err) {
@@ -34,6 +37,13 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
     if (isFrozenRunError(err)) throw conflict("The run's record is frozen and cannot make that move.");
     throw err;
   }
-  await sendTransitionNotices({ action: input.action, run, projectName: access.project.name, actor: { id: user.id, name: user.name }, note: input.note, at: new Date().toISOString() });
+  await sendTransitionNotices({
+    action: input.action,
+    run,
+    projectName: access.project.name,
+    actor: { id: user.id, name: user.name },
+    note: input.note,
+    at: new Date().toISOString(),
+  });
   return NextResponse.json({ run: { id: run.id, status: to } });
 });

@@ -14,7 +14,13 @@ import { fetchRun } from "@/db/queries/runs";
 
 export const metadata: Metadata = { title: "New run" };
 
-export default async function NewRunPage({ params, searchParams }: { params: Promise<{ projectId: string; sectionId: string }>; searchParams: Promise<{ from?: string }> }) {
+export default async function NewRunPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ projectId: string; sectionId: string }>;
+  searchParams: Promise<{ from?: string }>;
+}) {
   const user = await requirePageUser();
   const p = await params;
   const access = await findProjectAccess(user, Number(p.projectId));
@@ -22,22 +28,32 @@ export default async function NewRunPage({ params, searchParams }: { params: Pro
   const section = await fetchSection(access.project.id, Number(p.sectionId));
   if (!section) notFound();
   if (!can(access.role, "run.create")) {
-    return <div className="panel p-6" data-testid="forbidden">Engineers and designers run analyses; your role on this project is {access.role}.</div>;
+    return (
+      <div className="panel p-6" data-testid="forbidden">
+        Engineers and designers run analyses; your role on this project is {access.role}.
+      </div>
+    );
   }
   const version = await fetchSectionVersion(section.id, section.currentVersion);
   const requiredFs = await fetchRequiredFsMap(access.project.id);
   // "Revise as a new run" starts from the earlier run's settings, on the section as it is now.
   const from = Number((await searchParams).from) || null;
   const earlier = from ? await fetchRun(access.project.id, from) : null;
-  const initial = earlier && earlier.sectionId === section.id ? (earlier.result as { setup?: RunSetup }).setup : undefined;
+  const initial =
+    earlier && earlier.sectionId === section.id ? (earlier.result as { setup?: RunSetup }).setup : undefined;
   return (
     <>
       <PageTitle
         title={initial ? `New run revising “${earlier!.title}”` : "New run"}
         kicker={
           <>
-            <Link href={`/projects/${access.project.id}`} className="hover:text-ink">{access.project.name}</Link> /{" "}
-            <Link href={`/projects/${access.project.id}/sections/${section.id}`} className="hover:text-ink">{section.name} v{section.currentVersion}</Link>
+            <Link href={`/projects/${access.project.id}`} className="hover:text-ink">
+              {access.project.name}
+            </Link>{" "}
+            /{" "}
+            <Link href={`/projects/${access.project.id}/sections/${section.id}`} className="hover:text-ink">
+              {section.name} v{section.currentVersion}
+            </Link>
           </>
         }
       />

@@ -11,7 +11,11 @@ import type { SectionDocument } from "@/lib/stability";
 
 export const metadata: Metadata = { title: "Section version" };
 
-export default async function SectionVersionPage({ params }: { params: Promise<{ projectId: string; sectionId: string; version: string }> }) {
+export default async function SectionVersionPage({
+  params,
+}: {
+  params: Promise<{ projectId: string; sectionId: string; version: string }>;
+}) {
   const user = await requirePageUser();
   const p = await params;
   const access = await findProjectAccess(user, Number(p.projectId));
@@ -25,10 +29,15 @@ export default async function SectionVersionPage({ params }: { params: Promise<{
     <>
       <PageTitle
         title={`${section.name}, version ${version.version}`}
-        kicker={<Link href={`/projects/${access.project.id}/sections/${section.id}`} className="hover:text-ink">Back to the current version (v{section.currentVersion})</Link>}
+        kicker={
+          <Link href={`/projects/${access.project.id}/sections/${section.id}`} className="hover:text-ink">
+            Back to the current version (v{section.currentVersion})
+          </Link>
+        }
       />
       <p className="-mt-3 mb-4 text-sm text-ink-soft" data-testid="version-meta">
-        Read-only. Saved by {version.createdByName} on {new Date(version.createdAt).toLocaleString("en-GB")}: {version.summary}
+        Read-only. Saved by {version.createdByName} on {new Date(version.createdAt).toLocaleString("en-GB")}:{" "}
+        {version.summary}
       </p>
       <ReadOnlySection document={doc} materials={materialPalette(doc.materials)} />
     </>
