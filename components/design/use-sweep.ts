@@ -10,6 +10,7 @@ import {
 } from "@/lib/design";
 import { ENGINE_VERSION, type Material } from "@/lib/stability";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
+import type { PreviewCheck } from "@/lib/run-records/compare-preview";
 import { startWorkerPool, type WorkerPool } from "./worker-pool";
 
 export type SweepWhere = "browser" | "server";
@@ -75,7 +76,16 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
       onFinished(sweep);
       let keptMessage: string | null = null;
       try {
-        await fetchJson(`/api/projects/${projectId}/design/${studyId}/results`, { method: "PUT", json: sweep });
+        // The server runs the sweep again and keeps its own points; show those when they differ.
+        const kept = await fetchJson<{ sweep: StoredSweep; preview: PreviewCheck }>(
+          `/api/projects/${projectId}/design/${studyId}/results`,
+          { method: "PUT", json: sweep },
+        );
+        if (kept.preview.status === "differed") {
+          onFinished(kept.sweep);
+          const n = kept.preview.differences.length + kept.preview.more;
+          keptMessage = `The server's own run of the sweep differed in ${n} value${n === 1 ? "" : "s"}; its values are kept and shown.`;
+        }
       } catch (err) {
         keptMessage =
           err instanceof ApiClientError ? `Not kept: ${err.message}` : "Not kept: the server could not be reached.";

@@ -1,16 +1,18 @@
 /// <reference lib="webworker" />
 /**
- * Runs the engine's grid search off the main thread so the page stays responsive.
- * Cancelling terminates the worker; the search itself is synchronous and cannot be interrupted.
+ * Runs the search off the main thread so the page stays responsive. It calls the same routine
+ * the server runs when the run is kept (lib/run-records/search-record.ts), so the preview and the
+ * kept run agree exactly. Cancelling terminates the worker; the search itself is synchronous.
  */
-import { analyzeCircle, runGridSearch, type CircleSuccess, type SectionDocument } from "@/lib/stability";
+import type { CircleSuccess, GridSearchResult, SectionDocument } from "@/lib/stability";
+import { searchRecord } from "@/lib/run-records/search-record";
 
 export type WorkerRequest = { doc: SectionDocument };
 export type WorkerMessage =
   | { type: "progress"; fraction: number }
   | {
       type: "done";
-      result: ReturnType<typeof runGridSearch>;
+      result: GridSearchResult;
       critical: Partial<Record<"bishop" | "fellenius", CircleSuccess>>;
       elapsedMs: number;
     }
@@ -23,7 +25,7 @@ ctx.onmessage = (event: MessageEvent<WorkerRequest>) => {
   const t0 = performance.now();
   try {
     let last = 0;
-    const result = runGridSearch(event.data.doc, {
+    const record = searchRecord(event.data.doc, {
       onProgress: (fraction) => {
         // Throttle messages: a fine grid reports thousands of rows.
         if (fraction - last >= 0.01 || fraction >= 1) {
@@ -32,16 +34,9 @@ ctx.onmessage = (event: MessageEvent<WorkerRequest>) => {
         }
       },
     });
-    const critical: Partial<Record<"bishop" | "fellenius", CircleSuccess>> = {};
-    if (result.ok) {
-      for (const method of result.methods) {
-        const best = result.results[method];
-        if (!best) continue;
-        const one = analyzeCircle(event.data.doc, best.circle);
-        if (one.ok) critical[method] = one;
-      }
-    }
-    post({ type: "done", result, critical, elapsedMs: performance.now() - t0 });
+    const elapsedMs = performance.now() - t0;
+    if (record.ok) post({ type: "done", result: record.result, critical: record.critical, elapsedMs });
+    else post({ type: "done", result: record, critical: {}, elapsedMs });
   } catch (err) {
     post({ type: "error", message: err instanceof Error ? err.message : String(err) });
   }

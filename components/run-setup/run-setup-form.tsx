@@ -119,7 +119,8 @@ export function RunSetupForm({
           {running ? "Searching…" : "Run the search"}
         </button>
         <p className="text-xs text-ink-faint">
-          The search runs in your browser; the server re-checks the critical circles when you save.
+          The search runs in your browser as a preview; when you keep the run, the server runs the same search again and
+          keeps its own result.
         </p>
       </form>
       <div className="min-w-0 space-y-3">

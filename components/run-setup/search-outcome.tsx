@@ -62,7 +62,11 @@ export function SearchOutcome({ projectId, section, setup, outcome, revisesRunId
       <p className="text-xs text-ink-faint">
         {result.circles.tried.toLocaleString("en-GB")} circles in {(outcome.elapsedMs / 1000).toFixed(2)} s
       </p>
-      <FsSummary result={result} requiredFs={setup.requiredFs} critical={critical} />
+      <FsSummary
+        result={result}
+        requiredFs={setup.requiredFs}
+        minMAlpha={{ bishop: critical.bishop?.minMAlpha, fellenius: critical.fellenius?.minMAlpha }}
+      />
       <div className="panel flex flex-wrap items-end gap-3 p-3">
         <div className="min-w-64 flex-1">
           <label className="label" htmlFor="run-title">

@@ -126,7 +126,11 @@ export function RunView({
           height={480}
         />
       </PinnedCanvas>
-      <FsSummary result={result} requiredFs={run.requiredFs} />
+      <FsSummary
+        result={result}
+        requiredFs={run.requiredFs}
+        minMAlpha={{ bishop: tables.bishop?.minMAlpha, fellenius: tables.fellenius?.minMAlpha }}
+      />
       {tables[method] ? (
         <SliceTable
           rows={tables[method]!.slices}

@@ -1,39 +1,24 @@
-import type { CircleFs, CircleSuccess, EngineWarning, GridSearchSuccess } from "@/lib/stability";
+import type { CircleFs, GridSearchSuccess } from "@/lib/stability";
 import { Caution } from "@/components/ui/caution";
 import { formatFs, verdictOf } from "@/lib/runs/verdict";
 import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "@/lib/runs/warning-text";
 import { VerdictMark } from "./verdict-mark";
 
 export interface FsSummaryProps {
+  /** The search, its warnings already gathered into one list (lib/run-records/search-record.ts keptWarnings). */
   result: GridSearchSuccess;
   /** The FS the run must reach; without it no pass or fail is shown. */
   requiredFs?: number;
-  /** One-circle reports of each method's critical circle: add min mα and slice-level warnings. */
-  critical?: Partial<Record<"bishop" | "fellenius", CircleSuccess>>;
+  /** Least mα on each method's critical circle, from its slice-by-slice report. */
+  minMAlpha?: Partial<Record<"bishop" | "fellenius", number | null>>;
 }
 
 const m2 = (v: number) => v.toFixed(2);
 const pt = (p: readonly [number, number]) => `(${m2(p[0])}, ${m2(p[1])})`;
-// Slice-level warnings the grid search itself does not report.
-const SLICE_LEVEL = new Set(["negative-normal", "several-slip-masses"]);
-
-function collectWarnings(result: GridSearchSuccess, critical: FsSummaryProps["critical"]): EngineWarning[] {
-  const seen = new Set(result.warnings.map((w) => w.message));
-  const extra: EngineWarning[] = [];
-  for (const one of Object.values(critical ?? {})) {
-    for (const w of one?.warnings ?? []) {
-      if (SLICE_LEVEL.has(w.code) && !seen.has(w.message)) {
-        seen.add(w.message);
-        extra.push(w);
-      }
-    }
-  }
-  return [...result.warnings, ...extra];
-}
 
 /** FS per method with pass or fail, the critical circles, the search counts, warnings and the caution. */
-export function FsSummary({ result, requiredFs, critical }: FsSummaryProps) {
-  const warnings = describeWarnings(collectWarnings(result, critical));
+export function FsSummary({ result, requiredFs, minMAlpha }: FsSummaryProps) {
+  const warnings = describeWarnings(result.warnings);
   const rejected = rejectionList(result.circles.rejected);
   const rejectedTotal = rejected.reduce((s, r) => s + r.count, 0);
   return (
@@ -77,7 +62,7 @@ export function FsSummary({ result, requiredFs, critical }: FsSummaryProps) {
 
       <div className="grid gap-3 sm:grid-cols-2">
         {result.methods.map((m) => (
-          <CircleFacts key={m} method={m} c={result.results[m] ?? null} minMAlpha={critical?.[m]?.minMAlpha} />
+          <CircleFacts key={m} method={m} c={result.results[m] ?? null} minMAlpha={minMAlpha?.[m]} />
         ))}
       </div>
 

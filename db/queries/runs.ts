@@ -1,5 +1,8 @@
 import type { Knex } from "knex";
 import { getDb } from "../index";
+import { createSection } from "./sections";
+
+type NewSection = Parameters<typeof createSection>[0];
 
 export interface RunSummary {
   id: number;
@@ -133,8 +136,29 @@ export interface NewRun {
   revisesRunId?: number | null;
 }
 
+/** The run a new one claims to revise is not a run of the same project. */
+export class RevisedRunNotFoundError extends Error {
+  constructor(readonly runId: number) {
+    super(`run ${runId} is not a run of this project`);
+  }
+}
+
+/** The project a run belongs to, or null when there is no such run. */
+export async function fetchRunProjectId(runId: number, db: Knex = getDb()): Promise<number | null> {
+  const row = await db("runs").where({ id: runId }).first("project_id");
+  return row ? (row.project_id as number) : null;
+}
+
+/**
+ * Inserts a run. The run it revises is locked and must belong to the same project, so it can
+ * neither be deleted meanwhile nor come from another project (RevisedRunNotFoundError).
+ */
 export async function createRun(run: NewRun, db: Knex = getDb()): Promise<number> {
   return db.transaction(async (trx) => {
+    if (run.revisesRunId) {
+      const revised = await trx("runs").where({ id: run.revisesRunId }).forShare().first("project_id");
+      if (!revised || revised.project_id !== run.projectId) throw new RevisedRunNotFoundError(run.revisesRunId);
+    }
     const [id] = await trx("runs").insert({
       project_id: run.projectId,
       section_id: run.sectionId,
@@ -155,6 +179,20 @@ export async function createRun(run: NewRun, db: Knex = getDb()): Promise<number
       created_by: run.userId,
     });
     return id;
+  });
+}
+
+/** A new section (version 1) and a run on that version, both or neither. */
+export async function createSectionWithRun(
+  section: Omit<NewSection, "projectId" | "userId">,
+  run: Omit<NewRun, "sectionId" | "sectionVersionId">,
+  db: Knex = getDb(),
+): Promise<{ sectionId: number; runId: number }> {
+  return db.transaction(async (trx) => {
+    const sectionId = await createSection({ ...section, projectId: run.projectId, userId: run.userId }, trx);
+    const version = await trx("section_versions").where({ section_id: sectionId, version: 1 }).first("id");
+    const runId = await createRun({ ...run, sectionId, sectionVersionId: version.id as number }, trx);
+    return { sectionId, runId };
   });
 }
 

@@ -6,6 +6,7 @@ import { z } from "zod";
 import { gridSchema, radiiSchema, type Analysis, type SectionDocument } from "../stability";
 import { directionForFace } from "./face";
 import { LOADING_CONDITION_KEYS, loadingCondition, type LoadingConditionKey } from "./required-fs";
+import { MAX_SEARCH_CIRCLES, searchCircleCount, tooManyCirclesMessage } from "../run-records/limits";
 
 export const runSetupSchema = z
   .object({
@@ -52,6 +53,12 @@ export const runSetupSchema = z
     const n = v.radii.n;
     if (!Number.isInteger(n) || n < 1 || n > 100)
       ctx.addIssue({ code: "custom", path: ["radii", "n"], message: "Use 1 to 100 radii per centre." });
+    else if (searchCircleCount(v.grid, v.radii) > MAX_SEARCH_CIRCLES)
+      ctx.addIssue({
+        code: "custom",
+        path: ["radii", "n"],
+        message: tooManyCirclesMessage(searchCircleCount(v.grid, v.radii)),
+      });
   });
 
 export type RunSetup = z.infer<typeof runSetupSchema>;

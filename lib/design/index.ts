@@ -11,6 +11,6 @@ export * from "./pick-ratio";
 export * from "./sweep-runner";
 export * from "./sweep-results";
 export * from "./compaction-spec";
-export * from "./verify-sweep";
 export * from "./form-values";
 export * from "./case-styles";
+export * from "./compare-sweep";

@@ -1,7 +1,7 @@
 /**
- * The shape of a grid-search result as the browser sends it for saving. Only the critical
- * circles are trusted after the server has re-run them; the rest (map, lowest circles, counts)
- * is display data, checked here for shape and size so nothing malformed is stored.
+ * The shape of a grid-search result as the browser sends it with a save: a preview that the
+ * server compares with its own search (compare-preview.ts) and never stores. Checked for shape
+ * and size so a malformed or huge body is refused.
  */
 import { z } from "zod";
 

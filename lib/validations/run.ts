@@ -7,6 +7,7 @@ export const createRunSchema = z.object({
   sectionVersion: z.number().int().positive(),
   title: z.string().trim().min(3, "At least 3 characters.").max(200, "At most 200 characters."),
   setup: runSetupSchema,
-  result: searchResultSchema,
+  /** The browser's own search: a preview the server compares with its search, never stored. */
+  result: searchResultSchema.optional(),
   revisesRunId: z.number().int().positive().optional(),
 });

@@ -19,7 +19,9 @@ const text = (html: string) =>
 describe("FsSummary", () => {
   const { result, bishop } = smallRun();
   const fsB = result.results.bishop!.fs;
-  const html = renderToStaticMarkup(<FsSummary result={result} requiredFs={fsB + 0.01} critical={{ bishop }} />);
+  const html = renderToStaticMarkup(
+    <FsSummary result={result} requiredFs={fsB + 0.01} minMAlpha={{ bishop: bishop.minMAlpha }} />,
+  );
 
   it("prints each method's FS to 3 decimals with a worded, shaped verdict and the caution", () => {
     expect(text(html)).toContain(fsB.toFixed(3));

@@ -10,6 +10,8 @@ import { PageTitle } from "@/components/ui/page-title";
 import { ReviewWorkspace } from "@/components/review/review-workspace";
 import { RevisionChain } from "@/components/review/revision-chain";
 import { AuditTrail } from "@/components/review/audit-trail";
+import { PreviewNotice } from "@/components/run-view/preview-notice";
+import { readPreviewCheck } from "@/lib/run-records/compare-preview";
 
 export const metadata: Metadata = { title: "Run" };
 
@@ -38,6 +40,7 @@ export default async function RunPage({ params }: { params: Promise<{ projectId:
         }
       />
       <div className="space-y-4">
+        <PreviewNotice check={readPreviewCheck(run.result)} />
         <ReviewWorkspace run={run} review={review} mode="run" canRevise={can(access.role, "run.create")} />
         <RevisionChain projectId={run.projectId} chain={review.chain} currentId={run.id} />
         <AuditTrail events={review.events} />

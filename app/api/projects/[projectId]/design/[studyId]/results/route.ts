@@ -1,51 +1,30 @@
 import { NextResponse } from "next/server";
 import { apiRoute, parseJson } from "@/lib/api/handler";
 import { ApiError } from "@/lib/api/errors";
-import { jobId, storedSweepSchema, verifySweepPoint } from "@/lib/design";
-import { ENGINE_VERSION } from "@/lib/stability";
+import { storedSweepSchema } from "@/lib/design";
+import { recomputeBrowserSweep } from "@/lib/design/keep-sweep";
 import { fetchDesignContext, saveDesignSweep } from "@/db/queries/design-studies";
 import { requireStudy } from "../../study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };
 
 /**
- * Keeps a sweep computed in the browser. Every point must belong to this study's embankment, and
- * every FS is re-run here on the section the server generates: a mismatch stores nothing.
+ * Keeps a sweep computed in the browser as a preview: the server runs the same sweep itself and
+ * keeps its own points; `preview` in the answer says where the browser's differed.
  */
 export const PUT = apiRoute(async (request: Request, { params }: Ctx) => {
   const { study, projectId } = await requireStudy(params, "design.sweep");
-  const sweep = await parseJson(request, storedSweepSchema);
-  if (sweep.engineVersion !== ENGINE_VERSION) {
-    throw new ApiError(
-      422,
-      "result_mismatch",
-      `The sweep came from engine ${sweep.engineVersion}; this server runs ${ENGINE_VERSION}. Run the sweep again.`,
-    );
-  }
-  const p = study.parameters;
-  for (const [i, point] of sweep.points.entries()) {
-    const otherFaceKept =
-      point.phase === "recheck" ||
-      (point.face === "upstream"
-        ? point.downstreamRatio === p.downstreamSlope
-        : point.upstreamRatio === p.upstreamSlope);
-    if (point.id !== jobId(point.caseKey, point.upstreamRatio, point.downstreamRatio, point.phase) || !otherFaceKept) {
-      throw new ApiError(
-        422,
-        "result_mismatch",
-        `Point ${i + 1} (${point.id}) does not belong to this study's embankment: reload the page and run the sweep again.`,
-        { [`points.${i}`]: ["Not a point of this study."] },
-      );
-    }
-  }
-  const { materials } = await fetchDesignContext(projectId);
-  for (const [i, point] of sweep.points.entries()) {
-    const problem = verifySweepPoint(p, materials, point, sweep.settings);
-    if (problem)
-      throw new ApiError(422, "result_mismatch", `${problem} Nothing was saved.`, {
-        [`points.${i}.fsBishop`]: [problem],
-      });
-  }
-  await saveDesignSweep({ projectId, studyId: study.id, sweep });
-  return NextResponse.json({ saved: sweep.points.length });
+  const sent = await parseJson(request, storedSweepSchema);
+  const context = await fetchDesignContext(projectId);
+  const kept = await recomputeBrowserSweep({
+    params: study.parameters,
+    materials: context.materials,
+    required: context.required,
+    sent,
+    isCancelled: () => request.signal.aborted,
+  });
+  if (!kept)
+    throw new ApiError(409, "cancelled", "The request was closed before the sweep was checked; nothing was kept.");
+  await saveDesignSweep({ projectId, studyId: study.id, sweep: kept.sweep });
+  return NextResponse.json({ saved: kept.sweep.points.length, sweep: kept.sweep, preview: kept.check });
 });

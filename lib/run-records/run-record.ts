@@ -1,0 +1,72 @@
+/**
+ * What a kept run stores, computed on the server: the analysed document, the server's whole
+ * search (critical circles, FS map, lowest circles, counts, warnings), its slice tables, and how
+ * the preview compared. Nothing the browser computed is stored.
+ */
+import { ApiError } from "../api/errors";
+import { documentForRun, runSetupSchema, type RunSetup } from "../analysis/run-setup";
+import {
+  validateSection,
+  type GridSearchSuccess,
+  type Method,
+  type SectionDocument,
+  type SliceRow,
+} from "../stability";
+import type { PreviewCheck } from "./compare-preview";
+import { searchOnServer } from "./server-search";
+
+export type StoredSliceTables = Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>;
+
+/** The result JSON of a kept run: the server's search, the set-up it ran, and the preview's comparison. */
+export type StoredRunResult = GridSearchSuccess & { setup: RunSetup; previewCheck: PreviewCheck };
+
+export interface RunRecord {
+  document: SectionDocument;
+  result: StoredRunResult;
+  sliceTables: StoredSliceTables;
+  fsBishop: number | null;
+  fsFellenius: number | null;
+  /** Where the server searched (for the benchmark and the logs). */
+  mode: "thread" | "in-process";
+}
+
+const invalid = (message: string, errors: readonly { path: string; message: string }[]) =>
+  new ApiError(400, "invalid_section", message, { setup: errors.map((e) => `${e.path}: ${e.message}`) });
+
+/**
+ * Runs the whole search of a section version with a set-up on the server and builds the record
+ * to keep. `compare` says how the preview (the browser's search, a sweep's point) differs from it.
+ * Bad input is a 400; a search with no valid circle at all is a 422, and nothing is kept.
+ */
+export async function computeRunRecord(
+  section: SectionDocument,
+  rawSetup: RunSetup,
+  compare: (server: GridSearchSuccess) => PreviewCheck,
+): Promise<RunRecord> {
+  // The shared schema carries the bound on the search's size (lib/run-records/limits.ts).
+  const setup = runSetupSchema.parse(rawSetup);
+  const valid = validateSection(documentForRun(section, setup));
+  if (!valid.ok) throw invalid("The section and set-up do not validate.", valid.errors);
+  const { record, mode } = await searchOnServer(valid.section);
+  if (!record.ok) throw invalid("The section and set-up do not validate.", record.errors);
+  const { result, critical } = record;
+  const sliceTables: StoredSliceTables = {};
+  for (const method of result.methods) {
+    const one = critical[method];
+    if (one) sliceTables[method] = { slices: one.slices, minMAlpha: one.minMAlpha ?? null };
+  }
+  if (Object.keys(sliceTables).length === 0) {
+    throw new ApiError(422, "no_result", "The search found no valid circle; there is nothing to keep.", {
+      setup: ["No trial circle gave a factor of safety: check that the grid lies above the slope."],
+    });
+  }
+  const fsOf = (m: Method) => (result.methods.includes(m) ? (result.results[m]?.fs ?? null) : null);
+  return {
+    document: valid.section,
+    result: { ...result, setup, previewCheck: compare(result) },
+    sliceTables,
+    fsBishop: fsOf("bishop"),
+    fsFellenius: fsOf("fellenius"),
+    mode,
+  };
+}
