@@ -111,7 +111,7 @@ describe("design studies", () => {
     expect(study.sweep.points).toHaveLength(sweep.points.length);
   }, 60_000);
 
-  test("PUT results keeps a browser sweep after re-running its circles, and refuses a doctored FS", async () => {
+  test("PUT results keeps the server's own run of a browser sweep: a doctored or missing FS is replaced", async () => {
     const id = await createStudy("Browser sweep study");
     const settings = { ...DEFAULT_SWEEP, from: 2.5, to: 3.5, step: 0.5 };
     const points: SweepPoint[] = planSweep(DEFAULT_PARAMS, settings).map((job) =>
@@ -126,18 +126,29 @@ describe("design studies", () => {
       engineVersion: ENGINE_VERSION,
       finishedAt: new Date().toISOString(),
     };
+    // What the server computes for the same jobs (the recheck of the recommended pair included).
+    const honest = await designer.request(`${base}/${id}/results`, { method: "PUT", json: sweep });
+    expect(honest.status).toBe(200);
+    const kept = await honest.json();
+    const serverPoints = kept.sweep.points as SweepPoint[];
+    for (const p of points) expect(serverPoints.find((q) => q.id === p.id)!.fsBishop).toBe(p.fsBishop);
 
+    // The attack: one FS raised by 0.2, another point sent without its FS.
     const doctored = structuredClone(sweep);
     doctored.points[0].fsBishop = doctored.points[0].fsBishop! + 0.2;
-    const refused = await designer.request(`${base}/${id}/results`, { method: "PUT", json: doctored });
-    expect(refused.status).toBe(422);
-    expect((await refused.json()).error.message).toMatch(/does not match the server's re-run/);
-    expect((await (await designer.request(`${base}/${id}`)).json()).study.sweep).toBeNull();
-
-    const kept = await designer.request(`${base}/${id}/results`, { method: "PUT", json: sweep });
-    expect(kept.status).toBe(200);
+    doctored.points[1] = { ...doctored.points[1], fsBishop: null, fsOrdinary: null, circle: null, error: "none" };
+    const res = await designer.request(`${base}/${id}/results`, { method: "PUT", json: doctored });
+    expect(res.status).toBe(200);
+    const body = await res.json();
+    expect(body.preview.status).toBe("differed");
+    const fields = body.preview.differences.map((d: { field: string }) => d.field);
+    expect(fields).toContain(`points.${points[0].id}.fsBishop`);
+    expect(fields).toContain(`points.${points[1].id}.fsBishop`);
     const { study } = await (await designer.request(`${base}/${id}`)).json();
-    expect(study.sweep.points).toHaveLength(9);
+    const storedPoint = (i: number) => study.sweep.points.find((p: SweepPoint) => p.id === points[i].id);
+    expect(storedPoint(0).fsBishop).toBe(points[0].fsBishop);
+    expect(storedPoint(1).fsBishop).toBe(points[1].fsBishop);
+    expect(study.sweep.points).toHaveLength(serverPoints.length);
 
     // Changing the parameters clears the sweep, which described the old embankment.
     const patched = await designer.request(`${base}/${id}`, {
@@ -178,6 +189,8 @@ describe("design studies", () => {
     );
     expect(run).toMatchObject({ face: "downstream", loadingCondition: "steady-seepage", requiredFs: 1.5 });
     expect(run.fsBishop).toBeCloseTo(point.fsBishop!, 3); // the run list keeps FS to four decimals
+    // The kept point was the server's own, so its search of the opened section matches it.
+    expect(body.preview).toEqual({ status: "matched", source: "sweep", differences: [], more: 0 });
     expect(run.sectionName).toContain("downstream 3.00:1");
 
     const editor = await designer.request(`${base}/${id}/open`, {
