@@ -28,10 +28,23 @@ async function runAndKeep(page: Page, title: string, denseGrid: boolean): Promis
   }[];
   expect(drawn.map((c) => c.method)).toEqual(expect.arrayContaining(["bishop", "fellenius"]));
   expect(drawn.every((c) => typeof c.fs === "number" && c.fs > 0.5 && c.fs < 5)).toBe(true);
+  const previewNotes = await pointsToCheck(page);
   await page.getByLabel("Name of the run").fill(title);
   await page.getByRole("button", { name: "Keep this run" }).click();
   await page.waitForURL(/\/runs\/\d+$/);
   await page.getByTestId("fs-summary").waitFor();
+  // The server ran the same search and kept its own result: the browser's preview matched it
+  // exactly (no notice), and the kept run lists the same points to check as the preview did.
+  expect(await page.getByTestId("preview-notice").count()).toBe(0);
+  expect(await pointsToCheck(page)).toEqual(previewNotes);
+}
+
+/** The warnings the results panel lists, with their codes and words. */
+async function pointsToCheck(page: Page): Promise<string[]> {
+  return page
+    .getByTestId("fs-summary")
+    .locator("[data-code]")
+    .evaluateAll((els) => els.map((e) => `${e.getAttribute("data-code")}: ${e.textContent}`));
 }
 
 describe("runs", () => {
