@@ -55,7 +55,7 @@ export async function openPointInEditor(o: OpenPointInput): Promise<number> {
 }
 
 /** The run set-up that reproduces a point's search: its case, face, grid and radii, the sweep's density. */
-export function pointSetup(o: Pick<OpenPointInput, "study" | "point" | "required">): RunSetup {
+function pointSetup(o: Pick<OpenPointInput, "study" | "point" | "required">): RunSetup {
   const { study, point } = o;
   const c = sweepCase(point.caseKey);
   if (point.fsBishop === null || !point.grid || !point.radii)

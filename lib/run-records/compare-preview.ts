@@ -8,11 +8,11 @@ import type { CircleFs, FsMap, GridSearchSuccess, Method } from "../stability";
 import type { StoredSearchResult } from "./result-schema";
 
 /** Relative agreement required; the engine is deterministic, so anything beyond float noise is a difference. */
-export const FS_TOLERANCE = 1e-6;
+const FS_TOLERANCE = 1e-6;
 /** Differences listed one by one; the rest are counted. */
 const MAX_LISTED = 20;
 
-export const previewDifferenceSchema = z.object({
+const previewDifferenceSchema = z.object({
   field: z.string().max(200),
   sent: z.string().max(200),
   server: z.string().max(200),

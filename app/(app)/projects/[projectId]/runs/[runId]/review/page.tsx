@@ -10,6 +10,8 @@ import { PageTitle } from "@/components/ui/page-title";
 import { ReviewWorkspace } from "@/components/review/review-workspace";
 import { RevisionChain } from "@/components/review/revision-chain";
 import { AuditTrail } from "@/components/review/audit-trail";
+import { PreviewNotice } from "@/components/run-view/preview-notice";
+import { readPreviewCheck } from "@/lib/run-records/compare-preview";
 
 export const metadata: Metadata = { title: "Review" };
 
@@ -52,6 +54,7 @@ export default async function RunReviewPage({ params }: { params: Promise<{ proj
         </p>
       ) : null}
       <div className="space-y-4">
+        <PreviewNotice check={readPreviewCheck(run.result)} />
         <ReviewWorkspace run={run} review={review} mode="review" canRevise={false} />
         <RevisionChain projectId={run.projectId} chain={review.chain} currentId={run.id} />
         <AuditTrail events={review.events} />
