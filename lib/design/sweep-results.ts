@@ -1,7 +1,7 @@
 /**
- * A finished sweep as a study keeps it (JSON), with the zod schema the server checks a
- * browser-computed sweep against before storing it. FS values are also re-run by the server
- * (app/api/.../design/[studyId]/results), so only their shape is checked here.
+ * A finished sweep as a study keeps it (JSON), with the zod schema a browser-computed sweep must
+ * fit. The server runs such a sweep again and keeps its own points (lib/design/keep-sweep.ts), so
+ * only the shape and size are checked here.
  */
 import { z } from "zod";
 import { gridSchema, radiiSchema } from "../stability";

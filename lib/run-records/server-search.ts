@@ -107,7 +107,15 @@ async function inThread(p: Pool, document: SectionDocument): Promise<SearchRecor
 /** Runs the whole search of a run's document (the analysis block included) on the server. */
 export async function searchOnServer(document: SectionDocument): Promise<ServerSearch> {
   const file = ensureBundle();
-  if (file) return { record: await inThread(pool(file), document), mode: "thread" };
+  if (file) {
+    try {
+      return { record: await inThread(pool(file), document), mode: "thread" };
+    } catch (err) {
+      // A bundle built before this module existed cannot run the search (npm run build:engine
+      // renews it); the save must not fail for that, so the search runs here instead.
+      console.error("[runs] the search thread failed; searching in this process:", err);
+    }
+  }
   await new Promise((r) => setImmediate(r));
   return { record: searchRecord(document), mode: "in-process" };
 }
