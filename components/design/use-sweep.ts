@@ -84,7 +84,8 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
         if (kept.preview.status === "differed") {
           onFinished(kept.sweep);
           const n = kept.preview.differences.length + kept.preview.more;
-          keptMessage = `The server's own run of the sweep differed in ${n} value${n === 1 ? "" : "s"}; its values are kept and shown.`;
+          const values = `${n} value${n === 1 ? "" : "s"}`;
+          keptMessage = `The server's own run of the sweep differed in ${values}; its values are kept and shown.`;
         }
       } catch (err) {
         keptMessage =
