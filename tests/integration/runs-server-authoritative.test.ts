@@ -11,6 +11,8 @@ import { analyzeCircle, type Radii } from "@/lib/stability";
 import { documentForRun, type RunSetup } from "@/lib/analysis/run-setup";
 import { searchRecord } from "@/lib/run-records/search-record";
 import { MAX_SEARCH_CIRCLES } from "@/lib/run-records/limits";
+import { describeWarning } from "@/lib/runs/warning-text";
+import { pdfText } from "../support/pdf-text";
 
 const runCount = async () => Number((await getDb()("runs").count({ n: "*" }).first())?.n);
 
@@ -163,6 +165,11 @@ describe("kept runs keep their warnings (issue 13 item 4)", () => {
       const negative = stored.result.warnings.filter((w: { code: string }) => w.code === "negative-normal");
       expect(negative.length).toBeLessThanOrEqual(2);
       expect(new Set(negative.map((w: { message: string }) => w.message.split(":")[0])).size).toBe(negative.length);
+      // The calculation report states them too, instead of "no warning".
+      const pdf = await engineer.request(`/api/projects/${demo.projectId}/runs/${run.id}/report`);
+      const text = await pdfText(await pdf.arrayBuffer());
+      expect(text).not.toContain("raised no warning");
+      expect(text).toContain(describeWarning(negative[0]).headline);
     });
   }
 });
