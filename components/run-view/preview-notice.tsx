@@ -1,4 +1,4 @@
-import { differenceWords, type PreviewCheck } from "@/lib/run-records/compare-preview";
+import { differenceLine, type PreviewCheck } from "@/lib/run-records/compare-preview";
 
 /**
  * Said on a kept run whose preview (the browser's search, or a design sweep's point) differed from
@@ -22,7 +22,7 @@ export function PreviewNotice({ check }: { check: PreviewCheck | null }) {
       <ul className="mt-1 list-disc pl-5 text-ink-soft">
         {check.differences.map((d, i) => (
           <li key={i} data-field={d.field}>
-            {differenceWords(d.field)}: sent {d.sent}, server {d.server}
+            {differenceLine(d)}
           </li>
         ))}
         {check.more > 0 ? <li>and {check.more} more</li> : null}

@@ -4,7 +4,7 @@
  * where the preview differed (beyond the tolerance of lib/run-records/compare-preview.ts).
  */
 import type { GridSearchSuccess } from "../stability";
-import { DifferenceList, type PreviewCheck } from "../run-records/compare-preview";
+import { DifferenceList, MISSING, type PreviewCheck } from "../run-records/compare-preview";
 import type { SweepPoint } from "./run-job";
 
 function comparePoint(d: DifferenceList, sent: SweepPoint, server: SweepPoint): void {
@@ -15,7 +15,7 @@ function comparePoint(d: DifferenceList, sent: SweepPoint, server: SweepPoint): 
   d.number(`${at}.circle.yc`, sent.circle?.yc, server.circle?.yc);
   d.number(`${at}.circle.r`, sent.circle?.r, server.circle?.r);
   if ((sent.error === null) !== (server.error === null))
-    d.add(`${at}.error`, sent.error ?? "none", server.error ?? "none");
+    d.add(`${at}.error`, sent.error ?? MISSING, server.error ?? MISSING);
 }
 
 /** Point by point, by job id: values that differ, points the browser left out or added. */
@@ -28,11 +28,11 @@ export function compareSweepPoints(
   const byId = new Map(sent.points.map((p) => [p.id, p]));
   for (const point of server.points) {
     const mine = byId.get(point.id);
-    if (!mine) d.add(`points.${point.id}`, "not sent", point.fsBishop === null ? "no FS" : `FS ${point.fsBishop}`);
+    if (!mine) d.add(`points.${point.id}`, MISSING, point.fsBishop === null ? "no FS" : `FS ${point.fsBishop}`);
     else comparePoint(d, mine, point);
     byId.delete(point.id);
   }
-  for (const id of byId.keys()) d.add(`points.${id}`, "sent", "not a job of this sweep");
+  for (const id of byId.keys()) d.add(`points.${id}`, "a point", `${MISSING} (not a job of this sweep)`);
   return d.check("browser");
 }
 

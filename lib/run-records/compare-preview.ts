@@ -9,6 +9,8 @@ import type { StoredSearchResult } from "./result-schema";
 
 /** Relative agreement required; the engine is deterministic, so anything beyond float noise is a difference. */
 const FS_TOLERANCE = 1e-6;
+/** Stands for a value one side has and the other lacks. */
+export const MISSING = "none";
 /** Differences listed one by one; the rest are counted. */
 const MAX_LISTED = 20;
 
@@ -36,7 +38,7 @@ export function sameNumber(a: number | null | undefined, b: number | null | unde
   return Math.abs(a - b) <= FS_TOLERANCE * Math.max(1, Math.abs(a), Math.abs(b));
 }
 
-const show = (v: number | null | undefined) => (v === null || v === undefined ? "none" : String(v));
+const show = (v: number | null | undefined) => (v === null || v === undefined ? MISSING : String(v));
 
 /** Collects differences, listing the first MAX_LISTED. */
 export class DifferenceList {
@@ -60,7 +62,7 @@ type SentCircle = StoredSearchResult["results"]["bishop"];
 
 function compareCircle(d: DifferenceList, field: string, sent: SentCircle, server: CircleFs | null | undefined) {
   if (!sent || !server) {
-    if (!sent !== !server) d.add(field, sent ? `FS ${sent.fs}` : "none", server ? `FS ${server.fs}` : "none");
+    if (!sent !== !server) d.add(field, sent ? `FS ${sent.fs}` : MISSING, server ? `FS ${server.fs}` : MISSING);
     return;
   }
   d.number(`${field}.fs`, sent.fs, server.fs);
@@ -71,7 +73,7 @@ function compareCircle(d: DifferenceList, field: string, sent: SentCircle, serve
 
 function compareMap(d: DifferenceList, field: string, sent: FsMap | undefined, server: FsMap | undefined) {
   if (!sent || !server) {
-    if (!sent !== !server) d.add(field, sent ? "a map" : "none", server ? "a map" : "none");
+    if (!sent !== !server) d.add(field, sent ? "a map" : MISSING, server ? "a map" : MISSING);
     return;
   }
   if (sent.nx !== server.nx || sent.ny !== server.ny || sent.values.length !== server.values.length) {
@@ -119,8 +121,8 @@ export function comparePreview(server: GridSearchSuccess, sent: StoredSearchResu
     d.number(`circles.rejected.${r}`, sent.circles.rejected[r] ?? 0, server.circles.rejected[r] ?? 0);
   const sw = warningKeys(sent.warnings);
   const vw = warningKeys(server.warnings);
-  for (const [k, n] of vw) if ((sw.get(k) ?? 0) !== n) d.add("warnings", (sw.get(k) ?? 0) > 0 ? k : "not sent", k);
-  for (const [k] of sw) if (!vw.has(k)) d.add("warnings", k, "not raised");
+  for (const [k, n] of vw) if ((sw.get(k) ?? 0) !== n) d.add("warnings", (sw.get(k) ?? 0) > 0 ? k : MISSING, k);
+  for (const [k] of sw) if (!vw.has(k)) d.add("warnings", k, MISSING);
   return d.check("browser");
 }
 
@@ -144,8 +146,28 @@ const FIELD_WORDS: [RegExp, string][] = [
   [/^points\./, "sweep point"],
 ];
 
-/** A difference's field in words for the notice, the exact field kept beside it. */
+/** A difference's field in words for the notice. */
 export function differenceWords(field: string): string {
   for (const [re, words] of FIELD_WORDS) if (re.test(field)) return field.replace(re, words);
   return field;
+}
+
+/**
+ * A difference as one line for the notice. Numbers far apart are shown to 4 decimals (as the FS is
+ * everywhere else); numbers that differ only beyond that keep 10 significant digits so the
+ * difference shows.
+ */
+export function differenceLine(d: PreviewDifference): string {
+  const what = differenceWords(d.field);
+  if (d.field === "warnings") {
+    if (d.sent === MISSING) return `A warning the server's search raises was missing from the preview: ${d.server}`;
+    if (d.server === MISSING) return `A warning in the preview that the server's search does not raise: ${d.sent}`;
+  }
+  const a = Number(d.sent);
+  const b = Number(d.server);
+  if (d.sent !== "" && d.server !== "" && Number.isFinite(a) && Number.isFinite(b)) {
+    const digits = Math.abs(a - b) >= 5e-5 ? (v: number) => v.toFixed(4) : (v: number) => v.toPrecision(10);
+    return `${what}: preview ${digits(a)}, server ${digits(b)}`;
+  }
+  return `${what}: preview ${d.sent}, server ${d.server}`;
 }

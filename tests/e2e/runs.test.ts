@@ -28,23 +28,28 @@ async function runAndKeep(page: Page, title: string, denseGrid: boolean): Promis
   }[];
   expect(drawn.map((c) => c.method)).toEqual(expect.arrayContaining(["bishop", "fellenius"]));
   expect(drawn.every((c) => typeof c.fs === "number" && c.fs > 0.5 && c.fs < 5)).toBe(true);
-  const previewNotes = await pointsToCheck(page);
+  const previewFacts = await summaryFacts(page);
   await page.getByLabel("Name of the run").fill(title);
   await page.getByRole("button", { name: "Keep this run" }).click();
   await page.waitForURL(/\/runs\/\d+$/);
   await page.getByTestId("fs-summary").waitFor();
   // The server ran the same search and kept its own result: the browser's preview matched it
-  // exactly (no notice), and the kept run lists the same points to check as the preview did.
+  // exactly (no notice), and the kept run states the same warnings, set-aside circles and least mα.
   expect(await page.getByTestId("preview-notice").count()).toBe(0);
-  expect(await pointsToCheck(page)).toEqual(previewNotes);
+  expect(await summaryFacts(page)).toEqual(previewFacts);
+  expect(previewFacts.join("\n")).toMatch(/Least mα\s*\d\.\d{3}/);
 }
 
-/** The warnings the results panel lists, with their codes and words. */
-async function pointsToCheck(page: Page): Promise<string[]> {
-  return page
-    .getByTestId("fs-summary")
+/** What the results panel says beside the FS: warnings with their codes, critical circles, circle counts. */
+async function summaryFacts(page: Page): Promise<string[]> {
+  const summary = page.getByTestId("fs-summary");
+  const warnings = await summary
     .locator("[data-code]")
     .evaluateAll((els) => els.map((e) => `${e.getAttribute("data-code")}: ${e.textContent}`));
+  const circles = await summary
+    .locator("[data-testid^='critical-'], [data-testid='fs-summary-circles']")
+    .allTextContents();
+  return [...warnings, ...circles];
 }
 
 describe("runs", () => {

@@ -3,7 +3,7 @@ import path from "node:path";
 import { describe, expect, it } from "vitest";
 import type { SectionDocument } from "@/lib/stability";
 import { searchRecord } from "@/lib/run-records/search-record";
-import { comparePreview, readPreviewCheck, sameNumber } from "@/lib/run-records/compare-preview";
+import { comparePreview, differenceLine, readPreviewCheck, sameNumber } from "@/lib/run-records/compare-preview";
 import { searchResultSchema } from "@/lib/run-records/result-schema";
 
 const doc = JSON.parse(
@@ -67,5 +67,19 @@ describe("comparePreview (issue 12 item 1: differences beyond 1e-6 are reported)
     );
     expect(readPreviewCheck({ previewCheck: JSON.parse(JSON.stringify(check)) })).toEqual(check);
     expect(readPreviewCheck({})).toBeNull();
+  });
+});
+
+describe("differenceLine", () => {
+  it("words a difference for the run page: FS to 4 decimals, a close call with the digits that differ", () => {
+    expect(differenceLine({ field: "results.bishop.fs", sent: "2.26", server: "1.3415688173025713" })).toBe(
+      "Bishop's FS: preview 2.2600, server 1.3416",
+    );
+    expect(differenceLine({ field: "results.bishop.fs", sent: "1.341570", server: "1.341569" })).toBe(
+      "Bishop's FS: preview 1.341570000, server 1.341569000",
+    );
+    expect(differenceLine({ field: "warnings", sent: "none", server: "m-alpha-low: mα falls to 0.150" })).toBe(
+      "A warning the server's search raises was missing from the preview: m-alpha-low: mα falls to 0.150",
+    );
   });
 });
