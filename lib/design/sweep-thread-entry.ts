@@ -1,8 +1,8 @@
 /**
- * Entry of a server worker thread (node:worker_threads). scripts/build-engine.mjs bundles it with
- * the engine into .engine/sweep-worker.mjs, which lib/design/thread-sweep.ts (sweep jobs) and
- * lib/run-records/server-search.ts (the search of a run being kept) start: the built app keeps no
- * TypeScript sources a thread could load.
+ * Entry of a server engine thread (node:worker_threads). scripts/build-engine.mjs bundles it with
+ * the engine into .engine/sweep-worker.mjs, which lib/design/engine-threads.ts starts for sweep
+ * jobs (lib/design/thread-sweep.ts) and for the search of a run being kept
+ * (lib/run-records/server-search.ts): the built app keeps no TypeScript sources a thread could load.
  */
 import { parentPort } from "node:worker_threads";
 import { runSweepJob, type JobSettings, type SweepPoint } from "./run-job";
@@ -11,8 +11,10 @@ import type { EngineFailure, Material, SectionDocument } from "../stability";
 import type { SweepJob } from "./sweep-plan";
 import { searchRecord, type SearchRecord } from "../run-records/search-record";
 
-export interface ThreadRequest {
+/** One job of a design sweep. */
+export interface JobRequest {
   seq: number;
+  kind: "job";
   params: EmbankmentParams;
   materials: Material[];
   job: SweepJob;
@@ -26,14 +28,17 @@ export interface RecordRequest {
   document: SectionDocument;
 }
 
-export type ThreadReply = { seq: number; point: SweepPoint } | { seq: number; error: string };
-export type RecordReply = { seq: number; record: SearchRecord | EngineFailure } | { seq: number; error: string };
+export type EngineThreadRequest = JobRequest | RecordRequest;
+export type EngineThreadReply =
+  | { seq: number; point: SweepPoint }
+  | { seq: number; record: SearchRecord | EngineFailure }
+  | { seq: number; error: string };
 
-parentPort?.on("message", (m: ThreadRequest | RecordRequest) => {
-  let reply: ThreadReply | RecordReply;
+parentPort?.on("message", (m: EngineThreadRequest) => {
+  let reply: EngineThreadReply;
   try {
     reply =
-      "kind" in m
+      m.kind === "record"
         ? { seq: m.seq, record: searchRecord(m.document) }
         : { seq: m.seq, point: runSweepJob(m.params, m.materials, m.job, m.settings) };
   } catch (err) {
