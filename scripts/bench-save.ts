@@ -57,10 +57,9 @@ async function main() {
     status = record.result.previewCheck.status;
   }
   console.log(`machine: ${os.cpus()[0]?.model ?? "unknown"}, ${os.cpus().length} cores (shared)`);
-  console.log(
-    `demo save: ${searchCircleCount(setup.grid, setup.radii)} grid circles (${browser.result.circles.tried} with refinement), ` +
-      `${setup.slices} slices, both methods`,
-  );
+  const circles = searchCircleCount(setup.grid, setup.radii);
+  const tried = browser.result.circles.tried;
+  console.log(`demo save: ${circles} grid circles (${tried} with refinement), ${setup.slices} slices, both methods`);
   console.log(`search + critical-circle reports in this process: median ${median(inProcess).toFixed(3)} s`);
   console.log(
     `server's part of a save (${mode}, validation, search, comparison): median ${median(server).toFixed(3)} s`,

@@ -44,7 +44,7 @@ function circleNear(setup: RunSetup, doc: Parameters<typeof documentForRun>[0], 
 }
 
 describe("the server keeps its own search (issue 12 item 1)", () => {
-  test("the forged run as it was made: a circle with its honest FS 2.26 claimed critical is kept at the true minimum", async () => {
+  test("the forged run as made: a circle of honest FS 2.26 claimed critical is kept at the true minimum", async () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const demo = await demoProject(engineer);
     const setup = quickSetup(demo.document, "downstream");
