@@ -4,7 +4,7 @@ import { ApiError, notFound } from "@/lib/api/errors";
 import { requireUser } from "@/lib/auth/session";
 import { requireProjectAccess } from "@/lib/projects/access";
 import { createRunSchema } from "@/lib/validations/run";
-import { documentForRun } from "@/lib/analysis/run-setup";
+import { documentForRun, UnknownWaterConditionError, waterConditionForRun } from "@/lib/analysis/run-setup";
 import { loadingCondition } from "@/lib/analysis/required-fs";
 import { verifyCriticalCircles } from "@/lib/run-records/verify";
 import { ENGINE_VERSION, validateSection, type SectionDocument } from "@/lib/stability";
@@ -35,7 +35,8 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   const version = await fetchSectionVersion(section.id, input.sectionVersion);
   if (!version) throw notFound("The section version");
 
-  const doc = documentForRun(version.document as SectionDocument, input.setup);
+  const water = waterConditionOrRefuse(version.document as SectionDocument, input.setup);
+  const doc = documentForRun(version.document as SectionDocument, input.setup, water);
   const valid = validateSection(doc);
   if (!valid.ok) {
     throw new ApiError(400, "invalid_section", "The section and set-up do not validate.", {
@@ -54,6 +55,7 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
     sectionVersionId: version.id,
     title: input.title,
     loadingCondition: condition.key,
+    waterCondition: { id: water.id, name: water.name },
     loadCase: condition.engineCase,
     face: input.setup.face,
     methods: input.setup.methods,
@@ -71,3 +73,14 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   });
   return NextResponse.json({ run: { id } }, { status: 201 });
 });
+
+/** The water condition the set-up names (or its loading condition's usual one); 400 if the version lacks it. */
+function waterConditionOrRefuse(section: SectionDocument, setup: Parameters<typeof waterConditionForRun>[1]) {
+  try {
+    return waterConditionForRun(section, setup);
+  } catch (err) {
+    if (err instanceof UnknownWaterConditionError)
+      throw new ApiError(400, "unknown_water_condition", err.message, { "setup.waterCondition": [err.message] });
+    throw err;
+  }
+}
