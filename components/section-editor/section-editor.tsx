@@ -22,6 +22,16 @@ import { useEditorKeys } from "./use-editor-keys";
 import { useView, ZOOM_STEP } from "./use-view";
 import { VertexTable } from "./vertex-table";
 import { WaterPanel } from "./water-panel";
+import { WaterConditionsPanel } from "./water-conditions-panel";
+import {
+  addWaterCondition,
+  drawnConditionId,
+  keepDrawnWater,
+  removeWaterCondition,
+  showWaterCondition,
+  updateWaterCondition,
+} from "@/lib/sections/water-condition-edits";
+import { waterConditionsOf } from "@/lib/sections/water-conditions";
 
 export type { SectionEditorProps, MaterialSwatch, EditorIssue } from "./types";
 
@@ -56,6 +66,15 @@ export function SectionEditor({
   const [focusedIssue, setFocusedIssue] = useState<number | null>(null);
   const [newRegionMaterial, setNewRegionMaterial] = useState(materials[0]?.key ?? doc.materials[0]?.id ?? "");
   const containerRef = useRef<HTMLDivElement>(null);
+  const [chosenWater, setChosenWater] = useState<string | null>(null);
+  // The condition being drawn: the one chosen, while the drawn water is still its water (an undo
+  // may have brought another condition's water back), else the condition the drawn water belongs to.
+  const chosen = waterConditionsOf(doc).find((c) => c.id === chosenWater);
+  const activeWater =
+    chosen && JSON.stringify(chosen.water ?? null) === JSON.stringify(doc.water ?? null)
+      ? chosen.id
+      : drawnConditionId(doc);
+  const commit = (next: SectionDocument) => history.commit(keepDrawnWater(next, activeWater));
 
   // Undo or a deletion can leave the selection pointing past the end.
   const selection = clampSelection(doc, rawSelection);
@@ -80,7 +99,7 @@ export function SectionEditor({
     setDraft,
     newRegionMaterial,
     gridStep,
-    commit: history.commit,
+    commit,
     say: setMessage,
     showPoint: view.showPoint,
   };
@@ -277,6 +296,27 @@ export function SectionEditor({
               setToolState("select");
               setDraft(null);
               actions.focusIssue(issues[i]);
+            }}
+          />
+          <WaterConditionsPanel
+            doc={doc}
+            activeId={activeWater}
+            readOnly={readOnly}
+            onShow={(id) => {
+              setChosenWater(id);
+              history.commit(showWaterCondition(doc, id));
+            }}
+            onAdd={(name) => {
+              const added = addWaterCondition(keepDrawnWater(doc, activeWater), name);
+              setChosenWater(added.id);
+              history.commit(added.doc);
+            }}
+            onUpdate={(id, patch) => history.commit(updateWaterCondition(doc, id, patch))}
+            onRemove={(id) => {
+              const r = removeWaterCondition(doc, id);
+              if (!r) return;
+              setChosenWater(r.shown);
+              history.commit(r.doc);
             }}
           />
           <WaterPanel doc={doc} readOnly={readOnly} onApply={actions.applyReservoir} />
