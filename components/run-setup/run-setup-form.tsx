@@ -59,6 +59,12 @@ function defaults(doc: SectionDocument, requiredFs: Record<LoadingConditionKey, 
   };
 }
 
+/** A revised run's water, unless the section no longer has it: then its loading condition's usual one. */
+function withKnownWater(doc: SectionDocument, v: RunSetupInput): RunSetupInput {
+  if (v.waterCondition && findWaterCondition(doc, v.waterCondition)) return v;
+  return { ...v, waterCondition: pickWaterCondition(doc, v.condition).id };
+}
+
 export function RunSetupForm({
   projectId,
   section,
@@ -71,7 +77,7 @@ export function RunSetupForm({
   const router = useRouter();
   const form = useForm<RunSetupInput, unknown, RunSetup>({
     resolver: runSetupResolver,
-    defaultValues: initial ? fromRunSetup(initial) : defaults(doc, requiredFs),
+    defaultValues: initial ? withKnownWater(doc, fromRunSetup(initial)) : defaults(doc, requiredFs),
     mode: "onBlur",
   });
   const search = useGridSearch();
