@@ -110,7 +110,9 @@ function PointNotes({ point }: { point: SweepPoint }) {
     });
   else if (point.gridMoves > 0)
     notes.push({
-      text: `Minimum on the grid's edge: the grid was moved toward it and searched again${point.gridMoves > 1 ? ` (${point.gridMoves} times)` : ""}; the FS shown is the lowest found.`,
+      text:
+        "Minimum on the grid's edge: the grid was moved toward it and searched again" +
+        `${point.gridMoves > 1 ? ` (${point.gridMoves} times)` : ""}; the FS shown is the lowest found.`,
       alarm: false,
     });
   for (const w of point.warnings) notes.push({ text: w, alarm: false });

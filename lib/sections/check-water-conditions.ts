@@ -50,7 +50,9 @@ export function checkWaterConditions(doc: SectionDocument): { conditions?: Water
         errors.push({
           code: "water-condition-usual-twice",
           path: at(i, ".usualFor"),
-          message: `${label}: “${loadingCondition(key).label}” already takes “${conditions[first].name}” as its usual water; keep one.`,
+          message:
+            `${label}: “${loadingCondition(key).label}” already takes “${conditions[first].name}” ` +
+            "as its usual water; keep one.",
         });
       } else usual.set(key, i);
     }
@@ -59,7 +61,9 @@ export function checkWaterConditions(doc: SectionDocument): { conditions?: Water
       errors.push({
         code: "water-condition-construction-pool",
         path: at(i, ".water.phreatic"),
-        message: `${label}: construction water has no reservoir, but the line stands above the ground at the ${pools.left !== null ? "left" : "right"} edge. Lower it to the ground or use an ru value.`,
+        message:
+          `${label}: construction water has no reservoir, but the line stands above the ground at the ` +
+          `${pools.left !== null ? "left" : "right"} edge. Lower it to the ground or use an ru value.`,
       });
     }
     if (c.kind === "drawdown") {
@@ -81,7 +85,9 @@ export function checkWaterConditions(doc: SectionDocument): { conditions?: Water
         errors.push({
           code: "water-condition-drawdown-to",
           path: at(i, ".drawdownTo"),
-          message: `${label}: the pool after drawdown (${c.drawdownTo.toFixed(2)} m) is above the pool before it (${before.toFixed(2)} m).`,
+          message:
+            `${label}: the pool after drawdown (${c.drawdownTo.toFixed(2)} m) is above ` +
+            `the pool before it (${before.toFixed(2)} m).`,
         });
       }
     }

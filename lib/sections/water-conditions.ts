@@ -13,7 +13,10 @@ import { waterSchema, type SectionDocument, type Water } from "../stability";
 import { LOADING_CONDITION_KEYS, type LoadingConditionKey } from "../analysis/required-fs";
 import { groundProfile, polylineAt } from "../analysis/ground-profile";
 
-/** construction: pore pressures of construction, no reservoir; steady: seepage from the pools; drawdown: a pool lowered. */
+/**
+ * construction: pore pressures of construction, no reservoir; steady: seepage from the pools;
+ * drawdown: a pool lowered.
+ */
 export const WATER_KINDS = ["construction", "steady", "drawdown"] as const;
 export type WaterKind = (typeof WATER_KINDS)[number];
 
@@ -124,7 +127,10 @@ export function waterMismatch(doc: SectionDocument, key: LoadingConditionKey, c:
   if (wanted === "drawdown" && !c.water?.phreatic)
     return "A drawdown needs a phreatic line before drawdown; this water has none.";
   if (wanted !== c.kind && !(wanted === "drawdown" && c.kind === "steady"))
-    return `This water is “${WATER_KIND_LABELS[c.kind].toLowerCase()}”; the loading condition usually takes “${WATER_KIND_LABELS[wanted].toLowerCase()}”.`;
+    return (
+      `This water is “${WATER_KIND_LABELS[c.kind].toLowerCase()}”; ` +
+      `the loading condition usually takes “${WATER_KIND_LABELS[wanted].toLowerCase()}”.`
+    );
   return null;
 }
 

@@ -56,7 +56,7 @@ async function runAndKeep(page: Page, condition: string, title: string): Promise
 }
 
 describe("water per loading condition", () => {
-  test("a drawdown run of the demo dam draws the lowered pool, and its end-of-construction run has no reservoir", async () => {
+  test("a drawdown run of the demo dam draws the lowered pool; end of construction has no reservoir", async () => {
     const page = await browser.newPage({ viewport: { width: 1500, height: 1000 } });
     const errors = watchConsole(page);
     await keepScreenshotOnFailure(page, "water-conditions", async () => {

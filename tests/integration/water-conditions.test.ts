@@ -47,7 +47,7 @@ describe("water conditions", () => {
     ]);
   });
 
-  test("a section saved with edited conditions keeps them; a bad one is refused whole with its place named", async () => {
+  test("a section keeps its edited conditions; a bad one is refused whole with its place named", async () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const demo = await demoProject(engineer);
     const doc = structuredClone(demo.document) as StoredSection;

@@ -19,7 +19,8 @@ describe("the automatic grid's tangent levels", () => {
   });
 
   for (const direction of ["left", "right"] as const) {
-    it(`stay above the bedrock for the ${direction === "left" ? "upstream" : "downstream"} face, so no circle is rejected for entering it`, () => {
+    const face = direction === "left" ? "upstream" : "downstream";
+    it(`stay above the bedrock for the ${face} face, so no circle is rejected for entering it`, () => {
       const g = suggestGrid(doc, direction, { nx: 6, ny: 6, nr: 6 });
       expect(Math.min(g.radii.tangentY1, g.radii.tangentY2)).toBeGreaterThan(0);
       const result = runGridSearch({

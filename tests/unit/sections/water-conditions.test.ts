@@ -63,7 +63,7 @@ describe("water conditions of a section", () => {
     );
   });
 
-  it("gives the engine one water block, the chosen condition's, and keeps the upstream face on the reservoir side", () => {
+  it("gives the engine the chosen condition's water as its one block; upstream stays on the reservoir side", () => {
     const setup = quickSetup(demo, "upstream", { condition: "end-of-construction" });
     const doc = documentForRun(demo, setup);
     expect("waterConditions" in doc).toBe(false);
