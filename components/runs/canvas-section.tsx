@@ -98,9 +98,9 @@ function BeforeDrawdown({ scene, view }: { scene: RunScene; view: RunView }) {
     <Group name="before-drawdown" opacity={0.45}>
       <Line points={screenPoints(view, before.points)} stroke={WATER_LINE} strokeWidth={1} dash={[3, 4]} />
       <Text
-        x={rightEdge ? lx - 224 : lx + 4}
+        x={rightEdge ? lx - 324 : lx + 4}
         y={ly - 15}
-        width={220}
+        width={320}
         align={rightEdge ? "right" : "left"}
         text={text}
         fontSize={11}

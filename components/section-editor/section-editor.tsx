@@ -26,9 +26,9 @@ import { WaterConditionsPanel } from "./water-conditions-panel";
 import {
   addWaterCondition,
   drawnConditionId,
-  keepDrawnWater,
   removeWaterCondition,
   showWaterCondition,
+  storeDrawnWater,
   updateWaterCondition,
 } from "@/lib/sections/water-condition-edits";
 import { waterConditionsOf } from "@/lib/sections/water-conditions";
@@ -55,7 +55,14 @@ export function SectionEditor({
   height = 520,
 }: SectionEditorProps) {
   const history = useEditorDocument(document, onChange);
-  const doc = history.current();
+  const stored = history.current();
+  const [chosenWater, setChosenWater] = useState<string | null>(null);
+  // The editor draws and edits one water condition at a time. Choosing which is a view, not an
+  // edit: the stored document only changes when the drawing does.
+  const activeWater = waterConditionsOf(stored).some((c) => c.id === chosenWater)
+    ? chosenWater!
+    : drawnConditionId(stored);
+  const doc = useMemo(() => showWaterCondition(stored, activeWater), [stored, activeWater]);
   const [tool, setToolState] = useState<ToolName>("select");
   const [rawSelection, setSelection] = useState<Selection | null>(null);
   const [draft, setDraft] = useState<Draft | null>(null);
@@ -66,15 +73,7 @@ export function SectionEditor({
   const [focusedIssue, setFocusedIssue] = useState<number | null>(null);
   const [newRegionMaterial, setNewRegionMaterial] = useState(materials[0]?.key ?? doc.materials[0]?.id ?? "");
   const containerRef = useRef<HTMLDivElement>(null);
-  const [chosenWater, setChosenWater] = useState<string | null>(null);
-  // The condition being drawn: the one chosen, while the drawn water is still its water (an undo
-  // may have brought another condition's water back), else the condition the drawn water belongs to.
-  const chosen = waterConditionsOf(doc).find((c) => c.id === chosenWater);
-  const activeWater =
-    chosen && JSON.stringify(chosen.water ?? null) === JSON.stringify(doc.water ?? null)
-      ? chosen.id
-      : drawnConditionId(doc);
-  const commit = (next: SectionDocument) => history.commit(keepDrawnWater(next, activeWater));
+  const commit = (next: SectionDocument) => history.commit(storeDrawnWater(stored, next, activeWater));
 
   // Undo or a deletion can leave the selection pointing past the end.
   const selection = clampSelection(doc, rawSelection);
@@ -302,18 +301,15 @@ export function SectionEditor({
             doc={doc}
             activeId={activeWater}
             readOnly={readOnly}
-            onShow={(id) => {
-              setChosenWater(id);
-              history.commit(showWaterCondition(doc, id));
-            }}
+            onShow={setChosenWater}
             onAdd={(name) => {
-              const added = addWaterCondition(keepDrawnWater(doc, activeWater), name);
+              const added = addWaterCondition(doc, name);
               setChosenWater(added.id);
-              history.commit(added.doc);
+              history.commit(storeDrawnWater(stored, added.doc, activeWater));
             }}
-            onUpdate={(id, patch) => history.commit(updateWaterCondition(doc, id, patch))}
+            onUpdate={(id, patch) => history.commit(updateWaterCondition(stored, id, patch))}
             onRemove={(id) => {
-              const r = removeWaterCondition(doc, id);
+              const r = removeWaterCondition(stored, id);
               if (!r) return;
               setChosenWater(r.shown);
               history.commit(r.doc);

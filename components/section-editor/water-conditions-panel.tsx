@@ -32,11 +32,13 @@ function CommitField({
   label,
   value,
   type = "text",
+  unit,
   disabled,
   onCommit,
 }: {
   id: string;
   label: string;
+  unit?: string;
   value: string;
   type?: "text" | "number";
   disabled: boolean;
@@ -51,6 +53,7 @@ function CommitField({
     <div>
       <label className="label" htmlFor={id}>
         {label}
+        {unit ? <span className="normal-case text-ink-faint"> ({unit})</span> : null}
       </label>
       <input
         id={id}
@@ -148,7 +151,8 @@ export function WaterConditionsPanel({
         <CommitField
           key={`to-${active.id}`}
           id="water-condition-drawdown-to"
-          label="Pool after drawdown (m)"
+          label="Pool after drawdown"
+          unit="m"
           type="number"
           value={active.drawdownTo !== undefined ? String(active.drawdownTo) : ""}
           disabled={readOnly}

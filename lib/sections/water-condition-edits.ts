@@ -30,6 +30,20 @@ export function keepDrawnWater(doc: SectionDocument, activeId: string): SectionD
   return setConditions(doc, next);
 }
 
+/**
+ * The stored document after an edit of the drawing made while `activeId` is drawn: the edited
+ * water goes into that condition, and the document's own water changes only when it is that
+ * condition's (so looking at another condition is not an edit).
+ */
+export function storeDrawnWater(stored: SectionDocument, edited: SectionDocument, activeId: string): SectionDocument {
+  const kept = keepDrawnWater(edited, activeId);
+  if (!(stored as StoredSection).waterConditions?.length || drawnConditionId(stored) === activeId) return kept;
+  const out = { ...kept } as StoredSection;
+  if (stored.water) out.water = stored.water;
+  else delete out.water;
+  return out;
+}
+
 /** Draws another condition's water for editing. */
 export function showWaterCondition(doc: SectionDocument, id: string): SectionDocument {
   const c = waterConditionsOf(doc).find((x) => x.id === id);

@@ -62,6 +62,7 @@ describe("water per loading condition", () => {
     await keepScreenshotOnFailure(page, "water-conditions", async () => {
       await signInAs(page, "engineer@scarpline.test");
       await page.getByRole("link", { name: "Lower Wendle Reservoir embankment" }).click();
+      await page.waitForURL(/\/projects\/\d+$/);
       const projectUrl = page.url();
 
       await page.getByRole("link", { name: /Main embankment/ }).click();

@@ -19,6 +19,7 @@ import {
   drawnConditionId,
   keepDrawnWater,
   showWaterCondition,
+  storeDrawnWater,
 } from "@/lib/sections/water-condition-edits";
 import { runGridSearch, type SectionDocument } from "@/lib/stability";
 import { quickSetup } from "../../support/runs";
@@ -133,6 +134,13 @@ describe("editing conditions in the editor", () => {
     const all = waterConditionsOf(edited);
     expect(all.find((c) => c.id === "end-of-construction")!.water).toEqual({ ru: 0.2 });
     expect(all.find((c) => c.id === "storage-pool")!.water).toEqual(demo.waterConditions![0].water);
+  });
+
+  it("looking at another condition is not an edit; editing it leaves the section's own water alone", () => {
+    const view = showWaterCondition(demo, "end-of-construction");
+    const edited = storeDrawnWater(demo, { ...view, water: { ru: 0.1 } }, "end-of-construction");
+    expect(edited.water).toEqual(demo.water);
+    expect(waterConditionsOf(edited).find((c) => c.id === "end-of-construction")!.water).toEqual({ ru: 0.1 });
   });
 
   it("turns a one-water section into a list when a condition is added", () => {
