@@ -192,7 +192,10 @@ function writeResults(w: ReportWriter, input: ReportInput): void {
     drawdownTo: run.document.analysis?.drawdown?.to,
   });
   w.paragraph(
-    "Regions filled by material; blue line: phreatic surface; dotted blue: pool after drawdown; dashed grey rectangle: grid of trial centres; bold arcs: critical slip surfaces with their centres marked.",
+    "Regions filled by material; blue line: the pore-water level analysed (after a drawdown, the lowered one); " +
+      "light blue: ponded water; faint dashed blue: the line before drawdown (not analysed); dotted blue: pool " +
+      "after drawdown; dashed grey rectangle: grid of trial centres; bold arcs: critical slip surfaces with their " +
+      "centres marked.",
     { size: 7.5, color: SOFT },
   );
   w.heading("Warnings");
