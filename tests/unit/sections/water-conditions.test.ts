@@ -21,6 +21,7 @@ import {
   showWaterCondition,
   storeDrawnWater,
 } from "@/lib/sections/water-condition-edits";
+import { summarizeChange } from "@/lib/sections/diff";
 import { runGridSearch, type SectionDocument } from "@/lib/stability";
 import { quickSetup } from "../../support/runs";
 
@@ -149,5 +150,17 @@ describe("editing conditions in the editor", () => {
     const { doc, id } = addWaterCondition(old, "End of construction");
     expect(id).toBe("end-of-construction");
     expect(waterConditionsOf(doc).map((c) => c.id)).toEqual([SINGLE_WATER_ID, "end-of-construction"]);
+  });
+});
+
+describe("the summary of a saved version", () => {
+  it("names the water condition that changed", () => {
+    const next = structuredClone(demo);
+    next.waterConditions![3].drawdownTo = 9;
+    next.waterConditions![1].name = "Surcharge pool";
+    expect(summarizeChange(demo, next)).toBe(
+      "water condition “Steady seepage, maximum surcharge pool 17.0 m” renamed “Surcharge pool”; " +
+        "water condition “Rapid drawdown, 16.0 m to 8.0 m”: drawdownTo changed",
+    );
   });
 });
