@@ -120,6 +120,8 @@ function diffWater(a: SectionDocument, b: SectionDocument, out: Difference[]): v
     out.push({ area: "water", path: "water.gammaW", text: `γw ${show(wa.gammaW)} → ${show(wb.gammaW)}` });
 }
 
+const renamed = (a: string, b: string) => `water condition “${a}” renamed “${b}”`;
+
 /** Named water conditions by key: added, removed, renamed, or their water or levels changed. */
 function diffWaterConditions(a: SectionDocument, b: SectionDocument, out: Difference[]): void {
   const before = new Map(((a as StoredSection).waterConditions ?? []).map((c) => [c.id, c]));
@@ -131,8 +133,7 @@ function diffWaterConditions(a: SectionDocument, b: SectionDocument, out: Differ
       out.push({ area: "water", path, text: `water condition “${c.name}” added` });
       continue;
     }
-    if (old.name !== c.name)
-      out.push({ area: "water", path: `${path}.name`, text: `water condition “${old.name}” renamed “${c.name}”` });
+    if (old.name !== c.name) out.push({ area: "water", path: `${path}.name`, text: renamed(old.name, c.name) });
     const changed = (["kind", "water", "drawdownTo", "usualFor"] as const).filter((k) => !same(old[k], c[k]));
     if (changed.length > 0)
       out.push({ area: "water", path, text: `water condition “${c.name}”: ${changed.join(", ")} changed` });
