@@ -52,6 +52,8 @@ function PointRow({
       <td className="px-2 py-1">
         {point.error ? (
           <span className="text-alarm-700">{point.error}</span>
+        ) : point.gridEdge ? (
+          <span className="text-alarm-700">? minimum on the grid&apos;s edge</span>
         ) : pass ? (
           <span className="text-moss-700">✓ meets {required.toFixed(2)}</span>
         ) : (
@@ -67,14 +69,8 @@ function PointRow({
           ? `(${point.circle.xc.toFixed(1)}, ${point.circle.yc.toFixed(1)}) R ${point.circle.r.toFixed(1)}`
           : "–"}
       </td>
-      <td className="px-2 py-1 text-xs">
-        {point.warnings.length ? (
-          <span title={point.warnings.join("\n")}>
-            {point.warnings.length} warning{point.warnings.length > 1 ? "s" : ""}
-          </span>
-        ) : (
-          ""
-        )}
+      <td className="px-2 py-1 text-xs" data-testid="sweep-warnings">
+        <PointNotes point={point} />
       </td>
       <td className="px-2 py-1 whitespace-nowrap">
         {canOpen ? (
@@ -101,6 +97,34 @@ function PointRow({
         ) : null}
       </td>
     </tr>
+  );
+}
+
+/** A point's search notes in words: the grid's moves, an unsettled edge minimum, then the engine's warnings. */
+function PointNotes({ point }: { point: SweepPoint }) {
+  const notes: { text: string; alarm: boolean }[] = [];
+  if (point.gridEdge)
+    notes.push({
+      text: `Minimum still on the grid's edge after ${point.gridMoves} moves: not counted as meeting the required FS.`,
+      alarm: true,
+    });
+  else if (point.gridMoves > 0)
+    notes.push({
+      text:
+        "Minimum on the grid's edge: the grid was moved toward it and searched again" +
+        `${point.gridMoves > 1 ? ` (${point.gridMoves} times)` : ""}; the FS shown is the lowest found.`,
+      alarm: false,
+    });
+  for (const w of point.warnings) notes.push({ text: w, alarm: false });
+  if (notes.length === 0) return null;
+  return (
+    <ul className="max-w-md space-y-0.5">
+      {notes.map((n, i) => (
+        <li key={i} className={n.alarm ? "text-alarm-700" : "text-ink-soft"}>
+          {n.text}
+        </li>
+      ))}
+    </ul>
   );
 }
 

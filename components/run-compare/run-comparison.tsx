@@ -5,6 +5,7 @@ import type { RunDetail } from "@/db/queries/runs";
 import type { GridSearchSuccess, SectionDocument } from "@/lib/stability";
 import { diffDocuments } from "@/lib/sections/diff";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
+import { waterUsedText } from "@/lib/runs/water-used";
 import { materialPalette } from "@/lib/sections/material-palette";
 import { OVERLAY_COLOURS } from "@/lib/runs/circle-styles";
 import { RunCanvas } from "@/components/runs/run-canvas";
@@ -44,6 +45,7 @@ export function RunComparison({ runs }: { runs: RunDetail[] }) {
           id: r.id,
           label: `${letter(i)}: ${r.title}`,
           detail: `${r.sectionName} v${r.sectionVersion} · ${loadingCondition(r.loadingCondition as LoadingConditionKey)?.label ?? r.loadingCondition} · ${r.face}`,
+          water: waterUsedText(r),
           requiredFs: r.requiredFs,
           fs: { bishop: r.fsBishop, fellenius: r.fsFellenius },
           colour: OVERLAY_COLOURS[i % OVERLAY_COLOURS.length],
@@ -73,6 +75,13 @@ export function RunComparison({ runs }: { runs: RunDetail[] }) {
                   area: "analysis" as const,
                   path: "requiredFs",
                   text: `required FS ${base.requiredFs} → ${run.requiredFs}`,
+                }
+              : null,
+            waterUsedText(run) !== waterUsedText(base)
+              ? {
+                  area: "analysis" as const,
+                  path: "waterCondition",
+                  text: `water ${waterUsedText(base)} → ${waterUsedText(run)}`,
                 }
               : null,
             run.loadingCondition !== base.loadingCondition

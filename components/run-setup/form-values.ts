@@ -9,6 +9,8 @@ import type { LoadingConditionKey } from "@/lib/analysis/required-fs";
 
 export interface RunSetupInput {
   condition: LoadingConditionKey;
+  /** Key of the section's water condition; "" leaves it to the loading condition's usual water. */
+  waterCondition: string;
   face: "upstream" | "downstream";
   methods: ("bishop" | "fellenius")[];
   slices: number;
@@ -32,6 +34,7 @@ const nanToUndefined = (v: number | undefined) => (v === undefined || Number.isN
 export function toRunSetup(v: RunSetupInput): unknown {
   return {
     condition: v.condition,
+    waterCondition: v.waterCondition || undefined,
     face: v.face,
     methods: Array.isArray(v.methods) ? v.methods : [v.methods].filter(Boolean),
     slices: v.slices,
@@ -53,6 +56,7 @@ export function fromRunSetup(s: RunSetup): RunSetupInput {
   const tangent = "tangentY1" in s.radii;
   return {
     condition: s.condition,
+    waterCondition: s.waterCondition ?? "",
     face: s.face,
     methods: s.methods,
     slices: s.slices,

@@ -4,12 +4,20 @@ import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import { useForm } from "react-hook-form";
 import type { RunSetup } from "@/lib/analysis/run-setup";
-import { documentForRun } from "@/lib/analysis/run-setup";
+import { documentForRun, waterConditionForRun } from "@/lib/analysis/run-setup";
 import { directionForFace } from "@/lib/analysis/face";
 import { suggestGrid } from "@/lib/analysis/auto-grid";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import type { SectionDocument } from "@/lib/stability";
+import {
+  findWaterCondition,
+  pickWaterCondition,
+  poolBefore,
+  waterConditionsOf,
+  withWater,
+} from "@/lib/sections/water-conditions";
 import { ConditionFields, GridFields, MethodFields } from "./setup-fields";
+import { WaterConditionField } from "./water-condition-field";
 import { fromRunSetup, runSetupResolver, type RunSetupInput } from "./form-values";
 import { useGridSearch } from "./use-grid-search";
 import { SearchProgress } from "./search-progress";
@@ -31,6 +39,7 @@ function defaults(doc: SectionDocument, requiredFs: Record<LoadingConditionKey, 
   const g = suggestGrid(doc, directionForFace(doc, face));
   return {
     condition: "steady-seepage",
+    waterCondition: pickWaterCondition(doc, "steady-seepage").id,
     face,
     methods: ["bishop", "fellenius"],
     slices: 50,
@@ -50,6 +59,12 @@ function defaults(doc: SectionDocument, requiredFs: Record<LoadingConditionKey, 
   };
 }
 
+/** A revised run's water, unless the section no longer has it: then its loading condition's usual one. */
+function withKnownWater(doc: SectionDocument, v: RunSetupInput): RunSetupInput {
+  if (v.waterCondition && findWaterCondition(doc, v.waterCondition)) return v;
+  return { ...v, waterCondition: pickWaterCondition(doc, v.condition).id };
+}
+
 export function RunSetupForm({
   projectId,
   section,
@@ -62,7 +77,7 @@ export function RunSetupForm({
   const router = useRouter();
   const form = useForm<RunSetupInput, unknown, RunSetup>({
     resolver: runSetupResolver,
-    defaultValues: initial ? fromRunSetup(initial) : defaults(doc, requiredFs),
+    defaultValues: initial ? withKnownWater(doc, fromRunSetup(initial)) : defaults(doc, requiredFs),
     mode: "onBlur",
   });
   const search = useGridSearch();
@@ -78,14 +93,20 @@ export function RunSetupForm({
     form.setValue("radiusCount", g.radii.n);
   }
 
+  /** A drawdown starts from the chosen water's pool and, for a drawdown water, goes to its lowered pool. */
+  function onWater(id: string, key: LoadingConditionKey = values.condition) {
+    form.setValue("waterCondition", id);
+    const water = findWaterCondition(doc, id);
+    if (!water || loadingCondition(key).engineCase !== "drawdown") return;
+    const from = poolBefore(doc, water.water);
+    if (from !== null) form.setValue("drawdownFrom", from);
+    if (water.drawdownTo !== undefined) form.setValue("drawdownTo", water.drawdownTo);
+  }
+
   function onCondition(key: string) {
     const c = loadingCondition(key as LoadingConditionKey);
     form.setValue("requiredFs", requiredFs[c.key]);
-    if (c.engineCase === "drawdown" && values.drawdownFrom === undefined) {
-      // Start from the reservoir level drawn on the section; the engineer types the low level.
-      const line = doc.water?.phreatic;
-      if (line && line.length > 0) form.setValue("drawdownFrom", Math.max(line[0][1], line[line.length - 1][1]));
-    }
+    onWater(pickWaterCondition(doc, c.key).id, c.key);
     if (c.faces !== "both" && c.faces !== values.face) {
       form.setValue("face", c.faces);
       placeGrid(c.faces);
@@ -108,11 +129,31 @@ export function RunSetupForm({
   const done = search.state.status === "done" ? search.state.message : null;
   const running = search.state.status === "running";
   const drawdownTo = loadingCondition(values.condition).engineCase === "drawdown" ? values.drawdownTo : undefined;
+  // The canvas shows the water the run will analyse, not whichever line the editor last drew.
+  const chosenWater = useMemo(() => {
+    try {
+      return waterConditionForRun(doc, {
+        condition: values.condition,
+        waterCondition: values.waterCondition || undefined,
+      });
+    } catch {
+      return null;
+    }
+  }, [doc, values.condition, values.waterCondition]);
+  const shownDoc = useMemo(() => (chosenWater ? withWater(doc, chosenWater.water) : doc), [doc, chosenWater]);
 
   return (
     <div className="grid gap-4 xl:grid-cols-[22rem_1fr]">
       <form onSubmit={onRun} className="panel space-y-5 self-start p-4" noValidate data-testid="run-setup-form">
-        <ConditionFields form={form} onCondition={onCondition} />
+        <ConditionFields form={form} onCondition={onCondition}>
+          <WaterConditionField
+            doc={doc}
+            conditions={waterConditionsOf(doc)}
+            loadingCondition={values.condition}
+            value={chosenWater?.id ?? ""}
+            onChange={(id) => onWater(id)}
+          />
+        </ConditionFields>
         <MethodFields form={form} />
         <GridFields form={form} onSuggest={() => placeGrid()} />
         <button type="submit" className="btn-primary w-full" disabled={running}>
@@ -126,7 +167,7 @@ export function RunSetupForm({
       <div className="min-w-0 space-y-3">
         <SearchProgress state={search.state} onCancel={search.cancel} />
         <RunCanvas
-          document={doc}
+          document={shownDoc}
           materialColors={materialColors}
           grid={gridForCanvas}
           radii={radiiForCanvas}

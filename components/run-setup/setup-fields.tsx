@@ -43,7 +43,16 @@ function Num({
   );
 }
 
-export function ConditionFields({ form, onCondition }: { form: SetupForm; onCondition: (key: string) => void }) {
+export function ConditionFields({
+  form,
+  onCondition,
+  children,
+}: {
+  form: SetupForm;
+  onCondition: (key: string) => void;
+  /** The water condition field, placed under the loading condition it follows. */
+  children?: React.ReactNode;
+}) {
   const condition = form.watch("condition");
   const isDrawdown = LOADING_CONDITIONS.find((c) => c.key === condition)?.engineCase === "drawdown";
   return (
@@ -60,6 +69,7 @@ export function ConditionFields({ form, onCondition }: { form: SetupForm; onCond
           </option>
         ))}
       </select>
+      {children}
       <div className="flex gap-4 text-sm" role="radiogroup" aria-label="Face checked">
         {(["upstream", "downstream"] as const).map((f) => (
           <label key={f} className="inline-flex items-center gap-1.5">

@@ -7,6 +7,7 @@ import type { GridSearchSuccess, SectionDocument, SliceRow } from "@/lib/stabili
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import { materialPalette } from "@/lib/sections/material-palette";
+import { waterUsedText } from "@/lib/runs/water-used";
 import { downloadText, slug } from "@/lib/client/download";
 import { RunCanvas } from "@/components/runs/run-canvas";
 import { FsSummary } from "@/components/runs/fs-summary";
@@ -60,6 +61,7 @@ export function RunView({
         <StatusBadge status={run.status} />
         <span>{condition?.label ?? run.loadingCondition}</span>
         <span className="capitalize">{run.face} face</span>
+        <span data-testid="run-water">Water: {waterUsedText(run)}</span>
         <span>
           {run.sectionName} v{run.sectionVersion}
         </span>

@@ -82,7 +82,16 @@ export function CanvasKey({ scene, setup }: { scene: RunScene; setup: boolean })
           slice sides ({scene.slices.length - 1} slices)
         </Item>
       ) : null}
-      {scene.phreatic ? <Item sample={<LineSample colour={WATER_LINE} dash={[9, 5]} />}>phreatic line</Item> : null}
+      {scene.phreatic ? (
+        <Item sample={<LineSample colour={WATER_LINE} dash={[9, 5]} />}>
+          {scene.beforeDrawdown ? "pore-water level after drawdown (analysed)" : "phreatic line"}
+        </Item>
+      ) : null}
+      {scene.beforeDrawdown ? (
+        <Item sample={<LineSample colour={WATER_LINE} dash={[3, 4]} width={1} opacity={0.45} />}>
+          line before drawdown (not analysed)
+        </Item>
+      ) : null}
       {scene.ponds.length > 0 ? (
         <Item
           sample={

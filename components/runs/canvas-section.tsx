@@ -55,6 +55,7 @@ export function SectionShapes({ scene, view }: { scene: RunScene; view: RunView 
           lineJoin="round"
         />
       ) : null}
+      {scene.beforeDrawdown ? <BeforeDrawdown scene={scene} view={view} /> : null}
       {scene.phreatic ? (
         <Line
           name="phreatic"
@@ -82,6 +83,29 @@ export function SectionShapes({ scene, view }: { scene: RunScene; view: RunView 
             );
           })
         : null}
+    </Group>
+  );
+}
+
+/** The line before drawdown, faint and labelled, so it is not read as the water analysed. */
+function BeforeDrawdown({ scene, view }: { scene: RunScene; view: RunView }) {
+  const before = scene.beforeDrawdown!;
+  const [lx, ly] = toScreen(view, before.labelAt[0], before.labelAt[1]);
+  const rightEdge = scene.ground.length >= 2 && before.labelAt[0] >= scene.ground[scene.ground.length - 2];
+  const text =
+    before.level !== null ? `before drawdown ${before.level.toFixed(1)} m (not analysed)` : "line before drawdown";
+  return (
+    <Group name="before-drawdown" opacity={0.45}>
+      <Line points={screenPoints(view, before.points)} stroke={WATER_LINE} strokeWidth={1} dash={[3, 4]} />
+      <Text
+        x={rightEdge ? lx - 324 : lx + 4}
+        y={ly - 15}
+        width={320}
+        align={rightEdge ? "right" : "left"}
+        text={text}
+        fontSize={11}
+        fill={WATER_LINE}
+      />
     </Group>
   );
 }

@@ -9,6 +9,8 @@ export interface CompareRun {
   label: string;
   /** Second line under the label: section and version, load case, face. */
   detail?: string;
+  /** The water condition the run analysed. */
+  water?: string;
   requiredFs?: number | null;
   fs: { bishop?: number | null; fellenius?: number | null };
   /** Colour of the run's circle on the overlay canvas, repeated as a swatch. */
@@ -62,6 +64,18 @@ export function CompareTable({ runs }: CompareTableProps) {
           </tr>
         </thead>
         <tbody>
+          {runs.some((r) => r.water) ? (
+            <tr className="border-t border-rule align-top" data-testid="compare-row-water">
+              <th scope="row" className="px-2 py-1.5 text-left font-normal text-ink-soft">
+                Water
+              </th>
+              {runs.map((r) => (
+                <td key={r.id} className="px-2 py-1.5 text-xs" data-run={r.id}>
+                  {r.water ?? "—"}
+                </td>
+              ))}
+            </tr>
+          ) : null}
           <tr className="border-t border-rule">
             <th scope="row" className="px-2 py-1.5 text-left font-normal text-ink-soft">
               Required FS

@@ -22,6 +22,16 @@ import { useEditorKeys } from "./use-editor-keys";
 import { useView, ZOOM_STEP } from "./use-view";
 import { VertexTable } from "./vertex-table";
 import { WaterPanel } from "./water-panel";
+import { WaterConditionsPanel } from "./water-conditions-panel";
+import {
+  addWaterCondition,
+  drawnConditionId,
+  removeWaterCondition,
+  showWaterCondition,
+  storeDrawnWater,
+  updateWaterCondition,
+} from "@/lib/sections/water-condition-edits";
+import { waterConditionsOf } from "@/lib/sections/water-conditions";
 
 export type { SectionEditorProps, MaterialSwatch, EditorIssue } from "./types";
 
@@ -45,7 +55,14 @@ export function SectionEditor({
   height = 520,
 }: SectionEditorProps) {
   const history = useEditorDocument(document, onChange);
-  const doc = history.current();
+  const stored = history.current();
+  const [chosenWater, setChosenWater] = useState<string | null>(null);
+  // The editor draws and edits one water condition at a time. Choosing which is a view, not an
+  // edit: the stored document only changes when the drawing does.
+  const activeWater = waterConditionsOf(stored).some((c) => c.id === chosenWater)
+    ? chosenWater!
+    : drawnConditionId(stored);
+  const doc = useMemo(() => showWaterCondition(stored, activeWater), [stored, activeWater]);
   const [tool, setToolState] = useState<ToolName>("select");
   const [rawSelection, setSelection] = useState<Selection | null>(null);
   const [draft, setDraft] = useState<Draft | null>(null);
@@ -56,6 +73,7 @@ export function SectionEditor({
   const [focusedIssue, setFocusedIssue] = useState<number | null>(null);
   const [newRegionMaterial, setNewRegionMaterial] = useState(materials[0]?.key ?? doc.materials[0]?.id ?? "");
   const containerRef = useRef<HTMLDivElement>(null);
+  const commit = (next: SectionDocument) => history.commit(storeDrawnWater(stored, next, activeWater));
 
   // Undo or a deletion can leave the selection pointing past the end.
   const selection = clampSelection(doc, rawSelection);
@@ -80,7 +98,7 @@ export function SectionEditor({
     setDraft,
     newRegionMaterial,
     gridStep,
-    commit: history.commit,
+    commit,
     say: setMessage,
     showPoint: view.showPoint,
   };
@@ -277,6 +295,24 @@ export function SectionEditor({
               setToolState("select");
               setDraft(null);
               actions.focusIssue(issues[i]);
+            }}
+          />
+          <WaterConditionsPanel
+            doc={doc}
+            activeId={activeWater}
+            readOnly={readOnly}
+            onShow={setChosenWater}
+            onAdd={(name) => {
+              const added = addWaterCondition(doc, name);
+              setChosenWater(added.id);
+              history.commit(storeDrawnWater(stored, added.doc, activeWater));
+            }}
+            onUpdate={(id, patch) => history.commit(updateWaterCondition(stored, id, patch))}
+            onRemove={(id) => {
+              const r = removeWaterCondition(stored, id);
+              if (!r) return;
+              setChosenWater(r.shown);
+              history.commit(r.doc);
             }}
           />
           <WaterPanel doc={doc} readOnly={readOnly} onApply={actions.applyReservoir} />

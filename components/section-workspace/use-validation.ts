@@ -2,12 +2,14 @@
 
 import { useDeferredValue, useMemo } from "react";
 import { validateSection, type Issue, type SectionDocument } from "@/lib/stability";
+import { checkWaterConditions } from "@/lib/sections/check-water-conditions";
 
-/** The engine's validation of the working document, recomputed as the drawing changes. */
+/** The engine's validation of the working document and its water conditions, recomputed as the drawing changes. */
 export function useValidation(doc: SectionDocument): { errors: Issue[]; warnings: Issue[] } {
   const deferred = useDeferredValue(doc);
   return useMemo(() => {
     const v = validateSection(deferred);
-    return v.ok ? { errors: [], warnings: v.warnings } : { errors: v.errors, warnings: v.warnings };
+    if (!v.ok) return { errors: v.errors, warnings: v.warnings };
+    return { errors: checkWaterConditions(deferred).errors, warnings: v.warnings };
   }, [deferred]);
 }

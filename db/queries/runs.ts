@@ -23,6 +23,8 @@ export interface RunSummary {
   createdAt: string;
   revisesRunId: number | null;
   loadingCondition: string;
+  /** The section's water condition the run analysed; null for runs kept before named conditions. */
+  waterCondition: { id: string; name: string } | null;
 }
 
 const num = (v: unknown) => (v === null || v === undefined ? null : Number(v));
@@ -47,6 +49,9 @@ export function toRunSummary(r: Record<string, unknown>): RunSummary {
     createdAt: new Date(r.created_at as Date).toISOString(),
     revisesRunId: (r.revises_run_id as number) ?? null,
     loadingCondition: r.loading_condition as string,
+    waterCondition: r.water_condition_id
+      ? { id: r.water_condition_id as string, name: r.water_condition_name as string }
+      : null,
   };
 }
 
@@ -74,6 +79,8 @@ export function runSummaryQuery(db: Knex) {
       "r.created_at",
       "r.revises_run_id",
       "r.loading_condition",
+      "r.water_condition_id",
+      "r.water_condition_name",
     );
 }
 
@@ -122,6 +129,7 @@ export interface NewRun {
   sectionVersionId: number;
   title: string;
   loadingCondition: string;
+  waterCondition?: { id: string; name: string } | null;
   loadCase: "steady" | "drawdown" | "undrained";
   face: "upstream" | "downstream";
   methods: string[];
@@ -166,6 +174,8 @@ export async function createRun(run: NewRun, db: Knex = getDb()): Promise<number
       revises_run_id: run.revisesRunId ?? null,
       title: run.title,
       loading_condition: run.loadingCondition,
+      water_condition_id: run.waterCondition?.id ?? null,
+      water_condition_name: run.waterCondition?.name ?? null,
       load_case: run.loadCase,
       face: run.face,
       methods: run.methods.join(","),

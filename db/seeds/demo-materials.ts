@@ -130,7 +130,8 @@ const DEMO: DemoMaterial[] = [
   {
     key: "drain",
     name: "Gravel toe drain",
-    color: MATERIAL_COLORS[4],
+    // Sand-yellow, not the palette's light blue: on a section a blue drain reads as ponded water.
+    color: MATERIAL_COLORS[2],
     notes: "Clean graded gravel; drains freely, so it keeps its drained strength in every case.",
     parameters: { model: "mohr-coulomb", gamma: 20, gammaSat: 21, c: 0, phi: 36, freeDraining: true },
     sets: [],

@@ -1,5 +1,6 @@
 import type { SectionDocument } from "../../lib/stability";
 import { computeFilterSeepage } from "../../lib/stability/seepage";
+import type { StoredSection, WaterCondition } from "../../lib/sections/water-conditions";
 
 /**
  * The demo cross-section, invented: a 12 m homogeneous compacted-clay embankment (3H:1V
@@ -7,8 +8,11 @@ import { computeFilterSeepage } from "../../lib/stability/seepage";
  * 12 m gravel blanket drain at the downstream toe and the normal pool at 16.0 m.
  * The phreatic line is the Kozeny–Casagrande line for that drain, treating the foundation as
  * much less permeable than the fill (stated on the section so the engineer can change it).
+ * Its water conditions are the set a dam file carries (levels invented): steady seepage at the
+ * maximum storage and surcharge pools, end of construction with no reservoir, and a drawdown
+ * from each pool.
  */
-export const DEMO_POOL = { normal: 16, flood: 17, drawdownTo: 8 };
+export const DEMO_POOL = { normal: 16, flood: 17, drawdownTo: 8, constructionGroundwater: 5.5 };
 
 /** The values the demo library derives from its lab sets (db/seeds/demo-materials.ts), for use without a database. */
 export const DEMO_MATERIALS: SectionDocument["materials"] = [
@@ -61,10 +65,11 @@ function fillGammaSat(materials: SectionDocument["materials"]): number {
   return fill && fill.model !== "impenetrable" ? (fill.gammaSat ?? fill.gamma ?? 20) : 20;
 }
 
-export function buildDemoSection(materials: SectionDocument["materials"] = DEMO_MATERIALS): SectionDocument {
+/** The Kozeny–Casagrande line through the fill to the drain for a pool level (m), from the left edge to the right. */
+function seepageLine(materials: SectionDocument["materials"], pool: number): [number, number][] {
   const seepage = computeFilterSeepage({
     baseElevation: 6,
-    poolElevation: DEMO_POOL.normal,
+    poolElevation: pool,
     upstreamFace: { toe: UPSTREAM_TOE, crest: UPSTREAM_CREST },
     filterStartX: 80,
     downstreamFace: { crest: DOWNSTREAM_CREST, toe: DOWNSTREAM_TOE },
@@ -72,11 +77,69 @@ export function buildDemoSection(materials: SectionDocument["materials"] = DEMO_
     gammaSat: fillGammaSat(materials),
   });
   if (!seepage.ok) throw new Error(`demo seepage line failed: ${seepage.limits.map((l) => l.message).join("; ")}`);
-  const line: [number, number][] = [[0, DEMO_POOL.normal]];
+  const line: [number, number][] = [[0, pool]];
   for (const [x, y] of seepage.construction.waterLine) {
     if (x > line[line.length - 1][0] + 1e-6) line.push([+x.toFixed(3), +y.toFixed(3)]);
   }
   line.push([110, 6]);
+  return line;
+}
+
+function demoWaterConditions(materials: SectionDocument["materials"]): WaterCondition[] {
+  const storage = { gammaW: 9.81, phreatic: seepageLine(materials, DEMO_POOL.normal) };
+  const surcharge = { gammaW: 9.81, phreatic: seepageLine(materials, DEMO_POOL.flood) };
+  const g = DEMO_POOL.constructionGroundwater;
+  return [
+    {
+      id: "storage-pool",
+      name: `Steady seepage, maximum storage pool ${DEMO_POOL.normal.toFixed(1)} m`,
+      kind: "steady",
+      water: storage,
+      usualFor: ["steady-seepage"],
+    },
+    {
+      id: "surcharge-pool",
+      name: `Steady seepage, maximum surcharge pool ${DEMO_POOL.flood.toFixed(1)} m`,
+      kind: "steady",
+      water: surcharge,
+      usualFor: ["surcharge-pool"],
+    },
+    {
+      // Fill and foundation carry their undrained strength su at end of construction; the line
+      // gives the pore pressures of the free-draining drain and shows there is no reservoir.
+      id: "end-of-construction",
+      name: `End of construction, no reservoir, groundwater at ${g.toFixed(1)} m`,
+      kind: "construction",
+      water: {
+        gammaW: 9.81,
+        phreatic: [
+          [0, g],
+          [110, g],
+        ],
+      },
+      usualFor: ["end-of-construction"],
+    },
+    {
+      id: "drawdown-storage",
+      name: `Rapid drawdown, ${DEMO_POOL.normal.toFixed(1)} m to ${DEMO_POOL.drawdownTo.toFixed(1)} m`,
+      kind: "drawdown",
+      water: storage,
+      drawdownTo: DEMO_POOL.drawdownTo,
+      usualFor: ["drawdown-storage"],
+    },
+    {
+      id: "drawdown-surcharge",
+      name: `Rapid drawdown, ${DEMO_POOL.flood.toFixed(1)} m to ${DEMO_POOL.drawdownTo.toFixed(1)} m`,
+      kind: "drawdown",
+      water: surcharge,
+      drawdownTo: DEMO_POOL.drawdownTo,
+      usualFor: ["drawdown-surcharge"],
+    },
+  ];
+}
+
+export function buildDemoSection(materials: SectionDocument["materials"] = DEMO_MATERIALS): StoredSection {
+  const waterConditions = demoWaterConditions(materials);
   return {
     version: 1,
     materials,
@@ -127,6 +190,8 @@ export function buildDemoSection(materials: SectionDocument["materials"] = DEMO_
         ],
       },
     ],
-    water: { gammaW: 9.81, phreatic: line },
+    // The water drawn in the editor; each run takes the water of its condition.
+    water: waterConditions[0].water,
+    waterConditions,
   };
 }

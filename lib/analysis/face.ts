@@ -3,14 +3,26 @@
  * reservoir, the downstream face is dry. The reservoir side is read off the phreatic line
  * (higher water on the reservoir side); sliding on a face moves soil away from the crest.
  */
-import type { SectionDocument } from "../stability";
+import type { SectionDocument, Water } from "../stability";
+import { waterConditionsOf } from "../sections/water-conditions";
 
 export type Face = "upstream" | "downstream";
 export type Side = "left" | "right";
 
-/** The side of the reservoir, or null when the document has no phreatic line to tell. */
+/**
+ * The side of the reservoir, or null when no water of the section has a phreatic line to tell
+ * (the drawn water first, then each named water condition).
+ */
 export function reservoirSide(doc: SectionDocument): Side | null {
-  const line = doc.water?.phreatic;
+  for (const water of [doc.water, ...waterConditionsOf(doc).map((c) => c.water)]) {
+    const side = sideOfLine(water);
+    if (side) return side;
+  }
+  return null;
+}
+
+function sideOfLine(water: Water | undefined): Side | null {
+  const line = water?.phreatic;
   if (!line || line.length < 2) return null;
   const first = line[0][1];
   const last = line[line.length - 1][1];

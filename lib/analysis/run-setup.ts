@@ -7,10 +7,13 @@ import { gridSchema, radiiSchema, type Analysis, type SectionDocument } from "..
 import { directionForFace } from "./face";
 import { LOADING_CONDITION_KEYS, loadingCondition, type LoadingConditionKey } from "./required-fs";
 import { MAX_SEARCH_CIRCLES, searchCircleCount, tooManyCirclesMessage } from "../run-records/limits";
+import { findWaterCondition, pickWaterCondition, withWater, type WaterCondition } from "../sections/water-conditions";
 
 export const runSetupSchema = z
   .object({
     condition: z.enum(LOADING_CONDITION_KEYS, { error: "Choose a loading condition." }),
+    /** Key of the section's water condition analysed; absent: the loading condition's usual water. */
+    waterCondition: z.string().max(40).optional(),
     face: z.enum(["upstream", "downstream"], { error: "Choose the face to check." }),
     methods: z.array(z.enum(["bishop", "fellenius"])).min(1, "Choose at least one method."),
     slices: z
@@ -82,7 +85,28 @@ export function toAnalysis(doc: SectionDocument, setup: RunSetup): Analysis {
   return analysis;
 }
 
-/** The document a run analyses: the section version with the run's analysis block. */
-export function documentForRun(section: SectionDocument, setup: RunSetup): SectionDocument {
-  return { ...section, analysis: toAnalysis(section, setup) };
+/** Thrown when a set-up names a water condition the section version does not have. */
+export class UnknownWaterConditionError extends Error {
+  constructor(readonly id: string) {
+    super(`The section has no water condition “${id}”. Reload the run form and choose one of its waters.`);
+    this.name = "UnknownWaterConditionError";
+  }
+}
+
+/** The section's water condition a set-up analyses: the one it names, else its loading condition's usual one. */
+export function waterConditionForRun(section: SectionDocument, setup: Pick<RunSetup, "condition" | "waterCondition">) {
+  if (setup.waterCondition === undefined) return pickWaterCondition(section, setup.condition);
+  const found = findWaterCondition(section, setup.waterCondition);
+  if (!found) throw new UnknownWaterConditionError(setup.waterCondition);
+  return found;
+}
+
+/**
+ * The document a run analyses: the section version with the chosen condition's water as the
+ * engine's one water block, and the run's analysis block.
+ */
+export function documentForRun(section: SectionDocument, setup: RunSetup, water?: WaterCondition): SectionDocument {
+  const condition = water ?? waterConditionForRun(section, setup);
+  // The face's direction is read from the whole section: an end-of-construction water has no pool to tell it.
+  return { ...withWater(section, condition.water), analysis: toAnalysis(section, setup) };
 }

@@ -62,7 +62,8 @@ export function readSweep(points: readonly SweepPoint[], required: RequiredFs): 
       required: required[c.key],
       steepest: own.length
         ? steepestPassingRatio(
-            own.map((p) => ({ ratio: p.ratio, fs: p.fsBishop })),
+            // A minimum still on the grid's edge is not a settled FS: it cannot count as passing.
+            own.map((p) => ({ ratio: p.ratio, fs: p.gridEdge ? null : p.fsBishop })),
             required[c.key],
           )
         : null,

@@ -34,6 +34,10 @@ export interface SweepPoint {
   circle: Circle | null;
   /** FS change one grid step away from the minimum (see gridResolution). */
   resolution: number | null;
+  /** How many times the grid was moved and searched again because its minimum lay on its edge. */
+  gridMoves: number;
+  /** True when the minimum still lies on a movable edge after the last move allowed: not a settled FS. */
+  gridEdge: boolean;
   grid: Grid | null;
   radii: Radii | null;
   /** Fill cross-section area at this pair of ratios (m² = m³ per metre of dam). */
@@ -83,8 +87,13 @@ export function analysisForJob(
   return analysis;
 }
 
+/** Moves of the grid toward an edge minimum before the point is reported as unsettled. */
+export const MAX_GRID_MOVES = 3;
+
 export interface JobSearch {
   generated: GeneratedEmbankment;
+  gridMoves: number;
+  gridEdge: boolean;
   /** The document searched, with its analysis block. */
   document: SectionDocument;
   result: GridSearchSuccess;
@@ -93,7 +102,11 @@ export interface JobSearch {
 export type JobSearchOutcome =
   { ok: true; search: JobSearch } | { ok: false; error: string; generated: GeneratedEmbankment | null };
 
-/** Generates the job's section and runs its grid search, moving the grid once if the minimum is on its edge. */
+/**
+ * Generates the job's section and runs its grid search. While the minimum lies on a movable edge
+ * of the grid, the grid is moved toward it and searched again (up to MAX_GRID_MOVES times); a
+ * move that finds nothing lower settles the edge, since the ground beyond it has been searched.
+ */
 export function searchJob(
   params: EmbankmentParams,
   materials: readonly Material[],
@@ -124,15 +137,26 @@ export function searchJob(
   let best = run(first.grid, first.radii);
   if (!best.result.ok)
     return { ok: false, error: best.result.errors.map((e) => `${e.path}: ${e.message}`).join("; "), generated };
-  const map = best.result.fsMap.bishop;
-  const moved = map ? shiftTowardEdge(first.grid, map, params.crestElevation) : null;
-  if (moved) {
+  const fs = (r: ReturnType<typeof runGridSearch>) => (r.ok ? (r.results.bishop?.fs ?? Infinity) : Infinity);
+  let grid = first.grid;
+  let gridMoves = 0;
+  let gridEdge = false;
+  for (;;) {
+    const map = best.result.ok ? best.result.fsMap.bishop : undefined;
+    const moved = map ? shiftTowardEdge(grid, map, params.crestElevation) : null;
+    if (!moved) break;
+    if (gridMoves === MAX_GRID_MOVES) {
+      gridEdge = true;
+      break;
+    }
     const again = run(moved, first.radii);
-    const fs = (r: typeof best.result) => (r.ok ? (r.results.bishop?.fs ?? Infinity) : Infinity);
-    if (again.result.ok && fs(again.result) < fs(best.result)) best = again;
+    gridMoves++;
+    if (!again.result.ok || !(fs(again.result) < fs(best.result))) break;
+    best = again;
+    grid = moved;
   }
   if (!best.result.ok) return { ok: false, error: "The search failed.", generated };
-  return { ok: true, search: { generated, document: best.document, result: best.result } };
+  return { ok: true, search: { generated, gridMoves, gridEdge, document: best.document, result: best.result } };
 }
 
 /** Runs one job and condenses it to a sweep point (plain JSON). */
@@ -160,6 +184,8 @@ export function runSweepJob(
       fsOrdinary: null,
       circle: null,
       resolution: null,
+      gridMoves: 0,
+      gridEdge: false,
       grid: null,
       radii: null,
       fillArea: outcome.generated?.quantities.fillArea ?? 0,
@@ -168,7 +194,7 @@ export function runSweepJob(
       elapsedMs: Date.now() - t0,
     };
   }
-  const { result, document, generated } = outcome.search;
+  const { result, document, generated, gridMoves, gridEdge } = outcome.search;
   const bishop = result.results.bishop ?? null;
   const analysis = document.analysis as Analysis;
   return {
@@ -177,6 +203,8 @@ export function runSweepJob(
     fsOrdinary: result.results.fellenius?.fs ?? null,
     circle: bishop?.circle ?? null,
     resolution: result.fsMap.bishop ? gridResolution(result.fsMap.bishop) : null,
+    gridMoves,
+    gridEdge,
     grid: analysis.grid ?? null,
     radii: analysis.radii ?? null,
     fillArea: generated.quantities.fillArea,

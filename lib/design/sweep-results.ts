@@ -23,6 +23,9 @@ export const sweepPointSchema = z.object({
   fsOrdinary: fs,
   circle: z.object({ xc: z.number(), yc: z.number(), r: z.number().positive() }).nullable(),
   resolution: z.number().min(0).max(1000).nullable(),
+  // Sweeps kept before the grid followed its minimum read as not moved and settled.
+  gridMoves: z.number().int().min(0).max(100).default(0),
+  gridEdge: z.boolean().default(false),
   grid: gridSchema.nullable(),
   radii: radiiSchema.nullable(),
   fillArea: z.number().min(0),

@@ -14,6 +14,7 @@ import { STATUS_WORDS, type RunStatus } from "../review/status";
 import type { MaterialSourceRecord } from "../review/material-sources";
 import { ALARM, MOSS, ReportWriter, SOFT, INK } from "./report-writer";
 import { drawSection } from "./section-drawing";
+import { waterUsedText } from "../runs/water-used";
 import { writeSliceTable } from "./slice-pages";
 
 export interface ReportInput {
@@ -25,6 +26,7 @@ export interface ReportInput {
     sectionName: string;
     sectionVersion: number;
     loadingCondition: string;
+    waterCondition: { id: string; name: string } | null;
     face: string;
     requiredFs: number;
     fsBishop: number | null;
@@ -108,7 +110,7 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
   ]);
   w.heading("Water conditions");
   const water = doc.water;
-  const rows: [string, string][] = [];
+  const rows: [string, string][] = [["Water condition", waterUsedText(run)]];
   if (water?.phreatic?.length) {
     const ys = water.phreatic.map((p) => p[1]);
     rows.push([
@@ -124,7 +126,8 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
       `pool from ${m2(doc.analysis.drawdown.from)} m to ${m2(doc.analysis.drawdown.to)} m (${doc.analysis.drawdown.method ?? "effective"} method)`,
     ]);
   rows.push(["Unit weight of water", `${(water?.gammaW ?? 9.81).toFixed(2)} kN/m³`]);
-  if (!water?.phreatic?.length && water?.ru === undefined) rows.unshift(["Water", "dry: no phreatic line and no ru"]);
+  if (!water?.phreatic?.length && water?.ru === undefined)
+    rows.splice(1, 0, ["Water", "dry: no phreatic line and no ru"]);
   w.keyValues(rows);
 
   w.heading("Method and search settings");
@@ -189,7 +192,10 @@ function writeResults(w: ReportWriter, input: ReportInput): void {
     drawdownTo: run.document.analysis?.drawdown?.to,
   });
   w.paragraph(
-    "Regions filled by material; blue line: phreatic surface; dotted blue: pool after drawdown; dashed grey rectangle: grid of trial centres; bold arcs: critical slip surfaces with their centres marked.",
+    "Regions filled by material; blue line: the pore-water level analysed (after a drawdown, the lowered one); " +
+      "light blue: ponded water; faint dashed blue: the line before drawdown (not analysed); dotted blue: pool " +
+      "after drawdown; dashed grey rectangle: grid of trial centres; bold arcs: critical slip surfaces with their " +
+      "centres marked.",
     { size: 7.5, color: SOFT },
   );
   w.heading("Warnings");

@@ -6,6 +6,7 @@
 import { rgb, type RGB } from "pdf-lib";
 import type { CircleFs, Grid, SectionDocument } from "../stability";
 import { arcPoints } from "../runs/circle-arc";
+import { buildRunScene } from "../runs/run-scene";
 import { niceTicks } from "../runs/nice-ticks";
 import { materialPalette } from "../sections/material-palette";
 import { INK, SOFT, type ReportWriter } from "./report-writer";
@@ -18,6 +19,7 @@ export interface DrawingInput {
 }
 
 const WATER = rgb(0.1, 0.35, 0.75);
+const POND = rgb(0.66, 0.8, 0.89);
 const CIRCLE_STYLE = {
   bishop: { color: rgb(0.62, 0.14, 0.1), dash: undefined as number[] | undefined, label: "Bishop" },
   fellenius: { color: rgb(0.2, 0.2, 0.2), dash: [5, 3], label: "Ordinary" },
@@ -85,21 +87,7 @@ export function drawSection(w: ReportWriter, input: DrawingInput, height = 300):
       borderWidth: 0.5,
     });
   }
-  const phreatic = input.document.water?.phreatic;
-  if (phreatic && phreatic.length >= 2)
-    page.drawSvgPath(path(phreatic, false), { ...at, borderColor: WATER, borderWidth: 1.2 });
-  if (input.drawdownTo !== undefined) {
-    page.drawSvgPath(
-      path(
-        [
-          [b.x0, input.drawdownTo],
-          [b.x1, input.drawdownTo],
-        ],
-        false,
-      ),
-      { ...at, borderColor: WATER, borderWidth: 0.8, borderDashArray: [2, 2] },
-    );
-  }
+  drawWater(w, input, { path, at, sx, sy });
   if (input.grid) {
     const g = input.grid;
     page.drawSvgPath(
@@ -170,4 +158,71 @@ function drawAxes(
   }
   w.text("x (m)", t.originX + t.sx(b.x1) - 14, baseY - 16, 6.5, { color: SOFT });
   w.text("elevation (m)", w.left - 6, t.originY + 4, 6.5, { color: SOFT });
+}
+
+type Path = (pts: readonly (readonly [number, number])[], close: boolean) => string;
+
+const pairs = (flat: readonly number[]): [number, number][] => {
+  const out: [number, number][] = [];
+  for (let i = 0; i + 1 < flat.length; i += 2) out.push([flat[i], flat[i + 1]]);
+  return out;
+};
+
+/**
+ * The water analysed, as on the run canvas (one scene for both): ponded water, the pore-water
+ * level (after a drawdown, the lowered one), the lowered pool over the reservoir only, and the
+ * line before drawdown faint and labelled.
+ */
+function drawWater(
+  w: ReportWriter,
+  input: DrawingInput,
+  t: { path: Path; at: { x: number; y: number }; sx: (x: number) => number; sy: (y: number) => number },
+): void {
+  const scene = buildRunScene({ document: input.document, drawdownTo: input.drawdownTo });
+  const page = w.page;
+  for (const pond of scene.ponds) page.drawSvgPath(t.path(pairs(pond), true), { ...t.at, color: POND, opacity: 0.7 });
+  const before = scene.beforeDrawdown;
+  if (before) {
+    page.drawSvgPath(t.path(pairs(before.points), false), {
+      ...t.at,
+      borderColor: WATER,
+      borderWidth: 0.5,
+      borderDashArray: [2, 2],
+      borderOpacity: 0.45,
+    });
+    if (before.level !== null)
+      w.text(
+        `before drawdown ${before.level.toFixed(1)} m (not analysed)`,
+        t.at.x + t.sx(before.labelAt[0]) + 3,
+        t.at.y - t.sy(before.labelAt[1]) + 3,
+        6.5,
+        { color: WATER },
+      );
+  }
+  if (scene.phreatic && scene.phreatic.length >= 4)
+    page.drawSvgPath(t.path(pairs(scene.phreatic), false), { ...t.at, borderColor: WATER, borderWidth: 1.2 });
+  const pool = scene.pool;
+  if (pool) {
+    for (const [a, b] of pool.spans) {
+      page.drawSvgPath(
+        t.path(
+          [
+            [a, pool.level],
+            [b, pool.level],
+          ],
+          false,
+        ),
+        { ...t.at, borderColor: WATER, borderWidth: 1, borderDashArray: [1.5, 1.5] },
+      );
+    }
+    const first = pool.spans[0];
+    if (first)
+      w.text(
+        `pool after drawdown ${pool.level.toFixed(1)} m`,
+        t.at.x + t.sx(first[0]) + 3,
+        t.at.y - t.sy(pool.level) - 8,
+        6.5,
+        { color: WATER },
+      );
+  }
 }

@@ -4,7 +4,14 @@
  * the preview compared. Nothing the browser computed is stored.
  */
 import { ApiError } from "../api/errors";
-import { documentForRun, runSetupSchema, type RunSetup } from "../analysis/run-setup";
+import {
+  documentForRun,
+  runSetupSchema,
+  UnknownWaterConditionError,
+  waterConditionForRun,
+  type RunSetup,
+} from "../analysis/run-setup";
+import type { WaterCondition } from "../sections/water-conditions";
 import {
   validateSection,
   type GridSearchSuccess,
@@ -26,6 +33,8 @@ export interface RunRecord {
   sliceTables: StoredSliceTables;
   fsBishop: number | null;
   fsFellenius: number | null;
+  /** The section's water condition the run analysed (its key and name as they stood in that version). */
+  waterCondition: { id: string; name: string };
   /** Where the server searched (for the benchmark and the logs). */
   mode: "thread" | "in-process";
 }
@@ -45,7 +54,8 @@ export async function computeRunRecord(
 ): Promise<RunRecord> {
   // The shared schema carries the bound on the search's size (lib/run-records/limits.ts).
   const setup = runSetupSchema.parse(rawSetup);
-  const valid = validateSection(documentForRun(section, setup));
+  const water = waterConditionOrRefuse(section, setup);
+  const valid = validateSection(documentForRun(section, setup, water));
   if (!valid.ok) throw invalid("The section and set-up do not validate.", valid.errors);
   const { record, mode } = await searchOnServer(valid.section);
   if (!record.ok) throw invalid("The section and set-up do not validate.", record.errors);
@@ -67,6 +77,18 @@ export async function computeRunRecord(
     sliceTables,
     fsBishop: fsOf("bishop"),
     fsFellenius: fsOf("fellenius"),
+    waterCondition: { id: water.id, name: water.name },
     mode,
   };
+}
+
+/** The water condition the set-up names (or its loading condition's usual one); 400 if the version lacks it. */
+function waterConditionOrRefuse(section: SectionDocument, setup: RunSetup): WaterCondition {
+  try {
+    return waterConditionForRun(section, setup);
+  } catch (err) {
+    if (err instanceof UnknownWaterConditionError)
+      throw new ApiError(400, "unknown_water_condition", err.message, { "setup.waterCondition": [err.message] });
+    throw err;
+  }
 }

@@ -44,6 +44,7 @@ function runRow(record: RunRecord, meta: RunMeta): Omit<NewRun, "sectionId" | "s
     projectId: meta.projectId,
     title: meta.title,
     loadingCondition: condition.key,
+    waterCondition: record.waterCondition,
     loadCase: condition.engineCase,
     face: meta.setup.face,
     methods: meta.setup.methods,

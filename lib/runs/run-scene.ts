@@ -10,7 +10,8 @@ import { methodCircles, overlayCircles, type DrawnCircle } from "./circle-styles
 import { fsMapCells, fsRange, type FsCell, type FsRange } from "./fs-map-cells";
 import { bandLines, normaliseGrid, type BandLine } from "./grid-edit";
 import { materialFills } from "./material-tints";
-import { groundAt, groundLine, pondedWater, poolLevelSpans, sectionBox } from "./section-outline";
+import { groundAt, groundLine, lineAt, pondedWater, poolLevelSpans, sectionBox } from "./section-outline";
+import { poolSide, waterAfterDrawdown } from "./drawdown-water";
 import { unionBoxes, type Box } from "./view-fit";
 
 export type RunMethod = "bishop" | "fellenius";
@@ -40,7 +41,10 @@ export interface RunSceneInput {
 export interface RunScene {
   regions: { material: string; points: number[]; fill: string }[];
   ground: number[];
+  /** The pore-water level analysed: after a drawdown, the lowered one (docs/engine-io.md). */
   phreatic: number[] | null;
+  /** A drawdown's line before the pool was lowered, drawn faint, with its pool level and where to label it. */
+  beforeDrawdown: { points: number[]; level: number | null; labelAt: [number, number] } | null;
   ponds: number[][];
   pool: { level: number; spans: [number, number][] } | null;
   /** The method whose map and lowest circles are shown. */
@@ -83,12 +87,14 @@ export function buildRunScene(input: RunSceneInput): RunScene {
   const doc = input.document;
   const fills = materialFills(doc, input.materialsColors);
   const groundPts = groundLine(doc);
-  const phreaticPts = doc.water?.phreatic ?? null;
+  const drawdownTo = input.drawdownTo !== undefined && Number.isFinite(input.drawdownTo) ? input.drawdownTo : null;
+  const prePts = doc.water?.phreatic ?? null;
+  const phreaticPts = prePts && drawdownTo !== null ? waterAfterDrawdown(prePts, groundPts, drawdownTo) : prePts;
   const ponds = phreaticPts ? pondedWater(phreaticPts, groundPts) : [];
+  const pondsBefore = prePts ? pondedWater(prePts, groundPts) : [];
   const pool =
-    input.drawdownTo !== undefined && Number.isFinite(input.drawdownTo)
-      ? { level: input.drawdownTo, spans: poolLevelSpans(input.drawdownTo, groundPts, ponds) }
-      : null;
+    drawdownTo !== null ? { level: drawdownTo, spans: poolLevelSpans(drawdownTo, groundPts, pondsBefore) } : null;
+  const beforeDrawdown = prePts && drawdownTo !== null ? drawnBefore(prePts, groundPts) : null;
   const method = pickMethod(input.result, input.method);
   const map = method ? input.result?.fsMap[method] : undefined;
   const range = map ? fsRange(map.values, input.requiredFs) : null;
@@ -137,6 +143,7 @@ export function buildRunScene(input: RunSceneInput): RunScene {
     })),
     ground: groundPts.flat(),
     phreatic: phreaticPts ? phreaticPts.flat() : null,
+    beforeDrawdown,
     ponds,
     pool,
     method,
@@ -156,4 +163,13 @@ export function buildRunScene(input: RunSceneInput): RunScene {
       grid !== undefined,
     ]),
   };
+}
+
+/** The pre-drawdown line and, where it ponds, its pool level labelled at the reservoir-side edge. */
+function drawnBefore(pre: [number, number][], ground: [number, number][]): RunScene["beforeDrawdown"] {
+  const side = poolSide(pre, ground);
+  const edge = side === "right" ? ground[ground.length - 1]?.[0] : ground[0]?.[0];
+  const x = edge ?? pre[0][0];
+  const level = side ? lineAt(pre, x) : null;
+  return { points: pre.flat(), level, labelAt: [x, level ?? lineAt(pre, x)] };
 }

@@ -1,21 +1,28 @@
 import { validateSection, type SectionDocument, type Issue } from "../stability";
 import { ApiError } from "../api/errors";
+import { checkWaterConditions } from "./check-water-conditions";
+import type { StoredSection } from "./water-conditions";
 
 /**
- * Validates a section document with the engine's own rules before it is stored.
- * Answers 400 with one field per problem, keyed by its place in the document.
+ * Validates a section document with the engine's own rules, and its named water conditions,
+ * before it is stored. Answers 400 with one field per problem, keyed by its place in the document.
  */
-export function requireValidSection(raw: unknown): { document: SectionDocument; warnings: Issue[] } {
+export function requireValidSection(raw: unknown): { document: StoredSection; warnings: Issue[] } {
   const result = validateSection(raw);
-  if (!result.ok) {
+  const water = result.ok ? checkWaterConditions(raw as SectionDocument) : { errors: [] };
+  const errors = result.ok ? water.errors : result.errors;
+  if (!result.ok || errors.length > 0) {
     const fields: Record<string, string[]> = {};
-    for (const issue of result.errors) (fields[`document.${issue.path || "_"}`] ??= []).push(issue.message);
+    for (const issue of errors) (fields[`document.${issue.path || "_"}`] ??= []).push(issue.message);
     throw new ApiError(
       400,
       "invalid_section",
-      `The section has ${result.errors.length} problem${result.errors.length === 1 ? "" : "s"}; nothing was saved.`,
+      `The section has ${errors.length} problem${errors.length === 1 ? "" : "s"}; nothing was saved.`,
       fields,
     );
   }
-  return { document: result.section, warnings: result.warnings };
+  const document: StoredSection = water.conditions
+    ? { ...result.section, waterConditions: water.conditions }
+    : result.section;
+  return { document, warnings: result.warnings };
 }

@@ -4,6 +4,7 @@
  * Pure: no framework or database imports.
  */
 import type { Material, SectionDocument } from "../stability";
+import type { StoredSection } from "./water-conditions";
 
 export type DiffArea = "materials" | "geometry" | "water" | "loads" | "analysis";
 
@@ -119,6 +120,29 @@ function diffWater(a: SectionDocument, b: SectionDocument, out: Difference[]): v
     out.push({ area: "water", path: "water.gammaW", text: `γw ${show(wa.gammaW)} → ${show(wb.gammaW)}` });
 }
 
+const renamed = (a: string, b: string) => `water condition “${a}” renamed “${b}”`;
+
+/** Named water conditions by key: added, removed, renamed, or their water or levels changed. */
+function diffWaterConditions(a: SectionDocument, b: SectionDocument, out: Difference[]): void {
+  const before = new Map(((a as StoredSection).waterConditions ?? []).map((c) => [c.id, c]));
+  const after = new Map(((b as StoredSection).waterConditions ?? []).map((c) => [c.id, c]));
+  for (const [id, c] of after) {
+    const old = before.get(id);
+    const path = `waterConditions[${id}]`;
+    if (!old) {
+      out.push({ area: "water", path, text: `water condition “${c.name}” added` });
+      continue;
+    }
+    if (old.name !== c.name) out.push({ area: "water", path: `${path}.name`, text: renamed(old.name, c.name) });
+    const changed = (["kind", "water", "drawdownTo", "usualFor"] as const).filter((k) => !same(old[k], c[k]));
+    if (changed.length > 0)
+      out.push({ area: "water", path, text: `water condition “${c.name}”: ${changed.join(", ")} changed` });
+  }
+  for (const [id, c] of before)
+    if (!after.has(id))
+      out.push({ area: "water", path: `waterConditions[${id}]`, text: `water condition “${c.name}” removed` });
+}
+
 function diffLoads(a: SectionDocument, b: SectionDocument, out: Difference[]): void {
   if (!same(a.loads?.surcharges, b.loads?.surcharges))
     out.push({ area: "loads", path: "loads.surcharges", text: "surcharges changed" });
@@ -149,6 +173,7 @@ export function diffDocuments(a: SectionDocument, b: SectionDocument): Differenc
   diffMaterials(a.materials, b.materials, out);
   diffRegions(a, b, out);
   diffWater(a, b, out);
+  diffWaterConditions(a, b, out);
   diffLoads(a, b, out);
   diffAnalysis(a, b, out);
   return out;

@@ -18,6 +18,8 @@ const point = (id: string, fsBishop: number | null): SweepPoint => ({
   grid: null,
   radii: null,
   fillArea: 400,
+  gridMoves: 0,
+  gridEdge: false,
   warnings: [],
   error: fsBishop === null ? "No trial circle gave a factor of safety." : null,
   elapsedMs: 1,

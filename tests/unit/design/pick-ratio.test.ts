@@ -47,6 +47,8 @@ describe("planSweep and readSweep", () => {
       fsOrdinary: fs,
       circle: null,
       resolution: null,
+      gridMoves: 0,
+      gridEdge: false,
       grid: null,
       radii: null,
       fillArea: 100 * ratio,
