@@ -11,6 +11,7 @@ import { downloadText, slug } from "@/lib/client/download";
 import { RunCanvas } from "@/components/runs/run-canvas";
 import { FsSummary } from "@/components/runs/fs-summary";
 import { SliceTable } from "@/components/runs/slice-table";
+import { runFs } from "@/lib/runs/slice-csv";
 import { StatusBadge } from "@/components/run-list/status-badge";
 import { PinnedCanvas } from "@/components/review/pinned-canvas";
 import type { PinMarker } from "@/lib/review/pin-markers";
@@ -52,7 +53,6 @@ export function RunView({
   const colors = Object.fromEntries(materialPalette(doc.materials).map((m) => [m.key, m.color]));
   const drawdownTo = doc.analysis?.drawdown?.to;
   const condition = loadingCondition(run.loadingCondition as LoadingConditionKey);
-  const fs = method === "bishop" ? run.fsBishop : run.fsFellenius;
 
   return (
     <div className="space-y-4">
@@ -135,7 +135,7 @@ export function RunView({
             title: run.title,
             section: `${run.sectionName} v${run.sectionVersion}`,
             loadCase: condition?.label ?? run.loadingCondition,
-            fs: { [method]: fs },
+            fs: runFs(result.methods, run),
             requiredFs: run.requiredFs,
             circle: result.results[method]?.circle,
             ordinaryForm: result.ordinaryForm,

@@ -14,3 +14,4 @@ export * from "./compaction-spec";
 export * from "./verify-sweep";
 export * from "./form-values";
 export * from "./case-styles";
+export * from "./fs-axis";

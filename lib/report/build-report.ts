@@ -202,6 +202,12 @@ function writeResults(w: ReportWriter, input: ReportInput): void {
     );
 }
 
+function materialRemark(model: string): string {
+  return model === "impenetrable"
+    ? "no slip surface may enter it; no strength is used"
+    : "no value recorded in the section";
+}
+
 function writeMaterials(w: ReportWriter, input: ReportInput): void {
   w.heading("Materials and where their values come from");
   if (!input.sourcesFrozen)
@@ -211,6 +217,8 @@ function writeMaterials(w: ReportWriter, input: ReportInput): void {
     );
   const rows: string[][] = [];
   for (const m of input.materials) {
+    // An impenetrable layer often has no number at all, yet it bounds every slip surface: list it anyway.
+    if (m.parameters.length === 0) rows.push([`${m.name} (${m.key})`, m.model, "—", materialRemark(m.model)]);
     m.parameters.forEach((p, i) =>
       rows.push([
         i === 0 ? `${m.name} (${m.key})` : "",

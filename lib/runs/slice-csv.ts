@@ -18,6 +18,7 @@ export interface SliceCsvMeta {
   /** Section name and version, as shown to the user. */
   section?: string;
   loadCase?: string;
+  /** FS of each method the run used (null: no valid circle); a method left out was not run. */
   fs?: { bishop?: number | null; fellenius?: number | null };
   requiredFs?: number;
   circle?: Circle;
@@ -40,8 +41,27 @@ function commentLine(text: string): string {
   return escapeCsvText(`# ${text.replace(/[\r\n]+/g, " ")}`);
 }
 
-const fs3 = (v: number | null | undefined) =>
-  v === null || v === undefined || !Number.isFinite(v) ? "none" : v.toFixed(3);
+const fs3 = (v: number | null) => (v === null || !Number.isFinite(v) ? "no valid circle" : v.toFixed(3));
+
+/** "Bishop 1.412; ordinary 1.329 (classical form)": every method the run used, none invented. */
+function fsLine(fs: NonNullable<SliceCsvMeta["fs"]>, ordinaryForm: string | undefined): string {
+  const parts: string[] = [];
+  if (fs.bishop !== undefined) parts.push(`Bishop ${fs3(fs.bishop)}`);
+  if (fs.fellenius !== undefined)
+    parts.push(`ordinary ${fs3(fs.fellenius)}${ordinaryForm ? ` (${ordinaryForm} form)` : ""}`);
+  return `FS: ${parts.join("; ")}`;
+}
+
+/** The FS of each method a run used, keyed as the CSV header wants it. */
+export function runFs(
+  methods: readonly SliceMethod[],
+  run: { fsBishop: number | null; fsFellenius: number | null },
+): NonNullable<SliceCsvMeta["fs"]> {
+  return {
+    ...(methods.includes("bishop") ? { bishop: run.fsBishop } : {}),
+    ...(methods.includes("fellenius") ? { fellenius: run.fsFellenius } : {}),
+  };
+}
 
 function metaLines(meta: SliceCsvMeta): string[] {
   const lines = [`Caution: ${CAUTION_TEXT}`];
@@ -53,10 +73,8 @@ function metaLines(meta: SliceCsvMeta): string[] {
   lines.push(
     `Slice forces by: ${meta.method === "bishop" ? "Bishop's simplified method" : "ordinary method of slices"}`,
   );
-  if (meta.fs)
-    lines.push(
-      `FS: Bishop ${fs3(meta.fs.bishop)}; ordinary ${fs3(meta.fs.fellenius)}${meta.ordinaryForm ? ` (${meta.ordinaryForm} form)` : ""}`,
-    );
+  if (meta.fs && (meta.fs.bishop !== undefined || meta.fs.fellenius !== undefined))
+    lines.push(fsLine(meta.fs, meta.ordinaryForm));
   if (meta.requiredFs !== undefined) lines.push(`Required FS: ${meta.requiredFs.toFixed(2)}`);
   if (meta.circle)
     lines.push(
