@@ -9,6 +9,8 @@ import { SliceTable } from "@/components/runs/slice-table";
 import type { WorkerMessage } from "./grid-search.worker";
 import { loadingCondition } from "@/lib/analysis/required-fs";
 import { userIssue } from "@/lib/runs/engine-issue-text";
+import { runFs } from "@/lib/runs/slice-csv";
+import { stagedFromResult } from "@/lib/runs/staged-view";
 
 export interface SearchOutcomeProps {
   projectId: number;
@@ -92,7 +94,16 @@ export function SearchOutcome({
       {critical[method] ? (
         <SliceTable
           rows={critical[method]!.slices}
-          meta={{ title, section: `${section.name} v${section.version}`, method }}
+          meta={{
+            title,
+            section: `${section.name} v${section.version}`,
+            method,
+            fs: runFs(result.methods, {
+              fsBishop: result.results.bishop?.fs ?? null,
+              fsFellenius: result.results.fellenius?.fs ?? null,
+            }),
+            staged: stagedFromResult(result),
+          }}
         />
       ) : null}
     </div>

@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import type { RunDetail } from "@/db/queries/runs";
 import type { GridSearchSuccess, SectionDocument, SliceRow } from "@/lib/stability";
 import type { RunSetup } from "@/lib/analysis/run-setup";
@@ -12,6 +12,7 @@ import { RunCanvas } from "@/components/runs/run-canvas";
 import { FsSummary } from "@/components/runs/fs-summary";
 import { SliceTable } from "@/components/runs/slice-table";
 import { runFs } from "@/lib/runs/slice-csv";
+import { stagedView } from "@/lib/runs/staged-view";
 import { StatusBadge } from "@/components/run-list/status-badge";
 import { PinnedCanvas } from "@/components/review/pinned-canvas";
 import type { PinMarker } from "@/lib/review/pin-markers";
@@ -53,11 +54,12 @@ export function RunView({
   const colors = Object.fromEntries(materialPalette(doc.materials).map((m) => [m.key, m.color]));
   const drawdownTo = doc.analysis?.drawdown?.to;
   const condition = loadingCondition(run.loadingCondition as LoadingConditionKey);
+  const staged = useMemo(() => stagedView(result, doc, run.engineVersion), [result, doc, run.engineVersion]);
 
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm text-ink-soft" data-testid="run-meta">
-        <StatusBadge status={run.status} />
+        <StatusBadge status={run.status} belowRequired={run.belowRequiredReason !== null} />
         <span>{condition?.label ?? run.loadingCondition}</span>
         <span className="capitalize">{run.face} face</span>
         <span>
@@ -126,7 +128,7 @@ export function RunView({
           height={480}
         />
       </PinnedCanvas>
-      <FsSummary result={result} requiredFs={run.requiredFs} />
+      <FsSummary result={result} requiredFs={run.requiredFs} staged={staged} />
       {tables[method] ? (
         <SliceTable
           rows={tables[method]!.slices}
@@ -136,6 +138,7 @@ export function RunView({
             section: `${run.sectionName} v${run.sectionVersion}`,
             loadCase: condition?.label ?? run.loadingCondition,
             fs: runFs(result.methods, run),
+            staged,
             requiredFs: run.requiredFs,
             circle: result.results[method]?.circle,
             ordinaryForm: result.ordinaryForm,

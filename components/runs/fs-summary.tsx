@@ -3,6 +3,8 @@ import { Caution } from "@/components/ui/caution";
 import { formatFs, verdictOf } from "@/lib/runs/verdict";
 import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "@/lib/runs/warning-text";
 import { VerdictMark } from "./verdict-mark";
+import { StageFsTable } from "./stage-fs-table";
+import { stagedFromResult, type StagedView } from "@/lib/runs/staged-view";
 
 export interface FsSummaryProps {
   result: GridSearchSuccess;
@@ -10,6 +12,8 @@ export interface FsSummaryProps {
   requiredFs?: number;
   /** One-circle reports of each method's critical circle: add min mα and slice-level warnings. */
   critical?: Partial<Record<"bishop" | "fellenius", CircleSuccess>>;
+  /** A staged drawdown's stages; by default those the result carries. */
+  staged?: StagedView | null;
 }
 
 const m2 = (v: number) => v.toFixed(2);
@@ -32,7 +36,8 @@ function collectWarnings(result: GridSearchSuccess, critical: FsSummaryProps["cr
 }
 
 /** FS per method with pass or fail, the critical circles, the search counts, warnings and the caution. */
-export function FsSummary({ result, requiredFs, critical }: FsSummaryProps) {
+export function FsSummary({ result, requiredFs, critical, staged }: FsSummaryProps) {
+  const stages = staged ?? stagedFromResult(result);
   const warnings = describeWarnings(collectWarnings(result, critical));
   const rejected = rejectionList(result.circles.rejected);
   const rejectedTotal = rejected.reduce((s, r) => s + r.count, 0);
@@ -74,6 +79,8 @@ export function FsSummary({ result, requiredFs, critical }: FsSummaryProps) {
           })}
         </tbody>
       </table>
+
+      {stages ? <StageFsTable staged={stages} requiredFs={requiredFs} /> : null}
 
       <div className="grid gap-3 sm:grid-cols-2">
         {result.methods.map((m) => (

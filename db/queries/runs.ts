@@ -20,6 +20,8 @@ export interface RunSummary {
   createdAt: string;
   revisesRunId: number | null;
   loadingCondition: string;
+  /** Set when the run was signed off below its required FS: the reviewer's reason. */
+  belowRequiredReason: string | null;
 }
 
 const num = (v: unknown) => (v === null || v === undefined ? null : Number(v));
@@ -44,6 +46,7 @@ export function toRunSummary(r: Record<string, unknown>): RunSummary {
     createdAt: new Date(r.created_at as Date).toISOString(),
     revisesRunId: (r.revises_run_id as number) ?? null,
     loadingCondition: r.loading_condition as string,
+    belowRequiredReason: (r.below_required_reason as string | null) ?? null,
   };
 }
 
@@ -71,6 +74,7 @@ export function runSummaryQuery(db: Knex) {
       "r.created_at",
       "r.revises_run_id",
       "r.loading_condition",
+      "r.below_required_reason",
     );
 }
 
@@ -192,6 +196,8 @@ export interface ChainLink {
   title: string;
   status: RunSummary["status"];
   createdAt: string;
+  /** Signed off below the required FS. */
+  belowRequired: boolean;
 }
 
 /**
@@ -201,12 +207,13 @@ export interface ChainLink {
 export async function fetchRevisionChain(projectId: number, runId: number, db: Knex = getDb()): Promise<ChainLink[]> {
   const rows = (await db("runs")
     .where({ project_id: projectId })
-    .select("id", "title", "status", "created_at", "revises_run_id")) as {
+    .select("id", "title", "status", "created_at", "revises_run_id", "below_required_reason")) as {
     id: number;
     title: string;
     status: RunSummary["status"];
     created_at: Date;
     revises_run_id: number | null;
+    below_required_reason: string | null;
   }[];
   const byId = new Map(rows.map((r) => [r.id, r]));
   const link = (r: (typeof rows)[number]): ChainLink => ({
@@ -214,6 +221,7 @@ export async function fetchRevisionChain(projectId: number, runId: number, db: K
     title: r.title,
     status: r.status,
     createdAt: new Date(r.created_at).toISOString(),
+    belowRequired: r.below_required_reason !== null,
   });
   const start = byId.get(runId);
   if (!start) return [];

@@ -1,6 +1,6 @@
 /** The slice tables of a run's critical circles, on landscape pages so every column fits. */
 import type { SliceRow } from "../stability";
-import { formatCell, numberSlices, sliceColumns } from "../runs/slice-columns";
+import { formatCell, isStagedSlices, numberSlices, sliceColumns } from "../runs/slice-columns";
 import { METHOD_NAME } from "../runs/warning-text";
 import { A4_LANDSCAPE, SOFT, type ReportWriter } from "./report-writer";
 
@@ -22,8 +22,16 @@ export function writeSliceTable(
     );
     if (method === "bishop" && table.minMAlpha !== null)
       w.paragraph(`Smallest m-alpha on this circle: ${table.minMAlpha.toFixed(3)}.`, { size: 7.5, color: SOFT });
-    const cols = sliceColumns(method);
-    const widths = cols.map((c): number => (c.key === "material" ? 80 : c.key === "index" ? 30 : 0));
+    const staged = isStagedSlices(table.slices);
+    if (staged)
+      w.paragraph(
+        "Staged drawdown: c and φ are the final stage's strengths — total-stress (c = τff, φ = 0, no pore pressure) where the undrained strength governs, c′ and φ′ where the drained strength is lower.",
+        { size: 7.5, color: SOFT },
+      );
+    const cols = sliceColumns(method, staged);
+    const widths = cols.map((c): number =>
+      c.key === "material" ? 70 : c.key === "governs" ? 80 : c.key === "index" ? 26 : 0,
+    );
     const rest = (w.width - widths.reduce((s, v) => s + v, 0)) / widths.filter((v) => v === 0).length;
     w.table(
       cols.map((c, i) => ({

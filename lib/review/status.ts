@@ -37,3 +37,8 @@ export const ACTION_WORDS: Record<TransitionAction, string> = {
 export function isRunStatus(value: string): value is RunStatus {
   return (RUN_STATUSES as readonly string[]).includes(value);
 }
+
+/** A run's status in words, telling a sign-off below the required FS apart from a plain one. */
+export function statusWords(status: RunStatus, signedOffBelowRequired: boolean): string {
+  return status === "approved" && signedOffBelowRequired ? "signed off — below the required FS" : STATUS_WORDS[status];
+}

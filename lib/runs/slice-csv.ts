@@ -6,7 +6,15 @@
  * the OWASP "CSV Injection" guidance advises.
  */
 import { CAUTION_TEXT } from "../caution";
-import { columnHeader, formatCell, numberSlices, sliceColumns, type SliceMethod } from "./slice-columns";
+import {
+  columnHeader,
+  formatCell,
+  isStagedSlices,
+  numberSlices,
+  sliceColumns,
+  type SliceMethod,
+} from "./slice-columns";
+import { VARIANT_TEXT, stageLine, type StagedView } from "./staged-view";
 import type { Circle, SliceRow } from "@/lib/stability";
 
 /** What the leading comment lines say about the run. */
@@ -26,6 +34,8 @@ export interface SliceCsvMeta {
   engineVersion?: string;
   /** When the run was made, ISO 8601. */
   runAt?: string;
+  /** A staged drawdown's procedure and each method's stage factors. */
+  staged?: StagedView | null;
 }
 
 const FORMULA_START = /^[=+\-@\t\r]/;
@@ -75,6 +85,14 @@ function metaLines(meta: SliceCsvMeta): string[] {
   );
   if (meta.fs && (meta.fs.bishop !== undefined || meta.fs.fellenius !== undefined))
     lines.push(fsLine(meta.fs, meta.ordinaryForm));
+  if (meta.staged) {
+    lines.push(`Staged rapid drawdown, ${VARIANT_TEXT[meta.staged.variant]}; the FS above is the final stage's`);
+    for (const m of ["bishop", "fellenius"] as const)
+      if (meta.staged.stages[m] !== undefined)
+        lines.push(
+          `Stages, ${m === "bishop" ? "Bishop" : "ordinary"}: ${stageLine(meta.staged.stages[m], meta.staged.variant)}`,
+        );
+  }
   if (meta.requiredFs !== undefined) lines.push(`Required FS: ${meta.requiredFs.toFixed(2)}`);
   if (meta.circle)
     lines.push(
@@ -89,7 +107,7 @@ function metaLines(meta: SliceCsvMeta): string[] {
  * @returns CSV text with CRLF line ends and no byte-order mark
  */
 export function sliceTableToCsv(rows: readonly SliceRow[], meta: SliceCsvMeta): string {
-  const cols = sliceColumns(meta.method);
+  const cols = sliceColumns(meta.method, isStagedSlices(rows));
   const out = metaLines(meta).map(commentLine);
   out.push(cols.map((c) => escapeCsvText(columnHeader(c))).join(","));
   for (const s of numberSlices(rows)) {
