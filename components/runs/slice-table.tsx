@@ -120,9 +120,10 @@ export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
       </p>
       {staged ? (
         <p className="mt-1 text-xs text-ink-faint" data-testid="staged-slice-note">
-          Staged drawdown: c and φ are the strengths of the final stage. Where the undrained strength governs they are
-          total-stress values (c = τff from the stage-1 consolidation stress σ′fc, φ = 0, no pore pressure); where the
-          drained strength is lower, c′ and φ′ with the pore pressure after drawdown.
+          Staged drawdown: c and φ are the strengths of the final stage. Where the undrained strength governs
+          (“undrained (stage 2)”) they are total-stress values: c = τff from the stage-1 consolidation stress σ′fc, φ =
+          0, no pore pressure. Where the drained strength is lower (“drained (stage 3)”), and on free-draining bases,
+          they are c′ and φ′ with the pore pressure after drawdown.
         </p>
       ) : null}
       {caution ? (

@@ -58,6 +58,8 @@ export interface ReportInput {
 
 const day = (iso: string | null) => (iso ? new Date(iso).toISOString().replace("T", " ").slice(0, 16) + " UTC" : "—");
 const m2 = (v: number) => v.toFixed(2);
+/** A sentence typed by a person, ended with one full stop. */
+const withStop = (text: string) => (/[.!?]$/.test(text.trim()) ? text.trim() : `${text.trim()}.`);
 
 function radiiText(r: Radii | undefined): string {
   if (!r) return "—";
@@ -72,7 +74,7 @@ function writeStatus(w: ReportWriter, input: ReportInput): void {
     const note = review.reviewNote ? ` Reviewer's note: ${review.reviewNote}` : "";
     w.box(
       `Review status: SIGNED OFF — BELOW THE REQUIRED FS, by ${review.reviewedByName ?? "—"} on ${day(review.reviewedAt)}`,
-      `The factor of safety does not meet the required ${run.requiredFs.toFixed(2)}; the reviewer signed it off on purpose. Reason: ${review.belowRequiredReason}. Submitted by ${review.submittedByName ?? "—"} on ${day(review.submittedAt)}.${note}`,
+      `The factor of safety does not meet the required ${run.requiredFs.toFixed(2)}; the reviewer signed it off on purpose. Reason: ${withStop(review.belowRequiredReason)} Submitted by ${review.submittedByName ?? "—"} on ${day(review.submittedAt)}.${note}`,
       ALARM,
     );
   } else if (run.status === "approved") {
@@ -231,11 +233,15 @@ function writeStages(w: ReportWriter, input: ReportInput): void {
     const f = staged.stages[m];
     return f ? stageCells(f, staged.variant) : null;
   });
-  const methodWidth = Math.min(150, (w.width - 230) / Math.max(1, methods.length));
+  const methodWidth = Math.min(120, (w.width - 270) / Math.max(1, methods.length));
   w.table(
     [
       { header: "Stage", width: w.width - methodWidth * methods.length },
-      ...methods.map((m) => ({ header: METHOD_NAME[m], width: methodWidth, align: "right" as const })),
+      ...methods.map((m) => ({
+        header: m === "bishop" ? "Bishop's simplified" : "Ordinary method",
+        width: methodWidth,
+        align: "right" as const,
+      })),
     ],
     labels.map((row, i) => [
       row.label,

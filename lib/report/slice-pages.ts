@@ -3,6 +3,7 @@ import type { SliceRow } from "../stability";
 import { formatCell, isStagedSlices, numberSlices, sliceColumns } from "../runs/slice-columns";
 import { METHOD_NAME } from "../runs/warning-text";
 import { A4_LANDSCAPE, SOFT, type ReportWriter } from "./report-writer";
+import { pdfSafe, wrapText } from "./pdf-text";
 
 type Method = "bishop" | "fellenius";
 
@@ -29,14 +30,25 @@ export function writeSliceTable(
         { size: 7.5, color: SOFT },
       );
     const cols = sliceColumns(method, staged);
-    const widths = cols.map((c): number =>
-      c.key === "material" ? 70 : c.key === "governs" ? 80 : c.key === "index" ? 26 : 0,
+    const fixed = cols.map((c): number =>
+      c.key === "material" ? 62 : c.key === "governs" ? 72 : c.key === "index" ? 24 : 0,
     );
-    const rest = (w.width - widths.reduce((s, v) => s + v, 0)) / widths.filter((v) => v === 0).length;
+    // Each other column gets at least its longest header word, then an equal share of what is left.
+    const longestWord = (c: (typeof cols)[number]) =>
+      Math.max(
+        ...pdfSafe(c.label)
+          .split(/ +/)
+          .map((word) => w.bold.widthOfTextAtSize(word, 7)),
+      ) + 6;
+    const least = cols.map((c, i) => (fixed[i] ? 0 : longestWord(c)));
+    const spare = w.width - fixed.reduce((s, v) => s + v, 0) - least.reduce((s, v) => s + v, 0);
+    const share = Math.max(0, spare) / Math.max(1, fixed.filter((v) => v === 0).length);
+    const widths = cols.map((_, i) => fixed[i] || least[i] + share);
     w.table(
       cols.map((c, i) => ({
-        header: c.unit ? `${c.label}\n(${c.unit})` : c.label,
-        width: widths[i] || rest,
+        // Labels wrap onto as many lines as the column needs, so none is cut short.
+        header: [...wrapText(c.label, w.bold, 7, widths[i] - 4), ...(c.unit ? [`(${c.unit})`] : [])].join("\n"),
+        width: widths[i],
         align: c.decimals === null ? ("left" as const) : ("right" as const),
       })),
       numberSlices(table.slices).map((s) => cols.map((c) => formatCell(c, c.value(s, method)))),

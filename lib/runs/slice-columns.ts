@@ -52,9 +52,9 @@ const num = (v: number | null | undefined) => (v === null || v === undefined || 
 export function governingText(row: SliceRow): string {
   const st = row.stage;
   if (!st) return "";
-  if (st.drainage === "fixed") return "su of the material (all stages)";
-  if (st.drainage === "free-draining") return "c′, φ′ (free-draining)";
-  return st.governing === "undrained" ? "undrained, from σ′fc (stage 2)" : "drained c′, φ′ (stage 3)";
+  if (st.drainage === "fixed") return "su, every stage";
+  if (st.drainage === "free-draining") return "free-draining";
+  return st.governing === "undrained" ? "undrained (stage 2)" : "drained (stage 3)";
 }
 
 /**
@@ -72,7 +72,7 @@ function stagedColumns(): SliceColumn[] {
     { key: "sigmaFc", label: "σ′fc, stage 1", unit: "kPa", decimals: 1, value: (s) => num(st(s)?.sigmaFc) },
     { key: "tauFc", label: "τfc, stage 1", unit: "kPa", decimals: 1, value: (s) => num(st(s)?.tauFc) },
     { key: "kc", label: "Kc", unit: "", decimals: 2, value: (s) => num(st(s)?.kc) },
-    { key: "tau2", label: "τff undrained, stage 2", unit: "kPa", decimals: 1, value: (s) => num(st(s)?.tau2) },
+    { key: "tau2", label: "τ, stage 2", unit: "kPa", decimals: 1, value: (s) => num(st(s)?.tau2) },
     { key: "tauDrained", label: "τ drained, stage 3", unit: "kPa", decimals: 1, value: (s) => num(st(s)?.tauDrained) },
   ];
 }
@@ -90,6 +90,14 @@ export function sliceColumns(method: SliceMethod, staged = false): SliceColumn[]
   const cols = baseColumns(method);
   if (!staged) return cols;
   const at = cols.findIndex((c) => c.key === "c");
+  const u = cols.findIndex((c) => c.key === "porePressure");
+  // Undrained bases carry total-stress strengths, so no pore pressure acts on them in the final stage.
+  cols[u] = {
+    ...cols[u],
+    label: "u, final stage",
+    value: (s) =>
+      s.row.stage?.governing === "undrained" && s.row.stage.drainage !== "free-draining" ? null : s.row.porePressure,
+  };
   return [...cols.slice(0, at), ...stagedColumns(), ...cols.slice(at + 2)];
 }
 

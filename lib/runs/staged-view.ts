@@ -94,7 +94,7 @@ export function stageCells(f: StageFs, variant: StagedVariant): StageCell[] {
       stage: "3",
       label: "Stage 3: drained strength where it is the lower",
       fs: f.fs3,
-      missing: f.fs3 !== null ? null : two ? "not part of the two-stage procedure" : "no slice drained: stage 2 stands",
+      missing: f.fs3 !== null ? null : two ? "not used: two stages" : "no slice drained",
     },
     { stage: "final", label: "Result (the FS of the run)", fs: f.final, missing: f.final === null ? "none" : null },
   ];
