@@ -15,3 +15,4 @@ export * from "./verify-sweep";
 export * from "./form-values";
 export * from "./case-styles";
 export * from "./fs-axis";
+export * from "./piping-exit";
