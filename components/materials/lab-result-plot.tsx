@@ -26,6 +26,15 @@ export function LabResultPlot({ record }: { record: LabTestRecord }) {
           yLabel={pq ? "q (kPa)" : "t = (σ1 − σ3)/2 (kPa)"}
           points={record.result.points}
           line={record.result.line}
+          second={
+            record.result.totalStress
+              ? {
+                  label: `total stresses at failure from σ3c, the R envelope (x = ${pq ? "p" : "s"}, not ${pq ? "p'" : "s'"})`,
+                  points: record.result.totalStress.points,
+                  line: record.result.totalStress.line,
+                }
+              : undefined
+          }
         />
       );
     }
