@@ -47,7 +47,10 @@ export function StageFsTable({ staged, requiredFs }: { staged: StagedView; requi
                     ) : c.fs === null ? (
                       <span className="text-xs font-normal text-ink-faint">— {c.missing}</span>
                     ) : (
-                      formatFs(c.fs)
+                      <>
+                        {formatFs(c.fs)}
+                        {c.note ? <span className="block text-xs font-normal text-ink-faint">{c.note}</span> : null}
+                      </>
                     )}
                     {c && row.stage === "final" && requiredFs !== undefined ? (
                       <span className="block text-xs font-normal">

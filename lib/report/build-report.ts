@@ -248,7 +248,8 @@ function writeStages(w: ReportWriter, input: ReportInput): void {
       ...cells.map((c) => {
         const cell = c?.[i];
         if (!cell) return "not available";
-        return cell.fs === null ? `— (${cell.missing})` : formatFs(cell.fs);
+        if (cell.fs === null) return `— (${cell.missing})`;
+        return cell.note ? `${formatFs(cell.fs)} (${cell.note})` : formatFs(cell.fs);
       }),
     ]),
     8.5,

@@ -72,6 +72,8 @@ export interface StageCell {
   fs: number | null;
   /** Why there is no number, in words; null when there is one. */
   missing: string | null;
+  /** A short remark beside the number (stage 3: how many slices took the drained strength). */
+  note?: string | null;
 }
 
 /** The four rows of a method's stages with their meaning, for the panel, the CSV and the PDF. */
@@ -94,6 +96,7 @@ export function stageCells(f: StageFs, variant: StagedVariant): StageCell[] {
       stage: "3",
       label: "Stage 3: drained strength where it is the lower",
       fs: f.fs3,
+      note: f.fs3 !== null ? `${f.switchedSlices} slice${f.switchedSlices === 1 ? "" : "s"} drained` : null,
       missing: f.fs3 !== null ? null : two ? "not used: two stages" : "no slice drained",
     },
     { stage: "final", label: "Result (the FS of the run)", fs: f.final, missing: f.final === null ? "none" : null },
