@@ -29,7 +29,9 @@ export function LabResultPlot({ record }: { record: LabTestRecord }) {
           second={
             record.result.totalStress
               ? {
-                  label: `total stresses at failure from σ3c, the R envelope (x = ${pq ? "p" : "s"}, not ${pq ? "p'" : "s'"})`,
+                  label: pq
+                    ? "total stresses at failure from σ3c, the R envelope (x is p, not p')"
+                    : "total stresses at failure from σ3c, the R envelope (x is s, not s')",
                   points: record.result.totalStress.points,
                   line: record.result.totalStress.line,
                 }

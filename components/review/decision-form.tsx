@@ -53,7 +53,8 @@ export function DecisionForm({ apiBase, actions, openItems, belowRequired = null
             <span aria-hidden="true">▲ </span>
             {belowRequired.lowestFs === null
               ? "No method of this run gave a factor of safety"
-              : `The lowest FS of this run, ${belowRequired.lowestFs.toFixed(3)}, is below the required ${belowRequired.requiredFs.toFixed(2)}`}
+              : `The lowest FS of this run, ${belowRequired.lowestFs.toFixed(3)}, ` +
+                `is below the required ${belowRequired.requiredFs.toFixed(2)}`}
             .
           </p>
           <p className="text-xs text-ink-soft">

@@ -101,7 +101,11 @@ export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
                   return (
                     <td
                       key={c.key}
-                      className={`px-2 py-1 ${c.decimals === null ? "whitespace-nowrap text-left" : "text-right"} ${low ? "font-semibold text-alarm-700" : ""}`}
+                      className={[
+                        "px-2 py-1",
+                        c.decimals === null ? "whitespace-nowrap text-left" : "text-right",
+                        low ? "font-semibold text-alarm-700" : "",
+                      ].join(" ")}
                       title={low ? `mα below ${LOW_M_ALPHA}` : undefined}
                     >
                       {v === null ? "—" : formatCell(c, v)}

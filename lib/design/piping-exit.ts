@@ -102,7 +102,8 @@ export function assessPipingExits(input: ExitInput): PipingAtExits {
       face: { emerges: false, leastCover: c, at: [least, yAt(face, least)] },
       verdict: "no-unprotected-exit",
       findings: [
-        `Downstream face above the drain: no water leaves it; the line stays at least ${f2(c)} m below the face (at x = ${f2(least)} m).`,
+        "Downstream face above the drain: no water leaves it; " +
+          `the line stays at least ${f2(c)} m below the face (at x = ${f2(least)} m).`,
         toeNote,
         drainNote,
       ],
@@ -134,7 +135,10 @@ export function assessPipingExits(input: ExitInput): PipingAtExits {
     face: { emerges: true, exit },
     verdict: exit.adequate ? "adequate" : "not-adequate",
     findings: [
-      `Downstream face above the drain: the line reaches the face at (${f2(exit.at[0])}, ${f2(exit.at[1])}) m, so water seeps out of the fill below that point; there the gradient is sin β = ${gradient.toFixed(3)} of the ${exit.faceAngle.toFixed(1)}° face, and i_cr / i = ${factor.toFixed(2)} against the required ${input.required.toFixed(1)}.`,
+      `Downstream face above the drain: the line reaches the face at (${f2(exit.at[0])}, ${f2(exit.at[1])}) m, ` +
+        "so water seeps out of the fill below that point; " +
+        `there the gradient is sin β = ${gradient.toFixed(3)} of the ${exit.faceAngle.toFixed(1)}° face, ` +
+        `and i_cr / i = ${factor.toFixed(2)} against the required ${input.required.toFixed(1)}.`,
       toeNote,
       drainNote,
     ],

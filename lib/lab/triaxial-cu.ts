@@ -192,7 +192,8 @@ function deriveTotalStressEnvelope(
   }
   if (envelope.cohesion < 0)
     warnings.push(
-      `the fitted R-envelope intercept is negative (${envelope.cohesion.toFixed(1)} kPa): check the specimens or take cR = 0`,
+      `the fitted R-envelope intercept is negative (${envelope.cohesion.toFixed(1)} kPa): ` +
+        "check the specimens or take cR = 0",
     );
   const xMax = Math.max(...points.map((p) => p.x));
   return {

@@ -134,7 +134,8 @@ export function deriveUndrainedStrength(input: UndrainedStrengthInput): Undraine
   result.vaneCorrection = correction;
   if (correction.basis === "bjerrum" && correction.factor > 1)
     result.warnings.push(
-      `Bjerrum's μ is ${correction.factor.toFixed(2)} at PI ${correction.plasticityIndex} %: it raises the vane strength; many designers take μ no higher than 1`,
+      `Bjerrum's μ is ${correction.factor.toFixed(2)} at PI ${correction.plasticityIndex} %: ` +
+        "it raises the vane strength; many designers take μ no higher than 1",
     );
   return result;
 }

@@ -73,8 +73,11 @@ function writeStatus(w: ReportWriter, input: ReportInput): void {
   if (run.status === "approved" && review.belowRequiredReason) {
     const note = review.reviewNote ? ` Reviewer's note: ${review.reviewNote}` : "";
     w.box(
-      `Review status: SIGNED OFF — BELOW THE REQUIRED FS, by ${review.reviewedByName ?? "—"} on ${day(review.reviewedAt)}`,
-      `The factor of safety does not meet the required ${run.requiredFs.toFixed(2)}; the reviewer signed it off on purpose. Reason: ${withStop(review.belowRequiredReason)} Submitted by ${review.submittedByName ?? "—"} on ${day(review.submittedAt)}.${note}`,
+      "Review status: SIGNED OFF — BELOW THE REQUIRED FS, " +
+        `by ${review.reviewedByName ?? "—"} on ${day(review.reviewedAt)}`,
+      `The factor of safety does not meet the required ${run.requiredFs.toFixed(2)}; ` +
+        `the reviewer signed it off on purpose. Reason: ${withStop(review.belowRequiredReason)} ` +
+        `Submitted by ${review.submittedByName ?? "—"} on ${day(review.submittedAt)}.${note}`,
       ALARM,
     );
   } else if (run.status === "approved") {
@@ -255,7 +258,8 @@ function writeStages(w: ReportWriter, input: ReportInput): void {
     8.5,
   );
   w.paragraph(
-    "Stage 1 gives the consolidation stresses on each slice base; the undrained strengths of stage 2 follow from them. The FS of the run is the final stage's; the slice tables give each base's governing strength.",
+    "Stage 1 gives the consolidation stresses on each slice base; the undrained strengths of stage 2 follow " +
+      "from them. The FS of the run is the final stage's; the slice tables give each base's governing strength.",
     { size: 7.5, color: SOFT },
   );
 }
@@ -330,7 +334,8 @@ export async function buildRunReport(input: ReportInput): Promise<Uint8Array> {
   writeReview(w, input);
   writeSliceTable(w, run.sliceTables, run.result.methods);
   return w.finish(
-    `Scarpline calculation report — run ${run.id}, ${statusWords(run.status, Boolean(input.review.belowRequiredReason))} — ${input.projectName}`,
+    `Scarpline calculation report — run ${run.id}, ` +
+      `${statusWords(run.status, Boolean(input.review.belowRequiredReason))} — ${input.projectName}`,
     `Caution: ${CAUTION_TEXT}`,
   );
 }

@@ -26,7 +26,8 @@ export function writeSliceTable(
     const staged = isStagedSlices(table.slices);
     if (staged)
       w.paragraph(
-        "Staged drawdown: c and φ are the final stage's strengths — total-stress (c = τff, φ = 0, no pore pressure) where the undrained strength governs, c′ and φ′ where the drained strength is lower.",
+        "Staged drawdown: c and φ are the final stage's strengths — total-stress (c = τff, φ = 0, no pore " +
+          "pressure) where the undrained strength governs, c′ and φ′ where the drained strength is lower.",
         { size: 7.5, color: SOFT },
       );
     const cols = sliceColumns(method, staged);

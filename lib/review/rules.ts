@@ -108,7 +108,8 @@ export function checkDecision(
       return refuse(
         422,
         "below_required_reason",
-        `This run's FS is below the required ${below.requiredFs.toFixed(2)}. Signing it off needs your reason in a sentence (for example: accepted as the record of a failing case, redesign follows).`,
+        `This run's FS is below the required ${below.requiredFs.toFixed(2)}. Signing it off needs your reason ` +
+          "in a sentence (for example: accepted as the record of a failing case, redesign follows).",
         "belowRequiredReason",
       );
     }

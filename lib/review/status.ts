@@ -40,5 +40,6 @@ export function isRunStatus(value: string): value is RunStatus {
 
 /** A run's status in words, telling a sign-off below the required FS apart from a plain one. */
 export function statusWords(status: RunStatus, signedOffBelowRequired: boolean): string {
-  return status === "approved" && signedOffBelowRequired ? "signed off — below the required FS" : STATUS_WORDS[status];
+  if (status === "approved" && signedOffBelowRequired) return "signed off — below the required FS";
+  return STATUS_WORDS[status];
 }

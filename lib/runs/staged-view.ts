@@ -107,9 +107,9 @@ export function stageCells(f: StageFs, variant: StagedVariant): StageCell[] {
 export function stageLine(f: StageFs | null | undefined, variant: StagedVariant): string {
   if (!f) return "stages not available";
   return stageCells(f, variant)
-    .map(
-      (c) =>
-        `${c.stage === "final" ? "final" : `stage ${c.stage}`} ${c.fs === null ? `— (${c.missing})` : c.fs.toFixed(3)}`,
-    )
+    .map((c) => {
+      const name = c.stage === "final" ? "final" : `stage ${c.stage}`;
+      return `${name} ${c.fs === null ? `— (${c.missing})` : c.fs.toFixed(3)}`;
+    })
     .join("; ");
 }
