@@ -12,7 +12,7 @@ import {
   XAxis,
   YAxis,
 } from "recharts";
-import { CASE_STYLES, SWEEP_CASES, type SweepCaseKey, type SweepReading } from "@/lib/design";
+import { CASE_STYLES, SWEEP_CASES, fsAxis, type SweepCaseKey, type SweepReading } from "@/lib/design";
 
 interface MarkerProps {
   cx?: number;
@@ -54,8 +54,7 @@ export function FsRatioChart({ reading }: FsRatioChartProps) {
     return row;
   });
   const fsValues = rows.flatMap((r) => SWEEP_CASES.map((c) => r[c.key])).filter((v): v is number => v !== null);
-  const top = Math.max(...fsValues, ...reading.cases.map((c) => c.required)) * 1.05;
-  const bottom = Math.min(...fsValues, ...reading.cases.map((c) => c.required)) * 0.95;
+  const axis = fsAxis([...fsValues, ...reading.cases.map((c) => c.required)]);
   return (
     <figure
       className="panel p-3"
@@ -76,8 +75,11 @@ export function FsRatioChart({ reading }: FsRatioChartProps) {
                 label={{ value: "Face slope (H:1V)", position: "insideBottom", offset: -12 }}
               />
               <YAxis
-                domain={[Math.floor(bottom * 10) / 10, Math.ceil(top * 10) / 10]}
-                tickFormatter={(v: number) => v.toFixed(1)}
+                domain={axis.domain}
+                ticks={axis.ticks}
+                interval={0}
+                allowDecimals
+                tickFormatter={(v: number) => v.toFixed(axis.decimals)}
                 label={{ value: "Bishop FS", angle: -90, position: "insideLeft" }}
               />
               <Tooltip

@@ -1,6 +1,6 @@
 "use client";
 
-import { lineToText, type FormValues, type PhreaticOutcome } from "@/lib/design";
+import { lineToText, type FormValues, type PhreaticOutcome, type PipingAtExits } from "@/lib/design";
 import { Caution } from "@/components/ui/caution";
 import { FieldError } from "@/components/ui/form-message";
 
@@ -19,6 +19,39 @@ function Row({ term, value, from }: { term: string; value: string; from: string 
   );
 }
 
+/** Piping where the line shows water leaving the fill: the face above the drain and the toe. */
+function PipingAtExitsView({ piping }: { piping: PipingAtExits }) {
+  const tone =
+    piping.verdict === "not-adequate"
+      ? "border-alarm-600 text-alarm-700"
+      : piping.verdict === "adequate"
+        ? "border-clay-500"
+        : "border-rule";
+  const headline =
+    piping.verdict === "no-unprotected-exit"
+      ? "Piping: no unprotected exit on this line"
+      : piping.verdict === "adequate"
+        ? "Piping at the face exit: factor met"
+        : "Piping at the face exit: factor not met";
+  return (
+    <div className={`mt-2 border-l-2 pl-3 text-sm ${tone}`} data-testid="piping-exits" data-verdict={piping.verdict}>
+      <p className="font-medium">
+        {piping.verdict === "not-adequate" ? "✕ " : piping.verdict === "adequate" ? "✓ " : ""}
+        {headline}
+      </p>
+      <ul className="mt-1 list-disc space-y-0.5 pl-5 text-ink-soft">
+        {piping.findings.map((f) => (
+          <li key={f}>{f}</li>
+        ))}
+      </ul>
+      <p className="mt-1 text-xs text-ink-faint">
+        Critical gradient i_cr = (γsat − γw)/γw = {piping.criticalGradient.toFixed(3)}; required factor{" "}
+        {piping.required.toFixed(1)}. Gradients inside the fill need a seepage solution (flow net).
+      </p>
+    </div>
+  );
+}
+
 /** Seepage and piping of one pool with every value they came from, or why the method does not apply. */
 function PoolSeepage({ outcome, crestLength }: { outcome: PhreaticOutcome; crestLength: number }) {
   const s = outcome.seepage;
@@ -28,8 +61,9 @@ function PoolSeepage({ outcome, crestLength }: { outcome: PhreaticOutcome; crest
       <div>
         <h4 className="text-sm font-semibold">{title}</h4>
         <p className="text-sm text-ink-soft">
-          Phreatic line drawn by hand: seepage and piping are not computed from it; use a flow net.
+          Phreatic line drawn by hand: the seepage quantity is not computed from it; use a flow net.
         </p>
+        {outcome.piping ? <PipingAtExitsView piping={outcome.piping} /> : null}
       </div>
     );
   }
@@ -49,11 +83,11 @@ function PoolSeepage({ outcome, crestLength }: { outcome: PhreaticOutcome; crest
               </li>
             ))}
         </ul>
+        {outcome.piping ? <PipingAtExitsView piping={outcome.piping} /> : null}
       </div>
     );
   }
   const c = s.construction;
-  const p = s.piping;
   const q = s.flow.perMetre;
   return (
     <div data-testid={`seepage-${outcome.pool}`}>
@@ -89,21 +123,12 @@ function PoolSeepage({ outcome, crestLength }: { outcome: PhreaticOutcome; crest
             value={`${sci(q * crestLength)} m³/s`}
             from={`q × crest length = ${(q * crestLength * SECONDS_PER_DAY).toFixed(2)} m³/day (upper bound: the section is the highest)`}
           />
-          <Row term="Critical gradient i_cr" value={p.criticalGradient.toFixed(3)} from="(γsat − γw)/γw of the fill" />
-          <Row
-            term="Exit gradient i_exit"
-            value={p.exitGradient.toFixed(3)}
-            from="free surface entering the drain (i = 1 at the parabola's vertex)"
-          />
-          <Row
-            term="Factor against piping"
-            value={p.pipingFactor.toFixed(2)}
-            from={`i_cr / i_exit; required ${p.required.toFixed(1)}: ${p.adequate ? "met" : "not met"}`}
-          />
         </tbody>
       </table>
+      {outcome.piping ? <PipingAtExitsView piping={outcome.piping} /> : null}
       {s.limits
-        .filter((l) => l.severity === "warning")
+        // The drain entry's i = 1 is not an exit; PipingAtExitsView says what is assessed instead.
+        .filter((l) => l.severity === "warning" && l.code !== "W_SEEP_EXIT_INTO_FILTER")
         .map((l) => (
           <p key={l.code} className="mt-1 text-xs text-ink-soft">
             {l.message}

@@ -2,6 +2,7 @@ import type { LabTestKind } from "@/lib/materials/lab-kinds";
 import type { LabOptions } from "@/lib/materials/lab-rows";
 import type { TableProblem } from "@/lib/materials/problem-keys";
 import { FieldError } from "@/components/ui/form-message";
+import { BJERRUM_SOURCE } from "@/lib/lab";
 
 export interface LabOptionsFieldsProps {
   kind: LabTestKind;
@@ -66,19 +67,35 @@ export function LabOptionsFields({ kind, options, onChange, problems }: LabOptio
       );
     case "triaxial-cu":
       return (
-        <div>
-          <label className="label" htmlFor="lab-space">
-            Fit the line in
-          </label>
-          <select
-            id="lab-space"
-            className="field w-auto"
-            value={options.space}
-            onChange={(e) => set("space", e.target.value as LabOptions["space"])}
-          >
-            <option value="p-q">p&apos;–q: p&apos; = (σ1&apos; + 2σ3&apos;)/3, q = σ1 − σ3</option>
-            <option value="s-t">s&apos;–t: s&apos; = (σ1&apos; + σ3&apos;)/2, t = (σ1 − σ3)/2</option>
-          </select>
+        <div className="flex flex-wrap items-start gap-4">
+          <div>
+            <label className="label" htmlFor="lab-space">
+              Fit the line in
+            </label>
+            <select
+              id="lab-space"
+              className="field w-auto"
+              value={options.space}
+              onChange={(e) => set("space", e.target.value as LabOptions["space"])}
+            >
+              <option value="p-q">p&apos;–q: p&apos; = (σ1&apos; + 2σ3&apos;)/3, q = σ1 − σ3</option>
+              <option value="s-t">s&apos;–t: s&apos; = (σ1&apos; + σ3&apos;)/2, t = (σ1 − σ3)/2</option>
+            </select>
+          </div>
+          <div>
+            <NumberSetting
+              id="lab-back-pressure"
+              label="Back pressure (blank: 0)"
+              unit="kPa"
+              value={options.backPressure}
+              onChange={(v) => set("backPressure", v)}
+              messages={messagesOf("backPressure")}
+            />
+            <p className="mt-1 max-w-xs text-xs text-ink-faint">
+              The R envelope (cR, φR, for staged drawdown) takes total-stress circles at failure from σ3c = cell
+              pressure − back pressure.
+            </p>
+          </div>
         </div>
       );
     case "undrained":
@@ -131,14 +148,44 @@ export function LabOptionsFields({ kind, options, onChange, problems }: LabOptio
             />
           ) : null}
           {options.source === "vane" ? (
+            <div>
+              <label className="label" htmlFor="lab-vane-correction">
+                Correction of vane su
+              </label>
+              <select
+                id="lab-vane-correction"
+                className="field"
+                value={options.vaneCorrection}
+                onChange={(e) => set("vaneCorrection", e.target.value as LabOptions["vaneCorrection"])}
+              >
+                <option value="none">None: su as measured</option>
+                <option value="bjerrum">Bjerrum&apos;s μ from the plasticity index</option>
+                <option value="factor">A factor I give</option>
+              </select>
+            </div>
+          ) : null}
+          {options.source === "vane" && options.vaneCorrection === "factor" ? (
             <NumberSetting
               id="lab-vane"
-              label="Vane correction factor (blank: 1)"
+              label="Vane correction factor"
               unit="–"
               value={options.vaneCorrectionFactor}
               onChange={(v) => set("vaneCorrectionFactor", v)}
               messages={messagesOf("vaneCorrectionFactor")}
             />
+          ) : null}
+          {options.source === "vane" && options.vaneCorrection === "bjerrum" ? (
+            <div>
+              <NumberSetting
+                id="lab-vane-pi"
+                label="Plasticity index PI of the clay"
+                unit="%"
+                value={options.vanePlasticityIndex}
+                onChange={(v) => set("vanePlasticityIndex", v)}
+                messages={messagesOf("vanePlasticityIndex")}
+              />
+              <p className="mt-1 max-w-xs text-xs text-ink-faint">{BJERRUM_SOURCE}.</p>
+            </div>
           ) : null}
         </div>
       );

@@ -26,6 +26,17 @@ export function LabResultPlot({ record }: { record: LabTestRecord }) {
           yLabel={pq ? "q (kPa)" : "t = (σ1 − σ3)/2 (kPa)"}
           points={record.result.points}
           line={record.result.line}
+          second={
+            record.result.totalStress
+              ? {
+                  label: pq
+                    ? "total stresses at failure from σ3c, the R envelope (x is p, not p')"
+                    : "total stresses at failure from σ3c, the R envelope (x is s, not s')",
+                  points: record.result.totalStress.points,
+                  line: record.result.totalStress.line,
+                }
+              : undefined
+          }
         />
       );
     }

@@ -1,3 +1,4 @@
+import { BJERRUM_SOURCE, type UndrainedStrengthResult } from "@/lib/lab";
 import type { LabTestRecord } from "@/lib/materials/lab-kinds";
 import { formatValue } from "@/lib/materials/parameter-form";
 
@@ -17,20 +18,31 @@ function rowsOf(record: LabTestRecord): Row[] {
       ];
       if (record.kind === "direct-shear" && record.data.zeroCohesion)
         rows.splice(2, 0, ["Line forced through the origin", "yes", ""]);
+      if (record.kind === "triaxial-cu" && record.result.totalStress) {
+        const t = record.result.totalStress;
+        rows.push(
+          ["R envelope (total stress at failure): cR", formatValue(t.cohesion, 1), "kPa"],
+          ["R envelope: φR", formatValue(t.frictionAngle, 1), "°"],
+          ["R² of the R-envelope fit", formatValue(t.fit.rSquared, 3), ""],
+        );
+      }
       return rows;
     }
     case "undrained": {
       const r = record.result;
+      const vane = vaneRows(r);
       if (r.model === "constant") {
         return [
-          ["Mean su", formatValue(r.su, 1), "kPa"],
+          ...vane,
+          [vane.length > 0 ? "Mean su, corrected" : "Mean su", formatValue(r.su, 1), "kPa"],
           ["Standard deviation", formatValue(r.standardDeviation, 1), "kPa"],
           ["Coefficient of variation", formatValue(r.coefficientOfVariation, 2), ""],
           ["Tests used", String(r.n), ""],
         ];
       }
       return [
-        ["su at the datum", formatValue(r.su, 1), "kPa"],
+        ...vane,
+        [vane.length > 0 ? "su at the datum, corrected" : "su at the datum", formatValue(r.su, 1), "kPa"],
         ["Increase with depth", formatValue(r.suGradient, 2), "kPa/m"],
         ["Datum elevation", formatValue(r.suDatum, 2), "m"],
         ["R² of the fit", formatValue(r.fit.rSquared, 3), ""],
@@ -70,6 +82,47 @@ function rowsOf(record: LabTestRecord): Row[] {
   }
 }
 
+/** The vane correction and the measured mean beside the corrected values; none without a correction. */
+function vaneRows(r: UndrainedStrengthResult): Row[] {
+  const c = r.vaneCorrection;
+  if (!c || c.basis === "none") return [];
+  const measured = r.points.map((p) => p.measuredSu).filter((v): v is number => v !== undefined);
+  const mean = measured.length > 0 ? measured.reduce((s, v) => s + v, 0) / measured.length : null;
+  return [
+    [
+      c.basis === "bjerrum" ? `Bjerrum's μ at PI ${c.plasticityIndex} %` : "Correction factor given",
+      formatValue(c.factor, 3),
+      "",
+    ],
+    ["Mean vane su, as measured", formatValue(mean, 1), "kPa"],
+  ];
+}
+
+/** Each vane reading as measured and as corrected, so the raw values stay in view. */
+function VaneReadings({ r }: { r: UndrainedStrengthResult }) {
+  if (!r.vaneCorrection || r.vaneCorrection.basis === "none") return null;
+  return (
+    <table className="w-full text-xs tabular-nums" data-testid="vane-readings">
+      <thead className="text-ink-soft">
+        <tr>
+          <th className="py-0.5 text-left font-medium">Test</th>
+          <th className="py-0.5 text-right font-medium">Vane su as measured (kPa)</th>
+          <th className="py-0.5 text-right font-medium">× {formatValue(r.vaneCorrection.factor, 3)} = su used (kPa)</th>
+        </tr>
+      </thead>
+      <tbody>
+        {r.points.map((p) => (
+          <tr key={p.index} className="border-t border-rule/60">
+            <td className="py-0.5">{p.specimen ?? p.index}</td>
+            <td className="py-0.5 text-right">{formatValue(p.measuredSu ?? null, 1)}</td>
+            <td className="py-0.5 text-right">{formatValue(p.su, 1)}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
+
 /** The derived numbers of a test set, with units, its warnings and (for limits) the chart hint. */
 export function LabResultSummary({ record }: { record: LabTestRecord }) {
   return (
@@ -85,6 +138,10 @@ export function LabResultSummary({ record }: { record: LabTestRecord }) {
           ))}
         </tbody>
       </table>
+      {record.kind === "undrained" ? <VaneReadings r={record.result} /> : null}
+      {record.kind === "undrained" && record.result.vaneCorrection?.basis === "bjerrum" ? (
+        <p className="text-xs text-ink-faint">Source of μ: {BJERRUM_SOURCE}.</p>
+      ) : null}
       {record.kind === "atterberg" ? (
         <p className="rounded-md bg-paper-sunk px-3 py-2 text-xs text-ink-soft">
           <strong className="text-ink">Hint: {record.result.hint.group}.</strong> {record.result.hint.explanation}

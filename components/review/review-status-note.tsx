@@ -10,6 +10,26 @@ export function ReviewStatusNote({ record }: { record: ReviewRecord }) {
   const box = "rounded-md border-l-4 px-4 py-2 text-sm";
   switch (record.status) {
     case "approved":
+      if (record.belowRequiredReason)
+        return (
+          <div
+            className={`${box} border-dashed border-alarm-600 bg-alarm-50`}
+            data-testid="review-status-note"
+            data-status="approved-below"
+          >
+            <strong>
+              <span aria-hidden="true">▲ </span>Signed off — below the required FS
+            </strong>{" "}
+            by {record.reviewedByName} on {at(record.reviewedAt)}. The factor of safety does not meet the required
+            value; the reviewer accepted it on purpose. The run and its inputs are frozen; a change needs a revision.
+            <p className="mt-1 whitespace-pre-wrap">
+              Reason for signing off below the required FS: {record.belowRequiredReason}
+            </p>
+            {record.reviewNote ? (
+              <p className="mt-1 whitespace-pre-wrap">Reviewer&apos;s note: {record.reviewNote}</p>
+            ) : null}
+          </div>
+        );
       return (
         <div className={`${box} border-moss-600 bg-moss-50`} data-testid="review-status-note">
           <strong>Signed off</strong> by {record.reviewedByName} on {at(record.reviewedAt)}. The run and its inputs are

@@ -5,6 +5,7 @@ import { useState } from "react";
 import type { RunDetail } from "@/db/queries/runs";
 import type { ReviewState } from "@/lib/review/review-state";
 import { pinMarkers } from "@/lib/review/pin-markers";
+import { governingFsOf, isBelowRequired } from "@/lib/review/below-required";
 import type { SliceRow } from "@/lib/stability";
 import { RunView } from "@/components/run-view/run-view";
 import { AuthorActions } from "./author-actions";
@@ -103,7 +104,14 @@ export function ReviewWorkspace({ run, review, mode, canRevise }: ReviewWorkspac
                 items={review.checklist}
                 editable={review.may.checklist}
               />
-              <DecisionForm apiBase={apiBase} actions={review.may.actions} openItems={openItems} />
+              <DecisionForm
+                apiBase={apiBase}
+                actions={review.may.actions}
+                openItems={openItems}
+                belowRequired={
+                  isBelowRequired(run) ? { requiredFs: run.requiredFs, lowestFs: governingFsOf(run) } : null
+                }
+              />
             </>
           ) : (
             <AuthorActions

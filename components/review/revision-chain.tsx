@@ -31,7 +31,7 @@ export function RevisionChain({
                 Run {r.id}: {r.title}
               </Link>
             )}
-            <StatusBadge status={r.status} />
+            <StatusBadge status={r.status} belowRequired={r.belowRequired} />
           </li>
         ))}
       </ol>

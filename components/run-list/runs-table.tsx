@@ -35,7 +35,9 @@ export function RunsTable({ projectId, runs }: { projectId: number; runs: RunSum
         (!filters.condition || r.loadingCondition === filters.condition) &&
         (!filters.face || r.face === filters.face) &&
         (!filters.method || r.methods.includes(filters.method)) &&
-        (!filters.status || r.status === filters.status) &&
+        (!filters.status ||
+          r.status === filters.status ||
+          (filters.status === "approved-below" && r.status === "approved" && r.belowRequiredReason !== null)) &&
         (!filters.author || r.authorName === filters.author) &&
         (!filters.text || `${r.title} ${r.sectionName}`.toLowerCase().includes(filters.text.toLowerCase())) &&
         (maxFs === null || (governingFs(r) ?? Infinity) <= maxFs),
@@ -113,7 +115,8 @@ export function RunsTable({ projectId, runs }: { projectId: number; runs: RunSum
           ["draft", "Draft"],
           ["submitted", "Awaiting review"],
           ["returned", "Returned"],
-          ["approved", "Signed off"],
+          ["approved", "Signed off (any)"],
+          ["approved-below", "Signed off — below the required FS"],
         ])}
         {select(
           "author",
@@ -207,7 +210,7 @@ export function RunsTable({ projectId, runs }: { projectId: number; runs: RunSum
               </td>
               <td className="px-2 py-1.5 text-right tabular-nums">{r.requiredFs.toFixed(2)}</td>
               <td className="px-2 py-1.5">
-                <StatusBadge status={r.status} />
+                <StatusBadge status={r.status} belowRequired={r.belowRequiredReason !== null} />
               </td>
               <td className="px-2 py-1.5">{r.authorName}</td>
               <td className="px-2 py-1.5 tabular-nums text-ink-soft">

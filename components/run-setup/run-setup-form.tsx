@@ -201,6 +201,7 @@ export function RunSetupForm({
             setup={setup}
             outcome={done}
             revisesRunId={revisesRunId}
+            materials={doc.materials}
             onSaved={(id) => router.push(`/projects/${projectId}/runs/${id}`)}
           />
         ) : null}

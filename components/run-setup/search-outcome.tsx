@@ -8,6 +8,9 @@ import { FsSummary } from "@/components/runs/fs-summary";
 import { SliceTable } from "@/components/runs/slice-table";
 import type { WorkerMessage } from "./grid-search.worker";
 import { loadingCondition } from "@/lib/analysis/required-fs";
+import { userIssue } from "@/lib/runs/engine-issue-text";
+import { runFs } from "@/lib/runs/slice-csv";
+import { stagedFromResult } from "@/lib/runs/staged-view";
 
 export interface SearchOutcomeProps {
   projectId: number;
@@ -16,10 +19,20 @@ export interface SearchOutcomeProps {
   outcome: Extract<WorkerMessage, { type: "done" }>;
   revisesRunId?: number;
   onSaved: (runId: number) => void;
+  /** The analysed document's materials, to name them in errors. */
+  materials?: readonly { id: string; name?: string }[];
 }
 
 /** The result of a finished search, before it is kept: read it, name it, save it. */
-export function SearchOutcome({ projectId, section, setup, outcome, revisesRunId, onSaved }: SearchOutcomeProps) {
+export function SearchOutcome({
+  projectId,
+  section,
+  setup,
+  outcome,
+  revisesRunId,
+  onSaved,
+  materials = [],
+}: SearchOutcomeProps) {
   const { result, critical } = outcome;
   const [title, setTitle] = useState(`${loadingCondition(setup.condition).label}, ${setup.face} face`);
   const [error, setError] = useState<string | null>(null);
@@ -30,12 +43,15 @@ export function SearchOutcome({ projectId, section, setup, outcome, revisesRunId
       <div className="panel p-4 text-sm" data-testid="search-errors">
         <p className="font-semibold text-alarm-700">The section cannot be analysed as it is:</p>
         <ul className="mt-1 list-disc pl-5">
-          {result.errors.map((e, i) => (
-            <li key={i}>
-              {e.path ? `${e.path}: ` : ""}
-              {e.message}
-            </li>
-          ))}
+          {result.errors.map((e, i) => {
+            const u = userIssue(e, materials);
+            return (
+              <li key={i} data-code={e.code}>
+                {u.where ? `${u.where}: ` : ""}
+                {u.message}
+              </li>
+            );
+          })}
         </ul>
       </div>
     );
@@ -82,7 +98,16 @@ export function SearchOutcome({ projectId, section, setup, outcome, revisesRunId
       {critical[method] ? (
         <SliceTable
           rows={critical[method]!.slices}
-          meta={{ title, section: `${section.name} v${section.version}`, method }}
+          meta={{
+            title,
+            section: `${section.name} v${section.version}`,
+            method,
+            fs: runFs(result.methods, {
+              fsBishop: result.results.bishop?.fs ?? null,
+              fsFellenius: result.results.fellenius?.fs ?? null,
+            }),
+            staged: stagedFromResult(result),
+          }}
         />
       ) : null}
     </div>

@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import type { RunDetail } from "@/db/queries/runs";
 import type { GridSearchSuccess, SectionDocument, SliceRow } from "@/lib/stability";
 import type { RunSetup } from "@/lib/analysis/run-setup";
@@ -12,6 +12,8 @@ import { downloadText, slug } from "@/lib/client/download";
 import { RunCanvas } from "@/components/runs/run-canvas";
 import { FsSummary } from "@/components/runs/fs-summary";
 import { SliceTable } from "@/components/runs/slice-table";
+import { runFs } from "@/lib/runs/slice-csv";
+import { stagedView } from "@/lib/runs/staged-view";
 import { StatusBadge } from "@/components/run-list/status-badge";
 import { PinnedCanvas } from "@/components/review/pinned-canvas";
 import type { PinMarker } from "@/lib/review/pin-markers";
@@ -53,12 +55,12 @@ export function RunView({
   const colors = Object.fromEntries(materialPalette(doc.materials).map((m) => [m.key, m.color]));
   const drawdownTo = doc.analysis?.drawdown?.to;
   const condition = loadingCondition(run.loadingCondition as LoadingConditionKey);
-  const fs = method === "bishop" ? run.fsBishop : run.fsFellenius;
+  const staged = useMemo(() => stagedView(result, doc, run.engineVersion), [result, doc, run.engineVersion]);
 
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm text-ink-soft" data-testid="run-meta">
-        <StatusBadge status={run.status} />
+        <StatusBadge status={run.status} belowRequired={run.belowRequiredReason !== null} />
         <span>{condition?.label ?? run.loadingCondition}</span>
         <span className="capitalize">{run.face} face</span>
         <span data-testid="run-water">Water: {waterUsedText(run)}</span>
@@ -132,6 +134,7 @@ export function RunView({
         result={result}
         requiredFs={run.requiredFs}
         minMAlpha={{ bishop: tables.bishop?.minMAlpha, fellenius: tables.fellenius?.minMAlpha }}
+        staged={staged}
       />
       {tables[method] ? (
         <SliceTable
@@ -141,7 +144,8 @@ export function RunView({
             title: run.title,
             section: `${run.sectionName} v${run.sectionVersion}`,
             loadCase: condition?.label ?? run.loadingCondition,
-            fs: { [method]: fs },
+            fs: runFs(result.methods, run),
+            staged,
             requiredFs: run.requiredFs,
             circle: result.results[method]?.circle,
             ordinaryForm: result.ordinaryForm,

@@ -3,6 +3,8 @@ import { Caution } from "@/components/ui/caution";
 import { formatFs, verdictOf } from "@/lib/runs/verdict";
 import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "@/lib/runs/warning-text";
 import { VerdictMark } from "./verdict-mark";
+import { StageFsTable } from "./stage-fs-table";
+import { stagedFromResult, type StagedView } from "@/lib/runs/staged-view";
 
 export interface FsSummaryProps {
   /** The search, its warnings already gathered into one list (lib/run-records/search-record.ts keptWarnings). */
@@ -11,13 +13,16 @@ export interface FsSummaryProps {
   requiredFs?: number;
   /** Least mα on each method's critical circle, from its slice-by-slice report. */
   minMAlpha?: Partial<Record<"bishop" | "fellenius", number | null>>;
+  /** A staged drawdown's stages; by default those the result carries. */
+  staged?: StagedView | null;
 }
 
 const m2 = (v: number) => v.toFixed(2);
 const pt = (p: readonly [number, number]) => `(${m2(p[0])}, ${m2(p[1])})`;
 
 /** FS per method with pass or fail, the critical circles, the search counts, warnings and the caution. */
-export function FsSummary({ result, requiredFs, minMAlpha }: FsSummaryProps) {
+export function FsSummary({ result, requiredFs, minMAlpha, staged }: FsSummaryProps) {
+  const stages = staged ?? stagedFromResult(result);
   const warnings = describeWarnings(result.warnings);
   const rejected = rejectionList(result.circles.rejected);
   const rejectedTotal = rejected.reduce((s, r) => s + r.count, 0);
@@ -59,6 +64,8 @@ export function FsSummary({ result, requiredFs, minMAlpha }: FsSummaryProps) {
           })}
         </tbody>
       </table>
+
+      {stages ? <StageFsTable staged={stages} requiredFs={requiredFs} /> : null}
 
       <div className="grid gap-3 sm:grid-cols-2">
         {result.methods.map((m) => (

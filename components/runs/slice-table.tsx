@@ -6,6 +6,7 @@ import type { SliceRow } from "@/lib/stability";
 import { Caution } from "@/components/ui/caution";
 import {
   formatCell,
+  isStagedSlices,
   numberSlices,
   sliceColumns,
   sortSlices,
@@ -32,7 +33,8 @@ const download = (text: string, name: string) => downloadText(name, "\uFEFF" + t
 /** The slices of a critical circle: sortable by any column, with units, and downloadable as CSV. */
 export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
   const method = meta.method;
-  const columns = useMemo(() => sliceColumns(method), [method]);
+  const staged = isStagedSlices(rows);
+  const columns = useMemo(() => sliceColumns(method, staged), [method, staged]);
   const [sort, setSort] = useState<{ key: SliceColumnKey; dir: SortDirection } | null>(null);
   const numbered = useMemo(() => numberSlices(rows), [rows]);
   const shown = useMemo(() => {
@@ -99,7 +101,11 @@ export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
                   return (
                     <td
                       key={c.key}
-                      className={`px-2 py-1 ${c.decimals === null ? "text-left" : "text-right"} ${low ? "font-semibold text-alarm-700" : ""}`}
+                      className={[
+                        "px-2 py-1",
+                        c.decimals === null ? "whitespace-nowrap text-left" : "text-right",
+                        low ? "font-semibold text-alarm-700" : "",
+                      ].join(" ")}
                       title={low ? `mα below ${LOW_M_ALPHA}` : undefined}
                     >
                       {v === null ? "—" : formatCell(c, v)}
@@ -116,6 +122,14 @@ export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
         Click a header to sort by it, again to reverse. The CSV holds the same columns. mα values marked “!” are below{" "}
         {LOW_M_ALPHA}.
       </p>
+      {staged ? (
+        <p className="mt-1 text-xs text-ink-faint" data-testid="staged-slice-note">
+          Staged drawdown: c and φ are the strengths of the final stage. Where the undrained strength governs
+          (“undrained (stage 2)”) they are total-stress values: c = τff from the stage-1 consolidation stress σ′fc, φ =
+          0, no pore pressure. Where the drained strength is lower (“drained (stage 3)”), and on free-draining bases,
+          they are c′ and φ′ with the pore pressure after drawdown.
+        </p>
+      ) : null}
       {caution ? (
         <div className="mt-2">
           <Caution compact />

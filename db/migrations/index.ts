@@ -6,6 +6,7 @@ import * as m005 from "./005-loading-conditions";
 import * as m006 from "./006-review";
 import * as m007 from "./007-design-studies";
 import * as m008 from "./008-run-water-condition";
+import * as m009 from "./009-below-required-sign-off";
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -22,6 +23,7 @@ const migrations: Record<string, Migration> = {
   "006-review": m006,
   "007-design-studies": m007,
   "008-run-water-condition": m008,
+  "009-below-required-sign-off": m009,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

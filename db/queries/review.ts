@@ -35,6 +35,8 @@ export interface ReviewRecord {
   reviewedByName: string | null;
   reviewedAt: string | null;
   reviewNote: string | null;
+  /** Set when the run was signed off below its required FS: the reviewer's reason. */
+  belowRequiredReason: string | null;
   materialSources: MaterialSourceRecord[] | null;
 }
 
@@ -67,6 +69,7 @@ export async function fetchReviewRecord(runId: number, db: Knex = getDb()): Prom
       "v.name as reviewed_name",
       "r.reviewed_at",
       "r.review_note",
+      "r.below_required_reason",
       "r.material_sources",
     )
     .first();
@@ -80,6 +83,7 @@ export async function fetchReviewRecord(runId: number, db: Knex = getDb()): Prom
     reviewedByName: r.reviewed_name ?? null,
     reviewedAt: iso(r.reviewed_at),
     reviewNote: r.review_note ?? null,
+    belowRequiredReason: r.below_required_reason ?? null,
     materialSources: r.material_sources ? JSON.parse(r.material_sources) : null,
   };
 }
@@ -130,6 +134,8 @@ export interface TransitionWrite {
   note: string;
   /** Frozen with the run when it is submitted. */
   materialSources?: MaterialSourceRecord[];
+  /** Signing off below the required FS: the reviewer's reason, kept with the run. */
+  belowRequiredReason?: string | null;
 }
 
 /**
@@ -152,10 +158,15 @@ export async function applyTransition(w: TransitionWrite, db: Knex = getDb()): P
       });
     } else {
       Object.assign(patch, { reviewed_by: w.actorId, reviewed_at: now, review_note: w.note || null });
+      if (w.to === "approved") patch.below_required_reason = w.belowRequiredReason || null;
     }
     await trx("runs").where({ id: w.runId, status: w.from }).update(patch);
+    // The audit line keeps the reason too, so the trail alone shows the sign-off was deliberate.
+    const note = w.belowRequiredReason
+      ? `${w.note ? `${w.note}\n` : ""}Signed off below the required FS. Reason: ${w.belowRequiredReason}`
+      : w.note;
     await recordRunEvent(
-      { runId: w.runId, actorId: w.actorId, kind: "status", fromStatus: w.from, toStatus: w.to, note: w.note },
+      { runId: w.runId, actorId: w.actorId, kind: "status", fromStatus: w.from, toStatus: w.to, note },
       trx,
     );
   });

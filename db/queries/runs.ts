@@ -25,6 +25,8 @@ export interface RunSummary {
   loadingCondition: string;
   /** The section's water condition the run analysed; null for runs kept before named conditions. */
   waterCondition: { id: string; name: string } | null;
+  /** Set when the run was signed off below its required FS: the reviewer's reason. */
+  belowRequiredReason: string | null;
 }
 
 const num = (v: unknown) => (v === null || v === undefined ? null : Number(v));
@@ -52,6 +54,7 @@ export function toRunSummary(r: Record<string, unknown>): RunSummary {
     waterCondition: r.water_condition_id
       ? { id: r.water_condition_id as string, name: r.water_condition_name as string }
       : null,
+    belowRequiredReason: (r.below_required_reason as string | null) ?? null,
   };
 }
 
@@ -81,6 +84,7 @@ export function runSummaryQuery(db: Knex) {
       "r.loading_condition",
       "r.water_condition_id",
       "r.water_condition_name",
+      "r.below_required_reason",
     );
 }
 
@@ -240,6 +244,8 @@ export interface ChainLink {
   title: string;
   status: RunSummary["status"];
   createdAt: string;
+  /** Signed off below the required FS. */
+  belowRequired: boolean;
 }
 
 /**
@@ -249,12 +255,13 @@ export interface ChainLink {
 export async function fetchRevisionChain(projectId: number, runId: number, db: Knex = getDb()): Promise<ChainLink[]> {
   const rows = (await db("runs")
     .where({ project_id: projectId })
-    .select("id", "title", "status", "created_at", "revises_run_id")) as {
+    .select("id", "title", "status", "created_at", "revises_run_id", "below_required_reason")) as {
     id: number;
     title: string;
     status: RunSummary["status"];
     created_at: Date;
     revises_run_id: number | null;
+    below_required_reason: string | null;
   }[];
   const byId = new Map(rows.map((r) => [r.id, r]));
   const link = (r: (typeof rows)[number]): ChainLink => ({
@@ -262,6 +269,7 @@ export async function fetchRevisionChain(projectId: number, runId: number, db: K
     title: r.title,
     status: r.status,
     createdAt: new Date(r.created_at).toISOString(),
+    belowRequired: r.below_required_reason !== null,
   });
   const start = byId.get(runId);
   if (!start) return [];

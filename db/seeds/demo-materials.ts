@@ -56,6 +56,7 @@ const DEMO: DemoMaterial[] = [
         name: "Borrow area A, CU triaxial with pore pressures, 38 mm",
         data: {
           space: "s-t",
+          backPressure: 200,
           specimens: [
             { specimen: "CU-1", cellPressure: 250, deviatorStress: 113, porePressure: 200 },
             { specimen: "CU-2", cellPressure: 320, deviatorStress: 196, porePressure: 220 },

@@ -14,3 +14,5 @@ export * from "./compaction-spec";
 export * from "./form-values";
 export * from "./case-styles";
 export * from "./compare-sweep";
+export * from "./fs-axis";
+export * from "./piping-exit";

@@ -8,6 +8,7 @@
 import { computeFilterSeepage, type SeepageLimit, type SeepageResult } from "../stability";
 import type { EmbankmentGeometry, XY } from "./embankment-geometry";
 import type { EmbankmentParams } from "./parameters";
+import { assessPipingExits, type PipingAtExits } from "./piping-exit";
 
 export type PoolName = "normal" | "flood";
 
@@ -24,6 +25,8 @@ export interface PhreaticOutcome {
   seepage: SeepageResult | null;
   /** Why the method does not apply, or its warnings. */
   limits: SeepageLimit[];
+  /** Piping where the line shows water leaving the fill (lib/design/piping-exit.ts); null without a line. */
+  piping: PipingAtExits | null;
 }
 
 /** γsat of a material, for the critical gradient (kN/m³); 20 when the material has none. */
@@ -88,12 +91,23 @@ export function phreaticForPool(
   fillGammaSat: number,
 ): PhreaticOutcome {
   const poolLevel = pool === "normal" ? p.normalPool : p.floodPool;
+  const exits = (line: readonly XY[]): PipingAtExits =>
+    assessPipingExits({
+      line,
+      downstreamFace: g.downstreamFace,
+      drainTop: g.drain.top,
+      gammaSat: fillGammaSat,
+      required: p.requiredPipingFactor,
+    });
   const hand = p.handLines[pool];
-  if (hand)
-    return { pool, poolLevel, source: "hand-drawn", line: spanSection(hand, g.xmax), seepage: null, limits: [] };
+  if (hand) {
+    const line = spanSection(hand, g.xmax);
+    return { pool, poolLevel, source: "hand-drawn", line, seepage: null, limits: [], piping: exits(line) };
+  }
 
   const refused = methodLimits(p);
-  if (refused.length > 0) return { pool, poolLevel, source: "none", line: null, seepage: null, limits: refused };
+  if (refused.length > 0)
+    return { pool, poolLevel, source: "none", line: null, seepage: null, limits: refused, piping: null };
   const seepage = computeFilterSeepage({
     baseElevation: p.foundationTop,
     poolElevation: poolLevel,
@@ -112,14 +126,10 @@ export function phreaticForPool(
         ? { ...l, message: `${l.message} ${HAND_LINE_REQUEST}` }
         : l,
     );
-    return { pool, poolLevel, source: "none", line: null, seepage, limits };
+    // A line that comes out on the face is not drawn, but where it comes out is still worth checking.
+    const piping = seepage.construction ? exits(spanSection(seepage.construction.waterLine, g.xmax)) : null;
+    return { pool, poolLevel, source: "none", line: null, seepage, limits, piping };
   }
-  return {
-    pool,
-    poolLevel,
-    source: "constructed",
-    line: spanSection(seepage.construction.waterLine, g.xmax),
-    seepage,
-    limits: seepage.limits,
-  };
+  const line = spanSection(seepage.construction.waterLine, g.xmax);
+  return { pool, poolLevel, source: "constructed", line, seepage, limits: seepage.limits, piping: exits(line) };
 }

@@ -3,6 +3,7 @@ export * from "./least-squares";
 export * from "./direct-shear";
 export * from "./triaxial-cu";
 export * from "./undrained-strength";
+export * from "./vane-correction";
 export * from "./compaction";
 export * from "./atterberg";
 export * from "./schemas";

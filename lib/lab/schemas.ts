@@ -29,6 +29,7 @@ export const triaxialCuSpecimenSchema = z.object({
 export const triaxialCuInputSchema = z.object({
   specimens: z.array(triaxialCuSpecimenSchema).min(2).max(200),
   space: z.enum(["p-q", "s-t"]),
+  backPressure: nonNegative.optional(),
 });
 
 export const undrainedTestSchema = z.object({
@@ -46,6 +47,7 @@ export const undrainedStrengthInputSchema = z
     groundElevation: z.number().optional(),
     datumElevation: z.number().optional(),
     vaneCorrectionFactor: positive.optional(),
+    vanePlasticityIndex: positive.optional(),
   })
   .superRefine((input, ctx) => {
     const field = input.source === "uu" ? "deviatorStress" : "su";

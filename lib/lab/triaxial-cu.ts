@@ -29,12 +29,34 @@ export type TriaxialStressSpace = "p-q" | "s-t";
 export interface TriaxialCuInput {
   specimens: TriaxialCuSpecimen[];
   space: TriaxialStressSpace;
+  /**
+   * Back pressure (kPa) on the datum of the cell and pore pressures; default 0. The R envelope
+   * takes σ3c = cell pressure − back pressure, the effective consolidation pressure.
+   */
+  backPressure?: number;
 }
 
 export interface TriaxialCuPoint extends SourcedPoint {
   /** Effective minor and major principal stresses at failure (kPa), for Mohr circles. */
   sigma3Effective: number;
   sigma1Effective: number;
+}
+
+/**
+ * The total-stress (R) envelope of the same specimens: Mohr circles of total stress at failure,
+ * σ3 = σ3c, the cell pressure less the back pressure (the consolidation pressure), and σ1 = σ3 + q,
+ * fitted in the same space as the effective envelope. Its cR, φR are what the staged
+ * rapid-drawdown method plots against the effective consolidation stress (USACE EM 1110-2-1902;
+ * Duncan, Wright & Wong 1990), see docs/engine.md §7(b).
+ */
+export interface TotalStressEnvelope {
+  /** cR (kPa) and φR (degrees). */
+  cohesion: number;
+  frictionAngle: number;
+  fit: LinearFit;
+  /** x = p or s (total), y = q or t (kPa). */
+  points: { x: number; y: number; sigma3: number; sigma1: number }[];
+  line: [[number, number], [number, number]];
 }
 
 export interface TriaxialCuResult {
@@ -51,6 +73,11 @@ export interface TriaxialCuResult {
   line: [[number, number], [number, number]];
   sourceIds: string[];
   warnings: string[];
+  /**
+   * The R envelope from the same specimens; null when its fit gives no friction angle. Absent on
+   * sets derived before it was added (they are derived again when edited).
+   */
+  totalStress?: TotalStressEnvelope | null;
 }
 
 /**
@@ -78,6 +105,12 @@ export function deriveTriaxialCuStrength(input: TriaxialCuInput): TriaxialCuResu
       problems.add(where, "porePressure", "effective cell pressure σ3 − u must be positive");
     }
   });
+  const back = input.backPressure ?? 0;
+  if (problems.requireNonNegative("input", "backPressure", "back pressure", back))
+    specimens.forEach((s, i) => {
+      if (Number.isFinite(s.cellPressure) && s.cellPressure <= back)
+        problems.add(describeRow(s, i), "cellPressure", `cell pressure must exceed the back pressure (${back} kPa)`);
+    });
   problems.throwIfAny();
 
   const points = specimens.map((s, i): TriaxialCuPoint => {
@@ -108,6 +141,7 @@ export function deriveTriaxialCuStrength(input: TriaxialCuInput): TriaxialCuResu
   if (fit.rSquared < 0.9)
     warnings.push(`the points scatter about the line (R² = ${fit.rSquared.toFixed(3)}): check the tests`);
 
+  const totalStress = deriveTotalStressEnvelope(input.space, specimens, back, warnings);
   const xMax = Math.max(...points.map((p) => p.x));
   return {
     space: input.space,
@@ -123,6 +157,53 @@ export function deriveTriaxialCuStrength(input: TriaxialCuInput): TriaxialCuResu
     ],
     sourceIds: collectSourceIds(specimens),
     warnings,
+    totalStress,
+  };
+}
+
+/** Fits the R envelope to total-stress circles at failure; notes in `warnings` why it could not. */
+function deriveTotalStressEnvelope(
+  space: TriaxialStressSpace,
+  specimens: readonly TriaxialCuSpecimen[],
+  backPressure: number,
+  warnings: string[],
+): TotalStressEnvelope | null {
+  const points = specimens.map((s) => {
+    const s3 = s.cellPressure - backPressure;
+    const s1 = s3 + s.deviatorStress;
+    const [x, y] = space === "p-q" ? [(s1 + 2 * s3) / 3, s1 - s3] : [(s1 + s3) / 2, (s1 - s3) / 2];
+    return { x, y, sigma3: s3, sigma1: s1 };
+  });
+  if (new Set(points.map((p) => p.x)).size < 2) {
+    warnings.push("no R envelope: the specimens need at least 2 different cell pressures");
+    return null;
+  }
+  const fit = fitLine(
+    points.map((p) => p.x),
+    points.map((p) => p.y),
+  );
+  let envelope: { cohesion: number; frictionAngle: number };
+  try {
+    envelope = toMohrCoulomb(space, fit.intercept, fit.slope);
+  } catch (err) {
+    if (!(err instanceof LabInputError)) throw err;
+    warnings.push(`no R envelope: ${err.problems[0]?.message ?? "the total-stress fit gives no friction angle"}`);
+    return null;
+  }
+  if (envelope.cohesion < 0)
+    warnings.push(
+      `the fitted R-envelope intercept is negative (${envelope.cohesion.toFixed(1)} kPa): ` +
+        "check the specimens or take cR = 0",
+    );
+  const xMax = Math.max(...points.map((p) => p.x));
+  return {
+    ...envelope,
+    fit,
+    points,
+    line: [
+      [0, fit.intercept],
+      [xMax, fit.intercept + fit.slope * xMax],
+    ],
   };
 }
 

@@ -1,5 +1,6 @@
 import { fitLine, type LinearFit } from "./least-squares";
 import { ProblemList, collectSourceIds, describeRow, type LabRowRef } from "./lab-input";
+import { BJERRUM_PI_RANGE, bjerrumMu, type VaneCorrection } from "./vane-correction";
 
 /**
  * One undrained strength measurement. Give `deviatorStress` for a UU triaxial test or `su` for a
@@ -23,13 +24,20 @@ export interface UndrainedStrengthInput {
   groundElevation?: number;
   /** Datum elevation for the linear model (m); default the ground, else the highest test. */
   datumElevation?: number;
-  /** Multiplier on vane su (e.g. Bjerrum's μ); default 1, i.e. no correction. */
+  /** Multiplier on vane su typed by the user; default 1, i.e. no correction. */
   vaneCorrectionFactor?: number;
+  /**
+   * Plasticity index PI (%) of the clay: when given, vane su is multiplied by Bjerrum's μ(PI)
+   * (lib/lab/vane-correction.ts). Only one of this and vaneCorrectionFactor may be given.
+   */
+  vanePlasticityIndex?: number;
 }
 
 export interface UndrainedPoint {
   /** Undrained strength (kPa) after any vane correction. */
   su: number;
+  /** Vane tests: su as read in the field (kPa), before the correction. */
+  measuredSu?: number;
   /** Elevation (m), or null when the test has no position. */
   elevation: number | null;
   index: number;
@@ -50,6 +58,8 @@ interface CommonResult {
   engineFields: UndrainedModelFields;
   sourceIds: string[];
   warnings: string[];
+  /** Vane tests: the correction applied to every reading (absent for UU tests). */
+  vaneCorrection?: VaneCorrection;
 }
 
 export interface ConstantSuResult extends CommonResult {
@@ -86,7 +96,6 @@ export type UndrainedStrengthResult = ConstantSuResult | LinearSuResult;
 export function deriveUndrainedStrength(input: UndrainedStrengthInput): UndrainedStrengthResult {
   const problems = new ProblemList();
   const tests = input.tests ?? [];
-  const factor = input.vaneCorrectionFactor ?? 1;
   const needPosition = input.model === "linear";
   if (input.source !== "uu" && input.source !== "vane")
     problems.add("input", "source", "source must be 'uu' or 'vane'");
@@ -94,8 +103,8 @@ export function deriveUndrainedStrength(input: UndrainedStrengthInput): Undraine
     problems.add("input", "model", "model must be 'constant' or 'linear'");
   if (tests.length < (needPosition ? 2 : 1))
     problems.add("input", "tests", `at least ${needPosition ? 2 : 1} tests are needed, got ${tests.length}`);
-  if (input.source === "vane")
-    problems.requirePositive("input", "vaneCorrectionFactor", "vane correction factor", factor);
+  const correction = input.source === "vane" ? vaneCorrectionOf(input, problems) : undefined;
+  const factor = correction?.factor ?? 1;
   if (input.groundElevation !== undefined)
     problems.requireFinite("input", "groundElevation", "ground elevation", input.groundElevation);
   if (input.datumElevation !== undefined)
@@ -112,6 +121,7 @@ export function deriveUndrainedStrength(input: UndrainedStrengthInput): Undraine
     }
     const elevation = elevationOf(t, input.groundElevation, where, problems, needPosition);
     const point: UndrainedPoint = { su, elevation, index: i + 1 };
+    if (input.source === "vane" && typeof t.su === "number") point.measuredSu = t.su;
     if (t.id !== undefined) point.id = t.id;
     if (t.specimen !== undefined) point.specimen = t.specimen;
     return point;
@@ -119,8 +129,49 @@ export function deriveUndrainedStrength(input: UndrainedStrengthInput): Undraine
   problems.throwIfAny();
 
   const common = { n: tests.length, points, sourceIds: collectSourceIds(tests) };
-  if (input.model === "constant") return constantSu(common);
-  return linearSu(common, input, problems);
+  const result = input.model === "constant" ? constantSu(common) : linearSu(common, input, problems);
+  if (!correction) return result;
+  result.vaneCorrection = correction;
+  if (correction.basis === "bjerrum" && correction.factor > 1)
+    result.warnings.push(
+      `Bjerrum's μ is ${correction.factor.toFixed(2)} at PI ${correction.plasticityIndex} %: ` +
+        "it raises the vane strength; many designers take μ no higher than 1",
+    );
+  return result;
+}
+
+/** The correction the user chose for vane readings: none, a typed factor, or Bjerrum's μ(PI). */
+function vaneCorrectionOf(input: UndrainedStrengthInput, problems: ProblemList): VaneCorrection {
+  const pi = input.vanePlasticityIndex;
+  if (pi !== undefined && input.vaneCorrectionFactor !== undefined) {
+    problems.add(
+      "input",
+      "vanePlasticityIndex",
+      "give either a vane correction factor or the plasticity index for Bjerrum's μ, not both",
+    );
+    return { basis: "none", factor: 1 };
+  }
+  if (pi !== undefined) {
+    const [lo, hi] = BJERRUM_PI_RANGE;
+    const mu = bjerrumMu(pi);
+    if (!Number.isFinite(mu)) {
+      problems.add(
+        "input",
+        "vanePlasticityIndex",
+        `plasticity index ${pi} % is outside Bjerrum's curve (PI ${lo} to ${hi} %): give a correction factor instead`,
+      );
+      return { basis: "none", factor: 1 };
+    }
+    return { basis: "bjerrum", factor: mu, plasticityIndex: pi };
+  }
+  if (input.vaneCorrectionFactor === undefined) return { basis: "none", factor: 1 };
+  const ok = problems.requirePositive(
+    "input",
+    "vaneCorrectionFactor",
+    "vane correction factor",
+    input.vaneCorrectionFactor,
+  );
+  return ok ? { basis: "given", factor: input.vaneCorrectionFactor } : { basis: "none", factor: 1 };
 }
 
 function elevationOf(

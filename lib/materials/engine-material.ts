@@ -15,11 +15,8 @@ export function toEngineMaterial(m: LibraryMaterialLike): Material {
   return { ...m.parameters, id: m.key, name: m.name, color: m.color } as Material;
 }
 
-/**
- * The library as a materials CSV (lib/section-io's format), read back by the import.
- * The CSV has no columns for colour, free drainage or su on a drained material, so those stay behind.
- */
+/** The library as a materials CSV (lib/section-io's format, colour included), read back by the import. */
 export function libraryToCsv(materials: readonly LibraryMaterialLike[]): string {
-  const rows = materials.map((m) => ({ ...m.parameters, id: m.key }) as SectionMaterial);
+  const rows = materials.map((m) => ({ ...m.parameters, id: m.key, color: m.color }) as SectionMaterial);
   return materialsToCsv(rows, Object.fromEntries(materials.map((m) => [m.key, m.name])));
 }

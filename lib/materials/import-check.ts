@@ -8,6 +8,8 @@ export interface ImportedMaterial {
   row: number;
   key: string;
   name: string;
+  /** #RRGGBB from the colour column; absent when the file leaves it blank. */
+  color?: string;
   parameters: MaterialParameters;
 }
 
@@ -23,7 +25,7 @@ export interface MaterialsImportCheck {
 export const MAX_IMPORT_ROWS = 500;
 
 /**
- * Reads a materials CSV (lib/section-io's format: id,name,model,gamma,gammaSat,c,phi,su,suGradient,suDatum)
+ * Reads a materials CSV (lib/section-io's format: id,name,model,gamma,…,cR,phiR,freeDraining,colour)
  * for the library. On top of the CSV's own checks, each id must be a material key and must not be
  * in the library already. Runs in the browser for the preview and again on the server.
  */
@@ -58,6 +60,7 @@ export function checkMaterialsImport(text: string, existingKeys: readonly string
         row: rowOf.get(m.id)?.row ?? 0,
         key: m.id,
         name: parsed.value.names[m.id] ?? m.id,
+        ...(m.color !== undefined && { color: m.color }),
         parameters: withoutId(m),
       }))
     : [];
@@ -70,8 +73,9 @@ export function checkMaterialsImport(text: string, existingKeys: readonly string
   };
 }
 
+/** The library keeps id and colour in columns of their own, not among the parameters. */
 function withoutId(m: SectionMaterial): MaterialParameters {
-  const { id: _id, ...rest } = m;
+  const { id: _id, color: _color, ...rest } = m;
   return rest as MaterialParameters;
 }
 

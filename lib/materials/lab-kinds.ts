@@ -80,7 +80,8 @@ export const LAB_KIND_INFO: Record<LabTestKind, LabKindInfo> = {
       num("deviatorStress", "Deviator stress at failure q", "kPa"),
       num("porePressure", "Pore pressure at failure u", "kPa"),
     ],
-    feeds: ["c", "phi"],
+    // Effective envelope from the effective circles, R envelope from the total-stress circles.
+    feeds: ["c", "phi", "cR", "phiR"],
     startRows: 3,
   },
   undrained: {

@@ -9,11 +9,16 @@ export type LabRow = Record<string, string>;
 export interface LabOptions {
   zeroCohesion: boolean;
   space: "p-q" | "s-t";
+  /** CU triaxial: back pressure (kPa) on the datum of the cell and pore pressures. */
+  backPressure: string;
   source: "uu" | "vane";
   model: "constant" | "linear";
   groundElevation: string;
   datumElevation: string;
+  /** How vane readings are corrected: not at all, by a typed factor, or by Bjerrum's μ(PI). */
+  vaneCorrection: "none" | "factor" | "bjerrum";
   vaneCorrectionFactor: string;
+  vanePlasticityIndex: string;
   specificGravity: string;
   acceptancePercent: string;
   nonPlastic: boolean;
@@ -22,11 +27,14 @@ export interface LabOptions {
 export const DEFAULT_LAB_OPTIONS: LabOptions = {
   zeroCohesion: false,
   space: "p-q",
+  backPressure: "",
   source: "uu",
   model: "constant",
   groundElevation: "",
   datumElevation: "",
+  vaneCorrection: "none",
   vaneCorrectionFactor: "",
+  vanePlasticityIndex: "",
   specificGravity: "2.70",
   acceptancePercent: "95",
   nonPlastic: false,
@@ -90,7 +98,11 @@ export function buildLabInput(kind: LabTestKind, rows: readonly LabRow[], option
       data = { tests: records, zeroCohesion: options.zeroCohesion };
       break;
     case "triaxial-cu":
-      data = { specimens: records, space: options.space };
+      data = {
+        specimens: records,
+        space: options.space,
+        backPressure: setting("backPressure", options.backPressure, "Back pressure"),
+      };
       break;
     case "undrained":
       data = {
@@ -100,10 +112,20 @@ export function buildLabInput(kind: LabTestKind, rows: readonly LabRow[], option
         groundElevation: setting("groundElevation", options.groundElevation, "Ground elevation"),
         datumElevation: setting("datumElevation", options.datumElevation, "Datum elevation"),
         vaneCorrectionFactor:
-          options.source === "vane"
+          options.source === "vane" && options.vaneCorrection === "factor"
             ? setting("vaneCorrectionFactor", options.vaneCorrectionFactor, "Vane correction factor")
             : undefined,
+        vanePlasticityIndex:
+          options.source === "vane" && options.vaneCorrection === "bjerrum"
+            ? setting("vanePlasticityIndex", options.vanePlasticityIndex, "Plasticity index PI")
+            : undefined,
       };
+      if (options.source === "vane" && options.vaneCorrection === "bjerrum" && data.vanePlasticityIndex === undefined)
+        problems.push({
+          row: null,
+          column: "vanePlasticityIndex",
+          message: "Plasticity index PI: enter the clay's PI (%) for Bjerrum's μ, or choose no correction.",
+        });
       break;
     case "compaction":
       data = {
@@ -135,11 +157,15 @@ export function labInputToRows(
   const options: LabOptions = {
     zeroCohesion: data.zeroCohesion === true,
     space: data.space === "s-t" ? "s-t" : "p-q",
+    backPressure: text(data.backPressure, ""),
     source: data.source === "vane" ? "vane" : "uu",
     model: data.model === "linear" ? "linear" : "constant",
     groundElevation: text(data.groundElevation, ""),
     datumElevation: text(data.datumElevation, ""),
+    vaneCorrection:
+      data.vanePlasticityIndex !== undefined ? "bjerrum" : data.vaneCorrectionFactor !== undefined ? "factor" : "none",
     vaneCorrectionFactor: text(data.vaneCorrectionFactor, ""),
+    vanePlasticityIndex: text(data.vanePlasticityIndex, ""),
     specificGravity: text(data.specificGravity, DEFAULT_LAB_OPTIONS.specificGravity),
     acceptancePercent: text(data.acceptancePercent, DEFAULT_LAB_OPTIONS.acceptancePercent),
     nonPlastic: data.nonPlastic === true,

@@ -82,23 +82,36 @@ export interface SuggestedValues {
   note?: string;
 }
 
+const ENVELOPE_LABEL = { c: "c' and φ'", cR: "cR and φR (R envelope, staged drawdown)" } as const;
+
+/** An envelope's intercept and angle as design values (0.1 kPa, 0.1°); a negative intercept becomes 0. */
+function envelopeValues(
+  e: { cohesion: number; frictionAngle: number },
+  cKey: "c" | "cR",
+  phiKey: "phi" | "phiR",
+): SuggestedValues {
+  const c = e.cohesion;
+  const symbol = cKey === "c" ? "c'" : "cR";
+  return {
+    label: ENVELOPE_LABEL[cKey],
+    values: { [cKey]: tidy(Math.max(0, round(c, 0.1)), 1), [phiKey]: tidy(round(e.frictionAngle, 0.1), 1) },
+    note: c < 0 ? `The fitted ${symbol} is negative (${c.toFixed(1)} kPa); 0 is used.` : undefined,
+  };
+}
+
 /**
  * What "use these values" copies into a material from a derived result: c', φ' (0.1 kPa, 0.1°);
+ * from CU triaxial sets also the R envelope cR, φR;
  * su with its gradient and datum; γ and γsat at the optimum (0.1 kN/m³). Atterberg limits give
  * only a hint, so nothing.
  */
 export function suggestedValues(record: LabTestRecord): SuggestedValues[] {
   switch (record.kind) {
     case "direct-shear":
+      return [envelopeValues(record.result, "c", "phi")];
     case "triaxial-cu": {
-      const c = record.result.cohesion;
-      return [
-        {
-          label: "c' and φ'",
-          values: { c: tidy(Math.max(0, round(c, 0.1)), 1), phi: tidy(round(record.result.frictionAngle, 0.1), 1) },
-          note: c < 0 ? `The fitted c' is negative (${c.toFixed(1)} kPa); 0 is used.` : undefined,
-        },
-      ];
+      const r = record.result.totalStress;
+      return [envelopeValues(record.result, "c", "phi"), ...(r ? [envelopeValues(r, "cR", "phiR")] : [])];
     }
     case "undrained": {
       const r = record.result;

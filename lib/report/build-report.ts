@@ -10,12 +10,13 @@ import { CAUTION_TEXT } from "../caution";
 import { formatFs, verdictOf, verdictWords } from "../runs/verdict";
 import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "../runs/warning-text";
 import { fullChecklist, type ChecklistEntry } from "../review/checklist";
-import { STATUS_WORDS, type RunStatus } from "../review/status";
+import { STATUS_WORDS, statusWords, type RunStatus } from "../review/status";
 import type { MaterialSourceRecord } from "../review/material-sources";
 import { ALARM, MOSS, ReportWriter, SOFT, INK } from "./report-writer";
 import { drawSection } from "./section-drawing";
 import { waterUsedText } from "../runs/water-used";
 import { writeSliceTable } from "./slice-pages";
+import { VARIANT_TEXT, stageCells, stagedView } from "../runs/staged-view";
 
 export interface ReportInput {
   projectName: string;
@@ -45,6 +46,8 @@ export interface ReportInput {
     reviewedByName: string | null;
     reviewedAt: string | null;
     reviewNote: string | null;
+    /** The reviewer's reason when the run was signed off below its required FS. */
+    belowRequiredReason?: string | null;
   };
   checklist: readonly ChecklistEntry[];
   comments: readonly { label: string; authorName: string; body: string; createdAt: string }[];
@@ -57,6 +60,8 @@ export interface ReportInput {
 
 const day = (iso: string | null) => (iso ? new Date(iso).toISOString().replace("T", " ").slice(0, 16) + " UTC" : "—");
 const m2 = (v: number) => v.toFixed(2);
+/** A sentence typed by a person, ended with one full stop. */
+const withStop = (text: string) => (/[.!?]$/.test(text.trim()) ? text.trim() : `${text.trim()}.`);
 
 function radiiText(r: Radii | undefined): string {
   if (!r) return "—";
@@ -67,7 +72,17 @@ function radiiText(r: Radii | undefined): string {
 
 function writeStatus(w: ReportWriter, input: ReportInput): void {
   const { run, review } = input;
-  if (run.status === "approved") {
+  if (run.status === "approved" && review.belowRequiredReason) {
+    const note = review.reviewNote ? ` Reviewer's note: ${review.reviewNote}` : "";
+    w.box(
+      "Review status: SIGNED OFF — BELOW THE REQUIRED FS, " +
+        `by ${review.reviewedByName ?? "—"} on ${day(review.reviewedAt)}`,
+      `The factor of safety does not meet the required ${run.requiredFs.toFixed(2)}; ` +
+        `the reviewer signed it off on purpose. Reason: ${withStop(review.belowRequiredReason)} ` +
+        `Submitted by ${review.submittedByName ?? "—"} on ${day(review.submittedAt)}.${note}`,
+      ALARM,
+    );
+  } else if (run.status === "approved") {
     const note = review.reviewNote ? ` Reviewer's note: ${review.reviewNote}` : "";
     w.box(
       `Review status: SIGNED OFF by ${review.reviewedByName ?? "—"} on ${day(review.reviewedAt)}`,
@@ -183,6 +198,7 @@ function writeResults(w: ReportWriter, input: ReportInput): void {
     rows,
     8.5,
   );
+  writeStages(w, input);
   w.ensure(360);
   w.heading("Section with the critical circles");
   drawSection(w, {
@@ -208,6 +224,52 @@ function writeResults(w: ReportWriter, input: ReportInput): void {
     );
 }
 
+function materialRemark(model: string): string {
+  return model === "impenetrable"
+    ? "no slip surface may enter it; no strength is used"
+    : "no value recorded in the section";
+}
+
+/** A staged drawdown's factor of safety at each stage, per method; the last row is the run's FS. */
+function writeStages(w: ReportWriter, input: ReportInput): void {
+  const { run } = input;
+  const staged = stagedView(run.result, run.document, run.engineVersion);
+  if (!staged) return;
+  const methods = run.result.methods.filter((m) => staged.stages[m] !== undefined);
+  w.heading(`Staged rapid drawdown: ${VARIANT_TEXT[staged.variant]}`);
+  const labels = stageCells({ fs1: null, fs2: null, fs3: null, final: null, switchedSlices: 0 }, staged.variant);
+  const cells = methods.map((m) => {
+    const f = staged.stages[m];
+    return f ? stageCells(f, staged.variant) : null;
+  });
+  const methodWidth = Math.min(120, (w.width - 270) / Math.max(1, methods.length));
+  w.table(
+    [
+      { header: "Stage", width: w.width - methodWidth * methods.length },
+      ...methods.map((m) => ({
+        header: m === "bishop" ? "Bishop's simplified" : "Ordinary method",
+        width: methodWidth,
+        align: "right" as const,
+      })),
+    ],
+    labels.map((row, i) => [
+      row.label,
+      ...cells.map((c) => {
+        const cell = c?.[i];
+        if (!cell) return "not available";
+        if (cell.fs === null) return `— (${cell.missing})`;
+        return cell.note ? `${formatFs(cell.fs)} (${cell.note})` : formatFs(cell.fs);
+      }),
+    ]),
+    8.5,
+  );
+  w.paragraph(
+    "Stage 1 gives the consolidation stresses on each slice base; the undrained strengths of stage 2 follow " +
+      "from them. The FS of the run is the final stage's; the slice tables give each base's governing strength.",
+    { size: 7.5, color: SOFT },
+  );
+}
+
 function writeMaterials(w: ReportWriter, input: ReportInput): void {
   w.heading("Materials and where their values come from");
   if (!input.sourcesFrozen)
@@ -217,6 +279,8 @@ function writeMaterials(w: ReportWriter, input: ReportInput): void {
     );
   const rows: string[][] = [];
   for (const m of input.materials) {
+    // An impenetrable layer often has no number at all, yet it bounds every slip surface: list it anyway.
+    if (m.parameters.length === 0) rows.push([`${m.name} (${m.key})`, m.model, "—", materialRemark(m.model)]);
     m.parameters.forEach((p, i) =>
       rows.push([
         i === 0 ? `${m.name} (${m.key})` : "",
@@ -276,7 +340,8 @@ export async function buildRunReport(input: ReportInput): Promise<Uint8Array> {
   writeReview(w, input);
   writeSliceTable(w, run.sliceTables, run.result.methods);
   return w.finish(
-    `Scarpline calculation report — run ${run.id}, ${STATUS_WORDS[run.status]} — ${input.projectName}`,
+    `Scarpline calculation report — run ${run.id}, ` +
+      `${statusWords(run.status, Boolean(input.review.belowRequiredReason))} — ${input.projectName}`,
     `Caution: ${CAUTION_TEXT}`,
   );
 }

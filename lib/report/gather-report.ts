@@ -28,6 +28,7 @@ export async function gatherReport(run: RunDetail, projectName: string, generate
       reviewedByName: review?.reviewedByName ?? null,
       reviewedAt: review?.reviewedAt ?? null,
       reviewNote: review?.reviewNote ?? null,
+      belowRequiredReason: review?.belowRequiredReason ?? null,
     },
     checklist,
     comments: comments.map((c, i) => ({

@@ -7,7 +7,7 @@ import { CAUTION_TEXT } from "../caution";
 import { LOADING_CONDITIONS } from "../analysis/required-fs";
 import { escapeCsvText } from "../runs/slice-csv";
 import { verdictOf } from "../runs/verdict";
-import { STATUS_WORDS, type RunStatus } from "../review/status";
+import { statusWords, type RunStatus } from "../review/status";
 
 export interface RunCsvRow {
   id: number;
@@ -26,6 +26,8 @@ export interface RunCsvRow {
   reviewedByName: string | null;
   reviewedAt: string | null;
   revisesRunId: number | null;
+  /** The reviewer's reason when the run was signed off below its required FS. */
+  belowRequiredReason?: string | null;
 }
 
 const HEADERS = [
@@ -76,7 +78,7 @@ export function runsToCsv(rows: readonly RunCsvRow[], projectName: string): stri
       fs3(r.fsBishop),
       fs3(r.fsFellenius),
       meets(r),
-      STATUS_WORDS[r.status],
+      statusWords(r.status, Boolean(r.belowRequiredReason)),
       r.authorName,
       r.createdAt,
       r.reviewedByName ?? "",

@@ -1,8 +1,9 @@
 /** The slice tables of a run's critical circles, on landscape pages so every column fits. */
 import type { SliceRow } from "../stability";
-import { formatCell, numberSlices, sliceColumns } from "../runs/slice-columns";
+import { formatCell, isStagedSlices, numberSlices, sliceColumns } from "../runs/slice-columns";
 import { METHOD_NAME } from "../runs/warning-text";
 import { A4_LANDSCAPE, SOFT, type ReportWriter } from "./report-writer";
+import { pdfSafe, wrapText } from "./pdf-text";
 
 type Method = "bishop" | "fellenius";
 
@@ -22,13 +23,33 @@ export function writeSliceTable(
     );
     if (method === "bishop" && table.minMAlpha !== null)
       w.paragraph(`Smallest m-alpha on this circle: ${table.minMAlpha.toFixed(3)}.`, { size: 7.5, color: SOFT });
-    const cols = sliceColumns(method);
-    const widths = cols.map((c): number => (c.key === "material" ? 80 : c.key === "index" ? 30 : 0));
-    const rest = (w.width - widths.reduce((s, v) => s + v, 0)) / widths.filter((v) => v === 0).length;
+    const staged = isStagedSlices(table.slices);
+    if (staged)
+      w.paragraph(
+        "Staged drawdown: c and φ are the final stage's strengths — total-stress (c = τff, φ = 0, no pore " +
+          "pressure) where the undrained strength governs, c′ and φ′ where the drained strength is lower.",
+        { size: 7.5, color: SOFT },
+      );
+    const cols = sliceColumns(method, staged);
+    const fixed = cols.map((c): number =>
+      c.key === "material" ? 62 : c.key === "governs" ? 72 : c.key === "index" ? 24 : 0,
+    );
+    // Each other column gets at least its longest header word, then an equal share of what is left.
+    const longestWord = (c: (typeof cols)[number]) =>
+      Math.max(
+        ...pdfSafe(c.label)
+          .split(/ +/)
+          .map((word) => w.bold.widthOfTextAtSize(word, 7)),
+      ) + 6;
+    const least = cols.map((c, i) => (fixed[i] ? 0 : longestWord(c)));
+    const spare = w.width - fixed.reduce((s, v) => s + v, 0) - least.reduce((s, v) => s + v, 0);
+    const share = Math.max(0, spare) / Math.max(1, fixed.filter((v) => v === 0).length);
+    const widths = cols.map((_, i) => fixed[i] || least[i] + share);
     w.table(
       cols.map((c, i) => ({
-        header: c.unit ? `${c.label}\n(${c.unit})` : c.label,
-        width: widths[i] || rest,
+        // Labels wrap onto as many lines as the column needs, so none is cut short.
+        header: [...wrapText(c.label, w.bold, 7, widths[i] - 4), ...(c.unit ? [`(${c.unit})`] : [])].join("\n"),
+        width: widths[i],
         align: c.decimals === null ? ("left" as const) : ("right" as const),
       })),
       numberSlices(table.slices).map((s) => cols.map((c) => formatCell(c, c.value(s, method)))),

@@ -7,6 +7,7 @@
 import { can, type Role } from "../permissions";
 import { TRANSITIONS, TRANSITION_ACTIONS, type RunStatus, type TransitionAction } from "./status";
 import { openChecklistItems, type ChecklistEntry } from "./checklist";
+import { MIN_BELOW_REQUIRED_REASON } from "./below-required";
 
 export interface Actor {
   userId: number;
@@ -73,12 +74,20 @@ export function checkTransition(action: TransitionAction, actor: Actor, run: Run
   return OK;
 }
 
-/** The full check for a decision, including what the decision itself must carry. */
+/**
+ * The full check for a decision, including what the decision itself must carry: a note to return
+ * a run; every checklist item confirmed to sign one off; and, when its FS is below the required
+ * value, the reviewer's reason for signing it off all the same.
+ */
 export function checkDecision(
   action: TransitionAction,
   actor: Actor,
   run: RunFacts,
-  input: { note: string; checklist: readonly ChecklistEntry[] },
+  input: {
+    note: string;
+    checklist: readonly ChecklistEntry[];
+    belowRequired?: { requiredFs: number; reason: string } | null;
+  },
 ): Verdict {
   const base = checkTransition(action, actor, run);
   if (!base.ok) return base;
@@ -92,6 +101,16 @@ export function checkDecision(
         409,
         "checklist_open",
         `Confirm every checklist item before signing off. Still open or of concern: ${open.map((i) => i.label.toLowerCase()).join("; ")}.`,
+      );
+    }
+    const below = input.belowRequired;
+    if (below && below.reason.trim().length < MIN_BELOW_REQUIRED_REASON) {
+      return refuse(
+        422,
+        "below_required_reason",
+        `This run's FS is below the required ${below.requiredFs.toFixed(2)}. Signing it off needs your reason ` +
+          "in a sentence (for example: accepted as the record of a failing case, redesign follows).",
+        "belowRequiredReason",
       );
     }
   }

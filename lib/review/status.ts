@@ -37,3 +37,9 @@ export const ACTION_WORDS: Record<TransitionAction, string> = {
 export function isRunStatus(value: string): value is RunStatus {
   return (RUN_STATUSES as readonly string[]).includes(value);
 }
+
+/** A run's status in words, telling a sign-off below the required FS apart from a plain one. */
+export function statusWords(status: RunStatus, signedOffBelowRequired: boolean): string {
+  if (status === "approved" && signedOffBelowRequired) return "signed off — below the required FS";
+  return STATUS_WORDS[status];
+}

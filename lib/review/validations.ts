@@ -7,6 +7,8 @@ import { TRANSITION_ACTIONS } from "./status";
 export const transitionSchema = z.object({
   action: z.enum(TRANSITION_ACTIONS, { error: "Choose submit, approve or return." }),
   note: z.string().trim().max(4000, "At most 4,000 characters.").default(""),
+  /** Signing off a run below its required FS: why the reviewer accepts it. */
+  belowRequiredReason: z.string().trim().max(2000, "At most 2,000 characters.").default(""),
 });
 
 export const renameRunSchema = z.object({

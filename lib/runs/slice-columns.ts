@@ -21,7 +21,13 @@ export type SliceColumnKey =
   | "mAlpha"
   | "normal"
   | "resisting"
-  | "driving";
+  | "driving"
+  | "governs"
+  | "sigmaFc"
+  | "tauFc"
+  | "kc"
+  | "tau2"
+  | "tauDrained";
 
 /** A slice with its number counted from the first slice of the mass (1-based). */
 export interface NumberedSlice {
@@ -42,8 +48,60 @@ export interface SliceColumn {
 
 const num = (v: number | null | undefined) => (v === null || v === undefined || !Number.isFinite(v) ? null : v);
 
-/** Columns in display order. N′ and the resisting term follow the method the table shows. */
-export function sliceColumns(method: SliceMethod): SliceColumn[] {
+/** What governs a slice's base in the final stage of a staged drawdown, in words. */
+export function governingText(row: SliceRow): string {
+  const st = row.stage;
+  if (!st) return "";
+  if (st.drainage === "fixed") return "su, every stage";
+  if (st.drainage === "free-draining") return "free-draining";
+  return st.governing === "undrained" ? "undrained (stage 2)" : "drained (stage 3)";
+}
+
+/**
+ * Columns of a staged drawdown's slices (docs/engine.md §7(b)): the final-stage strength is a
+ * total-stress strength on undrained bases (c = τff, φ = 0, no pore pressure) and c′, φ′ on
+ * drained ones, so its columns are not headed c′, φ′; the stage-1 stresses and the stage
+ * strengths follow.
+ */
+function stagedColumns(): SliceColumn[] {
+  const st = (s: NumberedSlice) => s.row.stage;
+  return [
+    { key: "c", label: "c, final stage", unit: "kPa", decimals: 1, value: (s) => s.row.c },
+    { key: "phi", label: "φ, final stage", unit: "°", decimals: 1, value: (s) => s.row.phi },
+    { key: "governs", label: "Governing strength", unit: "", decimals: null, value: (s) => governingText(s.row) },
+    { key: "sigmaFc", label: "σ′fc, stage 1", unit: "kPa", decimals: 1, value: (s) => num(st(s)?.sigmaFc) },
+    { key: "tauFc", label: "τfc, stage 1", unit: "kPa", decimals: 1, value: (s) => num(st(s)?.tauFc) },
+    { key: "kc", label: "Kc", unit: "", decimals: 2, value: (s) => num(st(s)?.kc) },
+    { key: "tau2", label: "τ, stage 2", unit: "kPa", decimals: 1, value: (s) => num(st(s)?.tau2) },
+    { key: "tauDrained", label: "τ drained, stage 3", unit: "kPa", decimals: 1, value: (s) => num(st(s)?.tauDrained) },
+  ];
+}
+
+/** True when the slices come from a staged drawdown (they carry stage data). */
+export function isStagedSlices(rows: readonly SliceRow[]): boolean {
+  return rows.some((r) => r.stage !== undefined);
+}
+
+/**
+ * Columns in display order. N′ and the resisting term follow the method the table shows; a staged
+ * drawdown's slices get the stage columns in place of c′, φ′.
+ */
+export function sliceColumns(method: SliceMethod, staged = false): SliceColumn[] {
+  const cols = baseColumns(method);
+  if (!staged) return cols;
+  const at = cols.findIndex((c) => c.key === "c");
+  const u = cols.findIndex((c) => c.key === "porePressure");
+  // Undrained bases carry total-stress strengths, so no pore pressure acts on them in the final stage.
+  cols[u] = {
+    ...cols[u],
+    label: "u, final stage",
+    value: (s) =>
+      s.row.stage?.governing === "undrained" && s.row.stage.drainage !== "free-draining" ? null : s.row.porePressure,
+  };
+  return [...cols.slice(0, at), ...stagedColumns(), ...cols.slice(at + 2)];
+}
+
+function baseColumns(method: SliceMethod): SliceColumn[] {
   const m = method === "bishop" ? "Bishop" : "ordinary";
   return [
     // Not "#": a header starting with "#" would read as one of the comment lines.

@@ -6,7 +6,15 @@
  * the OWASP "CSV Injection" guidance advises.
  */
 import { CAUTION_TEXT } from "../caution";
-import { columnHeader, formatCell, numberSlices, sliceColumns, type SliceMethod } from "./slice-columns";
+import {
+  columnHeader,
+  formatCell,
+  isStagedSlices,
+  numberSlices,
+  sliceColumns,
+  type SliceMethod,
+} from "./slice-columns";
+import { VARIANT_TEXT, stageLine, type StagedView } from "./staged-view";
 import type { Circle, SliceRow } from "@/lib/stability";
 
 /** What the leading comment lines say about the run. */
@@ -18,6 +26,7 @@ export interface SliceCsvMeta {
   /** Section name and version, as shown to the user. */
   section?: string;
   loadCase?: string;
+  /** FS of each method the run used (null: no valid circle); a method left out was not run. */
   fs?: { bishop?: number | null; fellenius?: number | null };
   requiredFs?: number;
   circle?: Circle;
@@ -25,6 +34,8 @@ export interface SliceCsvMeta {
   engineVersion?: string;
   /** When the run was made, ISO 8601. */
   runAt?: string;
+  /** A staged drawdown's procedure and each method's stage factors. */
+  staged?: StagedView | null;
 }
 
 const FORMULA_START = /^[=+\-@\t\r]/;
@@ -40,8 +51,27 @@ function commentLine(text: string): string {
   return escapeCsvText(`# ${text.replace(/[\r\n]+/g, " ")}`);
 }
 
-const fs3 = (v: number | null | undefined) =>
-  v === null || v === undefined || !Number.isFinite(v) ? "none" : v.toFixed(3);
+const fs3 = (v: number | null) => (v === null || !Number.isFinite(v) ? "no valid circle" : v.toFixed(3));
+
+/** "Bishop 1.412; ordinary 1.329 (classical form)": every method the run used, none invented. */
+function fsLine(fs: NonNullable<SliceCsvMeta["fs"]>, ordinaryForm: string | undefined): string {
+  const parts: string[] = [];
+  if (fs.bishop !== undefined) parts.push(`Bishop ${fs3(fs.bishop)}`);
+  if (fs.fellenius !== undefined)
+    parts.push(`ordinary ${fs3(fs.fellenius)}${ordinaryForm ? ` (${ordinaryForm} form)` : ""}`);
+  return `FS: ${parts.join("; ")}`;
+}
+
+/** The FS of each method a run used, keyed as the CSV header wants it. */
+export function runFs(
+  methods: readonly SliceMethod[],
+  run: { fsBishop: number | null; fsFellenius: number | null },
+): NonNullable<SliceCsvMeta["fs"]> {
+  return {
+    ...(methods.includes("bishop") ? { bishop: run.fsBishop } : {}),
+    ...(methods.includes("fellenius") ? { fellenius: run.fsFellenius } : {}),
+  };
+}
 
 function metaLines(meta: SliceCsvMeta): string[] {
   const lines = [`Caution: ${CAUTION_TEXT}`];
@@ -53,10 +83,16 @@ function metaLines(meta: SliceCsvMeta): string[] {
   lines.push(
     `Slice forces by: ${meta.method === "bishop" ? "Bishop's simplified method" : "ordinary method of slices"}`,
   );
-  if (meta.fs)
-    lines.push(
-      `FS: Bishop ${fs3(meta.fs.bishop)}; ordinary ${fs3(meta.fs.fellenius)}${meta.ordinaryForm ? ` (${meta.ordinaryForm} form)` : ""}`,
-    );
+  if (meta.fs && (meta.fs.bishop !== undefined || meta.fs.fellenius !== undefined))
+    lines.push(fsLine(meta.fs, meta.ordinaryForm));
+  if (meta.staged) {
+    lines.push(`Staged rapid drawdown, ${VARIANT_TEXT[meta.staged.variant]}; the FS above is the final stage's`);
+    for (const m of ["bishop", "fellenius"] as const)
+      if (meta.staged.stages[m] !== undefined)
+        lines.push(
+          `Stages, ${m === "bishop" ? "Bishop" : "ordinary"}: ${stageLine(meta.staged.stages[m], meta.staged.variant)}`,
+        );
+  }
   if (meta.requiredFs !== undefined) lines.push(`Required FS: ${meta.requiredFs.toFixed(2)}`);
   if (meta.circle)
     lines.push(
@@ -71,7 +107,7 @@ function metaLines(meta: SliceCsvMeta): string[] {
  * @returns CSV text with CRLF line ends and no byte-order mark
  */
 export function sliceTableToCsv(rows: readonly SliceRow[], meta: SliceCsvMeta): string {
-  const cols = sliceColumns(meta.method);
+  const cols = sliceColumns(meta.method, isStagedSlices(rows));
   const out = metaLines(meta).map(commentLine);
   out.push(cols.map((c) => escapeCsvText(columnHeader(c))).join(","));
   for (const s of numberSlices(rows)) {

@@ -13,18 +13,29 @@ export const MATERIAL_COLUMNS = [
   "su",
   "suGradient",
   "suDatum",
+  "cR",
+  "phiR",
+  "freeDraining",
+  "colour",
 ] as const;
-type NumberColumn = "gamma" | "gammaSat" | "c" | "phi" | "su" | "suGradient" | "suDatum";
+type NumberColumn = "gamma" | "gammaSat" | "c" | "phi" | "su" | "suGradient" | "suDatum" | "cR" | "phiR";
 type Model = (typeof MATERIAL_MODELS)[number];
 
 /** Columns each model needs, may use, and ignores (ENGINE-IO.md, `materials[].model`). */
 const NEEDS: Record<Model, { required: NumberColumn[]; optional: NumberColumn[] }> = {
   // su on a drained material is its end-of-construction strength (ENGINE-IO.md load case "undrained").
-  "mohr-coulomb": { required: ["gamma", "c", "phi"], optional: ["gammaSat", "su", "suGradient", "suDatum"] },
+  // cR, phiR: the R envelope a staged drawdown needs (ENGINE-IO.md `materials[].cR`, `phiR`).
+  "mohr-coulomb": {
+    required: ["gamma", "c", "phi"],
+    optional: ["gammaSat", "su", "suGradient", "suDatum", "cR", "phiR"],
+  },
   undrained: { required: ["gamma", "su"], optional: ["gammaSat", "suGradient", "suDatum"] },
   impenetrable: { required: [], optional: [] },
 };
-const NUMBER_COLUMNS: NumberColumn[] = ["gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum"];
+const NUMBER_COLUMNS: NumberColumn[] = ["gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum", "cR", "phiR"];
+const YES = new Set(["yes", "y", "true", "1"]);
+const NO = new Set(["no", "n", "false", "0"]);
+const HEX = /^#[0-9a-fA-F]{6}$/;
 const GAMMA_W = 9.81;
 
 /** Materials with the optional display names from the `name` column, keyed by id. */
@@ -34,10 +45,12 @@ export interface MaterialsCsvValue {
 }
 
 /**
- * Parses a materials CSV: header `id,name,model,gamma,gammaSat,c,phi,su,suGradient,suDatum`;
- * `model` is mohr-coulomb (needs gamma, c, phi), undrained (gamma, su; suDatum when suGradient is
- * given) or impenetrable (nothing). Values are checked against ENGINE.md §1's bounds: outside the
- * error range is a problem, outside the usual range a warning. Ids must be unique.
+ * Parses a materials CSV: header `id,name,model,gamma,gammaSat,c,phi,su,suGradient,suDatum,cR,phiR,
+ * freeDraining,colour` (every column but id and model may be left out of the header);
+ * `model` is mohr-coulomb (needs gamma, c, phi; cR and phiR together), undrained (gamma, su; suDatum
+ * when suGradient is given) or impenetrable (nothing). freeDraining is yes or no (blank: no);
+ * colour is #RRGGBB. Values are checked against ENGINE.md §1's bounds: outside the error range is a
+ * problem, outside the usual range a warning. Ids must be unique.
  */
 export function parseMaterialsCsv(text: string): CsvParseResult<MaterialsCsvValue> {
   const problems: CsvProblem[] = [];
@@ -66,9 +79,10 @@ export function parseMaterialsCsv(text: string): CsvParseResult<MaterialsCsvValu
       );
       continue;
     }
+    const extras = readExtras(r, model, warnings);
     const numbers = readNumbers(r, model, table.columns, problems, warnings);
-    if (!numbers || id === "") continue;
-    const material = buildMaterial(id, model, numbers);
+    if (!numbers || !extras || id === "") continue;
+    const material = { ...buildMaterial(id, model, numbers), ...extras } as SectionMaterial;
     checkBounds(r, material, warnings);
     value.materials.push(material);
     // defineProperty, not assignment: an id such as "__proto__" must stay an ordinary key.
@@ -110,7 +124,40 @@ function readNumbers(
   if (out.suGradient !== undefined && out.suDatum === undefined && !r.has("suDatum")) {
     r.problem("suDatum", "suDatum (the elevation where su applies) is needed when suGradient is given.");
   }
+  if ((out.cR === undefined) !== (out.phiR === undefined) && (r.has("cR") || r.has("phiR"))) {
+    const missing = out.cR === undefined ? "cR" : "phiR";
+    r.problem(missing, "The R envelope needs both cR (kPa) and phiR (°), from the same consolidated-undrained tests.");
+  }
   return problems.length > before ? null : out;
+}
+
+/** freeDraining (yes/no) and colour (#RRGGBB); null when a cell cannot be read. */
+function readExtras(
+  r: RowReader,
+  model: Model,
+  warnings: CsvProblem[],
+): { freeDraining?: boolean; color?: string } | null {
+  const out: { freeDraining?: boolean; color?: string } = {};
+  let ok = true;
+  const drain = r.text("freeDraining").trim().toLowerCase();
+  if (drain !== "") {
+    if (model === "impenetrable")
+      warnings.push(r.at("freeDraining", "'freeDraining' is not used by an impenetrable material and was ignored."));
+    else if (YES.has(drain)) out.freeDraining = true;
+    else if (!NO.has(drain)) {
+      r.problem("freeDraining", `'${r.text("freeDraining")}' is not yes or no.`);
+      ok = false;
+    }
+  }
+  const colour = r.text("colour").trim();
+  if (colour !== "") {
+    if (HEX.test(colour)) out.color = colour.toUpperCase();
+    else {
+      r.problem("colour", `'${colour}' is not a colour written as #RRGGBB (for example #CC6677).`);
+      ok = false;
+    }
+  }
+  return ok ? out : null;
 }
 
 function buildMaterial(id: string, model: Model, n: Partial<Record<NumberColumn, number>>): SectionMaterial {
@@ -126,6 +173,8 @@ function buildMaterial(id: string, model: Model, n: Partial<Record<NumberColumn,
       ...(n.su !== undefined && { su: n.su }),
       ...(n.suGradient !== undefined && { suGradient: n.suGradient }),
       ...(n.suDatum !== undefined && { suDatum: n.suDatum }),
+      ...(n.cR !== undefined && { cR: n.cR }),
+      ...(n.phiR !== undefined && { phiR: n.phiR }),
     };
   }
   return {
@@ -154,6 +203,8 @@ function checkBounds(r: RowReader, m: SectionMaterial, warnings: CsvProblem[]): 
     else if (m.c > 200) warn("c", `c' = ${m.c} kPa is unusually high (over 200).`);
     if (!(m.phi >= 0 && m.phi < 60)) r.problem("phi", `φ' = ${m.phi}° is outside [0, 60).`);
     else if (m.phi > 45) warn("phi", `φ' = ${m.phi}° is unusually high (over 45°).`);
+    if (m.cR !== undefined && m.cR < 0) r.problem("cR", `cR = ${m.cR} kPa must not be negative.`);
+    if (m.phiR !== undefined && !(m.phiR >= 0 && m.phiR < 60)) r.problem("phiR", `φR = ${m.phiR}° is outside [0, 60).`);
     return;
   }
   if (!(m.su > 0)) r.problem("su", `su = ${m.su} kPa must be positive.`);
@@ -170,7 +221,8 @@ export function materialsToCsv(materials: readonly SectionMaterial[], names: Rec
   const rows = materials.map((m): CsvCell[] => {
     const get = (key: NumberColumn): number | undefined =>
       key in m ? (m as unknown as Record<string, number | undefined>)[key] : undefined;
-    return [m.id, names[m.id] ?? "", m.model, ...NUMBER_COLUMNS.map((k) => get(k))];
+    const drains = "freeDraining" in m && m.freeDraining ? "yes" : m.model === "impenetrable" ? undefined : "no";
+    return [m.id, names[m.id] ?? "", m.model, ...NUMBER_COLUMNS.map((k) => get(k)), drains, m.color];
   });
   return writeCsv(MATERIAL_COLUMNS, rows);
 }

@@ -27,6 +27,13 @@ export interface MohrCoulombMaterial {
   su?: number;
   suGradient?: number;
   suDatum?: number;
+  /** Total-stress (R) envelope for a staged drawdown: intercept kPa, angle degrees. */
+  cR?: number;
+  phiR?: number;
+  /** Drains as fast as the pool falls or the fill is placed: keeps effective strength then. */
+  freeDraining?: boolean;
+  /** Display colour, #RRGGBB. */
+  color?: string;
 }
 
 export interface UndrainedMaterial {
@@ -38,11 +45,14 @@ export interface UndrainedMaterial {
   su: number;
   suGradient?: number;
   suDatum?: number;
+  freeDraining?: boolean;
+  color?: string;
 }
 
 export interface ImpenetrableMaterial {
   id: string;
   model: "impenetrable";
+  color?: string;
 }
 
 export type SectionMaterial = MohrCoulombMaterial | UndrainedMaterial | ImpenetrableMaterial;

@@ -29,7 +29,7 @@ describe("slope design as a new designer would use it", () => {
     expect(await page.getByLabel("Upstream slope (H:1V)").inputValue()).toBe("3");
     expect(await page.getByLabel("Downstream slope (H:1V)").inputValue()).toBe("2.5");
     await page.getByTestId("run-canvas").waitFor();
-    await expect.poll(() => page.getByTestId("seepage-normal").textContent()).toContain("Factor against piping");
+    await expect.poll(() => page.getByTestId("seepage-normal").textContent()).toContain("Piping: no unprotected exit");
     await expect
       .poll(() => page.getByTestId("compaction-spec").textContent())
       .toMatch(/dry density ≥ \d\.\d{3} Mg\/m³/);

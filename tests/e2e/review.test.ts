@@ -1,4 +1,6 @@
+import path from "node:path";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { getDocument } from "pdfjs-dist/legacy/build/pdf.mjs";
 import type { Browser, Page } from "playwright-core";
 import { appUrl, launchBrowser, signInAs, watchConsole } from "../support/browser";
 import { signedIn, type AppClient } from "../support/http";
@@ -67,6 +69,21 @@ async function waitForMail(subjectStart: string, to: string): Promise<CaughtMail
     )
     .toBe(true);
   return found!;
+}
+
+async function pdfText(bytes: Uint8Array): Promise<string> {
+  const doc = await getDocument({
+    data: new Uint8Array(bytes),
+    isEvalSupported: false,
+    standardFontDataUrl: path.resolve("node_modules/pdfjs-dist/standard_fonts") + "/",
+  }).promise;
+  let text = "";
+  for (let i = 1; i <= doc.numPages; i++) {
+    const content = await (await doc.getPage(i)).getTextContent();
+    text += content.items.map((it) => ("str" in it ? it.str : "")).join(" ") + "\n";
+  }
+  await doc.destroy();
+  return text.replace(/\s+/g, " ");
 }
 
 const linkIn = (mail: CaughtMail) =>
@@ -155,15 +172,41 @@ describe("carrying a run from draft to sign-off in the browser", () => {
     await reviewer.getByRole("button", { name: "Save checklist" }).click();
     await expect.poll(() => reviewer.getByTestId("check-fs").getAttribute("data-state"), WAIT).toBe("ok");
     await reviewer.getByLabel("Note to the author").fill("Agrees with the drawings and the lab sets.");
-    await reviewer.getByRole("button", { name: "Sign off" }).click();
-    await expect.poll(() => statusText(reviewer), WAIT).toContain("Signed off");
+    // The run's FS (Bishop about 1.32, ordinary about 1.08) is below the required 1.50: signing it
+    // off needs the reviewer's reason, and the button says what it does.
+    await reviewer.getByTestId("below-required").waitFor();
+    const signOff = reviewer.getByRole("button", { name: "Sign off below the required FS" });
+    expect(await signOff.isDisabled()).toBe(true);
+    await reviewer
+      .getByLabel("Why sign it off below the required FS?")
+      .fill("Accepted as the record of a failing case; the flatter face follows in revision C.");
+    await expect.poll(() => signOff.isDisabled(), WAIT).toBe(false);
+    await signOff.click();
+    await expect.poll(() => statusText(reviewer), WAIT).toContain("Signed off — below the required FS");
 
     // The engineer follows the sign-off notice; the run now offers no change.
     const signedOff = await waitForMail(`Signed off: ${title} rev B`, "engineer@scarpline.test");
     await engineer.goto(linkIn(signedOff));
-    await expect.poll(() => statusText(engineer), WAIT).toContain("Signed off by Demo Reviewer");
+    await expect
+      .poll(() => statusText(engineer), WAIT)
+      .toContain("Signed off — below the required FS by Demo Reviewer");
+    expect(await statusText(engineer)).toContain("the flatter face follows in revision C");
     expect(await engineer.getByTestId("author-actions").count()).toBe(0);
-    expect(await engineer.getByTestId("run-status").first().textContent()).toContain("Signed off");
+    const badge = engineer.getByTestId("run-status").first();
+    expect(await badge.textContent()).toContain("Signed off — below the required FS");
+    expect(await badge.getAttribute("data-status")).toBe("approved-below");
+
+    // The runs list shows the same words and shape, never the plain green sign-off.
+    await engineer.goto(appUrl(`/projects/${projectId}/runs`));
+    const row = engineer.getByRole("row").filter({ hasText: `${title} rev B` });
+    await expect.poll(() => row.getByTestId("run-status").textContent(), WAIT).toContain("below the required FS");
+
+    // The calculation report, opened from the run page, says so in its status box.
+    const report = await engineer.request.get(appUrl(`/api/projects/${projectId}/runs/${revisedId}/report`));
+    expect(report.headers()["content-type"]).toBe("application/pdf");
+    const pdf = await pdfText(await report.body());
+    expect(pdf).toContain("SIGNED OFF — BELOW THE REQUIRED FS, by Demo Reviewer");
+    expect(pdf).toContain("the flatter face follows in revision C");
 
     // Both people's notices are in the administrator's mail log.
     const admin = await browser.newPage();

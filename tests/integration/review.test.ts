@@ -38,7 +38,12 @@ async function demoProject(client: AppClient): Promise<Demo> {
 }
 
 let cachedBody: { setup: RunSetup; result: unknown } | null = null;
-function quickRunBody(doc: SectionDocument) {
+/**
+ * A quick downstream run of the demo section: Bishop about 1.32, ordinary about 1.08. Its
+ * required FS is 1.0, so it meets it and a plain sign-off applies; `requiredFs` over those FS
+ * makes a run below the requirement.
+ */
+function quickRunBody(doc: SectionDocument, requiredFs = 1.0) {
   if (!cachedBody) {
     const g = suggestGrid(doc, directionForFace(doc, "downstream"), { nx: 6, ny: 6, nr: 5 });
     // Parsed, so settings the form defaults are filled in as the browser's form would.
@@ -51,23 +56,29 @@ function quickRunBody(doc: SectionDocument) {
       grid: g.grid,
       radii: g.radii,
       refine: false,
-      requiredFs: 1.5,
+      requiredFs,
     });
     const result = runGridSearch(documentForRun(doc, setup));
     if (!result.ok) throw new Error("search failed");
     cachedBody = { setup, result };
   }
-  return cachedBody;
+  return { ...cachedBody, setup: { ...cachedBody.setup, requiredFs } };
 }
 
-async function createDraft(client: AppClient, demo: Demo, title: string, revisesRunId?: number): Promise<number> {
+async function createDraft(
+  client: AppClient,
+  demo: Demo,
+  title: string,
+  revisesRunId?: number,
+  requiredFs?: number,
+): Promise<number> {
   const res = await client.request(`/api/projects/${demo.projectId}/runs`, {
     method: "POST",
     json: {
       sectionId: demo.sectionId,
       sectionVersion: demo.version,
       title,
-      ...quickRunBody(demo.document),
+      ...quickRunBody(demo.document, requiredFs),
       revisesRunId,
     },
   });
@@ -77,8 +88,9 @@ async function createDraft(client: AppClient, demo: Demo, title: string, revises
 
 const api = (demo: Demo, runId: number, rest = "") => `/api/projects/${demo.projectId}/runs/${runId}${rest}`;
 
-async function move(client: AppClient, demo: Demo, runId: number, action: string, note = "") {
-  const res = await client.request(api(demo, runId, "/status"), { method: "POST", json: { action, note } });
+async function move(client: AppClient, demo: Demo, runId: number, action: string, note = "", reason?: string) {
+  const json = { action, note, ...(reason !== undefined ? { belowRequiredReason: reason } : {}) };
+  const res = await client.request(api(demo, runId, "/status"), { method: "POST", json });
   return { status: res.status, body: await res.json() };
 }
 
@@ -266,6 +278,77 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     expect(row.title).toBe(revTitle);
   });
 
+  test("a run below its required FS is signed off only with a reason, and every view says so", async () => {
+    const engineer = await signedIn("engineer@scarpline.test");
+    const reviewer = await signedIn("reviewer@scarpline.test");
+    const demo = await demoProject(engineer);
+    const title = `Below required ${Date.now()}`;
+    // Bishop about 1.32 and ordinary about 1.08 against 1.5: below the requirement.
+    const runId = await createDraft(engineer, demo, title, undefined, 1.5);
+    expect((await move(engineer, demo, runId, "submit")).status).toBe(200);
+    await confirmChecklist(reviewer, demo, runId);
+
+    // Without a reason, or with a stray word, the sign-off is refused and nothing changes.
+    for (const reason of [undefined, "ok"]) {
+      const refused = await move(reviewer, demo, runId, "approve", "", reason);
+      expect(refused.status).toBe(422);
+      expect(refused.body.error.fields.belowRequiredReason[0]).toMatch(/below the required 1\.50/);
+    }
+    expect((await (await engineer.request(api(demo, runId))).json()).run.status).toBe("submitted");
+
+    const reason = "Accepted as the record of a failing case; redesign follows in revision B.";
+    expect((await move(reviewer, demo, runId, "approve", "", reason)).status).toBe(200);
+    const { run } = await (await engineer.request(api(demo, runId))).json();
+    expect(run).toMatchObject({ status: "approved", belowRequiredReason: reason });
+
+    // The runs list carries it; the runs CSV says it in words.
+    const listed = (await (await engineer.request(`/api/projects/${demo.projectId}/runs`)).json()).runs as {
+      id: number;
+      belowRequiredReason: string | null;
+    }[];
+    expect(listed.find((r) => r.id === runId)?.belowRequiredReason).toBe(reason);
+    const csv = await (await engineer.request(`/api/projects/${demo.projectId}/runs/export`)).text();
+    const line = csv.split("\r\n").find((l) => l.startsWith(`${runId},`))!;
+    expect(line).toContain("signed off — below the required FS");
+
+    // The audit trail keeps the reason with the sign-off.
+    const events = (await review(engineer, demo, runId)).events as { kind: string; toStatus: string; note: string }[];
+    expect(events.find((e) => e.toStatus === "approved")?.note).toContain(reason);
+
+    // The PDF says it where the status stands, never a plain "SIGNED OFF" above a failing verdict.
+    const text = await pdfText(await (await reviewer.request(api(demo, runId, "/report"))).arrayBuffer());
+    expect(text).toContain("SIGNED OFF — BELOW THE REQUIRED FS, by Demo Reviewer");
+    expect(text).toContain(`Reason: ${reason}`);
+    expect(text).not.toMatch(/Review status: SIGNED OFF by/);
+    expect(text).toContain("below the required 1.50");
+  });
+
+  test("a run that meets its required FS needs no reason, and none is stored", async () => {
+    const engineer = await signedIn("engineer@scarpline.test");
+    const reviewer = await signedIn("reviewer@scarpline.test");
+    const demo = await demoProject(engineer);
+    const runId = await createDraft(engineer, demo, `Meets required ${Date.now()}`);
+    await move(engineer, demo, runId, "submit");
+    await confirmChecklist(reviewer, demo, runId);
+    expect((await move(reviewer, demo, runId, "approve", "", "A reason nobody asked for.")).status).toBe(200);
+    const { run } = await (await engineer.request(api(demo, runId))).json();
+    expect(run).toMatchObject({ status: "approved", belowRequiredReason: null });
+  });
+
+  test("the slice CSV of a kept run states both methods' FS in its header", async () => {
+    const engineer = await signedIn("engineer@scarpline.test");
+    const demo = await demoProject(engineer);
+    const runId = await createDraft(engineer, demo, `Slice CSV ${Date.now()}`);
+    const { run } = await (await engineer.request(api(demo, runId))).json();
+    for (const method of ["bishop", "fellenius"]) {
+      const csv = await (await engineer.request(api(demo, runId, `/slices?method=${method}`))).text();
+      const fsLine = csv.split("\r\n").find((l) => l.startsWith("# FS:"));
+      expect(fsLine).toBe(
+        `# FS: Bishop ${run.fsBishop.toFixed(3)}; ordinary ${run.fsFellenius.toFixed(3)} (classical form)`,
+      );
+    }
+  });
+
   test("nobody reviews their own run, even with a reviewer's role in the project", async () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const demo = await demoProject(engineer);
@@ -362,7 +445,7 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     const text = await pdfText(bytes);
     expect(text).toContain(run.fsBishop.toFixed(3));
     expect(text).toContain(run.fsFellenius.toFixed(3));
-    expect(text).toContain("1.50");
+    expect(text).toContain("1.00");
     expect(text).toMatch(/SIGNED OFF by Demo Reviewer on \d{4}-\d\d-\d\d \d\d:\d\d UTC/);
     expect(text).toContain("Main embankment, station 0+240");
     expect(text).toContain("Lower Wendle Reservoir embankment");

@@ -52,7 +52,9 @@ describe("checkMaterialsImport", () => {
       },
     ];
     const back = checkMaterialsImport(libraryToCsv(lib), []);
-    expect(back.materials).toEqual([{ row: 2, key: "core", name: "Core, zone 1", parameters: lib[0].parameters }]);
+    expect(back.materials).toEqual([
+      { row: 2, key: "core", name: "Core, zone 1", color: "#CC6677", parameters: lib[0].parameters },
+    ]);
     expect(toEngineMaterial(lib[0])).toEqual({
       id: "core",
       name: "Core, zone 1",

@@ -2,7 +2,7 @@ import Papa from "papaparse";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { CAUTION_TEXT } from "@/components/ui/caution";
-import { escapeCsvText, sliceCsvFileName, sliceTableToCsv } from "@/lib/runs/slice-csv";
+import { escapeCsvText, runFs, sliceCsvFileName, sliceTableToCsv } from "@/lib/runs/slice-csv";
 import { columnHeader, sliceColumns } from "@/lib/runs/slice-columns";
 import { SLICES } from "./fixtures";
 
@@ -87,5 +87,28 @@ describe("sliceTableToCsv", () => {
   it("names the file with safe characters only", () => {
     expect(sliceCsvFileName("Run 3: =cmd / downstream!", "bishop")).toBe("run-3-cmd-downstream-slices-bishop.csv");
     expect(sliceCsvFileName(undefined, "fellenius")).toBe("run-slices-ordinary.csv");
+  });
+});
+
+describe("the FS line of the slice CSV header", () => {
+  const fsLineOf = (csv: string) => csv.split("\r\n").find((l) => l.startsWith("# FS:"));
+
+  it("states both methods' FS of a kept run, whichever method fills the table", () => {
+    // The defect: a run with ordinary 1.046 wrote "ordinary none" in the Bishop table's CSV.
+    const fs = runFs(["bishop", "fellenius"], { fsBishop: 1.1234, fsFellenius: 1.046 });
+    const csv = sliceTableToCsv(SLICES, { method: "bishop", fs, ordinaryForm: "classical" });
+    expect(fsLineOf(csv)).toBe("# FS: Bishop 1.123; ordinary 1.046 (classical form)");
+  });
+
+  it("leaves out a method the run did not use and says when a method found no valid circle", () => {
+    expect(
+      fsLineOf(
+        sliceTableToCsv(SLICES, { method: "bishop", fs: runFs(["bishop"], { fsBishop: 1.5, fsFellenius: null }) }),
+      ),
+    ).toBe("# FS: Bishop 1.500");
+    const none = runFs(["bishop", "fellenius"], { fsBishop: null, fsFellenius: 0.98 });
+    expect(fsLineOf(sliceTableToCsv(SLICES, { method: "fellenius", fs: none }))).toBe(
+      "# FS: Bishop no valid circle; ordinary 0.980",
+    );
   });
 });

@@ -157,7 +157,75 @@ describe("parseMaterialsCsv (ENGINE-IO.md materials; bounds of ENGINE.md §1)", 
       [{ id: "-weak", model: "undrained", gamma: 17, su: 20, suGradient: 1.2, suDatum: -3 }],
       { "-weak": "@layer" },
     );
-    expect(text.split("\r\n")).toEqual([HEADER, "'-weak,'@layer,undrained,17,,,,20,1.2,-3"]);
+    expect(text.split("\r\n")).toEqual([
+      `${HEADER},cR,phiR,freeDraining,colour`,
+      "'-weak,'@layer,undrained,17,,,,20,1.2,-3,,,no,",
+    ]);
     expect(parseMaterialsCsv(csvTemplates.materials).ok).toBe(true);
+  });
+});
+
+describe("materials CSV: R envelope, free drainage and colour, so an imported section can run staged drawdown", () => {
+  const FULL = `${HEADER},cR,phiR,freeDraining,colour`;
+
+  test("reads cR, phiR, freeDraining and colour, and writes them back unchanged", () => {
+    const text = [
+      FULL,
+      "core,Clay core,mohr-coulomb,19,20,10,26,,,,22,15,no,#cc6677",
+      "filter,Filter gravel,mohr-coulomb,20,21,0,36,,,,,,yes,#DDCC77",
+      "rock,Bedrock,impenetrable,,,,,,,,,,,#DDDDDD",
+    ].join("\n");
+    const r = parseMaterialsCsv(text);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.value.materials).toEqual([
+      {
+        id: "core",
+        model: "mohr-coulomb",
+        gamma: 19,
+        gammaSat: 20,
+        c: 10,
+        phi: 26,
+        cR: 22,
+        phiR: 15,
+        color: "#CC6677",
+      },
+      {
+        id: "filter",
+        model: "mohr-coulomb",
+        gamma: 20,
+        gammaSat: 21,
+        c: 0,
+        phi: 36,
+        freeDraining: true,
+        color: "#DDCC77",
+      },
+      { id: "rock", model: "impenetrable", color: "#DDDDDD" },
+    ]);
+    const again = parseMaterialsCsv(materialsToCsv(r.value.materials, r.value.names));
+    expect(again.ok && again.value.materials).toEqual(r.value.materials);
+  });
+
+  test("half an R envelope, a word that is not yes or no, and a colour name are each reported at their cell", () => {
+    const text = [
+      FULL,
+      "core,,mohr-coulomb,19,20,10,26,,,,22,,no,",
+      "filter,,mohr-coulomb,20,21,0,36,,,,,,perhaps,",
+      "shell,,mohr-coulomb,20,21,0,34,,,,,,,red",
+    ].join("\n");
+    const r = parseMaterialsCsv(text);
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.problems.map((p) => [p.row, p.column])).toEqual([
+      [2, "phiR"],
+      [3, "freeDraining"],
+      [4, "colour"],
+    ]);
+    expect(r.problems[0].message).toMatch(/needs both cR \(kPa\) and phiR/);
+  });
+
+  test("files without the new columns still read (older exports)", () => {
+    const r = parseMaterialsCsv([HEADER, "fill,Fill,mohr-coulomb,19.5,20.5,8,28,,,"].join("\n"));
+    expect(r.ok).toBe(true);
   });
 });

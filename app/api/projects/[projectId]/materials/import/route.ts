@@ -45,7 +45,7 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
       check.materials.map((m, i) => ({
         key: m.key,
         name: m.name,
-        color: m.parameters.model === "impenetrable" ? IMPENETRABLE_COLOR : colors[i],
+        color: m.color ?? (m.parameters.model === "impenetrable" ? IMPENETRABLE_COLOR : colors[i]),
         notes: `Imported from CSV row ${m.row}.`,
         parameters: m.parameters,
       })),

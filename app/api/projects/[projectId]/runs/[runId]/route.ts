@@ -7,13 +7,21 @@ import { checkDraftChange } from "@/lib/review/rules";
 import { renameRunSchema } from "@/lib/review/validations";
 import { deleteDraftRun, fetchRevisionIds, renameDraftRun } from "@/db/queries/runs";
 import { isFrozenRunError } from "@/db/queries/review";
+import { stagedView } from "@/lib/runs/staged-view";
+import type { SectionDocument } from "@/lib/stability";
 
 type Ctx = { params: Promise<{ projectId: string; runId: string }> };
 
 export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
   const user = await requireUser();
   const { run } = await requireRunAccess(user, await params);
-  return NextResponse.json({ run });
+  // A staged drawdown's factor of safety at each stage, beside the final one in fsBishop/fsFellenius.
+  const staged = stagedView(
+    run.result as Parameters<typeof stagedView>[0],
+    run.document as SectionDocument,
+    run.engineVersion,
+  );
+  return NextResponse.json({ run, staged });
 });
 
 /** Renames a draft. Anything that left draft is frozen: 409 for everyone. */

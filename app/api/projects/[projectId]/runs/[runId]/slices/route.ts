@@ -2,7 +2,7 @@ import { apiRoute } from "@/lib/api/handler";
 import { ApiError } from "@/lib/api/errors";
 import { requireUser } from "@/lib/auth/session";
 import { requireRunAccess } from "@/lib/review/run-access";
-import { sliceCsvFileName, sliceTableToCsv } from "@/lib/runs/slice-csv";
+import { runFs, sliceCsvFileName, sliceTableToCsv } from "@/lib/runs/slice-csv";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import type { Circle, SliceRow } from "@/lib/stability";
 
@@ -25,13 +25,17 @@ export const GET = apiRoute(async (request: Request, { params }: Ctx) => {
       "not_found",
       `This run has no ${method === "bishop" ? "Bishop" : "ordinary-method"} slices.`,
     );
-  const result = run.result as { results: Partial<Record<string, { circle: Circle } | null>>; ordinaryForm?: string };
+  const result = run.result as {
+    methods: ("bishop" | "fellenius")[];
+    results: Partial<Record<string, { circle: Circle } | null>>;
+    ordinaryForm?: string;
+  };
   const csv = sliceTableToCsv(table.slices, {
     method,
     title: run.title,
     section: `${run.sectionName} v${run.sectionVersion}`,
     loadCase: loadingCondition(run.loadingCondition as LoadingConditionKey)?.label ?? run.loadingCondition,
-    fs: { bishop: run.fsBishop, fellenius: run.fsFellenius },
+    fs: runFs(result.methods, run),
     requiredFs: run.requiredFs,
     circle: result.results[method]?.circle,
     ordinaryForm: result.ordinaryForm,

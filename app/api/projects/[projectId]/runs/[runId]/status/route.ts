@@ -4,6 +4,7 @@ import { conflict } from "@/lib/api/errors";
 import { requireUser } from "@/lib/auth/session";
 import { refusalError, requireRunAccess } from "@/lib/review/run-access";
 import { checkDecision } from "@/lib/review/rules";
+import { isBelowRequired } from "@/lib/review/below-required";
 import { TRANSITIONS } from "@/lib/review/status";
 import { transitionSchema } from "@/lib/review/validations";
 import { collectMaterialSources } from "@/lib/review/collect-material-sources";
@@ -22,7 +23,9 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   const { access, run, actor, facts } = await requireRunAccess(user, await params);
   const input = await parseJson(request, transitionSchema);
   const checklist = input.action === "approve" ? await fetchChecklist(run.id) : [];
-  const verdict = checkDecision(input.action, actor, facts, { note: input.note, checklist });
+  const below = input.action === "approve" && isBelowRequired(run);
+  const belowRequired = below ? { requiredFs: run.requiredFs, reason: input.belowRequiredReason } : null;
+  const verdict = checkDecision(input.action, actor, facts, { note: input.note, checklist, belowRequired });
   if (!verdict.ok) throw refusalError(verdict);
 
   const { from, to } = TRANSITIONS[input.action];
@@ -31,7 +34,15 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
       ? await collectMaterialSources(run.projectId, run.document as SectionDocument)
       : undefined;
   try {
-    await applyTransition({ runId: run.id, actorId: user.id, from, to, note: input.note, materialSources });
+    await applyTransition({
+      runId: run.id,
+      actorId: user.id,
+      from,
+      to,
+      note: input.note,
+      materialSources,
+      belowRequiredReason: below ? input.belowRequiredReason : null,
+    });
   } catch (err) {
     if (err instanceof RunStateError) throw conflict(err.message);
     if (isFrozenRunError(err)) throw conflict("The run's record is frozen and cannot make that move.");
