@@ -18,6 +18,8 @@ export interface NoticeFacts {
   /** Who submitted, approved or returned. */
   actorName: string;
   note: string;
+  /** Set when a run below its required FS was signed off on purpose: the reviewer's reason. */
+  belowRequiredReason?: string | null;
   /** ISO 8601 */
   at: string;
   /** Where the recipient acts: the review page for reviewers, the run page for the author. */
@@ -67,14 +69,22 @@ export function composeNotice(kind: NoticeKind, f: NoticeFacts): ComposedNotice 
       ];
       action = `Open the review: ${f.link}`;
       break;
-    case "run-approved":
-      subject = `Signed off: ${f.runTitle} — ${f.projectName}`;
+    case "run-approved": {
+      const below = f.belowRequiredReason?.trim();
+      subject = below
+        ? `Signed off — below the required FS: ${f.runTitle} — ${f.projectName}`
+        : `Signed off: ${f.runTitle} — ${f.projectName}`;
       opening = [
-        `${f.actorName} signed off your run on ${when(f.at)}. Its record is now frozen.`,
+        below
+          ? `${f.actorName} signed off your run on ${when(f.at)} although it is below the required factor of ` +
+            `safety. Its record is now frozen.`
+          : `${f.actorName} signed off your run on ${when(f.at)}. Its record is now frozen.`,
+        ...(below ? ["", `Reason for signing off below the required FS: ${below}`] : []),
         ...(note ? ["", `Reviewer's note: ${note}`] : []),
       ];
       action = `Open the run and its calculation report: ${f.link}`;
       break;
+    }
     case "run-returned":
       subject = `Returned with comments: ${f.runTitle} — ${f.projectName}`;
       opening = [`${f.actorName} returned your run with comments on ${when(f.at)}.`, "", `Reviewer's note: ${note}`];

@@ -22,6 +22,8 @@ export interface TransitionNoticeInput {
   projectName: string;
   actor: { id: number; name: string };
   note: string;
+  /** Set when a run below its required FS is signed off: the reviewer's stated reason. */
+  belowRequiredReason?: string | null;
   at: string;
 }
 
@@ -53,6 +55,7 @@ async function factsFor(kind: NoticeKind, input: TransitionNoticeInput): Promise
     fs: { bishop: run.fsBishop, fellenius: run.fsFellenius },
     actorName: input.actor.name,
     note: input.note,
+    belowRequiredReason: input.belowRequiredReason ?? null,
     at: input.at,
     link: kind === "run-submitted" ? `${runPath}/review` : runPath,
     accountLink: `${base}/account`,

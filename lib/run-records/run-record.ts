@@ -21,6 +21,7 @@ import {
 } from "../stability";
 import type { PreviewCheck } from "./compare-preview";
 import { searchOnServer } from "./server-search";
+import { userIssue } from "../runs/engine-issue-text";
 
 export type StoredSliceTables = Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>;
 
@@ -39,8 +40,16 @@ export interface RunRecord {
   mode: "thread" | "in-process";
 }
 
-const invalid = (message: string, errors: readonly { path: string; message: string }[]) =>
-  new ApiError(400, "invalid_section", message, { setup: errors.map((e) => `${e.path}: ${e.message}`) });
+type EngineIssue = { code: string; path: string; message: string };
+
+/** A 400 listing the engine's objections in the user's words (materials by name, plain text for known codes). */
+const invalid = (message: string, errors: readonly EngineIssue[], section: SectionDocument) =>
+  new ApiError(400, "invalid_section", message, {
+    setup: errors.map((e) => {
+      const issue = userIssue(e, section.materials);
+      return `${issue.where}: ${issue.message}`;
+    }),
+  });
 
 /**
  * Runs the whole search of a section version with a set-up on the server and builds the record
@@ -56,9 +65,9 @@ export async function computeRunRecord(
   const setup = runSetupSchema.parse(rawSetup);
   const water = waterConditionOrRefuse(section, setup);
   const valid = validateSection(documentForRun(section, setup, water));
-  if (!valid.ok) throw invalid("The section and set-up do not validate.", valid.errors);
+  if (!valid.ok) throw invalid("The section and set-up do not validate.", valid.errors, section);
   const { record, mode } = await searchOnServer(valid.section);
-  if (!record.ok) throw invalid("The section and set-up do not validate.", record.errors);
+  if (!record.ok) throw invalid("The section and set-up do not validate.", record.errors, section);
   const { result, critical } = record;
   const sliceTables: StoredSliceTables = {};
   for (const method of result.methods) {

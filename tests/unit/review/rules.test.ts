@@ -166,6 +166,28 @@ describe("pins, notices and exports", () => {
     expect(n.text).toContain("Caution:");
   });
 
+  test("composeNotice(run-approved) says in the subject and the text when a run below its required FS is signed off", () => {
+    const facts = {
+      projectName: "Test dam",
+      runId: 9,
+      runTitle: "Steady seepage",
+      section: "Main v2",
+      condition: "Long-term steady seepage",
+      face: "downstream",
+      requiredFs: 1.5,
+      fs: { bishop: 1.42, fellenius: null },
+      actorName: "Demo Reviewer",
+      note: "",
+      at: "2026-01-05T10:00:00Z",
+      link: "http://127.0.0.1:3000/projects/1/runs/9",
+      accountLink: "http://127.0.0.1:3000/account",
+    };
+    const below = composeNotice("run-approved", { ...facts, belowRequiredReason: "Record of a failing case." });
+    expect(below.subject).toBe("Signed off — below the required FS: Steady seepage — Test dam");
+    expect(below.text).toContain("Reason for signing off below the required FS: Record of a failing case.");
+    expect(composeNotice("run-approved", facts).subject).toBe("Signed off: Steady seepage — Test dam");
+  });
+
   test("runsToCsv escapes text cells that start with =, +, - or @", () => {
     const base = {
       id: 1,

@@ -54,6 +54,7 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
     projectName: access.project.name,
     actor: { id: user.id, name: user.name },
     note: input.note,
+    belowRequiredReason: below ? input.belowRequiredReason : null,
     at: new Date().toISOString(),
   });
   return NextResponse.json({ run: { id: run.id, status: to } });
