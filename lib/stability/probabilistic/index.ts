@@ -1,6 +1,7 @@
 /** Public API of the probabilistic analysis (docs/probabilistic.md): re-exports only. */
 export {
   runProbabilistic,
+  hasProbabilisticSettings,
   type ProbabilisticOptions,
   type ProbabilisticResult,
   type ProbabilisticSuccess,

@@ -48,6 +48,13 @@ export interface ProbabilisticSuccess extends GridSearchSuccess {
 
 export type ProbabilisticResult = ProbabilisticSuccess | EngineFailure;
 
+/** True when a document asks for a probabilistic run (has analysis.probabilistic), whether or not it is valid. */
+export function hasProbabilisticSettings(doc: unknown): boolean {
+  if (typeof doc !== "object" || doc === null) return false;
+  const analysis = (doc as { analysis?: unknown }).analysis;
+  return typeof analysis === "object" && analysis !== null && "probabilistic" in analysis;
+}
+
 /** Reads and checks everything a run needs; every problem is reported with its path. */
 function readInput(doc: unknown) {
   const parsed = probabilisticDocumentSchema.safeParse(doc);
