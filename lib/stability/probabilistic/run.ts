@@ -197,14 +197,17 @@ function sampleWarnings(
     if (moved[j] > 0)
       out.push({
         code: "samples-on-limit",
-        message: `${v.path}: ${moved[j]} of ${n} samples of ${v.label} fell outside ${v.low} … ${v.high} and were set to the limit.`,
+        message:
+          `${v.path}: ${moved[j]} of ${n} samples of ${v.label} fell outside ${v.low} … ${v.high} ` +
+          "and were set to the limit.",
       });
   });
   if (correlated && sampling === "latin-hypercube")
     out.push({
       code: "correlation-loosens-strata",
       message:
-        "Latin hypercube with a c′–φ′ correlation: φ′ is mixed with c′ after stratifying, so φ′ itself is no longer exactly one sample per stratum.",
+        "Latin hypercube with a c′–φ′ correlation: φ′ is mixed with c′ after stratifying, " +
+        "so φ′ itself no longer has exactly one sample per stratum.",
     });
   if (cancelled)
     out.push({

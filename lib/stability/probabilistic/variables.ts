@@ -124,7 +124,8 @@ function build(
         "samples-out-of-range",
         `${path}.sd`,
         `${path}: with sd = ${d.sd}, ${(outside * 100).toFixed(1)} % of the samples of ${label} would fall outside ` +
-          `${low} … ${high}, where they mean nothing. Lower sd, use a lognormal distribution, or truncate with min/max.`,
+          `${low} … ${high}, where they mean nothing. ` +
+          "Lower sd, use a lognormal distribution, or truncate with min/max.",
       ),
     );
     return null;
