@@ -73,7 +73,7 @@ export function taylorSeries(
   const out: FosmResult[] = [];
   for (let i = 0; i < methodCount; i++) {
     const F = mid[i];
-    const delta = variables.map((v, j) => ((plus[j][i] - minus[j][i]) * 2 * v.sd) / steps[j]);
+    const delta = variables.map((v, j) => (steps[j] > 0 ? ((plus[j][i] - minus[j][i]) * 2 * v.sd) / steps[j] : 0));
     let variance = 0;
     for (const d of delta) variance += (d / 2) ** 2;
     for (const { a, b, rho } of correlations) variance += 2 * rho * (delta[a] / 2) * (delta[b] / 2);

@@ -55,9 +55,14 @@ describe("probabilistic runs", () => {
     );
   });
 
-  test("full-search on a one-circle grid equals critical-surface on that circle", () => {
-    const crit = run(oneCircleDoc(1, { samples: 40, seed: 3 }));
-    const full = run(oneCircleDoc(1, { samples: 40, seed: 3, mode: "full-search" }));
+  test("full-search on a one-circle grid equals critical-surface on that circle, γ varied too", () => {
+    const withGamma = (settings: Record<string, unknown>) => {
+      const d = oneCircleDoc(1, settings);
+      (d.materials[0].vary as Record<string, unknown>).gamma = { dist: "normal", sd: 1 };
+      return d;
+    };
+    const crit = run(withGamma({ samples: 40, seed: 3 }));
+    const full = run(withGamma({ samples: 40, seed: 3, mode: "full-search" }));
     for (const m of ["bishop", "fellenius"] as const) {
       const { fosm: f1, ...a } = crit.probabilistic[m] ?? { fosm: null };
       const { fosm: f2, ...b } = full.probabilistic[m] ?? { fosm: null };
