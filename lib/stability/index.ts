@@ -39,3 +39,4 @@ export {
   type PipingCheck,
   type SeepageFlow,
 } from "./seepage";
+export * from "./probabilistic";
