@@ -1,0 +1,226 @@
+/**
+ * The flow net as data (docs/seepage.md §5): equipotentials at equal head drops (contours of the
+ * head, drawn where the soil is saturated) and flow lines at equal flow between them, traced from
+ * the entry face through the element velocities v = −K·∇h. Nf and Nd give the practitioner's
+ * estimate q ≈ k·ΔH·Nf/Nd beside the computed q.
+ */
+import type { Boundary } from "./boundary";
+import { elementGradient } from "./elements";
+import type { FlowState } from "./free-surface";
+import { round, sig, type Field } from "./results";
+import type { FlowNet, Point, TriMesh } from "./types";
+
+export function buildFlowNet(
+  field: Field,
+  bc: Boundary,
+  state: FlowState,
+  nodal: Float64Array,
+  q: number,
+  headDrops: number,
+): FlowNet {
+  const { mesh, head, material, materials } = field;
+  let hIn = -Infinity;
+  let hOut = Infinity;
+  for (let v = 0; v < nodal.length; v++) {
+    if (!state.fixed[v] || Number.isNaN(head[v])) continue;
+    if (nodal[v] > 0) hIn = Math.max(hIn, head[v]);
+    if (nodal[v] < 0) hOut = Math.min(hOut, head[v]);
+  }
+  const deltaH = Number.isFinite(hIn) && Number.isFinite(hOut) ? Math.max(0, hIn - hOut) : 0;
+  const wetArea = new Float64Array(materials.length);
+  for (let e = 0; e < material.length; e++)
+    if (material[e] >= 0) wetArea[material[e]] += area(mesh, e) * state.relative[e];
+  let dominant = 0;
+  for (let m = 1; m < materials.length; m++) if (wetArea[m] > wetArea[dominant]) dominant = m;
+  const kRef = Math.sqrt(materials[dominant].kx * materials[dominant].ky);
+  const flowChannels = deltaH > 0 && kRef > 0 ? Math.max(1, Math.round((q * headDrops) / (kRef * deltaH))) : 0;
+  const equipotentials: FlowNet["equipotentials"] = [];
+  for (let k = 1; k < headDrops && deltaH > 0; k++) {
+    const level = hIn - (k * deltaH) / headDrops;
+    equipotentials.push({ head: sig(level), lines: contour(field, level) });
+  }
+  const flowLines = flowChannels > 1 ? traceFlowLines(field, bc, state, nodal, flowChannels) : [];
+  return {
+    headDrops,
+    deltaH: sig(deltaH),
+    kRef: sig(kRef),
+    flowChannels,
+    qFlowNet: deltaH > 0 ? sig((kRef * deltaH * flowChannels) / headDrops) : 0,
+    equipotentials,
+    flowLines,
+  };
+}
+
+function area(mesh: TriMesh, e: number): number {
+  const [a, b, c] = [mesh.tri[3 * e], mesh.tri[3 * e + 1], mesh.tri[3 * e + 2]];
+  return ((mesh.x[b] - mesh.x[a]) * (mesh.y[c] - mesh.y[a]) - (mesh.x[c] - mesh.x[a]) * (mesh.y[b] - mesh.y[a])) / 2;
+}
+
+/** Head contour at `level` through the saturated part of the pervious elements, joined into polylines. */
+function contour(field: Field, level: number): Point[][] {
+  const { mesh, head, material } = field;
+  const segments: [Point, Point][] = [];
+  for (let e = 0; e < material.length; e++) {
+    if (material[e] < 0) continue;
+    const cut: Point[] = [];
+    let wet = false;
+    for (let s = 0; s < 3; s++) {
+      const a = mesh.tri[3 * e + s];
+      const b = mesh.tri[3 * e + ((s + 1) % 3)];
+      if (head[a] >= mesh.y[a] || head[b] >= mesh.y[b]) wet = true;
+      const fa = head[a] - level;
+      const fb = head[b] - level;
+      if ((fa < 0 && fb >= 0) || (fa >= 0 && fb < 0)) {
+        const t = fa / (fa - fb);
+        cut.push([mesh.x[a] + t * (mesh.x[b] - mesh.x[a]), mesh.y[a] + t * (mesh.y[b] - mesh.y[a])]);
+      }
+    }
+    if (wet && cut.length === 2) segments.push([cut[0], cut[1]]);
+  }
+  return chain(segments);
+}
+
+/** Joins segments that share end points (to 1e-9 m) into polylines. */
+function chain(segments: [Point, Point][]): Point[][] {
+  const key = (p: Point) => `${Math.round(p[0] * 1e6)},${Math.round(p[1] * 1e6)}`;
+  const ends = new Map<string, number[]>();
+  segments.forEach((s, i) =>
+    s.forEach((p) => {
+      const k = key(p);
+      const list = ends.get(k);
+      if (list) list.push(i);
+      else ends.set(k, [i]);
+    }),
+  );
+  const used = new Uint8Array(segments.length);
+  const lines: Point[][] = [];
+  const extend = (line: Point[]) => {
+    for (;;) {
+      const tail = line[line.length - 1];
+      const next = (ends.get(key(tail)) ?? []).find((i) => !used[i]);
+      if (next === undefined) return;
+      used[next] = 1;
+      const [a, b] = segments[next];
+      line.push(key(a) === key(tail) ? b : a);
+    }
+  };
+  for (let i = 0; i < segments.length; i++) {
+    if (used[i]) continue;
+    used[i] = 1;
+    const line: Point[] = [segments[i][0], segments[i][1]];
+    extend(line);
+    line.reverse();
+    extend(line);
+    lines.push(line.map(([x, y]) => [round(x), round(y)]));
+  }
+  return lines;
+}
+
+/**
+ * Flow lines that split the inflow into `channels` equal parts: start points along the entry
+ * edges at equal steps of cumulative inflow, each traced element by element downstream.
+ */
+function traceFlowLines(field: Field, bc: Boundary, state: FlowState, nodal: Float64Array, channels: number): Point[][] {
+  const { mesh } = field;
+  const entering = (v: number) => state.fixed[v] === 1 && nodal[v] > 0;
+  const entry = bc.edges.filter((ed) => ed.open && entering(ed.a) && entering(ed.b));
+  // Walk the entry edges in order along the boundary (counter-clockwise), one chain after another.
+  const nextOf = new Map<number, (typeof entry)[number]>();
+  const hasPrev = new Set<number>();
+  for (const ed of entry) {
+    nextOf.set(ed.a, ed);
+    hasPrev.add(ed.b);
+  }
+  const chains: (typeof entry)[] = [];
+  for (const ed of entry) {
+    if (hasPrev.has(ed.a)) continue;
+    const list = [ed];
+    for (let cur = nextOf.get(ed.b); cur && list.length <= entry.length; cur = nextOf.get(cur.b)) list.push(cur);
+    chains.push(list);
+  }
+  // Each entry node's inflow is split evenly between the entry edges that meet at it.
+  const edgesAt = new Map<number, number>();
+  for (const ed of entry) for (const v of [ed.a, ed.b]) edgesAt.set(v, (edgesAt.get(v) ?? 0) + 1);
+  const edgeShare = (ed: { a: number; b: number }) =>
+    nodal[ed.a] / (edgesAt.get(ed.a) ?? 1) + nodal[ed.b] / (edgesAt.get(ed.b) ?? 1);
+  let total = 0;
+  for (const list of chains) for (const ed of list) total += edgeShare(ed);
+  if (total <= 0) return [];
+  const neighbours = adjacency(mesh);
+  const lines: Point[][] = [];
+  let cumulative = 0;
+  let j = 1;
+  for (const list of chains)
+    for (const ed of list) {
+      const share = edgeShare(ed);
+      while (j < channels && cumulative + share >= (j * total) / channels) {
+        const t = share > 0 ? ((j * total) / channels - cumulative) / share : 0.5;
+        const start: Point = [
+          mesh.x[ed.a] + t * (mesh.x[ed.b] - mesh.x[ed.a]),
+          mesh.y[ed.a] + t * (mesh.y[ed.b] - mesh.y[ed.a]),
+        ];
+        lines.push(trace(field, state, neighbours, ed.element, start));
+        j++;
+      }
+      cumulative += share;
+    }
+  return lines;
+}
+
+function adjacency(mesh: TriMesh): Int32Array {
+  const n = mesh.x.length;
+  const ne = mesh.region.length;
+  const out = new Int32Array(ne * 3).fill(-1);
+  const seen = new Map<number, number>();
+  for (let e = 0; e < ne; e++)
+    for (let s = 0; s < 3; s++) {
+      const a = mesh.tri[3 * e + s];
+      const b = mesh.tri[3 * e + ((s + 1) % 3)];
+      const key = Math.min(a, b) * n + Math.max(a, b);
+      const other = seen.get(key);
+      if (other === undefined) seen.set(key, 3 * e + s);
+      else {
+        out[3 * e + s] = Math.floor(other / 3);
+        out[other] = e;
+      }
+    }
+  return out;
+}
+
+/** Follows the element velocity from `start` in element `e` until the line leaves the pervious regions or stalls. */
+function trace(field: Field, state: FlowState, neighbours: Int32Array, e0: number, start: Point): Point[] {
+  const { mesh, head, material, materials } = field;
+  const line: Point[] = [[round(start[0]), round(start[1])]];
+  let e = e0;
+  let [x, y] = start;
+  let from = -1;
+  for (let step = 0; step < 4 * material.length && e >= 0 && material[e] >= 0; step++) {
+    const [gx, gy] = elementGradient(mesh, head, e);
+    const m = materials[material[e]];
+    const vx = -m.kx * state.relative[e] * gx;
+    const vy = -m.ky * state.relative[e] * gy;
+    if (vx === 0 && vy === 0) break;
+    // Leave through the edge the ray (x, y) + t·v meets first, other than the one just crossed.
+    let best = Infinity;
+    let side = -1;
+    for (let s = 0; s < 3; s++) {
+      if (neighbours[3 * e + s] === from && from >= 0) continue;
+      const a = mesh.tri[3 * e + s];
+      const b = mesh.tri[3 * e + ((s + 1) % 3)];
+      const ex = mesh.x[b] - mesh.x[a];
+      const ey = mesh.y[b] - mesh.y[a];
+      const den = vx * ey - vy * ex;
+      if (den === 0) continue;
+      const t = ((mesh.x[a] - x) * ey - (mesh.y[a] - y) * ex) / den;
+      const u = ((mesh.x[a] - x) * vy - (mesh.y[a] - y) * vx) / den;
+      if (t > 1e-12 && u >= -1e-9 && u <= 1 + 1e-9 && t < best) [best, side] = [t, s];
+    }
+    if (side < 0) break;
+    x += best * vx;
+    y += best * vy;
+    line.push([round(x), round(y)]);
+    from = e;
+    e = neighbours[3 * e + side];
+  }
+  return line;
+}

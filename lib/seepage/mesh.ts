@@ -1,0 +1,126 @@
+/**
+ * Triangular mesh of the section's regions: the planar graph of pslg.ts triangulated by
+ * Delaunator and made to honour every region edge and drain with Constrainautor (a constrained
+ * Delaunay triangulation). Each triangle takes the region its centroid lies in; triangles in no
+ * region (the convex hull's fill) are dropped.
+ */
+import Constrainautor from "@kninnug/constrainautor";
+import Delaunator from "delaunator";
+import { bounds, insidePolygon, signedArea } from "./geometry";
+import { fmt, issue } from "./issues";
+import { buildPslg } from "./pslg";
+import type { Point, SeepageIssue, TriMesh } from "./types";
+
+export interface MeshRequest {
+  polygons: Point[][];
+  filled: boolean[];
+  drains: Point[][];
+  levels: number[];
+  h: number;
+}
+
+export type MeshOutcome = { ok: true; mesh: TriMesh } | { ok: false; errors: SeepageIssue[] };
+
+/** Nodes a request would make, estimated from the filled area and the outline length. */
+export function estimateNodes(req: Pick<MeshRequest, "polygons" | "filled" | "h">): number {
+  let area = 0;
+  let perimeter = 0;
+  req.polygons.forEach((poly, r) => {
+    if (req.filled[r]) area += Math.abs(signedArea(poly));
+    for (let i = 0; i < poly.length; i++) {
+      const a = poly[i];
+      const b = poly[(i + 1) % poly.length];
+      perimeter += Math.hypot(b[0] - a[0], b[1] - a[1]);
+    }
+  });
+  return Math.ceil(area / ((req.h * req.h * Math.sqrt(3)) / 2) + perimeter / req.h);
+}
+
+export function buildMesh(req: MeshRequest): MeshOutcome {
+  const box = bounds(req.polygons);
+  const scale = Math.max(box.x1 - box.x0, box.y1 - box.y0, 1e-9);
+  const g = buildPslg(req, scale);
+  const coords = new Float64Array(g.px.length * 2);
+  for (let i = 0; i < g.px.length; i++) {
+    coords[2 * i] = g.px[i];
+    coords[2 * i + 1] = g.py[i];
+  }
+  const del = new Delaunator(coords);
+  try {
+    new Constrainautor(del, g.edges);
+  } catch (e) {
+    return {
+      ok: false,
+      errors: [
+        issue(
+          "regions-cross",
+          "regions",
+          `The region outlines cross each other or themselves, so they cannot be meshed (${(e as Error).message}).`,
+        ),
+      ],
+    };
+  }
+  return { ok: true, mesh: keepRegionTriangles(del.triangles, g.px, g.py, req.polygons) };
+}
+
+/** Keeps the triangles inside a region, counter-clockwise, and renumbers the nodes they use. */
+function keepRegionTriangles(triangles: Uint32Array, px: number[], py: number[], polygons: Point[][]): TriMesh {
+  const boxes = polygons.map((p) => bounds([p]));
+  const kept: number[] = [];
+  const region: number[] = [];
+  for (let t = 0; t < triangles.length; t += 3) {
+    const a = triangles[t];
+    const b = triangles[t + 1];
+    const c = triangles[t + 2];
+    const area = (px[b] - px[a]) * (py[c] - py[a]) - (px[c] - px[a]) * (py[b] - py[a]);
+    if (area === 0) continue;
+    const cx = (px[a] + px[b] + px[c]) / 3;
+    const cy = (py[a] + py[b] + py[c]) / 3;
+    const r = boxes.findIndex(
+      (bx, i) => cx >= bx.x0 && cx <= bx.x1 && cy >= bx.y0 && cy <= bx.y1 && insidePolygon(cx, cy, polygons[i]),
+    );
+    if (r < 0) continue;
+    if (area > 0) kept.push(a, b, c);
+    else kept.push(a, c, b);
+    region.push(r);
+  }
+  const index = new Int32Array(px.length).fill(-1);
+  let n = 0;
+  for (const v of kept) if (index[v] < 0) index[v] = n++;
+  const x = new Float64Array(n);
+  const y = new Float64Array(n);
+  for (let v = 0; v < px.length; v++)
+    if (index[v] >= 0) {
+      x[index[v]] = px[v];
+      y[index[v]] = py[v];
+    }
+  return { x, y, tri: Int32Array.from(kept, (v) => index[v]), region: Int32Array.from(region) };
+}
+
+/** Regions whose meshed area falls short of their outline's: they overlap another region or cross themselves. */
+export function checkCoverage(mesh: TriMesh, polygons: Point[][]): SeepageIssue[] {
+  const meshed = new Float64Array(polygons.length);
+  for (let e = 0; e < mesh.region.length; e++) meshed[mesh.region[e]] += triangleArea(mesh, e);
+  const out: SeepageIssue[] = [];
+  polygons.forEach((poly, r) => {
+    const want = Math.abs(signedArea(poly));
+    if (Math.abs(meshed[r] - want) > 1e-6 * want + 1e-9) {
+      out.push(
+        issue(
+          "regions-overlap",
+          `regions[${r}].points`,
+          `Region ${r} (first point ${fmt(poly[0])}) overlaps another region or crosses itself: ` +
+            `its outline encloses ${want.toFixed(3)} m² but only ${meshed[r].toFixed(3)} m² is its own.`,
+        ),
+      );
+    }
+  });
+  return out;
+}
+
+export function triangleArea(mesh: TriMesh, e: number): number {
+  const a = mesh.tri[3 * e];
+  const b = mesh.tri[3 * e + 1];
+  const c = mesh.tri[3 * e + 2];
+  return ((mesh.x[b] - mesh.x[a]) * (mesh.y[c] - mesh.y[a]) - (mesh.x[c] - mesh.x[a]) * (mesh.y[b] - mesh.y[a])) / 2;
+}
