@@ -35,7 +35,8 @@ export interface Boundary {
   tol: number;
 }
 
-export type BoundaryOutcome = { ok: true; boundary: Boundary; warnings: SeepageIssue[] } | { ok: false; errors: SeepageIssue[] };
+export type BoundaryOutcome =
+  { ok: true; boundary: Boundary; warnings: SeepageIssue[] } | { ok: false; errors: SeepageIssue[] };
 
 export function classifyBoundary(
   mesh: TriMesh,
@@ -96,7 +97,6 @@ export function classifyBoundary(
     for (const v of [ed.a, ed.b]) if (kind[v] === INTERIOR) kind[v] = FACE;
   }
   const warnings: SeepageIssue[] = [];
-  const lowestGround = groundLowest(mesh, groundEdges, x0, x1, tol);
   pools.forEach((pool, p) => {
     const left = pool.side === "left";
     const edgeX = left ? x0 : x1;
@@ -119,15 +119,6 @@ export function classifyBoundary(
           path,
           `The ${pool.side} pool at ${pool.level} m lies below all ground and below the pervious part of the ` +
             `section's ${pool.side} side (x = ${edgeX}), so it touches nothing.`,
-        ),
-      );
-    else if (pool.level < lowestGround)
-      warnings.push(
-        issue(
-          "pool-on-side-only",
-          path,
-          `The ${pool.side} pool at ${pool.level} m is below all ground (lowest ${lowestGround} m): it acts only ` +
-            `on the section's ${pool.side} side, as a water level held there.`,
         ),
       );
   });
@@ -175,20 +166,4 @@ function poolReach(
   }
   // Ground at the edge above the level: the pool stands against the side only.
   return Number.isFinite(reach) ? reach : left ? Infinity : -Infinity;
-}
-
-/** Lowest point of the ground surface, the section's vertical sides left out. */
-function groundLowest(mesh: TriMesh, ground: [number, number][], x0: number, x1: number, tol: number): number {
-  let low = Infinity;
-  for (const [a, b] of ground) {
-    const vertical = Math.abs(mesh.x[a] - mesh.x[b]) <= tol;
-    if (vertical && (Math.abs(mesh.x[a] - x0) <= tol || Math.abs(mesh.x[a] - x1) <= tol)) continue;
-    low = Math.min(low, mesh.y[a], mesh.y[b]);
-  }
-  return low;
-}
-
-/** Human-readable place of a node for messages. */
-export function nodePlace(mesh: TriMesh, v: number): string {
-  return fmt([mesh.x[v], mesh.y[v]]);
 }

@@ -120,7 +120,13 @@ function chain(segments: [Point, Point][]): Point[][] {
  * Flow lines that split the inflow into `channels` equal parts: start points along the entry
  * edges at equal steps of cumulative inflow, each traced element by element downstream.
  */
-function traceFlowLines(field: Field, bc: Boundary, state: FlowState, nodal: Float64Array, channels: number): Point[][] {
+function traceFlowLines(
+  field: Field,
+  bc: Boundary,
+  state: FlowState,
+  nodal: Float64Array,
+  channels: number,
+): Point[][] {
   const { mesh } = field;
   const entering = (v: number) => state.fixed[v] === 1 && nodal[v] > 0;
   const entry = bc.edges.filter((ed) => ed.open && entering(ed.a) && entering(ed.b));

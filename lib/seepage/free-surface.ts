@@ -14,13 +14,18 @@ import type { TriMesh } from "./types";
 /** Conductivity kept above the phreatic surface, as a share of the saturated value. */
 export const RESIDUAL_SHARE = 1e-3;
 const MAX_ROUNDS = 200;
-/** Under-relaxation of the saturated shares: without it they swing from round to round. */
-const RELAX = 0.5;
+/**
+ * Under-relaxation of the saturated shares: without it they swing from round to round. It starts
+ * at one half, shrinks when the change grows and recovers slowly while the change falls.
+ */
+const RELAX_START = 0.5;
+const RELAX_MIN = 0.05;
 /** Solver tolerance inside the rounds; the final solve goes to 1e-10. */
 const INNER_TOL = 1e-6;
 /** Rounds stop when no face switches, heads move less than this share of the head lost, and shares settle. */
 const HEAD_TOL = 1e-5;
 const SHARE_TOL = 1e-4;
+const LIFT = 0.02;
 
 export interface FlowState {
   pattern: CsrPattern;
@@ -67,6 +72,8 @@ export function solveUnconfined(mesh: TriMesh, bc: Boundary, ke: Float64Array, p
   let rounds = 0;
   let converged = false;
   const switches = new Uint16Array(n);
+  let relax = RELAX_START;
+  let lastChange = Infinity;
   for (rounds = 1; rounds <= MAX_ROUNDS; rounds++) {
     assemble(pattern, ke, relative, values);
     previous.set(head);
@@ -95,11 +102,22 @@ export function solveUnconfined(mesh: TriMesh, bc: Boundary, ke: Float64Array, p
       const a = mesh.tri[3 * e];
       const b = mesh.tri[3 * e + 1];
       const c = mesh.tri[3 * e + 2];
-      const share = wetFraction(head[a] - mesh.y[a], head[b] - mesh.y[b], head[c] - mesh.y[c]);
-      const r = RELAX * (RESIDUAL_SHARE + (1 - RESIDUAL_SHARE) * share) + (1 - RELAX) * relative[e];
+      const pa = head[a] - mesh.y[a];
+      const pb = head[b] - mesh.y[b];
+      const pc = head[c] - mesh.y[c];
+      // Drain and seepage-face nodes sit at exactly p = 0; an element with two of them would flip
+      // between dry and wet as its third node crosses zero. A small lift of the zero level, a
+      // fiftieth of the element's height, keeps the share continuous.
+      const lift =
+        LIFT *
+        Math.max(Math.abs(mesh.y[a] - mesh.y[b]), Math.abs(mesh.y[b] - mesh.y[c]), Math.abs(mesh.y[c] - mesh.y[a]));
+      const share = wetFraction(pa + lift, pb + lift, pc + lift);
+      const r = relax * (RESIDUAL_SHARE + (1 - RESIDUAL_SHARE) * share) + (1 - relax) * relative[e];
       dRel = Math.max(dRel, Math.abs(r - relative[e]));
       relative[e] = r;
     }
+    if (dRel > lastChange) relax = Math.max(RELAX_MIN, relax * 0.7);
+    lastChange = dRel;
     let dHead = 0;
     for (let v = 0; v < n; v++) if (!fixed[v]) dHead = Math.max(dHead, Math.abs(head[v] - previous[v]));
     if (changed === 0 && dHead < HEAD_TOL * dh && dRel < SHARE_TOL && rounds > 1) {

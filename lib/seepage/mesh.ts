@@ -73,7 +73,13 @@ function keepRegionTriangles(triangles: Uint32Array, px: number[], py: number[],
     const b = triangles[t + 1];
     const c = triangles[t + 2];
     const area = (px[b] - px[a]) * (py[c] - py[a]) - (px[c] - px[a]) * (py[b] - py[a]);
-    if (area === 0) continue;
+    // Three nearly collinear points (a flat triangle along a straight outline) carry no area: drop them.
+    const longest = Math.max(
+      (px[b] - px[a]) ** 2 + (py[b] - py[a]) ** 2,
+      (px[c] - px[b]) ** 2 + (py[c] - py[b]) ** 2,
+      (px[a] - px[c]) ** 2 + (py[a] - py[c]) ** 2,
+    );
+    if (Math.abs(area) <= 1e-9 * longest) continue;
     const cx = (px[a] + px[b] + px[c]) / 3;
     const cy = (py[a] + py[b] + py[c]) / 3;
     const r = boxes.findIndex(

@@ -172,25 +172,27 @@ export function exitGradients(field: Field, bc: Boundary, state: FlowState, noda
   for (const list of groups.values()) {
     let best = list[0];
     let bestI = -1;
-    let from: Point = [Infinity, 0];
-    let to: Point = [-Infinity, 0];
+    const uses = new Map<number, number>();
     for (const ed of list) {
       const [gx, gy] = elementGradient(mesh, head, ed.element);
       const i = Math.hypot(gx, gy);
       if (i > bestI) [bestI, best] = [i, ed];
-      for (const v of [ed.a, ed.b]) {
-        if (mesh.x[v] < from[0]) from = [mesh.x[v], mesh.y[v]];
-        if (mesh.x[v] > to[0]) to = [mesh.x[v], mesh.y[v]];
-      }
+      for (const v of [ed.a, ed.b]) uses.set(v, (uses.get(v) ?? 0) + 1);
     }
+    // The stretch's two ends are the nodes used by one edge only.
+    const ends = [...uses].filter(([, c]) => c === 1).map(([v]) => v);
+    if (ends.length < 2) ends.splice(0, ends.length, list[0].a, list[0].b);
+    const [from, to] = ends
+      .map((v): Point => [round(mesh.x[v]), round(mesh.y[v])])
+      .sort((p, q) => p[0] - q[0] || p[1] - q[1]);
     const mat = field.materials[field.material[best.element]];
     const iCritical = mat.gammaSat === null ? null : (mat.gammaSat - gammaW) / gammaW;
     out.push({
       x: round((mesh.x[best.a] + mesh.x[best.b]) / 2),
       y: round((mesh.y[best.a] + mesh.y[best.b]) / 2),
       i: sig(bestI),
-      from: [round(from[0]), round(from[1])],
-      to: [round(to[0]), round(to[1])],
+      from,
+      to,
       material: mat.id,
       iCritical: iCritical === null ? null : sig(iCritical),
       pipingFactor: iCritical === null || bestI === 0 ? null : sig(iCritical / bestI),

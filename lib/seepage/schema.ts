@@ -49,7 +49,10 @@ export const seepageDocumentSchema = z
     materials: z.array(seepageMaterialSchema).min(1, "at least one material is needed"),
     regions: z.array(seepageRegionSchema).min(1, "at least one region is needed"),
     seepage: seepageSettingsSchema,
-    water: z.object({ gammaW: z.number().positive().max(100).optional() }).loose().optional(),
+    water: z
+      .object({ gammaW: z.number().positive().max(100).optional() })
+      .loose()
+      .optional(),
   })
   .loose();
 

@@ -32,7 +32,13 @@ export function buildProblem(doc: unknown, maxNodes = MAX_NODES): ProblemOutcome
   const regions = d.regions.map((r, i) => {
     const m = index.get(r.material);
     if (m === undefined)
-      errors.push(issue("unknown-material", `regions[${i}].material`, `Region ${i} names material "${r.material}", which is not in materials.`));
+      errors.push(
+        issue(
+          "unknown-material",
+          `regions[${i}].material`,
+          `Region ${i} names material "${r.material}", which is not in materials.`,
+        ),
+      );
     else used.add(m);
     if (Math.abs(signedArea(r.points)) <= 0)
       errors.push(issue("empty-region", `regions[${i}].points`, `Region ${i} encloses no area.`));
@@ -57,15 +63,21 @@ export function buildProblem(doc: unknown, maxNodes = MAX_NODES): ProblemOutcome
   const pools = s.pools ?? [];
   const drains = (s.drains ?? []) as Point[][];
   if (pools.length === 0 && drains.length === 0)
-    errors.push(issue("no-water", "seepage", "A seepage run needs at least one pool or drain to drive or take the flow."));
+    errors.push(
+      issue("no-water", "seepage", "A seepage run needs at least one pool or drain to drive or take the flow."),
+    );
   if (pools.length === 2 && pools[0].side === pools[1].side)
     errors.push(issue("duplicate-pool", "seepage.pools[1].side", `Two pools stand on the ${pools[0].side} side.`));
 
   const perviousPolys = regions.filter((r) => materials[r.material]?.pervious).map((r) => r.points);
   const inPervious = (p: Point) =>
-    perviousPolys.some((poly) => insidePolygon(p[0], p[1], poly) || polylineDistance(p[0], p[1], [...poly, poly[0]]) < 1e-6);
+    perviousPolys.some(
+      (poly) => insidePolygon(p[0], p[1], poly) || polylineDistance(p[0], p[1], [...poly, poly[0]]) < 1e-6,
+    );
   const inAny = (p: Point) =>
-    regions.some((r) => insidePolygon(p[0], p[1], r.points) || polylineDistance(p[0], p[1], [...r.points, r.points[0]]) < 1e-6);
+    regions.some(
+      (r) => insidePolygon(p[0], p[1], r.points) || polylineDistance(p[0], p[1], [...r.points, r.points[0]]) < 1e-6,
+    );
   drains.forEach((line, i) =>
     line.forEach((p, j) => {
       if (inPervious(p)) return;
@@ -92,7 +104,10 @@ export function buildProblem(doc: unknown, maxNodes = MAX_NODES): ProblemOutcome
   let perviousArea = 0;
   for (const poly of perviousPolys) perviousArea += Math.abs(signedArea(poly));
   if (perviousArea === 0)
-    return { ok: false, errors: [issue("no-pervious-region", "regions", "Every region is impenetrable: no water can flow.")] };
+    return {
+      ok: false,
+      errors: [issue("no-pervious-region", "regions", "Every region is impenetrable: no water can flow.")],
+    };
   const meshSize = s.meshSize ?? Math.sqrt((perviousArea * 2) / Math.sqrt(3) / DEFAULT_NODE_TARGET);
   const estimate = estimateNodes({ polygons, filled, h: meshSize });
   if (estimate > maxNodes) {
