@@ -77,7 +77,8 @@ export function kozenyDam(y0: number, H: number, k: number, meshSize: number): S
  * impervious base, pools h1 upstream and h2 downstream. The layer runs `reach` beyond each edge.
  */
 export function floorOnLayer(B: number, T: number, h1: number, h2: number, k: number, meshSize: number): SeepageDoc {
-  const reach = 5 * T;
+  // The disturbance under the floor dies out as exp(−πx/T): four depths on each side is far enough.
+  const reach = 4 * T;
   const top = Math.max(h1, h2) + 2;
   return {
     materials: [soil(k), { id: "floor", model: "impenetrable", gamma: 24 }],
@@ -114,11 +115,11 @@ export function floorOnLayer(B: number, T: number, h1: number, h2: number, k: nu
 }
 
 /**
- * A homogeneous dam on an impervious base with a horizontal toe drain (Casagrande 1937): upstream
- * face 2.5H:1V, crest 12 m high and 6 m wide, downstream face 2H:1V, drain on the base from x = 45
- * m to the downstream toe at x = 60 m.
+ * A homogeneous dam on an impervious base with a horizontal toe filter (Casagrande 1937): 20 m
+ * high, crest 12 m, base 32 m, filter the last 6 m of the base, pool at 19 m (so the wetted
+ * upstream face projects m = 9.5 m).
  */
-export function toeDrainDam(pool: number, k: number, meshSize: number): SeepageDoc {
+export function toeDrainDam(k: number, meshSize: number): SeepageDoc {
   return {
     materials: [soil(k)],
     regions: [
@@ -126,18 +127,18 @@ export function toeDrainDam(pool: number, k: number, meshSize: number): SeepageD
         material: "soil",
         points: [
           [0, 0],
-          [60, 0],
-          [36, 12],
-          [30, 12],
+          [32, 0],
+          [22, 20],
+          [10, 20],
         ],
       },
     ],
     seepage: {
-      pools: [{ side: "left", level: pool }],
+      pools: [{ side: "left", level: 19 }],
       drains: [
         [
-          [45, 0],
-          [60, 0],
+          [26, 0],
+          [32, 0],
         ],
       ],
       meshSize,
