@@ -111,7 +111,9 @@ export function buildProblem(doc: unknown, maxNodes = MAX_NODES): ProblemOutcome
   const meshSize = s.meshSize ?? Math.sqrt((perviousArea * 2) / Math.sqrt(3) / DEFAULT_NODE_TARGET);
   const estimate = estimateNodes({ polygons, filled, h: meshSize });
   if (estimate > maxNodes) {
-    const needed = meshSize * Math.sqrt(estimate / maxNodes);
+    let needed = meshSize * Math.sqrt(estimate / maxNodes);
+    while (estimateNodes({ polygons, filled, h: needed }) > maxNodes) needed *= 1.05;
+    needed = ceilTwoFigures(needed);
     return {
       ok: false,
       errors: [
@@ -119,7 +121,7 @@ export function buildProblem(doc: unknown, maxNodes = MAX_NODES): ProblemOutcome
           "mesh-too-large",
           "seepage.meshSize",
           `A mesh size of ${meshSize} m would make about ${estimate} nodes, more than the limit of ${maxNodes}; ` +
-            `use a mesh size of at least ${needed.toPrecision(2)} m.`,
+            `use a mesh size of at least ${needed} m.`,
         ),
       ],
     };
@@ -139,4 +141,10 @@ export function buildProblem(doc: unknown, maxNodes = MAX_NODES): ProblemOutcome
       maxNodes,
     },
   };
+}
+
+/** Rounds up to two significant figures, so the size suggested in a message is sure to fit. */
+function ceilTwoFigures(v: number): number {
+  const scale = 10 ** (Math.floor(Math.log10(v)) - 1);
+  return Number((Math.ceil(v / scale) * scale).toPrecision(2));
 }
