@@ -139,15 +139,15 @@ function simplify(line: Point[]): Point[] {
 }
 
 /**
- * Stretches of the ground or sides where water leaves the section (prescribed nodes with
- * outflow at both ends of an edge), each with its largest element gradient |∇h| and the factor
+ * Stretches of the ground or sides where water leaves the section (edges with a prescribed,
+ * outflowing node at either end, so a lone exit node at a toe still counts), each with its largest element gradient |∇h| and the factor
  * against piping i_cr / i, where i_cr = (γsat − γw)/γw of the material there.
  */
 export function exitGradients(field: Field, bc: Boundary, state: FlowState, nodal: Float64Array): ExitGradient[] {
   const { mesh, head, gammaW } = field;
   const leaving = (v: number) =>
     state.fixed[v] === 1 && nodal[v] < 0 && (bc.kind[v] === FACE || bc.kind[v] === POOL || bc.kind[v] === DRAIN);
-  const exitEdges = bc.edges.filter((ed) => ed.open && leaving(ed.a) && leaving(ed.b));
+  const exitEdges = bc.edges.filter((ed) => ed.open && (leaving(ed.a) || leaving(ed.b)));
   // Join edges that share a node into stretches (union–find over nodes).
   const parent = new Map<number, number>();
   const root = (v: number): number => {

@@ -226,7 +226,10 @@ export function zonedDam(meshSize: number): SeepageDoc {
       },
     ],
     seepage: {
-      pools: [{ side: "left", level: 21 }],
+      pools: [
+        { side: "left", level: 21 },
+        { side: "right", level: 6 },
+      ],
       meshSize,
       probes: [
         [58, 10],
