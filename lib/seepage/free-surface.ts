@@ -159,9 +159,8 @@ export function reactions(
   fixed: Uint8Array,
   out: Float64Array,
 ): void {
-  const none = new Uint8Array(p.n);
   const h = Float64Array.from(head, (v) => (Number.isNaN(v) ? 0 : v));
-  multiply(p, values, h, out, none);
+  multiply(p, values, h, out);
   for (let i = 0; i < p.n; i++) if (!fixed[i]) out[i] = 0;
 }
 
