@@ -20,8 +20,9 @@ const MAX_ROUNDS = 200;
  */
 const RELAX_START = 0.8;
 const RELAX_MIN = 0.05;
-/** Solver tolerance inside the rounds; the final solve goes to 1e-10. */
+/** Solver tolerances: loose inside the rounds, tight for the final solve that the flows come from. */
 const INNER_TOL = 1e-6;
+const FINAL_TOL = 1e-9;
 /** Rounds stop when no face switches, heads move less than this share of the head lost, and shares settle. */
 const HEAD_TOL = 1e-5;
 const SHARE_TOL = 1e-4;
@@ -136,7 +137,7 @@ export function solveUnconfined(mesh: TriMesh, bc: Boundary, ke: Float64Array, p
   if (!converged) rounds = MAX_ROUNDS;
   // The heads, prescribed set and matrix must agree: one last solve with the final shares.
   assemble(pattern, ke, relative, values);
-  solverIterations += solveMasked(pattern, values, head, fixed).iterations;
+  solverIterations += solveMasked(pattern, values, head, fixed, FINAL_TOL).iterations;
   for (let v = 0; v < n; v++) if (bc.kind[v] === INACTIVE) head[v] = NaN;
   return { pattern, values, head, fixed, relative, rounds, solverIterations, converged };
 }
