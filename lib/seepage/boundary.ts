@@ -35,8 +35,7 @@ export interface Boundary {
   tol: number;
 }
 
-export type BoundaryOutcome =
-  { ok: true; boundary: Boundary; warnings: SeepageIssue[] } | { ok: false; errors: SeepageIssue[] };
+export type BoundaryOutcome = { ok: true; boundary: Boundary } | { ok: false; errors: SeepageIssue[] };
 
 export function classifyBoundary(
   mesh: TriMesh,
@@ -96,7 +95,6 @@ export function classifyBoundary(
     if (!ed.open) continue;
     for (const v of [ed.a, ed.b]) if (kind[v] === INTERIOR) kind[v] = FACE;
   }
-  const warnings: SeepageIssue[] = [];
   pools.forEach((pool, p) => {
     const left = pool.side === "left";
     const edgeX = left ? x0 : x1;
@@ -132,7 +130,7 @@ export function classifyBoundary(
     }
   });
   if (errors.length) return { ok: false, errors };
-  return { ok: true, boundary: { kind, head, edges, tol }, warnings };
+  return { ok: true, boundary: { kind, head, edges, tol } };
 }
 
 /**

@@ -140,8 +140,9 @@ function simplify(line: Point[]): Point[] {
 
 /**
  * Stretches of the ground or sides where water leaves the section (edges with a prescribed,
- * outflowing node at either end, so a lone exit node at a toe still counts), each with its largest element gradient |∇h| and the factor
- * against piping i_cr / i, where i_cr = (γsat − γw)/γw of the material there.
+ * outflowing node at either end, so a lone exit node at a toe still counts), each with its
+ * largest element gradient |∇h| and the factor against piping i_cr / i, where
+ * i_cr = (γsat − γw)/γw of the material there.
  */
 export function exitGradients(field: Field, bc: Boundary, state: FlowState, nodal: Float64Array): ExitGradient[] {
   const { mesh, head, gammaW } = field;

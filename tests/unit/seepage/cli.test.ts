@@ -8,6 +8,22 @@ import path from "node:path";
 import { describe, expect, test } from "vitest";
 
 const ROOT = path.resolve(__dirname, "../../..");
+
+/** The parts of the output these tests read. */
+interface Json {
+  ok: boolean;
+  q: number;
+  qIn: number;
+  qOut: number;
+  qTotal: number;
+  phreatic: [number, number][];
+  probes: { x: number; y: number; head: number; pressure: number }[];
+  exitGradients: { i: number }[];
+  mesh: { nodes: number };
+  cautions: string[];
+  meshData: { x: number[]; head: (number | null)[]; triangles: number[] };
+  errors: { code: string; path: string }[];
+}
 const ZONED = path.join(__dirname, "zoned-dam.json");
 
 function run(args: string[], input?: string) {
@@ -18,11 +34,11 @@ function run(args: string[], input?: string) {
     timeout: 60_000,
     maxBuffer: 64 * 1024 * 1024,
   });
-  return { status: r.status, json: JSON.parse(r.stdout) as Record<string, any>, stdout: r.stdout };
+  return { status: r.status, json: JSON.parse(r.stdout) as Json, stdout: r.stdout };
 }
 
 describe("scripts/seepage.ts", () => {
-  test("the zoned dam: q with qIn and qOut within 1 %, a phreatic line across the section, probes, exit gradients", () => {
+  test("the zoned dam: q with qIn = qOut (1 %), a phreatic line across the section, probes, exit gradients", () => {
     const r = run([ZONED]);
     expect(r.status).toBe(0);
     const s = r.json;
@@ -32,7 +48,7 @@ describe("scripts/seepage.ts", () => {
     expect(Math.abs(s.qTotal / (s.q * 250) - 1)).toBeLessThan(1e-5);
     expect(s.phreatic[0]).toEqual([0, 21]);
     expect(s.phreatic[s.phreatic.length - 1][0]).toBe(120);
-    // The core takes most of the head: the probe inside it (58, 10) is well below the pool, the upstream shell's is not.
+    // The core takes most of the head: its probe (58, 10) is well below the pool, the upstream shell's is not.
     const [core, upstream] = s.probes;
     expect(core.head).toBeLessThan(19);
     expect(upstream.head).toBeGreaterThan(20);

@@ -68,7 +68,7 @@ describe("seepage solver parts", () => {
     expect(wetFraction(-1, 3, -1)).toBeCloseTo(0.5625, 12);
   });
 
-  test("buildMesh honours every region edge, a drain inside a region and the pool level; triangles are not slivers", () => {
+  test("buildMesh honours region edges, an inner drain and the pool level; no slivers", () => {
     const polygons: Point[][] = [
       [
         [0, 0],
