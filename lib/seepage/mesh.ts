@@ -40,6 +40,11 @@ export function buildMesh(req: MeshRequest): MeshOutcome {
   const box = bounds(req.polygons);
   const scale = Math.max(box.x1 - box.x0, box.y1 - box.y0, 1e-9);
   const g = buildPslg(req, scale);
+  // Four far corners make the convex hull, so no point of the section lies on it: long straight
+  // runs of collinear hull points can stall the constraining (its input must have a convex hull).
+  const pad = 2 * scale;
+  g.px.push(box.x0 - pad, box.x1 + pad, box.x1 + pad, box.x0 - pad);
+  g.py.push(box.y0 - pad, box.y0 - pad, box.y1 + pad, box.y1 + pad);
   const coords = new Float64Array(g.px.length * 2);
   for (let i = 0; i < g.px.length; i++) {
     coords[2 * i] = g.px[i];

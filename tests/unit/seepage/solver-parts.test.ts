@@ -3,12 +3,14 @@
  * LU solve (ml-matrix), the saturated share of a triangle against its geometry, the mesh against
  * the outlines it must honour.
  */
+import fc from "fast-check";
 import { Matrix, solve as denseSolve } from "ml-matrix";
 import { describe, expect, test } from "vitest";
 import { elementMatrices, wetFraction } from "@/lib/seepage/elements";
 import { buildMesh, checkCoverage, triangleArea } from "@/lib/seepage/mesh";
 import { buildPattern, solveMasked } from "@/lib/seepage/sparse";
 import type { Point } from "@/lib/seepage";
+import { floorOnLayer, toeDrainDam, zonedDam, type SeepageDoc } from "./sections";
 
 describe("seepage solver parts", () => {
   test("solveMasked(IC(0)-CG) matches a dense LU solve of the same anisotropic system to 1e-8", () => {
@@ -118,4 +120,21 @@ describe("seepage solver parts", () => {
     }
     expect(worst).toBeGreaterThan(10);
   });
+
+  test("buildMesh meshes sections with long straight outlines and drains at any element size", () => {
+    const sections: SeepageDoc[] = [zonedDam(1), toeDrainDam(1e-6, 1), floorOnLayer(5, 10, 12, 10.5, 1e-5, 1)];
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 2 }), fc.double({ min: 0.25, max: 2.5, noNaN: true }), (i, h) => {
+        const doc = sections[i];
+        const polygons = doc.regions.map((r) => r.points);
+        const pervious = doc.regions.map((r) => r.material !== "rock" && r.material !== "floor");
+        const drains = (doc.seepage.drains ?? []) as Point[][];
+        const levels = (doc.seepage.pools as { level: number }[]).map((p) => p.level);
+        const r = buildMesh({ polygons, filled: pervious, drains, levels, h });
+        expect(r.ok).toBe(true);
+        if (r.ok) expect(checkCoverage(r.mesh, polygons)).toEqual([]);
+      }),
+      { numRuns: 25 },
+    );
+  }, 60_000);
 });
