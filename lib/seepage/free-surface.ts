@@ -44,7 +44,17 @@ export interface FlowState {
   converged: boolean;
 }
 
-export function solveUnconfined(mesh: TriMesh, bc: Boundary, ke: Float64Array, pervious: Uint8Array): FlowState {
+/** Told after each round; returning false stops the run (a cancel button in the browser). */
+export type RoundListener = (round: number, maxRounds: number) => boolean | void;
+
+/** Solves for the heads and the phreatic surface, or returns null when the listener stopped it. */
+export function solveUnconfined(
+  mesh: TriMesh,
+  bc: Boundary,
+  ke: Float64Array,
+  pervious: Uint8Array,
+  onRound?: RoundListener,
+): FlowState | null {
   const n = mesh.x.length;
   const ne = mesh.region.length;
   const pattern = buildPattern(n, mesh.tri);
@@ -129,6 +139,7 @@ export function solveUnconfined(mesh: TriMesh, bc: Boundary, ke: Float64Array, p
     const dFlow = Math.abs(scale - lastFlow) / scale;
     lastFlow = scale;
     settled = changed === 0 && dHead < SETTLED_TOL * dh && dFlow < SETTLED_TOL ? settled + 1 : 0;
+    if (onRound && onRound(rounds, MAX_ROUNDS) === false) return null;
     if ((changed === 0 && dHead < HEAD_TOL * dh && dRel < SHARE_TOL && rounds > 1) || settled >= 3) {
       converged = true;
       break;

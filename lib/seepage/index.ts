@@ -7,6 +7,7 @@ export {
   type SeepageModel,
   type RunOptions,
 } from "./solve";
+export type { RoundListener } from "./free-surface";
 export { seepageWater, type SeepageWater } from "./pore-pressure";
 export { seepageDocumentSchema, type SeepageDocument, type SeepageSettings } from "./schema";
 export { MAX_NODES, DEFAULT_GAMMA_W, DEFAULT_HEAD_DROPS } from "./validate";

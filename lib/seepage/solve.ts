@@ -5,7 +5,7 @@
 import { classifyBoundary, type Boundary } from "./boundary";
 import { elementMatrices } from "./elements";
 import { buildFlowNet } from "./flow-net";
-import { solveUnconfined, type FlowState } from "./free-surface";
+import { solveUnconfined, type FlowState, type RoundListener } from "./free-surface";
 import { buildLocator } from "./locate";
 import { buildMesh, checkCoverage } from "./mesh";
 import { exitGradients, flows, headAt, phreaticLine, sig, upliftUnder, type Field } from "./results";
@@ -36,6 +36,8 @@ export type SeepageRun = { ok: true; solution: SeepageSolution; model: SeepageMo
 export interface RunOptions {
   /** Node limit (default MAX_NODES). */
   maxNodes?: number;
+  /** Called after each free-surface round with (round, most rounds); return false to cancel the run. */
+  onRound?: RoundListener;
 }
 
 export function runSeepage(doc: unknown, options: RunOptions = {}): SeepageRun {
@@ -70,7 +72,9 @@ export function runSeepage(doc: unknown, options: RunOptions = {}): SeepageRun {
       kx[e] = problem.materials[material[e]].kx;
       ky[e] = problem.materials[material[e]].ky;
     }
-  const state = solveUnconfined(mesh, bc.boundary, elementMatrices(mesh, kx, ky), pervious);
+  const state = solveUnconfined(mesh, bc.boundary, elementMatrices(mesh, kx, ky), pervious, options.onRound);
+  if (state === null)
+    return { ok: false, errors: [{ code: "cancelled", path: "", message: "The seepage run was cancelled." }] };
   const field: Field = {
     mesh,
     head: state.head,

@@ -9,7 +9,7 @@ import { describe, expect, test } from "vitest";
 import { elementMatrices, wetFraction } from "@/lib/seepage/elements";
 import { buildMesh, checkCoverage, triangleArea } from "@/lib/seepage/mesh";
 import { buildPattern, solveMasked } from "@/lib/seepage/sparse";
-import type { Point } from "@/lib/seepage";
+import { runSeepage, type Point } from "@/lib/seepage";
 import { floorOnLayer, toeDrainDam, zonedDam, type SeepageDoc } from "./sections";
 
 describe("seepage solver parts", () => {
@@ -137,4 +137,15 @@ describe("seepage solver parts", () => {
       { numRuns: 25 },
     );
   }, 60_000);
+
+  test("runSeepage reports each free-surface round and stops with `cancelled` when told to", () => {
+    const seen: number[] = [];
+    const done = runSeepage(zonedDam(2), { onRound: (round) => void seen.push(round) });
+    expect(done.ok).toBe(true);
+    expect(seen[0]).toBe(1);
+    expect(seen.length).toBeGreaterThanOrEqual(done.ok ? done.solution.iterations.freeSurface : 0);
+    const stopped = runSeepage(zonedDam(2), { onRound: (round) => round < 2 });
+    expect(stopped.ok).toBe(false);
+    if (!stopped.ok) expect(stopped.errors[0].code).toBe("cancelled");
+  });
 });
