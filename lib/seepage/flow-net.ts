@@ -10,6 +10,11 @@ import type { FlowState } from "./free-surface";
 import { round, sig, type Field } from "./results";
 import type { FlowNet, Point, TriMesh } from "./types";
 
+/** Most flow channels drawn: beyond this a drawing is a smear, whatever the cells' shape. */
+export const MAX_CHANNELS = 40;
+/** Fewest channels drawn, so a net always shows how the water moves. */
+export const MIN_DRAWN = 4;
+
 export function buildFlowNet(
   field: Field,
   bc: Boundary,
@@ -27,24 +32,34 @@ export function buildFlowNet(
     if (nodal[v] < 0) hOut = Math.min(hOut, head[v]);
   }
   const deltaH = Number.isFinite(hIn) && Number.isFinite(hOut) ? Math.max(0, hIn - hOut) : 0;
-  const wetArea = new Float64Array(materials.length);
-  for (let e = 0; e < material.length; e++)
-    if (material[e] >= 0) wetArea[material[e]] += area(mesh, e) * state.relative[e];
+  // The reference k is that of the material through which most water moves (Σ area·|v|).
+  const carried = new Float64Array(materials.length);
+  for (let e = 0; e < material.length; e++) {
+    if (material[e] < 0) continue;
+    const m = materials[material[e]];
+    const [gx, gy] = elementGradient(mesh, head, e);
+    carried[material[e]] += area(mesh, e) * state.relative[e] * Math.hypot(m.kx * gx, m.ky * gy);
+  }
   let dominant = 0;
-  for (let m = 1; m < materials.length; m++) if (wetArea[m] > wetArea[dominant]) dominant = m;
+  for (let m = 1; m < materials.length; m++) if (carried[m] > carried[dominant]) dominant = m;
   const kRef = Math.sqrt(materials[dominant].kx * materials[dominant].ky);
-  const flowChannels = deltaH > 0 && kRef > 0 ? Math.max(1, Math.round((q * headDrops) / (kRef * deltaH))) : 0;
+  const square = deltaH > 0 && kRef > 0 ? Math.round((q * headDrops) / (kRef * deltaH)) : 0;
+  const flowChannels = Math.min(MAX_CHANNELS, Math.max(deltaH > 0 && kRef > 0 ? 1 : 0, square));
   const equipotentials: FlowNet["equipotentials"] = [];
   for (let k = 1; k < headDrops && deltaH > 0; k++) {
     const level = hIn - (k * deltaH) / headDrops;
     equipotentials.push({ head: sig(level), lines: contour(field, level) });
   }
-  const flowLines = flowChannels > 1 ? traceFlowLines(field, bc, state, nodal, flowChannels) : [];
+  // Where cells cannot be square (a zoned section whose water moves mostly through one zone), the
+  // lines still split the flow equally, into at least MIN_DRAWN channels.
+  const drawnChannels = deltaH > 0 && q > 0 ? Math.max(MIN_DRAWN, flowChannels) : 0;
+  const flowLines = drawnChannels > 1 ? traceFlowLines(field, bc, state, nodal, drawnChannels) : [];
   return {
     headDrops,
     deltaH: sig(deltaH),
     kRef: sig(kRef),
     flowChannels,
+    drawnChannels,
     qFlowNet: deltaH > 0 ? sig((kRef * deltaH * flowChannels) / headDrops) : 0,
     equipotentials,
     flowLines,

@@ -77,7 +77,10 @@ export function solveUnconfined(
   const relative = new Float64Array(ne).fill(1);
   for (let e = 0; e < ne; e++) if (!pervious[e]) relative[e] = 0;
 
-  const dh = Math.max(hMax - hMin, 1e-9);
+  // Heads can fall to the lowest seepage face, so that sets the scale when one pool drives the flow.
+  let faceLow = hMin;
+  for (let v = 0; v < n; v++) if (bc.kind[v] === FACE) faceLow = Math.min(faceLow, mesh.y[v]);
+  const dh = Math.max(hMax - Math.min(hMin, faceLow), 1e-9);
   const reaction = new Float64Array(n);
   const previous = new Float64Array(n);
   let solverIterations = 0;
@@ -98,7 +101,9 @@ export function solveUnconfined(
     reactions(pattern, values, head, fixed, reaction);
     const scale = totalFlow(reaction, fixed) || 1e-300;
     for (let v = 0; v < n; v++) {
-      if (bc.kind[v] !== FACE || switches[v] > 8) continue;
+      // A drain, like a seepage face, takes water but never gives it: a drain node that would feed
+      // water into dry soil is released until the soil around it saturates.
+      if ((bc.kind[v] !== FACE && bc.kind[v] !== DRAIN) || switches[v] > 8) continue;
       if (fixed[v] && reaction[v] > 1e-9 * scale) {
         fixed[v] = 0;
         switches[v]++;

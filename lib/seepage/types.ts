@@ -92,10 +92,12 @@ export interface FlowNet {
   headDrops: number;
   /** Total head lost across the section (m): highest minus lowest prescribed head. */
   deltaH: number;
-  /** √(kh·kv) of the material that carries most of the wet area (m/s). */
+  /** √(kh·kv) of the material through which most water moves (m/s). */
   kRef: number;
-  /** Whole flow channels whose cells come nearest to square: round(q·Nd / (kRef·ΔH)). */
+  /** Whole flow channels whose cells come nearest to square: round(q·Nd / (kRef·ΔH)), at most 40. */
   flowChannels: number;
+  /** Channels the flow lines split the flow into: flowChannels, but at least 4. */
+  drawnChannels: number;
   /** The practitioner's estimate kRef·ΔH·Nf/Nd (m³/s per metre). */
   qFlowNet: number;
   equipotentials: { head: number; lines: Point[][] }[];
