@@ -22,6 +22,8 @@ export function buildFlowNet(
   nodal: Float64Array,
   q: number,
   headDrops: number,
+  /** Length of a tracing step (m): a third of the element size reads smoothly. */
+  step: number,
 ): FlowNet {
   const { mesh, head, material, materials } = field;
   let hIn = -Infinity;
@@ -53,7 +55,7 @@ export function buildFlowNet(
   // Where cells cannot be square (a zoned section whose water moves mostly through one zone), the
   // lines still split the flow equally, into at least MIN_DRAWN channels.
   const drawnChannels = deltaH > 0 && q > 0 ? Math.max(MIN_DRAWN, flowChannels) : 0;
-  const flowLines = drawnChannels > 1 ? traceFlowLines(field, bc, state, nodal, drawnChannels) : [];
+  const flowLines = drawnChannels > 1 ? traceFlowLines(field, bc, state, nodal, drawnChannels, step) : [];
   return {
     headDrops,
     deltaH: sig(deltaH),
@@ -141,6 +143,7 @@ function traceFlowLines(
   state: FlowState,
   nodal: Float64Array,
   channels: number,
+  step: number,
 ): Point[][] {
   const { mesh } = field;
   const entering = (v: number) => state.fixed[v] === 1 && nodal[v] > 0;
@@ -167,7 +170,11 @@ function traceFlowLines(
   let total = 0;
   for (const list of chains) for (const ed of list) total += edgeShare(ed);
   if (total <= 0) return [];
-  const neighbours = adjacency(mesh);
+  const velocity = nodalVelocity(field, state);
+  let x0 = Infinity;
+  let x1 = -Infinity;
+  for (const v of mesh.x) [x0, x1] = [Math.min(x0, v), Math.max(x1, v)];
+  const maxSteps = Math.ceil((20 * (x1 - x0)) / step);
   const lines: Point[][] = [];
   let cumulative = 0;
   let j = 1;
@@ -180,7 +187,7 @@ function traceFlowLines(
           mesh.x[ed.a] + t * (mesh.x[ed.b] - mesh.x[ed.a]),
           mesh.y[ed.a] + t * (mesh.y[ed.b] - mesh.y[ed.a]),
         ];
-        lines.push(trace(field, state, neighbours, ed.element, start));
+        lines.push(trace(field, velocity, start, step, maxSteps));
         j++;
       }
       cumulative += share;
@@ -188,60 +195,68 @@ function traceFlowLines(
   return lines;
 }
 
-function adjacency(mesh: TriMesh): Int32Array {
-  const n = mesh.x.length;
-  const ne = mesh.region.length;
-  const out = new Int32Array(ne * 3).fill(-1);
-  const seen = new Map<number, number>();
-  for (let e = 0; e < ne; e++)
+/** Darcy velocity at each node (m/s): the area-weighted mean of the elements' v = −K·∇h around it. */
+function nodalVelocity(field: Field, state: FlowState): Float64Array {
+  const { mesh, head, material, materials } = field;
+  const v = new Float64Array(mesh.x.length * 2);
+  const w = new Float64Array(mesh.x.length);
+  for (let e = 0; e < material.length; e++) {
+    if (material[e] < 0) continue;
+    const m = materials[material[e]];
+    const [gx, gy] = elementGradient(mesh, head, e);
+    const a = area(mesh, e);
     for (let s = 0; s < 3; s++) {
-      const a = mesh.tri[3 * e + s];
-      const b = mesh.tri[3 * e + ((s + 1) % 3)];
-      const key = Math.min(a, b) * n + Math.max(a, b);
-      const other = seen.get(key);
-      if (other === undefined) seen.set(key, 3 * e + s);
-      else {
-        out[3 * e + s] = Math.floor(other / 3);
-        out[other] = e;
-      }
+      const n = mesh.tri[3 * e + s];
+      v[2 * n] -= a * m.kx * state.relative[e] * gx;
+      v[2 * n + 1] -= a * m.ky * state.relative[e] * gy;
+      w[n] += a;
     }
-  return out;
+  }
+  for (let n = 0; n < w.length; n++)
+    if (w[n] > 0) {
+      v[2 * n] /= w[n];
+      v[2 * n + 1] /= w[n];
+    }
+  return v;
 }
 
-/** Follows the element velocity from `start` in element `e` until the line leaves the pervious regions or stalls. */
-function trace(field: Field, state: FlowState, neighbours: Int32Array, e0: number, start: Point): Point[] {
-  const { mesh, head, material, materials } = field;
-  const line: Point[] = [[round(start[0]), round(start[1])]];
-  let e = e0;
-  let [x, y] = start;
-  let from = -1;
-  for (let step = 0; step < 4 * material.length && e >= 0 && material[e] >= 0; step++) {
-    const [gx, gy] = elementGradient(mesh, head, e);
-    const m = materials[material[e]];
-    const vx = -m.kx * state.relative[e] * gx;
-    const vy = -m.ky * state.relative[e] * gy;
-    if (vx === 0 && vy === 0) break;
-    // Leave through the edge the ray (x, y) + t·v meets first, other than the one just crossed.
-    let best = Infinity;
-    let side = -1;
+/**
+ * Follows the velocity, interpolated linearly from the nodes, in steps of `step` metres (midpoint
+ * rule on the direction) until the line leaves the pervious regions, stalls or turns back.
+ */
+function trace(field: Field, velocity: Float64Array, start: Point, step: number, maxSteps: number): Point[] {
+  const { mesh, locator } = field;
+  const dirAt = (x: number, y: number): [number, number] | null => {
+    const hit = locator.find(x, y);
+    if (!hit) return null;
+    let vx = 0;
+    let vy = 0;
     for (let s = 0; s < 3; s++) {
-      if (neighbours[3 * e + s] === from && from >= 0) continue;
-      const a = mesh.tri[3 * e + s];
-      const b = mesh.tri[3 * e + ((s + 1) % 3)];
-      const ex = mesh.x[b] - mesh.x[a];
-      const ey = mesh.y[b] - mesh.y[a];
-      const den = vx * ey - vy * ex;
-      if (den === 0) continue;
-      const t = ((mesh.x[a] - x) * ey - (mesh.y[a] - y) * ex) / den;
-      const u = ((mesh.x[a] - x) * vy - (mesh.y[a] - y) * vx) / den;
-      if (t > 1e-12 && u >= -1e-9 && u <= 1 + 1e-9 && t < best) [best, side] = [t, s];
+      const n = mesh.tri[3 * hit.element + s];
+      vx += hit.w[s] * velocity[2 * n];
+      vy += hit.w[s] * velocity[2 * n + 1];
     }
-    if (side < 0) break;
-    x += best * vx;
-    y += best * vy;
+    const speed = Math.hypot(vx, vy);
+    return speed > 0 ? [vx / speed, vy / speed] : null;
+  };
+  const line: Point[] = [[round(start[0]), round(start[1])]];
+  let [x, y] = start;
+  let last: [number, number] | null = null;
+  for (let i = 0; i < maxSteps; i++) {
+    const d1 = dirAt(x, y);
+    if (!d1) break;
+    const d2 = dirAt(x + 0.5 * step * d1[0], y + 0.5 * step * d1[1]) ?? d1;
+    // Converging flow (into a drain, onto an exit) shows as the direction turning back on itself.
+    if (last && d2[0] * last[0] + d2[1] * last[1] < -0.5) break;
+    const nx = x + step * d2[0];
+    const ny = y + step * d2[1];
+    if (!locator.find(nx, ny)) {
+      line.push([round(nx), round(ny)]);
+      break;
+    }
+    [x, y] = [nx, ny];
+    last = d2;
     line.push([round(x), round(y)]);
-    from = e;
-    e = neighbours[3 * e + side];
   }
   return line;
 }

@@ -8,7 +8,7 @@ import Constrainautor from "@kninnug/constrainautor";
 import Delaunator from "delaunator";
 import { bounds, insidePolygon, signedArea } from "./geometry";
 import { fmt, issue } from "./issues";
-import { buildPslg } from "./pslg";
+import { buildPslg, type Pslg } from "./pslg";
 import type { Point, SeepageIssue, TriMesh } from "./types";
 
 export interface MeshRequest {
@@ -65,42 +65,82 @@ export function buildMesh(req: MeshRequest): MeshOutcome {
       ],
     };
   }
-  return { ok: true, mesh: keepRegionTriangles(del.triangles, g.px, g.py, req.polygons) };
+  return { ok: true, mesh: keepRegionTriangles(del, g, req.polygons) };
 }
 
-/** Keeps the triangles inside a region, counter-clockwise, and renumbers the nodes they use. */
-function keepRegionTriangles(triangles: Uint32Array, px: number[], py: number[], polygons: Point[][]): TriMesh {
-  const boxes = polygons.map((p) => bounds([p]));
-  const kept: number[] = [];
-  const region: number[] = [];
-  for (let t = 0; t < triangles.length; t += 3) {
-    const a = triangles[t];
-    const b = triangles[t + 1];
-    const c = triangles[t + 2];
-    const area = (px[b] - px[a]) * (py[c] - py[a]) - (px[c] - px[a]) * (py[b] - py[a]);
+/**
+ * Keeps the triangles inside a region, counter-clockwise, and renumbers the nodes they use.
+ * Triangles joined across unconstrained edges lie in one region, so one centroid test per such
+ * patch places them all (a survey outline of thousands of points stays quick).
+ */
+function keepRegionTriangles(del: Delaunator<ArrayLike<number>>, g: Pslg, polygons: Point[][]): TriMesh {
+  const { triangles, halfedges } = del;
+  const { px, py } = g;
+  const np = px.length;
+  const constrained = new Set<number>();
+  for (const [a, b] of g.edges) constrained.add(Math.min(a, b) * np + Math.max(a, b));
+  const nt = triangles.length / 3;
+  const signed = new Float64Array(nt);
+  const flat = new Uint8Array(nt);
+  for (let t = 0; t < nt; t++) {
+    const [a, b, c] = [triangles[3 * t], triangles[3 * t + 1], triangles[3 * t + 2]];
+    signed[t] = (px[b] - px[a]) * (py[c] - py[a]) - (px[c] - px[a]) * (py[b] - py[a]);
     // Three nearly collinear points (a flat triangle along a straight outline) carry no area: drop them.
     const longest = Math.max(
       (px[b] - px[a]) ** 2 + (py[b] - py[a]) ** 2,
       (px[c] - px[b]) ** 2 + (py[c] - py[b]) ** 2,
       (px[a] - px[c]) ** 2 + (py[a] - py[c]) ** 2,
     );
-    if (Math.abs(area) <= 1e-9 * longest) continue;
+    flat[t] = Math.abs(signed[t]) <= 1e-9 * longest ? 1 : 0;
+  }
+  const patch = new Int32Array(nt).fill(-1);
+  const regionOfPatch: number[] = [];
+  const stack: number[] = [];
+  for (let seed = 0; seed < nt; seed++) {
+    if (patch[seed] >= 0) continue;
+    const id = regionOfPatch.length;
+    patch[seed] = id;
+    stack.push(seed);
+    let best = -1;
+    while (stack.length) {
+      const t = stack.pop() as number;
+      if (!flat[t] && (best < 0 || Math.abs(signed[t]) > Math.abs(signed[best]))) best = t;
+      for (let s = 0; s < 3; s++) {
+        const h = halfedges[3 * t + s];
+        if (h < 0) continue;
+        const other = Math.floor(h / 3);
+        if (patch[other] >= 0) continue;
+        const a = triangles[3 * t + s];
+        const b = triangles[3 * t + ((s + 1) % 3)];
+        if (constrained.has(Math.min(a, b) * np + Math.max(a, b))) continue;
+        patch[other] = id;
+        stack.push(other);
+      }
+    }
+    regionOfPatch.push(best < 0 ? -1 : regionAt(best));
+  }
+  function regionAt(t: number): number {
+    const [a, b, c] = [triangles[3 * t], triangles[3 * t + 1], triangles[3 * t + 2]];
     const cx = (px[a] + px[b] + px[c]) / 3;
     const cy = (py[a] + py[b] + py[c]) / 3;
-    const r = boxes.findIndex(
-      (bx, i) => cx >= bx.x0 && cx <= bx.x1 && cy >= bx.y0 && cy <= bx.y1 && insidePolygon(cx, cy, polygons[i]),
-    );
-    if (r < 0) continue;
-    if (area > 0) kept.push(a, b, c);
+    return polygons.findIndex((poly) => insidePolygon(cx, cy, poly));
+  }
+  const kept: number[] = [];
+  const region: number[] = [];
+  for (let t = 0; t < nt; t++) {
+    const r = regionOfPatch[patch[t]];
+    if (r < 0 || flat[t]) continue;
+    const [a, b, c] = [triangles[3 * t], triangles[3 * t + 1], triangles[3 * t + 2]];
+    if (signed[t] > 0) kept.push(a, b, c);
     else kept.push(a, c, b);
     region.push(r);
   }
-  const index = new Int32Array(px.length).fill(-1);
+  const index = new Int32Array(np).fill(-1);
   let n = 0;
   for (const v of kept) if (index[v] < 0) index[v] = n++;
   const x = new Float64Array(n);
   const y = new Float64Array(n);
-  for (let v = 0; v < px.length; v++)
+  for (let v = 0; v < np; v++)
     if (index[v] >= 0) {
       x[index[v]] = px[v];
       y[index[v]] = py[v];

@@ -4,7 +4,7 @@
  * pieces no longer than the mesh size, plus a triangular lattice of interior points in each
  * pervious region kept clear of the edges. Coordinates in m.
  */
-import { crossing, insidePolygon, segmentDistance } from "./geometry";
+import { crossing, segmentDistance } from "./geometry";
 import type { Point } from "./types";
 
 export interface PslgInput {
@@ -174,16 +174,24 @@ function addLattice(input: PslgInput, points: PointSet, grid: SegmentGrid): void
       y0 = Math.min(y0, y);
       y1 = Math.max(y1, y);
     }
-    // A lattice anchored at the origin, so neighbouring regions share one pattern.
+    // A lattice anchored at the origin, so neighbouring regions share one pattern. Each row is
+    // cut by the outline once (even–odd crossings), not tested point by point.
     for (let j = Math.ceil(y0 / dy); j * dy <= y1; j++) {
       const y = j * dy;
       const shift = (Math.abs(j) % 2) * 0.5 * h;
-      for (let i = Math.ceil((x0 - shift) / h); i * h + shift <= x1; i++) {
-        const x = i * h + shift;
-        if (!insidePolygon(x, y, poly)) continue;
-        if (grid.near(x, y, 0.45 * h)) continue;
-        points.add(x, y);
+      const cuts: number[] = [];
+      for (let i = 0, k = poly.length - 1; i < poly.length; k = i++) {
+        const [xi, yi] = poly[i];
+        const [xk, yk] = poly[k];
+        if (yi > y !== yk > y) cuts.push(((xk - xi) * (y - yi)) / (yk - yi) + xi);
       }
+      cuts.sort((a, b) => a - b);
+      for (let c = 0; c + 1 < cuts.length; c += 2)
+        for (let i = Math.ceil((cuts[c] - shift) / h); i * h + shift < cuts[c + 1]; i++) {
+          const x = i * h + shift;
+          if (x <= cuts[c] || grid.near(x, y, 0.45 * h)) continue;
+          points.add(x, y);
+        }
     }
   });
 }

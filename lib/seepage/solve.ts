@@ -123,7 +123,7 @@ export function runSeepage(doc: unknown, options: RunOptions = {}): SeepageRun {
     }),
     exitGradients: exits,
     uplift: upliftUnder(field, bc.boundary, mesh.region),
-    flowNet: buildFlowNet(field, bc.boundary, state, nodal, q, problem.headDrops),
+    flowNet: buildFlowNet(field, bc.boundary, state, nodal, q, problem.headDrops, problem.meshSize / 3),
     mesh: { nodes: countActive(mesh, pervious), elements: pervious.reduce((s, v) => s + v, 0) },
     iterations: { freeSurface: state.rounds, solver: state.solverIterations, converged: state.converged },
     warnings,

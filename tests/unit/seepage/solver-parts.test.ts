@@ -148,4 +148,23 @@ describe("seepage solver parts", () => {
     expect(stopped.ok).toBe(false);
     if (!stopped.ok) expect(stopped.errors[0].code).toBe("cancelled");
   });
+
+  test("the flow net of a dam with a toe filter: lines run from the pool face to the filter; equal head drops", () => {
+    const run = runSeepage(toeDrainDam(1e-6, 0.5));
+    if (!run.ok) throw new Error(JSON.stringify(run.errors));
+    const net = run.solution.flowNet;
+    expect(net.flowLines.length).toBe(net.drawnChannels - 1);
+    for (const line of net.flowLines) {
+      const [x0, y0] = line[0];
+      const [x1, y1] = line[line.length - 1];
+      // Starts on the wetted upstream face (x = y/2 for the 0.5H:1V face), ends within a metre of the filter.
+      expect(Math.abs(x0 - y0 / 2)).toBeLessThan(0.05);
+      expect(y0).toBeLessThanOrEqual(19 + 1e-6);
+      expect(x1).toBeGreaterThan(25);
+      expect(y1).toBeLessThan(1);
+    }
+    const heads = net.equipotentials.map((e) => e.head);
+    // Heads are reported to six figures.
+    for (let i = 1; i < heads.length; i++) expect(heads[i - 1] - heads[i]).toBeCloseTo(net.deltaH / net.headDrops, 3);
+  });
 });
