@@ -40,6 +40,8 @@ export interface FlowState {
   /** Saturated share of each element's conductivity used last. */
   relative: Float64Array;
   rounds: number;
+  /** Largest head change in the last round (m): how far from settled an unconverged run stopped. */
+  lastChange: number;
   solverIterations: number;
   converged: boolean;
 }
@@ -86,6 +88,7 @@ export function solveUnconfined(
   let solverIterations = 0;
   let rounds = 0;
   let converged = false;
+  let headMoved = 0;
   const switches = new Uint16Array(n);
   let relax = RELAX_START;
   let lastFlow = 0;
@@ -141,6 +144,7 @@ export function solveUnconfined(
     for (let v = 0; v < n; v++) if (!fixed[v]) dHead = Math.max(dHead, Math.abs(head[v] - previous[v]));
     // A few elements astride the phreatic surface can keep trading small shares long after the
     // heads and the flow have settled; three quiet rounds in a row end the iteration too.
+    headMoved = dHead;
     const dFlow = Math.abs(scale - lastFlow) / scale;
     lastFlow = scale;
     settled = changed === 0 && dHead < SETTLED_TOL * dh && dFlow < SETTLED_TOL ? settled + 1 : 0;
@@ -155,7 +159,7 @@ export function solveUnconfined(
   assemble(pattern, ke, relative, values);
   solverIterations += solveMasked(pattern, values, head, fixed, FINAL_TOL).iterations;
   for (let v = 0; v < n; v++) if (bc.kind[v] === INACTIVE) head[v] = NaN;
-  return { pattern, values, head, fixed, relative, rounds, solverIterations, converged };
+  return { pattern, values, head, fixed, relative, rounds, lastChange: headMoved, solverIterations, converged };
 }
 
 function assemble(p: CsrPattern, ke: Float64Array, relative: Float64Array, values: Float64Array): void {

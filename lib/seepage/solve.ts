@@ -90,7 +90,10 @@ export function runSeepage(doc: unknown, options: RunOptions = {}): SeepageRun {
     warnings.push({
       code: "free-surface-not-converged",
       path: "seepage",
-      message: `The phreatic surface did not settle in ${state.rounds} rounds; try a finer or coarser meshSize.`,
+      message:
+        `The phreatic surface did not settle in ${state.rounds} rounds: heads still moved by up to ` +
+        `${state.lastChange.toPrecision(2)} m in the last one. This happens where water leaves a much less ` +
+        `pervious zone into a dry, much more pervious one; try another meshSize and judge the result.`,
     });
   if (q > 0 && Math.abs(qIn - qOut) > 0.01 * q)
     warnings.push({
