@@ -94,8 +94,9 @@ export function FlowNetView({ materials, regions, solution, width = 960, height 
         {solution.qTotal !== null ? <span> · {sci(solution.qTotal)} m³/s along the crest</span> : null}
         <br />
         <span data-testid="flow-net-check">
-          Flow net: Nf = {net.flowChannels} channels, Nd = {net.headDrops} drops, ΔH = {net.deltaH.toFixed(2)} m, k ={" "}
-          {sci(net.kRef)} m/s → k·ΔH·Nf/Nd = {sci(net.qFlowNet)} m³/s per metre, beside the computed q.
+          Flow net: Nf = {net.flowChannels} channels, Nd = {net.headDrops} drops, ΔH = {net.deltaH.toFixed(2)} m, k of{" "}
+          {net.kRefMaterial} = {sci(net.kRef)} m/s → k·ΔH·Nf/Nd = {sci(net.qFlowNet)} m³/s per metre, beside the
+          computed q (a hand check for one material: in a zoned section the cells are square only in that zone).
         </span>
       </figcaption>
       <Caution compact />

@@ -60,6 +60,7 @@ export function buildFlowNet(
     headDrops,
     deltaH: sig(deltaH),
     kRef: sig(kRef),
+    kRefMaterial: materials[dominant].id,
     flowChannels,
     drawnChannels,
     qFlowNet: deltaH > 0 ? sig((kRef * deltaH * flowChannels) / headDrops) : 0,

@@ -94,6 +94,8 @@ export interface FlowNet {
   deltaH: number;
   /** √(kh·kv) of the material through which most water moves (m/s). */
   kRef: number;
+  /** The material kRef belongs to. */
+  kRefMaterial: string;
   /** Whole flow channels whose cells come nearest to square: round(q·Nd / (kRef·ΔH)), at most 40. */
   flowChannels: number;
   /** Channels the flow lines split the flow into: flowChannels, but at least 4. */

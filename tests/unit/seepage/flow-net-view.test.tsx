@@ -34,6 +34,9 @@ describe("FlowNetView", () => {
     expect(html).toContain(`Nf = ${s.flowNet.flowChannels}`);
     expect(html).toContain(`Nd = ${s.flowNet.headDrops}`);
     expect(html).toContain("k·ΔH·Nf/Nd");
+    // The zoned dam's water moves mostly through the gravelly shells: the hand check says whose k it uses.
+    expect(s.flowNet.kRefMaterial).toBe("shell");
+    expect(html).toContain("k of shell");
     expect(html).toContain(CAUTION_TEXT.slice(0, 40));
   });
 });
