@@ -1,0 +1,105 @@
+import type { SeepageSolution } from "@/lib/seepage";
+import { materialPalette } from "@/lib/sections/material-palette";
+import { boxOfPoints, fitView, toScreen, type RunView } from "@/lib/runs/view-fit";
+import { Caution } from "@/components/ui/caution";
+
+/** Water and net colours: a blue surface, a darker blue for flow lines, warm grey for head contours. */
+const PHREATIC = "#1f5f99";
+const FLOW_LINE = "#2a5d8a";
+const EQUIPOTENTIAL = "#8a6d3b";
+const EXIT = "#a3282c";
+
+export interface FlowNetViewProps {
+  materials: { id: string; name?: string; color?: string }[];
+  regions: { material: string; points: [number, number][] }[];
+  /** The seepage solution as the command line prints it. */
+  solution: SeepageSolution;
+  width?: number;
+  height?: number;
+}
+
+const sci = (v: number) => v.toExponential(2).replace("e", " × 10^").replace("^+", "^");
+
+function path(view: RunView, line: readonly (readonly [number, number])[]): string {
+  return line
+    .map(([x, y], i) => {
+      const [sx, sy] = toScreen(view, x, y);
+      return `${i === 0 ? "M" : "L"}${sx.toFixed(1)},${sy.toFixed(1)}`;
+    })
+    .join(" ");
+}
+
+/**
+ * A read-only drawing of a seepage solution as a flow net is drawn by hand: equipotentials at
+ * equal head drops, flow lines at equal flow between them, the phreatic surface, the exits with
+ * their gradients and piping factors, and q beside the practitioner's k·ΔH·Nf/Nd.
+ */
+export function FlowNetView({ materials, regions, solution, width = 960, height = 420 }: FlowNetViewProps) {
+  const box = boxOfPoints(regions.flatMap((r) => r.points));
+  if (!box) return null;
+  const view = fitView(box, width, height);
+  const fills = new Map(materialPalette(materials).map((m) => [m.key, m.color]));
+  const net = solution.flowNet;
+  return (
+    <figure className="space-y-2" data-testid="flow-net-view">
+      <svg
+        viewBox={`0 0 ${width} ${height}`}
+        width="100%"
+        role="img"
+        aria-label="Flow net of the section"
+        className="rounded-md border border-rule bg-paper-raised"
+      >
+        <g data-layer="regions">
+          {regions.map((r, i) => (
+            <path
+              key={i}
+              d={`${path(view, r.points)} Z`}
+              fill={fills.get(r.material) ?? "#d9d3c7"}
+              fillOpacity={0.45}
+              stroke="#7b756c"
+              strokeWidth={1}
+            />
+          ))}
+        </g>
+        <g data-layer="equipotentials" stroke={EQUIPOTENTIAL} strokeWidth={1} strokeDasharray="5 3" fill="none">
+          {net.equipotentials.flatMap((eq, i) =>
+            eq.lines.map((line, j) => <path key={`${i}-${j}`} d={path(view, line)} data-head={eq.head} />),
+          )}
+        </g>
+        <g data-layer="flow-lines" stroke={FLOW_LINE} strokeWidth={1.2} fill="none">
+          {net.flowLines.map((line, i) => (
+            <path key={i} d={path(view, line)} />
+          ))}
+        </g>
+        <path data-layer="phreatic" d={path(view, solution.phreatic)} stroke={PHREATIC} strokeWidth={2.2} fill="none" />
+        <g data-layer="exits">
+          {solution.exitGradients.map((g, i) => {
+            const [sx, sy] = toScreen(view, g.x, g.y);
+            const factor = g.pipingFactor === null ? "no γsat" : `F = ${g.pipingFactor.toFixed(2)}`;
+            return (
+              <g key={i} data-exit={i} data-low={g.pipingFactor !== null && g.pipingFactor < 3 ? "yes" : "no"}>
+                <path d={`M${sx},${sy - 9} l-6,10 h12 Z`} fill={EXIT} />
+                <text x={sx + 8} y={sy - 10} fontSize={11} fill="#1f1d1a">
+                  {`i = ${g.i.toFixed(3)}, ${factor}`}
+                </text>
+              </g>
+            );
+          })}
+        </g>
+      </svg>
+      <figcaption className="text-sm text-ink-soft">
+        <span data-testid="flow-net-q">
+          q = {sci(solution.q)} m³/s per metre (in {sci(solution.qIn)}, out {sci(solution.qOut)})
+        </span>
+        {solution.qTotal !== null ? <span> · {sci(solution.qTotal)} m³/s along the crest</span> : null}
+        <br />
+        <span data-testid="flow-net-check">
+          Flow net: Nf = {net.flowChannels} channels, Nd = {net.headDrops} drops, ΔH = {net.deltaH.toFixed(2)} m, k of{" "}
+          {net.kRefMaterial} = {sci(net.kRef)} m/s → k·ΔH·Nf/Nd = {sci(net.qFlowNet)} m³/s per metre, beside the
+          computed q (a hand check for one material: in a zoned section the cells are square only in that zone).
+        </span>
+      </figcaption>
+      <Caution compact />
+    </figure>
+  );
+}
