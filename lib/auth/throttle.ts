@@ -1,29 +1,44 @@
 /**
- * Slows down guessing of one account's password. Keyed by the e-mail typed, whether or not such
- * a user exists, so neither the delay nor the lock tells an attacker who has an account.
+ * Slows down and stops password guessing. Every attempt is counted (db/queries/sign-in-counters.ts)
+ * before its password is checked, under three keys:
+ * - the pair (client address, e-mail): locked after LOCK_AFTER failures, so one client guessing one
+ *   account is stopped without checking more passwords;
+ * - the client address: locked after ADDRESS_LOCK_AFTER failures, whatever e-mails it tries;
+ * - the e-mail, from every address: never locked, since a stranger could then lock anyone out, but
+ *   past FREE_ATTEMPTS every attempt on it waits longer (the slow path the owner can still sign in by).
+ * Keyed by the e-mail typed, whether or not such a user exists, so no answer tells who has an account.
  */
 export const FREE_ATTEMPTS = 3;
 export const LOCK_AFTER = 8;
+export const ADDRESS_LOCK_AFTER = 100;
+/** A key's count starts again once it has had no failure for this long; a lock lasts as long. */
 export const LOCK_MINUTES = 15;
-/** Failures older than this no longer count. */
-export const FORGET_AFTER_MINUTES = 60;
+export const MAX_DELAY_MS = 3000;
+
+export interface AttemptKeys {
+  pair: string;
+  address: string;
+  account: string;
+}
+
+export function attemptKeys(email: string, address: string): AttemptKeys {
+  return { pair: `pair:${address} ${email}`, address: `address:${address}`, account: `account:${email}` };
+}
 
 export interface ThrottleDecision {
   /** Refuse without checking the password. */
   locked: boolean;
-  /** Wait this long (ms) before answering, so scripted guessing gets slow. */
+  /** Wait this long (ms) before checking, so scripted guessing gets slow. */
   delayMs: number;
   /** Minutes until the lock lifts, for the message. */
   retryInMinutes: number;
 }
 
-export function decideThrottle(record: { failures: number; lastFailureAt: Date } | null, now: Date): ThrottleDecision {
-  if (!record) return { locked: false, delayMs: 0, retryInMinutes: 0 };
-  const minutesSince = (now.getTime() - record.lastFailureAt.getTime()) / 60000;
-  if (minutesSince > FORGET_AFTER_MINUTES) return { locked: false, delayMs: 0, retryInMinutes: 0 };
-  if (record.failures >= LOCK_AFTER && minutesSince < LOCK_MINUTES) {
-    return { locked: true, delayMs: 0, retryInMinutes: Math.ceil(LOCK_MINUTES - minutesSince) };
+/** Decides from each key's count, this attempt included. */
+export function decideThrottle(counts: { pair: number; address: number; account: number }): ThrottleDecision {
+  if (counts.pair > LOCK_AFTER || counts.address > ADDRESS_LOCK_AFTER) {
+    return { locked: true, delayMs: 0, retryInMinutes: LOCK_MINUTES };
   }
-  const extra = Math.max(0, record.failures - FREE_ATTEMPTS + 1);
-  return { locked: false, delayMs: Math.min(extra * 500, 3000), retryInMinutes: 0 };
+  const extra = Math.max(0, Math.max(counts.pair, counts.account) - FREE_ATTEMPTS);
+  return { locked: false, delayMs: Math.min(extra * 500, MAX_DELAY_MS), retryInMinutes: 0 };
 }
