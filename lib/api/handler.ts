@@ -2,6 +2,7 @@ import "server-only";
 import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
 import { ApiError } from "./errors";
+import { toId } from "./ids";
 import { isServiceDown, SERVICE_UNAVAILABLE } from "./service-down";
 import { MAX_JSON_BYTES, MAX_JSON_LABEL, readCappedText, refuseForeignOrigin, requireJsonContentType } from "./request-guards";
 
@@ -61,8 +62,8 @@ export async function parseJson<T>(request: Request, schema: ZodType<T>): Promis
 
 /** Parses a numeric route parameter such as a project id. */
 export function parseId(value: string, what: string): number {
-  const id = Number(value);
-  if (!Number.isInteger(id) || id <= 0) throw new ApiError(404, "not_found", `${what} was not found.`);
+  const id = toId(value);
+  if (id === null) throw new ApiError(404, "not_found", `${what} was not found.`);
   return id;
 }
 
