@@ -19,8 +19,14 @@ export function pagePolicy(nonce: string, dev: boolean): string {
   ].join("; ");
 }
 
-/** For everything that is not a page (API answers, files, static assets): nothing may run or frame it. */
+/** For API answers and downloads: nothing may run in them or frame them. */
 export const NON_PAGE_POLICY = "default-src 'none'; frame-ancestors 'none'";
+
+/**
+ * For the app's static files. A dedicated worker runs under the policy its own script arrives with, and
+ * the search workers load their chunks from the app itself, so scripts from 'self' must stay allowed.
+ */
+export const STATIC_POLICY = "default-src 'self'; object-src 'none'; base-uri 'none'; frame-ancestors 'none'";
 
 /** Sent on every response (next.config.ts). */
 export const COMMON_SECURITY_HEADERS = [
