@@ -184,6 +184,27 @@ describe("route × role matrix", () => {
     expect(Object.keys(MATRIX).filter((k) => !handlers.includes(k))).toEqual([]);
   });
 
+  test("every handler goes through apiRoute, the one place that refuses foreign origins (lib/api/handler.ts)", () => {
+    const unwrapped: string[] = [];
+    const walk = (dir: string) => {
+      for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
+        const full = path.join(dir, entry.name);
+        if (entry.isDirectory()) walk(full);
+        else if (entry.name === "route.ts") {
+          const source = fs.readFileSync(full, "utf8");
+          for (const m of source.matchAll(/export const (GET|POST|PUT|PATCH|DELETE)\s*=\s*(\w+)/g)) {
+            if (m[2] !== "apiRoute") unwrapped.push(`${m[1]} ${path.relative(API_DIR, full)}`);
+          }
+        }
+      }
+    };
+    walk(API_DIR);
+    expect(unwrapped).toEqual([]);
+    // The sign-in handler is next-auth's own; its POST calls the same check before handing over.
+    const auth = fs.readFileSync(path.join(API_DIR, "auth/[...nextauth]/route.ts"), "utf8");
+    expect(auth).toMatch(/refuseForeignOrigin\(request\)/);
+  });
+
   test("each role gets exactly what the permission matrix grants on every route, and never a 500", async () => {
     const wrong: string[] = [];
     let calls = 0;
