@@ -72,7 +72,9 @@ export async function fetchSessionState(
 /** Ends every session of the user: tokens carrying an older version are refused from now on. */
 export async function bumpSessionVersion(userId: number, db: Knex = getDb()): Promise<number> {
   return db.transaction(async (trx) => {
-    await trx("users").where({ id: userId }).update({ session_version: nextVersion(trx) });
+    await trx("users")
+      .where({ id: userId })
+      .update({ session_version: nextVersion(trx) });
     const row = await trx<UserRow>("users").where({ id: userId }).first("session_version");
     return row?.session_version ?? 0;
   });

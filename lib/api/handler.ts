@@ -4,7 +4,13 @@ import { ZodError, type ZodType } from "zod";
 import { ApiError } from "./errors";
 import { toId } from "./ids";
 import { isServiceDown, SERVICE_UNAVAILABLE } from "./service-down";
-import { MAX_JSON_BYTES, MAX_JSON_LABEL, readCappedText, refuseForeignOrigin, requireJsonContentType } from "./request-guards";
+import {
+  MAX_JSON_BYTES,
+  MAX_JSON_LABEL,
+  readCappedText,
+  refuseForeignOrigin,
+  requireJsonContentType,
+} from "./request-guards";
 
 export interface ErrorBody {
   error: { code: string; message: string; fields?: Record<string, string[]> };
