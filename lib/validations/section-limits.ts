@@ -39,7 +39,7 @@ export const sectionLimitsSchema = z
       ctx.addIssue({
         code: "custom",
         path: ["regions"],
-        message: `The regions have ${total} points together; at most ${SECTION_LIMITS.pointsInAllRegions} are accepted.`,
+        message: `The regions have ${total} points together; at most ${SECTION_LIMITS.pointsInAllRegions} are taken.`,
       });
     }
   });

@@ -11,7 +11,7 @@ async function count(table: string): Promise<number> {
 const sectionBody = (name: string, document: unknown) => JSON.stringify({ name, description: "", document });
 
 describe("request bodies are bounded (issue 12, items 3 and 4)", () => {
-  test("a 6 MiB JSON body gets 413 before it is parsed, with or without a Content-Length; nothing is written", async () => {
+  test("a 6 MiB JSON body gets 413 unparsed, with or without a Content-Length; nothing is written", async () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const { projectId, sectionId, version } = await demoProject(engineer);
     const before = await count("section_versions");
@@ -78,7 +78,7 @@ describe("cross-site requests (issue 12, item 5)", () => {
     expect(await count("sections")).toBe(before);
   });
 
-  test("a foreign Origin (a same-site page on another port included) gets 403; the app's own origin passes", async () => {
+  test("a foreign Origin (a same-site page on another port too) gets 403; the app's own passes", async () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const { projectId, document } = await demoProject(engineer);
     const before = await count("sections");
@@ -125,7 +125,7 @@ describe("cross-site requests (issue 12, item 5)", () => {
 });
 
 describe("security headers (issue 12, item 7)", () => {
-  test("pages, API answers and static files carry CSP with frame-ancestors 'none', nosniff, a referrer policy, DENY", async () => {
+  test("pages, API answers and static files carry CSP (frame-ancestors 'none'), nosniff, referrer, DENY", async () => {
     const client = new AppClient();
     const page = await client.request("/sign-in");
     const html = await page.text();

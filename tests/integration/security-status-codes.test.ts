@@ -9,7 +9,7 @@ async function count(table: string): Promise<number> {
 }
 
 describe("4xx where a 500 was answered (issue 12, item 8)", () => {
-  test("a section name equal to another under the database collation ('máin' and 'main') is 409, on create and rename", async () => {
+  test("a name equal to another under the collation ('máin', 'main') is 409, on create and rename", async () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const { projectId, document } = await demoProject(engineer);
     const create = (name: string) =>
