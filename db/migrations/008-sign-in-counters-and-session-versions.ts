@@ -11,6 +11,8 @@ export async function up(knex: Knex): Promise<void> {
     t.string("counter_key", 320).primary();
     t.integer("failures").unsigned().notNullable().defaultTo(0);
     t.timestamp("last_failure_at").notNullable().defaultTo(knex.fn.now());
+    // The next time a password may be checked for this key once it is on the slow path (UTC).
+    t.specificType("next_check_at", "DATETIME(3)").nullable();
   });
   await knex.schema.dropTableIfExists("sign_in_failures");
   await knex.schema.alterTable("users", (t) => {

@@ -29,6 +29,32 @@ export async function countSignInAttempt(
   });
 }
 
+/**
+ * Books the next password check of a key, `spacingMs` after the last one booked, and returns how long to
+ * wait for it (ms). A booking further ahead than `maxWaitMs` is not made: null, and the queue stays as it was.
+ */
+export async function bookCheckSlot(
+  key: string,
+  spacingMs: number,
+  maxWaitMs: number,
+  db: Knex = getDb(),
+): Promise<number | null> {
+  return db.transaction(async (trx) => {
+    const slot = "GREATEST(COALESCE(next_check_at, UTC_TIMESTAMP(3)), UTC_TIMESTAMP(3))";
+    const row = await trx("sign_in_counters")
+      .where({ counter_key: key })
+      .forUpdate()
+      .first(trx.raw(`TIMESTAMPDIFF(MICROSECOND, UTC_TIMESTAMP(3), ${slot}) AS ahead`));
+    const waitMs = Math.max(0, Number(row?.ahead ?? 0) / 1000);
+    if (waitMs > maxWaitMs) return null;
+    await trx.raw(
+      `UPDATE sign_in_counters SET next_check_at = ${slot} + INTERVAL ? MICROSECOND WHERE counter_key = ?`,
+      [spacingMs * 1000, key],
+    );
+    return waitMs;
+  });
+}
+
 /** A right password takes back its own attempt only: failures counted by other attempts stay. */
 export async function takeBackSignInAttempt(keys: string[], db: Knex = getDb()): Promise<void> {
   await db("sign_in_counters")

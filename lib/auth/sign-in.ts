@@ -1,13 +1,15 @@
 import "server-only";
 import { z } from "zod";
 import { fetchUserByEmail } from "@/db/queries/users";
-import { countSignInAttempt, takeBackSignInAttempt } from "@/db/queries/sign-in-counters";
+import { bookCheckSlot, countSignInAttempt, takeBackSignInAttempt } from "@/db/queries/sign-in-counters";
 import { DUMMY_HASH, verifyPassword } from "./password";
-import { attemptKeys, decideThrottle, LOCK_MINUTES } from "./throttle";
+import { attemptKeys, decideThrottle, LOCK_MINUTES, SLOW_PATH_MAX_WAIT_MS, SLOW_PATH_SPACING_MS } from "./throttle";
 import type { Role } from "../permissions";
 
 /** The one message for every failed sign-in: it never says whether the account exists. */
 export const SIGN_IN_FAILED = "The e-mail or password is not right.";
+
+const BUSY = "Sign-in for this e-mail is being tried very often just now. Try again in a minute.";
 
 export const credentialsSchema = z.object({
   email: z.string().trim().toLowerCase().email().max(254),
@@ -47,7 +49,13 @@ export async function authenticate(raw: unknown, clientAddress: string): Promise
   if (decision.locked) {
     throw new SignInError(`Too many failed sign-ins for this e-mail. Try again in ${decision.retryInMinutes} min.`);
   }
-  if (decision.delayMs) await sleep(decision.delayMs);
+  let waitMs = decision.delayMs;
+  if (decision.slowPath) {
+    const turn = await bookCheckSlot(keys.account, SLOW_PATH_SPACING_MS, SLOW_PATH_MAX_WAIT_MS);
+    if (turn === null) throw new SignInError(BUSY);
+    waitMs = Math.max(waitMs, turn);
+  }
+  if (waitMs) await sleep(waitMs);
 
   const user = await fetchUserByEmail(email);
   const ok = await verifyPassword(password, user?.password_hash ?? DUMMY_HASH);

@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { AppClient, signedIn } from "../support/http";
 import { getDb } from "@/db/index";
-import { LOCK_AFTER } from "@/lib/auth/throttle";
+import { LOCK_AFTER, SLOW_PATH_MAX_WAIT_MS, SLOW_PATH_SPACING_MS } from "@/lib/auth/throttle";
 
 /**
  * One sign-in attempt as a browser at `address` makes it (the address rides in X-Forwarded-For, as a
@@ -71,6 +71,26 @@ describe("sign-in lockout (issue 12, item 2)", () => {
       await forget(email);
     }
   }, 120_000);
+
+  test("guesses on one account from many addresses at once are checked one at a time; the overflow is turned away", async () => {
+    // Counters are keyed by the e-mail typed, so an account nobody has behaves as a real one does.
+    const email = "crowd-target@scarpline.test";
+    try {
+      await getDb()("sign_in_counters").insert({ counter_key: `account:${email}`, failures: LOCK_AFTER });
+      const answers = await Promise.all(
+        Array.from({ length: 20 }, (_, i) => attempt(email, `crowd-guess-${i}`, `198.18.0.${i + 1}`)),
+      );
+      const checked = answers.filter((a) => /e-mail or password is not right/.test(a.error));
+      const busy = answers.filter((a) => /being tried very often/.test(a.error));
+      expect(checked.length + busy.length).toBe(20);
+      // At most one check a second with a queue of ten seconds: about eleven are checked, the rest refused.
+      expect(checked.length).toBeLessThanOrEqual(SLOW_PATH_MAX_WAIT_MS / SLOW_PATH_SPACING_MS + 2);
+      expect(busy.length).toBeGreaterThan(0);
+    } finally {
+      await forget(email);
+      await getDb()("sign_in_counters").where("counter_key", "like", "address:198.18.0.%").delete();
+    }
+  }, 60_000);
 
   test("one client address trying many accounts is stopped, whatever the e-mails", async () => {
     const address = "192.0.2.99";

@@ -35,6 +35,9 @@ describe("decideThrottle(counts)", () => {
     const owner = at(1, 500, 1);
     expect(owner.locked).toBe(false);
     expect(owner.delayMs).toBe(MAX_DELAY_MS);
+    // Past the lock count, the account's passwords are checked one at a time, whoever sends them.
+    expect(owner.slowPath).toBe(true);
+    expect(at(LOCK_AFTER).slowPath).toBe(false);
   });
   test("one client address trying many accounts is locked", () => {
     expect(at(1, 1, ADDRESS_LOCK_AFTER).locked).toBe(false);
