@@ -72,7 +72,7 @@ describe("sign-in lockout (issue 12, item 2)", () => {
     }
   }, 120_000);
 
-  test("guesses on one account from many addresses are checked one at a time; the overflow is turned away", async () => {
+  test("guesses on one account from many addresses are checked one at a time; the overflow turned away", async () => {
     // Counters are keyed by the e-mail typed, so an account nobody has behaves as a real one does.
     const email = "crowd-target@scarpline.test";
     try {
