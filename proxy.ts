@@ -4,7 +4,7 @@ import { SERVICE_UNAVAILABLE } from "@/lib/api/service-down";
 import { pingDatabase } from "@/db/queries/health";
 
 // Pages that read the database answer 503 while it is out of reach, instead of rendering "not found".
-const PAGES_NEEDING_DB = /^\/(projects|account|admin)(\/|$)/;
+const PAGES_NEEDING_DB = /^\/($|(projects|account|admin)(\/|$))/;
 const PING_TTL_MS = 2000;
 let lastPing: { at: number; ok: boolean } | null = null;
 

@@ -76,9 +76,13 @@ describe("with the database down (issue 12, item 7)", () => {
   });
 
   test("a project page answers 503 'the service is unavailable', not 404", async () => {
-    const res = await fetch(`${url}/projects/1`, { redirect: "manual" });
-    expect(res.status).toBe(503);
-    expect(await res.text()).toMatch(/The service is unavailable/);
+    for (const page of ["/projects/1", "/projects/1/sections/1", "/projects", "/"]) {
+      const res = await fetch(`${url}${page}`, { redirect: "manual" });
+      expect(res.status, page).toBe(503);
+      expect(await res.text()).toMatch(/The service is unavailable/);
+    }
+    // The sign-in page itself still shows its form.
+    expect((await fetch(`${url}/sign-in`)).status).toBe(200);
   });
 
   test("an API call with a session answers 503 with the same words", async () => {
