@@ -47,7 +47,8 @@ export async function authenticate(raw: unknown, clientAddress: string): Promise
     account: counts[keys.account] ?? 1,
   });
   if (decision.locked) {
-    throw new SignInError(`Too many failed sign-ins for this e-mail. Try again in ${decision.retryInMinutes} min.`);
+    const what = decision.locked === "account" ? "for this e-mail" : "from this network";
+    throw new SignInError(`Too many failed sign-ins ${what}. Try again in ${decision.retryInMinutes} min.`);
   }
   let waitMs = decision.delayMs;
   if (decision.slowPath) {

@@ -31,8 +31,8 @@ export function attemptKeys(email: string, address: string): AttemptKeys {
 }
 
 export interface ThrottleDecision {
-  /** Refuse without checking the password. */
-  locked: boolean;
+  /** Refuse without checking the password: this e-mail from this client, or this client whatever the e-mail. */
+  locked: false | "account" | "address";
   /** Wait this long (ms) before checking, so scripted guessing gets slow. */
   delayMs: number;
   /** Minutes until the lock lifts, for the message. */
@@ -43,9 +43,10 @@ export interface ThrottleDecision {
 
 /** Decides from each key's count, this attempt included. */
 export function decideThrottle(counts: { pair: number; address: number; account: number }): ThrottleDecision {
-  if (counts.pair > LOCK_AFTER || counts.address > ADDRESS_LOCK_AFTER) {
-    return { locked: true, delayMs: 0, retryInMinutes: LOCK_MINUTES, slowPath: false };
+  if (counts.address > ADDRESS_LOCK_AFTER) {
+    return { locked: "address", delayMs: 0, retryInMinutes: LOCK_MINUTES, slowPath: false };
   }
+  if (counts.pair > LOCK_AFTER) return { locked: "account", delayMs: 0, retryInMinutes: LOCK_MINUTES, slowPath: false };
   const extra = Math.max(0, Math.max(counts.pair, counts.account) - FREE_ATTEMPTS);
   return {
     locked: false,
