@@ -1,5 +1,6 @@
+import http from "node:http";
 import { describe, expect, test } from "vitest";
-import { AppClient, signedIn } from "../support/http";
+import { AppClient, sessionCookie, signedIn } from "../support/http";
 import { demoProject } from "../support/demo";
 import { getDb } from "@/db/index";
 import type { SectionDocument } from "@/lib/stability";
@@ -8,36 +9,51 @@ async function count(table: string): Promise<number> {
   return Number((await getDb()(table).count({ n: "*" }).first())?.n);
 }
 
+/**
+ * PUTs a body on a connection of its own (the server answers 413 while the body is still arriving, and
+ * such a connection must not be handed to the next test's request), with or without a Content-Length.
+ */
+function send(
+  url: URL,
+  cookie: string,
+  body: string,
+  declareLength: boolean,
+): Promise<{ status: number; body: string }> {
+  return new Promise((resolve, reject) => {
+    const bytes = Buffer.from(body);
+    const headers: Record<string, string> = { "content-type": "application/json", cookie };
+    if (declareLength) headers["content-length"] = String(bytes.length);
+    const req = http.request(url, { method: "PUT", agent: false, headers }, (res) => {
+      let text = "";
+      res.setEncoding("utf8");
+      res.on("data", (d: string) => (text += d));
+      res.on("end", () => resolve({ status: res.statusCode ?? 0, body: text }));
+    });
+    // Writing the rest may fail once the server has answered and closed: the answer is what counts.
+    let answered = false;
+    req.on("response", () => (answered = true));
+    req.on("error", (err) => setTimeout(() => (answered ? undefined : reject(err)), 1000));
+    for (let i = 0; i < bytes.length; i += 256 * 1024) req.write(bytes.subarray(i, i + 256 * 1024));
+    req.end();
+  });
+}
+
 const sectionBody = (name: string, document: unknown) => JSON.stringify({ name, description: "", document });
 
 describe("request bodies are bounded (issue 12, items 3 and 4)", () => {
   test("a 6 MiB JSON body gets 413 unparsed, with or without a Content-Length; nothing is written", async () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const { projectId, sectionId, version } = await demoProject(engineer);
+    const cookie = await sessionCookie("engineer@scarpline.test");
     const before = await count("section_versions");
     const big = JSON.stringify({ baseVersion: version, document: { version: 1, pad: "x".repeat(6 * 1024 * 1024) } });
-    const declared = await engineer.request(`/api/projects/${projectId}/sections/${sectionId}`, {
-      method: "PUT",
-      headers: { "content-type": "application/json" },
-      body: big,
-    });
-    expect(declared.status).toBe(413);
-    expect((await declared.json()).error.message).toMatch(/2 MiB/);
+    const target = new URL(`/api/projects/${projectId}/sections/${sectionId}`, engineer.baseUrl);
 
-    // Streamed in chunks with no Content-Length: counted while it arrives.
-    const bytes = new TextEncoder().encode(big);
-    const stream = new ReadableStream<Uint8Array>({
-      start(controller) {
-        for (let i = 0; i < bytes.length; i += 256 * 1024) controller.enqueue(bytes.subarray(i, i + 256 * 1024));
-        controller.close();
-      },
-    });
-    const streamed = await engineer.request(`/api/projects/${projectId}/sections/${sectionId}`, {
-      method: "PUT",
-      headers: { "content-type": "application/json" },
-      body: stream,
-      duplex: "half",
-    } as RequestInit);
+    const declared = await send(target, cookie, big, true);
+    expect(declared.status).toBe(413);
+    expect(JSON.parse(declared.body).error.message).toMatch(/2 MiB/);
+    // Sent in chunks with no Content-Length: counted while it arrives.
+    const streamed = await send(target, cookie, big, false);
     expect(streamed.status).toBe(413);
     expect(await count("section_versions")).toBe(before);
   });

@@ -1,24 +1,8 @@
 import { describe, expect, test } from "vitest";
 import { inject } from "vitest";
-import { signedIn } from "../support/http";
+import { sessionCookie, signedIn } from "../support/http";
 
 const base = () => inject("appUrl");
-
-/** Signs in and returns the raw session cookie, so it can be replayed after it should have died. */
-async function sessionCookie(email: string, password: string): Promise<string> {
-  const csrfRes = await fetch(`${base()}/api/auth/csrf`);
-  const csrfCookie = csrfRes.headers.getSetCookie().map((c) => c.split(";")[0]);
-  const { csrfToken } = await csrfRes.json();
-  const res = await fetch(`${base()}/api/auth/callback/credentials`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie: csrfCookie.join("; ") },
-    body: new URLSearchParams({ csrfToken, email, password, json: "true" }).toString(),
-  });
-  const token = res.headers.getSetCookie().find((c) => c.startsWith("next-auth.session-token="));
-  if (!token) throw new Error(`no session for ${email}`);
-  return [...csrfCookie, token.split(";")[0]].join("; ");
-}
 
 const asCookie = (cookie: string, path: string, init: RequestInit = {}) =>
   fetch(base() + path, { ...init, redirect: "manual", headers: { ...init.headers, cookie } });
