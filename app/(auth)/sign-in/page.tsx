@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
-import { redirect } from "next/navigation";
+import { redirect, unstable_rethrow } from "next/navigation";
 import { getSessionUser } from "@/lib/auth/session";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { Wordmark } from "@/components/shell/wordmark";
@@ -10,6 +10,7 @@ export const metadata: Metadata = { title: "Sign in" };
 export default async function SignInPage() {
   // With the database out of reach the form still shows; signing in then says so in plain words.
   const user = await getSessionUser().catch((err: unknown) => {
+    unstable_rethrow(err); // Next's own signals (dynamic rendering, redirects) are not failures
     console.error("[sign-in] could not check the session", err);
     return null;
   });
