@@ -1,4 +1,5 @@
 import type { NextConfig } from "next";
+import { COMMON_SECURITY_HEADERS, NON_PAGE_POLICY, STATIC_POLICY } from "./lib/api/content-security";
 
 const nextConfig: NextConfig = {
   // Turbopack must not try to bundle the database drivers knex can load lazily.
@@ -9,6 +10,15 @@ const nextConfig: NextConfig = {
   typescript: { ignoreBuildErrors: true },
   reactStrictMode: true,
   poweredByHeader: false,
+  async headers() {
+    return [
+      { source: "/:path*", headers: COMMON_SECURITY_HEADERS },
+      // Pages get a policy with a fresh nonce from proxy.ts; everything else gets this one.
+      { source: "/api/:path*", headers: [{ key: "Content-Security-Policy", value: NON_PAGE_POLICY }] },
+      { source: "/_next/:path*", headers: [{ key: "Content-Security-Policy", value: STATIC_POLICY }] },
+      { source: "/icon.svg", headers: [{ key: "Content-Security-Policy", value: NON_PAGE_POLICY }] },
+    ];
+  },
 };
 
 export default nextConfig;

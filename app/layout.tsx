@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import localFont from "next/font/local";
+import { connection } from "next/server";
 import "./globals.css";
 
 // Shipped with the app: nothing is fetched at build or run time.
@@ -19,7 +20,9 @@ export const metadata: Metadata = {
   description: "Stability checks of embankment dams and soil slopes, kept and reviewed as a team.",
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page renders per request, so each gets the CSP nonce that proxy.ts issues for it.
+  await connection();
   return (
     <html lang="en" className={inter.variable}>
       <body className="font-sans">{children}</body>

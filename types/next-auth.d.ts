@@ -2,7 +2,7 @@ import type { Role } from "@/lib/permissions";
 
 declare module "next-auth" {
   interface Session {
-    user: { id: number; name: string; email: string; role: Role; organisationId: number };
+    user: { id: number; name: string; email: string; role: Role; organisationId: number; sessionVersion: number };
   }
 }
 
@@ -11,5 +11,7 @@ declare module "next-auth/jwt" {
     uid?: number;
     role?: Role;
     organisationId?: number;
+    /** The user's session version when the token was issued (lib/auth/session.ts). */
+    sv?: number;
   }
 }

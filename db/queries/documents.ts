@@ -113,21 +113,9 @@ export async function insertDocument(input: NewDocument, db: Knex = getDb()): Pr
   return id;
 }
 
-/**
- * Deletes the row inside a transaction and runs `removeStored` before committing, so a failure
- * to remove the stored bytes leaves the row in place and the delete can simply be retried.
- */
-export async function deleteDocument(
-  documentId: number,
-  removeStored: () => Promise<void>,
-  db: Knex = getDb(),
-): Promise<boolean> {
-  return db.transaction(async (trx) => {
-    const removed = await trx("documents").where({ id: documentId }).delete();
-    if (removed === 0) return false;
-    await removeStored();
-    return true;
-  });
+/** Deletes the row; false when it was gone already. The caller removes the stored bytes after this commits. */
+export async function deleteDocument(documentId: number, db: Knex = getDb()): Promise<boolean> {
+  return (await db("documents").where({ id: documentId }).delete()) > 0;
 }
 
 /** Whether the section exists and belongs to the project. */

@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { getDb } from "../index";
+import { isDuplicateEntry } from "../duplicate-entry";
 import type { MaterialParameters } from "../../lib/materials/parameters";
 import type { ParameterSources } from "../../lib/materials/sources";
 
@@ -72,10 +73,6 @@ export async function fetchMaterial(
 ): Promise<LibraryMaterial | null> {
   const row = await selectMaterials(db).where({ "m.project_id": projectId, "m.id": materialId }).first();
   return row ? toMaterial(row) : null;
-}
-
-function isDuplicateEntry(err: unknown): boolean {
-  return typeof err === "object" && err !== null && (err as { code?: string }).code === "ER_DUP_ENTRY";
 }
 
 /**

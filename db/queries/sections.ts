@@ -1,5 +1,22 @@
 import type { Knex } from "knex";
 import { getDb } from "../index";
+import { isDuplicateEntry } from "../duplicate-entry";
+
+/** A section name equal to another of the project under the column's collation ("máin" and "main"). */
+export class DuplicateSectionNameError extends Error {
+  constructor(readonly sectionName: string) {
+    super(`A section named '${sectionName}' (or one the database counts as the same) exists already.`);
+  }
+}
+
+async function guardName<T>(name: string | undefined, write: () => Promise<T>): Promise<T> {
+  try {
+    return await write();
+  } catch (err) {
+    if (name !== undefined && isDuplicateEntry(err)) throw new DuplicateSectionNameError(name);
+    throw err;
+  }
+}
 
 export interface SectionSummary {
   id: number;
@@ -127,13 +144,15 @@ export async function createSection(
   db: Knex = getDb(),
 ): Promise<number> {
   return db.transaction(async (trx) => {
-    const [id] = await trx("sections").insert({
-      project_id: input.projectId,
-      name: input.name,
-      description: input.description,
-      current_version: 1,
-      created_by: input.userId,
-    });
+    const [id] = await guardName(input.name, () =>
+      trx("sections").insert({
+        project_id: input.projectId,
+        name: input.name,
+        description: input.description,
+        current_version: 1,
+        created_by: input.userId,
+      }),
+    );
     await trx("section_versions").insert({
       section_id: id,
       version: 1,
@@ -147,7 +166,11 @@ export async function createSection(
 
 export class StaleVersionError extends Error {
   constructor(readonly currentVersion: number) {
-    super(`The section was saved by someone else meanwhile (now version ${currentVersion}).`);
+    super(
+      currentVersion
+        ? `The section was saved by someone else meanwhile (now version ${currentVersion}).`
+        : "The section was deleted meanwhile.",
+    );
   }
 }
 
@@ -169,6 +192,7 @@ export async function saveSectionVersion(
 ): Promise<number> {
   return db.transaction(async (trx) => {
     const s = await trx("sections").where({ id: input.sectionId }).forUpdate().first();
+    if (!s) throw new StaleVersionError(0);
     if (s.current_version !== input.baseVersion) throw new StaleVersionError(s.current_version);
     const version = s.current_version + 1;
     await trx("section_versions").insert({
@@ -178,14 +202,16 @@ export async function saveSectionVersion(
       summary: input.summary,
       created_by: input.userId,
     });
-    await trx("sections")
-      .where({ id: input.sectionId })
-      .update({
-        current_version: version,
-        updated_at: trx.fn.now(),
-        ...(input.name !== undefined ? { name: input.name } : {}),
-        ...(input.description !== undefined ? { description: input.description } : {}),
-      });
+    await guardName(input.name, () =>
+      trx("sections")
+        .where({ id: input.sectionId })
+        .update({
+          current_version: version,
+          updated_at: trx.fn.now(),
+          ...(input.name !== undefined ? { name: input.name } : {}),
+          ...(input.description !== undefined ? { description: input.description } : {}),
+        }),
+    );
     return version;
   });
 }

@@ -10,6 +10,7 @@ export interface UserRow {
   role: Role;
   active: number | boolean;
   password_hash: string;
+  session_version: number;
 }
 
 export interface PublicUser {
@@ -57,8 +58,60 @@ export async function createUser(
   return toPublic((await fetchUserById(id, db))!);
 }
 
-export async function updatePasswordHash(userId: number, passwordHash: string, db: Knex = getDb()): Promise<void> {
-  await db("users").where({ id: userId }).update({ password_hash: passwordHash, updated_at: db.fn.now() });
+const nextVersion = (db: Knex) => db.raw("session_version + 1");
+
+/** What every request checks its token against (lib/auth/session.ts). */
+export async function fetchSessionState(
+  userId: number,
+  db: Knex = getDb(),
+): Promise<{ sessionVersion: number; active: boolean } | null> {
+  const row = await db<UserRow>("users").where({ id: userId }).first("session_version", "active");
+  return row ? { sessionVersion: row.session_version, active: Boolean(row.active) } : null;
+}
+
+/** Ends every session of the user: tokens carrying an older version are refused from now on. */
+export async function bumpSessionVersion(userId: number, db: Knex = getDb()): Promise<number> {
+  return db.transaction(async (trx) => {
+    await trx("users")
+      .where({ id: userId })
+      .update({ session_version: nextVersion(trx) });
+    const row = await trx<UserRow>("users").where({ id: userId }).first("session_version");
+    return row?.session_version ?? 0;
+  });
+}
+
+/** A new password ends every session of the user; returns the new session version. */
+export async function updatePasswordHash(userId: number, passwordHash: string, db: Knex = getDb()): Promise<number> {
+  return db.transaction(async (trx) => {
+    await trx("users")
+      .where({ id: userId })
+      .update({ password_hash: passwordHash, updated_at: trx.fn.now(), session_version: nextVersion(trx) });
+    const row = await trx<UserRow>("users").where({ id: userId }).first("session_version");
+    return row?.session_version ?? 0;
+  });
+}
+
+/** Changes a user's role or active flag in one organisation; either change ends the user's sessions. */
+export async function updateUserAccess(
+  input: { organisationId: number; userId: number; role?: Role; active?: boolean },
+  db: Knex = getDb(),
+): Promise<PublicUser | null> {
+  return db.transaction(async (trx) => {
+    const row = await trx<UserRow>("users")
+      .where({ id: input.userId, organisation_id: input.organisationId })
+      .forUpdate()
+      .first();
+    if (!row) return null;
+    const changes: Record<string, unknown> = {};
+    if (input.role !== undefined && input.role !== row.role) changes.role = input.role;
+    if (input.active !== undefined && input.active !== Boolean(row.active)) changes.active = input.active;
+    if (Object.keys(changes).length) {
+      await trx("users")
+        .where({ id: input.userId })
+        .update({ ...changes, updated_at: trx.fn.now(), session_version: nextVersion(trx) });
+    }
+    return toPublic((await trx<UserRow>("users").where({ id: input.userId }).first())!);
+  });
 }
 
 export { toPublic as toPublicUser };

@@ -2,6 +2,15 @@ import "server-only";
 import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
 import { ApiError } from "./errors";
+import { toId } from "./ids";
+import { isServiceDown, SERVICE_UNAVAILABLE } from "./service-down";
+import {
+  MAX_JSON_BYTES,
+  MAX_JSON_LABEL,
+  readCappedText,
+  refuseForeignOrigin,
+  requireJsonContentType,
+} from "./request-guards";
 
 export interface ErrorBody {
   error: { code: string; message: string; fields?: Record<string, string[]> };
@@ -30,6 +39,10 @@ export function errorResponse(err: unknown): NextResponse<ErrorBody> {
       { status: 400 },
     );
   }
+  if (isServiceDown(err)) {
+    console.error("[api] the database is out of reach", err);
+    return NextResponse.json({ error: { code: "unavailable", message: SERVICE_UNAVAILABLE } }, { status: 503 });
+  }
   console.error("[api] unexpected error", err);
   return NextResponse.json(
     { error: { code: "internal", message: "Something went wrong on the server." } },
@@ -37,11 +50,16 @@ export function errorResponse(err: unknown): NextResponse<ErrorBody> {
   );
 }
 
-/** Reads and validates a JSON body; a body that is not JSON is a 400 like any other bad field. */
+/**
+ * Reads and validates a JSON body: another content type is a 415, a body over 2 MiB a 413 (refused
+ * before it is parsed), and a body that is not JSON a 400 like any other bad field.
+ */
 export async function parseJson<T>(request: Request, schema: ZodType<T>): Promise<T> {
+  requireJsonContentType(request);
+  const text = await readCappedText(request, MAX_JSON_BYTES, MAX_JSON_LABEL);
   let raw: unknown;
   try {
-    raw = await request.json();
+    raw = JSON.parse(text);
   } catch {
     throw new ApiError(400, "invalid_json", "The request body is not valid JSON.", { _: ["Send a JSON object."] });
   }
@@ -50,17 +68,21 @@ export async function parseJson<T>(request: Request, schema: ZodType<T>): Promis
 
 /** Parses a numeric route parameter such as a project id. */
 export function parseId(value: string, what: string): number {
-  const id = Number(value);
-  if (!Number.isInteger(id) || id <= 0) throw new ApiError(404, "not_found", `${what} was not found.`);
+  const id = toId(value);
+  if (id === null) throw new ApiError(404, "not_found", `${what} was not found.`);
   return id;
 }
 
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
 
-/** Wraps a route handler so every failure answers `{"error": {code, message, fields}}`. */
+/**
+ * Wraps a route handler so every failure answers `{"error": {code, message, fields}}`, and so every
+ * state-changing request from a foreign origin is refused (403) before the handler runs.
+ */
 export function apiRoute<C>(handler: Handler<C>): Handler<C> {
   return async (request, context) => {
     try {
+      refuseForeignOrigin(request);
       return await handler(request, context);
     } catch (err) {
       return errorResponse(err);

@@ -1,8 +1,13 @@
 import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
+import { bumpSessionVersion } from "@/db/queries/users";
 import { authenticate, SignInError, type SignedInUser } from "./sign-in";
+import { clientAddress } from "./client-address";
 import type { Role } from "../permissions";
+
+/** Shown on the sign-in form when the database (or anything else) fails; the cause goes to the log. */
+export const SIGN_IN_UNAVAILABLE = "Sign-in is unavailable just now. Try again in a few minutes.";
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: "jwt", maxAge: 12 * 60 * 60 },
@@ -11,13 +16,14 @@ export const authOptions: NextAuthOptions = {
     CredentialsProvider({
       name: "E-mail and password",
       credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
-      async authorize(credentials) {
+      async authorize(credentials, req) {
         try {
-          return await authenticate(credentials);
+          return await authenticate(credentials, clientAddress(req.headers ?? {}));
         } catch (err) {
           // next-auth passes a thrown message to the sign-in form as the error text.
           if (err instanceof SignInError) throw new Error(err.message);
-          throw err;
+          console.error("[auth] sign-in failed on the server", err);
+          throw new Error(SIGN_IN_UNAVAILABLE);
         }
       },
     }),
@@ -29,6 +35,7 @@ export const authOptions: NextAuthOptions = {
         token.uid = Number(signedIn.id);
         token.role = signedIn.role;
         token.organisationId = signedIn.organisationId;
+        token.sv = signedIn.sessionVersion;
       }
       return token;
     },
@@ -39,8 +46,15 @@ export const authOptions: NextAuthOptions = {
         email: token.email ?? "",
         role: token.role as Role,
         organisationId: token.organisationId as number,
+        sessionVersion: token.sv ?? 0,
       };
       return session;
+    },
+  },
+  events: {
+    // Signing out ends every session of the user, not only this browser's cookie.
+    async signOut({ token }) {
+      if (typeof token?.uid === "number") await bumpSessionVersion(token.uid);
     },
   },
 };

@@ -1,6 +1,7 @@
 import "server-only";
 import { getServerSession } from "next-auth";
 import { redirect } from "next/navigation";
+import { fetchSessionState } from "@/db/queries/users";
 import { authOptions } from "./options";
 import { unauthorized } from "../api/errors";
 import type { Role } from "../permissions";
@@ -11,11 +12,22 @@ export interface SessionUser {
   email: string;
   role: Role;
   organisationId: number;
+  sessionVersion: number;
 }
 
+/**
+ * The signed-in user, or null. A token is honoured only while it carries the user's current session
+ * version and the user is active: sign-out, a password change, a role change and a deactivation bump
+ * the version (db/queries/users.ts), so every token issued before them stops working at once.
+ * A database failure is thrown, not taken for "signed out", so the caller can answer 503.
+ */
 export async function getSessionUser(): Promise<SessionUser | null> {
   const session = await getServerSession(authOptions);
-  return session?.user?.id ? session.user : null;
+  const user = session?.user;
+  if (!user?.id) return null;
+  const state = await fetchSessionState(user.id);
+  if (!state || !state.active || state.sessionVersion !== user.sessionVersion) return null;
+  return user;
 }
 
 /** For route handlers and server actions: no session is a 401. */

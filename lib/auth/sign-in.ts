@@ -1,13 +1,15 @@
 import "server-only";
 import { z } from "zod";
 import { fetchUserByEmail } from "@/db/queries/users";
-import { clearSignInFailures, fetchSignInFailures, recordSignInFailure } from "@/db/queries/sign-in-failures";
+import { bookCheckSlot, countSignInAttempt, takeBackSignInAttempt } from "@/db/queries/sign-in-counters";
 import { DUMMY_HASH, verifyPassword } from "./password";
-import { decideThrottle } from "./throttle";
+import { attemptKeys, decideThrottle, LOCK_MINUTES, SLOW_PATH_MAX_WAIT_MS, SLOW_PATH_SPACING_MS } from "./throttle";
 import type { Role } from "../permissions";
 
 /** The one message for every failed sign-in: it never says whether the account exists. */
 export const SIGN_IN_FAILED = "The e-mail or password is not right.";
+
+const BUSY = "Sign-in for this e-mail is being tried very often just now. Try again in a minute.";
 
 export const credentialsSchema = z.object({
   email: z.string().trim().toLowerCase().email().max(254),
@@ -20,36 +22,52 @@ export interface SignedInUser {
   name: string;
   role: Role;
   organisationId: number;
+  sessionVersion: number;
 }
 
 export class SignInError extends Error {}
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
-/** Checks credentials with throttling; throws SignInError with a message safe to show. */
-export async function authenticate(raw: unknown): Promise<SignedInUser> {
+/**
+ * Checks credentials with throttling; throws SignInError with a message safe to show. The attempt is
+ * counted as a failure before the password is checked and taken back only when it was right, so parallel
+ * guesses cannot all be checked against one stale count, and a right password clears nobody else's.
+ */
+export async function authenticate(raw: unknown, clientAddress: string): Promise<SignedInUser> {
   const parsed = credentialsSchema.safeParse(raw);
   if (!parsed.success) throw new SignInError(SIGN_IN_FAILED);
   const { email, password } = parsed.data;
 
-  const decision = decideThrottle(await fetchSignInFailures(email), new Date());
+  const keys = attemptKeys(email, clientAddress);
+  const counts = await countSignInAttempt(Object.values(keys), LOCK_MINUTES);
+  const decision = decideThrottle({
+    pair: counts[keys.pair] ?? 1,
+    address: counts[keys.address] ?? 1,
+    account: counts[keys.account] ?? 1,
+  });
   if (decision.locked) {
-    throw new SignInError(`Too many failed sign-ins for this e-mail. Try again in ${decision.retryInMinutes} min.`);
+    const what = decision.locked === "account" ? "for this e-mail" : "from this network";
+    throw new SignInError(`Too many failed sign-ins ${what}. Try again in ${decision.retryInMinutes} min.`);
   }
-  if (decision.delayMs) await sleep(decision.delayMs);
+  let waitMs = decision.delayMs;
+  if (decision.slowPath) {
+    const turn = await bookCheckSlot(keys.account, SLOW_PATH_SPACING_MS, SLOW_PATH_MAX_WAIT_MS);
+    if (turn === null) throw new SignInError(BUSY);
+    waitMs = Math.max(waitMs, turn);
+  }
+  if (waitMs) await sleep(waitMs);
 
   const user = await fetchUserByEmail(email);
   const ok = await verifyPassword(password, user?.password_hash ?? DUMMY_HASH);
-  if (!user || !ok || !user.active) {
-    await recordSignInFailure(email);
-    throw new SignInError(SIGN_IN_FAILED);
-  }
-  await clearSignInFailures(email);
+  if (!user || !ok || !user.active) throw new SignInError(SIGN_IN_FAILED);
+  await takeBackSignInAttempt(Object.values(keys));
   return {
     id: String(user.id),
     email: user.email,
     name: user.name,
     role: user.role,
     organisationId: user.organisation_id,
+    sessionVersion: user.session_version,
   };
 }

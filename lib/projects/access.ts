@@ -1,6 +1,6 @@
 import "server-only";
 import { fetchMemberRole, fetchProjectById } from "@/db/queries/projects";
-import { notFound, forbidden } from "../api/errors";
+import { ApiError, notFound, forbidden } from "../api/errors";
 import { can, effectiveProjectRole, type Action, type Role } from "../permissions";
 import type { SessionUser } from "../auth/session";
 
@@ -27,12 +27,13 @@ export async function requireProjectAccess(
   return { project, role };
 }
 
-/** The same check for pages: null when the project is not visible. */
+/** The same check for pages: null when the project is not visible; a database failure is thrown, not a 404. */
 export async function findProjectAccess(user: SessionUser, projectId: number): Promise<ProjectAccess | null> {
   try {
     return await requireProjectAccess(user, projectId, "project.view");
-  } catch {
-    return null;
+  } catch (err) {
+    if (err instanceof ApiError) return null;
+    throw err;
   }
 }
 

@@ -18,8 +18,8 @@ const circleFs = z.object({
 const fsMap = z.object({
   nx: z.number().int().positive(),
   ny: z.number().int().positive(),
-  xs: z.array(finite),
-  ys: z.array(finite),
+  xs: z.array(finite).max(1000),
+  ys: z.array(finite).max(1000),
   values: z.array(finite.nullable()).max(40000),
 });
 
@@ -27,7 +27,10 @@ export const searchResultSchema = z.object({
   ok: z.literal(true),
   engineVersion: z.string().max(40),
   case: z.string().max(20),
-  methods: z.array(z.enum(["bishop", "fellenius"])).min(1),
+  methods: z
+    .array(z.enum(["bishop", "fellenius"]))
+    .min(1)
+    .max(2),
   ordinaryForm: z.string().max(30),
   results: z.object({ bishop: circleFs.nullable().optional(), fellenius: circleFs.nullable().optional() }),
   fsMap: z.object({ bishop: fsMap.optional(), fellenius: fsMap.optional() }),
@@ -35,9 +38,11 @@ export const searchResultSchema = z.object({
   circles: z.object({
     tried: z.number().int().nonnegative(),
     valid: z.number().int().nonnegative(),
-    rejected: z.record(z.string(), z.number().int().nonnegative()),
+    rejected: z
+      .record(z.string().max(40), z.number().int().nonnegative())
+      .refine((r) => Object.keys(r).length <= 20, "At most 20 kinds of rejected circle."),
   }),
-  warnings: z.array(z.object({ code: z.string(), message: z.string() })).max(200),
+  warnings: z.array(z.object({ code: z.string().max(60), message: z.string().max(500) })).max(200),
   cancelled: z.literal(false, { error: "A cancelled search cannot be saved; run it to the end." }),
 });
 

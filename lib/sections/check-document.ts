@@ -2,12 +2,20 @@ import { validateSection, type SectionDocument, type Issue } from "../stability"
 import { ApiError } from "../api/errors";
 import { checkWaterConditions } from "./check-water-conditions";
 import type { StoredSection } from "./water-conditions";
+import { sectionLimitErrors } from "../validations/section-limits";
 
 /**
- * Validates a section document with the engine's own rules, and its named water conditions,
- * before it is stored. Answers 400 with one field per problem, keyed by its place in the document.
+ * Validates a section document with the engine's own rules, and its named water conditions, before
+ * it is stored, within the sizes of lib/validations/section-limits.ts.
+ * Answers 400 with one field per problem, keyed by its place in the document.
  */
 export function requireValidSection(raw: unknown): { document: StoredSection; warnings: Issue[] } {
+  // Sizes first: an oversized document is refused before the engine spends time on its geometry.
+  const tooLarge = sectionLimitErrors(raw);
+  if (tooLarge) {
+    const first = Object.values(tooLarge)[0][0];
+    throw new ApiError(400, "section_too_large", `The section is larger than Scarpline accepts: ${first}`, tooLarge);
+  }
   const result = validateSection(raw);
   const water = result.ok ? checkWaterConditions(raw as SectionDocument) : { errors: [] };
   const errors = result.ok ? water.errors : result.errors;

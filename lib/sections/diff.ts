@@ -180,6 +180,9 @@ export function diffDocuments(a: SectionDocument, b: SectionDocument): Differenc
 }
 
 /** One line for a version list, e.g. "fill: φ' 28° → 30°; phreatic line changed". */
+/** The length of section_versions.summary (db/migrations/002-sections-materials-runs.ts). */
+export const SUMMARY_MAX_LENGTH = 300;
+
 export function summarizeChange(a: SectionDocument, b: SectionDocument, max = 3): string {
   const d = diffDocuments(a, b);
   if (d.length === 0) return "No change to the section";
@@ -187,5 +190,7 @@ export function summarizeChange(a: SectionDocument, b: SectionDocument, max = 3)
     .slice(0, max)
     .map((x) => x.text)
     .join("; ");
-  return d.length > max ? `${head}; and ${d.length - max} more` : head;
+  const text = d.length > max ? `${head}; and ${d.length - max} more` : head;
+  // Long region or material names must not make a save fail on the column's length.
+  return [...text].length > SUMMARY_MAX_LENGTH ? [...text].slice(0, SUMMARY_MAX_LENGTH - 1).join("") + "…" : text;
 }

@@ -57,12 +57,14 @@ export async function storeDocument(input: StoreDocumentInput): Promise<number> 
   }
 }
 
-/** Removes the row and the object together: if the object cannot be removed, the row stays. */
+/**
+ * Removes the row, and the stored object only once that has committed: a database failure then leaves
+ * both in place (the delete can be retried), and an object store failure leaves an orphan object no row
+ * points at, which is logged, rather than a row whose file is gone.
+ */
 export async function removeDocument(document: DocumentRecord): Promise<void> {
-  try {
-    await deleteDocument(document.id, () => deleteObject(document.storageKey));
-  } catch (err) {
-    console.error(`[documents] deleting document ${document.id} failed`, err);
-    throw storageDown(`'${document.originalName}' was not deleted`);
-  }
+  if (!(await deleteDocument(document.id))) return;
+  await deleteObject(document.storageKey).catch((err: unknown) => {
+    console.error(`[documents] row ${document.id} deleted; its object ${document.storageKey} remains`, err);
+  });
 }

@@ -28,3 +28,16 @@ export const changePasswordSchema = z
     path: ["newPassword"],
     message: "Choose a password you have not used here.",
   });
+
+/** An administrator's change to a user: a role, the active flag, or lifting a sign-in lock. */
+export const updateUserAccessSchema = z
+  .object({
+    role: z.enum(ROLES, { error: "Choose a role." }).optional(),
+    active: z.boolean().optional(),
+    unlockSignIn: z.literal(true).optional(),
+  })
+  .strict()
+  .refine((v) => v.role !== undefined || v.active !== undefined || v.unlockSignIn, {
+    path: ["_"],
+    message: "Send a role, an active flag or unlockSignIn.",
+  });

@@ -54,3 +54,23 @@ export async function signedIn(email: string, password = "scarpline-demo"): Prom
   if (!ok) throw new Error(`sign-in as ${email} failed: ${error}`);
   return client;
 }
+
+/**
+ * Signs in without a client and returns the raw Cookie header (CSRF and session cookies), for tests that
+ * replay a token after it should have died or send requests on connections of their own.
+ */
+export async function sessionCookie(email: string, password = "scarpline-demo"): Promise<string> {
+  const base = inject("appUrl");
+  const csrfRes = await fetch(`${base}/api/auth/csrf`);
+  const csrfCookie = csrfRes.headers.getSetCookie().map((c) => c.split(";")[0]);
+  const { csrfToken } = await csrfRes.json();
+  const res = await fetch(`${base}/api/auth/callback/credentials`, {
+    method: "POST",
+    redirect: "manual",
+    headers: { "content-type": "application/x-www-form-urlencoded", cookie: csrfCookie.join("; ") },
+    body: new URLSearchParams({ csrfToken, email, password, json: "true" }).toString(),
+  });
+  const token = res.headers.getSetCookie().find((c) => c.startsWith("next-auth.session-token="));
+  if (!token) throw new Error(`no session for ${email}`);
+  return [...csrfCookie, token.split(";")[0]].join("; ");
+}

@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
 import { ACTIONS, can, effectiveProjectRole, ROLES } from "@/lib/permissions";
-import { decideThrottle, FREE_ATTEMPTS, LOCK_AFTER } from "@/lib/auth/throttle";
+import { ADDRESS_LOCK_AFTER, decideThrottle, FREE_ATTEMPTS, LOCK_AFTER, MAX_DELAY_MS } from "@/lib/auth/throttle";
 
 describe("can(role, action)", () => {
   test("only reviewers sign off runs, and a reviewer cannot run analyses (separation of duties, common practice)", () => {
@@ -22,24 +22,25 @@ describe("can(role, action)", () => {
   });
 });
 
-describe("decideThrottle(record, now)", () => {
-  const now = new Date("2026-01-01T12:00:00Z");
-  test("no delay for the first attempts, growing delay after, lock after many", () => {
-    expect(decideThrottle(null, now).delayMs).toBe(0);
-    expect(decideThrottle({ failures: FREE_ATTEMPTS - 1, lastFailureAt: now }, now).delayMs).toBe(0);
-    const a = decideThrottle({ failures: FREE_ATTEMPTS + 1, lastFailureAt: now }, now).delayMs;
-    const b = decideThrottle({ failures: FREE_ATTEMPTS + 2, lastFailureAt: now }, now).delayMs;
-    expect(b).toBeGreaterThan(a);
-    expect(decideThrottle({ failures: LOCK_AFTER, lastFailureAt: now }, now).locked).toBe(true);
+describe("decideThrottle(counts)", () => {
+  const at = (pair: number, account = pair, address = pair) => decideThrottle({ pair, account, address });
+  test("no delay for the first attempts, a growing delay after, a lock after many from one client", () => {
+    expect(at(1).delayMs).toBe(0);
+    expect(at(FREE_ATTEMPTS).delayMs).toBe(0);
+    expect(at(FREE_ATTEMPTS + 2).delayMs).toBeGreaterThan(at(FREE_ATTEMPTS + 1).delayMs);
+    expect(at(LOCK_AFTER).locked).toBe(false);
+    expect(at(LOCK_AFTER + 1).locked).toBe("account");
   });
-  test("a lock lifts after its time, and old failures are forgotten", () => {
-    const later = new Date(now.getTime() + 16 * 60000);
-    expect(decideThrottle({ failures: LOCK_AFTER, lastFailureAt: now }, later).locked).toBe(false);
-    const muchLater = new Date(now.getTime() + 120 * 60000);
-    expect(decideThrottle({ failures: 50, lastFailureAt: now }, muchLater)).toEqual({
-      locked: false,
-      delayMs: 0,
-      retryInMinutes: 0,
-    });
+  test("failures from other clients slow an account down but never lock it, so a stranger cannot shut it", () => {
+    const owner = at(1, 500, 1);
+    expect(owner.locked).toBe(false);
+    expect(owner.delayMs).toBe(MAX_DELAY_MS);
+    // Past the lock count, the account's passwords are checked one at a time, whoever sends them.
+    expect(owner.slowPath).toBe(true);
+    expect(at(LOCK_AFTER).slowPath).toBe(false);
+  });
+  test("one client address trying many accounts is locked", () => {
+    expect(at(1, 1, ADDRESS_LOCK_AFTER).locked).toBe(false);
+    expect(at(1, 1, ADDRESS_LOCK_AFTER + 1).locked).toBe("address");
   });
 });

@@ -10,12 +10,13 @@ import { PageTitle } from "@/components/ui/page-title";
 import { EmptyState } from "@/components/ui/empty-state";
 import { ProjectSections } from "@/components/projects/project-sections";
 import { ProjectRuns } from "@/components/projects/project-runs";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Project" };
 
 export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
   const user = await requirePageUser();
-  const access = await findProjectAccess(user, Number((await params).projectId));
+  const access = await findProjectAccess(user, pageId((await params).projectId));
   if (!access) notFound();
   const { project, role } = access;
   const [sections, runs] = await Promise.all([fetchSectionsOfProject(project.id), fetchRunsOfProject(project.id)]);

@@ -3,6 +3,7 @@ import { apiRoute, parseJson } from "@/lib/api/handler";
 import { ApiError } from "@/lib/api/errors";
 import { requireUser } from "@/lib/auth/session";
 import { hashPassword, verifyPassword } from "@/lib/auth/password";
+import { reissueOwnSession } from "@/lib/auth/reissue";
 import { changePasswordSchema } from "@/lib/validations/user";
 import { fetchUserById, updatePasswordHash } from "@/db/queries/users";
 
@@ -15,6 +16,7 @@ export const POST = apiRoute(async (request: Request) => {
       currentPassword: ["This is not your current password."],
     });
   }
-  await updatePasswordHash(user.id, await hashPassword(input.newPassword));
+  // Every other session of the user ends here; this one carries on with the new version.
+  await reissueOwnSession(await updatePasswordHash(user.id, await hashPassword(input.newPassword)));
   return NextResponse.json({ ok: true });
 });

@@ -7,7 +7,8 @@ type Ctx = { params: Promise<{ kind: string }> };
 /** The CSV templates, public: they hold only an invented example. */
 export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
   const kind = (await params).kind as CsvTemplateKind;
-  if (!(kind in csvTemplates)) throw notFound("The template");
+  // Own keys only: "constructor" or "__proto__" are in every object's chain, not templates.
+  if (!Object.hasOwn(csvTemplates, kind)) throw notFound("The template");
   return new Response(csvTemplates[kind] + "\r\n", {
     headers: {
       "content-type": "text/csv; charset=utf-8",

@@ -8,12 +8,13 @@ import { fetchDesignStudiesOfProject } from "@/db/queries/design-studies";
 import { PageTitle } from "@/components/ui/page-title";
 import { EmptyState } from "@/components/ui/empty-state";
 import { NewStudyForm } from "@/components/design/new-study-form";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Slope design" };
 
 export default async function DesignStudiesPage({ params }: { params: Promise<{ projectId: string }> }) {
   const user = await requirePageUser();
-  const access = await findProjectAccess(user, Number((await params).projectId));
+  const access = await findProjectAccess(user, pageId((await params).projectId));
   if (!access) notFound();
   const { project, role } = access;
   const studies = await fetchDesignStudiesOfProject(project.id);

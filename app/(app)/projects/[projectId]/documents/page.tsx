@@ -8,13 +8,14 @@ import { toDocumentSummary } from "@/lib/storage/document-summary";
 import { fetchDocumentsOfProject } from "@/db/queries/documents";
 import { PageTitle } from "@/components/ui/page-title";
 import { DocumentsPanel } from "@/components/documents/documents-panel";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Documents" };
 
 /** Every source document of the project; files dropped here belong to the project as a whole. */
 export default async function ProjectDocumentsPage({ params }: { params: Promise<{ projectId: string }> }) {
   const user = await requirePageUser();
-  const access = await findProjectAccess(user, Number((await params).projectId));
+  const access = await findProjectAccess(user, pageId((await params).projectId));
   if (!access) notFound();
   const { project, role } = access;
   const documents = await fetchDocumentsOfProject(project.id);

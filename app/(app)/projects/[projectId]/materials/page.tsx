@@ -7,12 +7,13 @@ import { can } from "@/lib/permissions";
 import { fetchMaterialsOfProject } from "@/db/queries/materials";
 import { PageTitle } from "@/components/ui/page-title";
 import { MaterialsLibrary } from "@/components/materials/materials-library";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Materials" };
 
 export default async function MaterialsPage({ params }: { params: Promise<{ projectId: string }> }) {
   const user = await requirePageUser();
-  const access = await findProjectAccess(user, Number((await params).projectId));
+  const access = await findProjectAccess(user, pageId((await params).projectId));
   if (!access) notFound();
   const materials = await fetchMaterialsOfProject(access.project.id);
   return (

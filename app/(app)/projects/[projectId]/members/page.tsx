@@ -8,12 +8,13 @@ import { fetchProjectMembers } from "@/db/queries/projects";
 import { fetchUsersOfOrganisation } from "@/db/queries/users";
 import { PageTitle } from "@/components/ui/page-title";
 import { MembersManager } from "@/components/projects/members-manager";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Members" };
 
 export default async function MembersPage({ params }: { params: Promise<{ projectId: string }> }) {
   const user = await requirePageUser();
-  const access = await findProjectAccess(user, Number((await params).projectId));
+  const access = await findProjectAccess(user, pageId((await params).projectId));
   if (!access) notFound();
   if (!can(access.role, "members.manage")) {
     return (

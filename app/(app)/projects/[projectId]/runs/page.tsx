@@ -7,6 +7,7 @@ import { fetchRunsOfProject } from "@/db/queries/runs";
 import { PageTitle } from "@/components/ui/page-title";
 import { EmptyState } from "@/components/ui/empty-state";
 import { RunsTable } from "@/components/run-list/runs-table";
+import { pageId, toId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Runs" };
 
@@ -18,9 +19,9 @@ export default async function RunsPage({
   searchParams: Promise<{ section?: string }>;
 }) {
   const user = await requirePageUser();
-  const access = await findProjectAccess(user, Number((await params).projectId));
+  const access = await findProjectAccess(user, pageId((await params).projectId));
   if (!access) notFound();
-  const sectionId = Number((await searchParams).section) || null;
+  const sectionId = toId((await searchParams).section);
   const runs = (await fetchRunsOfProject(access.project.id)).filter((r) => !sectionId || r.sectionId === sectionId);
   return (
     <>

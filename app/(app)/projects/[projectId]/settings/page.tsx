@@ -8,12 +8,13 @@ import { fetchConditionSettings } from "@/db/queries/loading-conditions";
 import { GUIDANCE_NOTE } from "@/lib/analysis/required-fs";
 import { PageTitle } from "@/components/ui/page-title";
 import { RequiredFsTable } from "@/components/settings/required-fs-table";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Required factors of safety" };
 
 export default async function SettingsPage({ params }: { params: Promise<{ projectId: string }> }) {
   const user = await requirePageUser();
-  const access = await findProjectAccess(user, Number((await params).projectId));
+  const access = await findProjectAccess(user, pageId((await params).projectId));
   if (!access) notFound();
   return (
     <>

@@ -5,7 +5,7 @@ import { requireUser } from "@/lib/auth/session";
 import { requireProjectAccess } from "@/lib/projects/access";
 import { requireValidSection } from "@/lib/sections/check-document";
 import { createSectionSchema } from "@/lib/validations/section";
-import { createSection, fetchSectionsOfProject } from "@/db/queries/sections";
+import { createSection, DuplicateSectionNameError, fetchSectionsOfProject } from "@/db/queries/sections";
 
 type Ctx = { params: Promise<{ projectId: string }> };
 
@@ -22,10 +22,7 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   await requireProjectAccess(user, projectId, "section.edit");
   const input = await parseJson(request, createSectionSchema);
   const { document, warnings } = requireValidSection(input.document);
-  const existing = await fetchSectionsOfProject(projectId);
-  if (existing.some((s) => s.name.toLowerCase() === input.name.toLowerCase())) {
-    throw conflict(`A section named '${input.name}' exists already in this project.`);
-  }
+  // The unique key decides, under the column's collation: "máin" and "main" are one name to it.
   const id = await createSection({
     projectId,
     name: input.name,
@@ -33,6 +30,9 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
     document,
     summary: input.summary || "First version",
     userId: user.id,
+  }).catch((err: unknown) => {
+    if (err instanceof DuplicateSectionNameError) throw conflict(`${err.message} Choose another name.`);
+    throw err;
   });
   return NextResponse.json({ section: { id, version: 1 }, warnings }, { status: 201 });
 });

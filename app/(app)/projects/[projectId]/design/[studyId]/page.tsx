@@ -7,16 +7,16 @@ import { can } from "@/lib/permissions";
 import { fetchDesignContext, fetchDesignStudy } from "@/db/queries/design-studies";
 import { PageTitle } from "@/components/ui/page-title";
 import { DesignStudio } from "@/components/design/design-studio";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Design study" };
 
 export default async function DesignStudyPage({ params }: { params: Promise<{ projectId: string; studyId: string }> }) {
   const user = await requirePageUser();
   const p = await params;
-  const access = await findProjectAccess(user, Number(p.projectId));
+  const access = await findProjectAccess(user, pageId(p.projectId));
   if (!access) notFound();
-  const studyId = Number(p.studyId);
-  if (!Number.isInteger(studyId) || studyId <= 0) notFound();
+  const studyId = pageId(p.studyId);
   const [study, context] = await Promise.all([
     fetchDesignStudy(access.project.id, studyId),
     fetchDesignContext(access.project.id),

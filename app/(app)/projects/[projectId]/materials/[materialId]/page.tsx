@@ -10,16 +10,16 @@ import { PageTitle } from "@/components/ui/page-title";
 import { Caution } from "@/components/ui/caution";
 import { MaterialWorkbench } from "@/components/materials/material-workbench";
 import { DocumentsPanel } from "@/components/documents/documents-panel";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Material" };
 
 export default async function MaterialPage({ params }: { params: Promise<{ projectId: string; materialId: string }> }) {
   const user = await requirePageUser();
   const p = await params;
-  const access = await findProjectAccess(user, Number(p.projectId));
+  const access = await findProjectAccess(user, pageId(p.projectId));
   if (!access) notFound();
-  const materialId = Number(p.materialId);
-  if (!Number.isInteger(materialId) || materialId <= 0) notFound();
+  const materialId = pageId(p.materialId);
   const [material, labTests] = await Promise.all([
     fetchMaterial(access.project.id, materialId),
     fetchLabTestSetsOfMaterial(access.project.id, materialId),

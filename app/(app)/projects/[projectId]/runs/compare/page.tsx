@@ -6,6 +6,7 @@ import { findProjectAccess } from "@/lib/projects/access";
 import { fetchRunsByIds } from "@/db/queries/runs";
 import { PageTitle } from "@/components/ui/page-title";
 import { RunComparison } from "@/components/run-compare/run-comparison";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Compare runs" };
 
@@ -17,7 +18,7 @@ export default async function ComparePage({
   searchParams: Promise<{ ids?: string }>;
 }) {
   const user = await requirePageUser();
-  const access = await findProjectAccess(user, Number((await params).projectId));
+  const access = await findProjectAccess(user, pageId((await params).projectId));
   if (!access) notFound();
   const ids = [
     ...new Set(

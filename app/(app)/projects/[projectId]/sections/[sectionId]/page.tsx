@@ -10,15 +10,16 @@ import { PageTitle } from "@/components/ui/page-title";
 import { SectionWorkspace } from "@/components/section-workspace/section-workspace";
 import { DocumentsPanel } from "@/components/documents/documents-panel";
 import type { SectionDocument } from "@/lib/stability";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Section" };
 
 export default async function SectionPage({ params }: { params: Promise<{ projectId: string; sectionId: string }> }) {
   const user = await requirePageUser();
   const p = await params;
-  const access = await findProjectAccess(user, Number(p.projectId));
+  const access = await findProjectAccess(user, pageId(p.projectId));
   if (!access) notFound();
-  const section = await fetchSection(access.project.id, Number(p.sectionId));
+  const section = await fetchSection(access.project.id, pageId(p.sectionId));
   if (!section) notFound();
   const current = await fetchSectionVersion(section.id, section.currentVersion);
   const doc = current!.document as SectionDocument;

@@ -6,12 +6,13 @@ import { findProjectAccess } from "@/lib/projects/access";
 import { can } from "@/lib/permissions";
 import { PageTitle } from "@/components/ui/page-title";
 import { NewSectionForm } from "@/components/section-workspace/new-section-form";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "New section" };
 
 export default async function NewSectionPage({ params }: { params: Promise<{ projectId: string }> }) {
   const user = await requirePageUser();
-  const access = await findProjectAccess(user, Number((await params).projectId));
+  const access = await findProjectAccess(user, pageId((await params).projectId));
   if (!access) notFound();
   if (!can(access.role, "section.edit"))
     return (

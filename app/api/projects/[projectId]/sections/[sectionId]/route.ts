@@ -6,7 +6,13 @@ import { requireProjectAccess } from "@/lib/projects/access";
 import { requireValidSection } from "@/lib/sections/check-document";
 import { summarizeChange } from "@/lib/sections/diff";
 import { saveSectionSchema } from "@/lib/validations/section";
-import { fetchSection, fetchSectionVersion, saveSectionVersion, StaleVersionError } from "@/db/queries/sections";
+import {
+  DuplicateSectionNameError,
+  fetchSection,
+  fetchSectionVersion,
+  saveSectionVersion,
+  StaleVersionError,
+} from "@/db/queries/sections";
 import type { SectionDocument } from "@/lib/stability";
 
 type Ctx = { params: Promise<{ projectId: string; sectionId: string }> };
@@ -50,6 +56,7 @@ export const PUT = apiRoute(async (request: Request, { params }: Ctx) => {
     return NextResponse.json({ section: { id: sectionId, version }, summary, warnings });
   } catch (err) {
     if (err instanceof StaleVersionError) throw conflict(`${err.message} Reload it, then apply your change again.`);
+    if (err instanceof DuplicateSectionNameError) throw conflict(`${err.message} Choose another name.`);
     throw err;
   }
 });

@@ -12,6 +12,7 @@ import { RevisionChain } from "@/components/review/revision-chain";
 import { AuditTrail } from "@/components/review/audit-trail";
 import { PreviewNotice } from "@/components/run-view/preview-notice";
 import { readPreviewCheck } from "@/lib/run-records/compare-preview";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Review" };
 
@@ -19,9 +20,9 @@ export const metadata: Metadata = { title: "Review" };
 export default async function RunReviewPage({ params }: { params: Promise<{ projectId: string; runId: string }> }) {
   const user = await requirePageUser();
   const p = await params;
-  const access = await findProjectAccess(user, Number(p.projectId));
+  const access = await findProjectAccess(user, pageId(p.projectId));
   if (!access) notFound();
-  const run = await fetchRun(access.project.id, Number(p.runId));
+  const run = await fetchRun(access.project.id, pageId(p.runId));
   if (!run) notFound();
   const review = await loadReviewState(run, { userId: user.id, role: access.role });
   const base = `/projects/${access.project.id}`;

@@ -11,6 +11,7 @@ import { RunSetupForm } from "@/components/run-setup/run-setup-form";
 import type { SectionDocument } from "@/lib/stability";
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { fetchRun } from "@/db/queries/runs";
+import { pageId, toId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "New run" };
 
@@ -23,9 +24,9 @@ export default async function NewRunPage({
 }) {
   const user = await requirePageUser();
   const p = await params;
-  const access = await findProjectAccess(user, Number(p.projectId));
+  const access = await findProjectAccess(user, pageId(p.projectId));
   if (!access) notFound();
-  const section = await fetchSection(access.project.id, Number(p.sectionId));
+  const section = await fetchSection(access.project.id, pageId(p.sectionId));
   if (!section) notFound();
   if (!can(access.role, "run.create")) {
     return (
@@ -37,7 +38,7 @@ export default async function NewRunPage({
   const version = await fetchSectionVersion(section.id, section.currentVersion);
   const requiredFs = await fetchRequiredFsMap(access.project.id);
   // "Revise as a new run" starts from the earlier run's settings, on the section as it is now.
-  const from = Number((await searchParams).from) || null;
+  const from = toId((await searchParams).from);
   const earlier = from ? await fetchRun(access.project.id, from) : null;
   const initial =
     earlier && earlier.sectionId === section.id ? (earlier.result as { setup?: RunSetup }).setup : undefined;

@@ -8,6 +8,7 @@ import { materialPalette } from "@/lib/sections/material-palette";
 import { PageTitle } from "@/components/ui/page-title";
 import { ReadOnlySection } from "@/components/section-workspace/read-only-section";
 import type { SectionDocument } from "@/lib/stability";
+import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Section version" };
 
@@ -18,11 +19,11 @@ export default async function SectionVersionPage({
 }) {
   const user = await requirePageUser();
   const p = await params;
-  const access = await findProjectAccess(user, Number(p.projectId));
+  const access = await findProjectAccess(user, pageId(p.projectId));
   if (!access) notFound();
-  const section = await fetchSection(access.project.id, Number(p.sectionId));
+  const section = await fetchSection(access.project.id, pageId(p.sectionId));
   if (!section) notFound();
-  const version = await fetchSectionVersion(section.id, Number(p.version));
+  const version = await fetchSectionVersion(section.id, pageId(p.version));
   if (!version) notFound();
   const doc = version.document as SectionDocument;
   return (

@@ -1,9 +1,9 @@
 import { NextResponse } from "next/server";
 import { apiRoute, parseId } from "@/lib/api/handler";
-import { notFound } from "@/lib/api/errors";
+import { conflict, notFound } from "@/lib/api/errors";
 import { requireUser } from "@/lib/auth/session";
 import { requireProjectAccess } from "@/lib/projects/access";
-import { fetchSection, fetchSectionVersion, saveSectionVersion } from "@/db/queries/sections";
+import { fetchSection, fetchSectionVersion, saveSectionVersion, StaleVersionError } from "@/db/queries/sections";
 
 type Ctx = { params: Promise<{ projectId: string; sectionId: string; version: string }> };
 
@@ -18,12 +18,16 @@ export const POST = apiRoute(async (_request: Request, { params }: Ctx) => {
   if (!section) throw notFound("The section");
   const old = await fetchSectionVersion(sectionId, parseId(p.version, "The version"));
   if (!old) throw notFound("The version");
+  // A save landing between the read above and this write makes the restore stale: 409, nothing written.
   const version = await saveSectionVersion({
     sectionId,
     baseVersion: section.currentVersion,
     document: old.document,
     summary: `Restored version ${old.version}`,
     userId: user.id,
+  }).catch((err: unknown) => {
+    if (err instanceof StaleVersionError) throw conflict(`${err.message} Reload it, then restore again.`);
+    throw err;
   });
   return NextResponse.json({ section: { id: sectionId, version } }, { status: 201 });
 });
