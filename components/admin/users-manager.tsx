@@ -2,7 +2,7 @@
 
 import useSWR from "swr";
 import { useState } from "react";
-import type { PublicUser } from "@/db/queries/users";
+import type { PublicUser } from "@/lib/users/types";
 import { ROLES, ROLE_LABELS } from "@/lib/permissions";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";

@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import type { LibraryMaterial } from "@/db/queries/materials";
-import type { LabTestSet } from "@/db/queries/lab-tests";
+import type { LibraryMaterial } from "@/lib/materials/types";
+import type { LabTestSet } from "@/lib/lab/types";
 import { LAB_KIND_INFO } from "@/lib/materials/lab-kinds";
 import { labInputToRows } from "@/lib/materials/lab-rows";
 import { MODEL_PARAMETERS, PARAMETER_INFO, type ParameterKey } from "@/lib/materials/parameters";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import type { LibraryMaterial } from "@/db/queries/materials";
+import type { LibraryMaterial } from "@/lib/materials/types";
 import type { MaterialParameters } from "@/lib/materials/parameters";
 import { parametersFromForm, type ParameterFormValues } from "@/lib/materials/parameter-form";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";

@@ -2,7 +2,7 @@
 
 import useSWR from "swr";
 import { useState } from "react";
-import type { ProjectMember } from "@/db/queries/projects";
+import type { ProjectMember } from "@/lib/projects/types";
 import { PROJECT_ROLES, type ProjectRole } from "@/lib/permissions";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";

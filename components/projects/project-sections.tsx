@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { SectionSummary } from "@/db/queries/sections";
+import type { SectionSummary } from "@/lib/sections/types";
 
 export function ProjectSections({ projectId, sections }: { projectId: number; sections: SectionSummary[] }) {
   return (

@@ -1,4 +1,4 @@
-import type { RunEvent } from "@/db/queries/review";
+import type { RunEvent } from "@/lib/review/types";
 import { STATUS_WORDS, type RunStatus } from "@/lib/review/status";
 
 const KIND_WORDS: Record<string, string> = {

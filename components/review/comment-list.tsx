@@ -1,4 +1,4 @@
-import type { RunComment } from "@/db/queries/review";
+import type { RunComment } from "@/lib/review/types";
 import { commentLabel } from "@/lib/review/comment-label";
 
 export interface CommentListProps {

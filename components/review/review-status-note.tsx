@@ -1,4 +1,4 @@
-import type { ReviewRecord } from "@/db/queries/review";
+import type { ReviewRecord } from "@/lib/review/types";
 
 const at = (iso: string | null) =>
   iso

@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { useState } from "react";
-import type { RunDetail } from "@/db/queries/runs";
+import type { RunDetail } from "@/lib/runs/types";
 import type { GridSearchSuccess, SectionDocument, SliceRow } from "@/lib/stability";
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";

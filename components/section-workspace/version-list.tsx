@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import type { SectionVersionMeta } from "@/db/queries/sections";
+import type { SectionVersionMeta } from "@/lib/sections/types";
 
 export interface VersionListProps {
   projectId: number;

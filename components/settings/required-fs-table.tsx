@@ -2,7 +2,7 @@
 
 import useSWR from "swr";
 import { useState } from "react";
-import type { ConditionSetting } from "@/db/queries/loading-conditions";
+import type { ConditionSetting } from "@/lib/analysis/types";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
 

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import type { Browser } from "playwright-core";
-import { appUrl, launchBrowser, signInAs, watchConsole } from "../support/browser";
+import { launchBrowser, signInAs, watchConsole } from "../support/browser";
 import { steepestPassingRatio } from "@/lib/design";
 
 let browser: Browser;
@@ -44,15 +44,13 @@ describe("slope design as a new designer would use it", () => {
     console.log(`browser sweep of the demo embankment: ${seconds.toFixed(1)} s`);
 
     // Read the table and apply the rule independently of the page: n* per case, the flattest per face.
-    const rows = await page
-      .getByTestId("sweep-row")
-      .evaluateAll((els) =>
-        els.map((e) => ({
-          caseKey: e.getAttribute("data-case")!,
-          ratio: Number(e.getAttribute("data-ratio")),
-          fs: e.getAttribute("data-fs") ? Number(e.getAttribute("data-fs")) : null,
-        })),
-      );
+    const rows = await page.getByTestId("sweep-row").evaluateAll((els) =>
+      els.map((e) => ({
+        caseKey: e.getAttribute("data-case")!,
+        ratio: Number(e.getAttribute("data-ratio")),
+        fs: e.getAttribute("data-fs") ? Number(e.getAttribute("data-fs")) : null,
+      })),
+    );
     expect(rows).toHaveLength(27);
     const required = { "steady-seepage": 1.5, "drawdown-storage": 1.3, "drawdown-surcharge": 1.1 } as const;
     const nStar = (k: keyof typeof required) =>
