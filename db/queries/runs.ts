@@ -1,26 +1,8 @@
 import type { Knex } from "knex";
 import { getDb } from "../index";
-
-export interface RunSummary {
-  id: number;
-  projectId: number;
-  sectionId: number;
-  sectionName: string;
-  sectionVersion: number;
-  title: string;
-  status: "draft" | "submitted" | "returned" | "approved";
-  loadCase: "steady" | "drawdown" | "undrained";
-  face: "upstream" | "downstream";
-  methods: string[];
-  requiredFs: number;
-  fsBishop: number | null;
-  fsFellenius: number | null;
-  authorId: number;
-  authorName: string;
-  createdAt: string;
-  revisesRunId: number | null;
-  loadingCondition: string;
-}
+import type { RunSummary, RunDetail, ChainLink, RunExportRow } from "../../lib/runs/types";
+// Re-exported so callers written before the move still compile; new code imports lib/runs/types.
+export type { RunSummary, RunDetail, ChainLink, RunExportRow };
 
 const num = (v: unknown) => (v === null || v === undefined ? null : Number(v));
 
@@ -80,13 +62,6 @@ export async function fetchRunsOfProject(projectId: number, db: Knex = getDb()):
     .orderBy("r.created_at", "desc")
     .orderBy("r.id", "desc");
   return rows.map(toRunSummary);
-}
-
-export interface RunDetail extends RunSummary {
-  engineVersion: string;
-  document: unknown;
-  result: unknown;
-  sliceTables: unknown;
 }
 
 export async function fetchRun(projectId: number, runId: number, db: Knex = getDb()): Promise<RunDetail | null> {
@@ -187,13 +162,6 @@ export async function deleteDraftRun(runId: number, db: Knex = getDb()): Promise
   });
 }
 
-export interface ChainLink {
-  id: number;
-  title: string;
-  status: RunSummary["status"];
-  createdAt: string;
-}
-
 /**
  * The revisions a run belongs to, oldest first: the runs it revises, back to the first, and the
  * runs that revise it, forward along each first revision.
@@ -233,11 +201,6 @@ export async function fetchRevisionChain(projectId: number, runId: number, db: K
     id = next.id;
   }
   return [...back, link(start), ...forward];
-}
-
-export interface RunExportRow extends RunSummary {
-  reviewedByName: string | null;
-  reviewedAt: string | null;
 }
 
 /** The project's runs with who signed them off, for the runs CSV. */

@@ -1,15 +1,8 @@
 import type { Knex } from "knex";
 import { getDb } from "../index";
-
-export interface SectionSummary {
-  id: number;
-  projectId: number;
-  name: string;
-  description: string;
-  currentVersion: number;
-  updatedAt: string;
-  updatedByName: string;
-}
+import type { SectionSummary, SectionVersionMeta, SectionDetail, StoredVersion } from "../../lib/sections/types";
+// Re-exported so callers written before the move still compile; new code imports lib/sections/types.
+export type { SectionSummary, SectionVersionMeta, SectionDetail, StoredVersion };
 
 export async function fetchSectionsOfProject(projectId: number, db: Knex = getDb()): Promise<SectionSummary[]> {
   const rows = await db("sections as s")
@@ -37,33 +30,6 @@ export async function fetchSectionsOfProject(projectId: number, db: Knex = getDb
     updatedAt: new Date(r.created_at as Date).toISOString(),
     updatedByName: r.user_name as string,
   }));
-}
-
-export interface SectionVersionMeta {
-  id: number;
-  version: number;
-  summary: string;
-  createdAt: string;
-  createdByName: string;
-}
-
-export interface SectionDetail {
-  id: number;
-  projectId: number;
-  name: string;
-  description: string;
-  currentVersion: number;
-  versions: SectionVersionMeta[];
-}
-
-export interface StoredVersion {
-  id: number;
-  sectionId: number;
-  version: number;
-  summary: string;
-  document: unknown;
-  createdAt: string;
-  createdByName: string;
 }
 
 export async function fetchSection(

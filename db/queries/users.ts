@@ -1,6 +1,9 @@
 import type { Knex } from "knex";
 import { getDb } from "../index";
 import type { Role } from "../../lib/permissions";
+import type { PublicUser } from "../../lib/users/types";
+// Re-exported so callers written before the move still compile; new code imports lib/users/types.
+export type { PublicUser };
 
 export interface UserRow {
   id: number;
@@ -10,15 +13,6 @@ export interface UserRow {
   role: Role;
   active: number | boolean;
   password_hash: string;
-}
-
-export interface PublicUser {
-  id: number;
-  organisationId: number;
-  email: string;
-  name: string;
-  role: Role;
-  active: boolean;
 }
 
 const toPublic = (r: UserRow): PublicUser => ({

@@ -4,7 +4,8 @@ import { notFound } from "next/navigation";
 import { requirePageUser } from "@/lib/auth/session";
 import { findProjectAccess } from "@/lib/projects/access";
 import { can } from "@/lib/permissions";
-import { fetchDesignContext, fetchDesignStudy } from "@/db/queries/design-studies";
+import { fetchDesignStudy } from "@/db/queries/design-studies";
+import { fetchDesignContext } from "@/lib/design/design-context";
 import { PageTitle } from "@/components/ui/page-title";
 import { DesignStudio } from "@/components/design/design-studio";
 

@@ -9,7 +9,8 @@ import { verifyCriticalCircles } from "@/lib/run-records/verify";
 import { ENGINE_VERSION, runGridSearch, validateSection } from "@/lib/stability";
 import { createRun } from "@/db/queries/runs";
 import { createSection, fetchSection } from "@/db/queries/sections";
-import { fetchDesignContext, freeSectionName } from "@/db/queries/design-studies";
+import { freeSectionName } from "@/db/queries/design-studies";
+import { fetchDesignContext } from "@/lib/design/design-context";
 import { requireStudy } from "../../study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };
