@@ -184,11 +184,13 @@ describe("geometryToCsv", () => {
       ],
       ["=bank"],
     );
+    // papaparse quotes the cells it escapes; the file starts with a byte-order mark and ends with CRLF.
     expect(text.split("\r\n")).toEqual([
-      "region,material,x,y",
-      "'=bank,'-fill,-1.5,-2",
-      "'=bank,'-fill,3,0",
-      "'=bank,'-fill,0,4",
+      "\uFEFFregion,material,x,y",
+      `"'=bank","'-fill",-1.5,-2`,
+      `"'=bank","'-fill",3,0`,
+      `"'=bank","'-fill",0,4`,
+      "",
     ]);
     const back = parseGeometryCsv(text);
     expect(back.ok && back.value).toEqual([

@@ -49,7 +49,7 @@ describe("parsePhreaticCsv (ENGINE-IO.md water.phreatic; ENGINE.md §1: x increa
         [-5, -1.25],
         [10, 0],
       ]),
-    ).toBe("x,y\r\n-5,-1.25\r\n10,0");
+    ).toBe("\uFEFFx,y\r\n-5,-1.25\r\n10,0\r\n");
     expect(parsePhreaticCsv(csvTemplates.phreatic).ok).toBe(true);
   });
 });
@@ -157,7 +157,7 @@ describe("parseMaterialsCsv (ENGINE-IO.md materials; bounds of ENGINE.md §1)", 
       [{ id: "-weak", model: "undrained", gamma: 17, su: 20, suGradient: 1.2, suDatum: -3 }],
       { "-weak": "@layer" },
     );
-    expect(text.split("\r\n")).toEqual([HEADER, "'-weak,'@layer,undrained,17,,,,20,1.2,-3"]);
+    expect(text.split("\r\n")).toEqual([`\uFEFF${HEADER}`, `"'-weak","'@layer",undrained,17,,,,20,1.2,-3`, ""]);
     expect(parseMaterialsCsv(csvTemplates.materials).ok).toBe(true);
   });
 });
