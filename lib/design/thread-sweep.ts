@@ -16,6 +16,7 @@ import { runSweepJob, type SweepPoint } from "./run-job";
 import { runWholeSweep, type SweepProgress } from "./sweep-runner";
 import type { SweepJob, SweepSettings } from "./sweep-plan";
 import type { ThreadReply, ThreadRequest } from "./sweep-thread-entry";
+import { createWorkerPool, type PoolWorker } from "../worker-pool";
 
 /** At most four threads: more gain little on the machines this runs on and crowd other requests. */
 export const MAX_THREADS = 4;
@@ -44,6 +45,22 @@ interface ThreadPool {
   close: () => Promise<void>;
 }
 
+/** A worker thread as the shared pool (lib/worker-pool.ts) sees it. */
+function poolWorker(w: Worker): PoolWorker<ThreadRequest, ThreadReply> {
+  return {
+    post: (message) => w.postMessage(message),
+    listen: (onReply, onFailure) => {
+      w.on("message", onReply);
+      w.on("error", onFailure);
+      return () => {
+        w.off("message", onReply);
+        w.off("error", onFailure);
+      };
+    },
+    terminate: () => w.terminate(),
+  };
+}
+
 function startPool(
   file: string,
   size: number,
@@ -51,49 +68,13 @@ function startPool(
   materials: Material[],
   settings: SweepSettings,
 ): ThreadPool {
-  const workers = Array.from({ length: size }, () => new Worker(file));
-  const idle = [...workers];
-  const waiting: ((w: Worker) => void)[] = [];
-  const take = () =>
-    new Promise<Worker>((resolve) => (idle.length ? resolve(idle.pop() as Worker) : waiting.push(resolve)));
-  const give = (w: Worker) => {
-    const next = waiting.shift();
-    if (next) next(w);
-    else idle.push(w);
-  };
-  let seq = 0;
+  const pool = createWorkerPool(Array.from({ length: size }, () => poolWorker(new Worker(file))));
   const execute = async (job: SweepJob): Promise<SweepPoint> => {
-    const w = await take();
-    const mine = ++seq;
-    try {
-      return await new Promise<SweepPoint>((resolve, reject) => {
-        const onMessage = (reply: ThreadReply) => {
-          if (reply.seq !== mine) return;
-          w.off("message", onMessage);
-          w.off("error", onError);
-          if ("point" in reply) resolve(reply.point);
-          else reject(new Error(reply.error));
-        };
-        const onError = (err: Error) => {
-          w.off("message", onMessage);
-          reject(err);
-        };
-        w.on("message", onMessage);
-        w.once("error", onError);
-        const request: ThreadRequest = { seq: mine, params, materials, job, settings };
-        w.postMessage(request);
-      });
-    } finally {
-      give(w);
-    }
+    const reply = await pool.request((seq) => ({ seq, params, materials, job, settings }));
+    if ("point" in reply) return reply.point;
+    throw new Error(reply.error);
   };
-  return {
-    execute,
-    size,
-    close: async () => {
-      await Promise.all(workers.map((w) => w.terminate()));
-    },
-  };
+  return { execute, size, close: pool.terminate };
 }
 
 export interface ServerSweepOutcome {
