@@ -32,6 +32,7 @@ import { SweepControls } from "./sweep-controls";
 import { SweepTable } from "./sweep-table";
 import { useDesignDraft } from "./use-design-draft";
 import { useSweep, type SweepWhere } from "./use-sweep";
+import { formatDateTime } from "@/lib/format";
 
 export interface DesignStudioProps {
   projectId: number;
@@ -216,10 +217,10 @@ export function DesignStudio(props: DesignStudioProps) {
             What the sweep shows
           </h2>
           <p className="text-xs text-ink-soft">
-            Swept {sweep.ranOn === "server" ? "on the server" : "in the browser"} on{" "}
-            {new Date(sweep.finishedAt).toLocaleString("en-GB")} in {(sweep.elapsedMs / 1000).toFixed(1)} s; each face
-            swept with the other as entered ({sweptParams.upstreamSlope}:1 upstream, {sweptParams.downstreamSlope}:1
-            downstream). Required FS from the project&apos;s loading conditions.
+            Swept {sweep.ranOn === "server" ? "on the server" : "in the browser"} on {formatDateTime(sweep.finishedAt)}{" "}
+            in {(sweep.elapsedMs / 1000).toFixed(1)} s; each face swept with the other as entered (
+            {sweptParams.upstreamSlope}:1 upstream, {sweptParams.downstreamSlope}:1 downstream). Required FS from the
+            project&apos;s loading conditions.
           </p>
           <RecommendationPanel
             reading={reading}

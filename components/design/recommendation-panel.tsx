@@ -1,6 +1,7 @@
 "use client";
 
 import { sweepCase, type SweepReading } from "@/lib/design";
+import { formatCount } from "@/lib/format";
 
 export interface RecommendationPanelProps {
   reading: SweepReading;
@@ -13,7 +14,7 @@ export interface RecommendationPanelProps {
   crestLength: number;
 }
 
-const m3 = (v: number) => Math.round(v).toLocaleString("en-GB");
+const m3 = (v: number) => formatCount(Math.round(v));
 
 /** The steepest pair of face slopes that meets every required FS, and what it costs in fill. */
 export function RecommendationPanel({

@@ -11,6 +11,7 @@ import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FormBanner } from "@/components/ui/form-message";
 import { LabResultPlot } from "./lab-result-plot";
 import { LabResultSummary } from "./lab-result-summary";
+import { formatDate } from "@/lib/format";
 
 export interface LabTestCardProps {
   projectId: number;
@@ -73,7 +74,7 @@ export function LabTestCard({ projectId, material, set, canEdit, onChanged }: La
           </p>
           <h3 className="font-semibold">{set.name}</h3>
           <p className="text-xs text-ink-faint">
-            Entered by {set.createdByName} on {new Date(set.createdAt).toLocaleDateString("en-GB")}
+            Entered by {set.createdByName} on {formatDate(set.createdAt)}
           </p>
         </div>
         {canEdit ? (

@@ -7,6 +7,7 @@ import type { RunSummary } from "@/lib/runs/types";
 import { criticalRunIds, governingFs } from "@/lib/run-records/critical-cases";
 import { LOADING_CONDITIONS, loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import { PassMark, StatusBadge } from "./status-badge";
+import { formatDateTime } from "@/lib/format";
 
 type SortKey = "createdAt" | "fs" | "title" | "condition" | "author";
 
@@ -210,9 +211,7 @@ export function RunsTable({ projectId, runs }: { projectId: number; runs: RunSum
                 <StatusBadge status={r.status} />
               </td>
               <td className="px-2 py-1.5">{r.authorName}</td>
-              <td className="px-2 py-1.5 tabular-nums text-ink-soft">
-                {new Date(r.createdAt).toLocaleString("en-GB", { dateStyle: "short", timeStyle: "short" })}
-              </td>
+              <td className="px-2 py-1.5 tabular-nums text-ink-soft">{formatDateTime(r.createdAt)}</td>
             </tr>
           ))}
           {shown.length === 0 ? (

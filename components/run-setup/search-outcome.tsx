@@ -8,6 +8,7 @@ import { FsSummary } from "@/components/runs/fs-summary";
 import { SliceTable } from "@/components/runs/slice-table";
 import type { WorkerMessage } from "./grid-search.worker";
 import { loadingCondition } from "@/lib/analysis/required-fs";
+import { formatCount } from "@/lib/format";
 
 export interface SearchOutcomeProps {
   projectId: number;
@@ -60,7 +61,7 @@ export function SearchOutcome({ projectId, section, setup, outcome, revisesRunId
   return (
     <div className="space-y-3" data-testid="search-outcome">
       <p className="text-xs text-ink-faint">
-        {result.circles.tried.toLocaleString("en-GB")} circles in {(outcome.elapsedMs / 1000).toFixed(2)} s
+        {formatCount(result.circles.tried)} circles in {(outcome.elapsedMs / 1000).toFixed(2)} s
       </p>
       <FsSummary result={result} requiredFs={setup.requiredFs} critical={critical} />
       <div className="panel flex flex-wrap items-end gap-3 p-3">

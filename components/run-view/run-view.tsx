@@ -14,6 +14,7 @@ import { SliceTable } from "@/components/runs/slice-table";
 import { StatusBadge } from "@/components/run-list/status-badge";
 import { PinnedCanvas } from "@/components/review/pinned-canvas";
 import type { PinMarker } from "@/lib/review/pin-markers";
+import { formatDateTime } from "@/lib/format";
 
 type Method = "bishop" | "fellenius";
 export type StoredResult = GridSearchSuccess & { setup: RunSetup };
@@ -64,7 +65,7 @@ export function RunView({
           {run.sectionName} v{run.sectionVersion}
         </span>
         <span>
-          by {run.authorName}, {new Date(run.createdAt).toLocaleString("en-GB")}
+          by {run.authorName}, {formatDateTime(run.createdAt)}
         </span>
         <span>engine {run.engineVersion}</span>
         {run.revisesRunId ? (

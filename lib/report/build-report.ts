@@ -15,6 +15,7 @@ import type { MaterialSourceRecord } from "../review/material-sources";
 import { ALARM, MOSS, ReportWriter, SOFT, INK } from "./report-writer";
 import { drawSection } from "./section-drawing";
 import { writeSliceTable } from "./slice-pages";
+import { formatCount, formatDateTime } from "../format";
 
 export interface ReportInput {
   projectName: string;
@@ -53,7 +54,7 @@ export interface ReportInput {
   generatedBy: string;
 }
 
-const day = (iso: string | null) => (iso ? new Date(iso).toISOString().replace("T", " ").slice(0, 16) + " UTC" : "—");
+const day = (iso: string | null) => (iso ? formatDateTime(iso) : "—");
 const m2 = (v: number) => v.toFixed(2);
 
 function radiiText(r: Radii | undefined): string {
@@ -145,10 +146,7 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
     ],
     ["Radii", radiiText(doc.analysis?.radii)],
     ["Refinement", doc.analysis?.refine ? "finer nested grids around the best centres" : "none"],
-    [
-      "Circles",
-      `${run.result.circles.tried.toLocaleString("en-GB")} tried, ${run.result.circles.valid.toLocaleString("en-GB")} valid`,
-    ],
+    ["Circles", `${formatCount(run.result.circles.tried)} tried, ${formatCount(run.result.circles.valid)} valid`],
     ...rejectionList(run.result.circles.rejected).map((r): [string, string] => ["Rejected", `${r.count} — ${r.text}`]),
   ]);
 }
