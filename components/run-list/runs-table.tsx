@@ -8,6 +8,7 @@ import { criticalRunIds, governingFs } from "@/lib/run-records/critical-cases";
 import { LOADING_CONDITIONS, loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import { PassMark, StatusBadge } from "./status-badge";
 import { formatDateTime } from "@/lib/format";
+import { RUN_STATUSES, STATUS_LABELS } from "@/lib/review/status";
 
 type SortKey = "createdAt" | "fs" | "title" | "condition" | "author";
 
@@ -110,12 +111,11 @@ export function RunsTable({ projectId, runs }: { projectId: number; runs: RunSum
           ["bishop", "Bishop"],
           ["fellenius", "Ordinary"],
         ])}
-        {select("status", "Status", [
-          ["draft", "Draft"],
-          ["submitted", "Awaiting review"],
-          ["returned", "Returned"],
-          ["approved", "Signed off"],
-        ])}
+        {select(
+          "status",
+          "Status",
+          RUN_STATUSES.map((s) => [s, STATUS_LABELS[s]]),
+        )}
         {select(
           "author",
           "Author",

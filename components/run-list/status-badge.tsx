@@ -1,13 +1,16 @@
-const STYLES: Record<string, { label: string; cls: string; mark: string }> = {
-  draft: { label: "Draft", cls: "border-rule text-ink-soft", mark: "○" },
-  submitted: { label: "Awaiting review", cls: "border-clay-500 text-clay-700", mark: "◐" },
-  returned: { label: "Returned", cls: "border-alarm-600 text-alarm-700", mark: "↺" },
-  approved: { label: "Signed off", cls: "border-moss-600 text-moss-700", mark: "●" },
+import { isRunStatus, STATUS_LABELS, type RunStatus } from "@/lib/review/status";
+
+const STYLES: Record<RunStatus, { cls: string; mark: string }> = {
+  draft: { cls: "border-rule text-ink-soft", mark: "○" },
+  submitted: { cls: "border-clay-500 text-clay-700", mark: "◐" },
+  returned: { cls: "border-alarm-600 text-alarm-700", mark: "↺" },
+  approved: { cls: "border-moss-600 text-moss-700", mark: "●" },
 };
 
 /** Status with a shape as well as a colour, so it reads in grey print. */
 export function StatusBadge({ status }: { status: string }) {
-  const s = STYLES[status] ?? STYLES.draft;
+  const key = isRunStatus(status) ? status : "draft";
+  const s = { ...STYLES[key], label: STATUS_LABELS[key] };
   return (
     <span
       className={`inline-flex items-center gap-1 rounded border px-1.5 py-0.5 text-xs ${s.cls}`}

@@ -20,7 +20,15 @@ export const TRANSITIONS: Record<TransitionAction, Transition> = {
   return: { from: "submitted", to: "returned" },
 };
 
-/** Words for a status in sentences, mail and the report (the badge has its own short labels). */
+/** Short labels of a status, for its badge and the runs filter. */
+export const STATUS_LABELS: Record<RunStatus, string> = {
+  draft: "Draft",
+  submitted: "Awaiting review",
+  returned: "Returned",
+  approved: "Signed off",
+};
+
+/** Words for a status in sentences, mail and the report (the badge and filter use STATUS_LABELS). */
 export const STATUS_WORDS: Record<RunStatus, string> = {
   draft: "draft",
   submitted: "awaiting review",
