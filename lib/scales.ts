@@ -3,7 +3,7 @@
  * steps, after Heckbert, "Nice numbers for graph labels", Graphics Gems, 1990) from d3-scale and
  * d3-array, plus the pixel-spaced ticks of the zoomable canvases. Free of React so it is tested alone.
  */
-import { tickStep, ticks } from "d3-array";
+import { ticks } from "d3-array";
 import { scaleLinear } from "d3-scale";
 
 export type Scale = (value: number) => number;
@@ -12,11 +12,6 @@ export type Scale = (value: number) => number;
 export function linearScale(domain: readonly [number, number], range: readonly [number, number]): Scale {
   const scale = scaleLinear().domain(domain).range(range);
   return (value) => scale(value);
-}
-
-/** The nice step d3 chooses for about `count` ticks over [lo, hi]. */
-export function niceStep(lo: number, hi: number, count = 5): number {
-  return Math.abs(tickStep(Math.min(lo, hi), Math.max(lo, hi), count));
 }
 
 /**

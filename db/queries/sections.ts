@@ -82,11 +82,6 @@ export async function fetchSectionVersion(
   };
 }
 
-export async function fetchSectionVersionById(versionId: number, db: Knex = getDb()): Promise<StoredVersion | null> {
-  const v = await db("section_versions").where({ id: versionId }).first();
-  return v ? fetchSectionVersion(v.section_id, v.version, db) : null;
-}
-
 /** Creates a section with its first version, in one transaction. */
 export async function createSection(
   input: { projectId: number; name: string; description: string; document: unknown; summary: string; userId: number },

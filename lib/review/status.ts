@@ -36,12 +36,6 @@ export const STATUS_WORDS: Record<RunStatus, string> = {
   approved: "signed off",
 };
 
-export const ACTION_WORDS: Record<TransitionAction, string> = {
-  submit: "Submit for review",
-  approve: "Sign off",
-  return: "Return with comments",
-};
-
 export function isRunStatus(value: string): value is RunStatus {
   return (RUN_STATUSES as readonly string[]).includes(value);
 }

@@ -37,16 +37,6 @@ export function arcPoints(c: Circle, from: Pt, to: Pt, maxStepDeg = 2): number[]
   return out;
 }
 
-/** Points of the whole circle, for faint context outlines. */
-export function fullCirclePoints(c: Circle, segments = 96): number[] {
-  const out: number[] = [];
-  for (let i = 0; i < segments; i++) {
-    const t = (2 * Math.PI * i) / segments;
-    out.push(c.xc + c.r * Math.cos(t), c.yc + c.r * Math.sin(t));
-  }
-  return out;
-}
-
 /** A slice's side: a vertical from the arc up to the top of the soil. */
 export interface SliceSide {
   x: number;

@@ -1,3 +1,4 @@
+import { tickStep } from "d3-array";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
@@ -7,7 +8,6 @@ import {
   linearScale,
   niceDomain,
   niceLengthBelow,
-  niceStep,
   niceStepAtLeast,
   niceTicks,
 } from "@/lib/scales";
@@ -21,9 +21,9 @@ const isNice = (v: number) => {
 // Graphics Gems (1990); the exact steps below are worked by hand from that rule.
 describe("ticks of the plots and legends (about `count` ticks)", () => {
   it("uses 1, 2 or 5 × 10^k steps", () => {
-    expect(niceStep(0, 300, 5)).toBe(50);
-    expect(niceStep(0, 1, 5)).toBe(0.2);
-    expect(niceStep(0, 1.5, 5)).toBe(0.2);
+    expect(tickStep(0, 300, 5)).toBe(50);
+    expect(tickStep(0, 1, 5)).toBe(0.2);
+    expect(tickStep(0, 1.5, 5)).toBe(0.2);
     expect(niceTicks(0.8, 2.3, 5)).toEqual([0.8, 1, 1.2, 1.4, 1.6, 1.8, 2, 2.2]);
     expect(niceTicks(0, 100, 4)).toEqual([0, 20, 40, 60, 80, 100]);
     expect(niceTicks(0, 300, 6)).toEqual([0, 50, 100, 150, 200, 250, 300]);
@@ -45,7 +45,7 @@ describe("ticks of the plots and legends (about `count` ticks)", () => {
         (lo, span, n) => {
           const t = niceTicks(lo, lo + span, n);
           expect(t.length).toBeGreaterThan(0);
-          const step = niceStep(lo, lo + span, n);
+          const step = tickStep(lo, lo + span, n);
           expect(isNice(step)).toBe(true);
           for (const v of t) {
             expect(v).toBeGreaterThanOrEqual(lo - step * 1e-6);
