@@ -1,7 +1,7 @@
 /**
  * A first search grid for a face, so a new run starts somewhere sensible: centres above the
  * face from a little beyond its toe to past the crest, tangent elevations from just below the
- * toe down to the section's base (after the automatic grid of ENGINE.md §9). The engineer moves
+ * toe down to the section's base (after the automatic grid of docs/engine.md §9). The engineer moves
  * it; the search warns when its minimum sits on the grid's edge.
  */
 import type { SectionDocument } from "../stability";

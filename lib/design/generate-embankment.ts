@@ -1,5 +1,5 @@
 /**
- * Turns the parametric embankment into an ordinary section document (ENGINE-IO.md, version 1)
+ * Turns the parametric embankment into an ordinary section document (docs/engine-io.md, version 1)
  * that the section editor opens and changes like any other: regions for the base, the foundation,
  * the fill (or core and shells) and the toe drain, and the phreatic line for the chosen pool.
  */

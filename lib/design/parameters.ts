@@ -1,5 +1,5 @@
 /**
- * The parametric embankment a designer describes by its dimensions (ENGINE.md §9). One zod
+ * The parametric embankment a designer describes by its dimensions (docs/engine.md §9). One zod
  * schema serves the parameters form in the browser and every design route on the server.
  * Units: metres (elevations and lengths), H:V ratios, m/s for permeability.
  * Reservoir on the left: the upstream face is the left face of the generated section.

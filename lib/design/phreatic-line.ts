@@ -1,6 +1,6 @@
 /**
  * The phreatic line of the generated section for one pool: the engine's Kozeny–Casagrande
- * construction (ENGINE.md §6) for a homogeneous fill on an impervious foundation with the toe
+ * construction (docs/engine.md §6) for a homogeneous fill on an impervious foundation with the toe
  * drain as its filter, or the designer's hand-drawn line. Outside the method's limits (a zoned
  * dam, a pervious foundation, a berm under water, a line that emerges on the face) it returns
  * the reasons and asks for a hand-drawn line rather than guessing one.

@@ -1,7 +1,7 @@
 /**
  * Drawing geometry of slip circles: points along the lower arc between a slip mass's two
  * ends, and the slice boundaries from the arc up to the ground. Only the lower arc is a
- * slip surface (ENGINE.md §3), so every point returned lies at or below the centre.
+ * slip surface (docs/engine.md §3), so every point returned lies at or below the centre.
  */
 import type { Circle } from "@/lib/stability";
 

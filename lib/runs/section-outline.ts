@@ -1,6 +1,6 @@
 /**
  * The section as the run canvas draws it: its extent, the ground surface, and the ponded
- * water (ENGINE-IO.md: where the phreatic line lies above the ground, the water between is
+ * water (docs/engine-io.md: where the phreatic line lies above the ground, the water between is
  * ponded reservoir water), plus where a lowered pool level lies over the water side.
  */
 import type { SectionDocument } from "@/lib/stability";

@@ -23,7 +23,7 @@ interface RegionDraft {
 /**
  * Parses a geometry CSV: header `region,material,x,y`, one row per polygon vertex in order, the rows
  * of one region together, the material required on each region's first row (optional after it).
- * Returns `regions` shaped as ENGINE-IO.md's document ({material, points}[]), first point not repeated.
+ * Returns `regions` shaped as docs/engine-io.md's document ({material, points}[]), first point not repeated.
  */
 export function parseGeometryCsv(text: string, options: GeometryCsvOptions = {}): CsvParseResult<SectionRegion[]> {
   const problems: CsvProblem[] = [];

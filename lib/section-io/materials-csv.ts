@@ -17,9 +17,9 @@ export const MATERIAL_COLUMNS = [
 type NumberColumn = "gamma" | "gammaSat" | "c" | "phi" | "su" | "suGradient" | "suDatum";
 type Model = (typeof MATERIAL_MODELS)[number];
 
-/** Columns each model needs, may use, and ignores (ENGINE-IO.md, `materials[].model`). */
+/** Columns each model needs, may use, and ignores (docs/engine-io.md, `materials[].model`). */
 const NEEDS: Record<Model, { required: NumberColumn[]; optional: NumberColumn[] }> = {
-  // su on a drained material is its end-of-construction strength (ENGINE-IO.md load case "undrained").
+  // su on a drained material is its end-of-construction strength (docs/engine-io.md load case "undrained").
   "mohr-coulomb": { required: ["gamma", "c", "phi"], optional: ["gammaSat", "su", "suGradient", "suDatum"] },
   undrained: { required: ["gamma", "su"], optional: ["gammaSat", "suGradient", "suDatum"] },
   impenetrable: { required: [], optional: [] },
@@ -36,7 +36,7 @@ export interface MaterialsCsvValue {
 /**
  * Parses a materials CSV: header `id,name,model,gamma,gammaSat,c,phi,su,suGradient,suDatum`;
  * `model` is mohr-coulomb (needs gamma, c, phi), undrained (gamma, su; suDatum when suGradient is
- * given) or impenetrable (nothing). Values are checked against ENGINE.md §1's bounds: outside the
+ * given) or impenetrable (nothing). Values are checked against docs/engine.md §1's bounds: outside the
  * error range is a problem, outside the usual range a warning. Ids must be unique.
  */
 export function parseMaterialsCsv(text: string): CsvParseResult<MaterialsCsvValue> {
@@ -139,7 +139,7 @@ function buildMaterial(id: string, model: Model, n: Partial<Record<NumberColumn,
   };
 }
 
-/** ENGINE.md §1 bounds (error / warning): γ ∉ (5, 30] / ∉ [14, 24]; γsat ≤ γw / < γ; c' < 0 / > 200; φ' ∉ [0, 60) / > 45; su ≤ 0 / > 500. */
+/** docs/engine.md §1 bounds (error / warning): γ ∉ (5, 30] / ∉ [14, 24]; γsat ≤ γw / < γ; c' < 0 / > 200; φ' ∉ [0, 60) / > 45; su ≤ 0 / > 500. */
 function checkBounds(r: RowReader, m: SectionMaterial, warnings: CsvProblem[]): void {
   if (m.model === "impenetrable") return;
   const warn = (col: string, message: string) => warnings.push(r.at(col, message));

@@ -53,7 +53,7 @@ describe("materials library", () => {
     });
     expect(badKey.status).toBe(400);
     expect((await badKey.json()).error.fields.key).toEqual([MATERIAL_KEY_HINT]);
-    // ENGINE.md §1: φ' must lie in [0°, 60°).
+    // docs/engine.md §1: φ' must lie in [0°, 60°).
     const badPhi = await engineer.request(`${base}/materials`, {
       method: "POST",
       json: { key: "steep", name: "x", parameters: { model: "mohr-coulomb", gamma: 19, c: 0, phi: 65 } },
