@@ -199,4 +199,3 @@ export async function seedDemoMaterials(
       .update({ parameters: JSON.stringify(parameters), sources: JSON.stringify(sources) });
   }
 }
-

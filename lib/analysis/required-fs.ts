@@ -61,4 +61,3 @@ export const GUIDANCE_NOTE =
 export function loadingCondition(key: LoadingConditionKey) {
   return LOADING_CONDITIONS.find((c) => c.key === key)!;
 }
-

@@ -124,4 +124,3 @@ export const LAB_KIND_INFO: Record<LabTestKind, LabKindInfo> = {
 
 /** The noun lib/lab uses in its row messages ("test 3: …"). */
 export const LAB_ROW_NOUN = "test";
-
