@@ -137,7 +137,9 @@ describe("materials library", () => {
     const body = await shape.json();
     expect(body.error.code).toBe("invalid_lab_data");
     expect(body.error.message).toMatch(/test 2/);
-    expect(body.error.fields["row 2, column normalStress"].join(" ")).toMatch(/normal stress must be positive/);
+    expect(body.error.fields["row 2, column normalStress"]).toEqual([
+      expect.stringMatching(/^test 2: Normal stress σn \(kPa\): Too small: expected number to be >0/),
+    ]);
 
     // Passes the schema but not the physics: σ3 − u must be positive (lib/lab's own check).
     const physics = await engineer.request(`${base}/lab-tests`, {
