@@ -17,7 +17,7 @@ export function useMaterialSave() {
     values: ParameterFormValues,
     request: (parameters: MaterialParameters) => { url: string; method: "POST" | "PUT"; json: Record<string, unknown> },
     onDone: (material: LibraryMaterial) => string,
-  ): Promise<void> {
+  ): Promise<boolean> {
     return run(async () => {
       const parsed = parametersFromForm(values);
       if (!parsed.ok) throw new FormProblem("", parsed.fields);

@@ -35,13 +35,15 @@ export function useApiForm(send?: (form: FormData, element: HTMLFormElement) => 
   const [notice, setNotice] = useState<FormNotice | null>(null);
   const [busy, setBusy] = useState(false);
 
-  async function run(task: () => Promise<string | void>): Promise<void> {
+  /** Runs one submission; resolves true when it went through. */
+  async function run(task: () => Promise<string | void>): Promise<boolean> {
     setFields({});
     setNotice(null);
     setBusy(true);
     try {
       const ok = await task();
       if (ok) setNotice({ kind: "ok", text: ok });
+      return true;
     } catch (err) {
       if (err instanceof ApiClientError) {
         setFields(err.fields);
@@ -50,6 +52,7 @@ export function useApiForm(send?: (form: FormData, element: HTMLFormElement) => 
         setFields(err.fields);
         if (err.message) setNotice({ kind: "error", text: err.message });
       } else setNotice({ kind: "error", text: "Could not reach the server." });
+      return false;
     } finally {
       setBusy(false);
     }
