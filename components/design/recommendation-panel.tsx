@@ -45,8 +45,10 @@ export function RecommendationPanel({
               </dd>
               <dd className="text-xs text-ink-soft">
                 {f.ratio === null
-                  ? `${f.governing ? sweepCase(f.governing).label : "A case"} does not reach its required FS even at the flattest ratio tried: widen the range, add a berm, or change the materials.`
-                  : `Governed by ${sweepCase(f.governing!).label.toLowerCase()}; entered ${entered[face].toFixed(2)}H:1V.`}
+                  ? `${f.governing ? sweepCase(f.governing).label : "A case"} does not reach its required FS ` +
+                    "even at the flattest ratio tried: widen the range, add a berm, or change the materials."
+                  : `Governed by ${sweepCase(f.governing!).label.toLowerCase()}; ` +
+                    `entered ${entered[face].toFixed(2)}H:1V.`}
               </dd>
               {f.fillArea !== null ? (
                 <dd className="text-xs text-ink-soft">

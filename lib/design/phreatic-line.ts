@@ -57,14 +57,18 @@ function methodLimits(p: EmbankmentParams): SeepageLimit[] {
     limits.push({
       code: "E_DESIGN_ZONED",
       severity: "error",
-      message: `A zoned dam (core and shells) is outside the basic parabola's limits: it assumes one homogeneous fill. ${HAND_LINE_REQUEST}`,
+      message:
+        "A zoned dam (core and shells) is outside the basic parabola's limits: it assumes one homogeneous fill. " +
+        HAND_LINE_REQUEST,
     });
   }
   if (!p.foundationImpervious) {
     limits.push({
       code: "E_DESIGN_PERVIOUS_FOUNDATION",
       severity: "error",
-      message: `The foundation is marked as not much less permeable than the fill: the method needs an impervious base under the fill. ${HAND_LINE_REQUEST}`,
+      message:
+        "The foundation is marked as not much less permeable than the fill: the method needs an impervious base " +
+        `under the fill. ${HAND_LINE_REQUEST}`,
     });
   }
   return limits;

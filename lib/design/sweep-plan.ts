@@ -19,7 +19,10 @@ export interface SweepCase {
   label: string;
 }
 
-/** Downstream: long-term steady seepage at the normal pool. Upstream: rapid drawdown from the normal or the flood pool. */
+/**
+ * Downstream: long-term steady seepage at the normal pool. Upstream: rapid drawdown from the normal
+ * or the flood pool.
+ */
 export const SWEEP_CASES: readonly SweepCase[] = [
   {
     key: "steady-seepage",

@@ -36,7 +36,11 @@ export function verifySweepPoint(
     fs === undefined ||
     Math.abs(fs - point.fsBishop) > SWEEP_FS_TOLERANCE * Math.max(1, Math.abs(fs))
   ) {
-    return `${where}: the Bishop FS sent (${point.fsBishop}) does not match the server's re-run of the same circle (${fs === null || fs === undefined ? "no valid result" : fs.toFixed(6)}).`;
+    const rerun = fs === null || fs === undefined ? "no valid result" : fs.toFixed(6);
+    return (
+      `${where}: the Bishop FS sent (${point.fsBishop}) does not match ` +
+      `the server's re-run of the same circle (${rerun}).`
+    );
   }
   return null;
 }
