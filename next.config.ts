@@ -6,8 +6,6 @@ const nextConfig: NextConfig = {
   serverExternalPackages: ["knex", "mysql2", "nodemailer", "bcryptjs"],
   // Tests build into their own folder so they never clobber the build `npm start` serves.
   distDir: process.env.NEXT_DIST_DIR || ".next",
-  // `npm test` type-checks the whole tree once with tsc; the build need not repeat it.
-  typescript: { ignoreBuildErrors: true },
   reactStrictMode: true,
   poweredByHeader: false,
   async headers() {

@@ -1,5 +1,5 @@
 /**
- * Command-line tool of the stability engine (ENGINE-IO.md):
+ * Command-line tool of the stability engine (docs/engine-io.md):
  *   npx tsx scripts/analyze.ts section.json                       grid search
  *   npx tsx scripts/analyze.ts section.json --circle xc,yc,r      one circle, slice table
  *   cat section.json | npx tsx scripts/analyze.ts -               read standard input

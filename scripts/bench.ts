@@ -1,5 +1,5 @@
 /**
- * Benchmark of the stability engine (ENGINE.md §5 "Performance"): a three-material
+ * Benchmark of the stability engine (docs/engine.md §5 "Performance"): a three-material
  * embankment with a phreatic line, 50 slices, Bishop's simplified and the ordinary method,
  * a 40 × 40 centre grid × 20 radii (32,000 circles), on one core. Prints figures only;
  * the last line is `circles_per_second=N`. Target: ≥ 100,000 circles/s, search < 0.5 s.

@@ -1,5 +1,5 @@
 /**
- * Database chores: `tsx scripts/db.ts migrate | rollback | seed | reset`.
+ * Database chores: `tsx scripts/db.ts migrate | rollback | seed` (npm run db:migrate, db:rollback, db:seed).
  * Migrations are listed in db/migrations/index.ts, so no TypeScript loader is needed by knex.
  */
 import knex from "knex";

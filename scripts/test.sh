@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# Runs every test: type check, unit, integration (real MariaDB, the built app over HTTP) and
+# Runs every test: lint and format check, type check, unit, integration (real MariaDB, the built app over HTTP) and
 # end-to-end (Debian's Chromium). Starts what they need and leaves nothing running it started.
 set -euo pipefail
 . "$(dirname "$0")/lib/common.sh"
@@ -16,6 +16,10 @@ bash scripts/db-start.sh
 cleanup() { [ "$db_was_running" = 1 ] || bash scripts/db-stop.sh >/dev/null 2>&1 || true; }
 trap cleanup EXIT
 load_env
+
+log "lint and format check"
+npm run --silent lint || die "lint failed: run npm run lint and fix what it reports"
+npm run --silent format:check || die "format check failed: run npm run format"
 
 log "type check"
 npx tsc --noEmit -p . || die "type check failed"

@@ -1,8 +1,8 @@
 "use client";
 
-import { useState } from "react";
-import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
+import { fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
+import { useApiForm } from "@/components/ui/use-api-form";
 
 const FIELDS = [
   ["currentPassword", "Current password", "current-password"],
@@ -11,29 +11,18 @@ const FIELDS = [
 ] as const;
 
 export function PasswordForm() {
-  const [fields, setFields] = useState<Record<string, string[]>>({});
-  const [banner, setBanner] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
-
-  async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const el = event.currentTarget;
-    const form = new FormData(el);
-    setFields({});
-    setBanner(null);
-    try {
-      await fetchJson("/api/account/password", {
-        method: "POST",
-        json: Object.fromEntries(FIELDS.map(([k]) => [k, String(form.get(k) ?? "")])),
-      });
-      el.reset();
-      setBanner({ kind: "ok", text: "Password changed." });
-    } catch (err) {
-      if (err instanceof ApiClientError) {
-        setFields(err.fields);
-        setBanner({ kind: "error", text: err.message });
-      } else setBanner({ kind: "error", text: "Could not reach the server." });
-    }
-  }
+  const {
+    onSubmit,
+    fields,
+    notice: banner,
+  } = useApiForm(async (form, el) => {
+    await fetchJson("/api/account/password", {
+      method: "POST",
+      json: Object.fromEntries(FIELDS.map(([k]) => [k, String(form.get(k) ?? "")])),
+    });
+    el.reset();
+    return "Password changed.";
+  });
 
   return (
     <form onSubmit={onSubmit} className="panel space-y-3 p-4" noValidate>

@@ -1,43 +1,32 @@
 "use client";
 
 import useSWR from "swr";
-import { useState } from "react";
-import type { PublicUser } from "@/db/queries/users";
+import type { PublicUser } from "@/lib/users/types";
 import { ROLES, ROLE_LABELS } from "@/lib/permissions";
-import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
+import { fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
+import { useApiForm } from "@/components/ui/use-api-form";
 
 export function UsersManager({ initialUsers }: { initialUsers: PublicUser[] }) {
   const { data, mutate } = useSWR<{ users: PublicUser[] }>("/api/users", { fallbackData: { users: initialUsers } });
-  const [fields, setFields] = useState<Record<string, string[]>>({});
-  const [banner, setBanner] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
-
-  async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const el = event.currentTarget;
-    const form = new FormData(el);
-    setFields({});
-    setBanner(null);
-    try {
-      await fetchJson("/api/users", {
-        method: "POST",
-        json: {
-          email: form.get("email"),
-          name: form.get("name"),
-          role: form.get("role"),
-          password: form.get("password"),
-        },
-      });
-      el.reset();
-      setBanner({ kind: "ok", text: "User added. Give them their e-mail and first password in person." });
-      await mutate();
-    } catch (err) {
-      if (err instanceof ApiClientError) {
-        setFields(err.fields);
-        setBanner({ kind: "error", text: err.message });
-      } else setBanner({ kind: "error", text: "Could not reach the server." });
-    }
-  }
+  const {
+    onSubmit,
+    fields,
+    notice: banner,
+  } = useApiForm(async (form, el) => {
+    await fetchJson("/api/users", {
+      method: "POST",
+      json: {
+        email: form.get("email"),
+        name: form.get("name"),
+        role: form.get("role"),
+        password: form.get("password"),
+      },
+    });
+    el.reset();
+    await mutate();
+    return "User added. Give them their e-mail and first password in person.";
+  });
 
   return (
     <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">

@@ -32,6 +32,7 @@ import { SweepControls } from "./sweep-controls";
 import { SweepTable } from "./sweep-table";
 import { useDesignDraft } from "./use-design-draft";
 import { useSweep, type SweepWhere } from "./use-sweep";
+import { formatDateTime } from "@/lib/format";
 
 export interface DesignStudioProps {
   projectId: number;
@@ -46,6 +47,11 @@ export interface DesignStudioProps {
 }
 
 /** The design study: parameters, the generated section, seepage, the sweep and what it recommends. */
+/** "on the server on 2026-03-14 09:30 UTC": where and when the kept sweep ran. */
+function sweptWhereWhen(sweep: Pick<StoredSweep, "ranOn" | "finishedAt">): string {
+  return `${sweep.ranOn === "server" ? "on the server" : "in the browser"} on ${formatDateTime(sweep.finishedAt)}`;
+}
+
 export function DesignStudio(props: DesignStudioProps) {
   const { projectId, studyId, materials, required, canEdit } = props;
   const router = useRouter();
@@ -216,10 +222,9 @@ export function DesignStudio(props: DesignStudioProps) {
             What the sweep shows
           </h2>
           <p className="text-xs text-ink-soft">
-            Swept {sweep.ranOn === "server" ? "on the server" : "in the browser"} on{" "}
-            {new Date(sweep.finishedAt).toLocaleString("en-GB")} in {(sweep.elapsedMs / 1000).toFixed(1)} s; each face
-            swept with the other as entered ({sweptParams.upstreamSlope}:1 upstream, {sweptParams.downstreamSlope}:1
-            downstream). Required FS from the project&apos;s loading conditions.
+            Swept {sweptWhereWhen(sweep)} in {(sweep.elapsedMs / 1000).toFixed(1)} s; each face swept with the other as
+            entered ({sweptParams.upstreamSlope}:1 upstream, {sweptParams.downstreamSlope}:1 downstream). Required FS
+            from the project&apos;s loading conditions.
           </p>
           <RecommendationPanel
             reading={reading}

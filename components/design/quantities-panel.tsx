@@ -1,6 +1,7 @@
 "use client";
 
 import type { CompactionSpec, FillQuantities } from "@/lib/design";
+import { formatCount } from "@/lib/format";
 
 export interface QuantitiesPanelProps {
   quantities: FillQuantities;
@@ -9,7 +10,7 @@ export interface QuantitiesPanelProps {
   fillKeys: string[];
 }
 
-const m3 = (v: number) => Math.round(v).toLocaleString("en-GB");
+const m3 = (v: number) => formatCount(Math.round(v));
 
 /** Cross-section areas and volumes of the fill, with the placement specification beside them. */
 export function QuantitiesPanel({ quantities: q, specs, fillKeys }: QuantitiesPanelProps) {

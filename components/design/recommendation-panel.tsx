@@ -1,6 +1,7 @@
 "use client";
 
 import { sweepCase, type SweepReading } from "@/lib/design";
+import { formatCount } from "@/lib/format";
 
 export interface RecommendationPanelProps {
   reading: SweepReading;
@@ -13,7 +14,7 @@ export interface RecommendationPanelProps {
   crestLength: number;
 }
 
-const m3 = (v: number) => Math.round(v).toLocaleString("en-GB");
+const m3 = (v: number) => formatCount(Math.round(v));
 
 /** The steepest pair of face slopes that meets every required FS, and what it costs in fill. */
 export function RecommendationPanel({
@@ -44,8 +45,10 @@ export function RecommendationPanel({
               </dd>
               <dd className="text-xs text-ink-soft">
                 {f.ratio === null
-                  ? `${f.governing ? sweepCase(f.governing).label : "A case"} does not reach its required FS even at the flattest ratio tried: widen the range, add a berm, or change the materials.`
-                  : `Governed by ${sweepCase(f.governing!).label.toLowerCase()}; entered ${entered[face].toFixed(2)}H:1V.`}
+                  ? `${f.governing ? sweepCase(f.governing).label : "A case"} does not reach its required FS ` +
+                    "even at the flattest ratio tried: widen the range, add a berm, or change the materials."
+                  : `Governed by ${sweepCase(f.governing!).label.toLowerCase()}; ` +
+                    `entered ${entered[face].toFixed(2)}H:1V.`}
               </dd>
               {f.fillArea !== null ? (
                 <dd className="text-xs text-ink-soft">

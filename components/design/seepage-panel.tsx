@@ -110,7 +110,9 @@ function PoolSeepage({ outcome, crestLength }: { outcome: PhreaticOutcome; crest
           <Row
             term="Distance d"
             value={`${c.d.toFixed(2)} m`}
-            from={`drain start − point 0.3·m upstream of the pool's edge${c.parabola.xScale !== 1 ? ", × √(kv/kh)" : ""}`}
+            from={
+              "drain start − point 0.3·m upstream of the pool's edge" + (c.parabola.xScale !== 1 ? ", × √(kv/kh)" : "")
+            }
           />
           <Row term="y0" value={`${c.y0.toFixed(3)} m`} from="√(h² + d²) − d (Kozeny's basic parabola)" />
           <Row
@@ -121,7 +123,10 @@ function PoolSeepage({ outcome, crestLength }: { outcome: PhreaticOutcome; crest
           <Row
             term={`Seepage for ${crestLength} m of dam`}
             value={`${sci(q * crestLength)} m³/s`}
-            from={`q × crest length = ${(q * crestLength * SECONDS_PER_DAY).toFixed(2)} m³/day (upper bound: the section is the highest)`}
+            from={
+              `q × crest length = ${(q * crestLength * SECONDS_PER_DAY).toFixed(2)} m³/day ` +
+              "(upper bound: the section is the highest)"
+            }
           />
         </tbody>
       </table>

@@ -18,6 +18,9 @@ export interface SweepControlsProps {
 }
 
 /** Range of ratios, search density, where to run, the start/cancel button and the progress bar. */
+const COARSE_GRID_NOTE =
+  " This modest grid is for comparing ratios; open the chosen point as a run and refine it before relying on its FS.";
+
 export function SweepControls({
   settings,
   onSettings,
@@ -94,13 +97,11 @@ export function SweepControls({
         </label>
       </div>
       <p className="text-xs text-ink-soft">
-        {count} ratios × 3 cases ({count * 3} searches, then 3 to recheck the chosen pair). Each search: {settings.nx} ×{" "}
-        {settings.ny} centres × {settings.radii} radii, {settings.slices} slices
+        {count} ratios × 3 cases ({count * 3} searches, then 3 to recheck the chosen pair). Each search:{" "}
+        {`${settings.nx} × ${settings.ny}`} centres × {settings.radii} radii, {settings.slices} slices
         {settings.refine ? ", refined around the best centres" : ""}; the grid follows each geometry and moves once if
         its minimum is on an edge.
-        {fine
-          ? ""
-          : " This modest grid is for comparing ratios; open the chosen point as a run and refine it before relying on its FS."}
+        {fine ? "" : COARSE_GRID_NOTE}
       </p>
       <div className="flex items-center gap-3">
         {running ? (

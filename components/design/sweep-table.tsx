@@ -1,6 +1,7 @@
 "use client";
 
 import { CASE_STYLES, sweepCase, type SweepPoint, type SweepReading } from "@/lib/design";
+import { formatCount } from "@/lib/format";
 
 export interface SweepTableProps {
   reading: SweepReading;
@@ -61,9 +62,7 @@ function PointRow({
         )}
       </td>
       <td className="px-2 py-1 text-right tabular-nums">{point.fillArea.toFixed(1)}</td>
-      <td className="px-2 py-1 text-right tabular-nums">
-        {Math.round(point.fillArea * crestLength).toLocaleString("en-GB")}
-      </td>
+      <td className="px-2 py-1 text-right tabular-nums">{formatCount(Math.round(point.fillArea * crestLength))}</td>
       <td className="px-2 py-1 text-xs tabular-nums">
         {point.circle
           ? `(${point.circle.xc.toFixed(1)}, ${point.circle.yc.toFixed(1)}) R ${point.circle.r.toFixed(1)}`
@@ -219,7 +218,7 @@ export function SweepTable({ reading, recheck, crestLength, canOpen, busyPoint, 
                     </td>
                     <td className="px-2 py-1 text-right tabular-nums">{p.fillArea.toFixed(1)}</td>
                     <td className="px-2 py-1 text-right tabular-nums">
-                      {Math.round(p.fillArea * crestLength).toLocaleString("en-GB")}
+                      {formatCount(Math.round(p.fillArea * crestLength))}
                     </td>
                     <td className="px-2 py-1 text-xs tabular-nums">
                       {p.circle

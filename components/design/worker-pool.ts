@@ -4,6 +4,7 @@
  */
 import type { EmbankmentParams, JobSettings, SweepJob, SweepPoint } from "@/lib/design";
 import type { Material } from "@/lib/stability";
+import { createWorkerPool, type PoolWorker } from "@/lib/worker-pool";
 import type { SweepWorkerReply, SweepWorkerRequest } from "./sweep.worker";
 
 export const MAX_BROWSER_WORKERS = 4;
@@ -19,57 +20,40 @@ export interface WorkerPool {
   terminate: () => void;
 }
 
+/** A Web Worker as the shared pool (lib/worker-pool.ts) sees it. */
+function poolWorker(w: Worker): PoolWorker<SweepWorkerRequest, SweepWorkerReply> {
+  return {
+    post: (message) => w.postMessage(message),
+    listen: (onReply, onFailure) => {
+      const message = (event: MessageEvent<SweepWorkerReply>) => onReply(event.data);
+      const error = (event: ErrorEvent) =>
+        onFailure(new Error(event.message || "A sweep worker stopped unexpectedly."));
+      w.addEventListener("message", message);
+      w.addEventListener("error", error);
+      return () => {
+        w.removeEventListener("message", message);
+        w.removeEventListener("error", error);
+      };
+    },
+    terminate: () => w.terminate(),
+  };
+}
+
 export function startWorkerPool(
   params: EmbankmentParams,
   materials: Material[],
   settings: JobSettings,
   size = browserWorkerCount(),
 ): WorkerPool {
-  const workers = Array.from(
-    { length: size },
-    () => new Worker(new URL("./sweep.worker.ts", import.meta.url), { type: "module" }),
+  const pool = createWorkerPool(
+    Array.from({ length: size }, () =>
+      poolWorker(new Worker(new URL("./sweep.worker.ts", import.meta.url), { type: "module" })),
+    ),
   );
-  const idle = [...workers];
-  const waiting: ((w: Worker) => void)[] = [];
-  const rejectors = new Set<(e: Error) => void>();
-  let seq = 0;
-  let stopped = false;
-  const take = () =>
-    new Promise<Worker>((resolve) => (idle.length ? resolve(idle.pop() as Worker) : waiting.push(resolve)));
-  const give = (w: Worker) => {
-    const next = waiting.shift();
-    if (next) next(w);
-    else idle.push(w);
-  };
   const execute = async (job: SweepJob): Promise<SweepPoint> => {
-    const w = await take();
-    const mine = ++seq;
-    try {
-      return await new Promise<SweepPoint>((resolve, reject) => {
-        if (stopped) return reject(new Error("cancelled"));
-        rejectors.add(reject);
-        w.onmessage = (event: MessageEvent<SweepWorkerReply>) => {
-          if (event.data.seq !== mine) return;
-          rejectors.delete(reject);
-          if ("point" in event.data) resolve(event.data.point);
-          else reject(new Error(event.data.error));
-        };
-        w.onerror = (e) => {
-          rejectors.delete(reject);
-          reject(new Error(e.message || "A sweep worker stopped unexpectedly."));
-        };
-        const request: SweepWorkerRequest = { seq: mine, params, materials, job, settings };
-        w.postMessage(request);
-      });
-    } finally {
-      give(w);
-    }
+    const reply = await pool.request((seq) => ({ seq, params, materials, job, settings }));
+    if ("point" in reply) return reply.point;
+    throw new Error(reply.error);
   };
-  const terminate = () => {
-    stopped = true;
-    for (const w of workers) w.terminate();
-    for (const reject of rejectors) reject(new Error("cancelled"));
-    rejectors.clear();
-  };
-  return { size, execute, terminate };
+  return { size, execute, terminate: () => void pool.terminate() };
 }

@@ -3,6 +3,7 @@
 import { DOCUMENT_KIND_LABELS, type DocumentKind } from "@/lib/storage/document-kinds";
 import type { DocumentSummary } from "@/lib/storage/document-summary";
 import { formatBytes } from "@/lib/storage/upload-limits";
+import { formatDate } from "@/lib/format";
 
 export interface DocumentTableProps {
   projectId: number;
@@ -59,7 +60,7 @@ export function DocumentTable({
               {showAttachment ? <td className="px-3 py-2 text-ink-soft">{attachmentOf(d)}</td> : null}
               <td className="px-3 py-2 text-right tabular-nums">{formatBytes(d.sizeBytes)}</td>
               <td className="px-3 py-2">{d.uploadedByName}</td>
-              <td className="px-3 py-2 text-ink-soft">{new Date(d.uploadedAt).toLocaleDateString("en-GB")}</td>
+              <td className="px-3 py-2 text-ink-soft">{formatDate(d.uploadedAt)}</td>
               <td className="px-3 py-2 text-right">
                 {canDelete(d) ? (
                   <button

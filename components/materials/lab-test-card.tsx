@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import type { LibraryMaterial } from "@/db/queries/materials";
-import type { LabTestSet } from "@/db/queries/lab-tests";
+import type { LibraryMaterial } from "@/lib/materials/types";
+import type { LabTestSet } from "@/lib/lab/types";
 import { LAB_KIND_INFO } from "@/lib/materials/lab-kinds";
 import { labInputToRows } from "@/lib/materials/lab-rows";
 import { MODEL_PARAMETERS, PARAMETER_INFO, type ParameterKey } from "@/lib/materials/parameters";
@@ -11,6 +11,7 @@ import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FormBanner } from "@/components/ui/form-message";
 import { LabResultPlot } from "./lab-result-plot";
 import { LabResultSummary } from "./lab-result-summary";
+import { formatDate } from "@/lib/format";
 
 export interface LabTestCardProps {
   projectId: number;
@@ -73,7 +74,7 @@ export function LabTestCard({ projectId, material, set, canEdit, onChanged }: La
           </p>
           <h3 className="font-semibold">{set.name}</h3>
           <p className="text-xs text-ink-faint">
-            Entered by {set.createdByName} on {new Date(set.createdAt).toLocaleDateString("en-GB")}
+            Entered by {set.createdByName} on {formatDate(set.createdAt)}
           </p>
         </div>
         {canEdit ? (

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import type { LibraryMaterial } from "@/db/queries/materials";
+import type { LibraryMaterial } from "@/lib/materials/types";
 import { formValuesFrom, type ParameterFormValues } from "@/lib/materials/parameter-form";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
 import { useMaterialSave } from "./use-material-save";

@@ -3,8 +3,8 @@
 import useSWR from "swr";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import type { LibraryMaterial } from "@/db/queries/materials";
-import type { LabTestSet } from "@/db/queries/lab-tests";
+import type { LibraryMaterial } from "@/lib/materials/types";
+import type { LabTestSet } from "@/lib/lab/types";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { EmptyState } from "@/components/ui/empty-state";
 import { FormBanner } from "@/components/ui/form-message";

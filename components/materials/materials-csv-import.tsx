@@ -1,7 +1,7 @@
 "use client";
 
 import { useMemo, useState } from "react";
-import type { LibraryMaterial } from "@/db/queries/materials";
+import type { LibraryMaterial } from "@/lib/materials/types";
 import { MATERIAL_COLUMNS, csvTemplates } from "@/lib/section-io";
 import { checkMaterialsImport } from "@/lib/materials/import-check";
 import { fieldsToProblems } from "@/lib/materials/problem-keys";

@@ -1,7 +1,7 @@
 "use client";
 
 import useSWR from "swr";
-import type { LibraryMaterial } from "@/db/queries/materials";
+import type { LibraryMaterial } from "@/lib/materials/types";
 import { libraryToCsv } from "@/lib/materials/engine-material";
 import { EmptyState } from "@/components/ui/empty-state";
 import { MaterialsTable } from "./materials-table";

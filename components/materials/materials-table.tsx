@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { LibraryMaterial } from "@/db/queries/materials";
+import type { LibraryMaterial } from "@/lib/materials/types";
 import { MODEL_LABELS, PARAMETER_INFO, parameterValue, type ParameterKey } from "@/lib/materials/parameters";
 import { formatValue } from "@/lib/materials/parameter-form";
 import { SourceBadge } from "./source-badge";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import type { LibraryMaterial } from "@/db/queries/materials";
+import type { LibraryMaterial } from "@/lib/materials/types";
 import { EMPTY_PARAMETER_FORM, type ParameterFormValues } from "@/lib/materials/parameter-form";
 import { MATERIAL_KEY_HINT, suggestMaterialKey } from "@/lib/materials/keys";
 import { FieldError, FormBanner } from "@/components/ui/form-message";

@@ -1,11 +1,11 @@
 "use client";
 
 import useSWR from "swr";
-import { useState } from "react";
-import type { ProjectMember } from "@/db/queries/projects";
+import type { ProjectMember } from "@/lib/projects/types";
 import { PROJECT_ROLES, type ProjectRole } from "@/lib/permissions";
-import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
+import { fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
+import { useApiForm } from "@/components/ui/use-api-form";
 
 export interface MembersManagerProps {
   projectId: number;
@@ -16,36 +16,27 @@ export interface MembersManagerProps {
 export function MembersManager({ projectId, initialMembers, candidates }: MembersManagerProps) {
   const url = `/api/projects/${projectId}/members`;
   const { data, mutate } = useSWR<{ members: ProjectMember[] }>(url, { fallbackData: { members: initialMembers } });
-  const [fields, setFields] = useState<Record<string, string[]>>({});
-  const [error, setError] = useState<string | null>(null);
   const members = data?.members ?? [];
-
-  async function add(event: React.FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const form = new FormData(event.currentTarget);
-    setFields({});
-    setError(null);
-    try {
-      const userId = Number(form.get("userId"));
-      const result = await fetchJson<{ members: ProjectMember[] }>(url, {
-        method: "POST",
-        json: { userId: userId || undefined, role: form.get("role") as ProjectRole },
-      });
-      await mutate(result, { revalidate: false });
-    } catch (err) {
-      if (err instanceof ApiClientError) {
-        setFields(err.fields);
-        setError(err.message);
-      } else setError("Could not reach the server.");
-    }
-  }
+  const {
+    onSubmit: add,
+    fields,
+    notice,
+    fail,
+  } = useApiForm(async (form) => {
+    const userId = Number(form.get("userId"));
+    const result = await fetchJson<{ members: ProjectMember[] }>(url, {
+      method: "POST",
+      json: { userId: userId || undefined, role: form.get("role") as ProjectRole },
+    });
+    await mutate(result, { revalidate: false });
+  });
 
   async function remove(userId: number) {
     try {
       await fetchJson(`${url}/${userId}`, { method: "DELETE" });
       await mutate();
     } catch (err) {
-      setError(err instanceof ApiClientError ? err.message : "Could not reach the server.");
+      fail(err);
     }
   }
 
@@ -117,7 +108,7 @@ export function MembersManager({ projectId, initialMembers, candidates }: Member
           </select>
           <FieldError messages={fields.role} />
         </div>
-        {error ? <FormBanner kind="error">{error}</FormBanner> : null}
+        {notice ? <FormBanner kind={notice.kind}>{notice.text}</FormBanner> : null}
         <button type="submit" className="btn-primary">
           Save member
         </button>

@@ -1,29 +1,17 @@
 "use client";
 
-import { useState } from "react";
-import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
+import { fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
+import { useApiForm } from "@/components/ui/use-api-form";
 
 export function NewProjectForm({ onDone, onCancel }: { onDone: () => void; onCancel: () => void }) {
-  const [fields, setFields] = useState<Record<string, string[]>>({});
-  const [error, setError] = useState<string | null>(null);
-
-  async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const form = new FormData(event.currentTarget);
-    try {
-      await fetchJson("/api/projects", {
-        method: "POST",
-        json: { name: form.get("name"), description: form.get("description") },
-      });
-      onDone();
-    } catch (err) {
-      if (err instanceof ApiClientError) {
-        setFields(err.fields);
-        setError(err.message);
-      } else setError("Could not reach the server.");
-    }
-  }
+  const { onSubmit, fields, notice } = useApiForm(async (form) => {
+    await fetchJson("/api/projects", {
+      method: "POST",
+      json: { name: form.get("name"), description: form.get("description") },
+    });
+    onDone();
+  });
 
   return (
     <form onSubmit={onSubmit} className="panel space-y-3 p-4" noValidate>
@@ -41,7 +29,7 @@ export function NewProjectForm({ onDone, onCancel }: { onDone: () => void; onCan
         <textarea id="project-description" name="description" rows={2} className="field" />
         <FieldError messages={fields.description} />
       </div>
-      {error ? <FormBanner kind="error">{error}</FormBanner> : null}
+      {notice ? <FormBanner kind={notice.kind}>{notice.text}</FormBanner> : null}
       <div className="flex gap-2">
         <button type="submit" className="btn-primary">
           Create project

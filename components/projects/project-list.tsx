@@ -3,7 +3,7 @@
 import Link from "next/link";
 import useSWR from "swr";
 import { useState } from "react";
-import type { ProjectSummary } from "@/db/queries/projects";
+import type { ProjectSummary } from "@/lib/projects/types";
 import { EmptyState } from "@/components/ui/empty-state";
 import { NewProjectForm } from "./new-project-form";
 

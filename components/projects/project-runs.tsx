@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { RunSummary } from "@/db/queries/runs";
+import type { RunSummary } from "@/lib/runs/types";
 
 const fmt = (v: number | null) => (v === null ? "—" : v.toFixed(3));
 

@@ -1,5 +1,6 @@
 import Link from "next/link";
-import type { SectionSummary } from "@/db/queries/sections";
+import type { SectionSummary } from "@/lib/sections/types";
+import { formatDate } from "@/lib/format";
 
 export function ProjectSections({ projectId, sections }: { projectId: number; sections: SectionSummary[] }) {
   return (
@@ -11,7 +12,7 @@ export function ProjectSections({ projectId, sections }: { projectId: number; se
               {s.name}
             </Link>
             <p className="text-xs text-ink-faint">
-              v{s.currentVersion} · saved by {s.updatedByName} on {new Date(s.updatedAt).toLocaleDateString("en-GB")}
+              v{s.currentVersion} · saved by {s.updatedByName} on {formatDate(s.updatedAt)}
             </p>
           </div>
           <p className="hidden max-w-md truncate text-sm text-ink-soft md:block">{s.description}</p>

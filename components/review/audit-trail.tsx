@@ -1,5 +1,6 @@
-import type { RunEvent } from "@/db/queries/review";
+import type { RunEvent } from "@/lib/review/types";
 import { STATUS_WORDS, type RunStatus } from "@/lib/review/status";
+import { formatDateTime } from "@/lib/format";
 
 const KIND_WORDS: Record<string, string> = {
   status: "Status",
@@ -11,8 +12,7 @@ const KIND_WORDS: Record<string, string> = {
   "mail-skipped": "No notice",
 };
 
-const at = (iso: string) =>
-  new Date(iso).toLocaleString("en-GB", { timeZone: "UTC", dateStyle: "medium", timeStyle: "short" }) + " UTC";
+const at = (iso: string) => formatDateTime(iso);
 
 function what(e: RunEvent): string {
   if (e.kind === "status" && e.toStatus) {

@@ -1,5 +1,6 @@
-import type { RunComment } from "@/db/queries/review";
+import type { RunComment } from "@/lib/review/types";
 import { commentLabel } from "@/lib/review/comment-label";
+import { formatDateTime } from "@/lib/format";
 
 export interface CommentListProps {
   comments: readonly RunComment[];
@@ -27,14 +28,7 @@ export function CommentList({ comments, active = null, onSelect }: CommentListPr
           <div className="mb-0.5 flex flex-wrap gap-x-2 text-xs text-ink-soft">
             <span className="font-semibold text-ink">{commentLabel(c, i)}</span>
             <span>{c.authorName}</span>
-            <span>
-              {new Date(c.createdAt).toLocaleString("en-GB", {
-                timeZone: "UTC",
-                dateStyle: "medium",
-                timeStyle: "short",
-              })}{" "}
-              UTC
-            </span>
+            <span>{formatDateTime(c.createdAt)}</span>
           </div>
           <p className="whitespace-pre-wrap break-words">{c.body}</p>
         </li>

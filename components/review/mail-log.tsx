@@ -1,4 +1,5 @@
 import type { CaughtMail } from "@/lib/mail/caught-mail";
+import { formatDateTime } from "@/lib/format";
 
 /** Caught messages with their headers; the body opens on demand. */
 export function MailLog({ messages }: { messages: readonly CaughtMail[] }) {
@@ -25,7 +26,7 @@ export function MailLog({ messages }: { messages: readonly CaughtMail[] }) {
               <dt className="text-ink-soft">Delivered to</dt>
               <dd>{m.envelope.to.join(", ")}</dd>
               <dt className="text-ink-soft">Date</dt>
-              <dd>{new Date(m.date ?? m.receivedAt).toLocaleString("en-GB", { timeZone: "UTC" })} UTC</dd>
+              <dd>{formatDateTime(m.date ?? m.receivedAt)}</dd>
             </dl>
             <pre
               className="mt-2 overflow-x-auto whitespace-pre-wrap rounded bg-paper-sunk p-2 font-mono text-xs"

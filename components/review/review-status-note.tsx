@@ -1,9 +1,7 @@
-import type { ReviewRecord } from "@/db/queries/review";
+import type { ReviewRecord } from "@/lib/review/types";
+import { formatDateTime } from "@/lib/format";
 
-const at = (iso: string | null) =>
-  iso
-    ? `${new Date(iso).toLocaleString("en-GB", { timeZone: "UTC", dateStyle: "medium", timeStyle: "short" })} UTC`
-    : "";
+const at = (iso: string | null) => (iso ? formatDateTime(iso) : "");
 
 /** One sentence on where the review stands, with the reviewer's note. */
 export function ReviewStatusNote({ record }: { record: ReviewRecord }) {

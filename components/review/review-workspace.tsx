@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { useState } from "react";
-import type { RunDetail } from "@/db/queries/runs";
+import type { RunDetail } from "@/lib/runs/types";
 import type { ReviewState } from "@/lib/review/review-state";
 import { pinMarkers } from "@/lib/review/pin-markers";
 import { governingFsOf, isBelowRequired } from "@/lib/review/below-required";

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { ChainLink } from "@/db/queries/runs";
+import type { ChainLink } from "@/lib/runs/types";
 import { StatusBadge } from "@/components/run-list/status-badge";
 
 /** The runs this one revises and those revising it, oldest first; the current one is marked. */

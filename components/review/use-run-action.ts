@@ -1,33 +1,21 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useState } from "react";
-import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
+import { fetchJson } from "@/lib/client/fetch-json";
+import { useApiForm } from "@/components/ui/use-api-form";
 
 /** Sends one change to a run's API and refreshes the server-rendered page when it succeeds. */
 export function useRunAction() {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<{ message: string; fields: Record<string, string[]> } | null>(null);
+  const { run: submit, busy, notice, fields } = useApiForm();
 
-  async function run(url: string, init: RequestInit & { json?: unknown }): Promise<boolean> {
-    setBusy(true);
-    setError(null);
-    try {
+  function run(url: string, init: RequestInit & { json?: unknown }): Promise<boolean> {
+    return submit(async () => {
       await fetchJson(url, init);
       router.refresh();
-      return true;
-    } catch (err) {
-      setError(
-        err instanceof ApiClientError
-          ? { message: err.message, fields: err.fields }
-          : { message: "Could not reach the server.", fields: {} },
-      );
-      return false;
-    } finally {
-      setBusy(false);
-    }
+    });
   }
 
+  const error = notice?.kind === "error" ? { message: notice.text, fields } : null;
   return { run, busy, error };
 }

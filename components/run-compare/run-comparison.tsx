@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import type { RunDetail } from "@/db/queries/runs";
+import type { RunDetail } from "@/lib/runs/types";
 import type { GridSearchSuccess, SectionDocument } from "@/lib/stability";
 import { diffDocuments } from "@/lib/sections/diff";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";

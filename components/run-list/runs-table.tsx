@@ -3,10 +3,12 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
-import type { RunSummary } from "@/db/queries/runs";
+import type { RunSummary } from "@/lib/runs/types";
 import { criticalRunIds, governingFs } from "@/lib/run-records/critical-cases";
 import { LOADING_CONDITIONS, loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import { PassMark, StatusBadge } from "./status-badge";
+import { formatDateTime } from "@/lib/format";
+import { BELOW_REQUIRED_LABEL, RUN_STATUSES, STATUS_LABELS } from "@/lib/review/status";
 
 type SortKey = "createdAt" | "fs" | "title" | "condition" | "author";
 
@@ -112,11 +114,11 @@ export function RunsTable({ projectId, runs }: { projectId: number; runs: RunSum
           ["fellenius", "Ordinary"],
         ])}
         {select("status", "Status", [
-          ["draft", "Draft"],
-          ["submitted", "Awaiting review"],
-          ["returned", "Returned"],
-          ["approved", "Signed off (any)"],
-          ["approved-below", "Signed off — below the required FS"],
+          ...RUN_STATUSES.map((s): [string, string] => [
+            s,
+            s === "approved" ? `${STATUS_LABELS[s]} (any)` : STATUS_LABELS[s],
+          ]),
+          ["approved-below", BELOW_REQUIRED_LABEL],
         ])}
         {select(
           "author",
@@ -213,9 +215,7 @@ export function RunsTable({ projectId, runs }: { projectId: number; runs: RunSum
                 <StatusBadge status={r.status} belowRequired={r.belowRequiredReason !== null} />
               </td>
               <td className="px-2 py-1.5">{r.authorName}</td>
-              <td className="px-2 py-1.5 tabular-nums text-ink-soft">
-                {new Date(r.createdAt).toLocaleString("en-GB", { dateStyle: "short", timeStyle: "short" })}
-              </td>
+              <td className="px-2 py-1.5 tabular-nums text-ink-soft">{formatDateTime(r.createdAt)}</td>
             </tr>
           ))}
           {shown.length === 0 ? (

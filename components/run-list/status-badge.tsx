@@ -1,14 +1,16 @@
-const STYLES: Record<string, { label: string; cls: string; mark: string }> = {
-  draft: { label: "Draft", cls: "border-rule text-ink-soft", mark: "○" },
-  submitted: { label: "Awaiting review", cls: "border-clay-500 text-clay-700", mark: "◐" },
-  returned: { label: "Returned", cls: "border-alarm-600 text-alarm-700", mark: "↺" },
-  approved: { label: "Signed off", cls: "border-moss-600 text-moss-700", mark: "●" },
-  // Never the green dot of a plain sign-off: a dashed outline, a warning triangle and the words.
-  "approved-below": {
-    label: "Signed off — below the required FS",
-    cls: "border-dashed border-alarm-600 bg-alarm-50 text-alarm-700",
-    mark: "▲",
-  },
+import { BELOW_REQUIRED_LABEL, isRunStatus, STATUS_LABELS, type RunStatus } from "@/lib/review/status";
+
+const STYLES: Record<RunStatus, { cls: string; mark: string }> = {
+  draft: { cls: "border-rule text-ink-soft", mark: "○" },
+  submitted: { cls: "border-clay-500 text-clay-700", mark: "◐" },
+  returned: { cls: "border-alarm-600 text-alarm-700", mark: "↺" },
+  approved: { cls: "border-moss-600 text-moss-700", mark: "●" },
+};
+// Never the green dot of a plain sign-off: a dashed outline, a warning triangle and the words.
+const BELOW = {
+  cls: "border-dashed border-alarm-600 bg-alarm-50 text-alarm-700",
+  mark: "▲",
+  label: BELOW_REQUIRED_LABEL,
 };
 
 /**
@@ -16,7 +18,8 @@ const STYLES: Record<string, { label: string; cls: string; mark: string }> = {
  * @param belowRequired the run was signed off although its FS is below the required value
  */
 export function StatusBadge({ status, belowRequired = false }: { status: string; belowRequired?: boolean }) {
-  const s = (status === "approved" && belowRequired ? STYLES["approved-below"] : STYLES[status]) ?? STYLES.draft;
+  const key = isRunStatus(status) ? status : "draft";
+  const s = key === "approved" && belowRequired ? BELOW : { ...STYLES[key], label: STATUS_LABELS[key] };
   return (
     <span
       className={`inline-flex items-center gap-1 rounded border px-1.5 py-0.5 text-xs ${s.cls}`}

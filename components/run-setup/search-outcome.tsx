@@ -11,6 +11,7 @@ import { loadingCondition } from "@/lib/analysis/required-fs";
 import { userIssue } from "@/lib/runs/engine-issue-text";
 import { runFs } from "@/lib/runs/slice-csv";
 import { stagedFromResult } from "@/lib/runs/staged-view";
+import { formatCount } from "@/lib/format";
 
 export interface SearchOutcomeProps {
   projectId: number;
@@ -76,7 +77,7 @@ export function SearchOutcome({
   return (
     <div className="space-y-3" data-testid="search-outcome">
       <p className="text-xs text-ink-faint">
-        {result.circles.tried.toLocaleString("en-GB")} circles in {(outcome.elapsedMs / 1000).toFixed(2)} s
+        {formatCount(result.circles.tried)} circles in {(outcome.elapsedMs / 1000).toFixed(2)} s
       </p>
       <FsSummary
         result={result}

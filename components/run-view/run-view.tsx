@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { useMemo, useState } from "react";
-import type { RunDetail } from "@/db/queries/runs";
+import type { RunDetail } from "@/lib/runs/types";
 import type { GridSearchSuccess, SectionDocument, SliceRow } from "@/lib/stability";
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
@@ -17,6 +17,7 @@ import { stagedView } from "@/lib/runs/staged-view";
 import { StatusBadge } from "@/components/run-list/status-badge";
 import { PinnedCanvas } from "@/components/review/pinned-canvas";
 import type { PinMarker } from "@/lib/review/pin-markers";
+import { formatDateTime } from "@/lib/format";
 
 type Method = "bishop" | "fellenius";
 export type StoredResult = GridSearchSuccess & { setup: RunSetup };
@@ -68,7 +69,7 @@ export function RunView({
           {run.sectionName} v{run.sectionVersion}
         </span>
         <span>
-          by {run.authorName}, {new Date(run.createdAt).toLocaleString("en-GB")}
+          by {run.authorName}, {formatDateTime(run.createdAt)}
         </span>
         <span>engine {run.engineVersion}</span>
         {run.revisesRunId ? (

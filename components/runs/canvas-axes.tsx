@@ -1,5 +1,5 @@
 import { Group, Line, Text } from "react-konva";
-import { niceTicks } from "@/lib/runs/nice-ticks";
+import { niceTicks } from "@/lib/scales";
 import { toScreen, visibleBox, type RunView } from "@/lib/runs/view-fit";
 
 const RULE = "#d9d3c7";

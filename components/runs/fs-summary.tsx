@@ -5,6 +5,7 @@ import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "
 import { VerdictMark } from "./verdict-mark";
 import { StageFsTable } from "./stage-fs-table";
 import { stagedFromResult, type StagedView } from "@/lib/runs/staged-view";
+import { formatCount } from "@/lib/format";
 
 export interface FsSummaryProps {
   /** The search, its warnings already gathered into one list (lib/run-records/search-record.ts keptWarnings). */
@@ -76,15 +77,14 @@ export function FsSummary({ result, requiredFs, minMAlpha, staged }: FsSummaryPr
       <div data-testid="fs-summary-circles">
         <h3 className="label">Trial circles</h3>
         <p className="tabular-nums">
-          {result.circles.tried.toLocaleString("en-GB")} tried, {result.circles.valid.toLocaleString("en-GB")} gave an
-          FS
-          {rejectedTotal > 0 ? `, ${rejectedTotal.toLocaleString("en-GB")} set aside:` : "."}
+          {formatCount(result.circles.tried)} tried, {formatCount(result.circles.valid)} gave an FS
+          {rejectedTotal > 0 ? `, ${formatCount(rejectedTotal)} set aside:` : "."}
         </p>
         {rejected.length > 0 ? (
           <ul className="mt-1 list-disc pl-5 text-ink-soft">
             {rejected.map((r) => (
               <li key={r.reason} data-reason={r.reason}>
-                <span className="tabular-nums">{r.count.toLocaleString("en-GB")}</span> {r.text}
+                <span className="tabular-nums">{formatCount(r.count)}</span> {r.text}
               </li>
             ))}
           </ul>

@@ -1,7 +1,7 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
 import type { Grid, GridSearchSuccess, Radii, SectionDocument, SliceRow } from "@/lib/stability";
 import { Caution } from "@/components/ui/caution";
 import { criticalAttribute } from "@/lib/runs/circle-styles";
@@ -91,8 +91,11 @@ export function RunCanvas(props: RunCanvasProps) {
     setManual(null);
   }
   const view = manual ?? fitView(fit.box, width, height);
+  // Wheel and pan handlers read the view as last drawn; it is updated after each commit, never during render.
   const viewRef = useRef(view);
-  viewRef.current = view;
+  useLayoutEffect(() => {
+    viewRef.current = view;
+  });
 
   useEffect(() => {
     const el = containerRef.current;

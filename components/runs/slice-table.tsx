@@ -28,7 +28,7 @@ export interface SliceTableProps {
 const LOW_M_ALPHA = 0.2;
 
 /** A byte-order mark lets spreadsheets read the CSV as UTF-8 (φ, α, γ in the headers). */
-const download = (text: string, name: string) => downloadText(name, "\uFEFF" + text, "text/csv");
+const download = (text: string, name: string) => downloadText(name, text, "text/csv");
 
 /** The slices of a critical circle: sortable by any column, with units, and downloadable as CSV. */
 export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {

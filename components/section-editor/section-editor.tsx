@@ -1,7 +1,7 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { useEffect, useMemo, useRef, useState, type MouseEvent } from "react";
+import { useEffect, useEffectEvent, useMemo, useRef, useState, type MouseEvent } from "react";
 import type { SectionDocument } from "@/lib/stability";
 import { documentBounds } from "@/lib/editor/bounds";
 import type { Draft } from "@/lib/editor/drafts";
@@ -136,15 +136,14 @@ export function SectionEditor({
   });
 
   // React's wheel listener is passive; zooming must stop the page from scrolling.
-  const handleRef = useRef(pointer.handle);
-  handleRef.current = pointer.handle;
+  const handleWheel = useEffectEvent((e: Parameters<typeof pointer.handle>[0]) => pointer.handle(e));
   useEffect(() => {
     const el = containerRef.current;
     if (!el) return;
     const onWheel = (e: WheelEvent) => {
       e.preventDefault();
       const r = el.getBoundingClientRect();
-      handleRef.current({
+      handleWheel({
         type: "wheel",
         sx: e.clientX - r.left,
         sy: e.clientY - r.top,

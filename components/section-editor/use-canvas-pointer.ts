@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useRef, useState } from "react";
+import { useEffect, useEffectEvent, useLayoutEffect, useRef, useState } from "react";
 import type { Point, SectionDocument } from "@/lib/stability";
 import { moveSharedVertex, moveVertex } from "@/lib/editor/document-edits";
 import { appendDraftPoint, closesDraft, type Draft } from "@/lib/editor/drafts";
@@ -67,8 +67,11 @@ export function useCanvasPointer(deps: PointerDeps): {
   const gestureRef = useRef<Gesture | null>(null);
   const [gestureKind, setGestureKind] = useState<Gesture["kind"] | null>(null);
   const [hover, setHover] = useState<Hover | null>(null);
+  // Handlers run after a commit, so the deps they read are refreshed then rather than during render.
   const depsRef = useRef(deps);
-  depsRef.current = deps;
+  useLayoutEffect(() => {
+    depsRef.current = deps;
+  });
 
   const start = (g: Gesture | null) => {
     gestureRef.current = g;
@@ -86,10 +89,9 @@ export function useCanvasPointer(deps: PointerDeps): {
   };
 
   // A release outside the canvas still ends the gesture.
-  const finishRef = useRef(finish);
-  finishRef.current = finish;
+  const finishOutside = useEffectEvent(finish);
   useEffect(() => {
-    const up = () => gestureRef.current && finishRef.current();
+    const up = () => gestureRef.current && finishOutside();
     window.addEventListener("mouseup", up);
     return () => window.removeEventListener("mouseup", up);
   }, []);

@@ -1,4 +1,6 @@
 "use client";
+/* eslint-disable react-hooks/refs -- the history lives in a ref on purpose: it is adopted from the prop during
+   render (an idempotent sync) so an edit the parent has not passed back yet is never drawn over. */
 
 import { useCallback, useRef, useState } from "react";
 import { canRedo, canUndo, createHistory, historyReducer, type History } from "@/lib/editor/history";

@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useEffect, useLayoutEffect, useState, type RefObject } from "react";
+import { useCallback, useLayoutEffect, useState, type RefObject } from "react";
 import type { Point } from "@/lib/stability";
 import { centreOn, fitToBounds, panBy, zoomAbout, type Bounds, type ViewTransform } from "@/lib/editor/view-transform";
 
@@ -53,12 +53,10 @@ export function useView(
   }, [bounds, width, height, exaggeration]);
 
   // Fit once the width is known, and again when the exaggeration changes the picture's shape.
-  useEffect(() => {
-    if (width <= 0) return;
-    setView((v) =>
-      v === null || v.exaggeration !== exaggeration ? fitToBounds(padded(bounds), width, height, exaggeration) : v,
-    );
-  }, [width, height, exaggeration, bounds]);
+  // Adjusting state while rendering (not in an effect) saves a frame drawn with the old fit.
+  if (width > 0 && (view === null || view.exaggeration !== exaggeration)) {
+    setView(fitToBounds(padded(bounds), width, height, exaggeration));
+  }
 
   const zoomBy = useCallback(
     (factor: number, sx?: number, sy?: number) =>

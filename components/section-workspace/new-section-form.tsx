@@ -5,8 +5,9 @@ import { useState } from "react";
 import type { SectionDocument } from "@/lib/stability";
 import { validateSection } from "@/lib/stability";
 import { starterSection } from "@/lib/sections/starter";
-import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
+import { fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
+import { FormProblem, useApiForm } from "@/components/ui/use-api-form";
 import { ImportPanel } from "@/components/section-import/import-panel";
 
 const EMPTY: SectionDocument = { version: 1, materials: [], regions: [] } as unknown as SectionDocument;
@@ -16,38 +17,22 @@ export function NewSectionForm({ projectId }: { projectId: number }) {
   const router = useRouter();
   const [start, setStart] = useState<"starter" | "files">("starter");
   const [imported, setImported] = useState<{ doc: SectionDocument; description: string } | null>(null);
-  const [fields, setFields] = useState<Record<string, string[]>>({});
-  const [error, setError] = useState<string | null>(null);
   const doc = start === "starter" ? starterSection() : (imported?.doc ?? null);
   const check = doc ? validateSection(doc) : null;
 
-  async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const form = new FormData(event.currentTarget);
-    setFields({});
-    setError(null);
-    if (!doc) {
-      setError("Drop the section's files first, or start from the starter drawing.");
-      return;
-    }
-    try {
-      const r = await fetchJson<{ section: { id: number } }>(`/api/projects/${projectId}/sections`, {
-        method: "POST",
-        json: {
-          name: form.get("name"),
-          description: form.get("description"),
-          document: doc,
-          summary: start === "files" ? imported?.description : "Started from the starter drawing",
-        },
-      });
-      router.push(`/projects/${projectId}/sections/${r.section.id}`);
-    } catch (err) {
-      if (err instanceof ApiClientError) {
-        setFields(err.fields);
-        setError(err.message);
-      } else setError("Could not reach the server.");
-    }
-  }
+  const { onSubmit, fields, notice } = useApiForm(async (form) => {
+    if (!doc) throw new FormProblem("Drop the section's files first, or start from the starter drawing.");
+    const r = await fetchJson<{ section: { id: number } }>(`/api/projects/${projectId}/sections`, {
+      method: "POST",
+      json: {
+        name: form.get("name"),
+        description: form.get("description"),
+        document: doc,
+        summary: start === "files" ? imported?.description : "Started from the starter drawing",
+      },
+    });
+    router.push(`/projects/${projectId}/sections/${r.section.id}`);
+  });
 
   return (
     <form onSubmit={onSubmit} className="max-w-3xl space-y-4" noValidate>
@@ -101,9 +86,9 @@ export function NewSectionForm({ projectId }: { projectId: number }) {
           ) : null}
         </>
       ) : null}
-      {error ? (
-        <FormBanner kind="error">
-          {error}
+      {notice ? (
+        <FormBanner kind={notice.kind}>
+          {notice.text}
           {Object.keys(fields).some((k) => k.startsWith("document")) ? (
             <ul className="mt-1 list-disc pl-5 text-xs">
               {Object.entries(fields)

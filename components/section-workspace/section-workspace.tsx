@@ -1,8 +1,8 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useEffect, useState } from "react";
-import type { SectionDetail } from "@/db/queries/sections";
+import { useState } from "react";
+import type { SectionDetail } from "@/lib/sections/types";
 import type { SectionDocument } from "@/lib/stability";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FormBanner } from "@/components/ui/form-message";
@@ -29,7 +29,11 @@ export function SectionWorkspace({ projectId, section, document: saved, material
   const [busy, setBusy] = useState(false);
   const { errors, warnings } = useValidation(doc);
   // A new saved version (ours, or a restore) becomes the drawing; the banner stays to say what happened.
-  useEffect(() => setDoc(saved), [section.currentVersion]); // eslint-disable-line react-hooks/exhaustive-deps
+  const [shownVersion, setShownVersion] = useState(section.currentVersion);
+  if (shownVersion !== section.currentVersion) {
+    setShownVersion(section.currentVersion);
+    setDoc(saved);
+  }
   const dirty = JSON.stringify(doc) !== JSON.stringify(saved);
   const palette =
     materials.length > 0

@@ -1,7 +1,8 @@
 "use client";
 
 import Link from "next/link";
-import type { SectionVersionMeta } from "@/db/queries/sections";
+import type { SectionVersionMeta } from "@/lib/sections/types";
+import { formatDateTime } from "@/lib/format";
 
 export interface VersionListProps {
   projectId: number;
@@ -25,9 +26,7 @@ export function VersionList({ projectId, sectionId, versions, current, canRestor
                 v{v.version}
                 {v.version === current ? <span className="ml-1 text-xs text-moss-700">current</span> : null}
               </span>
-              <span className="text-xs text-ink-faint">
-                {new Date(v.createdAt).toLocaleString("en-GB", { dateStyle: "short", timeStyle: "short" })}
-              </span>
+              <span className="text-xs text-ink-faint">{formatDateTime(v.createdAt)}</span>
             </div>
             <p className="text-ink-soft">{v.summary}</p>
             <p className="text-xs text-ink-faint">{v.createdByName}</p>

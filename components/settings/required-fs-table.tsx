@@ -2,9 +2,10 @@
 
 import useSWR from "swr";
 import { useState } from "react";
-import type { ConditionSetting } from "@/db/queries/loading-conditions";
-import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
+import type { ConditionSetting } from "@/lib/analysis/types";
+import { fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
+import { useApiForm } from "@/components/ui/use-api-form";
 
 export interface RequiredFsTableProps {
   projectId: number;
@@ -17,28 +18,19 @@ export function RequiredFsTable({ projectId, initial, canEdit }: RequiredFsTable
   const url = `/api/projects/${projectId}/loading-conditions`;
   const { data, mutate } = useSWR<{ conditions: ConditionSetting[] }>(url, { fallbackData: { conditions: initial } });
   const [editing, setEditing] = useState<string | null>(null);
-  const [fields, setFields] = useState<Record<string, string[]>>({});
-  const [error, setError] = useState<string | null>(null);
-
-  async function save(event: React.FormEvent<HTMLFormElement>, key: string) {
-    event.preventDefault();
-    const form = new FormData(event.currentTarget);
-    setFields({});
-    setError(null);
-    try {
-      const r = await fetchJson<{ conditions: ConditionSetting[] }>(`${url}/${key}`, {
-        method: "PUT",
-        json: { requiredFs: Number(form.get("requiredFs")), reason: String(form.get("reason") ?? "") },
-      });
-      await mutate(r, { revalidate: false });
-      setEditing(null);
-    } catch (err) {
-      if (err instanceof ApiClientError) {
-        setFields(err.fields);
-        setError(err.message);
-      } else setError("Could not reach the server.");
-    }
-  }
+  // One condition is edited at a time, so the open form's key is `editing`.
+  const {
+    onSubmit: save,
+    fields,
+    notice,
+  } = useApiForm(async (form) => {
+    const r = await fetchJson<{ conditions: ConditionSetting[] }>(`${url}/${editing}`, {
+      method: "PUT",
+      json: { requiredFs: Number(form.get("requiredFs")), reason: String(form.get("reason") ?? "") },
+    });
+    await mutate(r, { revalidate: false });
+    setEditing(null);
+  });
 
   return (
     <table className="w-full rounded-lg border border-rule bg-paper-raised text-sm" data-testid="required-fs-table">
@@ -69,7 +61,7 @@ export function RequiredFsTable({ projectId, initial, canEdit }: RequiredFsTable
                 </div>
               ) : null}
               {editing === c.key ? (
-                <form onSubmit={(e) => save(e, c.key)} className="mt-2 space-y-2" noValidate>
+                <form onSubmit={save} className="mt-2 space-y-2" noValidate>
                   <div className="flex gap-2">
                     <input
                       name="requiredFs"
@@ -87,7 +79,7 @@ export function RequiredFsTable({ projectId, initial, canEdit }: RequiredFsTable
                     />
                   </div>
                   <FieldError messages={[...(fields.requiredFs ?? []), ...(fields.reason ?? [])]} />
-                  {error ? <FormBanner kind="error">{error}</FormBanner> : null}
+                  {notice ? <FormBanner kind={notice.kind}>{notice.text}</FormBanner> : null}
                   <div className="flex gap-2">
                     <button className="btn-primary" type="submit">
                       Save

@@ -1,29 +1,10 @@
 import type { Knex } from "knex";
 import { getDb } from "../index";
 import type { EmbankmentParams } from "../../lib/design/parameters";
-import { requiredFsForSweep, type StoredSweep } from "../../lib/design/sweep-results";
-import type { RequiredFs } from "../../lib/design/pick-ratio";
-import type { CompactionResult } from "../../lib/lab/compaction";
-import { toEngineMaterial } from "../../lib/materials/engine-material";
-import type { Material } from "../../lib/stability";
-import { fetchRequiredFsMap } from "./loading-conditions";
-import { fetchMaterialsOfProject } from "./materials";
-import { fetchLabTestSetsOfProject } from "./lab-tests";
-
-export interface DesignStudySummary {
-  id: number;
-  projectId: number;
-  name: string;
-  createdByName: string;
-  createdAt: string;
-  updatedAt: string;
-  hasSweep: boolean;
-}
-
-export interface DesignStudy extends DesignStudySummary {
-  parameters: EmbankmentParams;
-  sweep: StoredSweep | null;
-}
+import type { StoredSweep } from "../../lib/design/sweep-results";
+import type { DesignStudySummary, DesignStudy } from "../../lib/design/types";
+// Re-exported so callers written before the move still compile; new code imports lib/design/types.
+export type { DesignStudySummary, DesignStudy };
 
 function selectStudies(db: Knex) {
   return db("design_studies as d").join("users as u", "u.id", "d.created_by").select("d.*", "u.name as user_name");
@@ -123,41 +104,4 @@ export async function freeSectionName(projectId: number, base: string, db: Knex 
   );
   if (!taken.has(base)) return base;
   for (let i = 2; ; i++) if (!taken.has(`${base} (${i})`)) return `${base} (${i})`;
-}
-
-export interface CompactionSource {
-  materialKey: string;
-  setName: string;
-  result: CompactionResult;
-}
-
-export interface DesignContext {
-  /** The library as engine materials (ids are the library keys), with each key's model and name. */
-  materials: Material[];
-  library: { key: string; name: string; model: string; color: string }[];
-  required: RequiredFs;
-  /** The latest compaction set of each material that has one. */
-  compaction: CompactionSource[];
-}
-
-/** What a design study needs from its project: materials, required FS and compaction results. */
-export async function fetchDesignContext(projectId: number, db: Knex = getDb()): Promise<DesignContext> {
-  const [library, fsMap, sets] = await Promise.all([
-    fetchMaterialsOfProject(projectId, db),
-    fetchRequiredFsMap(projectId, db),
-    fetchLabTestSetsOfProject(projectId, db),
-  ]);
-  const keyOf = new Map(library.map((m) => [m.id, m.key]));
-  const compaction = new Map<string, CompactionSource>();
-  for (const set of sets) {
-    const key = set.materialId === null ? undefined : keyOf.get(set.materialId);
-    if (set.kind === "compaction" && key)
-      compaction.set(key, { materialKey: key, setName: set.name, result: set.result });
-  }
-  return {
-    materials: library.map(toEngineMaterial),
-    library: library.map((m) => ({ key: m.key, name: m.name, model: m.parameters.model, color: m.color })),
-    required: requiredFsForSweep(fsMap),
-    compaction: [...compaction.values()],
-  };
 }

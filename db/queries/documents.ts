@@ -1,30 +1,8 @@
 import type { Knex } from "knex";
 import { getDb } from "../index";
-
-/** A source document's record; the bytes themselves are in object storage under `storageKey`. */
-export interface DocumentRecord {
-  id: number;
-  projectId: number;
-  sectionId: number | null;
-  sectionName: string | null;
-  materialId: number | null;
-  materialName: string | null;
-  kind: string;
-  originalName: string;
-  contentType: string;
-  sizeBytes: number;
-  storageKey: string;
-  sha256: string;
-  note: string;
-  uploadedBy: number;
-  uploadedByName: string;
-  uploadedAt: string;
-}
-
-export interface DocumentFilter {
-  sectionId?: number;
-  materialId?: number;
-}
+import type { DocumentRecord, DocumentFilter, NewDocument } from "../../lib/documents/types";
+// Re-exported so callers written before the move still compile; new code imports lib/documents/types.
+export type { DocumentRecord, DocumentFilter, NewDocument };
 
 function baseQuery(db: Knex) {
   return db("documents as d")
@@ -80,20 +58,6 @@ export async function fetchDocument(
 ): Promise<DocumentRecord | null> {
   const row = await baseQuery(db).where({ "d.id": documentId, "d.project_id": projectId }).first();
   return row ? toRecord(row) : null;
-}
-
-export interface NewDocument {
-  projectId: number;
-  sectionId: number | null;
-  materialId: number | null;
-  kind: string;
-  originalName: string;
-  contentType: string;
-  sizeBytes: number;
-  storageKey: string;
-  sha256: string;
-  note: string;
-  uploadedBy: number;
 }
 
 export async function insertDocument(input: NewDocument, db: Knex = getDb()): Promise<number> {

@@ -2,16 +2,9 @@ import type { Knex } from "knex";
 import { getDb } from "../index";
 import type { LabTestKind, LabTestRecord } from "../../lib/materials/lab-kinds";
 import type { ParameterSources } from "../../lib/materials/sources";
-
-/** A stored lab test set: its input (`data`) and what was derived from it (`result`). */
-export type LabTestSet = LabTestRecord & {
-  id: number;
-  projectId: number;
-  materialId: number | null;
-  name: string;
-  createdAt: string;
-  createdByName: string;
-};
+import type { LabTestSet } from "../../lib/lab/types";
+// Re-exported so callers written before the move still compile; new code imports lib/lab/types.
+export type { LabTestSet };
 
 function toLabTestSet(r: Record<string, unknown>): LabTestSet {
   // data and result were written by createLabTestSet from one LabTestRecord of this kind.

@@ -1,19 +1,9 @@
 import type { Knex } from "knex";
 import { getDb } from "../index";
 import { LOADING_CONDITIONS, type LoadingConditionKey } from "../../lib/analysis/required-fs";
-
-export interface ConditionSetting {
-  key: LoadingConditionKey;
-  label: string;
-  faces: string;
-  requiredFs: number;
-  defaultFs: number;
-  basis: string;
-  /** Why the project departs from the default; null while it follows it. */
-  reason: string | null;
-  updatedByName: string | null;
-  updatedAt: string | null;
-}
+import type { ConditionSetting } from "../../lib/analysis/types";
+// Re-exported so callers written before the move still compile; new code imports lib/analysis/types.
+export type { ConditionSetting };
 
 /** Every loading condition with the project's required FS (its own value or the default). */
 export async function fetchConditionSettings(projectId: number, db: Knex = getDb()): Promise<ConditionSetting[]> {

@@ -3,30 +3,9 @@ import { getDb } from "../index";
 import { isDuplicateEntry } from "../duplicate-entry";
 import type { MaterialParameters } from "../../lib/materials/parameters";
 import type { ParameterSources } from "../../lib/materials/sources";
-
-/** A material of a project's library; `sources` maps a parameter to the lab test set it came from. */
-export interface LibraryMaterial {
-  id: number;
-  projectId: number;
-  key: string;
-  name: string;
-  color: string;
-  parameters: MaterialParameters;
-  sources: ParameterSources;
-  notes: string;
-  updatedAt: string;
-  updatedByName: string;
-  labTestCount: number;
-}
-
-export interface NewMaterial {
-  key: string;
-  name: string;
-  color: string;
-  notes: string;
-  parameters: MaterialParameters;
-  sources?: ParameterSources;
-}
+import type { LibraryMaterial, NewMaterial } from "../../lib/materials/types";
+// Re-exported so callers written before the move still compile; new code imports lib/materials/types.
+export type { LibraryMaterial, NewMaterial };
 
 /** A key already used in the project (the unique index on project_id, key). */
 export class DuplicateMaterialKeyError extends Error {

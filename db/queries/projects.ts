@@ -1,24 +1,9 @@
 import type { Knex } from "knex";
 import { getDb } from "../index";
 import type { ProjectRole } from "../../lib/permissions";
-
-export interface ProjectSummary {
-  id: number;
-  organisationId: number;
-  name: string;
-  description: string;
-  createdAt: string;
-  memberRole: ProjectRole | null;
-  memberCount: number;
-}
-
-export interface ProjectMember {
-  userId: number;
-  name: string;
-  email: string;
-  role: ProjectRole;
-  addedAt: string;
-}
+import type { ProjectSummary, ProjectMember } from "../../lib/projects/types";
+// Re-exported so callers written before the move still compile; new code imports lib/projects/types.
+export type { ProjectSummary, ProjectMember };
 
 const iso = (d: Date | string) => new Date(d).toISOString();
 

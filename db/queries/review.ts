@@ -3,42 +3,9 @@ import { getDb } from "../index";
 import type { RunStatus } from "../../lib/review/status";
 import type { ChecklistEntry, ChecklistKey, CheckState } from "../../lib/review/checklist";
 import type { MaterialSourceRecord } from "../../lib/review/material-sources";
-
-/** One line of a run's audit trail. `actorName` is null for what the system did (mail). */
-export interface RunEvent {
-  id: number;
-  kind: string;
-  fromStatus: RunStatus | null;
-  toStatus: RunStatus | null;
-  note: string;
-  actorName: string | null;
-  createdAt: string;
-}
-
-export interface RunComment {
-  id: number;
-  authorId: number;
-  authorName: string;
-  body: string;
-  pin: { x: number; y: number } | null;
-  slice: { number: number; method: "bishop" | "fellenius" } | null;
-  createdAt: string;
-}
-
-/** Who moved the run through review, and the material sources frozen when it was submitted. */
-export interface ReviewRecord {
-  status: RunStatus;
-  authorId: number;
-  submittedByName: string | null;
-  submittedAt: string | null;
-  reviewedById: number | null;
-  reviewedByName: string | null;
-  reviewedAt: string | null;
-  reviewNote: string | null;
-  /** Set when the run was signed off below its required FS: the reviewer's reason. */
-  belowRequiredReason: string | null;
-  materialSources: MaterialSourceRecord[] | null;
-}
+import type { RunEvent, RunComment, ReviewRecord } from "../../lib/review/types";
+// Re-exported so callers written before the move still compile; new code imports lib/review/types.
+export type { RunEvent, RunComment, ReviewRecord };
 
 /** A change refused because the run is no longer in the state it was read in, or is frozen. */
 export class RunStateError extends Error {

@@ -4,30 +4,9 @@ import { createSection } from "./sections";
 
 type NewSection = Parameters<typeof createSection>[0];
 
-export interface RunSummary {
-  id: number;
-  projectId: number;
-  sectionId: number;
-  sectionName: string;
-  sectionVersion: number;
-  title: string;
-  status: "draft" | "submitted" | "returned" | "approved";
-  loadCase: "steady" | "drawdown" | "undrained";
-  face: "upstream" | "downstream";
-  methods: string[];
-  requiredFs: number;
-  fsBishop: number | null;
-  fsFellenius: number | null;
-  authorId: number;
-  authorName: string;
-  createdAt: string;
-  revisesRunId: number | null;
-  loadingCondition: string;
-  /** The section's water condition the run analysed; null for runs kept before named conditions. */
-  waterCondition: { id: string; name: string } | null;
-  /** Set when the run was signed off below its required FS: the reviewer's reason. */
-  belowRequiredReason: string | null;
-}
+import type { RunSummary, RunDetail, ChainLink, RunExportRow } from "../../lib/runs/types";
+// Re-exported so callers written before the move still compile; new code imports lib/runs/types.
+export type { RunSummary, RunDetail, ChainLink, RunExportRow };
 
 const num = (v: unknown) => (v === null || v === undefined ? null : Number(v));
 
@@ -94,13 +73,6 @@ export async function fetchRunsOfProject(projectId: number, db: Knex = getDb()):
     .orderBy("r.created_at", "desc")
     .orderBy("r.id", "desc");
   return rows.map(toRunSummary);
-}
-
-export interface RunDetail extends RunSummary {
-  engineVersion: string;
-  document: unknown;
-  result: unknown;
-  sliceTables: unknown;
 }
 
 export async function fetchRun(projectId: number, runId: number, db: Knex = getDb()): Promise<RunDetail | null> {
@@ -239,15 +211,6 @@ export async function deleteDraftRun(runId: number, db: Knex = getDb()): Promise
   });
 }
 
-export interface ChainLink {
-  id: number;
-  title: string;
-  status: RunSummary["status"];
-  createdAt: string;
-  /** Signed off below the required FS. */
-  belowRequired: boolean;
-}
-
 /**
  * The revisions a run belongs to, oldest first: the runs it revises, back to the first, and the
  * runs that revise it, forward along each first revision.
@@ -289,11 +252,6 @@ export async function fetchRevisionChain(projectId: number, runId: number, db: K
     id = next.id;
   }
   return [...back, link(start), ...forward];
-}
-
-export interface RunExportRow extends RunSummary {
-  reviewedByName: string | null;
-  reviewedAt: string | null;
 }
 
 /** The project's runs with who signed them off, for the runs CSV. */

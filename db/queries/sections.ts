@@ -18,15 +18,9 @@ async function guardName<T>(name: string | undefined, write: () => Promise<T>): 
   }
 }
 
-export interface SectionSummary {
-  id: number;
-  projectId: number;
-  name: string;
-  description: string;
-  currentVersion: number;
-  updatedAt: string;
-  updatedByName: string;
-}
+import type { SectionSummary, SectionVersionMeta, SectionDetail, StoredVersion } from "../../lib/sections/types";
+// Re-exported so callers written before the move still compile; new code imports lib/sections/types.
+export type { SectionSummary, SectionVersionMeta, SectionDetail, StoredVersion };
 
 export async function fetchSectionsOfProject(projectId: number, db: Knex = getDb()): Promise<SectionSummary[]> {
   const rows = await db("sections as s")
@@ -54,33 +48,6 @@ export async function fetchSectionsOfProject(projectId: number, db: Knex = getDb
     updatedAt: new Date(r.created_at as Date).toISOString(),
     updatedByName: r.user_name as string,
   }));
-}
-
-export interface SectionVersionMeta {
-  id: number;
-  version: number;
-  summary: string;
-  createdAt: string;
-  createdByName: string;
-}
-
-export interface SectionDetail {
-  id: number;
-  projectId: number;
-  name: string;
-  description: string;
-  currentVersion: number;
-  versions: SectionVersionMeta[];
-}
-
-export interface StoredVersion {
-  id: number;
-  sectionId: number;
-  version: number;
-  summary: string;
-  document: unknown;
-  createdAt: string;
-  createdByName: string;
 }
 
 export async function fetchSection(
@@ -131,11 +98,6 @@ export async function fetchSectionVersion(
     createdAt: new Date(v.created_at).toISOString(),
     createdByName: v.user_name,
   };
-}
-
-export async function fetchSectionVersionById(versionId: number, db: Knex = getDb()): Promise<StoredVersion | null> {
-  const v = await db("section_versions").where({ id: versionId }).first();
-  return v ? fetchSectionVersion(v.section_id, v.version, db) : null;
 }
 
 /** Creates a section with its first version, in one transaction. */

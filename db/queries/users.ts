@@ -1,6 +1,9 @@
 import type { Knex } from "knex";
 import { getDb } from "../index";
 import type { Role } from "../../lib/permissions";
+import type { PublicUser } from "../../lib/users/types";
+// Re-exported so callers written before the move still compile; new code imports lib/users/types.
+export type { PublicUser };
 
 export interface UserRow {
   id: number;
@@ -11,15 +14,6 @@ export interface UserRow {
   active: number | boolean;
   password_hash: string;
   session_version: number;
-}
-
-export interface PublicUser {
-  id: number;
-  organisationId: number;
-  email: string;
-  name: string;
-  role: Role;
-  active: boolean;
 }
 
 const toPublic = (r: UserRow): PublicUser => ({

@@ -201,11 +201,3 @@ export async function seedDemoMaterials(
       .update({ parameters: JSON.stringify(parameters), sources: JSON.stringify(sources) });
   }
 }
-
-/** The demo library's keys and models, for tests and for the demo section's regions. */
-export const DEMO_MATERIAL_KEYS = DEMO.map((m) => ({ key: m.key, model: m.parameters.model }));
-
-/** Exposed for tests: the demo lab sets with what lib/lab derives from them. */
-export function deriveDemoSets(): { material: string; set: string; record: LabTestRecord }[] {
-  return DEMO.flatMap((m) => m.sets.map((s) => ({ material: m.key, set: s.name, record: deriveDemo(s) })));
-}

@@ -31,7 +31,7 @@ function sideOfLine(water: Water | undefined): Side | null {
 }
 
 /**
- * The engine's sliding direction for a face (ENGINE.md §1: reservoir on the left means
+ * The engine's sliding direction for a face (docs/engine.md §1: reservoir on the left means
  * downstream = right, upstream = left). Without a reservoir the left face is called upstream.
  */
 export function directionForFace(doc: SectionDocument, face: Face): Side {

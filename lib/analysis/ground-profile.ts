@@ -32,15 +32,3 @@ export function groundProfile(doc: SectionDocument): XY[] {
 export function baseElevation(doc: SectionDocument): number {
   return Math.min(...doc.regions.flatMap((r) => r.points.map((p) => p[1])));
 }
-
-/** Elevation of a polyline at x, held level beyond its ends. */
-export function polylineAt(points: readonly XY[] | readonly [number, number][], x: number): number {
-  if (points.length === 0) return NaN;
-  if (x <= points[0][0]) return points[0][1];
-  for (let i = 0; i + 1 < points.length; i++) {
-    const [x1, y1] = points[i];
-    const [x2, y2] = points[i + 1];
-    if (x >= x1 && x <= x2) return x2 === x1 ? Math.max(y1, y2) : y1 + ((y2 - y1) * (x - x1)) / (x2 - x1);
-  }
-  return points[points.length - 1][1];
-}

@@ -61,12 +61,3 @@ export const GUIDANCE_NOTE =
 export function loadingCondition(key: LoadingConditionKey) {
   return LOADING_CONDITIONS.find((c) => c.key === key)!;
 }
-
-/** The loading condition a run's engine case falls under by default. */
-export function defaultConditionForCase(engineCase: "steady" | "drawdown" | "undrained"): LoadingConditionKey {
-  return engineCase === "undrained"
-    ? "end-of-construction"
-    : engineCase === "drawdown"
-      ? "drawdown-storage"
-      : "steady-seepage";
-}

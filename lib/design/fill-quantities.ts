@@ -3,19 +3,8 @@
  * volumes for a crest length, taken as a prism (the section is the maximum one, so the volume is
  * an upper bound for a dam whose height falls toward the abutments).
  */
-import type { EmbankmentGeometry, XY } from "./embankment-geometry";
-
-/** Area of a simple polygon (m²), by the shoelace formula; positive for either orientation. */
-export function polygonArea(points: readonly XY[]): number {
-  if (points.length < 3) return 0;
-  let twice = 0;
-  for (let i = 0; i < points.length; i++) {
-    const [x1, y1] = points[i];
-    const [x2, y2] = points[(i + 1) % points.length];
-    twice += x1 * y2 - x2 * y1;
-  }
-  return Math.abs(twice) / 2;
-}
+import { polygonArea } from "../plane-geometry";
+import type { EmbankmentGeometry } from "./embankment-geometry";
 
 export interface FillQuantities {
   /** Whole embankment above the foundation (m² per metre of dam, i.e. m³/m). */

@@ -3,7 +3,7 @@
  * a nice step, and labels with as many decimals as the step needs, so every label reads exactly
  * the value its tick sits at (a tick at 1.05 is never printed "1.1").
  */
-import { niceStep, niceTicks, stepDecimals } from "../runs/nice-ticks";
+import { decimalsFor, niceTicks } from "../scales";
 
 export interface FsAxis {
   domain: [number, number];
@@ -21,12 +21,13 @@ export function fsAxis(values: readonly number[], count = 6): FsAxis {
   const pad = Math.max((hi - lo) * 0.05, 0.02);
   lo -= pad;
   hi += pad;
-  const step = niceStep((hi - lo) / count);
-  const decimals = stepDecimals(step);
+  const inner = niceTicks(lo, hi, count);
+  const step = inner.length > 1 ? inner[1] - inner[0] : Math.max(hi - lo, 0.1);
+  const decimals = decimalsFor(Number(step.toPrecision(6)));
   const round = (v: number) => Number(v.toFixed(decimals));
   const first = round(Math.floor(lo / step + 1e-9) * step);
   const last = round(Math.ceil(hi / step - 1e-9) * step);
-  // The span is a whole number of steps, so niceTicks picks this same step.
-  const ticks = niceTicks(first, last, Math.round((last - first) / step));
+  const n = Math.round((last - first) / step);
+  const ticks = Array.from({ length: n + 1 }, (_, k) => round(first + k * step));
   return { domain: [first, last], ticks, decimals };
 }

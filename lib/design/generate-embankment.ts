@@ -1,5 +1,5 @@
 /**
- * Turns the parametric embankment into an ordinary section document (ENGINE-IO.md, version 1)
+ * Turns the parametric embankment into an ordinary section document (docs/engine-io.md, version 1)
  * that the section editor opens and changes like any other: regions for the base, the foundation,
  * the fill (or core and shells) and the toe drain, and the phreatic line for the chosen pool.
  */
@@ -43,7 +43,8 @@ function pickMaterials(p: EmbankmentParams, library: readonly Material[]): Mater
     if (!m)
       throw new DesignInputError(
         field,
-        `The ${role} material '${key}' is not in the project's materials library: choose another or add it to the library.`,
+        `The ${role} material '${key}' is not in the project's materials library: ` +
+          `choose another or add it to the library.`,
       );
     if (role !== "base" && m.model === "impenetrable")
       throw new DesignInputError(
@@ -141,7 +142,9 @@ function freeboardWarnings(p: EmbankmentParams): DesignWarning[] {
     out.push({
       code: "W_DESIGN_LOW_FREEBOARD",
       field: "floodPool",
-      message: `Freeboard above the flood pool is ${freeboard.toFixed(2)} m, less than the ${p.minFreeboard.toFixed(2)} m asked for: raise the crest or lower the flood pool.`,
+      message:
+        `Freeboard above the flood pool is ${freeboard.toFixed(2)} m, less than the ` +
+        `${p.minFreeboard.toFixed(2)} m asked for: raise the crest or lower the flood pool.`,
     });
   }
   if (p.crestWidth < 3)
@@ -170,7 +173,8 @@ export function generateEmbankment(
   if (g.core && g.core.downstreamBase[0] > g.drain.start[0] - 0.5) {
     throw new DesignInputError(
       "drainLength",
-      `The toe drain reaches under the core (drain starts at x = ${g.drain.start[0].toFixed(2)} m, core base ends at x = ${g.core.downstreamBase[0].toFixed(2)} m): shorten the drain or narrow the core.`,
+      `The toe drain reaches under the core (drain starts at x = ${g.drain.start[0].toFixed(2)} m, core base ends ` +
+        `at x = ${g.core.downstreamBase[0].toFixed(2)} m): shorten the drain or narrow the core.`,
     );
   }
   const fillKey = params.zoning.kind === "homogeneous" ? params.zoning.fill : params.zoning.core;

@@ -1,6 +1,6 @@
 /**
  * The search grid follows the geometry: every job gets the automatic grid of its own section
- * (lib/analysis/auto-grid.ts, after ENGINE.md §9), is moved once by half its size when the
+ * (lib/analysis/auto-grid.ts, after docs/engine.md §9), is moved once by half its size when the
  * minimum lies on its edge, and reports how much one grid step changes FS near the minimum.
  */
 import { suggestGrid } from "../analysis/auto-grid";

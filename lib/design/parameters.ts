@@ -1,5 +1,5 @@
 /**
- * The parametric embankment a designer describes by its dimensions (ENGINE.md §9). One zod
+ * The parametric embankment a designer describes by its dimensions (docs/engine.md §9). One zod
  * schema serves the parameters form in the browser and every design route on the server.
  * Units: metres (elevations and lengths), H:V ratios, m/s for permeability.
  * Reservoir on the left: the upstream face is the left face of the generated section.
@@ -133,7 +133,8 @@ function checkBerm(ctx: Ctx, p: EmbankmentParams, side: "upstream" | "downstream
     issue(
       ctx,
       [`${side}Berm`, "elevation"],
-      `The ${side} berm must lie between ${low.toFixed(2)} m and ${(p.crestElevation - 0.5).toFixed(2)} m (at least 0.5 m below the crest and above the foundation${side === "downstream" ? " and the toe drain" : ""}).`,
+      `The ${side} berm must lie between ${low.toFixed(2)} m and ${(p.crestElevation - 0.5).toFixed(2)} m (at least ` +
+        `0.5 m below the crest and above the foundation${side === "downstream" ? " and the toe drain" : ""}).`,
     );
   }
 }
@@ -169,7 +170,8 @@ function checkParams(p: EmbankmentParams, ctx: Ctx) {
     issue(
       ctx,
       ["drawdownTo"],
-      `The level after drawdown (${p.drawdownTo} m) must lie from the foundation level (${p.foundationTop} m) up to below the normal pool (${p.normalPool} m).`,
+      `The level after drawdown (${p.drawdownTo} m) must lie from the foundation level (${p.foundationTop} m) up to ` +
+        `below the normal pool (${p.normalPool} m).`,
     );
   }
   checkBerm(ctx, p, "upstream");
@@ -179,7 +181,8 @@ function checkParams(p: EmbankmentParams, ctx: Ctx) {
     issue(
       ctx,
       ["drainLength"],
-      `The toe drain must be at least ${minDrain.toFixed(2)} m long so its top meets the downstream face (slope × thickness + 0.5 m).`,
+      `The toe drain must be at least ${minDrain.toFixed(2)} m long so its top meets the downstream face (slope × ` +
+        `thickness + 0.5 m).`,
     );
   if (p.zoning.kind === "zoned") {
     const z = p.zoning;
@@ -193,7 +196,8 @@ function checkParams(p: EmbankmentParams, ctx: Ctx) {
       issue(
         ctx,
         ["zoning", "coreSlope"],
-        `The core's side slope (${z.coreSlope}H:1V) must be steeper than both faces (${Math.min(p.upstreamSlope, p.downstreamSlope)}H:1V) so the shells cover it.`,
+        `The core's side slope (${z.coreSlope}H:1V) must be steeper than both faces ` +
+          `(${Math.min(p.upstreamSlope, p.downstreamSlope)}H:1V) so the shells cover it.`,
       );
     }
   }
@@ -205,7 +209,8 @@ function checkParams(p: EmbankmentParams, ctx: Ctx) {
         issue(
           ctx,
           ["handLines", pool, i],
-          `Hand-drawn line (${pool} pool), point ${i + 1} (x = ${line[i][0]} m) is not right of point ${i} (x = ${line[i - 1][0]} m): list the points left to right.`,
+          `Hand-drawn line (${pool} pool), point ${i + 1} (x = ${line[i][0]} m) is not right of point ${i} (x = ` +
+            `${line[i - 1][0]} m): list the points left to right.`,
         );
         break;
       }

@@ -1,6 +1,6 @@
 /**
  * The phreatic line of the generated section for one pool: the engine's Kozeny–Casagrande
- * construction (ENGINE.md §6) for a homogeneous fill on an impervious foundation with the toe
+ * construction (docs/engine.md §6) for a homogeneous fill on an impervious foundation with the toe
  * drain as its filter, or the designer's hand-drawn line. Outside the method's limits (a zoned
  * dam, a pervious foundation, a berm under water, a line that emerges on the face) it returns
  * the reasons and asks for a hand-drawn line rather than guessing one.
@@ -60,14 +60,18 @@ function methodLimits(p: EmbankmentParams): SeepageLimit[] {
     limits.push({
       code: "E_DESIGN_ZONED",
       severity: "error",
-      message: `A zoned dam (core and shells) is outside the basic parabola's limits: it assumes one homogeneous fill. ${HAND_LINE_REQUEST}`,
+      message:
+        "A zoned dam (core and shells) is outside the basic parabola's limits: it assumes one homogeneous fill. " +
+        HAND_LINE_REQUEST,
     });
   }
   if (!p.foundationImpervious) {
     limits.push({
       code: "E_DESIGN_PERVIOUS_FOUNDATION",
       severity: "error",
-      message: `The foundation is marked as not much less permeable than the fill: the method needs an impervious base under the fill. ${HAND_LINE_REQUEST}`,
+      message:
+        "The foundation is marked as not much less permeable than the fill: the method needs an impervious base " +
+        `under the fill. ${HAND_LINE_REQUEST}`,
     });
   }
   return limits;

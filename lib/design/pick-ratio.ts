@@ -1,6 +1,6 @@
 /**
  * Reading the sweep: n* for each face and case is the smallest H:V ratio for which FS ≥ FSreq
- * at n and at every larger n tried (ENGINE.md §9), so a lucky dip below a failing ratio is never
+ * at n and at every larger n tried (docs/engine.md §9), so a lucky dip below a failing ratio is never
  * recommended. Each face takes the flattest n* of its cases; the pair is then rechecked.
  */
 import type { SweepPoint } from "./run-job";

@@ -1,5 +1,5 @@
 /**
- * The slope sweep's plan (ENGINE.md §9): for each face and the load cases that govern it, a
+ * The slope sweep's plan (docs/engine.md §9): for each face and the load cases that govern it, a
  * list of H:V ratios to try. The other face keeps the ratio the designer entered; after the
  * sweep, the recommended pair is checked once more as a pair, since the upstream ratio moves
  * the phreatic line that the downstream face sees.
@@ -19,7 +19,10 @@ export interface SweepCase {
   label: string;
 }
 
-/** Downstream: long-term steady seepage at the normal pool. Upstream: rapid drawdown from the normal or the flood pool. */
+/**
+ * Downstream: long-term steady seepage at the normal pool. Upstream: rapid drawdown from the normal
+ * or the flood pool.
+ */
 export const SWEEP_CASES: readonly SweepCase[] = [
   {
     key: "steady-seepage",

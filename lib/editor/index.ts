@@ -8,7 +8,6 @@ export * from "./ground-surface";
 export * from "./ponded-water";
 export * from "./reservoir-level";
 export * from "./history";
-export * from "./axis-ticks";
 export * from "./issue-paths";
 export * from "./bounds";
 export * from "./drafts";

@@ -45,7 +45,10 @@ export interface UndrainedPoint {
   specimen?: string;
 }
 
-/** Fields of the engine's `undrained` material model (ENGINE-IO.md): su(y) = su + suGradient·max(0, suDatum − y). */
+/**
+ * Fields of the engine's `undrained` material model (docs/engine-io.md):
+ * su(y) = su + suGradient·max(0, suDatum − y).
+ */
 export interface UndrainedModelFields {
   su: number;
   suGradient?: number;

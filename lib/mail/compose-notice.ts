@@ -4,6 +4,7 @@
  */
 import { CAUTION_TEXT } from "../caution";
 import type { NoticeKind } from "../review/notices";
+import { formatDateTime } from "../format";
 
 export interface NoticeFacts {
   projectName: string;
@@ -53,7 +54,7 @@ function runLines(f: NoticeFacts): string[] {
   ];
 }
 
-const when = (iso: string) => new Date(iso).toUTCString().replace("GMT", "UTC");
+const when = (iso: string) => formatDateTime(iso);
 
 export function composeNotice(kind: NoticeKind, f: NoticeFacts): ComposedNotice {
   const note = f.note.trim();

@@ -1,7 +1,7 @@
 import "server-only";
 import { readServerEnv } from "../env";
 import { loadingCondition, type LoadingConditionKey } from "../analysis/required-fs";
-import type { RunDetail } from "@/db/queries/runs";
+import type { RunDetail } from "@/lib/runs/types";
 import { fetchRunComments, recordRunEvent } from "@/db/queries/review";
 import { fetchNoticeRecipients, type NoticeRecipient } from "@/db/queries/notifications";
 import type { TransitionAction } from "../review/status";

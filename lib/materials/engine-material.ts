@@ -10,7 +10,7 @@ export interface LibraryMaterialLike {
   parameters: MaterialParameters;
 }
 
-/** The material as the section document (ENGINE-IO.md) holds it: the key becomes its id. */
+/** The material as the section document (docs/engine-io.md) holds it: the key becomes its id. */
 export function toEngineMaterial(m: LibraryMaterialLike): Material {
   return { ...m.parameters, id: m.key, name: m.name, color: m.color } as Material;
 }

@@ -42,15 +42,6 @@ export function labCsvTemplate(kind: LabTestKind): string {
   return writeCsv(keysOf(kind), EXAMPLES[kind]);
 }
 
-/** The rows of a stored or typed table as a CSV in the same format. */
-export function labRowsToCsv(kind: LabTestKind, rows: readonly LabRow[]): string {
-  const keys = keysOf(kind);
-  return writeCsv(
-    keys,
-    rows.map((r) => keys.map((k) => r[k] ?? "")),
-  );
-}
-
 export type LabCsvOutcome =
   { ok: true; rows: LabRow[]; warnings: CsvProblem[] } | { ok: false; problems: CsvProblem[]; warnings: CsvProblem[] };
 

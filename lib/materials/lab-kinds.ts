@@ -125,7 +125,3 @@ export const LAB_KIND_INFO: Record<LabTestKind, LabKindInfo> = {
 
 /** The noun lib/lab uses in its row messages ("test 3: …"). */
 export const LAB_ROW_NOUN = "test";
-
-export function isLabTestKind(value: string): value is LabTestKind {
-  return (LAB_TEST_KINDS as readonly string[]).includes(value);
-}

@@ -9,7 +9,7 @@ import { checkMaterials } from "@/lib/stability/validate-materials";
 import type { Issue } from "@/lib/stability";
 
 /**
- * A library material's engineering parameters: the engine's material (ENGINE-IO.md) without the
+ * A library material's engineering parameters: the engine's material (docs/engine-io.md) without the
  * id, name and colour, which the library keeps in their own columns. Units: kN/m³, kPa, degrees, m.
  */
 const withoutIdentity = { id: true, name: true, color: true } as const;
@@ -43,7 +43,7 @@ export const PARAMETER_INFO: Record<ParameterKey, ParameterInfo> = {
   su: { label: "Undrained shear strength", symbol: "su", unit: "kPa" },
   suGradient: { label: "Increase of su per metre of depth", symbol: "su gradient", unit: "kPa/m" },
   suDatum: { label: "Elevation where su applies", symbol: "su datum", unit: "m" },
-  // The total-stress (R) envelope from CU tests, for the staged rapid-drawdown method (ENGINE.md §7(b)).
+  // The total-stress (R) envelope from CU tests, for the staged rapid-drawdown method (docs/engine.md §7(b)).
   cR: { label: "R-envelope intercept (staged drawdown)", symbol: "cR", unit: "kPa" },
   phiR: { label: "R-envelope angle (staged drawdown)", symbol: "φR", unit: "°" },
 };
@@ -74,7 +74,7 @@ export interface ParameterCheck {
 }
 
 /**
- * Checks parameters against the engine's own material bounds (ENGINE.md §1, through
+ * Checks parameters against the engine's own material bounds (docs/engine.md §1, through
  * lib/stability's checkMaterials), so the library never holds a material a run would refuse.
  * @param key the material key, used in the messages
  */

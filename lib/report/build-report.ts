@@ -17,6 +17,7 @@ import { drawSection } from "./section-drawing";
 import { waterUsedText } from "../runs/water-used";
 import { writeSliceTable } from "./slice-pages";
 import { VARIANT_TEXT, stageCells, stagedView } from "../runs/staged-view";
+import { formatCount, formatDateTime } from "../format";
 
 export interface ReportInput {
   projectName: string;
@@ -58,7 +59,7 @@ export interface ReportInput {
   generatedBy: string;
 }
 
-const day = (iso: string | null) => (iso ? new Date(iso).toISOString().replace("T", " ").slice(0, 16) + " UTC" : "—");
+const day = (iso: string | null) => (iso ? formatDateTime(iso) : "—");
 const m2 = (v: number) => v.toFixed(2);
 /** A sentence typed by a person, ended with one full stop. */
 const withStop = (text: string) => (/[.!?]$/.test(text.trim()) ? text.trim() : `${text.trim()}.`);
@@ -163,10 +164,7 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
     ],
     ["Radii", radiiText(doc.analysis?.radii)],
     ["Refinement", doc.analysis?.refine ? "finer nested grids around the best centres" : "none"],
-    [
-      "Circles",
-      `${run.result.circles.tried.toLocaleString("en-GB")} tried, ${run.result.circles.valid.toLocaleString("en-GB")} valid`,
-    ],
+    ["Circles", `${formatCount(run.result.circles.tried)} tried, ${formatCount(run.result.circles.valid)} valid`],
     ...rejectionList(run.result.circles.rejected).map((r): [string, string] => ["Rejected", `${r.count} — ${r.text}`]),
   ]);
 }

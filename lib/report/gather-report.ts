@@ -1,5 +1,5 @@
 import "server-only";
-import type { RunDetail } from "@/db/queries/runs";
+import type { RunDetail } from "@/lib/runs/types";
 import { fetchChecklist, fetchReviewRecord, fetchRunComments } from "@/db/queries/review";
 import { collectMaterialSources } from "../review/collect-material-sources";
 import { commentLabel } from "../review/comment-label";

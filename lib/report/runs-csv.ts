@@ -1,11 +1,10 @@
 /**
- * The project's runs as CSV, one row per run, with the same conventions as the slice CSV
- * (lib/runs/slice-csv.ts): CRLF line ends, a leading `#` caution line, and text cells that a
- * spreadsheet would run as a formula (=, +, -, @) prefixed with a single quote.
+ * The project's runs as CSV, one row per run, through the app's one writer
+ * (lib/section-io/csv-write.ts), with a leading `#` caution line as the slice CSV has.
  */
 import { CAUTION_TEXT } from "../caution";
 import { LOADING_CONDITIONS } from "../analysis/required-fs";
-import { escapeCsvText } from "../runs/slice-csv";
+import { writeCsv } from "../section-io/csv-write";
 import { verdictOf } from "../runs/verdict";
 import { statusWords, type RunStatus } from "../review/status";
 
@@ -58,34 +57,25 @@ function meets(r: RunCsvRow): string {
   return fss.every((v) => verdictOf(v, r.requiredFs) === "pass") ? "yes" : "no";
 }
 
-/** CSV text with CRLF line ends and no byte-order mark. */
 export function runsToCsv(rows: readonly RunCsvRow[], projectName: string): string {
-  const out = [
-    escapeCsvText(`# Caution: ${CAUTION_TEXT}`),
-    escapeCsvText(`# Project: ${projectName.replace(/[\r\n]+/g, " ")}`),
-    HEADERS.join(","),
-  ];
-  for (const r of rows) {
-    const text = [
-      String(r.id),
-      r.title,
-      r.sectionName,
-      String(r.sectionVersion),
-      LOADING_CONDITIONS.find((c) => c.key === r.loadingCondition)?.label ?? r.loadingCondition,
-      r.face,
-      r.methods.join(" "),
-      r.requiredFs.toFixed(2),
-      fs3(r.fsBishop),
-      fs3(r.fsFellenius),
-      meets(r),
-      statusWords(r.status, Boolean(r.belowRequiredReason)),
-      r.authorName,
-      r.createdAt,
-      r.reviewedByName ?? "",
-      r.reviewedAt ?? "",
-      r.revisesRunId ? String(r.revisesRunId) : "",
-    ];
-    out.push(text.map(escapeCsvText).join(","));
-  }
-  return out.join("\r\n") + "\r\n";
+  const body = rows.map((r) => [
+    String(r.id),
+    r.title,
+    r.sectionName,
+    String(r.sectionVersion),
+    LOADING_CONDITIONS.find((c) => c.key === r.loadingCondition)?.label ?? r.loadingCondition,
+    r.face,
+    r.methods.join(" "),
+    r.requiredFs.toFixed(2),
+    fs3(r.fsBishop),
+    fs3(r.fsFellenius),
+    meets(r),
+    statusWords(r.status, Boolean(r.belowRequiredReason)),
+    r.authorName,
+    r.createdAt,
+    r.reviewedByName ?? "",
+    r.reviewedAt ?? "",
+    r.revisesRunId ? String(r.revisesRunId) : "",
+  ]);
+  return writeCsv(HEADERS, body, { comments: [`Caution: ${CAUTION_TEXT}`, `Project: ${projectName}`] });
 }

@@ -7,7 +7,7 @@ import { rgb, type RGB } from "pdf-lib";
 import type { CircleFs, Grid, SectionDocument } from "../stability";
 import { arcPoints } from "../runs/circle-arc";
 import { buildRunScene } from "../runs/run-scene";
-import { niceTicks } from "../runs/nice-ticks";
+import { niceTicks } from "../scales";
 import { materialPalette } from "../sections/material-palette";
 import { INK, SOFT, type ReportWriter } from "./report-writer";
 

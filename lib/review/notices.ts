@@ -7,7 +7,3 @@ export const NOTICE_INFO: Record<NoticeKind, { label: string; audience: string }
   "run-approved": { label: "My run is signed off", audience: "Sent to the run's author." },
   "run-returned": { label: "My run is returned with comments", audience: "Sent to the run's author." },
 };
-
-export function isNoticeKind(value: string): value is NoticeKind {
-  return (NOTICE_KINDS as readonly string[]).includes(value);
-}

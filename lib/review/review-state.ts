@@ -1,14 +1,8 @@
 import "server-only";
-import {
-  fetchChecklist,
-  fetchReviewRecord,
-  fetchRunComments,
-  fetchRunEvents,
-  type ReviewRecord,
-  type RunComment,
-  type RunEvent,
-} from "@/db/queries/review";
-import { fetchRevisionChain, type ChainLink, type RunDetail } from "@/db/queries/runs";
+import { fetchChecklist, fetchReviewRecord, fetchRunComments, fetchRunEvents } from "@/db/queries/review";
+import type { ReviewRecord, RunComment, RunEvent } from "@/lib/review/types";
+import { fetchRevisionChain } from "@/db/queries/runs";
+import type { ChainLink, RunDetail } from "@/lib/runs/types";
 import { availableActions, checkChecklistEdit, checkComment, checkDraftChange, type Actor } from "./rules";
 import {
   checklistHints,

@@ -3,7 +3,8 @@ import { ApiError, notFound } from "../api/errors";
 import { parseId } from "../api/handler";
 import { requireProjectAccess, type ProjectAccess } from "../projects/access";
 import type { SessionUser } from "../auth/session";
-import { fetchRun, type RunDetail } from "@/db/queries/runs";
+import { fetchRun } from "@/db/queries/runs";
+import type { RunDetail } from "@/lib/runs/types";
 import type { Actor, Refusal, RunFacts } from "./rules";
 
 export interface RunAccess {

@@ -20,18 +20,23 @@ export const TRANSITIONS: Record<TransitionAction, Transition> = {
   return: { from: "submitted", to: "returned" },
 };
 
-/** Words for a status in sentences, mail and the report (the badge has its own short labels). */
+/** Short labels of a status, for its badge and the runs filter. */
+export const STATUS_LABELS: Record<RunStatus, string> = {
+  draft: "Draft",
+  submitted: "Awaiting review",
+  returned: "Returned",
+  approved: "Signed off",
+};
+
+/** The badge and filter label of a run signed off although its FS is below the required value. */
+export const BELOW_REQUIRED_LABEL = "Signed off — below the required FS";
+
+/** Words for a status in sentences, mail and the report (the badge and filter use STATUS_LABELS). */
 export const STATUS_WORDS: Record<RunStatus, string> = {
   draft: "draft",
   submitted: "awaiting review",
   returned: "returned with comments",
   approved: "signed off",
-};
-
-export const ACTION_WORDS: Record<TransitionAction, string> = {
-  submit: "Submit for review",
-  approve: "Sign off",
-  return: "Return with comments",
 };
 
 export function isRunStatus(value: string): value is RunStatus {

@@ -1,7 +1,7 @@
 /**
  * Drawing geometry of slip circles: points along the lower arc between a slip mass's two
  * ends, and the slice boundaries from the arc up to the ground. Only the lower arc is a
- * slip surface (ENGINE.md §3), so every point returned lies at or below the centre.
+ * slip surface (docs/engine.md §3), so every point returned lies at or below the centre.
  */
 import type { Circle } from "@/lib/stability";
 
@@ -32,16 +32,6 @@ export function arcPoints(c: Circle, from: Pt, to: Pt, maxStepDeg = 2): number[]
   const out: number[] = [];
   for (let i = 0; i <= n; i++) {
     const t = a + ((b - a) * i) / n;
-    out.push(c.xc + c.r * Math.cos(t), c.yc + c.r * Math.sin(t));
-  }
-  return out;
-}
-
-/** Points of the whole circle, for faint context outlines. */
-export function fullCirclePoints(c: Circle, segments = 96): number[] {
-  const out: number[] = [];
-  for (let i = 0; i < segments; i++) {
-    const t = (2 * Math.PI * i) / segments;
     out.push(c.xc + c.r * Math.cos(t), c.yc + c.r * Math.sin(t));
   }
   return out;

@@ -5,7 +5,8 @@
  * min(pre-drawdown line, max(ground, lowered pool)), so the only free water left above the
  * ground there is the lowered pool; beyond the crest the pre-drawdown line stands unchanged.
  */
-import { groundAt, lineAt } from "./section-outline";
+import { groundAt } from "./section-outline";
+import { elevationAt } from "../plane-geometry";
 
 type Pt = readonly [number, number];
 
@@ -14,10 +15,10 @@ export function poolSide(pre: readonly Pt[], ground: readonly Pt[]): "left" | "r
   if (pre.length < 2 || ground.length < 2) return null;
   const [xl, gl] = ground[0];
   const [xr, gr] = ground[ground.length - 1];
-  const dl = lineAt(pre, xl) - gl;
-  const dr = lineAt(pre, xr) - gr;
+  const dl = elevationAt(pre, xl) - gl;
+  const dr = elevationAt(pre, xr) - gr;
   if (dl <= 1e-6 && dr <= 1e-6) return null;
-  if (dl > 1e-6 && dr > 1e-6) return lineAt(pre, xl) >= lineAt(pre, xr) ? "left" : "right";
+  if (dl > 1e-6 && dr > 1e-6) return elevationAt(pre, xl) >= elevationAt(pre, xr) ? "left" : "right";
   return dl > 1e-6 ? "left" : "right";
 }
 
@@ -41,7 +42,7 @@ export function waterAfterDrawdown(pre: readonly Pt[], ground: readonly Pt[], to
   const crest = crestX(ground, side);
   const onPoolSide = (x: number) => (side === "left" ? x <= crest : x >= crest);
   const level = (x: number) => {
-    const yp = lineAt(pre, x);
+    const yp = elevationAt(pre, x);
     return onPoolSide(x) ? Math.min(yp, Math.max(groundAt(ground, x), to)) : yp;
   };
   const x0 = Math.min(ground[0][0], pre[0][0]);
@@ -51,8 +52,8 @@ export function waterAfterDrawdown(pre: readonly Pt[], ground: readonly Pt[], to
     .sort((a, b) => a - b);
   // Inside each interval the three lines are straight; the level bends only where two of them cross.
   const diffs = [
-    (x: number) => lineAt(pre, x) - groundAt(ground, x),
-    (x: number) => lineAt(pre, x) - to,
+    (x: number) => elevationAt(pre, x) - groundAt(ground, x),
+    (x: number) => elevationAt(pre, x) - to,
     (x: number) => groundAt(ground, x) - to,
   ];
   const all: number[] = [];

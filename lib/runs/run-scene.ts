@@ -10,7 +10,8 @@ import { methodCircles, overlayCircles, type DrawnCircle } from "./circle-styles
 import { fsMapCells, fsRange, type FsCell, type FsRange } from "./fs-map-cells";
 import { bandLines, normaliseGrid, type BandLine } from "./grid-edit";
 import { materialFills } from "./material-tints";
-import { groundAt, groundLine, lineAt, pondedWater, poolLevelSpans, sectionBox } from "./section-outline";
+import { groundAt, groundLine, pondedWater, poolLevelSpans, sectionBox } from "./section-outline";
+import { elevationAt } from "../plane-geometry";
 import { poolSide, waterAfterDrawdown } from "./drawdown-water";
 import { unionBoxes, type Box } from "./view-fit";
 
@@ -170,6 +171,6 @@ function drawnBefore(pre: [number, number][], ground: [number, number][]): RunSc
   const side = poolSide(pre, ground);
   const edge = side === "right" ? ground[ground.length - 1]?.[0] : ground[0]?.[0];
   const x = edge ?? pre[0][0];
-  const level = side ? lineAt(pre, x) : null;
-  return { points: pre.flat(), level, labelAt: [x, level ?? lineAt(pre, x)] };
+  const level = side ? elevationAt(pre, x) : null;
+  return { points: pre.flat(), level, labelAt: [x, level ?? elevationAt(pre, x)] };
 }

@@ -1,10 +1,11 @@
 /**
  * The section as the run canvas draws it: its extent, the ground surface, and the ponded
- * water (ENGINE-IO.md: where the phreatic line lies above the ground, the water between is
+ * water (docs/engine-io.md: where the phreatic line lies above the ground, the water between is
  * ponded reservoir water), plus where a lowered pool level lies over the water side.
  */
 import type { SectionDocument } from "@/lib/stability";
 import { sectionGround } from "@/lib/stability/prepare";
+import { elevationAt } from "../plane-geometry";
 import { boxOfPoints, type Box } from "./view-fit";
 
 type Pt = readonly [number, number];
@@ -54,18 +55,6 @@ export function groundAt(ground: readonly Pt[], x: number): number {
   return Math.max(left, right);
 }
 
-/** A polyline with increasing x, held flat beyond its ends (as the engine extends it). */
-export function lineAt(line: readonly Pt[], x: number): number {
-  const n = line.length;
-  if (x <= line[0][0]) return line[0][1];
-  if (x >= line[n - 1][0]) return line[n - 1][1];
-  let i = 0;
-  while (i + 2 < n && line[i + 1][0] < x) i++;
-  const [xa, ya] = line[i];
-  const [xb, yb] = line[i + 1];
-  return xb === xa ? yb : ya + ((yb - ya) * (x - xa)) / (xb - xa);
-}
-
 interface Column {
   x: number;
   top: number;
@@ -100,10 +89,10 @@ export function pondedWater(water: readonly Pt[], ground: readonly Pt[]): number
   for (let i = 0; i < xs.length; i++) {
     const x = xs[i];
     const g = groundLimits(ground, x);
-    const p = lineAt(water, x);
+    const p = elevationAt(water, x);
     if (i > 0) {
       const xa = xs[i - 1];
-      const pa = lineAt(water, xa);
+      const pa = elevationAt(water, xa);
       const dA = pa - groundLimits(ground, xa).right;
       const dB = p - g.left;
       // Inside an interval both lines are straight, so the depth changes sign at most once.

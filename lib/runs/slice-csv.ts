@@ -1,9 +1,7 @@
 /**
- * The slice table as CSV (RFC 4180: comma separated, CRLF line ends, fields with a comma,
- * quote or line break quoted with doubled quotes). Leading lines starting with `#` carry the
- * engineering caution and the run's details. Text that a spreadsheet would run as a formula
- * (starting with =, +, -, @, tab or carriage return) is prefixed with a single quote, as
- * the OWASP "CSV Injection" guidance advises.
+ * The slice table as CSV through the app's one writer (lib/section-io/csv-write.ts: RFC 4180,
+ * formula escaping, byte-order mark). Leading lines starting with `#` carry the engineering
+ * caution and the run's details.
  */
 import { CAUTION_TEXT } from "../caution";
 import {
@@ -15,6 +13,7 @@ import {
   type SliceMethod,
 } from "./slice-columns";
 import { VARIANT_TEXT, stageLine, type StagedView } from "./staged-view";
+import { writeCsv } from "../section-io/csv-write";
 import type { Circle, SliceRow } from "@/lib/stability";
 
 /** What the leading comment lines say about the run. */
@@ -36,19 +35,6 @@ export interface SliceCsvMeta {
   runAt?: string;
   /** A staged drawdown's procedure and each method's stage factors. */
   staged?: StagedView | null;
-}
-
-const FORMULA_START = /^[=+\-@\t\r]/;
-
-/** A text cell made safe from formula execution, then quoted if it needs to be. */
-export function escapeCsvText(text: string): string {
-  const safe = FORMULA_START.test(text) ? `'${text}` : text;
-  return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
-}
-
-/** A comment line: one field starting with `#`, line breaks flattened. */
-function commentLine(text: string): string {
-  return escapeCsvText(`# ${text.replace(/[\r\n]+/g, " ")}`);
 }
 
 const fs3 = (v: number | null) => (v === null || !Number.isFinite(v) ? "no valid circle" : v.toFixed(3));
@@ -102,26 +88,16 @@ function metaLines(meta: SliceCsvMeta): string[] {
   return lines;
 }
 
-/**
- * The slice table with its leading comment lines.
- * @returns CSV text with CRLF line ends and no byte-order mark
- */
+/** The slice table with its leading comment lines; numbers keep the table's own formatting. */
 export function sliceTableToCsv(rows: readonly SliceRow[], meta: SliceCsvMeta): string {
   const cols = sliceColumns(meta.method, isStagedSlices(rows));
-  const out = metaLines(meta).map(commentLine);
-  out.push(cols.map((c) => escapeCsvText(columnHeader(c))).join(","));
-  for (const s of numberSlices(rows)) {
-    out.push(
-      cols
-        .map((c) => {
-          const v = c.value(s, meta.method);
-          // Numbers come from our own formatting and may start with "-": only text is escaped.
-          return typeof v === "string" ? escapeCsvText(v) : formatCell(c, v);
-        })
-        .join(","),
-    );
-  }
-  return out.join("\r\n") + "\r\n";
+  const body = numberSlices(rows).map((s) =>
+    cols.map((c) => {
+      const v = c.value(s, meta.method);
+      return typeof v === "string" ? v : formatCell(c, v);
+    }),
+  );
+  return writeCsv(cols.map(columnHeader), body, { comments: metaLines(meta) });
 }
 
 /** A file name for the download, made of safe characters only. */

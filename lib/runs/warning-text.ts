@@ -102,7 +102,7 @@ export function rejectionList(rejected: Record<string, number>): { reason: strin
     .map(([reason, count]) => ({ reason, count, text: rejectionText(reason) }));
 }
 
-/** The ordinary method's form (ENGINE-IO.md), stated beside its FS. */
+/** The ordinary method's form (docs/engine-io.md), stated beside its FS. */
 export function ordinaryFormText(form: string | undefined): string {
   return form === "effective-weight"
     ? "effective-weight form: N′ = (W − u·b)·cos α − kh·W·sin α"

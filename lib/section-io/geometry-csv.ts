@@ -1,4 +1,5 @@
 import { RowReader, finish, readCsvTable, type CsvParseResult, type CsvProblem } from "./csv-read";
+import { polygonArea } from "../plane-geometry";
 import { writeCsv } from "./csv-write";
 import type { Point, SectionRegion } from "./section-types";
 
@@ -22,7 +23,7 @@ interface RegionDraft {
 /**
  * Parses a geometry CSV: header `region,material,x,y`, one row per polygon vertex in order, the rows
  * of one region together, the material required on each region's first row (optional after it).
- * Returns `regions` shaped as ENGINE-IO.md's document ({material, points}[]), first point not repeated.
+ * Returns `regions` shaped as docs/engine-io.md's document ({material, points}[]), first point not repeated.
  */
 export function parseGeometryCsv(text: string, options: GeometryCsvOptions = {}): CsvParseResult<SectionRegion[]> {
   const problems: CsvProblem[] = [];
@@ -122,21 +123,9 @@ function closeRegion(
     problems.push(
       at(`Region '${d.label}' has ${kept.length} point${kept.length === 1 ? "" : "s"}; a region needs at least 3.`),
     );
-  else if (Math.abs(polygonArea(kept.map((v) => v.p))) < 1e-6)
+  else if (polygonArea(kept.map((v) => v.p)) < 1e-6)
     problems.push(at(`Region '${d.label}' has no area: its points lie on one line.`));
   return { material: d.material, points: kept.map((v) => v.p) };
-}
-
-/** Signed area by the shoelace formula (m²), taken about the first point. */
-function polygonArea(points: Point[]): number {
-  // Relative coordinates keep the products small: map-grid coordinates (10⁵–10⁷ m) would otherwise cancel.
-  const [x0, y0] = points[0];
-  let twice = 0;
-  points.forEach(([x1, y1], i) => {
-    const [x2, y2] = points[(i + 1) % points.length];
-    twice += (x1 - x0) * (y2 - y0) - (x2 - x0) * (y1 - y0);
-  });
-  return twice / 2;
 }
 
 /**

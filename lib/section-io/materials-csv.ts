@@ -21,10 +21,10 @@ export const MATERIAL_COLUMNS = [
 type NumberColumn = "gamma" | "gammaSat" | "c" | "phi" | "su" | "suGradient" | "suDatum" | "cR" | "phiR";
 type Model = (typeof MATERIAL_MODELS)[number];
 
-/** Columns each model needs, may use, and ignores (ENGINE-IO.md, `materials[].model`). */
+/** Columns each model needs, may use, and ignores (docs/engine-io.md, `materials[].model`). */
 const NEEDS: Record<Model, { required: NumberColumn[]; optional: NumberColumn[] }> = {
-  // su on a drained material is its end-of-construction strength (ENGINE-IO.md load case "undrained").
-  // cR, phiR: the R envelope a staged drawdown needs (ENGINE-IO.md `materials[].cR`, `phiR`).
+  // su on a drained material is its end-of-construction strength (docs/engine-io.md load case "undrained").
+  // cR, phiR: the R envelope a staged drawdown needs (docs/engine-io.md `materials[].cR`, `phiR`).
   "mohr-coulomb": {
     required: ["gamma", "c", "phi"],
     optional: ["gammaSat", "su", "suGradient", "suDatum", "cR", "phiR"],
@@ -49,7 +49,7 @@ export interface MaterialsCsvValue {
  * freeDraining,colour` (every column but id and model may be left out of the header);
  * `model` is mohr-coulomb (needs gamma, c, phi; cR and phiR together), undrained (gamma, su; suDatum
  * when suGradient is given) or impenetrable (nothing). freeDraining is yes or no (blank: no);
- * colour is #RRGGBB. Values are checked against ENGINE.md §1's bounds: outside the error range is a
+ * colour is #RRGGBB. Values are checked against docs/engine.md §1's bounds: outside the error range is a
  * problem, outside the usual range a warning. Ids must be unique.
  */
 export function parseMaterialsCsv(text: string): CsvParseResult<MaterialsCsvValue> {
@@ -188,7 +188,7 @@ function buildMaterial(id: string, model: Model, n: Partial<Record<NumberColumn,
   };
 }
 
-/** ENGINE.md §1 bounds (error / warning): γ ∉ (5, 30] / ∉ [14, 24]; γsat ≤ γw / < γ; c' < 0 / > 200; φ' ∉ [0, 60) / > 45; su ≤ 0 / > 500. */
+/** docs/engine.md §1 bounds (error / warning): γ ∉ (5, 30] / ∉ [14, 24]; γsat ≤ γw / < γ; c' < 0 / > 200; φ' ∉ [0, 60) / > 45; su ≤ 0 / > 500. */
 function checkBounds(r: RowReader, m: SectionMaterial, warnings: CsvProblem[]): void {
   if (m.model === "impenetrable") return;
   const warn = (col: string, message: string) => warnings.push(r.at(col, message));

@@ -6,7 +6,7 @@ export const PHREATIC_COLUMNS = ["x", "y"] as const;
 
 /**
  * Parses a phreatic line CSV: header `x,y`, one row per vertex with x strictly increasing
- * (ENGINE.md §1: piezometric lines have x increasing). Returns `water.phreatic` of ENGINE-IO.md.
+ * (docs/engine.md §1: piezometric lines have x increasing). Returns `water.phreatic` of docs/engine-io.md.
  */
 export function parsePhreaticCsv(text: string): CsvParseResult<Point[]> {
   const problems: CsvProblem[] = [];

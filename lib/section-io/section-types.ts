@@ -1,5 +1,5 @@
 /**
- * The parts of the section document (ENGINE-IO.md, input version 1) that the CSV files carry.
+ * The parts of the section document (docs/engine-io.md, input version 1) that the CSV files carry.
  * Kept here, not imported from lib/stability, so import/export stays a leaf module.
  */
 

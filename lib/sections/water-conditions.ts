@@ -11,7 +11,8 @@
 import { z } from "zod";
 import { waterSchema, type SectionDocument, type Water } from "../stability";
 import { LOADING_CONDITION_KEYS, type LoadingConditionKey } from "../analysis/required-fs";
-import { groundProfile, polylineAt } from "../analysis/ground-profile";
+import { groundProfile } from "../analysis/ground-profile";
+import { elevationAt } from "../plane-geometry";
 
 /**
  * construction: pore pressures of construction, no reservoir; steady: seepage from the pools;
@@ -88,7 +89,7 @@ export function poolLevels(
   const ground = groundProfile(doc);
   if (!line || line.length < 2 || ground.length < 2) return { left: null, right: null };
   const at = (x: number, g: number) => {
-    const y = polylineAt(line, x);
+    const y = elevationAt(line, x);
     return y > g + 1e-6 ? y : null;
   };
   return { left: at(ground[0][0], ground[0][1]), right: at(ground.at(-1)![0], ground.at(-1)![1]) };

@@ -6,7 +6,7 @@
  * - the rest of the ground surface and the sides are potential seepage faces;
  * - the bottom of the regions and faces against impenetrable material pass no water.
  */
-import { fmt, issue } from "./issues";
+import { issue } from "./issues";
 import { polylineDistance } from "./geometry";
 import type { Pool, Point, SeepageIssue, TriMesh } from "./types";
 

@@ -1,4 +1,4 @@
-import type { DocumentRecord } from "@/db/queries/documents";
+import type { DocumentRecord } from "@/lib/documents/types";
 
 /** A document as the API shows it: everything but where its bytes are kept. */
 export type DocumentSummary = Omit<DocumentRecord, "storageKey">;

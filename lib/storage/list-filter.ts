@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { ApiError } from "../api/errors";
 import { fieldErrors } from "../api/handler";
-import type { DocumentFilter } from "@/db/queries/documents";
+import type { DocumentFilter } from "@/lib/documents/types";
 
 const optionalId = (what: string) =>
   z

@@ -1,6 +1,7 @@
 import "server-only";
 import { createHash, randomUUID } from "node:crypto";
-import { deleteDocument, insertDocument, type DocumentRecord } from "@/db/queries/documents";
+import { deleteDocument, insertDocument } from "@/db/queries/documents";
+import type { DocumentRecord } from "@/lib/documents/types";
 import { ApiError } from "../api/errors";
 import type { FileTypeSpec } from "./file-types";
 import { deleteObject, putObject } from "./object-store";

@@ -6,17 +6,19 @@ import { cleanFileName } from "./content-disposition";
 import { DOCUMENT_KINDS } from "./document-kinds";
 import { formatBytes, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, MULTIPART_OVERHEAD_BYTES } from "./upload-limits";
 
-/** A form field holding an id: absent or "" means none. */
+/**
+ * A form field holding an id: absent or "" means none. "" is dropped before the check rather than
+ * offered as a union branch, so a bad id answers with this message and not zod's bare "Invalid input".
+ */
 const optionalId = (what: string) =>
-  z
-    .union([
-      z.literal("").transform(() => undefined),
-      z
-        .string()
-        .regex(/^[1-9]\d{0,9}$/, `${what} must be a positive whole number.`)
-        .transform(Number),
-    ])
-    .optional();
+  z.preprocess(
+    (v) => (v === "" ? undefined : v),
+    z
+      .string()
+      .regex(/^[1-9]\d{0,9}$/, `${what} must be a positive whole number.`)
+      .transform(Number)
+      .optional(),
+  );
 
 /** The text fields sent beside the file. */
 export const uploadFieldsSchema = z

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import type { Browser } from "playwright-core";
-import { appUrl, launchBrowser, signInAs, watchConsole } from "../support/browser";
+import { launchBrowser, signInAs, watchConsole } from "../support/browser";
 import { steepestPassingRatio } from "@/lib/design";
 
 let browser: Browser;
@@ -71,7 +71,7 @@ describe("slope design as a new designer would use it", () => {
     expect(shownUp).toBeGreaterThan(3);
     expect(shownDown).toBeGreaterThan(2.5);
     await expect.poll(() => page.getByTestId("pair-fill").textContent()).toMatch(/Rechecked as a pair/);
-    await page.getByTestId("fs-ratio-chart").locator("svg.recharts-surface").first().waitFor();
+    await page.getByTestId("fs-ratio-chart").getByRole("img").first().waitFor();
     await page.getByTestId("caution").first().waitFor();
 
     // The evidence behind the downstream choice opens as a saved run with its canvas.

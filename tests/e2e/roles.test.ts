@@ -57,6 +57,8 @@ describe("signing in as each role", () => {
 
     await page.getByRole("link", { name: "Projects" }).click();
     await page.getByRole("link", { name: "Lower Wendle Reservoir embankment" }).click();
+    // The project page must have arrived before its Members link is used, or the two navigations race.
+    await page.waitForURL(/\/projects\/\d+$/);
     await page.getByRole("link", { name: "Members" }).click();
     await page.waitForURL(/\/members$/);
     await page.getByLabel("Person").selectOption({ label: "Demo Second Engineer (engineer2@scarpline.test)" });

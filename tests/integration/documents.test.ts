@@ -198,7 +198,7 @@ describe("POST then GET /api/projects/:id/documents", () => {
     expect(mine.documents[0].materialName).toBe("Docs test clay core");
     const bad = await engineer.request(`/api/projects/${projectId}/documents?sectionId=abc`);
     expect(bad.status).toBe(400);
-    expect((await bad.json()).error.fields.sectionId).toBeDefined();
+    expect((await bad.json()).error.fields.sectionId).toEqual(["sectionId must be a positive whole number."]);
   });
 });
 
@@ -259,25 +259,43 @@ describe("uploads that are refused leave nothing behind", () => {
       notes: "",
       updated_by: engineerId,
     });
-    const cases: { body: FormData; field: string }[] = [
-      { body: form(CSV, "a.csv", "text/csv", { kind: "drawing" }), field: "kind" },
-      { body: form(CSV, "a.csv", "text/csv", { kind: "survey", sectionId: "-4" }), field: "sectionId" },
+    const cases: { body: FormData; field: string; message: RegExp }[] = [
+      {
+        body: form(CSV, "a.csv", "text/csv", { kind: "drawing" }),
+        field: "kind",
+        message: /^Choose what the document is/,
+      },
+      {
+        body: form(CSV, "a.csv", "text/csv", { kind: "survey", sectionId: "-4" }),
+        field: "sectionId",
+        message: /^sectionId must be a positive whole number\.$/,
+      },
       {
         body: form(CSV, "a.csv", "text/csv", { kind: "survey", sectionId: "1", materialId: "1" }),
         field: "materialId",
+        message: /^Attach the document to a section or to a material, not both\.$/,
       },
-      { body: form(new Uint8Array(0), "empty.csv", "text/csv", { kind: "survey" }), field: "file" },
+      {
+        body: form(new Uint8Array(0), "empty.csv", "text/csv", { kind: "survey" }),
+        field: "file",
+        message: /^'empty\.csv' is empty \(0 bytes\)\.$/,
+      },
       {
         body: form(CSV, "a.csv", "text/csv", { kind: "lab-sheet", materialId: String(foreignMaterial) }),
         field: "materialId",
+        message: /^Material \d+ is not part of this project; 'a\.csv' was not stored\.$/,
       },
-      { body: form(CSV, "a.csv", "text/csv", { kind: "survey", sectionId: "987654" }), field: "sectionId" },
+      {
+        body: form(CSV, "a.csv", "text/csv", { kind: "survey", sectionId: "987654" }),
+        field: "sectionId",
+        message: /^Section 987654 is not part of this project; 'a\.csv' was not stored\.$/,
+      },
     ];
     await expectNothingStored(projectId, async () => {
       for (const c of cases) {
         const { status, body } = await upload(engineer, projectId, c.body);
         expect(status, JSON.stringify(body)).toBe(400);
-        expect(body.error.fields[c.field], JSON.stringify(body)).toBeDefined();
+        expect(body.error.fields[c.field], JSON.stringify(body)).toEqual([expect.stringMatching(c.message)]);
       }
       const notMultipart = await engineer.request(`/api/projects/${projectId}/documents`, {
         method: "POST",

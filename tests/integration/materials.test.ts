@@ -3,6 +3,7 @@ import { signedIn, type AppClient } from "../support/http";
 import { getDb } from "@/db/index";
 import { DEMO_PROJECT } from "@/db/seeds/demo";
 import { seedDemoMaterials } from "@/db/seeds/demo-materials";
+import { MATERIAL_KEY_HINT } from "@/lib/materials/keys";
 import { MATERIAL_COLORS } from "@/lib/materials/palette";
 
 let engineer: AppClient;
@@ -51,8 +52,8 @@ describe("materials library", () => {
       json: { key: "Core Clay", name: "x", parameters: { model: "impenetrable" } },
     });
     expect(badKey.status).toBe(400);
-    expect((await badKey.json()).error.fields.key).toBeDefined();
-    // ENGINE.md §1: φ' must lie in [0°, 60°).
+    expect((await badKey.json()).error.fields.key).toEqual([MATERIAL_KEY_HINT]);
+    // docs/engine.md §1: φ' must lie in [0°, 60°).
     const badPhi = await engineer.request(`${base}/materials`, {
       method: "POST",
       json: { key: "steep", name: "x", parameters: { model: "mohr-coulomb", gamma: 19, c: 0, phi: 65 } },
@@ -105,7 +106,9 @@ describe("materials library", () => {
       json: { parameters: { model: "mohr-coulomb", gamma: 19, c: 0.3, phi: 38 }, sources: { gamma: labTest.id } },
     });
     expect(wrong.status).toBe(400);
-    expect((await wrong.json()).error.fields["sources.gamma"]).toBeDefined();
+    expect((await wrong.json()).error.fields["sources.gamma"]).toEqual([
+      expect.stringMatching(/set does not give γ\./),
+    ]);
 
     // Deleting the set keeps the values but removes the source, in one go.
     expect((await engineer.request(`${base}/lab-tests/${labTest.id}`, { method: "DELETE" })).status).toBe(204);
@@ -134,7 +137,9 @@ describe("materials library", () => {
     const body = await shape.json();
     expect(body.error.code).toBe("invalid_lab_data");
     expect(body.error.message).toMatch(/test 2/);
-    expect(body.error.fields["row 2, column normalStress"]).toBeDefined();
+    expect(body.error.fields["row 2, column normalStress"]).toEqual([
+      expect.stringMatching(/^test 2: Normal stress σn \(kPa\): Too small: expected number to be >0/),
+    ]);
 
     // Passes the schema but not the physics: σ3 − u must be positive (lib/lab's own check).
     const physics = await engineer.request(`${base}/lab-tests`, {
@@ -154,7 +159,9 @@ describe("materials library", () => {
     expect(physics.status).toBe(400);
     const pb = await physics.json();
     expect(pb.error.message).toMatch(/test 2: effective cell pressure/);
-    expect(pb.error.fields["row 2, column porePressure"]).toBeDefined();
+    expect(pb.error.fields["row 2, column porePressure"].join(" ")).toMatch(
+      /effective cell pressure σ3 − u must be positive/,
+    );
     expect(await count("lab_test_sets")).toBe(before);
   });
 

@@ -180,7 +180,8 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     expect(early.body.error.code).toBe("checklist_open");
     const noNote = await move(reviewer, demo, first, "return", " ");
     expect(noNote.status).toBe(422);
-    expect(noNote.body.error.fields.note).toBeDefined();
+    expect(noNote.body.error.code).toBe("note_required");
+    expect(noNote.body.error.fields.note).toEqual([expect.stringMatching(/a returned run needs a note/)]);
 
     // Pinned comments: a place on the section and a slice; a slice that does not exist is refused.
     const place = await reviewer.request(api(demo, first, "/comments"), {
@@ -198,7 +199,9 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
       json: { body: "x", slice: { number: 9999, method: "bishop" } },
     });
     expect(badSlice.status).toBe(400);
-    expect((await badSlice.json()).error.fields["slice.number"]).toBeDefined();
+    expect((await badSlice.json()).error.fields["slice.number"]).toEqual([
+      expect.stringMatching(/^Use a slice from 1 to \d+\.$/),
+    ]);
 
     const returned = await move(reviewer, demo, first, "return", "Recheck the toe drain and resubmit.");
     expect(returned.status).toBe(200);
@@ -382,7 +385,7 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     );
     const bad = await engineer.request(api(demo, runId), { method: "PATCH", json: { title: "x" } });
     expect(bad.status).toBe(400);
-    expect((await bad.json()).error.fields.title).toBeDefined();
+    expect((await bad.json()).error.fields.title).toEqual(["At least 3 characters."]);
     expect(
       (await engineer.request(api(demo, runId), { method: "PATCH", json: { title: "Tidied draft name" } })).status,
     ).toBe(200);

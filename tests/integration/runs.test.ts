@@ -87,8 +87,10 @@ describe("runs", () => {
       json: { ...body, setup: { ...setup, slices: 3, methods: [] } },
     });
     expect(bad.status).toBe(400);
-    const fields = (await bad.json()).error.fields;
-    expect(Object.keys(fields)).toEqual(expect.arrayContaining(["setup.slices", "setup.methods"]));
+    const { error } = await bad.json();
+    expect(error.code).toBe("invalid_input");
+    expect(error.fields["setup.slices"]).toEqual(["At least 10 slices."]);
+    expect(error.fields["setup.methods"]).toEqual(["Choose at least one method."]);
   });
 
   test("a run of a project the user cannot see is 404", async () => {

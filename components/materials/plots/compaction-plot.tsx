@@ -1,5 +1,5 @@
 import type { CompactionResult } from "@/lib/lab";
-import { formatTick, niceDomain } from "@/lib/materials/plot-scale";
+import { formatTick, niceDomain } from "@/lib/scales";
 import { DataLine, DataPoints, PLOT_COLORS, PlotFrame } from "./plot-frame";
 
 /**

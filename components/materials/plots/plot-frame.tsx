@@ -1,4 +1,4 @@
-import { formatTick, linearScale, niceTicks } from "@/lib/materials/plot-scale";
+import { formatTick, linearScale, niceTicks, type Scale } from "@/lib/scales";
 
 /** Colours of the lab plots (Tol's muted scheme, as the material colours). */
 export const PLOT_COLORS = {
@@ -11,7 +11,7 @@ export const PLOT_COLORS = {
   axis: "#7b756c",
 } as const;
 
-export type Scale = (value: number) => number;
+export type { Scale };
 
 export interface PlotAxis {
   domain: [number, number];

@@ -1,4 +1,4 @@
-import { niceDomain } from "@/lib/materials/plot-scale";
+import { niceDomain } from "@/lib/scales";
 import { DataLine, DataPoints, PLOT_COLORS, PlotFrame } from "./plot-frame";
 
 export interface StrengthLinePlotProps {

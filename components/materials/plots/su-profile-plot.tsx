@@ -1,5 +1,5 @@
 import type { UndrainedStrengthResult } from "@/lib/lab";
-import { niceDomain } from "@/lib/materials/plot-scale";
+import { niceDomain } from "@/lib/scales";
 import { DataLine, DataPoints, PLOT_COLORS, PlotFrame } from "./plot-frame";
 
 /**

@@ -1,7 +1,7 @@
 "use client";
 
 import { Layer, Line, Rect, Text } from "react-konva";
-import { axisTicks, formatTick, niceLengthBelow } from "@/lib/editor/axis-ticks";
+import { axisTicks, formatTick, niceLengthBelow } from "@/lib/scales";
 import { visibleBounds, worldToScreen, type ViewTransform } from "@/lib/editor/view-transform";
 import { CANVAS_COLORS } from "../palette";
 import { AXIS_BAND, CANVAS_FONT } from "./draw-helpers";

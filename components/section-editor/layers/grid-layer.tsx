@@ -1,7 +1,7 @@
 "use client";
 
 import { Layer, Line, Rect } from "react-konva";
-import { axisTicks } from "@/lib/editor/axis-ticks";
+import { axisTicks } from "@/lib/scales";
 import { visibleBounds, worldToScreen, type ViewTransform } from "@/lib/editor/view-transform";
 import { CANVAS_COLORS } from "../palette";
 

@@ -4,9 +4,9 @@ import {
   embankmentParamsSchema,
   fillQuantities,
   generateEmbankment,
-  polygonArea,
   DesignInputError,
 } from "@/lib/design";
+import { polygonArea } from "@/lib/plane-geometry";
 import { validateSection } from "@/lib/stability";
 import { assertInDelta, MATERIALS, params } from "./helpers";
 

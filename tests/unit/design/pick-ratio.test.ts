@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { planRecheck, planSweep, readSweep, steepestPassingRatio, sweepRatios, type SweepPoint } from "@/lib/design";
 
-// The rule of ENGINE.md §9: n* is the smallest n with FS ≥ FSreq at n and at every larger n.
+// The rule of docs/engine.md §9: n* is the smallest n with FS ≥ FSreq at n and at every larger n.
 describe("steepestPassingRatio(points, required)", () => {
   const pts = (fs: (number | null)[]) => fs.map((f, i) => ({ ratio: 2 + i * 0.5, fs: f }));
 

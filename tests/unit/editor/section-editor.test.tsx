@@ -1,6 +1,6 @@
 // @vitest-environment jsdom
 import "vitest-canvas-mock";
-import { act, useState } from "react";
+import { act, useEffect, useState } from "react";
 import { createRoot, type Root } from "react-dom/client";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import type { SectionDocument } from "@/lib/stability";
@@ -22,7 +22,9 @@ const changes = vi.fn();
 
 function Harness({ issues, readOnly }: { issues?: EditorIssue[]; readOnly?: boolean }) {
   const [doc, setDoc] = useState<SectionDocument>(embankment);
-  latest = doc;
+  useEffect(() => {
+    latest = doc;
+  });
   return (
     <>
       <button type="button" data-testid="parent-revert" onClick={() => setDoc(embankment())} />

@@ -20,7 +20,7 @@ describe("deriveUndrainedStrength", () => {
     expect(r.sourceIds).toEqual(["u1", "u2", "u3"]);
   });
 
-  test("vane su rising with depth: su at the ground and gradient, in the engine's su/suGradient/suDatum fields (ENGINE-IO.md; hand calculation)", () => {
+  test("vane su rising with depth: su at the ground and gradient, in the engine's su/suGradient/suDatum fields (docs/engine-io.md; hand calculation)", () => {
     // su = 12 + 1.5·z kPa exactly, ground at 100 m.
     const tests = [2, 4, 6, 9].map((z, i) => ({ depth: z, su: 12 + 1.5 * z, specimen: `V${i + 1}` }));
     const r = deriveUndrainedStrength({ source: "vane", model: "linear", tests, groundElevation: 100 });
@@ -28,7 +28,7 @@ describe("deriveUndrainedStrength", () => {
     expect(r.suDatum).toBe(100);
     expect(r.su).toBeCloseTo(12, 9);
     expect(r.suGradient).toBeCloseTo(1.5, 10);
-    // ENGINE-IO.md: su(y) = su + suGradient·max(0, suDatum − y) reproduces every test.
+    // docs/engine-io.md: su(y) = su + suGradient·max(0, suDatum − y) reproduces every test.
     r.points.forEach((p, i) =>
       expect(r.su + r.suGradient * Math.max(0, r.suDatum - (p.elevation as number))).toBeCloseTo(tests[i].su, 9),
     );

@@ -65,7 +65,7 @@ describe("checkMaterialsImport", () => {
 });
 
 describe("checkMaterialParameters", () => {
-  test("checkMaterialParameters(...) applies ENGINE.md §1: γsat must exceed γw, φ' below 60°; γ 25 only warns", () => {
+  test("checkMaterialParameters(...) applies docs/engine.md §1: γsat must exceed γw, φ' below 60°; γ 25 only warns", () => {
     const out = checkMaterialParameters("core", { model: "mohr-coulomb", gamma: 25, gammaSat: 9.5, c: 5, phi: 60 });
     expect(Object.keys(out.errors).sort()).toEqual(["parameters.gammaSat", "parameters.phi"]);
     expect(out.warnings.map((w) => w.path)).toEqual(["parameters.gamma"]);

@@ -2,7 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { arcPoints, arcY, sliceSides } from "@/lib/runs/circle-arc";
 
-// A circle, and two abscissae on its lower arc (ENGINE.md §3: ya(x) = yc − √(R² − (x − xc)²)).
+// A circle, and two abscissae on its lower arc (docs/engine.md §3: ya(x) = yc − √(R² − (x − xc)²)).
 const circleWithEnds = fc
   .record({
     xc: fc.double({ min: -500, max: 500, noNaN: true }),

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { buildDemoSection, DEMO_POOL } from "@/db/seeds/demo-section";
 import { buildRunScene } from "@/lib/runs/run-scene";
 import { waterAfterDrawdown } from "@/lib/runs/drawdown-water";
-import { lineAt } from "@/lib/runs/section-outline";
+import { elevationAt } from "@/lib/plane-geometry";
 
 /*
  * The rule drawn is the engine's for rapid drawdown water (docs/engine-io.md): on the pool side, from the
@@ -31,17 +31,17 @@ describe("the pore-water level after drawdown", () => {
   const after = waterAfterDrawdown(pre, ground, 4);
 
   it("stands at the lowered pool over the reservoir and at the ground on the drained face", () => {
-    expect(lineAt(after, 5)).toBeCloseTo(4, 9); // ground 0 < 4: free water at the lowered pool
-    expect(lineAt(after, 18)).toBeCloseTo(4, 9); // ground 4 here: the shore of the lowered pool
-    expect(lineAt(after, 20)).toBeCloseTo(5, 9); // ground 5 > 4, pre 8: saturated to the ground surface
-    expect(lineAt(after, 24)).toBeCloseTo(7, 9); // ground 7, pre 8
+    expect(elevationAt(after, 5)).toBeCloseTo(4, 9); // ground 0 < 4: free water at the lowered pool
+    expect(elevationAt(after, 18)).toBeCloseTo(4, 9); // ground 4 here: the shore of the lowered pool
+    expect(elevationAt(after, 20)).toBeCloseTo(5, 9); // ground 5 > 4, pre 8: saturated to the ground surface
+    expect(elevationAt(after, 24)).toBeCloseTo(7, 9); // ground 7, pre 8
   });
 
   it("keeps the pre-drawdown line inside the soil and beyond the crest", () => {
     // At x = 28 the ground (9) is above the pre-drawdown line: 8 − 5 × 2/24.
-    expect(lineAt(after, 28)).toBeCloseTo(8 - (5 * 2) / 24, 9);
-    expect(lineAt(after, 45)).toBeCloseTo(lineAt(pre, 45), 9);
-    expect(lineAt(after, 65)).toBeCloseTo(lineAt(pre, 65), 9);
+    expect(elevationAt(after, 28)).toBeCloseTo(8 - (5 * 2) / 24, 9);
+    expect(elevationAt(after, 45)).toBeCloseTo(elevationAt(pre, 45), 9);
+    expect(elevationAt(after, 65)).toBeCloseTo(elevationAt(pre, 65), 9);
   });
 
   it("is the pre-drawdown line itself when no side is ponded", () => {

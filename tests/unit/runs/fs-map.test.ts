@@ -17,7 +17,7 @@ describe("fsRange", () => {
   });
 });
 
-describe("fsMapCells on the engine's map (values[iy·nx + ix], ENGINE-IO.md)", () => {
+describe("fsMapCells on the engine's map (values[iy·nx + ix], docs/engine-io.md)", () => {
   it("puts cell edges halfway between centres", () => {
     expect(cellEdges([0, 2, 4], 1)).toEqual([-1, 1, 3, 5]);
     expect(cellEdges([7], 2)).toEqual([6, 8]);

@@ -1,36 +1,9 @@
 import Papa from "papaparse";
-import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { CAUTION_TEXT } from "@/components/ui/caution";
-import { escapeCsvText, runFs, sliceCsvFileName, sliceTableToCsv } from "@/lib/runs/slice-csv";
+import { runFs, sliceCsvFileName, sliceTableToCsv } from "@/lib/runs/slice-csv";
 import { columnHeader, sliceColumns } from "@/lib/runs/slice-columns";
 import { SLICES } from "./fixtures";
-
-describe("escapeCsvText (RFC 4180 quoting, OWASP CSV-injection guidance)", () => {
-  it("prefixes text that starts a formula with a single quote", () => {
-    for (const lead of ["=", "+", "-", "@", "\t", "\r"])
-      expect(escapeCsvText(`${lead}SUM(A1)`).replace(/^"/, "").startsWith(`'${lead}`)).toBe(true);
-    expect(escapeCsvText("clay core")).toBe("clay core");
-  });
-
-  it("quotes fields with commas, quotes or line breaks and doubles inner quotes", () => {
-    expect(escapeCsvText('say "hi", then')).toBe('"say ""hi"", then"');
-    expect(escapeCsvText("two\nlines")).toBe('"two\nlines"');
-  });
-
-  it("round-trips any text through an independent CSV parser (papaparse), formula prefix aside", () => {
-    fc.assert(
-      fc.property(fc.string(), fc.string(), (a, b) => {
-        const line = `${escapeCsvText(a)},${escapeCsvText(b)}`;
-        const parsed = Papa.parse<string[]>(line, { newline: "\r\n", delimiter: "," }).data[0] ?? [""];
-        const undo = (s: string, orig: string) => (/^[=+\-@\t\r]/.test(orig) ? s.slice(1) : s);
-        expect(undo(parsed[0] ?? "", a)).toBe(a);
-        expect(undo(parsed[1] ?? "", b)).toBe(b);
-      }),
-      { numRuns: 500 },
-    );
-  });
-});
 
 describe("sliceTableToCsv", () => {
   const csv = sliceTableToCsv(SLICES, {

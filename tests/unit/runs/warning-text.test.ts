@@ -44,7 +44,7 @@ describe("warning sentences", () => {
     expect(out[2].headline).toBe("Material 'x': γ = 25 kN/m³ is high.");
   });
 
-  it("count rejections largest first and state the ordinary method's form (ENGINE-IO.md)", () => {
+  it("count rejections largest first and state the ordinary method's form (docs/engine-io.md)", () => {
     expect(rejectionList({ "no-slip-mass": 3, "upper-arc": 10, impenetrable: 0 }).map((r) => r.count)).toEqual([10, 3]);
     expect(ordinaryFormText("classical")).toMatch(/N′ = N − u·l/);
     expect(ordinaryFormText("effective-weight")).toMatch(/\(W − u·b\)·cos α/);

@@ -7,7 +7,7 @@ function problemsOf(text: string, options?: Parameters<typeof parseGeometryCsv>[
   return r.problems;
 }
 
-describe("parseGeometryCsv: well-formed files (shape of ENGINE-IO.md regions)", () => {
+describe("parseGeometryCsv: well-formed files (shape of docs/engine-io.md regions)", () => {
   test("parseGeometryCsv(text) gives {material, points}[] with the material taken from each region's first row", () => {
     const text =
       "region,material,x,y\nbank,fill,0,0\nbank,,20,0\nbank,,10,5\nbed,clay,0,0\nbed,clay,20,0\nbed,,20,-4\nbed,,0,-4\n";
@@ -54,7 +54,7 @@ describe("parseGeometryCsv: well-formed files (shape of ENGINE-IO.md regions)", 
     expect(r.preview.map((p) => p.row)).toEqual([3, 4, 6]);
   });
 
-  test("a repeated closing point is dropped with a warning (ENGINE-IO.md: first point not repeated)", () => {
+  test("a repeated closing point is dropped with a warning (docs/engine-io.md: first point not repeated)", () => {
     const r = parseGeometryCsv("region,material,x,y\nA,m,0,0\nA,,4,0\nA,,0,3\nA,,0,0\n");
     expect(r.ok && r.value[0].points).toEqual([
       [0, 0],
@@ -184,11 +184,13 @@ describe("geometryToCsv", () => {
       ],
       ["=bank"],
     );
+    // papaparse quotes the cells it escapes; the file starts with a byte-order mark and ends with CRLF.
     expect(text.split("\r\n")).toEqual([
-      "region,material,x,y",
-      "'=bank,'-fill,-1.5,-2",
-      "'=bank,'-fill,3,0",
-      "'=bank,'-fill,0,4",
+      "\uFEFFregion,material,x,y",
+      `"'=bank","'-fill",-1.5,-2`,
+      `"'=bank","'-fill",3,0`,
+      `"'=bank","'-fill",0,4`,
+      "",
     ]);
     const back = parseGeometryCsv(text);
     expect(back.ok && back.value).toEqual([

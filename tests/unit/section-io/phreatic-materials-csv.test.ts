@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { csvTemplates, materialsToCsv, parseMaterialsCsv, parsePhreaticCsv, phreaticToCsv } from "@/lib/section-io";
 
-describe("parsePhreaticCsv (ENGINE-IO.md water.phreatic; ENGINE.md §1: x increasing)", () => {
+describe("parsePhreaticCsv (docs/engine-io.md water.phreatic; docs/engine.md §1: x increasing)", () => {
   test("reads x,y rows into [x, y][] and accepts semicolons and exponents", () => {
     const r = parsePhreaticCsv("x;y\n0;18\n30.5;14\n6e1;1e1\n");
     expect(r.ok && r.value).toEqual([
@@ -49,14 +49,14 @@ describe("parsePhreaticCsv (ENGINE-IO.md water.phreatic; ENGINE.md §1: x increa
         [-5, -1.25],
         [10, 0],
       ]),
-    ).toBe("x,y\r\n-5,-1.25\r\n10,0");
+    ).toBe("\uFEFFx,y\r\n-5,-1.25\r\n10,0\r\n");
     expect(parsePhreaticCsv(csvTemplates.phreatic).ok).toBe(true);
   });
 });
 
 const HEADER = "id,name,model,gamma,gammaSat,c,phi,su,suGradient,suDatum";
 
-describe("parseMaterialsCsv (ENGINE-IO.md materials; bounds of ENGINE.md §1)", () => {
+describe("parseMaterialsCsv (docs/engine-io.md materials; bounds of docs/engine.md §1)", () => {
   test("reads each model with only the fields it uses, names kept aside", () => {
     const text = [
       HEADER,
@@ -67,7 +67,7 @@ describe("parseMaterialsCsv (ENGINE-IO.md materials; bounds of ENGINE.md §1)", 
     const r = parseMaterialsCsv(text);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
-    // The document of ENGINE-IO.md's example, field for field.
+    // The document of docs/engine-io.md's example, field for field.
     expect(r.value.materials).toEqual([
       { id: "fill", model: "mohr-coulomb", gamma: 19.5, gammaSat: 20.5, c: 8, phi: 28 },
       { id: "soft", model: "undrained", gamma: 17, su: 25, suGradient: 1.5, suDatum: 10 },
@@ -128,7 +128,7 @@ describe("parseMaterialsCsv (ENGINE-IO.md materials; bounds of ENGINE.md §1)", 
     ]);
   });
 
-  test("values outside ENGINE.md §1's error bounds are problems; outside the usual range, warnings", () => {
+  test("values outside docs/engine.md §1's error bounds are problems; outside the usual range, warnings", () => {
     const bad = parseMaterialsCsv([HEADER, "a,,mohr-coulomb,35,9,-1,60,,,", "b,,undrained,17,,,,0,-1,5"].join("\n"));
     expect(!bad.ok && bad.problems.map((p) => p.cell)).toEqual(["D2", "E2", "F2", "G2", "H3", "I3"]);
     const odd = parseMaterialsCsv([HEADER, "a,,mohr-coulomb,25,24,250,50,,,", "b,,undrained,17,,,,600,,"].join("\n"));
@@ -158,8 +158,9 @@ describe("parseMaterialsCsv (ENGINE-IO.md materials; bounds of ENGINE.md §1)", 
       { "-weak": "@layer" },
     );
     expect(text.split("\r\n")).toEqual([
-      `${HEADER},cR,phiR,freeDraining,colour`,
-      "'-weak,'@layer,undrained,17,,,,20,1.2,-3,,,no,",
+      `\uFEFF${HEADER},cR,phiR,freeDraining,colour`,
+      `"'-weak","'@layer",undrained,17,,,,20,1.2,-3,,,no,`,
+      "",
     ]);
     expect(parseMaterialsCsv(csvTemplates.materials).ok).toBe(true);
   });

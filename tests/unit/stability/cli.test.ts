@@ -9,6 +9,16 @@ import path from "node:path";
 import { describe, expect, test } from "vitest";
 import { FIXTURES } from "./helpers";
 
+// The fields these checks read from the command line's JSON (docs/engine-io.md); a missing one fails the test.
+interface CliOutput {
+  ok: boolean;
+  results: { bishop: { fs: number } };
+  circles: { tried: number };
+  fs: { bishop: number; fellenius: number };
+  slices: Record<string, unknown>[];
+  errors: { code: string; path: string }[];
+}
+
 const ROOT = path.resolve(__dirname, "../../..");
 
 function run(args: string[], input?: string) {
@@ -18,7 +28,7 @@ function run(args: string[], input?: string) {
     encoding: "utf8",
     timeout: 60_000,
   });
-  return { status: r.status, json: JSON.parse(r.stdout) as Record<string, any>, stdout: r.stdout };
+  return { status: r.status, json: JSON.parse(r.stdout) as CliOutput, stdout: r.stdout };
 }
 
 describe("scripts/analyze.ts", () => {

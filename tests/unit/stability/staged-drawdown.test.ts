@@ -12,6 +12,13 @@ import { describe, expect, test } from "vitest";
 import { analyzeCircle, validateSection, type SectionDocument } from "@/lib/stability";
 import { circle, clone, expectRelative, FIXTURES, loadFixture, search } from "./helpers";
 
+// The fields the command-line checks below read; a missing one fails the test.
+interface StagedCliOutput {
+  results: { bishop: { fs: number; stages: { final: number } } };
+  stages: { bishop: { final: number } };
+  slices: { stage: { governing: string } }[];
+}
+
 const RAD = Math.PI / 180;
 const staged = loadFixture("drawdown-staged-embankment.json");
 
@@ -320,7 +327,7 @@ describe('scripts/analyze.ts with "method": "staged" (ENGINE-IO.md command line)
       encoding: "utf8",
       timeout: 60_000,
     });
-    return { status: r.status, json: JSON.parse(r.stdout) as Record<string, any> };
+    return { status: r.status, json: JSON.parse(r.stdout) as StagedCliOutput };
   };
 
   test("a grid search and one circle of the staged fixture print the same final-stage FS as the library", () => {

@@ -49,7 +49,9 @@ describe("readUploadForm(request)", () => {
   });
 
   test("refuses a missing file, two files, and an empty file with the field named", async () => {
-    expect((await refusal(formRequest({ kind: "other" }))).fields?.file).toBeDefined();
+    expect((await refusal(formRequest({ kind: "other" }))).fields?.file).toEqual([
+      "Choose a file to upload: the 'file' field is missing.",
+    ]);
     const two = new FormData();
     two.append("file", new Blob([csv.bytes]), "a.csv");
     two.append("file", new Blob([csv.bytes]), "b.csv");
@@ -64,6 +66,9 @@ describe("readUploadForm(request)", () => {
     expect(err.status).toBe(400);
     expect(err.message).toContain("'levels.csv'");
     expect(Object.keys(err.fields ?? {}).sort()).toEqual(["kind", "materialId", "sectionId"]);
+    expect(err.fields?.kind).toEqual([expect.stringMatching(/^Choose what the document is: /)]);
+    expect(err.fields?.sectionId).toEqual(["sectionId must be a positive whole number."]);
+    expect(err.fields?.materialId).toEqual(["materialId must be a positive whole number."]);
   });
 
   test("refuses a file one byte over 20 MB with 413, naming it and the limit", async () => {

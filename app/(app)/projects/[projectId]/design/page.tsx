@@ -9,6 +9,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { EmptyState } from "@/components/ui/empty-state";
 import { NewStudyForm } from "@/components/design/new-study-form";
 import { pageId } from "@/lib/api/ids";
+import { formatDate } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Slope design" };
 
@@ -53,8 +54,7 @@ export default async function DesignStudiesPage({ params }: { params: Promise<{ 
                 {s.name}
               </Link>
               <span className="text-xs text-ink-soft">
-                {s.hasSweep ? "swept" : "not swept yet"} · {s.createdByName} · updated{" "}
-                {new Date(s.updatedAt).toLocaleDateString("en-GB")}
+                {s.hasSweep ? "swept" : "not swept yet"} · {s.createdByName} · updated {formatDate(s.updatedAt)}
               </span>
             </li>
           ))}

@@ -4,7 +4,8 @@ import { apiRoute, parseId, parseJson } from "@/lib/api/handler";
 import { requireUser } from "@/lib/auth/session";
 import { requireProjectAccess } from "@/lib/projects/access";
 import { defaultParamsFor, embankmentParamsSchema } from "@/lib/design";
-import { createDesignStudy, fetchDesignContext, fetchDesignStudiesOfProject } from "@/db/queries/design-studies";
+import { createDesignStudy, fetchDesignStudiesOfProject } from "@/db/queries/design-studies";
+import { fetchDesignContext } from "@/lib/design/design-context";
 import { checkAgainstLibrary } from "./study-access";
 
 type Ctx = { params: Promise<{ projectId: string }> };

@@ -3,12 +3,8 @@ import { z } from "zod";
 import { apiRoute, parseJson } from "@/lib/api/handler";
 import { notFound } from "@/lib/api/errors";
 import { embankmentParamsSchema } from "@/lib/design";
-import {
-  deleteDesignStudy,
-  fetchDesignContext,
-  fetchDesignStudy,
-  saveDesignParameters,
-} from "@/db/queries/design-studies";
+import { deleteDesignStudy, fetchDesignStudy, saveDesignParameters } from "@/db/queries/design-studies";
+import { fetchDesignContext } from "@/lib/design/design-context";
 import { checkAgainstLibrary, requireStudy } from "../study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };

@@ -3,7 +3,7 @@ import { z } from "zod";
 import { apiRoute, parseJson } from "@/lib/api/handler";
 import { notFound } from "@/lib/api/errors";
 import { openPointAsRun, openPointInEditor } from "@/lib/design/open-point";
-import { fetchDesignContext } from "@/db/queries/design-studies";
+import { fetchDesignContext } from "@/lib/design/design-context";
 import { requireStudy } from "../../study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };

@@ -3,7 +3,8 @@ import { apiRoute, parseJson } from "@/lib/api/handler";
 import { ApiError } from "@/lib/api/errors";
 import { storedSweepSchema } from "@/lib/design";
 import { recomputeBrowserSweep } from "@/lib/design/keep-sweep";
-import { fetchDesignContext, saveDesignSweep } from "@/db/queries/design-studies";
+import { saveDesignSweep } from "@/db/queries/design-studies";
+import { fetchDesignContext } from "@/lib/design/design-context";
 import { requireStudy } from "../../study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };

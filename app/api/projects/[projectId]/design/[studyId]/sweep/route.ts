@@ -3,7 +3,8 @@ import { apiRoute, parseJson } from "@/lib/api/handler";
 import { sweepSettingsSchema, type StoredSweep } from "@/lib/design";
 import { runSweepOnServer } from "@/lib/design/thread-sweep";
 import { ENGINE_VERSION } from "@/lib/stability";
-import { fetchDesignContext, saveDesignSweep } from "@/db/queries/design-studies";
+import { saveDesignSweep } from "@/db/queries/design-studies";
+import { fetchDesignContext } from "@/lib/design/design-context";
 import { requireStudy } from "../../study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };

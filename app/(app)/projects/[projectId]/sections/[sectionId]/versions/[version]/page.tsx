@@ -9,6 +9,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { ReadOnlySection } from "@/components/section-workspace/read-only-section";
 import type { SectionDocument } from "@/lib/stability";
 import { pageId } from "@/lib/api/ids";
+import { formatDateTime } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Section version" };
 
@@ -37,8 +38,7 @@ export default async function SectionVersionPage({
         }
       />
       <p className="-mt-3 mb-4 text-sm text-ink-soft" data-testid="version-meta">
-        Read-only. Saved by {version.createdByName} on {new Date(version.createdAt).toLocaleString("en-GB")}:{" "}
-        {version.summary}
+        Read-only. Saved by {version.createdByName} on {formatDateTime(version.createdAt)}: {version.summary}
       </p>
       <ReadOnlySection document={doc} materials={materialPalette(doc.materials)} />
     </>
