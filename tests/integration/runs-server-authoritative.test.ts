@@ -147,7 +147,8 @@ describe("kept runs keep their warnings (issue 13 item 4)", () => {
       // What the browser's worker computes and shows before the run is kept.
       const preview = searchRecord(documentForRun(demo.document, setup));
       if (!preview.ok) throw new Error("search failed");
-      expect(preview.result.warnings.map((w) => w.code)).toContain("negative-normal");
+      // The check means something only if the preview has warnings to lose (negative N′, radius limit, …).
+      expect(preview.result.warnings.length).toBeGreaterThan(0);
       const res = await keep(engineer, demo.projectId, {
         sectionId: demo.sectionId,
         sectionVersion: demo.version,
@@ -169,7 +170,7 @@ describe("kept runs keep their warnings (issue 13 item 4)", () => {
       const pdf = await engineer.request(`/api/projects/${demo.projectId}/runs/${run.id}/report`);
       const text = await pdfText(await pdf.arrayBuffer());
       expect(text).not.toContain("raised no warning");
-      expect(text).toContain(describeWarning(negative[0]).headline);
+      expect(text).toContain(describeWarning(stored.result.warnings[0]).headline);
     });
   }
 });
