@@ -37,7 +37,7 @@ function fail(status: number, errors: CliError[]): never {
 
 /**
  * Writes the JSON and sets the exit status without process.exit, which would cut a large
- * output short when standard output is a pipe (ENGINE-IO-2: output is written whole).
+ * output short when standard output is a pipe (docs/engine-io.md: output is written whole).
  */
 function finish(value: unknown, status: number): void {
   process.stdout.write(`${JSON.stringify(value, null, 2)}\n`);
@@ -122,7 +122,9 @@ try {
     finish(
       {
         ok: false,
-        errors: [{ code: "internal-error", path: "", message: `The engine failed unexpectedly: ${(e as Error).message}` }],
+        errors: [
+          { code: "internal-error", path: "", message: `The engine failed unexpectedly: ${(e as Error).message}` },
+        ],
       },
       1,
     );

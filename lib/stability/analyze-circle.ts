@@ -126,8 +126,8 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
   const minMaAlpha = S.minMaAlpha;
   const negO = S.negO;
   const negB = S.negB;
-  const dir = S.dir;
   const m = S.govB >= 0 ? S.govB : S.govO;
+  const dir = S.govB >= 0 ? S.dirB : S.dirO;
   const staged = P.staged !== null ? stagedPart(P, S, c, m, dir, warnings) : null;
   if (!staged) sliceMass(P, S, c.xc, c.yc, c.r, m, dir);
   const slices = sliceRows(P.mat.ids, S, fsB, P.ordinaryForm === 1);
@@ -196,7 +196,7 @@ function sliceRows(ids: string[], S: Scratch, fsB: number, eff: boolean): SliceR
   const hasB = Number.isFinite(fsB);
   for (let i = 0; i < S.n; i++) {
     const tp = S.tanPhi[i];
-    const b = S.b[i];
+    const b = S.bb[i];
     const l = S.len[i];
     const c = S.c[i];
     const nO = tp === 0 ? 0 : ordinaryNormal(S, i, eff);

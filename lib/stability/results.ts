@@ -64,7 +64,7 @@ export function describeCircle(P: PreparedSection, S: Scratch, c: Circle, method
   const xb = S.massB[m];
   const a: [number, number] = [xa, arcY(c.xc, c.yc, c.r, xa)];
   const b: [number, number] = [xb, arcY(c.xc, c.yc, c.r, xb)];
-  const right = S.dir >= 0;
+  const right = (method === "bishop" ? S.dirB : S.dirO) >= 0;
   const out: CircleFs = {
     fs,
     circle: { ...c },

@@ -22,6 +22,8 @@ export interface Scratch {
   xR: Float64Array;
   ym: Float64Array;
   b: Float64Array;
+  /** Horizontal projection of the base, l·cos α (m): what b is in the methods' base terms. */
+  bb: Float64Array;
   sinA: Float64Array;
   cosA: Float64Array;
   len: Float64Array;
@@ -42,8 +44,13 @@ export interface Scratch {
   Hn: Float64Array;
   // Results of the last circle
   dir: number;
+  /** Direction (+1 toward +x, −1 toward −x) of each method's governing mass. */
+  dirO: number;
+  dirB: number;
   depth: number;
   D: number;
+  /** Σ|driving terms| of the current mass (kN): the scale for round-off in D. */
+  gross: number;
   fsO: number;
   fsB: number;
   negO: number;
@@ -76,6 +83,7 @@ export function createScratch(): Scratch {
     xR: f(),
     ym: f(),
     b: f(),
+    bb: f(),
     sinA: f(),
     cosA: f(),
     len: f(),
@@ -93,8 +101,11 @@ export function createScratch(): Scratch {
     dD: f(),
     Hn: f(),
     dir: 1,
+    dirO: 1,
+    dirB: 1,
     depth: 0,
     D: 0,
+    gross: 0,
     fsO: NaN,
     fsB: NaN,
     negO: 0,

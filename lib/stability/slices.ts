@@ -152,6 +152,11 @@ export function buildSlices(
   let ks = findStrip(T, (kept[0] + kept[1]) / 2);
   let n = 0;
   let depth = 0;
+  // Arc quantities at the left boundary of the next slice, carried over from slice to slice:
+  // its angle from the vertical and the primitive G of √(R² − d²).
+  const d0 = kept[0] - xc;
+  let thPrev = Math.asin(d0 >= r ? 1 : d0 <= -r ? -1 : d0 / r);
+  let gPrev = 0.5 * (d0 * Math.sqrt(Math.max(0, r2 - d0 * d0)) + r2 * thPrev);
   for (let i = 1; i < nk; i++) {
     const p = kept[i - 1];
     const q = kept[i];
@@ -163,7 +168,15 @@ export function buildSlices(
       const b = xr - xl;
       const xm = (xl + xr) / 2;
       const ddx = xm - xc;
-      const ym = yc - Math.sqrt(r2 - ddx * ddx);
+      const sm = Math.sqrt(r2 - ddx * ddx);
+      const ym = yc - sm;
+      const dNext = xr - xc;
+      const sNext = Math.sqrt(Math.max(0, r2 - dNext * dNext));
+      const thNext = Math.asin(dNext >= r ? 1 : dNext <= -r ? -1 : dNext / r);
+      const gNext = 0.5 * (dNext * sNext + r2 * thNext);
+      // Exact arc length R·Δθ and the area between the arc and its midpoint height (≤ 0).
+      const arcLen = r * (thNext - thPrev);
+      const areaCorr = gNext - gPrev - b * sm;
       while (ks + 1 < nStrips && xs[ks + 1] <= xm) ks++;
       const o = lineOff[ks];
       const e = lineOff[ks + 1] - 1;
@@ -173,6 +186,7 @@ export function buildSlices(
       const yw = line ? waterA[ks] + waterB[ks] * xm : -Infinity;
       let wsum = 0;
       let wy = 0;
+      let gBase = 0;
       let baseMat = layerMat[e - 1];
       for (let li = o; li < e; li++) {
         const top = lineA[li] + lineB[li] * xm;
@@ -193,6 +207,7 @@ export function buildSlices(
           const ha = h - hb;
           const gs = M.gammaSat[mi];
           wsum += g * ha + gs * hb;
+          gBase = hb > 0 ? gs : g;
           if (kh !== 0) wy += g * ha * (top - ha / 2) + gs * hb * (lowBot + hb / 2);
         }
         if (last) {
@@ -202,12 +217,17 @@ export function buildSlices(
       }
       const kind = M.kind[baseMat];
       if (kind === KIND_RIGID) return RIGID;
-      const W = wsum * b;
+      // The weight uses the exact area above the arc; the base angle is the midpoint's.
+      const W = wsum * b + gBase * areaCorr;
       const sinA = (dir * (xc - xm)) / r;
-      const cosA = (yc - ym) / r;
+      const cosA = sm / r;
+      thPrev = thNext;
+      gPrev = gNext;
+      // u is the base's mean pore pressure over its width: the exact area above the arc enters
+      // it as it enters W, so that u·b is the water's true vertical thrust on the base.
       let u = 0;
-      if (line) u = yw > ym ? gw * (yw - ym) * P.waterCos2[ks] : 0;
-      else if (ruMode) u = P.ru * wsum;
+      if (line) u = yw > ym ? gw * (yw - ym + areaCorr / b) * P.waterCos2[ks] : 0;
+      else if (ruMode) u = (P.ru * W) / b;
       let Ww = 0;
       let Fw = 0;
       let dH = 0;
@@ -251,7 +271,8 @@ export function buildSlices(
       S.b[n] = b;
       S.sinA[n] = sinA;
       S.cosA[n] = cosA;
-      S.len[n] = b / cosA;
+      S.len[n] = arcLen;
+      S.bb[n] = arcLen * cosA;
       S.W[n] = W;
       S.Ww[n] = Ww;
       S.Q[n] = Q;

@@ -31,7 +31,7 @@ function resisting(S: Scratch, F: number): number {
       sum += c * S.len[i];
       continue;
     }
-    const b = S.b[i];
+    const b = S.bb[i];
     const cos = S.cosA[i];
     const t = S.sinA[i] * tp;
     const p = S.V[i] - S.u[i] * b;
@@ -99,7 +99,7 @@ function finish(S: Scratch, F: number): number {
       minMa = ma;
       at = i;
     }
-    if (tp !== 0 && (S.V[i] - S.u[i] * S.b[i]) * S.cosA[i] - (S.c[i] * S.b[i] * S.sinA[i]) / F < 0) neg++;
+    if (tp !== 0 && (S.V[i] - S.u[i] * S.bb[i]) * S.cosA[i] - (S.c[i] * S.bb[i] * S.sinA[i]) / F < 0) neg++;
   }
   S.minMa = minMa;
   S.minMaX = (S.xL[at] + S.xR[at]) / 2;

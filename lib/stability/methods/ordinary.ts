@@ -25,7 +25,7 @@ export function ordinaryFactor(S: Scratch, D: number, effectiveWeight: boolean):
       continue;
     }
     const Np = effectiveWeight
-      ? (S.V[i] - S.u[i] * S.b[i]) * S.cosA[i] - S.Hs[i] * S.sinA[i]
+      ? (S.V[i] - S.u[i] * S.bb[i]) * S.cosA[i] - S.Hs[i] * S.sinA[i]
       : S.V[i] * S.cosA[i] - S.Hn[i] * S.sinA[i] - S.u[i] * l;
     if (Np > 0) res += S.c[i] * l + Np * tp;
     else {
@@ -40,7 +40,7 @@ export function ordinaryFactor(S: Scratch, D: number, effectiveWeight: boolean):
 /** Effective base normal force N' (kN/m) of slice i by the chosen form, not below zero. */
 export function ordinaryNormal(S: Scratch, i: number, effectiveWeight: boolean): number {
   const Np = effectiveWeight
-    ? (S.V[i] - S.u[i] * S.b[i]) * S.cosA[i] - S.Hs[i] * S.sinA[i]
+    ? (S.V[i] - S.u[i] * S.bb[i]) * S.cosA[i] - S.Hs[i] * S.sinA[i]
     : S.V[i] * S.cosA[i] - S.Hn[i] * S.sinA[i] - S.u[i] * S.len[i];
   return Np > 0 ? Np : 0;
 }

@@ -52,6 +52,7 @@ describe("ordinaryFactor / bishopFactor on synthetic slices at α = β (ENGINE.m
     const z = 3;
     for (let i = 0; i < n; i++) {
       S.b[i] = 1;
+      S.bb[i] = 1;
       S.sinA[i] = Math.sin(beta);
       S.cosA[i] = Math.cos(beta);
       S.len[i] = 1 / Math.cos(beta);
