@@ -163,7 +163,7 @@ describe("staged drawdown properties (derived from the equations of ENGINE.md §
           const undrained = s.slices.filter((row) => row.stage!.governing === "undrained");
           for (const row of undrained) {
             const { tau2, tauKf } = row.stage!;
-            expect(Math.abs(tau2 - tauKf!)).toBeLessThanOrEqual(1e-12 * Math.max(1, Math.abs(tauKf!)));
+            expect(Math.abs(tau2! - tauKf!)).toBeLessThanOrEqual(1e-12 * Math.max(1, Math.abs(tauKf!)));
           }
           if (undrained.length > 0) return;
           allDrained++;
