@@ -1,5 +1,5 @@
 /**
- * The grid search of circular slip surfaces (ENGINE.md §5, ENGINE-IO.md "Output of a grid
+ * The grid search of circular slip surfaces (docs/engine.md §5, docs/engine-io.md "Output of a grid
  * search"): nx × ny centres, radii by tangent elevations or a radius range, each method's
  * own critical circle, the minimum-FS map over centres, the N lowest circles, counts of
  * circles tried / valid / rejected by reason, warnings, optional refinement, and a
@@ -24,7 +24,7 @@ import { createScratch } from "./scratch";
 import { stageWarnings } from "./drawdown/staged-report";
 import { createMethodState, localMinima, recordFs, type MethodState } from "./search-state";
 import { criticalWarnings, gridEdgeWarnings } from "./search-warnings";
-import { OK, REASONS } from "./status";
+import { OK, REASONS, TOO_MANY_BREAKS } from "./status";
 import { validateSection } from "./validate";
 import { checkSearchSettings } from "./validate-analysis";
 import { ENGINE_VERSION } from "./version";
@@ -146,6 +146,12 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
     criticalWarnings(P, S, M.method, crit, warnings);
     stageWarnings(M.method, crit?.stages, "critical circle", warnings);
   }
+  const complex = rejected[REASONS[TOO_MANY_BREAKS]] ?? 0;
+  if (complex > 0)
+    warnings.push({
+      code: "circles-too-complex",
+      message: `${complex} of ${tried} trial circles were skipped: under them the section has more slice breaks than the engine can hold. Simplify the ground or the layers there, so that no circle is missed.`,
+    });
   if (cancelled)
     warnings.push({
       code: "search-cancelled",

@@ -2,11 +2,12 @@
  * Reusable buffers for the slice loop (ENGINE.md §5): allocated once per worker so that
  * evaluating a circle creates no objects. Slice arrays hold one slip mass at a time.
  */
-import { MAX_SLICES } from "./defaults";
+import { SLICE_CAPACITY } from "./defaults";
 import { createStageScratch, type StageScratch } from "./drawdown/stage-scratch";
 
-const SLICE_CAP = MAX_SLICES + 8;
-const BREAK_CAP = 8192;
+const SLICE_CAP = SLICE_CAPACITY;
+/** Arc crossings inside one strip, and kept breaks of one mass (bounded by SLICE_CAPACITY). */
+const BREAK_CAP = SLICE_CAPACITY + 8;
 
 /** Scratch state of one evaluator; results of the last circle are left in its fields. */
 export interface Scratch {
@@ -68,7 +69,7 @@ export interface Scratch {
   stage: StageScratch;
 }
 
-/** Allocates a scratch set (about 90 kB). */
+/** Allocates a scratch set (about 0.7 MB). */
 export function createScratch(): Scratch {
   const f = () => new Float64Array(SLICE_CAP);
   return {

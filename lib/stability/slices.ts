@@ -14,7 +14,8 @@ import { findStrip } from "./strip-table";
 import { addFaceThrust } from "./vertical-faces";
 
 // Module-local copies: imported bindings are property reads on every use in the hot loop.
-const MAX_SLICES = defaults.MAX_SLICES;
+const MERGE_FRACTION = defaults.MERGE_FRACTION;
+const SLICE_CAPACITY = defaults.SLICE_CAPACITY;
 const KIND_RIGID = cases.KIND_RIGID;
 const KIND_UNDRAINED = cases.KIND_UNDRAINED;
 const OK = status.OK;
@@ -23,7 +24,19 @@ const RIGID = status.RIGID;
 const SHALLOW = status.SHALLOW;
 const TOO_MANY_BREAKS = status.TOO_MANY_BREAKS;
 
-/** Collects the slice boundaries of mass [xA, xB]; returns how many are in S.kept (−1 if too many). */
+/** Streaming state of the break merge: the last kept break, the last one seen and a vertex waiting on its right neighbour. */
+const merge = new Float64Array(3); // [last seen, pending vertex x (NaN when none), 1 if it is clear of its left neighbour]
+
+/**
+ * Collects the slice boundaries of mass [xA, xB] into S.kept (docs/engine.md §3). Hard
+ * breaks (the ends, arc crossings of material boundaries and water lines, vertical faces)
+ * are all kept, merged only when closer than max(0.1 mm, 1e-7·R). A mere vertex of the ground
+ * or of a layer is kept only when both its neighbours lie at least MERGE_FRACTION of a
+ * nominal slice width away; otherwise the slices run across it. The rule looks at both
+ * neighbours, so it is the same read left to right or right to left (mirror invariance),
+ * and a survey of thousands of vertices cuts about as many slices as its outline.
+ * @returns how many breaks are kept (−1 if a buffer would overflow)
+ */
 function collectBreaks(
   P: PreparedSection,
   S: Scratch,
@@ -35,18 +48,24 @@ function collectBreaks(
 ): number {
   const T = P.table;
   const brk = S.brk;
-  const cap = brk.length - 4;
+  const kept = S.kept;
+  const cap = kept.length - 2;
   const r2 = r * r;
   const line = P.waterKind === 1;
   const extraA = P.extraWaterA;
   const extraB = P.extraWaterB;
-  let nb = 0;
-  brk[nb++] = xA;
+  const faceSoil = P.faceSoil;
+  const tolHard = 1e-7 * r > 1e-4 ? 1e-7 * r : 1e-4;
+  const tolSoft = (MERGE_FRACTION * (xB - xA)) / P.slices;
+  let nk = 0;
+  kept[nk++] = xA;
+  merge[0] = xA;
+  merge[1] = NaN;
   let k = findStrip(T, xA);
   for (;;) {
     const x0 = T.xs[k] > xA ? T.xs[k] : xA;
     const x1 = T.xs[k + 1] < xB ? T.xs[k + 1] : xB;
-    const start = nb;
+    let nb = 0;
     const o = T.lineOff[k];
     const e = T.lineOff[k + 1];
     const last = extraA === null ? e : e + 1;
@@ -74,36 +93,69 @@ function collectBreaks(
       const sq = Math.sqrt(disc);
       for (let s = -1; s <= 1; s += 2) {
         const x = (-qb + s * sq) / qa;
-        if (x > x0 && x < x1 && a + b * x < yc && nb < cap) brk[nb++] = x;
+        if (x > x0 && x < x1 && a + b * x < yc) {
+          if (nb >= brk.length) return -1;
+          brk[nb++] = x;
+        }
       }
     }
-    for (let i = start + 1; i < nb; i++) {
+    for (let i = 1; i < nb; i++) {
       const v = brk[i];
       let j = i - 1;
-      while (j >= start && brk[j] > v) {
+      while (j >= 0 && brk[j] > v) {
         brk[j + 1] = brk[j];
         j--;
       }
       brk[j + 1] = v;
     }
-    if (nb >= cap) return -1;
-    brk[nb++] = x1;
+    for (let i = 0; i < nb; i++) {
+      nk = offerBreak(kept, nk, cap, brk[i], true, tolHard, tolSoft);
+      if (nk < 0) return -1;
+    }
     if (x1 >= xB || k + 1 >= T.n) break;
+    // The strip's right end: a vertex, hard only where the ground steps (a vertical face).
+    nk = offerBreak(kept, nk, cap, x1, faceSoil[k + 1] !== 0, tolHard, tolSoft);
+    if (nk < 0) return -1;
     k++;
   }
-  // Merge boundaries closer than max(0.1 mm, 1e-7·R) (ENGINE.md §3).
-  const tol = Math.max(1e-4, 1e-7 * r);
-  const kept = S.kept;
-  let nk = 0;
-  kept[nk++] = xA;
-  for (let i = 1; i < nb; i++) {
-    const x = brk[i];
-    if (x - kept[nk - 1] >= tol) kept[nk++] = x;
-    else if (i === nb - 1) {
-      if (nk > 1) kept[nk - 1] = x;
-      else kept[nk++] = x;
-    }
+  nk = offerBreak(kept, nk, cap, xB, true, tolHard, tolSoft);
+  // The mass's far end closes the last slice; a hard break too close to it gives way.
+  if (nk > 0 && kept[nk - 1] !== xB) {
+    if (nk > 1) kept[nk - 1] = xB;
+    else kept[nk++] = xB;
   }
+  return nk;
+}
+
+/** Offers the next break (x increasing) to the merge; returns the new kept count (−1 on overflow). */
+function offerBreak(
+  kept: Float64Array,
+  nk: number,
+  cap: number,
+  x: number,
+  hard: boolean,
+  tolHard: number,
+  tolSoft: number,
+): number {
+  const pending = merge[1];
+  if (pending === pending) {
+    // A vertex stays only when clear of both neighbours.
+    if (merge[2] === 1 && x - pending >= tolSoft) {
+      if (nk >= cap) return -1;
+      kept[nk++] = pending;
+    }
+    merge[1] = NaN;
+  }
+  if (hard) {
+    if (x - kept[nk - 1] >= tolHard) {
+      if (nk >= cap) return -1;
+      kept[nk++] = x;
+    }
+  } else {
+    merge[1] = x;
+    merge[2] = x - merge[0] >= tolSoft ? 1 : 0;
+  }
+  merge[0] = x;
   return nk;
 }
 
@@ -124,15 +176,10 @@ export function buildSlices(
   const nk = collectBreaks(P, S, xc, yc, r, xA, xB);
   if (nk < 0) return TOO_MANY_BREAKS;
   const kept = S.kept;
-  let bmax = (xB - xA) / P.slices;
+  const bmax = (xB - xA) / P.slices;
   let total = 0;
-  for (let pass = 0; pass < 40; pass++) {
-    total = 0;
-    for (let i = 1; i < nk; i++) total += Math.max(1, Math.ceil((kept[i] - kept[i - 1]) / bmax - 1e-9));
-    if (total <= MAX_SLICES) break;
-    bmax *= 1.25;
-  }
-  if (total > MAX_SLICES) return TOO_MANY_BREAKS;
+  for (let i = 1; i < nk; i++) total += Math.max(1, Math.ceil((kept[i] - kept[i - 1]) / bmax - 1e-9));
+  if (total > SLICE_CAPACITY) return TOO_MANY_BREAKS;
   const T = P.table;
   const M = P.mat;
   const r2 = r * r;
@@ -149,7 +196,8 @@ export function buildSlices(
   const waterA = P.waterA;
   const waterB = P.waterB;
   const nStrips = T.n;
-  let ks = findStrip(T, (kept[0] + kept[1]) / 2);
+  // The strip under each slice midpoint, advanced as the slices go right.
+  let ks = findStrip(T, kept[0]);
   let n = 0;
   let depth = 0;
   // Arc quantities at the left boundary of the next slice, carried over from slice to slice:
