@@ -1,5 +1,5 @@
 /**
- * One given circle, reported slice by slice (ENGINE-IO.md "Output of one circle"). It runs
+ * One given circle, reported slice by slice (docs/engine-io.md "Output of one circle"). It runs
  * the same evaluator as the grid search, so a stored critical circle re-checks to exactly
  * the same factor of safety.
  */
@@ -11,7 +11,7 @@ import { prepareSection, type PreparedSection } from "./prepare";
 import { finiteOrNull, issuesToWarnings, type Circle, type EngineFailure } from "./results";
 import { createScratch, type Scratch } from "./scratch";
 import { M_ALPHA_WARN } from "./search-warnings";
-import { OK, REASONS, REASON_TEXT } from "./status";
+import { OK, REASONS, REASON_TEXT, RIGID_NO_WEIGHT, rigidNoWeightText } from "./status";
 import { validateSection } from "./validate";
 import { ENGINE_VERSION } from "./version";
 import { arcY } from "./evaluate-circle";
@@ -112,7 +112,7 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
       ...base,
       fs: { bishop: null, fellenius: null },
       reason: REASONS[st],
-      reasonText: REASON_TEXT[st],
+      reasonText: st === RIGID_NO_WEIGHT ? rigidNoWeightText(P.mat.ids[S.rigidMat]) : REASON_TEXT[st],
       masses: S.nMass,
       slices: [],
     };
@@ -204,11 +204,13 @@ function sliceRows(ids: string[], S: Scratch, fsB: number, eff: boolean): SliceR
     let nB: number | null = null;
     let sB: number | null = null;
     if (hasB) {
-      ma = S.cosA[i] + (S.sinA[i] * tp) / fsB;
+      // FS = 0 only when no slice has strength; then the strength terms vanish.
+      const inv = fsB > 0 ? 1 / fsB : 0;
+      ma = S.cosA[i] + S.sinA[i] * tp * inv;
       const p = S.V[i] - S.u[i] * b;
-      const n = (p - (c * b * S.sinA[i]) / (S.cosA[i] * fsB)) / ma;
+      const n = (p - (c * b * S.sinA[i] * inv) / S.cosA[i]) / ma;
       nB = tp === 0 ? null : Math.max(0, n);
-      sB = tp !== 0 && n < 0 ? c * l : (c * b + p * tp) / ma;
+      sB = tp === 0 || n < 0 ? c * l : (c * b + p * tp) / ma;
     }
     rows.push({
       xLeft: S.xL[i],

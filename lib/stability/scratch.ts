@@ -62,6 +62,8 @@ export interface Scratch {
   iterations: number;
   reasonB: number;
   reasonO: number;
+  /** Material of the impenetrable block without γ that rejected the last circle. */
+  rigidMat: number;
   /** Index of the mass that governs each method (−1 when none). */
   govO: number;
   govB: number;
@@ -117,6 +119,7 @@ export function createScratch(): Scratch {
     iterations: 0,
     reasonB: 0,
     reasonO: 0,
+    rigidMat: -1,
     govO: -1,
     govB: -1,
     stage: createStageScratch(SLICE_CAP),

@@ -21,6 +21,7 @@ const KIND_UNDRAINED = cases.KIND_UNDRAINED;
 const OK = status.OK;
 const OUT_OF_SECTION = status.OUT_OF_SECTION;
 const RIGID = status.RIGID;
+const RIGID_NO_WEIGHT = status.RIGID_NO_WEIGHT;
 const SHALLOW = status.SHALLOW;
 const TOO_MANY_BREAKS = status.TOO_MANY_BREAKS;
 
@@ -200,6 +201,7 @@ export function buildSlices(
   let ks = findStrip(T, kept[0]);
   let n = 0;
   let depth = 0;
+  let weightless = -1;
   // Arc quantities at the left boundary of the next slice, carried over from slice to slice:
   // its angle from the vertical and the primitive G of √(R² − d²).
   const d0 = kept[0] - xc;
@@ -249,7 +251,13 @@ export function buildSlices(
         const h = top - lowBot;
         if (h > 0) {
           const g = M.gamma[mi];
-          if (g < 0) return RIGID;
+          if (g < 0) {
+            // The arc in impenetrable material governs; a block above the arc is carried as
+            // weight, which it cannot be without γ (reported once the whole mass is sliced).
+            if (last) return RIGID;
+            weightless = mi;
+            continue;
+          }
           let hb = 0;
           if (yw > lowBot) hb = yw - lowBot < h ? yw - lowBot : h;
           const ha = h - hb;
@@ -337,6 +345,10 @@ export function buildSlices(
       if (P.hasFaces) addFaceThrust(P, S, n, ks, xl, xr, xc, yc, r, dir);
       n++;
     }
+  }
+  if (weightless >= 0) {
+    S.rigidMat = weightless;
+    return RIGID_NO_WEIGHT;
   }
   S.n = n;
   S.depth = depth;

@@ -1,5 +1,5 @@
 /**
- * The strip table (ENGINE.md §5): the section cut into vertical strips at every vertex x,
+ * The strip table (docs/engine.md §5): the section cut into vertical strips at every vertex x,
  * so that inside a strip every region boundary is one straight line. Each strip lists its
  * boundary lines from the ground down to the base, with the material between them, so a
  * soil column is a binary search plus a short loop. Building it also finds overlaps,
@@ -29,7 +29,7 @@ export interface StripTable {
   lineBreak: Uint8Array;
 }
 
-/** Vertical tolerance for contact between regions (ENGINE.md §1: 1 mm). */
+/** Vertical tolerance for contact between regions (docs/engine.md §1: 1 mm). */
 export const CONTACT_TOL = 1e-3;
 /** Two vertex x within this (m) are one strip boundary. */
 export const X_MERGE_TOL = 1e-6;
@@ -186,7 +186,7 @@ interface EdgeLine {
   ring: number;
 }
 
-/** For each strip, the non-vertical ring edges that span it (edge included when it covers the strip). */
+/** For each strip, the non-vertical ring edges that span it. */
 function bucketEdges(rings: ReadonlyArray<RingInput>, xs: number[]): EdgeLine[][] {
   const buckets: EdgeLine[][] = [];
   for (let k = 0; k + 1 < xs.length; k++) buckets.push([]);
@@ -200,9 +200,13 @@ function bucketEdges(rings: ReadonlyArray<RingInput>, xs: number[]): EdgeLine[][
       if (hi - lo <= X_MERGE_TOL) continue;
       const b = (q[1] - p[1]) / (q[0] - p[0]);
       const e: EdgeLine = { a: p[1] - b * p[0], b, ring: ri };
-      // Strips k with xs[k] ≥ lo − tol and xs[k + 1] ≤ hi + tol.
-      let k = lowerBound(xs, lo - X_MERGE_TOL);
-      for (; k + 1 < xs.length && xs[k + 1] <= hi + X_MERGE_TOL; k++) buckets[k].push(e);
+      // The strips whose midpoints the edge spans: strips are bounded by the merged vertex x, so
+      // an edge covers a strip wholly or not at all, and the midpoint decides without a tolerance
+      // (a face a micrometre off vertical makes a strip of its own, not a gap in its neighbours).
+      for (let k = Math.max(0, lowerBound(xs, lo) - 1); k + 1 < xs.length && xs[k] < hi; k++) {
+        const xm = (xs[k] + xs[k + 1]) / 2;
+        if (xm > lo && xm < hi) buckets[k].push(e);
+      }
     }
   });
   return buckets;

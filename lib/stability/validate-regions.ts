@@ -30,6 +30,17 @@ export function cleanRegions(regions: ReadonlyArray<Region>, errors: Issue[], wa
       );
     }
     const points = cleanRing(raw.map(snap), 1e-9);
+    if (points.length < 3 && cleanRing(raw, 1e-9).length >= 3) {
+      errors.push(
+        issue(
+          "region-too-thin",
+          `${p}.points`,
+          `${p} is thinner than 1 mm: points closer than 1 mm are snapped together, and its points then leave fewer than 3 distinct corners. Remove it, or draw it at least 1 mm thick.`,
+          raw[0] as [number, number],
+        ),
+      );
+      return { ...r, points };
+    }
     if (points.length < 3) {
       errors.push(
         issue(
