@@ -30,8 +30,8 @@ const merge = new Float64Array(3); // [last seen, pending vertex x (NaN when non
 
 /**
  * Collects the slice boundaries of mass [xA, xB] into S.kept (docs/engine.md §3). Hard
- * breaks (the ends, arc crossings of material boundaries and water lines, vertical faces)
- * are all kept, merged only when closer than max(0.1 mm, 1e-7·R). A mere vertex of the ground
+ * breaks (the ends, arc crossings of material boundaries and water lines, ground corners)
+ * are all kept, merged only when closer than max(0.1 mm, 1e-7·R). Any other vertex of the ground
  * or of a layer is kept only when both its neighbours lie at least MERGE_FRACTION of a
  * nominal slice width away; otherwise the slices run across it. The rule looks at both
  * neighbours, so it is the same read left to right or right to left (mirror invariance),
@@ -55,7 +55,7 @@ function collectBreaks(
   const line = P.waterKind === 1;
   const extraA = P.extraWaterA;
   const extraB = P.extraWaterB;
-  const faceSoil = P.faceSoil;
+  const sharp = P.sharp;
   const tolHard = 1e-7 * r > 1e-4 ? 1e-7 * r : 1e-4;
   const tolSoft = (MERGE_FRACTION * (xB - xA)) / P.slices;
   let nk = 0;
@@ -114,8 +114,8 @@ function collectBreaks(
       if (nk < 0) return -1;
     }
     if (x1 >= xB || k + 1 >= T.n) break;
-    // The strip's right end: a vertex, hard only where the ground steps (a vertical face).
-    nk = offerBreak(kept, nk, cap, x1, faceSoil[k + 1] !== 0, tolHard, tolSoft);
+    // The strip's right end: a vertex, hard where the ground steps or turns sharply (a toe, a crest, a face).
+    nk = offerBreak(kept, nk, cap, x1, sharp[k + 1] !== 0, tolHard, tolSoft);
     if (nk < 0) return -1;
     k++;
   }
