@@ -69,7 +69,8 @@ function polyline(line: ReadonlyArray<Pt>, x: number): number {
 }
 
 /**
- * FS of circle (xc, yc, r) by both methods with n thin slices over the circle's width.
+ * FS of circle (xc, yc, r) by both methods: each piece of soil above the arc (its ends found by
+ * bisection) in uniform thin slices, n of them over the circle's full width.
  * The section must be valid (validateSection), steady case, Mohr–Coulomb or undrained materials.
  */
 export function referenceFactors(doc: SectionDocument, xc: number, yc: number, r: number, n = 2000): ReferenceResult {
@@ -86,28 +87,81 @@ export function referenceFactors(doc: SectionDocument, xc: number, yc: number, r
       xmax = Math.max(xmax, x);
     }
   const groundAt = (x: number) => column(doc, x)[0]?.top ?? -Infinity;
-  const x0 = xc - r;
-  const b = (2 * r) / n;
-  // Pieces: runs of slices whose middle has ground above the arc.
+  const arc = (x: number) => yc - Math.sqrt(Math.max(0, r * r - (x - xc) ** 2));
+  const above = (x: number) => x > xmin && x < xmax && groundAt(x) > arc(x);
+  // Piece ends: sample the circle's width finely, plus every vertex and, on every edge, the
+  // point where the arc runs parallel to it (ground − arc is concave along an edge, so a thin
+  // lens cut from one edge peaks there and is not missed); then bisect each change of sign.
+  const lo = xc - r;
+  const step = (2 * r) / n;
+  const samples: number[] = [];
+  for (let i = 0; i < n; i++) samples.push(lo + (i + 0.5) * step);
+  for (const reg of doc.regions)
+    reg.points.forEach(([x1, y1], i) => {
+      const [x2, y2] = reg.points[(i + 1) % reg.points.length];
+      samples.push(x1);
+      if (x1 === x2) return;
+      const k = (y2 - y1) / (x2 - x1);
+      const xt = xc + (k * r) / Math.sqrt(1 + k * k);
+      if (xt > Math.min(x1, x2) && xt < Math.max(x1, x2)) samples.push(xt);
+    });
+  const pts = samples.filter((x) => x > lo && x < xc + r).sort((a, b) => a - b);
+  const ends: number[] = [];
+  let prevIn = above(pts[0]);
+  if (prevIn) ends.push(lo);
+  for (let i = 1; i < pts.length; i++) {
+    const now = above(pts[i]);
+    if (now !== prevIn) {
+      let a = pts[i - 1];
+      let b = pts[i];
+      while (b - a > 1e-10) {
+        const m = (a + b) / 2;
+        if (above(m) === prevIn) a = m;
+        else b = m;
+      }
+      ends.push((a + b) / 2);
+      prevIn = now;
+    }
+  }
+  if (prevIn) ends.push(xc + r);
+  // Each piece in uniform thin slices, as many per metre as the whole circle has.
   const pieces: Slice[][] = [];
-  let cur: Slice[] | null = null;
-  for (let i = 0; i < n; i++) {
-    const xl = x0 + i * b;
-    const xm = xl + b / 2;
-    const ya = yc - Math.sqrt(Math.max(0, r * r - (xm - xc) ** 2));
-    const inside = xm > xmin && xm < xmax && groundAt(xm) > ya;
-    if (!inside) {
-      cur = null;
-      continue;
+  for (let p = 0; p + 1 < ends.length; p += 2) {
+    const [xa, xb] = [ends[p], ends[p + 1]];
+    const m = Math.max(40, Math.ceil((xb - xa) / step));
+    const b = (xb - xa) / m;
+    const piece: Slice[] = [];
+    for (let i = 0; i < m; i++) {
+      const xl = xa + i * b;
+      const xr = xl + b;
+      // A slice whose base changes material is cut where it changes (found by bisection).
+      const ml = baseMaterial(xl + 1e-9);
+      if (ml === baseMaterial(xr - 1e-9)) {
+        piece.push(slice(xl, xl + b / 2, b, arc(xl + b / 2)));
+        continue;
+      }
+      let a = xl;
+      let z = xr;
+      while (z - a > 1e-10) {
+        const mid = (a + z) / 2;
+        if (baseMaterial(mid) === ml) a = mid;
+        else z = mid;
+      }
+      const xs = (a + z) / 2;
+      piece.push(slice(xl, (xl + xs) / 2, xs - xl, arc((xl + xs) / 2)));
+      piece.push(slice(xs, (xs + xr) / 2, xr - xs, arc((xs + xr) / 2)));
     }
-    if (!cur) {
-      cur = [];
-      pieces.push(cur);
-    }
-    cur.push(slice(xl, xm, ya));
+    pieces.push(piece);
   }
 
-  function slice(xl: number, xm: number, ya: number): Slice {
+  function baseMaterial(x: number): string {
+    const ya = arc(x);
+    const col = column(doc, x);
+    for (const layer of col) if (layer.bot <= ya) return layer.mat;
+    return col[col.length - 1]?.mat ?? "";
+  }
+
+  function slice(xl: number, xm: number, b: number, ya: number): Slice {
     const col = column(doc, xm);
     const yw = line ? polyline(line, xm) : -Infinity;
     let w = 0;
@@ -119,16 +173,12 @@ export function referenceFactors(doc: SectionDocument, xc: number, yc: number, r
       const m = mats.get(layer.mat)!;
       const g = m.gamma ?? 0;
       const gs = m.model === "impenetrable" ? g : (m.gammaSat ?? g);
-      // The layer above the water line weighs γ, below it γsat, a thin sub-layer at a time.
-      const steps = 20;
-      for (let s = 0; s < steps; s++) {
-        const y1 = layer.top - ((layer.top - lo) * s) / steps;
-        const y2 = layer.top - ((layer.top - lo) * (s + 1)) / steps;
-        const ymid = (y1 + y2) / 2;
-        const unit = ymid < yw ? gs : g;
-        w += unit * (y1 - y2);
-        wy += unit * (y1 - y2) * ymid;
-      }
+      // The part of the layer above the water line weighs γ, the part below it γsat.
+      const split = Math.min(layer.top, Math.max(lo, yw));
+      const dry = layer.top - split;
+      const wet = split - lo;
+      w += g * dry + gs * wet;
+      wy += g * dry * (layer.top + split) * 0.5 + gs * wet * (split + lo) * 0.5;
       if (layer.bot <= ya) {
         baseMat = layer.mat;
         break;
@@ -143,7 +193,7 @@ export function referenceFactors(doc: SectionDocument, xc: number, yc: number, r
     const Ww = gw * depth * b;
     const Fw = gw * depth * (ygR - ygL);
     let Q = 0;
-    for (const s of doc.loads?.surcharges ?? []) if (xm >= s.x1 && xm <= s.x2) Q += s.q * b;
+    for (const s of doc.loads?.surcharges ?? []) Q += s.q * Math.max(0, Math.min(xl + b, s.x2) - Math.max(xl, s.x1));
     const m = mats.get(baseMat)!;
     let c = 0;
     let tanPhi = 0;
@@ -184,7 +234,8 @@ export function referenceFactors(doc: SectionDocument, xc: number, yc: number, r
     const left = piece[0];
     const right = piece[piece.length - 1];
     const dy = ya(right) - ya(left);
-    const dirs = Math.abs(dy) < 1e-9 ? [1, -1] : [dy < 0 ? 1 : -1];
+    // Ends within 1 µm are level (docs/engine.md §3): tried both ways.
+    const dirs = Math.abs(dy) <= 1e-6 ? [1, -1] : [dy < 0 ? 1 : -1];
     for (const dir of dirs) {
       const f = pieceFactors(piece, dir, r);
       if (f.fellenius !== null && (fellenius === null || f.fellenius < fellenius)) fellenius = f.fellenius;
