@@ -88,10 +88,13 @@ describe("computeFilterSeepage(referenceDam): REFERENCES.md derived example", ()
       .forEach(([x, y]) => expect(y).toBeCloseTo(parabolaHeightAt(r.construction.parabola, x), 6));
   });
 
-  test("the entry leaves B about normal to the 0.5H:1V face, i.e. with slope −0.5 (ENGINE.md §6; hand calculation)", () => {
-    const [[x0, y0], [x1, y1]] = r.construction.phreatic;
-    // The first chord of a cubic sampled at 1/16 of the entry width differs from the end tangent by O(width/16).
-    expect((y1 - y0) / (x1 - x0)).toBeCloseTo(-0.5, 0);
+  test("the entry leaves B normal to the 0.5H:1V face, i.e. with slope −0.5 (docs/engine.md §6; hand calculation)", () => {
+    const [p0, p1, p2, p3] = r.construction.phreatic;
+    // The entry is one cubic sampled at equal steps h, so the four-point difference
+    // (−11·y0 + 18·y1 − 9·y2 + 2·y3)/(6h), exact for cubics, is its tangent at B.
+    const h = p1[0] - p0[0];
+    const tangent = (-11 * p0[1] + 18 * p1[1] - 9 * p2[1] + 2 * p3[1]) / (6 * h);
+    expect(tangent).toBeCloseTo(-0.5, 9);
   });
 
   test("the section water line extends at pool level from the upstream toe and along the filter to the downstream toe", () => {
