@@ -45,7 +45,7 @@ export interface SliceRow {
   normalOrdinary: number;
   resistingOrdinary: number;
   /**
-   * Staged drawdown only (ENGINE.md §7(b)): the base's stage-1 stresses, strengths and the
+   * Staged drawdown only (docs/engine.md §7(b)): the base's stage-1 stresses, strengths and the
    * strength that governs in the final stage. c, phi and the Bishop and ordinary terms above
    * then show the final-stage strengths of Bishop's chain (of the ordinary method's chain
    * when Bishop has no result).

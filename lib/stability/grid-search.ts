@@ -48,7 +48,7 @@ export interface GridSearchSuccess {
   circles: { tried: number; valid: number; rejected: Record<string, number> };
   warnings: EngineWarning[];
   cancelled: boolean;
-  /** Staged drawdown only (ENGINE.md §7(b)): the procedure used; each circle's FS is its final stage's. */
+  /** Staged drawdown only (docs/engine.md §7(b)): the procedure used; each circle's FS is its final stage's. */
   stagedVariant?: "three-stage" | "usace-two-stage";
 }
 

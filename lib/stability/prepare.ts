@@ -52,7 +52,7 @@ export interface PreparedSection {
   direction: number;
   analysis: ResolvedAnalysis;
   warnings: EngineWarning[];
-  /** Staged drawdown (ENGINE.md §7(b)): the stage-1 section and the staged strengths; null otherwise. */
+  /** Staged drawdown (docs/engine.md §7(b)): the stage-1 section and the staged strengths; null otherwise. */
   staged: StagedModel | null;
 }
 
@@ -70,7 +70,7 @@ export function sectionRings(doc: SectionDocument): RingInput[] {
   return doc.regions.map((r, i) => ({ points: r.points, material: index.get(r.material) ?? 0, region: i }));
 }
 
-/** True when the analysis asks for a staged total-stress drawdown (ENGINE.md §7(b)). */
+/** True when the analysis asks for a staged total-stress drawdown (docs/engine.md §7(b)). */
 export function isStagedDrawdown(analysis: ResolvedAnalysis): boolean {
   return analysis.case === "drawdown" && analysis.drawdown?.method === "staged";
 }

@@ -1,5 +1,5 @@
 /**
- * Result shapes shared by the grid search and the one-circle report (ENGINE-IO.md
+ * Result shapes shared by the grid search and the one-circle report (docs/engine-io.md
  * "Output"). Plain JSON: numbers, arrays, null; never NaN or Infinity.
  */
 import type { Method } from "./schema";
@@ -24,7 +24,7 @@ export interface CircleFs {
   exit: [number, number];
   /** Direction the mass slides: "right" toward +x, "left" toward −x. */
   direction: "left" | "right";
-  /** Staged drawdown only (ENGINE.md §7(b)): this method's factor of safety at each stage; `fs` is the final one. */
+  /** Staged drawdown only (docs/engine.md §7(b)): this method's factor of safety at each stage; `fs` is the final one. */
   stages?: StageFs;
 }
 
@@ -37,7 +37,7 @@ export interface FsMap {
   values: (number | null)[];
 }
 
-/** Failure of a run on bad input (ENGINE-IO.md "Errors"). */
+/** Failure of a run on bad input (docs/engine-io.md "Errors"). */
 export interface EngineFailure {
   ok: false;
   errors: Issue[];

@@ -1,5 +1,5 @@
 /**
- * Reusable buffers for the slice loop (ENGINE.md §5): allocated once per worker so that
+ * Reusable buffers for the slice loop (docs/engine.md §5): allocated once per worker so that
  * evaluating a circle creates no objects. Slice arrays hold one slip mass at a time.
  */
 import { SLICE_CAPACITY } from "./defaults";
@@ -67,7 +67,7 @@ export interface Scratch {
   /** Index of the mass that governs each method (−1 when none). */
   govO: number;
   govB: number;
-  /** Staged-drawdown buffers and stage factors (ENGINE.md §7(b)); unused otherwise. */
+  /** Staged-drawdown buffers and stage factors (docs/engine.md §7(b)); unused otherwise. */
   stage: StageScratch;
 }
 

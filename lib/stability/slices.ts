@@ -1,6 +1,6 @@
 /**
  * Cuts one slip mass into slices and computes each slice's loads and base strength
- * (ENGINE.md §3 "Slice boundaries" and "Per slice"). Writes into the scratch arrays;
+ * (docs/engine.md §3 "Slice boundaries" and "Per slice"). Writes into the scratch arrays;
  * allocation-free. Sliding is toward +x when dir = +1 and toward −x when dir = −1: the
  * geometry stays in document coordinates and only the signs of sin α and of the
  * horizontal water forces change, which is the same as mirroring the section.

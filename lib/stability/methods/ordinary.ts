@@ -1,11 +1,11 @@
 /**
  * The ordinary method of slices (Fellenius 1936), moment equilibrium about the centre,
- * ENGINE.md §4: F = Σ(c'·l + N'·tan φ') / D with N' not below zero.
+ * docs/engine.md §4: F = Σ(c'·l + N'·tan φ') / D with N' not below zero.
  * - classical form (default): N' = V·cos α − H·sin α − u·l, H every horizontal force on
  *   the slice (ponded-water thrust, seismic) positive in the sliding direction;
  * - effective-weight form: N' = (V − u·b)·cos α − kh·W·sin α (water thrust enters D only).
  * The effective-weight form over-predicts on flat slopes with high pore pressure
- * (ENGINE.md §4); Bishop's simplified method governs.
+ * (docs/engine.md §4); Bishop's simplified method governs.
  */
 import type { Scratch } from "../scratch";
 

@@ -1,5 +1,5 @@
 /**
- * Load cases (ENGINE.md §7(a), §8): rapid drawdown by the effective-stress method with B̄ = 1,
+ * Load cases (docs/engine.md §7(a), §8): rapid drawdown by the effective-stress method with B̄ = 1,
  * and end of construction with undrained strengths.
  */
 import { describe, expect, test } from "vitest";
@@ -26,8 +26,8 @@ function drawdown(from: number, to: number): SectionDocument {
   return doc;
 }
 
-describe("rapid drawdown, effective-stress method (ENGINE.md §7(a))", () => {
-  test("a drawdown of zero depth gives the steady-seepage FS (REFERENCES.md: check by property)", () => {
+describe("rapid drawdown, effective-stress method (docs/engine.md §7(a))", () => {
+  test("a drawdown of zero depth gives the steady-seepage FS (docs/references.md: check by property)", () => {
     const steady = search(upstream());
     const dd = search(drawdown(20, 20));
     expectRelative(dd.results.bishop!.fs, steady.results.bishop!.fs, 1e-9);
