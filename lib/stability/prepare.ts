@@ -99,8 +99,8 @@ export function prepareSection(doc: SectionDocument, analysisIn?: ResolvedAnalys
   const breaks = [...water.breaks];
   if (preWater) breaks.push(...preWater.breaks);
   for (const s of surcharges) breaks.push(s.x1, s.x2);
-  const built = buildStripTable(rings, breaks);
-  const table = built.table ?? base.table;
+  // Without water or load breaks the first table is already the one needed.
+  const table = breaks.length === 0 ? base.table : (buildStripTable(rings, breaks).table ?? base.table);
   const { table: mat, warnings } = buildMaterialTable(doc.materials, analysis.case);
   const P = assemble(doc, analysis, table, water, mat, warnings);
   if (preWater) {
