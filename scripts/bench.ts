@@ -138,7 +138,8 @@ console.log(
 );
 for (const { n, t, c } of surveyTimes)
   console.log(
-    `Surveyed ground of ${n} vertices: validation ${(t * 1000).toFixed(0)} ms, one circle with validation ${(c * 1000).toFixed(0)} ms (CPU)`,
+    `Surveyed ground of ${n} vertices: validation ${(t * 1000).toFixed(0)} ms, ` +
+      `one circle with validation ${(c * 1000).toFixed(0)} ms (CPU)`,
   );
 console.log(`Circle loop alone: ${Math.round(loopRate)} circles per CPU second`);
 console.log(`Whole search: ${Math.round(searchRate)} circles per second per core  (target ≥ 100000)`);

@@ -151,13 +151,18 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
   if (weightless.size > 0)
     warnings.push({
       code: "impenetrable-without-weight",
-      message: `${rejected[REASONS[RIGID_NO_WEIGHT]]} trial circles were skipped because their slip mass carries impenetrable material without a unit weight (${[...weightless].map((m) => `'${m}'`).join(", ")}). Give it gamma so that its weight is carried.`,
+      message:
+        `${rejected[REASONS[RIGID_NO_WEIGHT]]} trial circles were skipped because their slip mass carries ` +
+        `impenetrable material without a unit weight (${[...weightless].map((m) => `'${m}'`).join(", ")}). ` +
+        "Give it gamma so that its weight is carried.",
     });
   const complex = rejected[REASONS[TOO_MANY_BREAKS]] ?? 0;
   if (complex > 0)
     warnings.push({
       code: "circles-too-complex",
-      message: `${complex} of ${tried} trial circles were skipped: under them the section has more slice breaks than the engine can hold. Simplify the ground or the layers there, so that no circle is missed.`,
+      message:
+        `${complex} of ${tried} trial circles were skipped: under them the section has more slice breaks ` +
+        "than the engine can hold. Simplify the ground or the layers there, so that no circle is missed.",
     });
   if (cancelled)
     warnings.push({

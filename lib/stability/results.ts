@@ -24,7 +24,7 @@ export interface CircleFs {
   exit: [number, number];
   /** Direction the mass slides: "right" toward +x, "left" toward −x. */
   direction: "left" | "right";
-  /** Staged drawdown only (docs/engine.md §7(b)): this method's factor of safety at each stage; `fs` is the final one. */
+  /** Staged drawdown only (docs/engine.md §7(b)): this method's FS at each stage; `fs` is the final one. */
   stages?: StageFs;
 }
 

@@ -25,8 +25,11 @@ const RIGID_NO_WEIGHT = status.RIGID_NO_WEIGHT;
 const SHALLOW = status.SHALLOW;
 const TOO_MANY_BREAKS = status.TOO_MANY_BREAKS;
 
-/** Streaming state of the break merge: the last kept break, the last one seen and a vertex waiting on its right neighbour. */
-const merge = new Float64Array(3); // [last seen, pending vertex x (NaN when none), 1 if it is clear of its left neighbour]
+/**
+ * Streaming state of the break merge: [the last break seen, a vertex waiting on its right
+ * neighbour (NaN when none), 1 if that vertex is clear of its left neighbour].
+ */
+const merge = new Float64Array(3);
 
 /**
  * Collects the slice boundaries of mass [xA, xB] into S.kept (docs/engine.md §3). Hard

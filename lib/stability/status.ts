@@ -44,10 +44,14 @@ export const REASON_TEXT: readonly string[] = [
   "Bishop's mα is zero or negative on a slice at the solution: the exit is too steep.",
   "Bishop's iteration did not converge.",
   "The section is too detailed under this circle (too many slice breaks).",
-  "The slip mass carries a block of impenetrable material that has no unit weight; give it gamma so its weight is carried.",
+  "The slip mass carries a block of impenetrable material that has no unit weight; " +
+    "give it gamma so its weight is carried.",
 ];
 
 /** The reason text for an impenetrable block without γ inside a slip mass, naming its material. */
 export function rigidNoWeightText(material: string | undefined): string {
-  return `The slip mass carries impenetrable material '${material ?? "?"}', which has no unit weight: give it gamma (γ, kN/m³) so that its weight is carried, or move the circle clear of it.`;
+  return (
+    `The slip mass carries impenetrable material '${material ?? "?"}', which has no unit weight: ` +
+    "give it gamma (γ, kN/m³) so that its weight is carried, or move the circle clear of it."
+  );
 }

@@ -35,7 +35,8 @@ export function cleanRegions(regions: ReadonlyArray<Region>, errors: Issue[], wa
         issue(
           "region-too-thin",
           `${p}.points`,
-          `${p} is thinner than 1 mm: points closer than 1 mm are snapped together, and its points then leave fewer than 3 distinct corners. Remove it, or draw it at least 1 mm thick.`,
+          `${p} is thinner than 1 mm: points closer than 1 mm are snapped together, and its points ` +
+            "then leave fewer than 3 distinct corners. Remove it, or draw it at least 1 mm thick.",
           raw[0] as [number, number],
         ),
       );

@@ -34,7 +34,8 @@ function compare(slices: number, worst: number, runs: number): number[] {
       const eo = ref.fellenius === null ? Infinity : Math.abs(e.fs.fellenius / ref.fellenius - 1);
       if (!(eb <= worst && eo <= worst))
         throw new Error(
-          `engine ${e.fs.bishop} / ${e.fs.fellenius}, reference ${ref.bishop} / ${ref.fellenius} at ${JSON.stringify(c)}`,
+          `engine ${e.fs.bishop} / ${e.fs.fellenius}, reference ${ref.bishop} / ${ref.fellenius} ` +
+            `at ${JSON.stringify(c)}`,
         );
       errors.push(Math.max(eb, eo));
     }),

@@ -106,7 +106,8 @@ describe("runGridSearch(long 3H:1V slope): docs/references.md derived example (D
     expect(stages.fs2! / 1.261 - 1).toBeLessThan(0.015);
     // Stage 3 (derived): after drawdown the engine holds the water at the ground with vertical
     // hydrostatic u = γw·z (docs/engine.md §7(a)), below the σ'fc of stage 1, so every base switches to
-    // drained: FS = (γ·cos²β − γw)·tan φ'/(γ·sin β·cos β), the docs/engine.md §10.1 "vertical hydrostatic" form.
+    // drained: FS = (γ·cos²β − γw)·tan φ'/(γ·sin β·cos β), the "vertical hydrostatic" form of
+    // docs/engine.md §10.1.
     const fs3 = ((gamma * Math.cos(beta) ** 2 - gw) * Math.tan(40 * RAD)) / (gamma * Math.sin(beta) * Math.cos(beta));
     expect(stages.final).toBe(stages.fs3);
     expect(stages.final! / fs3 - 1).toBeGreaterThan(-0.005);
