@@ -205,11 +205,10 @@ export function buildSlices(
   let n = 0;
   let depth = 0;
   let weightless = -1;
-  // Arc quantities at the left boundary of the next slice, carried over from slice to slice:
-  // its angle from the vertical and the primitive G of √(R² − d²).
-  const d0 = kept[0] - xc;
-  let thPrev = Math.asin(d0 >= r ? 1 : d0 <= -r ? -1 : d0 / r);
-  let gPrev = 0.5 * (d0 * Math.sqrt(Math.max(0, r2 - d0 * d0)) + r2 * thPrev);
+  // The arc at the left side of the next slice (offset d from the centre, half-height √(R² − d²)),
+  // carried over from slice to slice.
+  let dPrev = kept[0] - xc;
+  let sPrev = Math.sqrt(Math.max(0, r2 - dPrev * dPrev));
   for (let i = 1; i < nk; i++) {
     const p = kept[i - 1];
     const q = kept[i];
@@ -225,11 +224,18 @@ export function buildSlices(
       const ym = yc - sm;
       const dNext = xr - xc;
       const sNext = Math.sqrt(Math.max(0, r2 - dNext * dNext));
-      const thNext = Math.asin(dNext >= r ? 1 : dNext <= -r ? -1 : dNext / r);
-      const gNext = 0.5 * (dNext * sNext + r2 * thNext);
-      // Exact arc length R·Δθ and the area between the arc and its midpoint height (≤ 0).
-      const arcLen = r * (thNext - thPrev);
-      const areaCorr = gNext - gPrev - b * sm;
+      // The angle the slice's arc subtends, from its sine and cosine (no asin per boundary):
+      // a short series for the usual thin slice, atan2 for a wide one.
+      const sinD = (dNext * sPrev - dPrev * sNext) / r2;
+      let dTheta: number;
+      if (sinD < 0.1) {
+        const z2 = sinD * sinD;
+        dTheta = sinD * (1 + z2 * (1 / 6 + z2 * (3 / 40 + z2 * (5 / 112 + z2 * (35 / 1152)))));
+      } else dTheta = Math.atan2(sinD, (sNext * sPrev + dNext * dPrev) / r2);
+      // Exact arc length R·Δθ, and the area between the arc and its midpoint height (≤ 0):
+      // ∫√(R² − d²) dd over the slice is ½(d·√(R² − d²))|ends + ½R²·Δθ.
+      const arcLen = r * dTheta;
+      const areaCorr = 0.5 * (dNext * sNext - dPrev * sPrev) + 0.5 * r2 * dTheta - b * sm;
       while (ks + 1 < nStrips && xs[ks + 1] <= xm) ks++;
       const o = lineOff[ks];
       const e = lineOff[ks + 1] - 1;
@@ -280,8 +286,8 @@ export function buildSlices(
       const W = wsum * b + gBase * areaCorr;
       const sinA = (dir * (xc - xm)) / r;
       const cosA = sm / r;
-      thPrev = thNext;
-      gPrev = gNext;
+      dPrev = dNext;
+      sPrev = sNext;
       // u is the base's mean pore pressure over its width: the exact area above the arc enters
       // it as it enters W, so that u·b is the water's true vertical thrust on the base.
       let u = 0;
