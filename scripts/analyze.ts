@@ -21,9 +21,27 @@ interface CliError {
 
 const USAGE = "usage: analyze.ts <section.json | -> [--circle xc,yc,r] [--map]";
 
+/** Bad arguments or input: carried up to the top level, which writes the errors and sets the exit status. */
+class CliFailure extends Error {
+  constructor(
+    readonly status: number,
+    readonly errors: CliError[],
+  ) {
+    super(errors.map((e) => e.message).join("; "));
+  }
+}
+
 function fail(status: number, errors: CliError[]): never {
-  process.stdout.write(`${JSON.stringify({ ok: false, errors }, null, 2)}\n`);
-  process.exit(status);
+  throw new CliFailure(status, errors);
+}
+
+/**
+ * Writes the JSON and sets the exit status without process.exit, which would cut a large
+ * output short when standard output is a pipe (docs/engine-io.md: output is written whole).
+ */
+function finish(value: unknown, status: number): void {
+  process.stdout.write(`${JSON.stringify(value, null, 2)}\n`);
+  process.exitCode = status;
 }
 
 function parseArgs(argv: string[]): { file: string; circle?: { xc: number; yc: number; r: number }; map: boolean } {
@@ -82,23 +100,32 @@ function main(): void {
   const doc = readInput(file);
   if (circle) {
     const r = analyzeCircle(doc, circle);
-    process.stdout.write(`${JSON.stringify(r, null, 2)}\n`);
-    process.exit(r.ok ? 0 : 2);
+    finish(r, r.ok ? 0 : 2);
+    return;
   }
   const r = runGridSearch(doc);
   if (!r.ok) {
-    process.stdout.write(`${JSON.stringify(r, null, 2)}\n`);
-    process.exit(2);
+    finish(r, 2);
+    return;
   }
   const { fsMap, ...rest } = r;
   const out = map ? r : rest;
   void fsMap;
-  process.stdout.write(`${JSON.stringify(out, null, 2)}\n`);
-  process.exit(0);
+  finish(out, 0);
 }
 
 try {
   main();
 } catch (e) {
-  fail(1, [{ code: "internal-error", path: "", message: `The engine failed unexpectedly: ${(e as Error).message}` }]);
+  if (e instanceof CliFailure) finish({ ok: false, errors: e.errors }, e.status);
+  else
+    finish(
+      {
+        ok: false,
+        errors: [
+          { code: "internal-error", path: "", message: `The engine failed unexpectedly: ${(e as Error).message}` },
+        ],
+      },
+      1,
+    );
 }

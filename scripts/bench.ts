@@ -3,10 +3,13 @@
  * embankment with a phreatic line, 50 slices, Bishop's simplified and the ordinary method,
  * a 40 × 40 centre grid × 20 radii (32,000 circles), on one core. Prints figures only;
  * the last line is `circles_per_second=N`. Target: ≥ 100,000 circles/s, search < 0.5 s.
+ * It also times validation and one circle on surveyed grounds of 2,000 and 20,000 vertices
+ * (docs/engine.md §1: validation is near-linear, so ten times the vertices cost about ten times).
  */
 import { readFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
+import { analyzeCircle } from "../lib/stability/analyze-circle";
 import { evaluateCircle } from "../lib/stability/evaluate-circle";
 import { runGridSearch } from "../lib/stability/grid-search";
 import { prepareSection } from "../lib/stability/prepare";
@@ -84,6 +87,43 @@ for (let rep = 0; rep < 5; rep++) {
   );
 }
 const loopRate = loopCount / median(loopCpu);
+
+/** A 2H:1V slope over a weak layer whose ground is surveyed at n vertices with a few cm of relief. */
+function surveyedSection(n: number): SectionDocument {
+  const ground: [number, number][] = [];
+  for (let i = 0; i < n; i++) {
+    const x = (200 * i) / (n - 1);
+    const y = x <= 80 ? 20 : x >= 120 ? 0 : 20 - (x - 80) / 2;
+    ground.push([x, y + 0.03 * Math.sin(i * 0.7)]);
+  }
+  return {
+    version: 1,
+    materials: [
+      { id: "fill", model: "mohr-coulomb", gamma: 19, c: 12, phi: 30 },
+      { id: "weak", model: "mohr-coulomb", gamma: 18, c: 4, phi: 14 },
+    ],
+    regions: [
+      { material: "fill", points: [...ground, [200, -2], [0, -2]] },
+      {
+        material: "weak",
+        points: [
+          [0, -2],
+          [200, -2],
+          [200, -15],
+          [0, -15],
+        ],
+      },
+    ],
+  } as SectionDocument;
+}
+
+const surveyTimes = [2000, 20000].map((n) => {
+  const survey = surveyedSection(n);
+  validateSection(survey);
+  const t = median([0, 1, 2].map(() => timed(() => validateSection(survey)).cpu));
+  const c = median([0, 1, 2].map(() => timed(() => analyzeCircle(survey, { xc: 100, yc: 40, r: 43 })).cpu));
+  return { n, t, c };
+});
 const searchRate = tried / cpuSearch;
 const load = os.loadavg()[0];
 
@@ -96,6 +136,11 @@ console.log(
 console.log(
   `Machine load average (1 min): ${load.toFixed(2)} on ${os.cpus().length} cores; wall clock includes waiting for a core`,
 );
+for (const { n, t, c } of surveyTimes)
+  console.log(
+    `Surveyed ground of ${n} vertices: validation ${(t * 1000).toFixed(0)} ms, ` +
+      `one circle with validation ${(c * 1000).toFixed(0)} ms (CPU)`,
+  );
 console.log(`Circle loop alone: ${Math.round(loopRate)} circles per CPU second`);
 console.log(`Whole search: ${Math.round(searchRate)} circles per second per core  (target ≥ 100000)`);
 console.log(`circles_per_second=${Math.round(searchRate)}`);

@@ -87,6 +87,7 @@ const REASON_WORDS: Record<string, string> = {
   "m-alpha-not-positive": "Bishop's mα reached zero or below (exit too steep)",
   "not-converged": "Bishop's iteration did not converge",
   "too-complex": "too many slice breaks under the circle",
+  "impenetrable-without-weight": "the slip mass carries impenetrable material that has no unit weight",
 };
 
 /** Why circles were rejected, in words. */

@@ -1,5 +1,5 @@
 /**
- * One given circle, reported slice by slice (ENGINE-IO.md "Output of one circle"). It runs
+ * One given circle, reported slice by slice (docs/engine-io.md "Output of one circle"). It runs
  * the same evaluator as the grid search, so a stored critical circle re-checks to exactly
  * the same factor of safety.
  */
@@ -11,7 +11,7 @@ import { prepareSection, type PreparedSection } from "./prepare";
 import { finiteOrNull, issuesToWarnings, type Circle, type EngineFailure } from "./results";
 import { createScratch, type Scratch } from "./scratch";
 import { M_ALPHA_WARN } from "./search-warnings";
-import { OK, REASONS, REASON_TEXT } from "./status";
+import { OK, REASONS, REASON_TEXT, RIGID_NO_WEIGHT, rigidNoWeightText } from "./status";
 import { validateSection } from "./validate";
 import { ENGINE_VERSION } from "./version";
 import { arcY } from "./evaluate-circle";
@@ -45,7 +45,7 @@ export interface SliceRow {
   normalOrdinary: number;
   resistingOrdinary: number;
   /**
-   * Staged drawdown only (ENGINE.md §7(b)): the base's stage-1 stresses, strengths and the
+   * Staged drawdown only (docs/engine.md §7(b)): the base's stage-1 stresses, strengths and the
    * strength that governs in the final stage. c, phi and the Bishop and ordinary terms above
    * then show the final-stage strengths of Bishop's chain (of the ordinary method's chain
    * when Bishop has no result).
@@ -112,7 +112,7 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
       ...base,
       fs: { bishop: null, fellenius: null },
       reason: REASONS[st],
-      reasonText: REASON_TEXT[st],
+      reasonText: st === RIGID_NO_WEIGHT ? rigidNoWeightText(P.mat.ids[S.rigidMat]) : REASON_TEXT[st],
       masses: S.nMass,
       slices: [],
     };
@@ -126,8 +126,8 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
   const minMaAlpha = S.minMaAlpha;
   const negO = S.negO;
   const negB = S.negB;
-  const dir = S.dir;
   const m = S.govB >= 0 ? S.govB : S.govO;
+  const dir = S.govB >= 0 ? S.dirB : S.dirO;
   const staged = P.staged !== null ? stagedPart(P, S, c, m, dir, warnings) : null;
   if (!staged) sliceMass(P, S, c.xc, c.yc, c.r, m, dir);
   const slices = sliceRows(P.mat.ids, S, fsB, P.ordinaryForm === 1);
@@ -196,7 +196,7 @@ function sliceRows(ids: string[], S: Scratch, fsB: number, eff: boolean): SliceR
   const hasB = Number.isFinite(fsB);
   for (let i = 0; i < S.n; i++) {
     const tp = S.tanPhi[i];
-    const b = S.b[i];
+    const b = S.bb[i];
     const l = S.len[i];
     const c = S.c[i];
     const nO = tp === 0 ? 0 : ordinaryNormal(S, i, eff);
@@ -204,11 +204,13 @@ function sliceRows(ids: string[], S: Scratch, fsB: number, eff: boolean): SliceR
     let nB: number | null = null;
     let sB: number | null = null;
     if (hasB) {
-      ma = S.cosA[i] + (S.sinA[i] * tp) / fsB;
+      // FS = 0 only when no slice has strength; then the strength terms vanish.
+      const inv = fsB > 0 ? 1 / fsB : 0;
+      ma = S.cosA[i] + S.sinA[i] * tp * inv;
       const p = S.V[i] - S.u[i] * b;
-      const n = (p - (c * b * S.sinA[i]) / (S.cosA[i] * fsB)) / ma;
+      const n = (p - (c * b * S.sinA[i] * inv) / S.cosA[i]) / ma;
       nB = tp === 0 ? null : Math.max(0, n);
-      sB = tp !== 0 && n < 0 ? c * l : (c * b + p * tp) / ma;
+      sB = tp === 0 || n < 0 ? c * l : (c * b + p * tp) / ma;
     }
     rows.push({
       xLeft: S.xL[i],

@@ -8,7 +8,16 @@ import type { Analysis, Direction, Drawdown, Grid, LoadCase, Method, OrdinaryFor
 export const DEFAULT_SLICES = 50;
 export const DEFAULT_GAMMA_W = 9.81; // kN/m³
 export const DEFAULT_LOWEST_COUNT = 10;
+/** The most slices a user may ask for (analysis.slices). */
 export const MAX_SLICES = 500;
+/**
+ * Slice breaks closer than this fraction of the nominal slice width (slip mass width / slices)
+ * are merged (docs/engine.md §3), so a survey of thousands of vertices cuts no more slices
+ * than an outline of a few: at most slices·(1 + 1/MERGE_FRACTION) + 1 per mass.
+ */
+export const MERGE_FRACTION = 0.25;
+/** Capacity of the per-mass slice buffers: the bound above at MAX_SLICES, plus a margin. */
+export const SLICE_CAPACITY = Math.ceil(MAX_SLICES * (1 + 1 / MERGE_FRACTION)) + 8;
 
 /** An analysis with every default applied; grid and radii stay optional (one-circle runs need neither). */
 export interface ResolvedAnalysis {

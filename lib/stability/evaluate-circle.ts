@@ -1,10 +1,10 @@
 /**
  * Factor of safety of one trial circle by the requested methods: the hot path of the grid
- * search (ENGINE.md §3–§5). Allocation-free: results are left in the scratch fields, and
+ * search (docs/engine.md §3–§5). Allocation-free: results are left in the scratch fields, and
  * one-circle reports re-run the governing mass with the very same code, so a stored
  * critical circle re-checks to the same bits.
  */
-import { arcY, chooseDirection } from "./circle-direction";
+import { arcY, isDriven, massDirection } from "./circle-direction";
 import { evaluateStagedCircle } from "./drawdown/staged-circle";
 import { bishopFactor } from "./methods/bishop";
 import { ordinaryFactor } from "./methods/ordinary";
@@ -23,7 +23,7 @@ export { arcY };
 
 /**
  * Slices mass m of the circle and computes its driving term; returns a status code.
- * On OK, S holds the slices and S.D the driving term (kN, may be ≤ 0).
+ * On OK, S holds the slices, S.D the driving term (kN, may be ≤ 0) and S.gross Σ|terms|.
  */
 export function sliceMass(
   P: PreparedSection,
@@ -37,15 +37,23 @@ export function sliceMass(
   const st = buildSlices(P, S, xc, yc, r, S.massA[m], S.massB[m], dir);
   if (st !== OK) return st;
   let D = 0;
-  for (let i = 0; i < S.n; i++) D += S.dD[i];
+  let gross = 0;
+  for (let i = 0; i < S.n; i++) {
+    const d = S.dD[i];
+    D += d;
+    gross += d < 0 ? -d : d;
+  }
   S.D = D;
+  S.gross = gross;
   return OK;
 }
 
 /**
  * Evaluates circle (xc, yc, r) (m). Sets S.fsO / S.fsB (NaN when invalid, with S.reasonO /
- * S.reasonB), S.dir, S.govO / S.govB (the governing masses) and Bishop's mα record.
- * A staged drawdown (ENGINE.md §7(b)) goes to the staged evaluator: its FS is the final stage's.
+ * S.reasonB), S.govO / S.govB (the governing masses) with their directions S.dirO / S.dirB,
+ * S.dir (Bishop's governing direction, else the ordinary method's) and Bishop's mα record.
+ * Every mass slides its own way (docs/engine.md §3); a level-ended mass is tried both ways.
+ * A staged drawdown (docs/engine.md §7(b)) goes to the staged evaluator: its FS is the final stage's.
  * @returns OK when the circle has at least one slip mass with a driving moment, else the reason.
  */
 export function evaluateCircle(
@@ -65,15 +73,7 @@ export function evaluateCircle(
   if (!(r > 0)) return reject(S, BAD_RADIUS);
   const st = findMasses(P, S, xc, yc, r);
   if (st !== OK) return reject(S, st);
-  let dir = chooseDirection(P, S, xc, yc, r);
-  let status = runMasses(P, S, xc, yc, r, dir === 0 ? 1 : dir, wantBishop);
-  // Ends at one level: slide the way the loads drive it.
-  if (dir === 0 && status === NO_DRIVING) {
-    dir = -1;
-    status = runMasses(P, S, xc, yc, r, -1, wantBishop);
-  } else if (dir === 0) dir = 1;
-  S.dir = dir;
-  return status;
+  return runMasses(P, S, xc, yc, r, wantBishop);
 }
 
 function reject(S: Scratch, st: number): number {
@@ -82,20 +82,14 @@ function reject(S: Scratch, st: number): number {
   return st;
 }
 
-/** Runs every mass in direction dir and keeps each method's lowest factor. */
-function runMasses(
-  P: PreparedSection,
-  S: Scratch,
-  xc: number,
-  yc: number,
-  r: number,
-  dir: number,
-  wantBishop: boolean,
-): number {
+/** Runs every mass in its own direction (both ways when level) and keeps each method's lowest factor. */
+function runMasses(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, wantBishop: boolean): number {
   let fo = Infinity;
   let fb = Infinity;
   let mo = -1;
   let mb = -1;
+  let dirO = 1;
+  let dirB = 1;
   let failB = OK;
   let minMa = NaN;
   let minMaX = NaN;
@@ -106,37 +100,47 @@ function runMasses(
   let driving = false;
   const eff = P.ordinaryForm === 1;
   for (let m = 0; m < S.nMass; m++) {
-    const st = sliceMass(P, S, xc, yc, r, m, dir);
-    if (st !== OK) return reject(S, st);
-    const D = S.D;
-    if (!(D > 1e-12)) continue;
-    driving = true;
-    const f0 = ordinaryFactor(S, D, eff);
-    if (f0 < fo) {
-      fo = f0;
-      mo = m;
-      negO = S.negO;
-    }
-    if (wantBishop) {
-      const f1 = bishopFactor(S, D, f0);
-      if (Number.isNaN(f1)) failB = S.reasonB;
-      else if (f1 < fb) {
-        fb = f1;
-        mb = m;
-        minMa = S.minMa;
-        minMaX = S.minMaX;
-        minMaAlpha = S.minMaAlpha;
-        negB = S.negB;
-        iterations = S.iterations;
+    const d0 = massDirection(P, S, xc, yc, r, m);
+    const tries = d0 === 0 ? 2 : 1;
+    for (let t = 0; t < tries; t++) {
+      const dir = d0 !== 0 ? d0 : t === 0 ? 1 : -1;
+      const st = sliceMass(P, S, xc, yc, r, m, dir);
+      if (st !== OK) return reject(S, st);
+      const D = S.D;
+      // The ordinary method's resisting term at D = 1 is its numerator.
+      const res = ordinaryFactor(S, 1, eff);
+      if (!isDriven(D, S.gross, res)) continue;
+      driving = true;
+      const f0 = res / D;
+      if (f0 < fo) {
+        fo = f0;
+        mo = m;
+        dirO = dir;
+        negO = S.negO;
+      }
+      if (wantBishop) {
+        const f1 = bishopFactor(S, D, f0);
+        if (Number.isNaN(f1)) failB = S.reasonB;
+        else if (f1 < fb) {
+          fb = f1;
+          mb = m;
+          dirB = dir;
+          minMa = S.minMa;
+          minMaX = S.minMaX;
+          minMaAlpha = S.minMaAlpha;
+          negB = S.negB;
+          iterations = S.iterations;
+        }
       }
     }
   }
-  S.dir = dir;
   if (!driving) return reject(S, NO_DRIVING);
   S.fsO = fo;
   S.govO = mo;
+  S.dirO = dirO;
   S.negO = negO;
   S.reasonO = OK;
+  S.dir = dirO;
   if (wantBishop) {
     if (failB !== OK) {
       S.fsB = NaN;
@@ -145,6 +149,8 @@ function runMasses(
     } else {
       S.fsB = fb;
       S.govB = mb;
+      S.dirB = dirB;
+      S.dir = dirB;
       S.reasonB = OK;
       S.minMa = minMa;
       S.minMaX = minMaX;

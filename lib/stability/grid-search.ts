@@ -1,5 +1,5 @@
 /**
- * The grid search of circular slip surfaces (ENGINE.md §5, ENGINE-IO.md "Output of a grid
+ * The grid search of circular slip surfaces (docs/engine.md §5, docs/engine-io.md "Output of a grid
  * search"): nx × ny centres, radii by tangent elevations or a radius range, each method's
  * own critical circle, the minimum-FS map over centres, the N lowest circles, counts of
  * circles tried / valid / rejected by reason, warnings, optional refinement, and a
@@ -24,7 +24,7 @@ import { createScratch } from "./scratch";
 import { stageWarnings } from "./drawdown/staged-report";
 import { createMethodState, localMinima, recordFs, type MethodState } from "./search-state";
 import { criticalWarnings, gridEdgeWarnings } from "./search-warnings";
-import { OK, REASONS } from "./status";
+import { OK, REASONS, RIGID_NO_WEIGHT, TOO_MANY_BREAKS } from "./status";
 import { validateSection } from "./validate";
 import { checkSearchSettings } from "./validate-analysis";
 import { ENGINE_VERSION } from "./version";
@@ -48,7 +48,7 @@ export interface GridSearchSuccess {
   circles: { tried: number; valid: number; rejected: Record<string, number> };
   warnings: EngineWarning[];
   cancelled: boolean;
-  /** Staged drawdown only (ENGINE.md §7(b)): the procedure used; each circle's FS is its final stage's. */
+  /** Staged drawdown only (docs/engine.md §7(b)): the procedure used; each circle's FS is its final stage's. */
   stagedVariant?: "three-stage" | "usace-two-stage";
 }
 
@@ -96,11 +96,13 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
   let tried = 0;
   let valid = 0;
   let cancelled = false;
+  const weightless = new Set<string>();
   const visit = (xc: number, yc: number, r: number, cell: number, ix: number, iy: number, ir: number): boolean => {
     tried++;
     const st = evaluateCircle(P, S, xc, yc, r, wantB);
     if (st !== OK) {
       rejected[REASONS[st]] = (rejected[REASONS[st]] ?? 0) + 1;
+      if (st === RIGID_NO_WEIGHT) weightless.add(P.mat.ids[S.rigidMat] ?? "?");
       return false;
     }
     if (wantB && !(S.fsB > 0)) rejected[REASONS[S.reasonB]] = (rejected[REASONS[S.reasonB]] ?? 0) + 1;
@@ -146,6 +148,22 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
     criticalWarnings(P, S, M.method, crit, warnings);
     stageWarnings(M.method, crit?.stages, "critical circle", warnings);
   }
+  if (weightless.size > 0)
+    warnings.push({
+      code: "impenetrable-without-weight",
+      message:
+        `${rejected[REASONS[RIGID_NO_WEIGHT]]} trial circles were skipped because their slip mass carries ` +
+        `impenetrable material without a unit weight (${[...weightless].map((m) => `'${m}'`).join(", ")}). ` +
+        "Give it gamma so that its weight is carried.",
+    });
+  const complex = rejected[REASONS[TOO_MANY_BREAKS]] ?? 0;
+  if (complex > 0)
+    warnings.push({
+      code: "circles-too-complex",
+      message:
+        `${complex} of ${tried} trial circles were skipped: under them the section has more slice breaks ` +
+        "than the engine can hold. Simplify the ground or the layers there, so that no circle is missed.",
+    });
   if (cancelled)
     warnings.push({
       code: "search-cancelled",

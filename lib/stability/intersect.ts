@@ -1,6 +1,6 @@
 /**
  * Where a circle meets the ground and which pieces of soil lie above its lower arc
- * (ENGINE.md §3 "Entry and exit"; ENGINE-IO.md on separate slip masses). Allocation-free.
+ * (docs/engine.md §3 "Entry and exit"; docs/engine-io.md on separate slip masses). Allocation-free.
  */
 import type { PreparedSection } from "./prepare";
 import type { Scratch } from "./scratch";
@@ -12,6 +12,7 @@ const NO_MASS = status.NO_MASS;
 const OK = status.OK;
 const OUT_OF_SECTION = status.OUT_OF_SECTION;
 const UPPER_ARC = status.UPPER_ARC;
+const TOO_MANY_BREAKS = status.TOO_MANY_BREAKS;
 
 /**
  * Finds the slip masses of circle (xc, yc, r): intervals [massA, massB] (m) where the
@@ -24,13 +25,23 @@ export function findMasses(P: PreparedSection, S: Scratch, xc: number, yc: numbe
   const r2 = r * r;
   const upperTol = 1e-9 * r;
   let nr = 0;
-  for (let i = 0, n = gx.length - 1; i < n; i++) {
+  // The ground's x never decreases: only the segments under the circle's width can meet it.
+  const left = xc - r;
+  const right = xc + r;
+  let first = 0;
+  let upper = gx.length - 1;
+  while (upper - first > 1) {
+    const mid = (first + upper) >> 1;
+    if (gx[mid] < left) first = mid;
+    else upper = mid;
+  }
+  for (let i = first, n = gx.length - 1; i < n && gx[i] <= right; i++) {
     const x1 = gx[i];
     const y1 = gy[i];
     const dx = gx[i + 1] - x1;
     const dy = gy[i + 1] - y1;
     // Segment bounding box against the circle's box: most segments miss.
-    if (Math.max(x1, x1 + dx) < xc - r || Math.min(x1, x1 + dx) > xc + r || Math.min(y1, y1 + dy) > yc + r) continue;
+    if (x1 + dx < left || Math.min(y1, y1 + dy) > yc + r) continue;
     const fx = x1 - xc;
     const fy = y1 - yc;
     const a = dx * dx + dy * dy;
@@ -43,14 +54,16 @@ export function findMasses(P: PreparedSection, S: Scratch, xc: number, yc: numbe
     const t2 = (-bh + sq) / a;
     if (t1 >= 0 && t1 <= 1) {
       if (y1 + t1 * dy > yc - upperTol) return UPPER_ARC;
-      if (nr < roots.length) roots[nr++] = x1 + t1 * dx;
+      if (nr >= roots.length) return TOO_MANY_BREAKS;
+      roots[nr++] = x1 + t1 * dx;
     }
     if (t2 >= 0 && t2 <= 1 && t2 !== t1) {
       if (y1 + t2 * dy > yc - upperTol) return UPPER_ARC;
-      if (nr < roots.length) roots[nr++] = x1 + t2 * dx;
+      if (nr >= roots.length) return TOO_MANY_BREAKS;
+      roots[nr++] = x1 + t2 * dx;
     }
   }
-  // Insertion sort: a handful of roots.
+  // Insertion sort: the roots come almost in order, segment by segment.
   for (let i = 1; i < nr; i++) {
     const v = roots[i];
     let j = i - 1;
@@ -81,11 +94,10 @@ export function findMasses(P: PreparedSection, S: Scratch, xc: number, yc: numbe
         if (prev <= P.xmin + sideTol || next >= P.xmax - sideTol) return OUT_OF_SECTION;
         // Soil above the arc at the arc's horizontal extremity means ground above the centre.
         if ((i === 0 && prev === xc - r) || (i === nr && next === xc + r)) return UPPER_ARC;
-        if (nm < S.massA.length) {
-          S.massA[nm] = prev;
-          S.massB[nm] = next;
-          nm++;
-        }
+        if (nm >= S.massA.length) return TOO_MANY_BREAKS;
+        S.massA[nm] = prev;
+        S.massB[nm] = next;
+        nm++;
       }
     }
     if (next > prev) prev = next;

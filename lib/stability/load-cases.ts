@@ -1,5 +1,5 @@
 /**
- * Strength model per material for a load case (ENGINE.md §4, §7, §8):
+ * Strength model per material for a load case (docs/engine.md §4, §7, §8):
  * - steady and drawdown (effective-stress method, §7(a)): Mohr–Coulomb materials use c', φ'
  *   with pore pressure; undrained materials keep su (total stress).
  * - undrained (end of construction): undrained materials, and Mohr–Coulomb materials that

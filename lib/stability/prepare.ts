@@ -1,6 +1,6 @@
 /**
  * Turns a valid section document and a resolved analysis into the flat, typed-array model
- * the slice loop reads (ENGINE.md §5): the strip table with water and surcharge per strip,
+ * the slice loop reads (docs/engine.md §5): the strip table with water and surcharge per strip,
  * the ground polyline, vertical faces and the material table for the load case.
  */
 import { resolveAnalysis, DEFAULT_GAMMA_W, type ResolvedAnalysis } from "./defaults";
@@ -11,6 +11,9 @@ import type { SectionDocument } from "./schema";
 import { buildStripTable, type RingInput, type StripTable } from "./strip-table";
 import { buildWaterModel, WATER_LINE, type WaterModel } from "./water";
 import { buildStagedModel, VARIANT_THREE_STAGE, VARIANT_TWO_STAGE, type StagedModel } from "./drawdown/staged-model";
+
+/** A ground vertex turning by more than this (rad, 30°) is a corner the slices must not run across. */
+export const SHARP_TURN = Math.PI / 6;
 
 /** Everything one run needs, precomputed once. Lengths m, pressures kPa, weights kN/m³. */
 export interface PreparedSection {
@@ -39,6 +42,8 @@ export interface PreparedSection {
   faceTop: Float64Array;
   faceBot: Float64Array;
   faceSoil: Int8Array;
+  /** 1 at strip boundaries where the ground steps or turns by more than SHARP_TURN: always a slice break. */
+  sharp: Uint8Array;
   slices: number;
   /** 0 classical ordinary method, 1 effective-weight form. */
   ordinaryForm: number;
@@ -47,7 +52,7 @@ export interface PreparedSection {
   direction: number;
   analysis: ResolvedAnalysis;
   warnings: EngineWarning[];
-  /** Staged drawdown (ENGINE.md §7(b)): the stage-1 section and the staged strengths; null otherwise. */
+  /** Staged drawdown (docs/engine.md §7(b)): the stage-1 section and the staged strengths; null otherwise. */
   staged: StagedModel | null;
 }
 
@@ -65,7 +70,7 @@ export function sectionRings(doc: SectionDocument): RingInput[] {
   return doc.regions.map((r, i) => ({ points: r.points, material: index.get(r.material) ?? 0, region: i }));
 }
 
-/** True when the analysis asks for a staged total-stress drawdown (ENGINE.md §7(b)). */
+/** True when the analysis asks for a staged total-stress drawdown (docs/engine.md §7(b)). */
 export function isStagedDrawdown(analysis: ResolvedAnalysis): boolean {
   return analysis.case === "drawdown" && analysis.drawdown?.method === "staged";
 }
@@ -94,8 +99,8 @@ export function prepareSection(doc: SectionDocument, analysisIn?: ResolvedAnalys
   const breaks = [...water.breaks];
   if (preWater) breaks.push(...preWater.breaks);
   for (const s of surcharges) breaks.push(s.x1, s.x2);
-  const built = buildStripTable(rings, breaks);
-  const table = built.table ?? base.table;
+  // Without water or load breaks the first table is already the one needed.
+  const table = breaks.length === 0 ? base.table : (buildStripTable(rings, breaks).table ?? base.table);
   const { table: mat, warnings } = buildMaterialTable(doc.materials, analysis.case);
   const P = assemble(doc, analysis, table, water, mat, warnings);
   if (preWater) {
@@ -153,11 +158,14 @@ function assemble(
   const faceTop = new Float64Array(n + 1);
   const faceBot = new Float64Array(n + 1);
   const faceSoil = new Int8Array(n + 1);
+  const sharp = new Uint8Array(n + 1);
   let hasFaces = false;
   for (let k = 1; k < n; k++) {
     const x = table.xs[k];
     const yl = table.lineA[table.lineOff[k - 1]] + table.lineB[table.lineOff[k - 1]] * x;
     const yr = table.lineA[table.lineOff[k]] + table.lineB[table.lineOff[k]] * x;
+    const turn = Math.abs(Math.atan(table.lineB[table.lineOff[k]]) - Math.atan(table.lineB[table.lineOff[k - 1]]));
+    if (turn > SHARP_TURN || Math.abs(yl - yr) > 1e-9) sharp[k] = 1;
     if (Math.abs(yl - yr) <= 1e-9) continue;
     hasFaces = true;
     faceTop[k] = Math.max(yl, yr);
@@ -184,6 +192,7 @@ function assemble(
     faceTop,
     faceBot,
     faceSoil,
+    sharp,
     slices: analysis.slices,
     ordinaryForm: analysis.ordinaryForm === "effective-weight" ? 1 : 0,
     minDepth: analysis.minDepth,

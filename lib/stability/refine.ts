@@ -1,5 +1,5 @@
 /**
- * Refinement around the best centres (ENGINE.md §5): nested 7 × 7 grids of centres at a
+ * Refinement around the best centres (docs/engine.md §5): nested 7 × 7 grids of centres at a
  * third of the previous spacing, with radii ±2 steps at a third of the previous radius
  * step, re-centred on the best circle each level; at most 4 levels, stopping when a level
  * gains less than 0.0005 in FS.

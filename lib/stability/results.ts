@@ -1,5 +1,5 @@
 /**
- * Result shapes shared by the grid search and the one-circle report (ENGINE-IO.md
+ * Result shapes shared by the grid search and the one-circle report (docs/engine-io.md
  * "Output"). Plain JSON: numbers, arrays, null; never NaN or Infinity.
  */
 import type { Method } from "./schema";
@@ -24,7 +24,7 @@ export interface CircleFs {
   exit: [number, number];
   /** Direction the mass slides: "right" toward +x, "left" toward −x. */
   direction: "left" | "right";
-  /** Staged drawdown only (ENGINE.md §7(b)): this method's factor of safety at each stage; `fs` is the final one. */
+  /** Staged drawdown only (docs/engine.md §7(b)): this method's FS at each stage; `fs` is the final one. */
   stages?: StageFs;
 }
 
@@ -37,7 +37,7 @@ export interface FsMap {
   values: (number | null)[];
 }
 
-/** Failure of a run on bad input (ENGINE-IO.md "Errors"). */
+/** Failure of a run on bad input (docs/engine-io.md "Errors"). */
 export interface EngineFailure {
   ok: false;
   errors: Issue[];
@@ -64,7 +64,7 @@ export function describeCircle(P: PreparedSection, S: Scratch, c: Circle, method
   const xb = S.massB[m];
   const a: [number, number] = [xa, arcY(c.xc, c.yc, c.r, xa)];
   const b: [number, number] = [xb, arcY(c.xc, c.yc, c.r, xb)];
-  const right = S.dir >= 0;
+  const right = (method === "bishop" ? S.dirB : S.dirO) >= 0;
   const out: CircleFs = {
     fs,
     circle: { ...c },

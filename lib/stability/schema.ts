@@ -1,5 +1,5 @@
 /**
- * The section document (ENGINE-IO.md, version 1) as zod schemas. The schemas check the
+ * The section document (docs/engine-io.md, version 1) as zod schemas. The schemas check the
  * shape only (keys, types, finite numbers); engineering limits such as φ' in [0°, 60°)
  * are checked in validate.ts so their messages can say where and how to fix them.
  * Units: m, kPa, kN/m³, degrees.
@@ -40,7 +40,7 @@ export const mohrCoulombMaterialSchema = z.object({
   freeDraining: z.boolean().optional(),
   /**
    * Total-stress (R) envelope from consolidated-undrained tests, for a staged drawdown
-   * (ENGINE.md §7(b)): intercept cR (kPa) and angle phiR (°), plotted against the effective
+   * (docs/engine.md §7(b)): intercept cR (kPa) and angle phiR (°), plotted against the effective
    * consolidation stress σ'3c. Needed by low-permeability materials in a staged drawdown.
    */
   cR: pressure.optional(),
@@ -84,7 +84,7 @@ export const waterSchema = z.object({
   gammaW: unitWeight.optional(),
   phreatic: z.array(pointSchema).min(2, "a phreatic line needs at least 2 points").optional(),
   ru: z.number().min(-10).max(10).optional(),
-  /** Multiply phreatic pore pressure by cos²θ of the line's slope (seepage parallel to it), ENGINE.md §3. */
+  /** Multiply phreatic pore pressure by cos²θ of the line's slope (seepage parallel to it), docs/engine.md §3. */
   cos2Correction: z.boolean().optional(),
 });
 
@@ -116,14 +116,14 @@ export const rangeRadiiSchema = z.object({ r1: coordinate, r2: coordinate, n: z.
 /** Radii either by tangent elevations (R = yc − yt) or by a radius range. */
 export const radiiSchema = z.union([tangentRadiiSchema, rangeRadiiSchema]);
 
-/** How a drawdown is analysed: "effective" (ENGINE.md §7(a), the default) or "staged" (§7(b)). */
+/** How a drawdown is analysed: "effective" (docs/engine.md §7(a), the default) or "staged" (§7(b)). */
 export const drawdownMethodSchema = z.enum(["effective", "staged"]);
 /** Which staged procedure: Duncan, Wright & Wong (1990) three stages (default) or the USACE (1970) two stages. */
 export const stagedVariantSchema = z.enum(["three-stage", "usace-two-stage"]);
 
 /**
  * Rapid drawdown: pool from `from` down to `to` (m). `method` "effective" is the
- * effective-stress method (ENGINE.md §7(a)); "staged" the staged total-stress method (§7(b)),
+ * effective-stress method (docs/engine.md §7(a)); "staged" the staged total-stress method (§7(b)),
  * whose variant `stagedVariant` picks (three-stage by default).
  */
 export const drawdownSchema = z.object({
@@ -148,7 +148,7 @@ export const analysisSchema = z.object({
   radii: radiiSchema.optional(),
   drawdown: drawdownSchema.optional(),
   ordinaryForm: ordinaryFormSchema.optional(),
-  /** Refine around the best centres with finer nested grids (ENGINE.md §5). */
+  /** Refine around the best centres with finer nested grids (docs/engine.md §5). */
   refine: z.boolean().optional(),
   /** How many of the lowest circles each method keeps (default 10). */
   lowestCount: z.number().int().min(0).max(1000).optional(),

@@ -1,12 +1,13 @@
 /**
- * Reusable buffers for the slice loop (ENGINE.md §5): allocated once per worker so that
+ * Reusable buffers for the slice loop (docs/engine.md §5): allocated once per worker so that
  * evaluating a circle creates no objects. Slice arrays hold one slip mass at a time.
  */
-import { MAX_SLICES } from "./defaults";
+import { SLICE_CAPACITY } from "./defaults";
 import { createStageScratch, type StageScratch } from "./drawdown/stage-scratch";
 
-const SLICE_CAP = MAX_SLICES + 8;
-const BREAK_CAP = 8192;
+const SLICE_CAP = SLICE_CAPACITY;
+/** Arc crossings inside one strip, and kept breaks of one mass (bounded by SLICE_CAPACITY). */
+const BREAK_CAP = SLICE_CAPACITY + 8;
 
 /** Scratch state of one evaluator; results of the last circle are left in its fields. */
 export interface Scratch {
@@ -22,6 +23,8 @@ export interface Scratch {
   xR: Float64Array;
   ym: Float64Array;
   b: Float64Array;
+  /** Horizontal projection of the base, l·cos α (m): what b is in the methods' base terms. */
+  bb: Float64Array;
   sinA: Float64Array;
   cosA: Float64Array;
   len: Float64Array;
@@ -42,8 +45,13 @@ export interface Scratch {
   Hn: Float64Array;
   // Results of the last circle
   dir: number;
+  /** Direction (+1 toward +x, −1 toward −x) of each method's governing mass. */
+  dirO: number;
+  dirB: number;
   depth: number;
   D: number;
+  /** Σ|driving terms| of the current mass (kN): the scale for round-off in D. */
+  gross: number;
   fsO: number;
   fsB: number;
   negO: number;
@@ -54,14 +62,16 @@ export interface Scratch {
   iterations: number;
   reasonB: number;
   reasonO: number;
+  /** Material of the impenetrable block without γ that rejected the last circle. */
+  rigidMat: number;
   /** Index of the mass that governs each method (−1 when none). */
   govO: number;
   govB: number;
-  /** Staged-drawdown buffers and stage factors (ENGINE.md §7(b)); unused otherwise. */
+  /** Staged-drawdown buffers and stage factors (docs/engine.md §7(b)); unused otherwise. */
   stage: StageScratch;
 }
 
-/** Allocates a scratch set (about 90 kB). */
+/** Allocates a scratch set (about 0.7 MB). */
 export function createScratch(): Scratch {
   const f = () => new Float64Array(SLICE_CAP);
   return {
@@ -76,6 +86,7 @@ export function createScratch(): Scratch {
     xR: f(),
     ym: f(),
     b: f(),
+    bb: f(),
     sinA: f(),
     cosA: f(),
     len: f(),
@@ -93,8 +104,11 @@ export function createScratch(): Scratch {
     dD: f(),
     Hn: f(),
     dir: 1,
+    dirO: 1,
+    dirB: 1,
     depth: 0,
     D: 0,
+    gross: 0,
     fsO: NaN,
     fsB: NaN,
     negO: 0,
@@ -105,6 +119,7 @@ export function createScratch(): Scratch {
     iterations: 0,
     reasonB: 0,
     reasonO: 0,
+    rigidMat: -1,
     govO: -1,
     govB: -1,
     stage: createStageScratch(SLICE_CAP),

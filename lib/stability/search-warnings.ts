@@ -1,5 +1,5 @@
 /**
- * Warnings about a search's result (ENGINE.md §5 "Warnings", §4 "mα guard"): the minimum
+ * Warnings about a search's result (docs/engine.md §5 "Warnings", §4 "mα guard"): the minimum
  * on the grid's edge or at an end of the radius range, a critical mass near a section side,
  * a low mα, and methods without any valid circle.
  */

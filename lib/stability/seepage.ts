@@ -1,6 +1,6 @@
 /**
  * Phreatic line through a homogeneous dam on an impervious base with a horizontal toe filter,
- * reservoir on the left (ENGINE.md §6): Kozeny's basic parabola with Casagrande's entry correction.
+ * reservoir on the left (docs/engine.md §6): Kozeny's basic parabola with Casagrande's entry correction.
  *
  * References: Casagrande, A. (1937) "Seepage through dams", J. New England Water Works Assoc. 51(2);
  * Kozeny (1931) for the parabola; Craig's Soil Mechanics, ch. 2 (seepage through embankment dams,
@@ -35,7 +35,7 @@ export interface SeepageInput {
   crestLength?: number;
   /** Flow net drawn by the engineer: Nd equipotential drops, Δl (m) of the last element, H (default h). */
   flowNet?: { equipotentialDrops: number; lastElementLength: number; headLoss?: number };
-  /** Required piping factor; default 3 (common practice for earth embankments, REFERENCES.md). */
+  /** Required piping factor; default 3 (common practice for earth embankments, docs/references.md). */
   requiredPipingFactor?: number;
 }
 
@@ -94,7 +94,7 @@ export type SeepageResult =
   | { ok: true; construction: SeepageConstruction; flow: SeepageFlow; piping: PipingCheck; limits: SeepageLimit[] }
   | { ok: false; limits: SeepageLimit[]; construction?: SeepageConstruction };
 
-const TOL = 1e-3; // m: faces and levels within a millimetre count as equal (ENGINE.md §1 snapping)
+const TOL = 1e-3; // m: faces and levels within a millimetre count as equal (docs/engine.md §1 snapping)
 const HAND_DRAWN = "Draw the phreatic line by hand for this section.";
 
 /** y0 = √(h² + d²) − d (Kozeny), with h the head above the focus and d its distance from A (m). */
@@ -131,7 +131,7 @@ export function freeSurfaceGradientAt(p: BasicParabola, x: number): number {
   return slope / Math.hypot(1, slope);
 }
 
-/** Exit gradient from a flow net: i = (H/Nd)/Δl (ENGINE.md §6). */
+/** Exit gradient from a flow net: i = (H/Nd)/Δl (docs/engine.md §6). */
 export function flowNetExitGradient(headLoss: number, equipotentialDrops: number, lastElementLength: number): number {
   if (!(headLoss > 0 && equipotentialDrops > 0 && lastElementLength > 0))
     throw new Error("flow net: H, Nd and Δl must be positive");
@@ -151,7 +151,7 @@ export function flowNetDischarge(
 }
 
 /**
- * Builds the phreatic line, seepage and piping check by ENGINE.md §6. Cases outside the method
+ * Builds the phreatic line, seepage and piping check by docs/engine.md §6. Cases outside the method
  * (no filter, pool above the crest or below the base, a non-plane upstream face, a line that
  * crosses the downstream face) come back with `ok: false` and coded `limits`, never NaN.
  *

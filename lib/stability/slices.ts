@@ -1,6 +1,6 @@
 /**
  * Cuts one slip mass into slices and computes each slice's loads and base strength
- * (ENGINE.md §3 "Slice boundaries" and "Per slice"). Writes into the scratch arrays;
+ * (docs/engine.md §3 "Slice boundaries" and "Per slice"). Writes into the scratch arrays;
  * allocation-free. Sliding is toward +x when dir = +1 and toward −x when dir = −1: the
  * geometry stays in document coordinates and only the signs of sin α and of the
  * horizontal water forces change, which is the same as mirroring the section.
@@ -14,16 +14,33 @@ import { findStrip } from "./strip-table";
 import { addFaceThrust } from "./vertical-faces";
 
 // Module-local copies: imported bindings are property reads on every use in the hot loop.
-const MAX_SLICES = defaults.MAX_SLICES;
+const MERGE_FRACTION = defaults.MERGE_FRACTION;
+const SLICE_CAPACITY = defaults.SLICE_CAPACITY;
 const KIND_RIGID = cases.KIND_RIGID;
 const KIND_UNDRAINED = cases.KIND_UNDRAINED;
 const OK = status.OK;
 const OUT_OF_SECTION = status.OUT_OF_SECTION;
 const RIGID = status.RIGID;
+const RIGID_NO_WEIGHT = status.RIGID_NO_WEIGHT;
 const SHALLOW = status.SHALLOW;
 const TOO_MANY_BREAKS = status.TOO_MANY_BREAKS;
 
-/** Collects the slice boundaries of mass [xA, xB]; returns how many are in S.kept (−1 if too many). */
+/**
+ * Streaming state of the break merge: [the last break seen, a vertex waiting on its right
+ * neighbour (NaN when none), 1 if that vertex is clear of its left neighbour].
+ */
+const merge = new Float64Array(3);
+
+/**
+ * Collects the slice boundaries of mass [xA, xB] into S.kept (docs/engine.md §3). Hard
+ * breaks (the ends, arc crossings of material boundaries and water lines, ground corners)
+ * are all kept, merged only when closer than max(0.1 mm, 1e-7·R). Any other vertex of the ground
+ * or of a layer is kept only when both its neighbours lie at least MERGE_FRACTION of a
+ * nominal slice width away; otherwise the slices run across it. The rule looks at both
+ * neighbours, so it is the same read left to right or right to left (mirror invariance),
+ * and a survey of thousands of vertices cuts about as many slices as its outline.
+ * @returns how many breaks are kept (−1 if a buffer would overflow)
+ */
 function collectBreaks(
   P: PreparedSection,
   S: Scratch,
@@ -35,18 +52,24 @@ function collectBreaks(
 ): number {
   const T = P.table;
   const brk = S.brk;
-  const cap = brk.length - 4;
+  const kept = S.kept;
+  const cap = kept.length - 2;
   const r2 = r * r;
   const line = P.waterKind === 1;
   const extraA = P.extraWaterA;
   const extraB = P.extraWaterB;
-  let nb = 0;
-  brk[nb++] = xA;
+  const sharp = P.sharp;
+  const tolHard = 1e-7 * r > 1e-4 ? 1e-7 * r : 1e-4;
+  const tolSoft = (MERGE_FRACTION * (xB - xA)) / P.slices;
+  let nk = 0;
+  kept[nk++] = xA;
+  merge[0] = xA;
+  merge[1] = NaN;
   let k = findStrip(T, xA);
   for (;;) {
     const x0 = T.xs[k] > xA ? T.xs[k] : xA;
     const x1 = T.xs[k + 1] < xB ? T.xs[k + 1] : xB;
-    const start = nb;
+    let nb = 0;
     const o = T.lineOff[k];
     const e = T.lineOff[k + 1];
     const last = extraA === null ? e : e + 1;
@@ -74,36 +97,69 @@ function collectBreaks(
       const sq = Math.sqrt(disc);
       for (let s = -1; s <= 1; s += 2) {
         const x = (-qb + s * sq) / qa;
-        if (x > x0 && x < x1 && a + b * x < yc && nb < cap) brk[nb++] = x;
+        if (x > x0 && x < x1 && a + b * x < yc) {
+          if (nb >= brk.length) return -1;
+          brk[nb++] = x;
+        }
       }
     }
-    for (let i = start + 1; i < nb; i++) {
+    for (let i = 1; i < nb; i++) {
       const v = brk[i];
       let j = i - 1;
-      while (j >= start && brk[j] > v) {
+      while (j >= 0 && brk[j] > v) {
         brk[j + 1] = brk[j];
         j--;
       }
       brk[j + 1] = v;
     }
-    if (nb >= cap) return -1;
-    brk[nb++] = x1;
+    for (let i = 0; i < nb; i++) {
+      nk = offerBreak(kept, nk, cap, brk[i], true, tolHard, tolSoft);
+      if (nk < 0) return -1;
+    }
     if (x1 >= xB || k + 1 >= T.n) break;
+    // The strip's right end: a vertex, hard where the ground steps or turns sharply (a toe, a crest, a face).
+    nk = offerBreak(kept, nk, cap, x1, sharp[k + 1] !== 0, tolHard, tolSoft);
+    if (nk < 0) return -1;
     k++;
   }
-  // Merge boundaries closer than max(0.1 mm, 1e-7·R) (ENGINE.md §3).
-  const tol = Math.max(1e-4, 1e-7 * r);
-  const kept = S.kept;
-  let nk = 0;
-  kept[nk++] = xA;
-  for (let i = 1; i < nb; i++) {
-    const x = brk[i];
-    if (x - kept[nk - 1] >= tol) kept[nk++] = x;
-    else if (i === nb - 1) {
-      if (nk > 1) kept[nk - 1] = x;
-      else kept[nk++] = x;
-    }
+  nk = offerBreak(kept, nk, cap, xB, true, tolHard, tolSoft);
+  // The mass's far end closes the last slice; a hard break too close to it gives way.
+  if (nk > 0 && kept[nk - 1] !== xB) {
+    if (nk > 1) kept[nk - 1] = xB;
+    else kept[nk++] = xB;
   }
+  return nk;
+}
+
+/** Offers the next break (x increasing) to the merge; returns the new kept count (−1 on overflow). */
+function offerBreak(
+  kept: Float64Array,
+  nk: number,
+  cap: number,
+  x: number,
+  hard: boolean,
+  tolHard: number,
+  tolSoft: number,
+): number {
+  const pending = merge[1];
+  if (pending === pending) {
+    // A vertex stays only when clear of both neighbours.
+    if (merge[2] === 1 && x - pending >= tolSoft) {
+      if (nk >= cap) return -1;
+      kept[nk++] = pending;
+    }
+    merge[1] = NaN;
+  }
+  if (hard) {
+    if (x - kept[nk - 1] >= tolHard) {
+      if (nk >= cap) return -1;
+      kept[nk++] = x;
+    }
+  } else {
+    merge[1] = x;
+    merge[2] = x - merge[0] >= tolSoft ? 1 : 0;
+  }
+  merge[0] = x;
   return nk;
 }
 
@@ -124,15 +180,10 @@ export function buildSlices(
   const nk = collectBreaks(P, S, xc, yc, r, xA, xB);
   if (nk < 0) return TOO_MANY_BREAKS;
   const kept = S.kept;
-  let bmax = (xB - xA) / P.slices;
+  const bmax = (xB - xA) / P.slices;
   let total = 0;
-  for (let pass = 0; pass < 40; pass++) {
-    total = 0;
-    for (let i = 1; i < nk; i++) total += Math.max(1, Math.ceil((kept[i] - kept[i - 1]) / bmax - 1e-9));
-    if (total <= MAX_SLICES) break;
-    bmax *= 1.25;
-  }
-  if (total > MAX_SLICES) return TOO_MANY_BREAKS;
+  for (let i = 1; i < nk; i++) total += Math.max(1, Math.ceil((kept[i] - kept[i - 1]) / bmax - 1e-9));
+  if (total > SLICE_CAPACITY) return TOO_MANY_BREAKS;
   const T = P.table;
   const M = P.mat;
   const r2 = r * r;
@@ -149,9 +200,15 @@ export function buildSlices(
   const waterA = P.waterA;
   const waterB = P.waterB;
   const nStrips = T.n;
-  let ks = findStrip(T, (kept[0] + kept[1]) / 2);
+  // The strip under each slice midpoint, advanced as the slices go right.
+  let ks = findStrip(T, kept[0]);
   let n = 0;
   let depth = 0;
+  let weightless = -1;
+  // The arc at the left side of the next slice (offset d from the centre, half-height √(R² − d²)),
+  // carried over from slice to slice.
+  let dPrev = kept[0] - xc;
+  let sPrev = Math.sqrt(Math.max(0, r2 - dPrev * dPrev));
   for (let i = 1; i < nk; i++) {
     const p = kept[i - 1];
     const q = kept[i];
@@ -163,7 +220,22 @@ export function buildSlices(
       const b = xr - xl;
       const xm = (xl + xr) / 2;
       const ddx = xm - xc;
-      const ym = yc - Math.sqrt(r2 - ddx * ddx);
+      const sm = Math.sqrt(r2 - ddx * ddx);
+      const ym = yc - sm;
+      const dNext = xr - xc;
+      const sNext = Math.sqrt(Math.max(0, r2 - dNext * dNext));
+      // The angle the slice's arc subtends, from its sine and cosine (no asin per boundary):
+      // a short series for the usual thin slice, atan2 for a wide one.
+      const sinD = (dNext * sPrev - dPrev * sNext) / r2;
+      let dTheta: number;
+      if (sinD < 0.1) {
+        const z2 = sinD * sinD;
+        dTheta = sinD * (1 + z2 * (1 / 6 + z2 * (3 / 40 + z2 * (5 / 112 + z2 * (35 / 1152)))));
+      } else dTheta = Math.atan2(sinD, (sNext * sPrev + dNext * dPrev) / r2);
+      // Exact arc length R·Δθ, and the area between the arc and its midpoint height (≤ 0):
+      // ∫√(R² − d²) dd over the slice is ½(d·√(R² − d²))|ends + ½R²·Δθ.
+      const arcLen = r * dTheta;
+      const areaCorr = 0.5 * (dNext * sNext - dPrev * sPrev) + 0.5 * r2 * dTheta - b * sm;
       while (ks + 1 < nStrips && xs[ks + 1] <= xm) ks++;
       const o = lineOff[ks];
       const e = lineOff[ks + 1] - 1;
@@ -173,6 +245,7 @@ export function buildSlices(
       const yw = line ? waterA[ks] + waterB[ks] * xm : -Infinity;
       let wsum = 0;
       let wy = 0;
+      let gBase = 0;
       let baseMat = layerMat[e - 1];
       for (let li = o; li < e; li++) {
         const top = lineA[li] + lineB[li] * xm;
@@ -187,12 +260,19 @@ export function buildSlices(
         const h = top - lowBot;
         if (h > 0) {
           const g = M.gamma[mi];
-          if (g < 0) return RIGID;
+          if (g < 0) {
+            // The arc in impenetrable material governs; a block above the arc is carried as
+            // weight, which it cannot be without γ (reported once the whole mass is sliced).
+            if (last) return RIGID;
+            weightless = mi;
+            continue;
+          }
           let hb = 0;
           if (yw > lowBot) hb = yw - lowBot < h ? yw - lowBot : h;
           const ha = h - hb;
           const gs = M.gammaSat[mi];
           wsum += g * ha + gs * hb;
+          gBase = hb > 0 ? gs : g;
           if (kh !== 0) wy += g * ha * (top - ha / 2) + gs * hb * (lowBot + hb / 2);
         }
         if (last) {
@@ -202,12 +282,17 @@ export function buildSlices(
       }
       const kind = M.kind[baseMat];
       if (kind === KIND_RIGID) return RIGID;
-      const W = wsum * b;
+      // The weight uses the exact area above the arc; the base angle is the midpoint's.
+      const W = wsum * b + gBase * areaCorr;
       const sinA = (dir * (xc - xm)) / r;
-      const cosA = (yc - ym) / r;
+      const cosA = sm / r;
+      dPrev = dNext;
+      sPrev = sNext;
+      // u is the base's mean pore pressure over its width: the exact area above the arc enters
+      // it as it enters W, so that u·b is the water's true vertical thrust on the base.
       let u = 0;
-      if (line) u = yw > ym ? gw * (yw - ym) * P.waterCos2[ks] : 0;
-      else if (ruMode) u = P.ru * wsum;
+      if (line) u = yw > ym ? gw * (yw - ym + areaCorr / b) * P.waterCos2[ks] : 0;
+      else if (ruMode) u = (P.ru * W) / b;
       let Ww = 0;
       let Fw = 0;
       let dH = 0;
@@ -251,7 +336,8 @@ export function buildSlices(
       S.b[n] = b;
       S.sinA[n] = sinA;
       S.cosA[n] = cosA;
-      S.len[n] = b / cosA;
+      S.len[n] = arcLen;
+      S.bb[n] = arcLen * cosA;
       S.W[n] = W;
       S.Ww[n] = Ww;
       S.Q[n] = Q;
@@ -268,6 +354,10 @@ export function buildSlices(
       if (P.hasFaces) addFaceThrust(P, S, n, ks, xl, xr, xc, yc, r, dir);
       n++;
     }
+  }
+  if (weightless >= 0) {
+    S.rigidMat = weightless;
+    return RIGID_NO_WEIGHT;
   }
   S.n = n;
   S.depth = depth;

@@ -1,6 +1,6 @@
 /**
  * Why a circle (or one method on it) has no factor of safety. Numbers in the hot loop,
- * kebab-case names in results (ENGINE.md §3, §4).
+ * kebab-case names in results (docs/engine.md §3, §4).
  */
 export const OK = 0;
 export const NO_MASS = 1;
@@ -13,6 +13,7 @@ export const BAD_RADIUS = 7;
 export const M_ALPHA = 8;
 export const NOT_CONVERGED = 9;
 export const TOO_MANY_BREAKS = 10;
+export const RIGID_NO_WEIGHT = 11;
 
 /** Result names of the status codes. */
 export const REASONS: readonly string[] = [
@@ -27,6 +28,7 @@ export const REASONS: readonly string[] = [
   "m-alpha-not-positive",
   "not-converged",
   "too-complex",
+  "impenetrable-without-weight",
 ];
 
 /** Plain-language explanation of each reason, for one-circle results. */
@@ -42,4 +44,14 @@ export const REASON_TEXT: readonly string[] = [
   "Bishop's mα is zero or negative on a slice at the solution: the exit is too steep.",
   "Bishop's iteration did not converge.",
   "The section is too detailed under this circle (too many slice breaks).",
+  "The slip mass carries a block of impenetrable material that has no unit weight; " +
+    "give it gamma so its weight is carried.",
 ];
+
+/** The reason text for an impenetrable block without γ inside a slip mass, naming its material. */
+export function rigidNoWeightText(material: string | undefined): string {
+  return (
+    `The slip mass carries impenetrable material '${material ?? "?"}', which has no unit weight: ` +
+    "give it gamma (γ, kN/m³) so that its weight is carried, or move the circle clear of it."
+  );
+}

@@ -1,5 +1,5 @@
 /**
- * The strip table (ENGINE.md §5): the section cut into vertical strips at every vertex x,
+ * The strip table (docs/engine.md §5): the section cut into vertical strips at every vertex x,
  * so that inside a strip every region boundary is one straight line. Each strip lists its
  * boundary lines from the ground down to the base, with the material between them, so a
  * soil column is a binary search plus a short loop. Building it also finds overlaps,
@@ -29,7 +29,7 @@ export interface StripTable {
   lineBreak: Uint8Array;
 }
 
-/** Vertical tolerance for contact between regions (ENGINE.md §1: 1 mm). */
+/** Vertical tolerance for contact between regions (docs/engine.md §1: 1 mm). */
 export const CONTACT_TOL = 1e-3;
 /** Two vertex x within this (m) are one strip boundary. */
 export const X_MERGE_TOL = 1e-6;
@@ -43,8 +43,21 @@ interface Interval {
   region: number;
 }
 
+/** One strip's layers before the table is flattened: top lines (ground first), materials, the base line. */
+interface StripLayers {
+  topA: number[];
+  topB: number[];
+  mats: number[];
+  baseA: number;
+  baseB: number;
+}
+
 /**
  * Builds the strip table from region rings plus extra break abscissae (water, loads).
+ * Near-linear in the number of vertices: each edge is put in the strips it spans (found by
+ * binary search), and each strip sorts only its own few edges. Neighbouring strips whose
+ * layers continue unchanged across a vertex (collinear points) become one strip, unless an
+ * extra break asks for the boundary.
  * @returns the table (null when the regions leave an x range uncovered) and every problem found.
  */
 export function buildStripTable(
@@ -62,18 +75,17 @@ export function buildStripTable(
       xmin = Math.min(xmin, p[0]);
       xmax = Math.max(xmax, p[0]);
     }
-  for (const x of extraBreaks) if (x > xmin && x < xmax) xsAll.push(x);
-  const xs = uniqueSorted(xsAll, X_MERGE_TOL);
-  const lineA: number[] = [];
-  const lineB: number[] = [];
-  const layerMat: number[] = [];
-  const lineBreak: number[] = [];
-  const lineOff: number[] = [0];
+  const extra: number[] = [];
+  for (const x of extraBreaks) if (x > xmin && x < xmax) extra.push(x);
+  const xs = uniqueSorted(xsAll.concat(extra), X_MERGE_TOL);
+  const keep = protectedBoundaries(xs, uniqueSorted(extra, X_MERGE_TOL));
+  const buckets = bucketEdges(rings, xs);
+  const strips: (StripLayers | null)[] = [];
   let covered = true;
   for (let k = 0; k + 1 < xs.length; k++) {
     const x0 = xs[k];
     const x1 = xs[k + 1];
-    const ivs = stripIntervals(rings, x0, x1);
+    const ivs = stripIntervals(rings, buckets[k], x0, x1);
     if (ivs.length === 0) {
       covered = false;
       issues.push(
@@ -84,74 +96,158 @@ export function buildStripTable(
           [(x0 + x1) / 2, 0],
         ),
       );
-      lineOff.push(lineA.length);
+      strips.push(null);
       continue;
     }
     checkContacts(ivs, x0, x1, issues, seen);
     // Merge neighbouring layers of one material: fewer lines, same column.
-    const tops: [number, number][] = [[ivs[0].ta, ivs[0].tb]];
-    const mats: number[] = [ivs[0].material];
-    for (let i = 1; i < ivs.length; i++) {
-      if (ivs[i].material === mats[mats.length - 1]) continue;
-      tops.push([ivs[i].ta, ivs[i].tb]);
-      mats.push(ivs[i].material);
+    const layers: StripLayers = { topA: [], topB: [], mats: [], baseA: 0, baseB: 0 };
+    for (let i = 0; i < ivs.length; i++) {
+      if (i > 0 && ivs[i].material === layers.mats[layers.mats.length - 1]) continue;
+      layers.topA.push(ivs[i].ta);
+      layers.topB.push(ivs[i].tb);
+      layers.mats.push(ivs[i].material);
     }
     const last = ivs[ivs.length - 1];
-    for (let i = 0; i < tops.length; i++) {
-      lineA.push(tops[i][0]);
-      lineB.push(tops[i][1]);
-      layerMat.push(mats[i]);
+    layers.baseA = last.ba;
+    layers.baseB = last.bb;
+    strips.push(layers);
+  }
+  if (!covered) return { table: null, issues };
+  return { table: flatten(xs, strips as StripLayers[], keep), issues };
+}
+
+/** Marks the strip boundaries an extra break asks for (index k: boundary xs[k]). */
+function protectedBoundaries(xs: number[], extra: number[]): Uint8Array {
+  const keep = new Uint8Array(xs.length);
+  let j = 0;
+  for (let k = 0; k < xs.length; k++) {
+    while (j < extra.length && extra[j] < xs[k] - X_MERGE_TOL) j++;
+    if (j < extra.length && Math.abs(extra[j] - xs[k]) <= X_MERGE_TOL) keep[k] = 1;
+  }
+  return keep;
+}
+
+/** True when strip b's layers continue strip a's unchanged across their shared boundary. */
+function sameLayers(a: StripLayers, b: StripLayers): boolean {
+  if (a.mats.length !== b.mats.length) return false;
+  const same = (a1: number, b1: number, a2: number, b2: number) =>
+    Math.abs(b1 - b2) <= 1e-12 * (1 + Math.abs(b1)) && Math.abs(a1 - a2) <= 1e-9 * (1 + Math.abs(a1));
+  for (let i = 0; i < a.mats.length; i++) {
+    if (a.mats[i] !== b.mats[i] || !same(a.topA[i], a.topB[i], b.topA[i], b.topB[i])) return false;
+  }
+  return same(a.baseA, a.baseB, b.baseA, b.baseB);
+}
+
+/** The flat typed-array table, with strips that continue each other unchanged joined. */
+function flatten(xs: number[], strips: StripLayers[], keep: Uint8Array): StripTable {
+  const outXs: number[] = [xs[0]];
+  const lineA: number[] = [];
+  const lineB: number[] = [];
+  const layerMat: number[] = [];
+  const lineBreak: number[] = [];
+  const lineOff: number[] = [0];
+  let prev: StripLayers | null = null;
+  for (let k = 0; k < strips.length; k++) {
+    const s = strips[k];
+    if (prev !== null && keep[k] === 0 && sameLayers(prev, s)) {
+      outXs[outXs.length - 1] = xs[k + 1];
+      continue;
+    }
+    outXs.push(xs[k + 1]);
+    for (let i = 0; i < s.mats.length; i++) {
+      lineA.push(s.topA[i]);
+      lineB.push(s.topB[i]);
+      layerMat.push(s.mats[i]);
       lineBreak.push(i === 0 ? 0 : 1);
     }
-    lineA.push(last.ba);
-    lineB.push(last.bb);
+    lineA.push(s.baseA);
+    lineB.push(s.baseB);
     layerMat.push(-1);
     lineBreak.push(1);
     lineOff.push(lineA.length);
+    prev = s;
   }
-  if (!covered) return { table: null, issues };
   return {
-    table: {
-      n: xs.length - 1,
-      xs: Float64Array.from(xs),
-      lineOff: Int32Array.from(lineOff),
-      lineA: Float64Array.from(lineA),
-      lineB: Float64Array.from(lineB),
-      layerMat: Int32Array.from(layerMat),
-      lineBreak: Uint8Array.from(lineBreak),
-    },
-    issues,
+    n: outXs.length - 1,
+    xs: Float64Array.from(outXs),
+    lineOff: Int32Array.from(lineOff),
+    lineA: Float64Array.from(lineA),
+    lineB: Float64Array.from(lineB),
+    layerMat: Int32Array.from(layerMat),
+    lineBreak: Uint8Array.from(lineBreak),
   };
 }
 
-/** Solid intervals of every ring across one strip, sorted from the top down. */
-function stripIntervals(rings: ReadonlyArray<RingInput>, x0: number, x1: number): Interval[] {
-  const xm = (x0 + x1) / 2;
-  const out: Interval[] = [];
-  for (const r of rings) {
-    const lines: { a: number; b: number; y: number }[] = [];
+/** An edge of a ring as a line y = a + b·x over its x range. */
+interface EdgeLine {
+  a: number;
+  b: number;
+  ring: number;
+}
+
+/** For each strip, the non-vertical ring edges that span it. */
+function bucketEdges(rings: ReadonlyArray<RingInput>, xs: number[]): EdgeLine[][] {
+  const buckets: EdgeLine[][] = [];
+  for (let k = 0; k + 1 < xs.length; k++) buckets.push([]);
+  rings.forEach((r, ri) => {
     const pts = r.points;
     for (let i = 0; i < pts.length; i++) {
       const p = pts[i];
       const q = pts[(i + 1) % pts.length];
       const lo = Math.min(p[0], q[0]);
       const hi = Math.max(p[0], q[0]);
-      if (hi - lo <= X_MERGE_TOL || lo > x0 + X_MERGE_TOL || hi < x1 - X_MERGE_TOL) continue;
+      if (hi - lo <= X_MERGE_TOL) continue;
       const b = (q[1] - p[1]) / (q[0] - p[0]);
-      const a = p[1] - b * p[0];
-      lines.push({ a, b, y: a + b * xm });
+      const e: EdgeLine = { a: p[1] - b * p[0], b, ring: ri };
+      // The strips whose midpoints the edge spans: strips are bounded by the merged vertex x, so
+      // an edge covers a strip wholly or not at all, and the midpoint decides without a tolerance
+      // (a face a micrometre off vertical makes a strip of its own, not a gap in its neighbours).
+      for (let k = Math.max(0, lowerBound(xs, lo) - 1); k + 1 < xs.length && xs[k] < hi; k++) {
+        const xm = (xs[k] + xs[k + 1]) / 2;
+        if (xm > lo && xm < hi) buckets[k].push(e);
+      }
     }
-    lines.sort((u, v) => v.y - u.y);
-    for (let i = 0; i + 1 < lines.length; i += 2) {
+  });
+  return buckets;
+}
+
+/** First index i with xs[i] ≥ x (xs.length if none). */
+function lowerBound(xs: number[], x: number): number {
+  let lo = 0;
+  let hi = xs.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (xs[mid] < x) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/** Solid intervals of every ring across one strip, sorted from the top down. */
+function stripIntervals(rings: ReadonlyArray<RingInput>, edges: EdgeLine[], x0: number, x1: number): Interval[] {
+  const xm = (x0 + x1) / 2;
+  // Edges of one ring together, each ring's from the top down: they pair into solid intervals.
+  const sorted = edges
+    .map((e) => ({ e, y: e.a + e.b * xm }))
+    .sort((u, v) => (u.e.ring !== v.e.ring ? u.e.ring - v.e.ring : v.y - u.y));
+  const out: Interval[] = [];
+  let i = 0;
+  while (i < sorted.length) {
+    let j = i;
+    while (j < sorted.length && sorted[j].e.ring === sorted[i].e.ring) j++;
+    const ring = rings[sorted[i].e.ring];
+    for (let t = i; t + 1 < j; t += 2) {
       out.push({
-        ta: lines[i].a,
-        tb: lines[i].b,
-        ba: lines[i + 1].a,
-        bb: lines[i + 1].b,
-        material: r.material,
-        region: r.region,
+        ta: sorted[t].e.a,
+        tb: sorted[t].e.b,
+        ba: sorted[t + 1].e.a,
+        bb: sorted[t + 1].e.b,
+        material: ring.material,
+        region: ring.region,
       });
     }
+    i = j;
   }
   out.sort((u, v) => v.ta + v.tb * xm - (u.ta + u.tb * xm));
   return out;

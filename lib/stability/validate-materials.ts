@@ -1,5 +1,5 @@
 /**
- * Material checks (ENGINE.md §1 "Bounds"): errors block a run, warnings flag unusual values.
+ * Material checks (docs/engine.md §1 "Bounds"): errors block a run, warnings flag unusual values.
  * γ ∉ (5, 30] / ∉ [14, 24]; γsat ≤ γw / < γ; c' < 0 / > 200 kPa; φ' ∉ [0°, 60°) / > 45°;
  * su ≤ 0 / > 500 kPa; R envelope (staged drawdown, §7(b)): cR < 0 / > 200 kPa, φR ∉ [0°, 60°) / > 45°,
  * and both or neither.

@@ -1,5 +1,5 @@
 /**
- * Region checks (ENGINE.md §1 "Regions"): closed rings (a repeated closing point is dropped
+ * Region checks (docs/engine.md §1 "Regions"): closed rings (a repeated closing point is dropped
  * with a warning), at least 3 vertices, area over 0.01 m², no self-crossing, vertices within
  * 1 mm snapped together, and, through the strip table, no overlap, void or side gap.
  */
@@ -13,13 +13,7 @@ const MIN_AREA = 0.01; // m²
 
 /** Cleans rings, snaps vertices and checks each polygon on its own; returns the cleaned regions. */
 export function cleanRegions(regions: ReadonlyArray<Region>, errors: Issue[], warnings: Issue[]): Region[] {
-  const snapped: [number, number][] = [];
-  const snap = (p: readonly [number, number]): [number, number] => {
-    for (const s of snapped)
-      if (Math.abs(s[0] - p[0]) <= SNAP_TOL && Math.abs(s[1] - p[1]) <= SNAP_TOL) return [s[0], s[1]];
-    snapped.push([p[0], p[1]]);
-    return [p[0], p[1]];
-  };
+  const snap = createSnapper(SNAP_TOL);
   return regions.map((r, ri) => {
     const p = `regions[${ri}]`;
     const raw = r.points;
@@ -36,6 +30,18 @@ export function cleanRegions(regions: ReadonlyArray<Region>, errors: Issue[], wa
       );
     }
     const points = cleanRing(raw.map(snap), 1e-9);
+    if (points.length < 3 && cleanRing(raw, 1e-9).length >= 3) {
+      errors.push(
+        issue(
+          "region-too-thin",
+          `${p}.points`,
+          `${p} is thinner than 1 mm: points closer than 1 mm are snapped together, and its points ` +
+            "then leave fewer than 3 distinct corners. Remove it, or draw it at least 1 mm thick.",
+          raw[0] as [number, number],
+        ),
+      );
+      return { ...r, points };
+    }
     if (points.length < 3) {
       errors.push(
         issue(
@@ -63,11 +69,55 @@ export function cleanRegions(regions: ReadonlyArray<Region>, errors: Issue[], wa
   });
 }
 
-/** Reports the first crossing of two non-adjacent edges of one ring; true when one was found. */
+/**
+ * A snapper: each point goes to the first earlier point within tol in x and y, found through
+ * a grid of tol-sized cells (near-linear, where comparing with every earlier point was quadratic).
+ */
+function createSnapper(tol: number): (p: readonly [number, number]) => [number, number] {
+  const cells = new Map<string, number[]>();
+  const pts: [number, number][] = [];
+  const key = (i: number, j: number) => `${i},${j}`;
+  return (p) => {
+    const ci = Math.floor(p[0] / tol);
+    const cj = Math.floor(p[1] / tol);
+    let best = -1;
+    for (let di = -1; di <= 1; di++)
+      for (let dj = -1; dj <= 1; dj++) {
+        const list = cells.get(key(ci + di, cj + dj));
+        if (!list) continue;
+        for (const idx of list) {
+          const s = pts[idx];
+          if (Math.abs(s[0] - p[0]) <= tol && Math.abs(s[1] - p[1]) <= tol && (best < 0 || idx < best)) best = idx;
+        }
+      }
+    if (best >= 0) return [pts[best][0], pts[best][1]];
+    pts.push([p[0], p[1]]);
+    const k = key(ci, cj);
+    const list = cells.get(k);
+    if (list) list.push(pts.length - 1);
+    else cells.set(k, [pts.length - 1]);
+    return [p[0], p[1]];
+  };
+}
+
+/**
+ * Reports a crossing of two edges of one ring (or an edge folding back on its neighbour);
+ * true when one was found. A sweep over x: each edge is tested only against the edges whose
+ * x range overlaps its own, so a long ground line costs near-linear time.
+ */
 function checkSelfCrossing(points: [number, number][], p: string, errors: Issue[]): boolean {
   const n = points.length;
-  for (let i = 0; i < n; i++) {
-    for (let j = i + 1; j < n; j++) {
+  const order = Array.from({ length: n }, (_, i) => i);
+  const minX = (i: number) => Math.min(points[i][0], points[(i + 1) % n][0]);
+  const maxX = (i: number) => Math.max(points[i][0], points[(i + 1) % n][0]);
+  order.sort((a, b) => minX(a) - minX(b) || a - b);
+  let active: number[] = [];
+  for (const e of order) {
+    const x = minX(e);
+    active = active.filter((f) => maxX(f) >= x - 1e-9);
+    for (const f of active) {
+      const i = Math.min(e, f);
+      const j = Math.max(e, f);
       const adjacent = j === i + 1 || (i === 0 && j === n - 1);
       const a1 = points[i];
       const a2 = points[(i + 1) % n];
@@ -86,6 +136,7 @@ function checkSelfCrossing(points: [number, number][], p: string, errors: Issue[
         return true;
       }
     }
+    active.push(e);
   }
   return false;
 }

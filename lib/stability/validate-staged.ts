@@ -1,5 +1,5 @@
 /**
- * Checks a staged rapid drawdown needs (ENGINE.md §7(b)): every low-permeability
+ * Checks a staged rapid drawdown needs (docs/engine.md §7(b)): every low-permeability
  * Mohr–Coulomb material that a region uses must carry its total-stress (R) envelope (cR, phiR),
  * unless it is marked free-draining; undrained (su) materials keep su in every stage.
  */

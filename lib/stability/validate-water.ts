@@ -1,5 +1,5 @@
 /**
- * Water and load checks (ENGINE.md §1): one water model at a time, a phreatic line with x
+ * Water and load checks (docs/engine.md §1): one water model at a time, a phreatic line with x
  * increasing that spans the section, γw in [9.7, 10.3], ru in [0, 1) (warning above 0.6),
  * kh in [0, 0.5] (warning above 0.3), surcharges with x1 < x2 and q ≥ 0.
  */

@@ -1,6 +1,6 @@
 /**
- * validateSection: the one entry point that checks a section document (ENGINE.md §1,
- * ENGINE-IO.md "Errors"). It reports every problem found, each with a code, a path such as
+ * validateSection: the one entry point that checks a section document (docs/engine.md §1,
+ * docs/engine-io.md "Errors"). It reports every problem found, each with a code, a path such as
  * `regions[2].points[4]`, a message saying what is wrong and how to fix it and, where it
  * has one, the location in metres. Errors block a run; warnings do not.
  */

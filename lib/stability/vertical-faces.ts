@@ -1,5 +1,5 @@
 /**
- * Ponded water against a vertical face of the ground (ENGINE.md §3 "Ponded water"): the
+ * Ponded water against a vertical face of the ground (docs/engine.md §3 "Ponded water"): the
  * slice tops carry the water on sloping ground, and this adds the horizontal thrust on
  * the part of a vertical face that belongs to the slip mass, to the slice on its soil side.
  */

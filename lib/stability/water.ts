@@ -1,11 +1,14 @@
 /**
  * Water for a load case: the water surface used for pore pressure and ponded water
- * (ENGINE.md §3, §7(a)), and the x where it must break the strips.
+ * (docs/engine.md §3, §7(a)), and the x where it must break the strips.
  * - steady: the phreatic line as given; above the ground it is ponded water.
- * - drawdown (effective-stress method, B̄ = 1): on the pool side, the surface becomes
- *   min(pre-drawdown line, max(ground, lowered pool)): pore pressures keep their
- *   steady-seepage values but are held at the ground or at the lowered pool, and the
- *   external water stands at the lowered pool.
+ * - drawdown (both methods, docs/engine.md §7): the pool side runs from the reservoir's edge
+ *   of the section to the crest (the highest ground point). There the water level becomes
+ *   min(pre-drawdown line, max(ground, lowered pool)): pore pressures keep their steady
+ *   values but are held at the ground or the lowered pool, and the only free water left is
+ *   the lowered pool itself, over ground below it. Beyond the crest the line as drawn, and
+ *   any tailwater on that side, stand unchanged; a pool drawn over the crest itself covers
+ *   both sides, and all of it is lowered.
  */
 import type { GroundLine } from "./ground";
 import { interpolatePolyline } from "./geometry";
@@ -24,17 +27,17 @@ export interface WaterModel {
   surface: ((x: number, yg: number) => number) | null;
 }
 
-/** Which side the reservoir is on, and where its far shore is, for a drawdown. */
+/** Which side the reservoir is on, and where its side of the section ends, for a drawdown. */
 export interface PoolSide {
   side: "left" | "right";
-  /** The pool covers x < shore (left) or x > shore (right). */
-  shore: number;
+  /** The pool side covers x < crest (left) or x > crest (right): the crest is the highest ground point. */
+  crest: number;
 }
 
 /**
  * Finds the pool for a drawdown: the section side where the pre-drawdown line stands
- * above the ground (the nearer to `from` if both), and the first x inward where the
- * ground reaches the pre-drawdown pool level. Null when neither side is ponded.
+ * above the ground (the nearer to `from` if both), and the crest, the first point of the
+ * highest ground met walking in from that side. Null when neither side is ponded.
  */
 export function findPoolSide(
   phreatic: ReadonlyArray<readonly [number, number]>,
@@ -56,22 +59,16 @@ export function findPoolSide(
         ? "left"
         : "right";
   } else side = pondL ? "left" : "right";
-  if (side === "left") {
-    for (let i = 0; i + 1 < n; i++) {
-      const y1 = ground.y[i] - from;
-      const y2 = ground.y[i + 1] - from;
-      if (y1 >= 0) return { side, shore: ground.x[i] };
-      if (y2 >= 0) return { side, shore: ground.x[i] + ((ground.x[i + 1] - ground.x[i]) * -y1) / (y2 - y1) };
+  let top = -Infinity;
+  let crest = side === "left" ? xr : xl;
+  for (let j = 0; j < n; j++) {
+    const i = side === "left" ? j : n - 1 - j;
+    if (ground.y[i] > top) {
+      top = ground.y[i];
+      crest = ground.x[i];
     }
-    return { side, shore: xr };
   }
-  for (let i = n - 1; i > 0; i--) {
-    const y1 = ground.y[i] - from;
-    const y2 = ground.y[i - 1] - from;
-    if (y1 >= 0) return { side, shore: ground.x[i] };
-    if (y2 >= 0) return { side, shore: ground.x[i] + ((ground.x[i - 1] - ground.x[i]) * -y1) / (y2 - y1) };
-  }
-  return { side, shore: xl };
+  return { side, crest };
 }
 
 /** Builds the water model for a case; the section must already be valid. */
@@ -96,21 +93,32 @@ export function buildWaterModel(
   const pool = findPoolSide(line, ground, drawdown.from);
   const yL = drawdown.to;
   if (!pool) return { kind: WATER_LINE, gammaW, ru: 0, breaks, surface: (x) => yp(x) };
-  breaks.push(pool.shore);
+  breaks.push(pool.crest);
   pushCrossings(breaks, ground, () => yL);
   for (let i = 0; i + 1 < line.length; i++) {
     const [x1, y1] = line[i];
     const [x2, y2] = line[i + 1];
     if ((y1 - yL) * (y2 - yL) < 0) breaks.push(x1 + ((x2 - x1) * (yL - y1)) / (y2 - y1));
   }
-  const inPool = pool.side === "left" ? (x: number) => x < pool.shore : (x: number) => x > pool.shore;
+  const crest = pool.crest;
+  // A pool standing over the crest itself is the same water on both sides: all of it is lowered.
+  const overtopped = yp(crest) > groundTop(ground) + 1e-6;
+  const poolSide = overtopped ? () => true : pool.side === "left" ? (x: number) => x < crest : (x: number) => x > crest;
   return {
     kind: WATER_LINE,
     gammaW,
     ru: 0,
     breaks,
-    surface: (x, yg) => (inPool(x) ? Math.min(yp(x), Math.max(yg, yL)) : yp(x)),
+    // Ground below the lowered pool stands under it; elsewhere on the pool side no water is above the ground.
+    surface: (x, yg) => (poolSide(x) ? (yg < yL ? yL : Math.min(yp(x), yg)) : yp(x)),
   };
+}
+
+/** Highest ground elevation (m). */
+function groundTop(ground: GroundLine): number {
+  let top = -Infinity;
+  for (let i = 0; i < ground.y.length; i++) if (ground.y[i] > top) top = ground.y[i];
+  return top;
 }
 
 /** Adds the x where a level function crosses the ground (non-vertical ground segments). */

@@ -1,5 +1,5 @@
 /**
- * Buffers and results of a staged drawdown evaluation (ENGINE.md §7(b)), part of each
+ * Buffers and results of a staged drawdown evaluation (docs/engine.md §7(b)), part of each
  * evaluator's scratch so that staging a circle allocates nothing.
  */
 

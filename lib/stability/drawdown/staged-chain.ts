@@ -1,5 +1,5 @@
 /**
- * The stages of a staged rapid drawdown on one slip mass (ENGINE.md §7(b); Duncan, Wright &
+ * The stages of a staged rapid drawdown on one slip mass (docs/engine.md §7(b); Duncan, Wright &
  * Wong 1990; Duncan, Wright & Brandon 2014, ch. 9; USACE EM 1110-2-1902 (2003) App. G):
  * 1. effective-stress analysis at the pre-drawdown pool: σ'fc = N'/l, τfc = (c' + σ'fc·tan φ')/F1;
  * 2. low-permeability bases get the undrained strength τ2 (φ = 0, pore pressure not used),
@@ -73,8 +73,14 @@ export function stageMass(
   // Both stages share the strip table and the break set, so the slices are the same.
   if (S.n !== n1) return TOO_MANY_BREAKS;
   let D = 0;
-  for (let i = 0; i < n1; i++) D += S.dD[i];
+  let gross = 0;
+  for (let i = 0; i < n1; i++) {
+    const d = S.dD[i];
+    D += d;
+    gross += d < 0 ? -d : d;
+  }
   S.D = D;
+  S.gross = gross;
   if (!(D > 1e-12)) return OK;
   runChain(P, S, D, false, St.curO);
   if (wantB && !Number.isNaN(f1b)) runChain(P, S, D, true, St.curB);
@@ -96,7 +102,7 @@ function consolidationStresses(P: PreparedSection, S: Scratch, F: number, bishop
     if (bishop) {
       const cos = S.cosA[i];
       const ma = cos + S.sinA[i] * tp * inv;
-      Np = (S.V[i] - S.u[i] * S.b[i] - (c * S.b[i] * S.sinA[i] * inv) / cos) / ma;
+      Np = (S.V[i] - S.u[i] * S.bb[i] - (c * S.bb[i] * S.sinA[i] * inv) / cos) / ma;
       if (!(Np > 0)) Np = 0;
     } else Np = ordinaryNormal(S, i, eff);
     const s = Np / l;
@@ -160,8 +166,8 @@ function runChain(P: PreparedSection, S: Scratch, D: number, bishop: boolean, ou
     const sin = S.sinA[i];
     let sp: number;
     // Effective normal stress after drawdown from the stage-2 total normal force of the method.
-    if (bishop) sp = (S.V[i] - (St.tau2[i] * S.b[i] * sin) / (cos * f2)) / (cos * l) - u;
-    else if (eff) sp = ((S.V[i] - u * S.b[i]) * cos - S.Hs[i] * sin) / l;
+    if (bishop) sp = (S.V[i] - (St.tau2[i] * S.bb[i] * sin) / (cos * f2)) / (cos * l) - u;
+    else if (eff) sp = ((S.V[i] - u * S.bb[i]) * cos - S.Hs[i] * sin) / l;
     else sp = (S.V[i] * cos - S.Hn[i] * sin) / l - u;
     const td = M.c[mi] + (sp > 0 ? sp : 0) * M.tanPhi[mi];
     St.taud[i] = td;

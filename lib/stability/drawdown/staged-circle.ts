@@ -1,11 +1,11 @@
 /**
- * Factor of safety of one trial circle in a staged rapid drawdown (ENGINE.md §7(b)): every
+ * Factor of safety of one trial circle in a staged rapid drawdown (docs/engine.md §7(b)): every
  * slip mass is staged (staged-chain.ts) and each method keeps the lowest final-stage FS, which
  * is what the grid search minimises. Sets the same scratch fields as evaluateCircle, so the
  * search, the one-circle report and the warnings work unchanged; the stage factors of the
  * governing masses are left in S.stage.govO / govB. Allocation-free.
  */
-import { chooseDirection } from "../circle-direction";
+import { isDriven, massDirection } from "../circle-direction";
 import { findMasses } from "../intersect";
 import type { PreparedSection } from "../prepare";
 import type { Scratch } from "../scratch";
@@ -41,14 +41,7 @@ export function evaluateStagedCircle(
   if (!(r > 0)) return reject(S, BAD_RADIUS);
   const st = findMasses(P, S, xc, yc, r);
   if (st !== OK) return reject(S, st);
-  let dir = chooseDirection(P, S, xc, yc, r);
-  let result = runMasses(P, S, xc, yc, r, dir === 0 ? 1 : dir, wantBishop);
-  if (dir === 0 && result === NO_DRIVING) {
-    dir = -1;
-    result = runMasses(P, S, xc, yc, r, -1, wantBishop);
-  } else if (dir === 0) dir = 1;
-  S.dir = dir;
-  return result;
+  return runMasses(P, S, xc, yc, r, wantBishop);
 }
 
 /**
@@ -74,21 +67,15 @@ function reject(S: Scratch, st: number): number {
   return st;
 }
 
-/** Stages every mass in direction dir and keeps each method's lowest final-stage factor. */
-function runMasses(
-  P: PreparedSection,
-  S: Scratch,
-  xc: number,
-  yc: number,
-  r: number,
-  dir: number,
-  wantBishop: boolean,
-): number {
+/** Stages every mass in its own direction (both ways when level) and keeps each method's lowest final-stage factor. */
+function runMasses(P: PreparedSection, S: Scratch, xc: number, yc: number, r: number, wantBishop: boolean): number {
   const St = S.stage;
   let fo = Infinity;
   let fb = Infinity;
   let mo = -1;
   let mb = -1;
+  let dirO = 1;
+  let dirB = 1;
   let failB = OK;
   let minMa = NaN;
   let minMaX = NaN;
@@ -98,36 +85,45 @@ function runMasses(
   let iterations = 0;
   let driving = false;
   for (let m = 0; m < S.nMass; m++) {
-    const st = stageMass(P, S, xc, yc, r, S.massA[m], S.massB[m], dir, wantBishop);
-    if (st !== OK) return reject(S, st);
-    if (!(S.D > 1e-12)) continue;
-    driving = true;
-    const f0 = St.curO.final;
-    if (f0 < fo) {
-      fo = f0;
-      mo = m;
-      negO = S.negO;
-      copyFactors(St.curO, St.govO);
-    }
-    if (wantBishop) {
-      const f1 = St.curB.final;
-      if (Number.isNaN(f1)) failB = S.reasonB !== OK ? S.reasonB : NOT_CONVERGED;
-      else if (f1 < fb) {
-        fb = f1;
-        mb = m;
-        minMa = S.minMa;
-        minMaX = S.minMaX;
-        minMaAlpha = S.minMaAlpha;
-        negB = S.negB;
-        iterations = S.iterations;
-        copyFactors(St.curB, St.govB);
+    const d0 = massDirection(P, S, xc, yc, r, m);
+    const tries = d0 === 0 ? 2 : 1;
+    for (let t = 0; t < tries; t++) {
+      const dir = d0 !== 0 ? d0 : t === 0 ? 1 : -1;
+      const st = stageMass(P, S, xc, yc, r, S.massA[m], S.massB[m], dir, wantBishop);
+      if (st !== OK) return reject(S, st);
+      // Round-off only: the staged strengths have no single resisting term to compare with.
+      if (!isDriven(S.D, S.gross, 0)) continue;
+      driving = true;
+      const f0 = St.curO.final;
+      if (f0 < fo) {
+        fo = f0;
+        mo = m;
+        dirO = dir;
+        negO = S.negO;
+        copyFactors(St.curO, St.govO);
+      }
+      if (wantBishop) {
+        const f1 = St.curB.final;
+        if (Number.isNaN(f1)) failB = S.reasonB !== OK ? S.reasonB : NOT_CONVERGED;
+        else if (f1 < fb) {
+          fb = f1;
+          mb = m;
+          dirB = dir;
+          minMa = S.minMa;
+          minMaX = S.minMaX;
+          minMaAlpha = S.minMaAlpha;
+          negB = S.negB;
+          iterations = S.iterations;
+          copyFactors(St.curB, St.govB);
+        }
       }
     }
   }
-  S.dir = dir;
   if (!driving) return reject(S, NO_DRIVING);
   S.fsO = fo;
   S.govO = mo;
+  S.dirO = dirO;
+  S.dir = dirO;
   S.negO = negO;
   S.reasonO = OK;
   if (wantBishop) {
@@ -138,6 +134,8 @@ function runMasses(
     } else {
       S.fsB = fb;
       S.govB = mb;
+      S.dirB = dirB;
+      S.dir = dirB;
       S.reasonB = OK;
       S.minMa = minMa;
       S.minMaX = minMaX;

@@ -1,5 +1,5 @@
 /**
- * Per-material data of a staged rapid drawdown (ENGINE.md §7(b)) as typed arrays indexed by
+ * Per-material data of a staged rapid drawdown (docs/engine.md §7(b)) as typed arrays indexed by
  * material number, built once per run: how each material drains, and its Kc = 1 envelope
  * (d, tan ψ) or R envelope (cR, tan φR) for the second-stage strength.
  */

@@ -1,5 +1,5 @@
 /**
- * Report pieces of a staged rapid drawdown (ENGINE.md §7(b)): the factor of safety of each
+ * Report pieces of a staged rapid drawdown (docs/engine.md §7(b)): the factor of safety of each
  * stage, each slice's stage-1 stresses and governing strength, and the warnings. Plain JSON
  * (no NaN or Infinity). Used by the one-circle report and the grid search's critical circles.
  */

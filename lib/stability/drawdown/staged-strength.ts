@@ -1,6 +1,6 @@
 /**
  * Second-stage (undrained) strength of a slice base in a staged rapid drawdown
- * (ENGINE.md §7(b)). Pure scalar functions: no allocation, safe in the slice loop.
+ * (docs/engine.md §7(b)). Pure scalar functions: no allocation, safe in the slice loop.
  *
  * Duncan, Wright & Wong (1990); Duncan, Wright & Brandon (2014), ch. 9:
  * - Kc = σ'1c/σ'3c from the stage-1 stresses on the slip surface (σ'fc, τfc);
@@ -18,7 +18,7 @@
 /**
  * Intercept d (stress units) of the Kc = 1 envelope τff = d + σ'fc·tan ψ from the R envelope
  * (cR, φR), for a soil with effective friction angle φ'. Angles in radians.
- * d = cR·cos φR·cos φ' / (1 − sin φR) (ENGINE.md §7(b), derived).
+ * d = cR·cos φR·cos φ' / (1 − sin φR) (docs/engine.md §7(b), derived).
  */
 export function kc1Intercept(cR: number, phiR: number, phi: number): number {
   return (cR * Math.cos(phiR) * Math.cos(phi)) / (1 - Math.sin(phiR));

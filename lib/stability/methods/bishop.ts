@@ -1,11 +1,12 @@
 /**
- * Bishop's simplified method (Bishop 1955), ENGINE.md §4: vertical equilibrium of each
+ * Bishop's simplified method (Bishop 1955), docs/engine.md §4: vertical equilibrium of each
  * slice with the interslice shear neglected, moment equilibrium about the centre.
  *   mα = cos α + sin α·tan φ'/F,  Si = [c'·b + (V − u·b)·tan φ'] / mα,  F = ΣSi / D.
  * Where the base normal N' = (V − u·b − c'·b·tan α/F)/mα would be negative, Si = c'·l.
  * Iterated from the ordinary-method value until |ΔF| ≤ 1e-6·F (at most 60 passes), then a
  * bisection on [0.05, 50] as a fallback. mα ≤ 0 on any slice at the solution makes the
  * result invalid; min mα is reported for the warning below 0.2 (Whitman & Bailey 1967).
+ * A mass with no strength at all (c' = 0, φ' = 0 on every slice) has FS = 0 exactly.
  */
 import type { Scratch } from "../scratch";
 import * as status from "../status";
@@ -31,7 +32,7 @@ function resisting(S: Scratch, F: number): number {
       sum += c * S.len[i];
       continue;
     }
-    const b = S.b[i];
+    const b = S.bb[i];
     const cos = S.cosA[i];
     const t = S.sinA[i] * tp;
     const p = S.V[i] - S.u[i] * b;
@@ -55,6 +56,7 @@ function resisting(S: Scratch, F: number): number {
  * Sets S.fsB (NaN when invalid), S.reasonB, S.minMa (+ its x and α in degrees), S.negB and S.iterations.
  */
 export function bishopFactor(S: Scratch, D: number, F0: number): number {
+  if (noStrength(S)) return zeroStrength(S);
   let F = F0 > 0 && Number.isFinite(F0) ? F0 : 1;
   let done = false;
   let it = 0;
@@ -87,6 +89,32 @@ export function bishopFactor(S: Scratch, D: number, F0: number): number {
   return finish(S, F);
 }
 
+/** True when no slice has any strength (c' = 0 and tan φ' = 0 everywhere): then FS = 0 exactly. */
+function noStrength(S: Scratch): boolean {
+  for (let i = 0; i < S.n; i++) if (S.c[i] !== 0 || S.tanPhi[i] !== 0) return false;
+  return true;
+}
+
+/** The result for a mass without strength: FS 0, mα = cos α (φ' = 0), every normal force as computed. */
+function zeroStrength(S: Scratch): number {
+  let minMa = Infinity;
+  let at = 0;
+  for (let i = 0; i < S.n; i++) {
+    if (S.cosA[i] < minMa) {
+      minMa = S.cosA[i];
+      at = i;
+    }
+  }
+  S.minMa = minMa;
+  S.minMaX = (S.xL[at] + S.xR[at]) / 2;
+  S.minMaAlpha = (Math.atan2(S.sinA[at], S.cosA[at]) * 180) / Math.PI;
+  S.negB = 0;
+  S.iterations = 0;
+  S.fsB = 0;
+  S.reasonB = OK;
+  return 0;
+}
+
 /** Records mα and negative-normal counts at the solution F and checks mα > 0. */
 function finish(S: Scratch, F: number): number {
   let minMa = Infinity;
@@ -99,7 +127,7 @@ function finish(S: Scratch, F: number): number {
       minMa = ma;
       at = i;
     }
-    if (tp !== 0 && (S.V[i] - S.u[i] * S.b[i]) * S.cosA[i] - (S.c[i] * S.b[i] * S.sinA[i]) / F < 0) neg++;
+    if (tp !== 0 && (S.V[i] - S.u[i] * S.bb[i]) * S.cosA[i] - (S.c[i] * S.bb[i] * S.sinA[i]) / F < 0) neg++;
   }
   S.minMa = minMa;
   S.minMaX = (S.xL[at] + S.xR[at]) / 2;

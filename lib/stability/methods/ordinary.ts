@@ -1,11 +1,11 @@
 /**
  * The ordinary method of slices (Fellenius 1936), moment equilibrium about the centre,
- * ENGINE.md §4: F = Σ(c'·l + N'·tan φ') / D with N' not below zero.
+ * docs/engine.md §4: F = Σ(c'·l + N'·tan φ') / D with N' not below zero.
  * - classical form (default): N' = V·cos α − H·sin α − u·l, H every horizontal force on
  *   the slice (ponded-water thrust, seismic) positive in the sliding direction;
  * - effective-weight form: N' = (V − u·b)·cos α − kh·W·sin α (water thrust enters D only).
  * The effective-weight form over-predicts on flat slopes with high pore pressure
- * (ENGINE.md §4); Bishop's simplified method governs.
+ * (docs/engine.md §4); Bishop's simplified method governs.
  */
 import type { Scratch } from "../scratch";
 
@@ -25,7 +25,7 @@ export function ordinaryFactor(S: Scratch, D: number, effectiveWeight: boolean):
       continue;
     }
     const Np = effectiveWeight
-      ? (S.V[i] - S.u[i] * S.b[i]) * S.cosA[i] - S.Hs[i] * S.sinA[i]
+      ? (S.V[i] - S.u[i] * S.bb[i]) * S.cosA[i] - S.Hs[i] * S.sinA[i]
       : S.V[i] * S.cosA[i] - S.Hn[i] * S.sinA[i] - S.u[i] * l;
     if (Np > 0) res += S.c[i] * l + Np * tp;
     else {
@@ -40,7 +40,7 @@ export function ordinaryFactor(S: Scratch, D: number, effectiveWeight: boolean):
 /** Effective base normal force N' (kN/m) of slice i by the chosen form, not below zero. */
 export function ordinaryNormal(S: Scratch, i: number, effectiveWeight: boolean): number {
   const Np = effectiveWeight
-    ? (S.V[i] - S.u[i] * S.b[i]) * S.cosA[i] - S.Hs[i] * S.sinA[i]
+    ? (S.V[i] - S.u[i] * S.bb[i]) * S.cosA[i] - S.Hs[i] * S.sinA[i]
     : S.V[i] * S.cosA[i] - S.Hn[i] * S.sinA[i] - S.u[i] * S.len[i];
   return Np > 0 ? Np : 0;
 }

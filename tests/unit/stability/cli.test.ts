@@ -1,9 +1,11 @@
 /**
- * The command-line tool (ENGINE-IO.md): JSON only on stdout, exit 0 with "ok": true, exit 2
- * with the error list on bad input, `-` reads stdin, `--circle xc,yc,r` for one circle.
- * Reference values: ACADS (1989) problem 1(a) (REFERENCES.md, memory, recomputed).
+ * The command-line tool (docs/engine-io.md): JSON only on stdout, exit 0 with "ok": true, exit 2
+ * with the error list on bad input, `-` reads stdin, `--circle xc,yc,r` for one circle, and the
+ * output written whole when piped. Reference values: ACADS (1989) problem 1(a)
+ * (docs/references.md, memory, recomputed); the engine's worked examples (docs/engine.md §3, §7;
+ * derived values, see engine-rules.test.ts).
  */
-import { spawnSync } from "node:child_process";
+import { execFileSync, spawnSync } from "node:child_process";
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, test } from "vitest";
@@ -67,5 +69,40 @@ describe("scripts/analyze.ts", () => {
     const r = run(["-"], "{ not json");
     expect(r.status).toBe(2);
     expect(r.json.errors[0].code).toBe("invalid-json");
+  }, 60_000);
+
+  test.each([
+    ["trench-two-pieces.json", "50,20,18", 0.628, 1e-3],
+    ["cut-steep-arc-end.json", "22,10.02,8", 1.9692, 5e-3],
+    ["drawdown-line-above-face.json", "30,22,20", 1.232, 1e-3],
+  ])(
+    "%s --circle %s gives Bishop %s",
+    (file, spec, bishop, rel) => {
+      const r = run([path.join(FIXTURES, file), "--circle", spec]);
+      expect(r.status).toBe(0);
+      expect(Math.abs(r.json.fs.bishop / bishop - 1)).toBeLessThan(rel);
+    },
+    60_000,
+  );
+
+  test("a grid search over the trench prints about 0.432", () => {
+    const r = run([path.join(FIXTURES, "trench-two-pieces.json")]);
+    expect(r.status).toBe(0);
+    expect(Math.abs(r.json.results.bishop.fs / 0.432 - 1)).toBeLessThan(2e-3);
+  }, 60_000);
+
+  test("a 400-slice table (well over 64 KiB) comes through a pipe whole, exit status 0", () => {
+    const doc = JSON.parse(readFileSync(path.join(FIXTURES, "cut-steep-arc-end.json"), "utf8"));
+    doc.analysis = { slices: 400 };
+    // Through a shell pipe, as a user would: the exit status is the tool's (pipefail).
+    const out = execFileSync(
+      "bash",
+      ["-o", "pipefail", "-c", "npx tsx scripts/analyze.ts - --circle 22,10.02,8 | cat"],
+      { cwd: ROOT, input: JSON.stringify(doc), encoding: "utf8", maxBuffer: 64 * 1024 * 1024, timeout: 60_000 },
+    );
+    expect(out.length).toBeGreaterThan(64 * 1024);
+    const json = JSON.parse(out);
+    expect(json.ok).toBe(true);
+    expect(json.slices.length).toBeGreaterThanOrEqual(400);
   }, 60_000);
 });

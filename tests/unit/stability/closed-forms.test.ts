@@ -1,5 +1,5 @@
 /**
- * The engine against closed forms (REFERENCES.md "Closed forms"; ENGINE.md §10.1–10.2):
+ * The engine against closed forms (docs/references.md "Closed forms"; docs/engine.md §10.1–10.2):
  * the infinite slope, its limit for shallow circles on a long slope, the φ = 0 circle
  * with a strip load, and Craig's φu = 0 trial circle.
  */
@@ -12,9 +12,9 @@ import { circle, clone, expectRelative, loadFixture, search } from "./helpers";
 
 const GW = 9.81;
 
-describe("infiniteSlopeFactor(input) matches the derived checks of REFERENCES.md", () => {
+describe("infiniteSlopeFactor(input) matches the derived checks of docs/references.md", () => {
   // Source: infinite-slope closed form, e.g. Duncan, Wright & Brandon (2014) ch. 6; the numbers
-  // are REFERENCES.md's derived checks (γw = 9.81), given to 4–5 digits.
+  // are docs/references.md's derived checks (γw = 9.81), given to 4–5 digits.
   test.each([
     [{ beta: 20, z: 5, gamma: 20, phi: 30 }, 1.586],
     [{ beta: 20, z: 5, gamma: 20, phi: 30, m: 1 }, 0.8082],
@@ -32,7 +32,7 @@ describe("infiniteSlopeFactor(input) matches the derived checks of REFERENCES.md
 
   test("c' = 0 reduces to tan φ'/tan β (dry) and Bishop & Morgenstern's m − n·ru", () => {
     // Source: Bishop & Morgenstern (1960): with c' = 0, m = tan φ'·cot β, n = tan φ'·(cot β + tan β);
-    // cot β = 2, φ' = 30° → m 1.155, n 1.443 (REFERENCES.md).
+    // cot β = 2, φ' = 30° → m 1.155, n 1.443 (docs/references.md).
     const beta = (Math.atan(0.5) * 180) / Math.PI;
     const m = infiniteSlopeFactor({ beta, z: 4, gamma: 19, phi: 30 });
     expectRelative(m, 1.155, 5e-4);
@@ -41,8 +41,8 @@ describe("infiniteSlopeFactor(input) matches the derived checks of REFERENCES.md
   });
 });
 
-describe("ordinaryFactor / bishopFactor on synthetic slices at α = β (ENGINE.md §10.1 table)", () => {
-  // Derived in ENGINE.md §10.1 from the infinite-slope equations: c' = 0, φ' = 30°, tan β = 0.5,
+describe("ordinaryFactor / bishopFactor on synthetic slices at α = β (docs/engine.md §10.1 table)", () => {
+  // Derived in docs/engine.md §10.1 from the infinite-slope equations: c' = 0, φ' = 30°, tan β = 0.5,
   // γ = γsat = 20. Slices with their base parallel to the surface are the infinite slope exactly.
   const beta = Math.atan(0.5);
   const tp = Math.tan(Math.PI / 6);
@@ -52,6 +52,7 @@ describe("ordinaryFactor / bishopFactor on synthetic slices at α = β (ENGINE.m
     const z = 3;
     for (let i = 0; i < n; i++) {
       S.b[i] = 1;
+      S.bb[i] = 1;
       S.sinA[i] = Math.sin(beta);
       S.cosA[i] = Math.cos(beta);
       S.len[i] = 1 / Math.cos(beta);
@@ -85,7 +86,7 @@ describe("ordinaryFactor / bishopFactor on synthetic slices at α = β (ENGINE.m
 });
 
 describe("runGridSearch(long slope) approaches the infinite slope from above", () => {
-  // ENGINE.md §10.1: on a long c' = 0 slope with minDepth = 0 the search must come within +1.5 %
+  // docs/engine.md §10.1: on a long c' = 0 slope with minDepth = 0 the search must come within +1.5 %
   // of the infinite-slope value (tan β = 0.5, φ' = 30°, γ = γsat = 20).
   const phreaticAtSurface: [number, number][] = [
     [0, 50],
@@ -114,7 +115,7 @@ describe("runGridSearch(long slope) approaches the infinite slope from above", (
 });
 
 describe("analyzeCircle(φ = 0, strip load) against the closed form 16π·su/(9q)", () => {
-  // Derived in REFERENCES.md / ENGINE.md §10.2: level ground, su = 20 kPa, centre R/2 above the
+  // Derived in docs/references.md / docs/engine.md §10.2: level ground, su = 20 kPa, centre R/2 above the
   // ground, q = 100 kPa on the upslope half-chord: F = su·R²·θ/M = 16π·su/(9q) = 1.1170.
   const exact = (16 * Math.PI * 20) / (9 * 100);
   test("50 slices: within 0.1 %, Bishop = ordinary", () => {

@@ -3,7 +3,7 @@
  * with the textbook formulas (Fellenius 1936; Bishop 1955) and compared with the engine.
  * Section: homogeneous slope, face from (30, 25) to (50, 35), c' = 3 kPa, φ' = 19.6°,
  * γ = 20 kN/m³. The circle cuts only the face, so the engine's four slices are equal and the
- * soil column of each is a trapezoid under the straight face.
+ * soil column of each lies under the straight face.
  */
 import { describe, expect, test } from "vitest";
 import { circle, clone, expectRelative, loadFixture } from "./helpers";
@@ -17,23 +17,33 @@ const gamma = 20;
 const c = 3;
 const tp = Math.tan((19.6 * Math.PI) / 180);
 
-/** Hand calculation: slices of width 3 m, midpoint heights, sliding toward −x (the face falls to the left). */
+/** ∫√(R² − d²) dd, the area primitive of the circle. */
+const G = (d: number) => 0.5 * (d * Math.sqrt(R * R - d * d) + R * R * Math.asin(d / R));
+
+/**
+ * Hand calculation (docs/engine.md §3): slices of width 3 m, the exact area between the face
+ * and the arc, base length R·Δθ, base angle at the midpoint, sliding toward −x (the face falls
+ * to the left). ru applies to the slice's overburden: u·b = ru·W.
+ */
 function hand(ru: number) {
   const rows = [35.5, 38.5, 41.5, 44.5].map((xm) => {
     const b = 3;
+    const [xl, xr] = [xm - b / 2, xm + b / 2];
     const yg = 25 + 0.5 * (xm - 30);
     const ym = yc - Math.sqrt(R * R - (xm - xc) ** 2);
-    const W = gamma * b * (yg - ym);
+    const arcIntegral = yc * b - (G(xr - xc) - G(xl - xc));
+    const W = gamma * (b * yg - arcIntegral);
     const sinA = (xm - xc) / R; // mirrored: positive where the base falls toward −x
     const cosA = (yc - ym) / R;
-    const u = ru * gamma * (yg - ym);
-    return { b, W, sinA, cosA, l: b / cosA, u };
+    const l = R * (Math.asin((xr - xc) / R) - Math.asin((xl - xc) / R));
+    const u = (ru * W) / b;
+    return { b, W, sinA, cosA, l, bb: l * cosA, u };
   });
   const D = rows.reduce((s, r) => s + r.W * r.sinA, 0);
   const ordinary = rows.reduce((s, r) => s + c * r.l + Math.max(0, r.W * r.cosA - r.u * r.l) * tp, 0) / D;
   let F = ordinary;
   for (let i = 0; i < 200; i++) {
-    F = rows.reduce((s, r) => s + (c * r.b + (r.W - r.u * r.b) * tp) / (r.cosA + (r.sinA * tp) / F), 0) / D;
+    F = rows.reduce((s, r) => s + (c * r.bb + (r.W - r.u * r.bb) * tp) / (r.cosA + (r.sinA * tp) / F), 0) / D;
   }
   return { ordinary, bishop: F, rows };
 }

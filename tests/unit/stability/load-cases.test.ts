@@ -1,5 +1,5 @@
 /**
- * Load cases (ENGINE.md §7(a), §8): rapid drawdown by the effective-stress method with B̄ = 1,
+ * Load cases (docs/engine.md §7(a), §8): rapid drawdown by the effective-stress method with B̄ = 1,
  * and end of construction with undrained strengths.
  */
 import { describe, expect, test } from "vitest";
@@ -26,8 +26,8 @@ function drawdown(from: number, to: number): SectionDocument {
   return doc;
 }
 
-describe("rapid drawdown, effective-stress method (ENGINE.md §7(a))", () => {
-  test("a drawdown of zero depth gives the steady-seepage FS (REFERENCES.md: check by property)", () => {
+describe("rapid drawdown, effective-stress method (docs/engine.md §7(a))", () => {
+  test("a drawdown of zero depth gives the steady-seepage FS (docs/references.md: check by property)", () => {
     const steady = search(upstream());
     const dd = search(drawdown(20, 20));
     expectRelative(dd.results.bishop!.fs, steady.results.bishop!.fs, 1e-9);
@@ -53,7 +53,11 @@ describe("rapid drawdown, effective-stress method (ENGINE.md §7(a))", () => {
       const yg = xm <= 20 ? 10 : 10 + (xm - 20) / 2.5; // upstream face of the fixture, 2.5H:1V
       if (xm > 44) continue; // inside the core the line is the drawn one
       const expectedWater = Math.min(20, Math.max(yg, yL));
-      expect(s.porePressure).toBeCloseTo(GW * Math.max(0, expectedWater - s.baseY), 6);
+      // The base's mean pore pressure over its width: the water level less the mean arc height
+      // (docs/engine.md §3), with G the primitive of √(R² − d²) for the circle (30, 30, 19).
+      const G = (d: number) => 0.5 * (d * Math.sqrt(361 - d * d) + 361 * Math.asin(d / 19));
+      const meanArc = 30 - (G(s.xRight - 30) - G(s.xLeft - 30)) / (s.xRight - s.xLeft);
+      expect(s.porePressure).toBeCloseTo(GW * Math.max(0, expectedWater - meanArc), 6);
       if (yg > yL) heldAtGround++;
       else {
         underPool++;

@@ -2,7 +2,7 @@
  * Property tests (fast-check) of facts of limit equilibrium that hold for any section:
  * strength scaling, invariance under translation and mirroring, Bishop = ordinary for φ = 0,
  * convergence with the number of slices, and no NaN or Infinity from any valid input.
- * Sources: ENGINE.md §10.3–10.7 (derived from the method equations).
+ * Sources: docs/engine.md §10.3–10.7 (derived from the method equations).
  */
 import fc from "fast-check";
 import { describe, expect, test } from "vitest";
@@ -197,6 +197,45 @@ function allFinite(v: unknown): boolean {
   if (v && typeof v === "object") return Object.values(v).every(allFinite);
   return true;
 }
+
+describe("the number of vertices does not matter (docs/engine.md §3)", () => {
+  /** The section with k collinear points inserted on randomly chosen edges of every region. */
+  function thinned(doc: SectionDocument, picks: { edge: number; t: number }[]): SectionDocument {
+    const d = clone(doc);
+    d.regions = d.regions.map((reg, ri) => {
+      const pts = [...reg.points];
+      for (const { edge, t } of picks) {
+        const i = (edge + ri) % pts.length;
+        const [x1, y1] = pts[i];
+        const [x2, y2] = pts[(i + 1) % pts.length];
+        // Keep new points at least 5 cm from the ends: closer ones would be snapped (1 mm) anyway.
+        const len = Math.hypot(x2 - x1, y2 - y1);
+        if (len < 0.2) continue;
+        const s = 0.05 / len + t * (1 - 0.1 / len);
+        pts.splice(i + 1, 0, [x1 + s * (x2 - x1), y1 + s * (y2 - y1)]);
+      }
+      return { ...reg, points: pts };
+    });
+    return d;
+  }
+
+  test("adding collinear vertices changes FS by less than 0.1 %", () => {
+    const picks = fc.array(fc.record({ edge: fc.nat({ max: 50 }), t: fc.double({ min: 0, max: 1, noNaN: true }) }), {
+      minLength: 1,
+      maxLength: 12,
+    });
+    fc.assert(
+      fc.property(embankmentCircle, picks, ({ xc, yc, depth }, p) => {
+        const a = circle(embankment, xc, yc, yc - 10 + depth);
+        const b = circle(thinned(embankment, p), xc, yc, yc - 10 + depth);
+        expect(b.fs.bishop === null).toBe(a.fs.bishop === null);
+        if (a.fs.bishop !== null) expectRelative(b.fs.bishop, a.fs.bishop, 1e-3);
+        if (a.fs.fellenius !== null) expectRelative(b.fs.fellenius, a.fs.fellenius, 1e-3);
+      }),
+      { numRuns: 60 },
+    );
+  });
+});
 
 describe("robustness", () => {
   test("random valid sections never give NaN or Infinity (search and single circles)", () => {

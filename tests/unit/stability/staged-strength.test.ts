@@ -1,8 +1,8 @@
 /**
- * The second-stage strength of a staged rapid drawdown (ENGINE.md §7(b)) as pure functions.
+ * The second-stage strength of a staged rapid drawdown (docs/engine.md §7(b)) as pure functions.
  * Sources: Duncan, Wright & Wong (1990) and Duncan, Wright & Brandon (2014), ch. 9, for the
  * three-stage interpolation; USACE EM 1110-2-1902 (2003), Appendix G, for the two-stage
- * composite envelope. Numbers: REFERENCES.md "Rapid drawdown", derived (the textbook's own
+ * composite envelope. Numbers: docs/references.md "Rapid drawdown", derived (the textbook's own
  * table was not read).
  */
 import fc from "fast-check";
@@ -19,7 +19,7 @@ import {
 
 const RAD = Math.PI / 180;
 
-describe("threeStageDetail(): REFERENCES.md derived infinite-slope example (Duncan, Wright & Wong 1990; Duncan, Wright & Brandon 2014 ch. 9)", () => {
+describe("threeStageDetail(): docs/references.md derived infinite-slope example (Duncan, Wright & Wong 1990; Duncan, Wright & Brandon 2014 ch. 9)", () => {
   // 3H:1V slope under 100 ft of water, γ = 125 pcf, γw = 62.4 pcf, c' = 0, φ' = 40°,
   // Kc = 1 envelope d = 2000 psf, ψ = 20°. Stage 1 on the submerged infinite slope:
   // σ'fc = γ'·z·cos²β and τfc = σ'fc·tan β (FS1 = tan φ'/tan β). Units: psf, ft.
@@ -63,7 +63,7 @@ describe("threeStageDetail(): REFERENCES.md derived infinite-slope example (Dunc
   });
 });
 
-describe("threeStageStrength(): properties of the interpolation (ENGINE.md §7(b))", () => {
+describe("threeStageStrength(): properties of the interpolation (docs/engine.md §7(b))", () => {
   // Stresses in kPa rounded to 1e-6 kPa: subnormal doubles are no soil state.
   const kpa = (max: number) => fc.double({ min: 0, max, noNaN: true }).map((v) => Math.round(v * 1e6) / 1e6);
   const state = fc.record({
@@ -75,7 +75,7 @@ describe("threeStageStrength(): properties of the interpolation (ENGINE.md §7(b
     phiR: fc.double({ min: 0, max: 35, noNaN: true }),
   });
 
-  test("with d, ψ = c', φ' the strength τ2 equals τKf (ENGINE.md §7 validation)", () => {
+  test("with d, ψ = c', φ' the strength τ2 equals τKf (docs/engine.md §7 validation)", () => {
     fc.assert(
       fc.property(state, ({ sig, mob, c, phi }) => {
         const p = phi * RAD;

@@ -1,6 +1,6 @@
 /**
- * validateSection(doc) reports every problem with where it is (ENGINE.md §1, ENGINE-IO.md
- * "Errors"). The limits checked are ENGINE.md §1's bounds: φ' in [0°, 60°), γ required.
+ * validateSection(doc) reports every problem with where it is (docs/engine.md §1, docs/engine-io.md
+ * "Errors"). The limits checked are docs/engine.md §1's bounds: φ' in [0°, 60°), γ required.
  */
 import { describe, expect, test } from "vitest";
 import { validateSection, type Issue } from "@/lib/stability";
