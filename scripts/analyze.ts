@@ -6,12 +6,15 @@
  * Options: --map adds the minimum-FS map per method to a search's output.
  * A drawdown with analysis.drawdown.method "staged" (materials with cR, phiR or freeDraining)
  * reports each stage's FS under `stages`; the FS shown is the final stage's.
+ * A document with `vary` on its materials and analysis.probabilistic (docs/probabilistic.md) adds
+ * `probabilistic` per method and `probabilisticRun` to the search's output.
  * Standard output carries only JSON. Exit 0 with "ok": true; exit 2 with "ok": false and
  * the error list on bad input or bad arguments; exit 1 on an internal failure.
  */
 import { readFileSync } from "node:fs";
 import { analyzeCircle } from "../lib/stability/analyze-circle";
 import { runGridSearch } from "../lib/stability/grid-search";
+import { hasProbabilisticSettings, runProbabilistic } from "../lib/stability/probabilistic";
 
 interface CliError {
   code: string;
@@ -103,7 +106,7 @@ function main(): void {
     finish(r, r.ok ? 0 : 2);
     return;
   }
-  const r = runGridSearch(doc);
+  const r = hasProbabilisticSettings(doc) ? runProbabilistic(doc) : runGridSearch(doc);
   if (!r.ok) {
     finish(r, 2);
     return;

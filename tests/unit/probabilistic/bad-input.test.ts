@@ -105,7 +105,7 @@ describe("runProbabilistic rejects", () => {
 
   test("the command line exits 2 with the error list", () => {
     const d = edit((x) => (x.materials[0].vary = { phi: { dist: "normal", sd: 10 } }));
-    const out = spawnSync("npx", ["tsx", "scripts/probabilistic.ts", "-"], {
+    const out = spawnSync("npx", ["tsx", "scripts/analyze.ts", "-"], {
       cwd: path.resolve(__dirname, "../../.."),
       input: JSON.stringify(d),
       encoding: "utf8",

@@ -73,8 +73,8 @@ describe("FS linear in c′ on a fixed circle (ordinary method, dry)", () => {
     expect(Math.sqrt(err["latin-hypercube"] / 20)).toBeLessThan(0.5 * Math.sqrt(err["monte-carlo"] / 20));
   });
 
-  test("from the command line: scripts/probabilistic.ts reports the same pf within its sampling error", () => {
-    const out = spawnSync("npx", ["tsx", "scripts/probabilistic.ts", path.join(FIXTURE_DIR, "linear-dry-slope.json")], {
+  test("from the command line: scripts/analyze.ts reports the same pf within its sampling error", () => {
+    const out = spawnSync("npx", ["tsx", "scripts/analyze.ts", path.join(FIXTURE_DIR, "linear-dry-slope.json")], {
       cwd: path.resolve(__dirname, "../../.."),
       encoding: "utf8",
       timeout: 60_000,
