@@ -3,12 +3,13 @@ import { z } from "zod";
 /**
  * Sizes a real section never reaches. An embankment-dam section is drawn with tens of regions of tens of
  * points each, a handful of materials and a phreatic line of a few dozen points (common practice, from
- * memory); the limits leave a wide margin above that and keep one save's checking well under a second.
+ * memory), though a surveyed ground can carry thousands of points (a 200 m survey at 5 cm is 4,000); the limits
+ * leave room for that and keep one save's checking well under a second (near-linear validation).
  */
 export const SECTION_LIMITS = {
   regions: 200,
-  pointsPerRegion: 1000,
-  pointsInAllRegions: 5000,
+  pointsPerRegion: 5000,
+  pointsInAllRegions: 10000,
   materials: 100,
   phreaticPoints: 1000,
   surcharges: 50,

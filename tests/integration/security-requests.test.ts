@@ -74,7 +74,7 @@ describe("request bodies are bounded (issue 12, items 3 and 4)", () => {
     expect(res.status).toBe(400);
     const body = await res.json();
     expect(body.error.code).toBe("section_too_large");
-    expect(body.error.fields["document.regions.0.points"][0]).toMatch(/At most 1000 points in one region/);
+    expect(body.error.fields["document.regions.0.points"][0]).toMatch(/At most 5000 points in one region/);
     expect(await count("sections")).toBe(before);
   });
 });

@@ -20,7 +20,7 @@ describe("sectionLimitErrors(document)", () => {
       material: "m",
       points: square(SECTION_LIMITS.pointsPerRegion),
     }));
-    expect(sectionLimitErrors({ version: 1, regions })?.["document.regions"]?.[0]).toMatch(/10000 points together/);
+    expect(sectionLimitErrors({ version: 1, regions })?.["document.regions"]?.[0]).toMatch(/50000 points together/);
   });
 
   test("materials, phreatic points and surcharges are bounded; wrong shapes are left to the engine", () => {
