@@ -5,6 +5,7 @@ import * as m004 from "./004-documents";
 import * as m005 from "./005-loading-conditions";
 import * as m006 from "./006-review";
 import * as m007 from "./007-design-studies";
+import * as m008 from "./008-jobs";
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -20,6 +21,7 @@ const migrations: Record<string, Migration> = {
   "005-loading-conditions": m005,
   "006-review": m006,
   "007-design-studies": m007,
+  "008-jobs": m008,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

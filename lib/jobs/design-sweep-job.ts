@@ -1,0 +1,80 @@
+/**
+ * A design study's slope sweep as a queue job. The input is frozen when the job is made (the
+ * study's parameters, the project's materials and required FS); the result is the kept sweep.
+ * Should the study's parameters have changed meanwhile, the sweep stays on the job only: it
+ * describes an embankment the study no longer has.
+ */
+import { isDeepStrictEqual } from "node:util";
+import { z } from "zod";
+import {
+  embankmentParamsSchema,
+  planSweep,
+  runSweepJob,
+  runWholeSweep,
+  sweepSettingsSchema,
+  type StoredSweep,
+  type SweepJob,
+} from "../design";
+import { ENGINE_VERSION } from "../stability";
+import { materialSchema } from "../stability/schema";
+import { fetchDesignStudy, saveDesignSweep } from "../../db/queries/design-studies";
+import { CANCELLED, type JobKind } from "./kind";
+
+const fs = z.number().positive().max(10);
+
+export const designSweepInputSchema = z.object({
+  studyId: z.number().int().positive(),
+  params: embankmentParamsSchema,
+  materials: z.array(materialSchema).max(200),
+  settings: sweepSettingsSchema,
+  required: z.object({ "steady-seepage": fs, "drawdown-storage": fs, "drawdown-surcharge": fs }),
+});
+
+export type DesignSweepInput = z.infer<typeof designSweepInputSchema>;
+
+/** The recheck of the recommended pair adds one job per case (lib/design/sweep-runner.ts). */
+const RECHECK_JOBS = 3;
+
+export const designSweepKind: JobKind<DesignSweepInput, StoredSweep> = {
+  kind: "design-sweep",
+  action: "design.sweep",
+  input: designSweepInputSchema,
+  units: (input) => planSweep(input.params, input.settings).length + RECHECK_JOBS,
+  // A kept sweep holds at most 500 points (storedSweepSchema).
+  maxUnits: 500,
+  unitName: "sweep jobs",
+  async run(input, ctx) {
+    const t0 = Date.now();
+    const execute = async (job: SweepJob) => {
+      // Let the worker renew its hold on the job and read a cancel between searches.
+      await new Promise((r) => setImmediate(r));
+      return runSweepJob(input.params, input.materials, job, input.settings);
+    };
+    const out = await runWholeSweep({
+      params: input.params,
+      settings: input.settings,
+      required: input.required,
+      execute,
+      concurrency: 1,
+      onProgress: (p) => ctx.progress(p.done, p.total),
+      isCancelled: () => ctx.cancelled(),
+    });
+    if (out.cancelled) return CANCELLED;
+    return {
+      settings: input.settings,
+      points: out.points,
+      ranOn: "server",
+      elapsedMs: Date.now() - t0,
+      workers: 1,
+      engineVersion: ENGINE_VERSION,
+      finishedAt: new Date().toISOString(),
+    };
+  },
+  async commit(trx, job, input, sweep) {
+    const study = await fetchDesignStudy(job.projectId, input.studyId, trx);
+    if (!study || !isDeepStrictEqual(embankmentParamsSchema.parse(study.parameters), input.params)) return;
+    await saveDesignSweep({ projectId: job.projectId, studyId: input.studyId, sweep }, trx);
+  },
+};
+
+export const designStudySubject = (studyId: number) => `design-study:${studyId}`;
