@@ -40,7 +40,8 @@ interface State {
 }
 const g = globalThis as unknown as { scarplineStack?: State };
 
-async function createDatabase(dbName: string): Promise<void> {
+/** A migrated, seeded database of the given name on the project's MariaDB. */
+export async function createDatabase(dbName: string): Promise<void> {
   const admin = knex({ ...knexConfig(), connection: { ...(knexConfig().connection as object), database: undefined } });
   try {
     await admin.raw(`CREATE DATABASE \`${dbName}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
@@ -56,7 +57,7 @@ async function createDatabase(dbName: string): Promise<void> {
   }
 }
 
-async function dropDatabase(dbName: string): Promise<void> {
+export async function dropDatabase(dbName: string): Promise<void> {
   const admin = knex({ ...knexConfig(), connection: { ...(knexConfig().connection as object), database: undefined } });
   try {
     await admin.raw(`DROP DATABASE IF EXISTS \`${dbName}\``);
@@ -236,21 +237,23 @@ async function start(withServer: boolean, state: State): Promise<Stack> {
     ...smtpEnv(state.smtp),
   };
   for (let i = 0; i < 2; i++) state.workers.push((await startWorkerProcess(appEnv)).process);
+  state.server = await startAppServer(appEnv, port);
+  return { dbName: state.dbName, appUrl, appEnv, workerPids: state.workers.map((w) => w.pid!) };
+}
+
+/** Serves the built app on the port with the given settings; resolves once it answers. */
+export async function startAppServer(appEnv: Record<string, string>, port: number): Promise<ChildProcess> {
   let output = "";
   const server = spawn(
     process.execPath,
     ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(port)],
-    {
-      cwd: ROOT,
-      env: { ...process.env, ...appEnv },
-      stdio: ["ignore", "pipe", "pipe"],
-    },
+    { cwd: ROOT, env: { ...process.env, ...appEnv }, stdio: ["ignore", "pipe", "pipe"] },
   );
+  process.once("exit", () => server.kill("SIGKILL"));
   server.stdout?.on("data", (d) => (output += d));
   server.stderr?.on("data", (d) => (output += d));
-  state.server = server;
-  await waitForServer(appUrl, server, () => output);
-  return { dbName: state.dbName, appUrl, appEnv, workerPids: state.workers.map((w) => w.pid!) };
+  await waitForServer(`http://127.0.0.1:${port}`, server, () => output);
+  return server;
 }
 
 /** Starts (or joins) the stack. The first caller decides whether the app server is needed. */
