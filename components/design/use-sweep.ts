@@ -11,13 +11,22 @@ import {
 import { ENGINE_VERSION, type Material } from "@/lib/stability";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import type { PreviewCheck } from "@/lib/run-records/compare-preview";
+import type { JobView } from "@/lib/jobs/types";
 import { startWorkerPool, type WorkerPool } from "./worker-pool";
 
 export type SweepWhere = "browser" | "server";
 
 export type SweepRunState =
   | { status: "idle" }
-  | { status: "running"; where: SweepWhere; done: number; total: number; startedAt: number }
+  | {
+      status: "running";
+      where: SweepWhere;
+      done: number;
+      total: number;
+      startedAt: number;
+      /** Why a server sweep is not moving as usual (queue down, a retry, the server restarting). */
+      notice?: string | null;
+    }
   | { status: "cancelled" }
   | { status: "failed"; message: string }
   | { status: "done"; where: SweepWhere; elapsedMs: number; workers: number; keptMessage: string | null };
@@ -30,11 +39,26 @@ interface UseSweepOptions {
   onFinished: (sweep: StoredSweep) => void;
 }
 
-/** Runs a study's sweep in Web Workers (then keeps it on the server) or on the server itself. */
+/** How often the page asks about a server sweep's job (ms). */
+const POLL_MS = 1_000;
+const UNREACHABLE =
+  "The server does not answer just now; the sweep goes on on the queue's workers and this page keeps trying.";
+
+const sleep = (ms: number, signal: AbortSignal) =>
+  new Promise<void>((resolve) => {
+    const timer = setTimeout(resolve, ms);
+    signal.addEventListener("abort", () => (clearTimeout(timer), resolve()), { once: true });
+  });
+
+/**
+ * Runs a study's sweep in Web Workers (then keeps it on the server) or as a job on the server's
+ * queue, polled until it ends; a page opened while such a job runs picks it up again.
+ */
 export function useSweep({ projectId, studyId, materials, onFinished }: UseSweepOptions) {
   const [state, setState] = useState<SweepRunState>({ status: "idle" });
   const pool = useRef<WorkerPool | null>(null);
   const abort = useRef<AbortController | null>(null);
+  const job = useRef<number | null>(null);
   const cancelled = useRef(false);
 
   const stopAll = useCallback(() => {
@@ -96,55 +120,87 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
     [materials, onFinished, projectId, studyId],
   );
 
+  /** Polls a server sweep's job until it ends; a server that does not answer is tried again. */
+  const watchJob = useCallback(
+    async (jobId: number, startedAt: number) => {
+      const controller = new AbortController();
+      abort.current = controller;
+      job.current = jobId;
+      let misses = 0;
+      while (!controller.signal.aborted) {
+        let view: JobView;
+        try {
+          view = (
+            await fetchJson<{ job: JobView }>(`/api/projects/${projectId}/jobs/${jobId}`, { signal: controller.signal })
+          ).job;
+          misses = 0;
+        } catch (err) {
+          if (controller.signal.aborted) return;
+          if (err instanceof ApiClientError && err.status < 500) throw err;
+          misses++;
+          setState((s) => (s.status === "running" ? { ...s, notice: UNREACHABLE } : s));
+          await sleep(Math.min(POLL_MS * misses, 5_000), controller.signal);
+          continue;
+        }
+        if (view.state === "done") {
+          const sweep = view.result as StoredSweep;
+          onFinished(sweep);
+          setState({ status: "done", where: "server", elapsedMs: sweep.elapsedMs, workers: 1, keptMessage: null });
+          break;
+        }
+        if (view.state === "failed") throw new Error(view.error ?? "The sweep failed on the server.");
+        if (view.state === "cancelled") {
+          setState({ status: "cancelled" });
+          break;
+        }
+        const total = Math.max(1, view.total);
+        setState({ status: "running", where: "server", done: view.done, total, startedAt, notice: view.notice });
+        await sleep(POLL_MS, controller.signal);
+      }
+      job.current = null;
+      if (abort.current === controller) abort.current = null;
+    },
+    [onFinished, projectId],
+  );
+
   const onServer = useCallback(
     async (settings: SweepSettings) => {
       const startedAt = performance.now();
-      const controller = new AbortController();
-      abort.current = controller;
       setState({ status: "running", where: "server", done: 0, total: 1, startedAt });
-      const response = await fetch(`/api/projects/${projectId}/design/${studyId}/sweep`, {
+      const { job: queued } = await fetchJson<{ job: JobView }>(`/api/projects/${projectId}/design/${studyId}/sweep`, {
         method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ settings }),
-        signal: controller.signal,
+        json: { settings },
       });
-      if (!response.ok || !response.body) {
-        const body = await response.json().catch(() => null);
-        throw new Error(body?.error?.message ?? `The server answered ${response.status}.`);
-      }
-      const reader = response.body.pipeThrough(new TextDecoderStream()).getReader();
-      let buffer = "";
-      for (;;) {
-        const { value, done } = await reader.read();
-        if (done) break;
-        buffer += value;
-        let nl: number;
-        while ((nl = buffer.indexOf("\n")) >= 0) {
-          const line = JSON.parse(buffer.slice(0, nl));
-          buffer = buffer.slice(nl + 1);
-          if (line.type === "progress")
-            setState({ status: "running", where: "server", done: line.done, total: line.total, startedAt });
-          else if (line.type === "error") throw new Error(line.message);
-          else if (line.type === "done") {
-            onFinished(line.sweep as StoredSweep);
-            const note =
-              line.mode === "in-process"
-                ? "The server ran the jobs in its own process (no worker threads were available)."
-                : null;
-            setState({
-              status: "done",
-              where: "server",
-              elapsedMs: Math.round(performance.now() - startedAt),
-              workers: line.sweep.workers,
-              keptMessage: note,
-            });
-          }
-        }
-      }
-      abort.current = null;
+      setState({ status: "running", where: "server", done: 0, total: 1, startedAt, notice: queued.notice });
+      await watchJob(queued.id, startedAt);
     },
-    [onFinished, projectId, studyId],
+    [projectId, studyId, watchJob],
   );
+
+  // A page opened (or reloaded) while the study's sweep runs on the queue follows that job.
+  useEffect(() => {
+    let stale = false;
+    fetchJson<{ job: JobView | null }>(`/api/projects/${projectId}/design/${studyId}/sweep`)
+      .then(async ({ job: latest }) => {
+        if (stale || !latest || (latest.state !== "queued" && latest.state !== "running")) return;
+        const startedAt = performance.now();
+        setState({
+          status: "running",
+          where: "server",
+          done: latest.done,
+          total: Math.max(1, latest.total),
+          startedAt,
+        });
+        await watchJob(latest.id, startedAt);
+      })
+      .catch((err: unknown) => {
+        if (!stale && err instanceof Error && !(err instanceof ApiClientError && err.status === 403))
+          setState({ status: "failed", message: err.message });
+      });
+    return () => {
+      stale = true;
+    };
+  }, [projectId, studyId, watchJob]);
 
   const start = useCallback(
     async (params: EmbankmentParams, settings: SweepSettings, required: RequiredFs, where: SweepWhere) => {
@@ -163,9 +219,13 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
 
   const cancel = useCallback(() => {
     cancelled.current = true;
+    // A queued sweep goes on without this page unless the server is told to stop it.
+    if (job.current !== null)
+      void fetchJson(`/api/projects/${projectId}/jobs/${job.current}`, { method: "DELETE" }).catch(() => undefined);
+    job.current = null;
     stopAll();
     setState({ status: "cancelled" });
-  }, [stopAll]);
+  }, [projectId, stopAll]);
 
   return { state, start, cancel };
 }
