@@ -2,7 +2,7 @@
  * A queue worker (lib/jobs/worker.ts). `npm start` starts one; `npm run worker` adds more, here or
  * on another host whose REDIS_* and DATABASE_* settings point at the shared Redis and MariaDB.
  * scripts/build-engine.mjs bundles this file into .engine/worker.mjs at build time, so a worker
- * runs with node alone. WORKER_PID_FILE, when set, names a file to hold this process's id.
+ * runs with node alone: `node .engine/worker.mjs` (scripts/worker-start.sh runs it in the background).
  */
 import fs from "node:fs";
 import { startWorker } from "../lib/jobs/worker";
@@ -15,8 +15,6 @@ const log = (line: string) => console.log(`[worker ${process.pid}] ${line}`);
 
 async function main(): Promise<void> {
   const worker = await startWorker(log);
-  const pidFile = process.env.WORKER_PID_FILE;
-  if (pidFile) fs.writeFileSync(pidFile, String(process.pid));
   let stopping = false;
   const stop = async () => {
     if (stopping) return;
@@ -27,7 +25,6 @@ async function main(): Promise<void> {
     forced.unref();
     await worker.close();
     await getDb().destroy();
-    if (pidFile) fs.rmSync(pidFile, { force: true });
     process.exit(0);
   };
   process.on("SIGTERM", () => void stop());
