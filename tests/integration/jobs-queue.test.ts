@@ -21,7 +21,7 @@ import {
   stopRedis,
   type TestRedis,
   type TestWorker,
-} from "../support/queue-processes";
+} from "../../scripts/lib/queue-processes";
 import { knexConfig } from "@/db/config";
 import { DEMO_PROJECT } from "@/db/seeds/demo";
 import { DEFAULT_SWEEP, type StoredSweep } from "@/lib/design";

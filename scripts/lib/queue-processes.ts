@@ -1,5 +1,5 @@
 /**
- * The queue's processes for tests: a Redis of the test's own (Debian's redis-server on a free
+ * The queue's processes for tests and benchmarks: a Redis of the test's own (Debian's redis-server on a free
  * port, data in a temporary folder, run in the foreground so killing it leaves nothing) and
  * queue workers (the bundled .engine/worker.mjs, as npm start runs them).
  */
