@@ -101,11 +101,15 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
       let keptMessage: string | null = null;
       try {
         // The server runs the sweep again and keeps its own points; show those when they differ.
-        const kept = await fetchJson<{ sweep: StoredSweep; preview: PreviewCheck }>(
+        const kept = await fetchJson<{ sweep: StoredSweep; preview: PreviewCheck } | { job: JobView }>(
           `/api/projects/${projectId}/design/${studyId}/results`,
           { method: "PUT", json: sweep },
         );
-        if (kept.preview.status === "differed") {
+        if ("job" in kept) {
+          keptMessage =
+            kept.job.notice ??
+            "The server's own run of this sweep is still waiting on its queue; the study keeps its values when it ends.";
+        } else if (kept.preview.status === "differed") {
           onFinished(kept.sweep);
           const n = kept.preview.differences.length + kept.preview.more;
           const values = `${n} value${n === 1 ? "" : "s"}`;

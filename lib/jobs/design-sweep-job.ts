@@ -28,6 +28,17 @@ export const designSweepInputSchema = z.object({
   materials: z.array(materialSchema).max(200),
   settings: sweepSettingsSchema,
   required: z.object({ "steady-seepage": fs, "drawdown-storage": fs, "drawdown-surcharge": fs }),
+  /**
+   * Set when the job checks a sweep that ran in a browser: the kept sweep says where and how it
+   * ran there, with the server's own points (lib/design/keep-sweep.ts).
+   */
+  ranInBrowser: z
+    .object({
+      elapsedMs: z.number().min(0),
+      workers: z.number().int().min(1).max(64),
+      finishedAt: z.string().max(40),
+    })
+    .optional(),
 });
 
 export type DesignSweepInput = z.infer<typeof designSweepInputSchema>;
@@ -60,6 +71,14 @@ export const designSweepKind: JobKind<DesignSweepInput, StoredSweep> = {
       isCancelled: () => ctx.cancelled(),
     });
     if (out.cancelled) return CANCELLED;
+    if (input.ranInBrowser)
+      return {
+        settings: input.settings,
+        points: out.points,
+        ranOn: "browser",
+        engineVersion: ENGINE_VERSION,
+        ...input.ranInBrowser,
+      };
     return {
       settings: input.settings,
       points: out.points,
