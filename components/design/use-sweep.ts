@@ -138,6 +138,7 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
             await fetchJson<{ job: JobView }>(`/api/projects/${projectId}/jobs/${jobId}`, { signal: controller.signal })
           ).job;
           misses = 0;
+          if (controller.signal.aborted) return;
         } catch (err) {
           if (controller.signal.aborted) return;
           if (err instanceof ApiClientError && err.status < 500) throw err;
@@ -175,6 +176,11 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
         method: "POST",
         json: { settings },
       });
+      if (cancelled.current) {
+        // Cancelled while the job was being made: it must not run on without anyone waiting for it.
+        await fetchJson(`/api/projects/${projectId}/jobs/${queued.id}`, { method: "DELETE" });
+        return;
+      }
       setState({ status: "running", where: "server", done: 0, total: 1, startedAt, notice: queued.notice });
       await watchJob(queued.id, startedAt);
     },
