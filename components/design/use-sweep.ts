@@ -108,7 +108,8 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
         if ("job" in kept) {
           keptMessage =
             kept.job.notice ??
-            "The server's own run of this sweep is still waiting on its queue; the study keeps its values when it ends.";
+            "The server's own run of this sweep is still waiting on its queue; " +
+              "the study keeps its values when it ends.";
         } else if (kept.preview.status === "differed") {
           onFinished(kept.sweep);
           const n = kept.preview.differences.length + kept.preview.more;

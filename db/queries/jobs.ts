@@ -161,12 +161,13 @@ export async function markRetrying(id: number, error: string, db: Knex = getDb()
 
 /**
  * Ends a job in one transaction: `commit` writes what the result changes elsewhere, then the job
- * row gets its result. A job cancelled meanwhile keeps nothing. Returns the state it ended in.
+ * row gets its result (what `commit` returned, when it returned something). A job cancelled
+ * meanwhile keeps nothing. Returns the state it ended in.
  */
 export async function finishJob(
   id: number,
   result: unknown,
-  commit: (trx: Knex, job: JobRecord) => Promise<void>,
+  commit: (trx: Knex, job: JobRecord) => Promise<unknown>,
   db: Knex = getDb(),
 ): Promise<JobState> {
   return db.transaction(async (trx) => {
@@ -180,12 +181,12 @@ export async function finishJob(
         .update({ state: "cancelled", finished_at: trx.fn.now(3), updated_at: trx.fn.now(3) });
       return "cancelled";
     }
-    await commit(trx, job);
+    const kept = await commit(trx, job);
     await trx("jobs")
       .where({ id })
       .update({
         state: "done",
-        result: JSON.stringify(result),
+        result: JSON.stringify(kept === undefined ? result : kept),
         error: null,
         progress_done: trx.raw("progress_total"),
         finished_at: trx.fn.now(3),

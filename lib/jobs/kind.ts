@@ -36,7 +36,8 @@ export interface JobKind<I = unknown, R = unknown> {
   run(input: I, ctx: JobContext): Promise<R | typeof CANCELLED>;
   /**
    * Writes what the result changes beyond the job row (a study's kept sweep, a run), with `trx`,
-   * the transaction that also marks the job done: both land or neither does.
+   * the transaction that also marks the job done: both land or neither does. What it returns, if
+   * anything, is kept as the job's result instead of `run`'s (a run's id rather than the whole run).
    */
-  commit?(trx: Knex, job: JobRecord, input: I, result: R): Promise<void>;
+  commit?(trx: Knex, job: JobRecord, input: I, result: R): Promise<unknown>;
 }

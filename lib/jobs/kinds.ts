@@ -4,8 +4,9 @@
  */
 import type { JobKind } from "./kind";
 import { designSweepKind } from "./design-sweep-job";
+import { runSearchKind } from "./run-search-job";
 
-const KINDS: readonly JobKind<never, never>[] = [designSweepKind as unknown as JobKind<never, never>];
+const KINDS = [designSweepKind, runSearchKind] as unknown as readonly JobKind<never, never>[];
 
 export function jobKind(name: string): JobKind | null {
   return (KINDS.find((k) => k.kind === name) as unknown as JobKind | undefined) ?? null;

@@ -13,6 +13,7 @@ import {
   markRetrying,
   saveJobProgress,
 } from "../../db/queries/jobs";
+import { ApiError } from "../api/errors";
 import { CANCELLED, type JobContext } from "./kind";
 import { jobKind } from "./kinds";
 
@@ -81,6 +82,11 @@ export async function processJob(jobId: number, o: ProcessOptions): Promise<"don
     return state === "done" ? "done" : "cancelled";
   } catch (err) {
     const message = err instanceof Error ? err.message : String(err);
+    // Input the engine refuses fails the same way on every worker: no retry.
+    if (err instanceof ApiError) {
+      await markFailed(jobId, err.message);
+      throw new JobInputError(message);
+    }
     if (o.lastAttempt) await markFailed(jobId, `The job failed: ${message}`);
     else await markRetrying(jobId, `An attempt failed (${message}); trying again.`);
     throw err;
