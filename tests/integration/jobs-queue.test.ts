@@ -28,6 +28,11 @@ import { DEFAULT_SWEEP, type StoredSweep } from "@/lib/design";
 import type { JobView } from "@/lib/jobs/types";
 import { MAX_ACTIVE_PER_PROJECT } from "@/lib/jobs/start-job";
 import { QUEUE_DOWN_NOTICE } from "@/lib/jobs/view";
+import { QUEUE_SEARCH_CIRCLES } from "@/lib/run-records/limits";
+import { searchRecord } from "@/lib/run-records/search-record";
+import { documentForRun } from "@/lib/analysis/run-setup";
+import { demoProject } from "../support/demo";
+import { quickSetup } from "../support/runs";
 
 /** 2:1 to 6:1 in steps of 0.125: 33 ratios × 3 cases + 3 rechecks = 102 jobs, several seconds on one worker. */
 const LONG_SWEEP = { ...DEFAULT_SWEEP, from: 2, to: 6, step: 0.125 };
@@ -86,6 +91,38 @@ describe("queue jobs on the test stack's workers", () => {
     expect(refused.status).toBe(403);
     expect((await pollJob(designer, projectId, job.id)).job.state).toBe("done");
   }, 90_000);
+
+  test("a kept run past the queue threshold is searched on a worker and kept once; a small one stays in the request", async () => {
+    const engineer = await signedIn("engineer@scarpline.test");
+    const demo = await demoProject(engineer);
+    const base = quickSetup(demo.document, "downstream");
+    // 60 × 60 centres × 16 radii = 57,600 circles, past the 50,000 that go to the queue.
+    const setup = { ...base, grid: { ...base.grid, nx: 60, ny: 60 }, radii: { ...base.radii, n: 16 } };
+    expect(setup.grid.nx * setup.grid.ny * setup.radii.n).toBeGreaterThan(QUEUE_SEARCH_CIRCLES);
+    const body = { sectionId: demo.sectionId, sectionVersion: demo.version, title: "Large search" };
+    const res = await engineer.request(`/api/projects/${demo.projectId}/runs`, {
+      method: "POST",
+      json: { ...body, setup },
+    });
+    expect(res.status).toBe(202);
+    const { job } = (await res.json()) as { job: JobView };
+    expect(job.kind).toBe("run-search");
+    const ended = await pollJob(engineer, demo.projectId, job.id, { timeoutMs: 120_000 });
+    expect(ended.job.state).toBe("done");
+    const { runId } = ended.job.result as { runId: number };
+    const { run } = await (await engineer.request(`/api/projects/${demo.projectId}/runs/${runId}`)).json();
+    // The engine is deterministic: the worker's kept minimum is the one this process finds.
+    const here = searchRecord(documentForRun(demo.document, setup));
+    if (!here.ok) throw new Error("search failed here");
+    expect(run.fsBishop).toBeCloseTo(here.result.results.bishop!.fs, 9);
+    expect(run.result.circles.tried).toBe(here.result.circles.tried);
+
+    const small = await engineer.request(`/api/projects/${demo.projectId}/runs`, {
+      method: "POST",
+      json: { ...body, title: "Small search", setup: base },
+    });
+    expect(small.status).toBe(201);
+  }, 150_000);
 
   test("a worker killed mid-job (SIGKILL): nothing half-written, the job is retried on another and lands once", async () => {
     const { res, studyId, base } = await startSweep(designer, projectId, "Killed worker sweep");
