@@ -12,6 +12,7 @@ import { ENGINE_VERSION, type Material } from "@/lib/stability";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import type { PreviewCheck } from "@/lib/run-records/compare-preview";
 import type { JobView } from "@/lib/jobs/types";
+import { watchJob } from "@/lib/client/watch-job";
 import { startWorkerPool, type WorkerPool } from "./worker-pool";
 
 export type SweepWhere = "browser" | "server";
@@ -39,16 +40,8 @@ interface UseSweepOptions {
   onFinished: (sweep: StoredSweep) => void;
 }
 
-/** How often the page asks about a server sweep's job (ms). */
-const POLL_MS = 1_000;
 const UNREACHABLE =
   "The server does not answer just now; the sweep goes on on the queue's workers and this page keeps trying.";
-
-const sleep = (ms: number, signal: AbortSignal) =>
-  new Promise<void>((resolve) => {
-    const timer = setTimeout(resolve, ms);
-    signal.addEventListener("abort", () => (clearTimeout(timer), resolve()), { once: true });
-  });
 
 /**
  * Runs a study's sweep in Web Workers (then keeps it on the server) or as a job on the server's
@@ -125,46 +118,35 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
     [materials, onFinished, projectId, studyId],
   );
 
-  /** Polls a server sweep's job until it ends; a server that does not answer is tried again. */
-  const watchJob = useCallback(
+  /** Follows a server sweep's job until it ends (lib/client/watch-job.ts). */
+  const followJob = useCallback(
     async (jobId: number, startedAt: number) => {
       const controller = new AbortController();
       abort.current = controller;
       job.current = jobId;
-      let misses = 0;
-      while (!controller.signal.aborted) {
-        let view: JobView;
-        try {
-          view = (
-            await fetchJson<{ job: JobView }>(`/api/projects/${projectId}/jobs/${jobId}`, { signal: controller.signal })
-          ).job;
-          misses = 0;
-          if (controller.signal.aborted) return;
-        } catch (err) {
-          if (controller.signal.aborted) return;
-          if (err instanceof ApiClientError && err.status < 500) throw err;
-          misses++;
-          setState((s) => (s.status === "running" ? { ...s, notice: UNREACHABLE } : s));
-          await sleep(Math.min(POLL_MS * misses, 5_000), controller.signal);
-          continue;
-        }
-        if (view.state === "done") {
-          const sweep = view.result as StoredSweep;
-          onFinished(sweep);
-          setState({ status: "done", where: "server", elapsedMs: sweep.elapsedMs, workers: 1, keptMessage: null });
-          break;
-        }
-        if (view.state === "failed") throw new Error(view.error ?? "The sweep failed on the server.");
-        if (view.state === "cancelled") {
-          setState({ status: "cancelled" });
-          break;
-        }
-        const total = Math.max(1, view.total);
-        setState({ status: "running", where: "server", done: view.done, total, startedAt, notice: view.notice });
-        await sleep(POLL_MS, controller.signal);
-      }
+      const ended = await watchJob(projectId, jobId, {
+        signal: controller.signal,
+        onView: (view) => {
+          if (view === null) setState((s) => (s.status === "running" ? { ...s, notice: UNREACHABLE } : s));
+          else if (view.state === "queued" || view.state === "running")
+            setState({
+              status: "running",
+              where: "server",
+              done: view.done,
+              total: Math.max(1, view.total),
+              startedAt,
+              notice: view.notice,
+            });
+        },
+      });
       job.current = null;
       if (abort.current === controller) abort.current = null;
+      if (!ended) return;
+      if (ended.state === "failed") throw new Error(ended.error ?? "The sweep failed on the server.");
+      if (ended.state === "cancelled") return setState({ status: "cancelled" });
+      const sweep = ended.result as StoredSweep;
+      onFinished(sweep);
+      setState({ status: "done", where: "server", elapsedMs: sweep.elapsedMs, workers: 1, keptMessage: null });
     },
     [onFinished, projectId],
   );
@@ -183,9 +165,9 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
         return;
       }
       setState({ status: "running", where: "server", done: 0, total: 1, startedAt, notice: queued.notice });
-      await watchJob(queued.id, startedAt);
+      await followJob(queued.id, startedAt);
     },
-    [projectId, studyId, watchJob],
+    [projectId, studyId, followJob],
   );
 
   // A page opened (or reloaded) while the study's sweep runs on the queue follows that job.
@@ -202,7 +184,7 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
           total: Math.max(1, latest.total),
           startedAt,
         });
-        await watchJob(latest.id, startedAt);
+        await followJob(latest.id, startedAt);
       })
       .catch((err: unknown) => {
         if (!stale && err instanceof Error && !(err instanceof ApiClientError && err.status === 403))
@@ -211,7 +193,7 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
     return () => {
       stale = true;
     };
-  }, [projectId, studyId, watchJob]);
+  }, [projectId, studyId, followJob]);
 
   const start = useCallback(
     async (params: EmbankmentParams, settings: SweepSettings, required: RequiredFs, where: SweepWhere) => {

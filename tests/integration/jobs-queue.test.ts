@@ -114,7 +114,7 @@ describe("queue jobs on the test stack's workers", () => {
     // The engine is deterministic: the worker's kept minimum is the one this process finds.
     const here = searchRecord(documentForRun(demo.document, setup));
     if (!here.ok) throw new Error("search failed here");
-    expect(run.fsBishop).toBeCloseTo(here.result.results.bishop!.fs, 9);
+    expect(run.result.results.bishop.fs).toBeCloseTo(here.result.results.bishop!.fs, 9);
     expect(run.result.circles.tried).toBe(here.result.circles.tried);
 
     const small = await engineer.request(`/api/projects/${demo.projectId}/runs`, {
