@@ -16,7 +16,8 @@ npx tsx scripts/db.ts seed
 bash scripts/services-start.sh
 
 log "building the app"
-node scripts/build-engine.mjs >"$DATA_ROOT/build.log" 2>&1 || { cat "$DATA_ROOT/build.log"; die "bundling the engine and the queue worker failed"; }
+node scripts/build-engine.mjs >"$DATA_ROOT/build.log" 2>&1 \
+  || { cat "$DATA_ROOT/build.log"; die "bundling the engine and the queue worker failed"; }
 NEXT_TELEMETRY_DISABLED=1 node node_modules/next/dist/bin/next build >>"$DATA_ROOT/build.log" 2>&1 || { tail -40 "$DATA_ROOT/build.log"; die "build failed; see $DATA_ROOT/build.log"; }
 
 PORT="${PORT:-3000}"

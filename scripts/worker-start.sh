@@ -15,7 +15,10 @@ for _ in $(seq 1 80); do
   kill -0 "$starter" 2>/dev/null || break
   sleep 0.25
 done
-grep -q " ready on " "$log_file" 2>/dev/null || { tail -5 "$log_file" >&2; die "the queue worker did not start; see $log_file"; }
+if ! grep -q " ready on " "$log_file" 2>/dev/null; then
+  tail -5 "$log_file" >&2
+  die "the queue worker did not start; see $log_file"
+fi
 echo "$starter" >"$DATA_ROOT/worker-$starter.pid"
 mv -f "$log_file" "$DATA_ROOT/worker-$starter.log"
 log "queue worker $starter ready (log: $DATA_ROOT/worker-$starter.log)"

@@ -14,7 +14,14 @@ import os from "node:os";
 import knex from "knex";
 import { knexConfig } from "../../db/config";
 import { seedDemo } from "../../db/seeds/demo";
-import { freePort, startRedis, startWorkerProcess, stopProcess, stopRedis, type TestRedis } from "../../scripts/lib/queue-processes";
+import {
+  freePort,
+  startRedis,
+  startWorkerProcess,
+  stopProcess,
+  stopRedis,
+  type TestRedis,
+} from "../../scripts/lib/queue-processes";
 
 export interface Stack {
   dbName: string;
