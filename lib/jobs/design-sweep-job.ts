@@ -15,17 +15,26 @@ import {
   type StoredSweep,
   type SweepJob,
 } from "../design";
-import { ENGINE_VERSION } from "../stability";
-import { materialSchema } from "../stability/schema";
+import { ENGINE_VERSION, type Material } from "../stability";
 import { fetchDesignStudy, saveDesignSweep } from "../../db/queries/design-studies";
 import { CANCELLED, type JobKind } from "./kind";
 
-const fs = z.number().positive().max(10);
+const fs = z.coerce.number().positive();
+
+/**
+ * The project's library as engine materials, frozen as the server read them. Not re-checked field
+ * by field: the engine checks each generated section itself, and a material it refuses makes an
+ * error on the sweep's points (as in the browser), not a job that cannot start.
+ */
+const frozenMaterial = z.custom<Material>(
+  (v) => typeof v === "object" && v !== null && typeof (v as { id?: unknown }).id === "string",
+  "each material needs an id",
+);
 
 export const designSweepInputSchema = z.object({
   studyId: z.number().int().positive(),
   params: embankmentParamsSchema,
-  materials: z.array(materialSchema).max(200),
+  materials: z.array(frozenMaterial).max(1_000),
   settings: sweepSettingsSchema,
   required: z.object({ "steady-seepage": fs, "drawdown-storage": fs, "drawdown-surcharge": fs }),
   /**

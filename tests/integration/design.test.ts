@@ -39,8 +39,9 @@ async function createStudy(name: string): Promise<number> {
 /** Queues a server sweep and polls its job until it ends (tests/support/jobs.ts). */
 async function sweepOnServer(studyId: number, settings = DEFAULT_SWEEP) {
   const res = await designer.request(`${base}/${studyId}/sweep`, { method: "POST", json: { settings } });
-  expect(res.status).toBe(202);
-  const { job } = await res.json();
+  const body = await res.json();
+  expect(res.status, JSON.stringify(body)).toBe(202);
+  const { job } = body;
   const polled = await pollJob(designer, projectId, job.id);
   expect(polled.job.state).toBe("done");
   return { ...polled, sweep: polled.job.result as StoredSweep };
