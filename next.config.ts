@@ -2,8 +2,8 @@ import type { NextConfig } from "next";
 import { COMMON_SECURITY_HEADERS, NON_PAGE_POLICY, STATIC_POLICY } from "./lib/api/content-security";
 
 const nextConfig: NextConfig = {
-  // Turbopack must not try to bundle the database drivers knex can load lazily.
-  serverExternalPackages: ["knex", "mysql2", "nodemailer", "bcryptjs"],
+  // Turbopack must not bundle the database drivers knex loads lazily, nor the queue client (Lua scripts, sockets).
+  serverExternalPackages: ["knex", "mysql2", "nodemailer", "bcryptjs", "bullmq", "ioredis"],
   // Tests build into their own folder so they never clobber the build `npm start` serves.
   distDir: process.env.NEXT_DIST_DIR || ".next",
   reactStrictMode: true,

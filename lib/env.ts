@@ -13,6 +13,12 @@ const envSchema = z.object({
     .regex(/^scarpline[A-Za-z0-9_]*$/, "must start with 'scarpline'")
     .default("scarpline"),
   APP_URL: z.string().url().default("http://127.0.0.1:3000"),
+  // The job queue's Redis (scripts/redis-start.sh); workers on other hosts point here too.
+  REDIS_HOST: z.string().min(1).default("127.0.0.1"),
+  REDIS_PORT: z.coerce.number().int().positive().max(65535).default(6380),
+  REDIS_PASSWORD: z.string().optional(),
+  // How long a worker holds a job before others may take it as stalled (ms); tests shorten it.
+  JOB_LOCK_MS: z.coerce.number().int().min(1000).max(600_000).default(30_000),
   // Outgoing mail. The defaults reach the local fake that scripts/services-start.sh starts.
   SMTP_HOST: z.string().min(1).default("127.0.0.1"),
   SMTP_PORT: z.coerce.number().int().positive().max(65535).default(2525),

@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Runs every test: lint and format check, type check, unit, integration (real MariaDB, the built app over HTTP) and
-# end-to-end (Debian's Chromium). Starts what they need and leaves nothing running it started.
+# end-to-end (Debian's Chromium). Starts what they need and leaves nothing running it started:
+# the tests start their own Redis (Debian's redis-server, installed here when missing) and queue workers.
 set -euo pipefail
 . "$(dirname "$0")/lib/common.sh"
 . "$(dirname "$0")/lib/deps.sh"
@@ -8,6 +9,7 @@ cd "$ROOT"
 
 ensure_node_modules
 ensure_chromium_installed
+ensure_redis_installed
 bash scripts/ensure-env.sh
 
 db_was_running=0

@@ -127,6 +127,11 @@ export function SweepControls({
           <p className="text-xs text-ink-soft">
             {state.done} of {state.total} searches {state.where === "server" ? "on the server" : "in this browser"}…
           </p>
+          {state.notice ? (
+            <p className="text-sm text-alarm-700" role="status" data-testid="sweep-notice">
+              {state.notice}
+            </p>
+          ) : null}
         </div>
       ) : null}
       {state.status === "failed" ? (

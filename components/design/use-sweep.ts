@@ -11,13 +11,23 @@ import {
 import { ENGINE_VERSION, type Material } from "@/lib/stability";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import type { PreviewCheck } from "@/lib/run-records/compare-preview";
+import type { JobView } from "@/lib/jobs/types";
+import { watchJob } from "@/lib/client/watch-job";
 import { startWorkerPool, type WorkerPool } from "./worker-pool";
 
 export type SweepWhere = "browser" | "server";
 
 export type SweepRunState =
   | { status: "idle" }
-  | { status: "running"; where: SweepWhere; done: number; total: number; startedAt: number }
+  | {
+      status: "running";
+      where: SweepWhere;
+      done: number;
+      total: number;
+      startedAt: number;
+      /** Why a server sweep is not moving as usual (queue down, a retry, the server restarting). */
+      notice?: string | null;
+    }
   | { status: "cancelled" }
   | { status: "failed"; message: string }
   | { status: "done"; where: SweepWhere; elapsedMs: number; workers: number; keptMessage: string | null };
@@ -30,11 +40,18 @@ interface UseSweepOptions {
   onFinished: (sweep: StoredSweep) => void;
 }
 
-/** Runs a study's sweep in Web Workers (then keeps it on the server) or on the server itself. */
+const UNREACHABLE =
+  "The server does not answer just now; the sweep goes on on the queue's workers and this page keeps trying.";
+
+/**
+ * Runs a study's sweep in Web Workers (then keeps it on the server) or as a job on the server's
+ * queue, polled until it ends; a page opened while such a job runs picks it up again.
+ */
 export function useSweep({ projectId, studyId, materials, onFinished }: UseSweepOptions) {
   const [state, setState] = useState<SweepRunState>({ status: "idle" });
   const pool = useRef<WorkerPool | null>(null);
   const abort = useRef<AbortController | null>(null);
+  const job = useRef<number | null>(null);
   const cancelled = useRef(false);
 
   const stopAll = useCallback(() => {
@@ -77,11 +94,16 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
       let keptMessage: string | null = null;
       try {
         // The server runs the sweep again and keeps its own points; show those when they differ.
-        const kept = await fetchJson<{ sweep: StoredSweep; preview: PreviewCheck }>(
+        const kept = await fetchJson<{ sweep: StoredSweep; preview: PreviewCheck } | { job: JobView }>(
           `/api/projects/${projectId}/design/${studyId}/results`,
           { method: "PUT", json: sweep },
         );
-        if (kept.preview.status === "differed") {
+        if ("job" in kept) {
+          keptMessage =
+            kept.job.notice ??
+            "The server's own run of this sweep is still waiting on its queue; " +
+              "the study keeps its values when it ends.";
+        } else if (kept.preview.status === "differed") {
           onFinished(kept.sweep);
           const n = kept.preview.differences.length + kept.preview.more;
           const values = `${n} value${n === 1 ? "" : "s"}`;
@@ -96,55 +118,82 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
     [materials, onFinished, projectId, studyId],
   );
 
+  /** Follows a server sweep's job until it ends (lib/client/watch-job.ts). */
+  const followJob = useCallback(
+    async (jobId: number, startedAt: number) => {
+      const controller = new AbortController();
+      abort.current = controller;
+      job.current = jobId;
+      const ended = await watchJob(projectId, jobId, {
+        signal: controller.signal,
+        onView: (view) => {
+          if (view === null) setState((s) => (s.status === "running" ? { ...s, notice: UNREACHABLE } : s));
+          else if (view.state === "queued" || view.state === "running")
+            setState({
+              status: "running",
+              where: "server",
+              done: view.done,
+              total: Math.max(1, view.total),
+              startedAt,
+              notice: view.notice,
+            });
+        },
+      });
+      job.current = null;
+      if (abort.current === controller) abort.current = null;
+      if (!ended) return;
+      if (ended.state === "failed") throw new Error(ended.error ?? "The sweep failed on the server.");
+      if (ended.state === "cancelled") return setState({ status: "cancelled" });
+      const sweep = ended.result as StoredSweep;
+      onFinished(sweep);
+      setState({ status: "done", where: "server", elapsedMs: sweep.elapsedMs, workers: 1, keptMessage: null });
+    },
+    [onFinished, projectId],
+  );
+
   const onServer = useCallback(
     async (settings: SweepSettings) => {
       const startedAt = performance.now();
-      const controller = new AbortController();
-      abort.current = controller;
       setState({ status: "running", where: "server", done: 0, total: 1, startedAt });
-      const response = await fetch(`/api/projects/${projectId}/design/${studyId}/sweep`, {
+      const { job: queued } = await fetchJson<{ job: JobView }>(`/api/projects/${projectId}/design/${studyId}/sweep`, {
         method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ settings }),
-        signal: controller.signal,
+        json: { settings },
       });
-      if (!response.ok || !response.body) {
-        const body = await response.json().catch(() => null);
-        throw new Error(body?.error?.message ?? `The server answered ${response.status}.`);
+      if (cancelled.current) {
+        // Cancelled while the job was being made: it must not run on without anyone waiting for it.
+        await fetchJson(`/api/projects/${projectId}/jobs/${queued.id}`, { method: "DELETE" });
+        return;
       }
-      const reader = response.body.pipeThrough(new TextDecoderStream()).getReader();
-      let buffer = "";
-      for (;;) {
-        const { value, done } = await reader.read();
-        if (done) break;
-        buffer += value;
-        let nl: number;
-        while ((nl = buffer.indexOf("\n")) >= 0) {
-          const line = JSON.parse(buffer.slice(0, nl));
-          buffer = buffer.slice(nl + 1);
-          if (line.type === "progress")
-            setState({ status: "running", where: "server", done: line.done, total: line.total, startedAt });
-          else if (line.type === "error") throw new Error(line.message);
-          else if (line.type === "done") {
-            onFinished(line.sweep as StoredSweep);
-            const note =
-              line.mode === "in-process"
-                ? "The server ran the jobs in its own process (no worker threads were available)."
-                : null;
-            setState({
-              status: "done",
-              where: "server",
-              elapsedMs: Math.round(performance.now() - startedAt),
-              workers: line.sweep.workers,
-              keptMessage: note,
-            });
-          }
-        }
-      }
-      abort.current = null;
+      setState({ status: "running", where: "server", done: 0, total: 1, startedAt, notice: queued.notice });
+      await followJob(queued.id, startedAt);
     },
-    [onFinished, projectId, studyId],
+    [projectId, studyId, followJob],
   );
+
+  // A page opened (or reloaded) while the study's sweep runs on the queue follows that job.
+  useEffect(() => {
+    let stale = false;
+    fetchJson<{ job: JobView | null }>(`/api/projects/${projectId}/design/${studyId}/sweep`)
+      .then(async ({ job: latest }) => {
+        if (stale || !latest || (latest.state !== "queued" && latest.state !== "running")) return;
+        const startedAt = performance.now();
+        setState({
+          status: "running",
+          where: "server",
+          done: latest.done,
+          total: Math.max(1, latest.total),
+          startedAt,
+        });
+        await followJob(latest.id, startedAt);
+      })
+      .catch((err: unknown) => {
+        if (!stale && err instanceof Error && !(err instanceof ApiClientError && err.status === 403))
+          setState({ status: "failed", message: err.message });
+      });
+    return () => {
+      stale = true;
+    };
+  }, [projectId, studyId, followJob]);
 
   const start = useCallback(
     async (params: EmbankmentParams, settings: SweepSettings, required: RequiredFs, where: SweepWhere) => {
@@ -163,9 +212,13 @@ export function useSweep({ projectId, studyId, materials, onFinished }: UseSweep
 
   const cancel = useCallback(() => {
     cancelled.current = true;
+    // A queued sweep goes on without this page unless the server is told to stop it.
+    if (job.current !== null)
+      void fetchJson(`/api/projects/${projectId}/jobs/${job.current}`, { method: "DELETE" }).catch(() => undefined);
+    job.current = null;
     stopAll();
     setState({ status: "cancelled" });
-  }, [stopAll]);
+  }, [projectId, stopAll]);
 
   return { state, start, cancel };
 }

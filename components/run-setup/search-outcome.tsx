@@ -3,6 +3,8 @@
 import { useState } from "react";
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
+import { watchJob } from "@/lib/client/watch-job";
+import type { JobView } from "@/lib/jobs/types";
 import { FormBanner } from "@/components/ui/form-message";
 import { FsSummary } from "@/components/runs/fs-summary";
 import { SliceTable } from "@/components/runs/slice-table";
@@ -38,6 +40,8 @@ export function SearchOutcome({
   const [title, setTitle] = useState(`${loadingCondition(setup.condition).label}, ${setup.face} face`);
   const [error, setError] = useState<string | null>(null);
   const [saving, setSaving] = useState(false);
+  // A large search is kept by a queue worker; the page says so while it waits.
+  const [queued, setQueued] = useState<string | null>(null);
 
   if (!result.ok) {
     return (
@@ -62,12 +66,26 @@ export function SearchOutcome({
     setSaving(true);
     setError(null);
     try {
-      const body = await fetchJson<{ run: { id: number } }>(`/api/projects/${projectId}/runs`, {
+      const body = await fetchJson<{ run: { id: number } } | { job: JobView }>(`/api/projects/${projectId}/runs`, {
         method: "POST",
         json: { sectionId: section.id, sectionVersion: section.version, title, setup, result, revisesRunId },
       });
-      onSaved(body.run.id);
+      if ("run" in body) return onSaved(body.run.id);
+      setQueued(body.job.notice ?? "This search is large: the server runs it on its job queue before keeping it…");
+      const ended = await watchJob(projectId, body.job.id, {
+        onView: (job) =>
+          setQueued(
+            job === null
+              ? "The server does not answer just now; the search goes on and this page keeps trying…"
+              : (job.notice ?? "This search is large: the server runs it on its job queue before keeping it…"),
+          ),
+      });
+      setQueued(null);
+      if (ended?.state === "done") return onSaved((ended.result as { runId: number }).runId);
+      setError(ended?.error ?? "The server's search was cancelled; nothing was kept.");
+      setSaving(false);
     } catch (err) {
+      setQueued(null);
       setError(err instanceof ApiClientError ? err.message : "Could not reach the server.");
       setSaving(false);
     }
@@ -95,6 +113,11 @@ export function SearchOutcome({
           {saving ? "Saving…" : "Keep this run"}
         </button>
       </div>
+      {queued ? (
+        <p className="text-sm text-ink-soft" role="status" data-testid="run-queued">
+          {queued}
+        </p>
+      ) : null}
       {error ? <FormBanner kind="error">{error}</FormBanner> : null}
       {critical[method] ? (
         <SliceTable

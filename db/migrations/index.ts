@@ -8,6 +8,7 @@ import * as m007 from "./007-design-studies";
 import * as m008 from "./008-run-water-condition";
 import * as m009 from "./009-below-required-sign-off";
 import * as m010 from "./010-sign-in-counters-and-session-versions";
+import * as m011 from "./011-jobs";
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -26,6 +27,7 @@ const migrations: Record<string, Migration> = {
   "008-run-water-condition": m008,
   "009-below-required-sign-off": m009,
   "010-sign-in-counters-and-session-versions": m010,
+  "011-jobs": m011,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

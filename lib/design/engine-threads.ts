@@ -1,13 +1,24 @@
 /**
  * The server's engine threads: long-lived node:worker_threads that load the bundled engine
- * (.engine/sweep-worker.mjs, built by scripts/build-engine.mjs) and run sweep jobs and the
- * searches of runs being kept (lib/design/sweep-thread-entry.ts). They stay up between requests:
- * a fresh thread starts with a cold JIT and costs several times one search. Requests queue in
- * order when every thread is busy; a thread that fails is dropped and replaced on demand.
+ * (.engine/sweep-worker.mjs, built at build time by scripts/build-engine.mjs) and run the searches
+ * of runs being kept (lib/design/sweep-thread-entry.ts). Design sweeps run on the job queue's
+ * workers instead (lib/jobs). The threads stay up between requests: a fresh thread starts with a
+ * cold JIT and costs several times one search. Requests queue in order when every thread is busy;
+ * a thread that fails is dropped and replaced on demand.
  */
+import fs from "node:fs";
 import os from "node:os";
+import path from "node:path";
 import { Worker } from "node:worker_threads";
 import type { EngineThreadReply, EngineThreadRequest } from "./sweep-thread-entry";
+
+/** The engine bundle built at build time, or null when it is missing (the caller searches in process). */
+export function engineBundle(): string | null {
+  const file = path.join(process.cwd(), ".engine", "sweep-worker.mjs");
+  if (fs.existsSync(file)) return file;
+  console.error(`[engine] ${file} is missing: run npm run build:engine (npm start and npm run build do)`);
+  return null;
+}
 
 /** At most four threads: more gain little on the machines this runs on and crowd other requests. */
 export const MAX_THREADS = 4;

@@ -1,13 +1,10 @@
 /**
- * Keeping a sweep that ran in the browser: the server runs the whole sweep again from the same
- * settings (worker threads, lib/design/thread-sweep.ts), keeps its own points, and says where the
- * browser's differed. A point without an FS, or with a doctored one, is thereby never kept as sent.
+ * Keeping a sweep that ran in the browser: a queue worker runs the whole sweep again from the same
+ * settings (lib/jobs/design-sweep-job.ts) and the study keeps the worker's points; the answer says
+ * where the browser's differed. A point without an FS, or with a doctored one, is never kept as sent.
  */
-import { ENGINE_VERSION, type Material } from "../stability";
-import type { EmbankmentParams } from "./parameters";
-import type { RequiredFs } from "./pick-ratio";
+import { ENGINE_VERSION } from "../stability";
 import type { StoredSweep } from "./sweep-results";
-import { runSweepOnServer } from "./thread-sweep";
 import { compareSweepPoints } from "./compare-sweep";
 import type { PreviewCheck } from "../run-records/compare-preview";
 
@@ -16,22 +13,8 @@ export interface KeptSweep {
   check: PreviewCheck;
 }
 
-/** The sweep to store (the server's points) and the comparison; null when the request went away. */
-export async function recomputeBrowserSweep(o: {
-  params: EmbankmentParams;
-  materials: Material[];
-  required: RequiredFs;
-  sent: StoredSweep;
-  isCancelled?: () => boolean;
-}): Promise<KeptSweep | null> {
-  const out = await runSweepOnServer({
-    params: o.params,
-    materials: o.materials,
-    settings: o.sent.settings,
-    required: o.required,
-    isCancelled: o.isCancelled,
-  });
-  if (out.cancelled) return null;
-  const check = compareSweepPoints(o.sent, { points: out.points, engineVersion: ENGINE_VERSION });
-  return { sweep: { ...o.sent, points: out.points, engineVersion: ENGINE_VERSION }, check };
+/** The comparison of the browser's sweep with the server's own run of it. */
+export function checkBrowserSweep(sent: StoredSweep, server: StoredSweep): KeptSweep {
+  const check = compareSweepPoints(sent, { points: server.points, engineVersion: ENGINE_VERSION });
+  return { sweep: server, check };
 }

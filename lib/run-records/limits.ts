@@ -18,3 +18,11 @@ export function tooManyCirclesMessage(count: number): string {
     `${MAX_SEARCH_CIRCLES.toLocaleString("en-GB")}. Use fewer centres or radii.`
   );
 }
+
+/**
+ * Past this many trial circles a kept run's search goes to the job queue (lib/jobs/run-search-job.ts)
+ * instead of running within the save request. The default set-up tries a few thousand circles and
+ * stays in the request (the answer is the kept run at once); 50,000 is ten times a careful set-up,
+ * where one search starts to hold a core for seconds, long for a request and for the web process.
+ */
+export const QUEUE_SEARCH_CIRCLES = 50_000;

@@ -3,61 +3,23 @@
  * searches the stored section version itself (computeRunRecord), stores its own result, and
  * answers with how the preview compared. Route handlers only authenticate and parse.
  */
-import { ApiError, notFound } from "../api/errors";
-import { loadingCondition } from "../analysis/required-fs";
-import type { RunSetup } from "../analysis/run-setup";
-import { ENGINE_VERSION, type GridSearchSuccess, type SectionDocument } from "../stability";
+import { notFound } from "../api/errors";
+import { runSetupSchema } from "../analysis/run-setup";
+import type { GridSearchSuccess, SectionDocument } from "../stability";
 import { fetchSection, fetchSectionVersion } from "@/db/queries/sections";
-import {
-  createRun,
-  createSectionWithRun,
-  fetchRunProjectId,
-  RevisedRunNotFoundError,
-  type NewRun,
-} from "@/db/queries/runs";
+import { createRun, createSectionWithRun, fetchRunProjectId, RevisedRunNotFoundError } from "@/db/queries/runs";
+import { startJob } from "../jobs/start-job";
+import { runSearchKind, runSearchSubject } from "../jobs/run-search-job";
+import type { JobView } from "../jobs/types";
+import { QUEUE_SEARCH_CIRCLES, searchCircleCount } from "./limits";
+import { revisedNotFound, runRow, type RunMeta } from "./run-row";
 import { comparePreview, type PreviewCheck } from "./compare-preview";
 import type { StoredSearchResult } from "./result-schema";
-import { computeRunRecord, type RunRecord } from "./run-record";
+import { computeRunRecord } from "./run-record";
 
 export interface KeptRun {
   id: number;
   previewCheck: PreviewCheck;
-}
-
-interface RunMeta {
-  projectId: number;
-  userId: number;
-  title: string;
-  setup: RunSetup;
-  revisesRunId?: number | null;
-}
-
-const revisedNotFound = (id: number) =>
-  new ApiError(404, "not_found", `Run ${id}, which this run says it revises, was not found in this project.`, {
-    revisesRunId: ["Choose a run of this project."],
-  });
-
-/** The row of a run from its record: the one place the record's fields meet the table's. */
-function runRow(record: RunRecord, meta: RunMeta): Omit<NewRun, "sectionId" | "sectionVersionId"> {
-  const condition = loadingCondition(meta.setup.condition);
-  return {
-    projectId: meta.projectId,
-    title: meta.title,
-    loadingCondition: condition.key,
-    waterCondition: record.waterCondition,
-    loadCase: condition.engineCase,
-    face: meta.setup.face,
-    methods: meta.setup.methods,
-    requiredFs: meta.setup.requiredFs,
-    fsBishop: record.fsBishop,
-    fsFellenius: record.fsFellenius,
-    engineVersion: ENGINE_VERSION,
-    document: record.document,
-    result: record.result,
-    sliceTables: record.sliceTables,
-    userId: meta.userId,
-    revisesRunId: meta.revisesRunId ?? null,
-  };
 }
 
 async function checkRevises(projectId: number, revisesRunId: number | null | undefined): Promise<void> {
@@ -65,15 +27,41 @@ async function checkRevises(projectId: number, revisesRunId: number | null | und
   if ((await fetchRunProjectId(revisesRunId)) !== projectId) throw revisedNotFound(revisesRunId);
 }
 
-/** Keeps a run of a stored section version; `preview` is what the browser computed, if it sent it. */
+/** A run whose search is large: it is searched and kept by a queue worker (lib/jobs/run-search-job.ts). */
+export interface QueuedRun {
+  job: JobView;
+}
+
+/**
+ * Keeps a run of a stored section version; `preview` is what the browser computed, if it sent it.
+ * A set-up past QUEUE_SEARCH_CIRCLES goes to the job queue instead of this request.
+ */
 export async function keepRun(
   input: RunMeta & { sectionId: number; sectionVersion: number; preview?: StoredSearchResult },
-): Promise<KeptRun> {
+): Promise<KeptRun | QueuedRun> {
   const section = await fetchSection(input.projectId, input.sectionId);
   if (!section) throw notFound("The section");
   const version = await fetchSectionVersion(section.id, input.sectionVersion);
   if (!version) throw notFound("The section version");
   await checkRevises(input.projectId, input.revisesRunId);
+  const setup = runSetupSchema.parse(input.setup);
+  if (searchCircleCount(setup.grid, setup.radii) > QUEUE_SEARCH_CIRCLES) {
+    const job = await startJob(runSearchKind, {
+      projectId: input.projectId,
+      subject: runSearchSubject(section.id),
+      userId: input.userId,
+      input: {
+        sectionId: section.id,
+        sectionVersionId: version.id,
+        document: version.document as SectionDocument,
+        setup,
+        title: input.title,
+        revisesRunId: input.revisesRunId ?? null,
+        preview: input.preview ?? null,
+      },
+    });
+    return { job };
+  }
   const record = await computeRunRecord(version.document as SectionDocument, input.setup, (server) =>
     comparePreview(server, input.preview),
   );

@@ -5,8 +5,7 @@
  * once, and the outcome says so.
  */
 import type { EngineFailure, SectionDocument } from "../stability";
-import { onEngineThread } from "../design/engine-threads";
-import { ensureBundle } from "../design/thread-sweep";
+import { engineBundle, onEngineThread } from "../design/engine-threads";
 import { searchRecord, type SearchRecord } from "./search-record";
 
 export interface ServerSearch {
@@ -16,7 +15,7 @@ export interface ServerSearch {
 
 /** Runs the whole search of a run's document (the analysis block included) on the server. */
 export async function searchOnServer(document: SectionDocument): Promise<ServerSearch> {
-  const file = ensureBundle();
+  const file = engineBundle();
   if (file) {
     try {
       const reply = await onEngineThread(file, { kind: "record", document });

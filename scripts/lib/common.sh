@@ -7,6 +7,11 @@ DB_DATA="$DATA_ROOT/mariadb"
 DB_SOCK="$DATA_ROOT/mariadb.sock"
 DB_PID="$DATA_ROOT/mariadb.pid"
 DB_LOG="$DATA_ROOT/mariadb.log"
+# The job queue's Redis (BullMQ): its own port and folder, never a system-wide Redis.
+REDIS_PORT="${REDIS_PORT:-6380}"
+REDIS_DATA="$DATA_ROOT/redis"
+REDIS_PID="$DATA_ROOT/redis.pid"
+REDIS_LOG="$DATA_ROOT/redis.log"
 
 log() { printf '\033[1;36m[scarpline]\033[0m %s\n' "$*" >&2; }
 die() { printf '\033[1;31m[scarpline] error:\033[0m %s\n' "$*" >&2; exit 1; }
@@ -27,6 +32,12 @@ apt_install() {
 ensure_mariadb_installed() {
   if ! command -v mariadbd >/dev/null && [ ! -x /usr/sbin/mariadbd ]; then
     apt_install mariadb-server-core mariadb-client-core
+  fi
+}
+
+ensure_redis_installed() {
+  if ! command -v redis-server >/dev/null && [ ! -x /usr/bin/redis-server ]; then
+    apt_install redis-server
   fi
 }
 

@@ -185,7 +185,10 @@ describe("carrying a run from draft to sign-off in the browser", () => {
     await expect.poll(() => statusText(reviewer), WAIT).toContain("Signed off — below the required FS");
 
     // The engineer follows the sign-off notice; the run now offers no change.
-    const signedOff = await waitForMail(`Signed off: ${title} rev B`, "engineer@scarpline.test");
+    const signedOff = await waitForMail(
+      `Signed off — below the required FS: ${title} rev B`,
+      "engineer@scarpline.test",
+    );
     await engineer.goto(linkIn(signedOff));
     await expect
       .poll(() => statusText(engineer), WAIT)
@@ -213,7 +216,7 @@ describe("carrying a run from draft to sign-off in the browser", () => {
     await signInAs(admin, "admin@scarpline.test");
     await admin.getByRole("link", { name: "Mail log" }).click();
     const log = admin.getByTestId("mail-log");
-    await expect.poll(() => log.textContent(), WAIT).toContain(`Signed off: ${title} rev B`);
+    await expect.poll(() => log.textContent(), WAIT).toContain(`Signed off — below the required FS: ${title} rev B`);
     const text = (await log.textContent())!;
     expect(text).toContain(`Review requested: ${title}`);
     expect(text).toContain(`Returned with comments: ${title}`);

@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, test } from "vitest";
 import { signedIn, type AppClient } from "../support/http";
+import { pollJob } from "../support/jobs";
 import { getDb } from "@/db/index";
 import { DEMO_PROJECT } from "@/db/seeds/demo";
 import { DEMO_MATERIALS } from "@/db/seeds/demo-section";
@@ -35,21 +36,15 @@ async function createStudy(name: string): Promise<number> {
   return (await res.json()).study.id;
 }
 
-/** Reads the streamed NDJSON answer of a server sweep. */
-async function sweepOnServer(
-  studyId: number,
-  settings = DEFAULT_SWEEP,
-): Promise<{ lines: { type: string; done?: number; total?: number; sweep?: StoredSweep; mode?: string }[] }> {
+/** Queues a server sweep and polls its job until it ends (tests/support/jobs.ts). */
+async function sweepOnServer(studyId: number, settings = DEFAULT_SWEEP) {
   const res = await designer.request(`${base}/${studyId}/sweep`, { method: "POST", json: { settings } });
-  expect(res.status).toBe(200);
-  expect(res.headers.get("content-type")).toContain("application/x-ndjson");
-  const text = await res.text();
-  return {
-    lines: text
-      .trim()
-      .split("\n")
-      .map((l) => JSON.parse(l)),
-  };
+  const body = await res.json();
+  expect(res.status, JSON.stringify(body)).toBe(202);
+  const { job } = body;
+  const polled = await pollJob(designer, projectId, job.id);
+  expect(polled.job.state).toBe("done");
+  return { ...polled, sweep: polled.job.result as StoredSweep };
 }
 
 describe("design studies", () => {
@@ -88,16 +83,13 @@ describe("design studies", () => {
     ).toBe(403);
   });
 
-  test("a server sweep streams progress, runs in worker threads, keeps the result and agrees with the engine run here", async () => {
+  test("a server sweep runs as a queue job on a worker, reports progress and keeps the result", async () => {
     const id = await createStudy("Server sweep study");
-    const { lines } = await sweepOnServer(id);
-    const progress = lines.filter((l) => l.type === "progress");
-    expect(progress.length).toBeGreaterThan(10);
-    expect(progress.at(-1)).toMatchObject({ done: 30, total: 30 });
-    const done = lines.at(-1)!;
-    expect(done.type).toBe("done");
-    expect(done.mode).toBe("threads");
-    const sweep = done.sweep!;
+    const { sweep, seen, job: queued } = await sweepOnServer(id);
+    // Progress counts the sweep's jobs: 27 planned plus the recheck of the recommended pair under 3 cases.
+    expect(seen.some((p) => p.state === "running" && p.done > 0 && p.done < 30)).toBe(true);
+    expect(queued).toMatchObject({ done: 30, total: 30, attempts: 1 });
+    expect(sweep.ranOn).toBe("server");
     expect(sweep.points.filter((p) => p.phase === "sweep")).toHaveLength(27);
 
     // The same job run in this process with the engine gives the same FS (deterministic engine).
@@ -161,8 +153,7 @@ describe("design studies", () => {
 
   test("open as a run: a section at the point's ratios with the generated document, and a run re-checked by the server", async () => {
     const id = await createStudy("Open study");
-    const { lines } = await sweepOnServer(id, { ...DEFAULT_SWEEP, from: 3, to: 4, step: 0.5 });
-    const sweep = lines.at(-1)!.sweep!;
+    const { sweep } = await sweepOnServer(id, { ...DEFAULT_SWEEP, from: 3, to: 4, step: 0.5 });
     const reading = readSweep(sweep.points, {
       "steady-seepage": 1.5,
       "drawdown-storage": 1.3,

@@ -6,6 +6,8 @@ export default async function setup(project: TestProject) {
   const stack = await acquireStack(true);
   project.provide("dbName", stack.dbName);
   project.provide("appUrl", stack.appUrl);
+  project.provide("appEnv", stack.appEnv);
+  project.provide("workerPids", stack.workerPids);
   return releaseStack;
 }
 
@@ -13,5 +15,7 @@ declare module "vitest" {
   export interface ProvidedContext {
     dbName: string;
     appUrl: string;
+    appEnv: Record<string, string>;
+    workerPids: number[];
   }
 }

@@ -6,5 +6,7 @@ export default async function setup(project: TestProject) {
   const stack = await acquireStack(true);
   project.provide("dbName", stack.dbName);
   project.provide("appUrl", stack.appUrl);
+  project.provide("appEnv", stack.appEnv);
+  project.provide("workerPids", stack.workerPids);
   return releaseStack;
 }

@@ -2,22 +2,33 @@
  * The real stack the integration and browser tests talk to: a database of the run's own on the
  * project's MariaDB (created here, dropped at the end), the S3 fake on a free port with a bucket and
  * data folder of the run's own (scripts/s3-fake.ts), the SMTP fake on a free port with a mail
- * folder of the run's own (scripts/smtp-fake.ts), and the built app served on a free port.
+ * folder of the run's own (scripts/smtp-fake.ts), the job queue's Redis on a free port with two
+ * queue workers (tests/support/queue-processes.ts), and the built app served on a free port.
  * Shared by the integration and e2e projects: the first caller starts it, the last stops it.
  */
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { randomBytes } from "node:crypto";
-import { createServer } from "node:net";
 import path from "node:path";
 import fs from "node:fs";
 import os from "node:os";
 import knex from "knex";
 import { knexConfig } from "../../db/config";
 import { seedDemo } from "../../db/seeds/demo";
+import {
+  freePort,
+  startRedis,
+  startWorkerProcess,
+  stopProcess,
+  stopRedis,
+  type TestRedis,
+} from "../../scripts/lib/queue-processes";
 
 export interface Stack {
   dbName: string;
   appUrl: string;
+  /** The settings the app server runs with, so a test can start another app or worker like it. */
+  appEnv: Record<string, string>;
+  workerPids: number[];
 }
 
 const ROOT = path.resolve(__dirname, "../..");
@@ -30,22 +41,14 @@ interface State {
   server?: ChildProcess;
   s3?: FakeS3;
   smtp?: FakeSmtp;
+  redis?: TestRedis;
+  workers: ChildProcess[];
   dbName: string;
 }
 const g = globalThis as unknown as { scarplineStack?: State };
 
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = createServer();
-    srv.once("error", reject);
-    srv.listen(0, "127.0.0.1", () => {
-      const { port } = srv.address() as { port: number };
-      srv.close(() => resolve(port));
-    });
-  });
-}
-
-async function createDatabase(dbName: string): Promise<void> {
+/** A migrated, seeded database of the given name on the project's MariaDB. */
+export async function createDatabase(dbName: string): Promise<void> {
   const admin = knex({ ...knexConfig(), connection: { ...(knexConfig().connection as object), database: undefined } });
   try {
     await admin.raw(`CREATE DATABASE \`${dbName}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
@@ -61,7 +64,7 @@ async function createDatabase(dbName: string): Promise<void> {
   }
 }
 
-async function dropDatabase(dbName: string): Promise<void> {
+export async function dropDatabase(dbName: string): Promise<void> {
   const admin = knex({ ...knexConfig(), connection: { ...(knexConfig().connection as object), database: undefined } });
   try {
     await admin.raw(`DROP DATABASE IF EXISTS \`${dbName}\``);
@@ -71,10 +74,10 @@ async function dropDatabase(dbName: string): Promise<void> {
 }
 
 function buildApp(): void {
-  if (process.env.SCARPLINE_SKIP_BUILD === "1" && fs.existsSync(path.join(ROOT, DIST_DIR, "BUILD_ID"))) return;
-  // Server-side sweeps load the engine as one bundled module (scripts/build-engine.mjs).
+  // The queue workers and the engine threads load bundles (scripts/build-engine.mjs); a second's work, always redone.
   const engine = spawnSync(process.execPath, ["scripts/build-engine.mjs"], { cwd: ROOT, encoding: "utf8" });
   if (engine.status !== 0) throw new Error(`engine bundle failed:\n${engine.stdout}\n${engine.stderr}`);
+  if (process.env.SCARPLINE_SKIP_BUILD === "1" && fs.existsSync(path.join(ROOT, DIST_DIR, "BUILD_ID"))) return;
   const result = spawnSync(process.execPath, ["node_modules/next/dist/bin/next", "build"], {
     cwd: ROOT,
     env: { ...process.env, NEXT_DIST_DIR: DIST_DIR, NEXT_TELEMETRY_DISABLED: "1" },
@@ -218,39 +221,46 @@ async function stopFakeS3(fake: FakeS3): Promise<void> {
 
 async function start(withServer: boolean, state: State): Promise<Stack> {
   await createDatabase(state.dbName);
-  if (!withServer) return { dbName: state.dbName, appUrl: "" };
+  if (!withServer) return { dbName: state.dbName, appUrl: "", appEnv: {}, workerPids: [] };
   buildApp();
   state.s3 = await startFakeS3();
   state.smtp = await startFakeSmtp();
   // Test files read these too, to look into the bucket with their own S3 client and into the caught mail.
   Object.assign(process.env, s3Env(state.s3), smtpEnv(state.smtp));
+  state.redis = await startRedis(await freePort());
   const port = await freePort();
   const appUrl = `http://127.0.0.1:${port}`;
+  const appEnv: Record<string, string> = {
+    NODE_ENV: "production",
+    NEXT_DIST_DIR: DIST_DIR,
+    DATABASE_NAME: state.dbName,
+    NEXTAUTH_URL: appUrl,
+    APP_URL: appUrl,
+    NEXTAUTH_SECRET: randomBytes(24).toString("base64url"),
+    REDIS_PORT: String(state.redis.port),
+    // A worker killed mid-job hands it on after this (ms) instead of the production 30 s.
+    JOB_LOCK_MS: "3000",
+    ...s3Env(state.s3),
+    ...smtpEnv(state.smtp),
+  };
+  for (let i = 0; i < 2; i++) state.workers.push((await startWorkerProcess(appEnv)).process);
+  state.server = await startAppServer(appEnv, port);
+  return { dbName: state.dbName, appUrl, appEnv, workerPids: state.workers.map((w) => w.pid!) };
+}
+
+/** Serves the built app on the port with the given settings; resolves once it answers. */
+export async function startAppServer(appEnv: Record<string, string>, port: number): Promise<ChildProcess> {
   let output = "";
   const server = spawn(
     process.execPath,
     ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(port)],
-    {
-      cwd: ROOT,
-      env: {
-        ...process.env,
-        NODE_ENV: "production",
-        NEXT_DIST_DIR: DIST_DIR,
-        DATABASE_NAME: state.dbName,
-        NEXTAUTH_URL: appUrl,
-        APP_URL: appUrl,
-        NEXTAUTH_SECRET: randomBytes(24).toString("base64url"),
-        ...s3Env(state.s3),
-        ...smtpEnv(state.smtp),
-      },
-      stdio: ["ignore", "pipe", "pipe"],
-    },
+    { cwd: ROOT, env: { ...process.env, ...appEnv }, stdio: ["ignore", "pipe", "pipe"] },
   );
+  process.once("exit", () => server.kill("SIGKILL"));
   server.stdout?.on("data", (d) => (output += d));
   server.stderr?.on("data", (d) => (output += d));
-  state.server = server;
-  await waitForServer(appUrl, server, () => output);
-  return { dbName: state.dbName, appUrl };
+  await waitForServer(`http://127.0.0.1:${port}`, server, () => output);
+  return server;
 }
 
 /** Starts (or joins) the stack. The first caller decides whether the app server is needed. */
@@ -258,6 +268,7 @@ export function acquireStack(withServer: boolean): Promise<Stack> {
   if (!g.scarplineStack) {
     const state: State = {
       users: 0,
+      workers: [],
       dbName: `scarpline_test_${process.pid}_${randomBytes(3).toString("hex")}`,
       stack: Promise.resolve() as never,
     };
@@ -274,6 +285,8 @@ export async function releaseStack(): Promise<void> {
   if (--state.users > 0) return;
   g.scarplineStack = undefined;
   state.server?.kill("SIGTERM");
+  await Promise.all(state.workers.map((w) => stopProcess(w)));
+  if (state.redis) await stopRedis(state.redis);
   if (state.s3) await stopFakeS3(state.s3);
   if (state.smtp) {
     await stopChild(state.smtp.process);

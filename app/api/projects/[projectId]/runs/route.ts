@@ -18,7 +18,7 @@ export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
 /**
  * Keeps a run. The server searches the stored section version with the set-up itself and stores
  * its own result; the browser's result is a preview, and `preview` in the answer says whether it
- * matched (lib/run-records/save-run.ts).
+ * matched (lib/run-records/save-run.ts). A set-up past QUEUE_SEARCH_CIRCLES answers 202 with a job.
  */
 export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   const user = await requireUser();
@@ -35,5 +35,7 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
     preview: input.result,
     revisesRunId: input.revisesRunId ?? null,
   });
+  // A large search runs on the job queue: 202 with the job, which keeps the run when it ends.
+  if ("job" in kept) return NextResponse.json({ job: kept.job }, { status: 202 });
   return NextResponse.json({ run: { id: kept.id }, preview: kept.previewCheck }, { status: 201 });
 });

@@ -1,31 +1,47 @@
 import { NextResponse } from "next/server";
 import { apiRoute, parseJson } from "@/lib/api/handler";
 import { ApiError } from "@/lib/api/errors";
-import { storedSweepSchema } from "@/lib/design";
-import { recomputeBrowserSweep } from "@/lib/design/keep-sweep";
-import { saveDesignSweep } from "@/db/queries/design-studies";
+import { storedSweepSchema, type StoredSweep } from "@/lib/design";
+import { checkBrowserSweep } from "@/lib/design/keep-sweep";
+import { awaitJob } from "@/lib/jobs/await-job";
+import { designStudySubject, designSweepKind } from "@/lib/jobs/design-sweep-job";
+import { startJob } from "@/lib/jobs/start-job";
 import { fetchDesignContext } from "@/lib/design/design-context";
 import { requireStudy } from "../../study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };
 
+/** How long the request waits for the queue's run of the sweep before answering 202 with the job. */
+const WAIT_MS = 60_000;
+
 /**
- * Keeps a sweep computed in the browser as a preview: the server runs the same sweep itself and
- * keeps its own points; `preview` in the answer says where the browser's differed.
+ * Keeps a sweep computed in the browser as a preview: a queue worker runs the same sweep and the
+ * study keeps its points; `preview` in the answer says where the browser's differed. Should the
+ * queue be slow or down, the answer is 202 with the job, which keeps its points when it ends.
  */
 export const PUT = apiRoute(async (request: Request, { params }: Ctx) => {
-  const { study, projectId } = await requireStudy(params, "design.sweep");
+  const { study, projectId, userId } = await requireStudy(params, "design.sweep");
   const sent = await parseJson(request, storedSweepSchema);
   const context = await fetchDesignContext(projectId);
-  const kept = await recomputeBrowserSweep({
-    params: study.parameters,
-    materials: context.materials,
-    required: context.required,
-    sent,
-    isCancelled: () => request.signal.aborted,
+  const job = await startJob(designSweepKind, {
+    projectId,
+    subject: designStudySubject(study.id),
+    userId,
+    input: {
+      studyId: study.id,
+      params: study.parameters,
+      materials: context.materials,
+      settings: sent.settings,
+      required: context.required,
+      ranInBrowser: { elapsedMs: sent.elapsedMs, workers: sent.workers, finishedAt: sent.finishedAt },
+    },
   });
-  if (!kept)
-    throw new ApiError(409, "cancelled", "The request was closed before the sweep was checked; nothing was kept.");
-  await saveDesignSweep({ projectId, studyId: study.id, sweep: kept.sweep });
+  const ended = await awaitJob({ id: job.id, projectId }, { timeoutMs: WAIT_MS, signal: request.signal });
+  if (!ended) return NextResponse.json({ job }, { status: 202 });
+  if (ended.state === "cancelled")
+    throw new ApiError(409, "cancelled", "The check of the sweep was cancelled; nothing was kept.");
+  if (ended.state === "failed")
+    throw new ApiError(500, "job_failed", ended.error ?? "The server's run of the sweep failed.");
+  const kept = checkBrowserSweep(sent, ended.result as StoredSweep);
   return NextResponse.json({ saved: kept.sweep.points.length, sweep: kept.sweep, preview: kept.check });
 });
