@@ -11,7 +11,6 @@ import { CHECKLIST_KEYS, checklistHints, openChecklistItems } from "@/lib/review
 import { pinMarkers, toScreen, toWorld } from "@/lib/review/pin-markers";
 import { composeNotice } from "@/lib/mail/compose-notice";
 import { runsToCsv } from "@/lib/report/runs-csv";
-import { pdfSafe } from "@/lib/report/pdf-text";
 import type { RunStatus } from "@/lib/review/status";
 
 const author = { userId: 1, role: "engineer" as const };
@@ -194,9 +193,5 @@ describe("pins, notices and exports", () => {
     expect(lines[5].split(",")[1]).toBe("'-y");
     expect(lines[6].split(",")[1]).toBe("'@z");
     expect(lines[3]).toContain(",1.600,,yes,signed off,");
-  });
-
-  test("pdfSafe spells out what the standard fonts cannot draw", () => {
-    expect(pdfSafe("φ′ ≥ 30° — mα")).toBe("phi' >= 30° — m-alpha");
   });
 });
