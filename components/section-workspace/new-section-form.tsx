@@ -8,6 +8,7 @@ import { starterSection } from "@/lib/sections/starter";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
 import { ImportPanel } from "@/components/section-import/import-panel";
+import { SectionPreview } from "@/components/section-import/section-preview";
 
 const EMPTY: SectionDocument = { version: 1, materials: [], regions: [] } as unknown as SectionDocument;
 
@@ -99,6 +100,7 @@ export function NewSectionForm({ projectId }: { projectId: number }) {
           ) : imported ? (
             <p className="text-sm text-moss-700">✓ Imported: {imported.description}</p>
           ) : null}
+          {imported && imported.doc.regions.length > 0 ? <SectionPreview document={imported.doc} /> : null}
         </>
       ) : null}
       {error ? (
