@@ -59,6 +59,7 @@ describe("the reviewer's queue", () => {
       }
       await engineer.goto(appUrl("/projects"));
       expect(await engineer.getByTestId("my-drafts").textContent()).not.toContain(`Queue check A ${stamp}`);
+      await engineer.screenshot({ path: "test-results/engineer-dashboard.png", fullPage: true });
     });
 
     await signInAs(reviewer, "reviewer@scarpline.test");
@@ -83,6 +84,16 @@ describe("the reviewer's queue", () => {
         .click();
       await reviewer.waitForURL(new RegExp(`/projects/${older.projectId}/runs/${older.runId}/review$`));
       await reviewer.getByTestId("run-canvas").waitFor();
+      // The checklist and the decision sit beside the drawing; the slice table starts folded.
+      const canvasBox = (await reviewer.getByTestId("run-canvas").boundingBox())!;
+      const checklistBox = (await reviewer.getByTestId("check-geometry").boundingBox())!;
+      expect(checklistBox.x).toBeGreaterThan(canvasBox.x + canvasBox.width - 1);
+      expect(checklistBox.y).toBeLessThan(canvasBox.y + canvasBox.height);
+      const slices = reviewer.getByTestId("slice-table").first();
+      expect(await slices.evaluate((el) => (el as HTMLDetailsElement).open)).toBe(false);
+      await reviewer.screenshot({ path: "test-results/review-page.png", fullPage: true });
+      await reviewer.goto(appUrl("/projects"));
+      await reviewer.screenshot({ path: "test-results/reviewer-dashboard.png", fullPage: true });
     });
     expect(errors).toEqual([]);
   });
