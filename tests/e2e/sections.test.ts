@@ -85,11 +85,13 @@ describe("drawing and importing a section", () => {
     await signInAs(page, "engineer@scarpline.test");
     await openDemoProject(page);
     await page.getByRole("link", { name: /Main embankment/ }).click();
-    await page.getByTestId("import-input").setInputFiles({
-      name: "broken-geometry.csv",
-      mimeType: "text/csv",
-      buffer: Buffer.from("region,material,x,y\nbank,fill,0,0\nbank,,twelve,0\nbank,,6,4\n"),
-    });
+    await page
+      .getByTestId("import-input")
+      .setInputFiles({
+        name: "broken-geometry.csv",
+        mimeType: "text/csv",
+        buffer: Buffer.from("region,material,x,y\nbank,fill,0,0\nbank,,twelve,0\nbank,,6,4\n"),
+      });
     await expect.poll(() => page.getByTestId("import-problems").textContent()).toMatch(/Row 3, column x/);
     expect(await page.getByTestId("import-apply").isDisabled()).toBe(true);
     expect(await page.getByTestId("save-version").isDisabled()).toBe(true);
