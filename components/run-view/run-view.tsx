@@ -129,6 +129,7 @@ export function RunView({
         <div className="min-w-0 space-y-4">
           <PinnedCanvas markers={markers} placing={placing} onPlace={onPlace} active={activePin} onSelect={onSelectPin}>
             <RunCanvas
+              caution={false}
               document={doc}
               materialColors={colors}
               result={result}
@@ -158,6 +159,7 @@ export function RunView({
       {tables[method] ? (
         <SliceTable
           defaultOpen={slicesOpen}
+          caution={false}
           rows={tables[method]!.slices}
           meta={{
             method,
