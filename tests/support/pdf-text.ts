@@ -4,7 +4,8 @@ import { getDocument } from "pdfjs-dist/legacy/build/pdf.mjs";
 /** The text of each page of a PDF, runs of white space collapsed (read with pdf.js). */
 export async function pdfPages(bytes: ArrayBuffer | Uint8Array): Promise<string[]> {
   const doc = await getDocument({
-    data: new Uint8Array(bytes),
+    // A copy: pdf.js takes the buffer it is given, and the caller may read the same bytes again.
+    data: new Uint8Array(bytes).slice(),
     isEvalSupported: false,
     standardFontDataUrl: path.resolve("node_modules/pdfjs-dist/standard_fonts") + "/",
   }).promise;
