@@ -98,7 +98,7 @@ export function NewSectionForm({ projectId }: { projectId: number }) {
               </ul>
             </div>
           ) : imported ? (
-            <p className="text-sm text-moss-700">✓ Imported: {imported.description}</p>
+            <p className="text-sm text-moss-700">✓ {imported.description}</p>
           ) : null}
           {imported && imported.doc.regions.length > 0 ? <SectionPreview document={imported.doc} /> : null}
         </>

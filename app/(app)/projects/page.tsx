@@ -21,12 +21,15 @@ export default async function ProjectsPage() {
   ]);
   return (
     <>
-      <PageTitle title="Projects" kicker="Your work" />
+      <PageTitle title={queue || work ? "Your work" : "Projects"} />
       {queue || work ? (
-        <div className="mb-8 space-y-4" id="work">
-          {queue ? <ReviewerQueuePanel queue={queue} now={new Date()} /> : null}
-          {work ? <AuthorWorkPanel work={work} /> : null}
-        </div>
+        <>
+          <div className="mb-8 space-y-4" id="work">
+            {queue ? <ReviewerQueuePanel queue={queue} now={new Date()} /> : null}
+            {work ? <AuthorWorkPanel work={work} /> : null}
+          </div>
+          <h2 className="mb-3 text-lg font-semibold">Projects</h2>
+        </>
       ) : null}
       <ProjectList initialProjects={projects} canCreate={can(user.role, "projects.create")} />
     </>
