@@ -12,6 +12,18 @@ import { clipText, pdfSafe, wrapText } from "./pdf-text";
 const FONT_DIR = path.join(process.cwd(), "lib", "report", "fonts");
 const FONT_FILES = { regular: "DejaVuSansCondensed.ttf", bold: "DejaVuSansCondensed-Bold.ttf" } as const;
 
+// Read once per server process: every report embeds the same two files.
+const fontCache = new Map<string, Promise<Buffer>>();
+function fontBytes(file: string): Promise<Buffer> {
+  let bytes = fontCache.get(file);
+  if (!bytes) {
+    bytes = readFile(path.join(FONT_DIR, file));
+    fontCache.set(file, bytes);
+    bytes.catch(() => fontCache.delete(file));
+  }
+  return bytes;
+}
+
 export const A4: [number, number] = [595.28, 841.89];
 export const A4_LANDSCAPE: [number, number] = [841.89, 595.28];
 const MARGIN = 42;
@@ -47,9 +59,7 @@ export class ReportWriter {
     doc.setCreator("Scarpline");
     doc.setProducer("Scarpline calculation report (pdf-lib)");
     const [regular, bold] = await Promise.all(
-      [FONT_FILES.regular, FONT_FILES.bold].map(async (f) =>
-        doc.embedFont(await readFile(path.join(FONT_DIR, f)), { subset: true }),
-      ),
+      [FONT_FILES.regular, FONT_FILES.bold].map(async (f) => doc.embedFont(await fontBytes(f), { subset: true })),
     );
     const w = new ReportWriter(doc, regular, bold);
     w.newPage();
