@@ -57,6 +57,8 @@ describe("signing in as each role", () => {
 
     await page.getByRole("link", { name: "Projects" }).click();
     await page.getByRole("link", { name: "Lower Wendle Reservoir embankment" }).click();
+    // The project's card on the list also reads "3 members": wait for the project page first.
+    await page.waitForURL(/\/projects\/\d+$/);
     await page.getByRole("link", { name: "Members" }).click();
     await page.waitForURL(/\/members$/);
     await page.getByLabel("Person").selectOption({ label: "Demo Second Engineer (engineer2@scarpline.test)" });
