@@ -8,7 +8,7 @@ const config: Config = {
     extend: {
       colors: {
         paper: { DEFAULT: "#f6f4ef", raised: "#fffdf8", sunk: "#ece8df" },
-        ink: { DEFAULT: "#1f1d1a", soft: "#4a4640", faint: "#7b756c" },
+        ink: { DEFAULT: "#1f1d1a", soft: "#4a4640", faint: "#66605a" },
         rule: "#d9d3c7",
         clay: { 50: "#fbf1ea", 100: "#f4dccb", 500: "#b5562b", 600: "#9c4722", 700: "#7d391b" },
         moss: { 50: "#eef5ee", 600: "#2f6b3a", 700: "#24532d" },

@@ -1,7 +1,6 @@
 "use client";
 
 import { lineToText, type FormValues, type PhreaticOutcome, type PipingAtExits } from "@/lib/design";
-import { Caution } from "@/components/ui/caution";
 import { FieldError } from "@/components/ui/form-message";
 
 const SECONDS_PER_DAY = 86400;
@@ -163,7 +162,6 @@ export function SeepagePanel({ normal, flood, crestLength, values, errors, onCha
         <PoolSeepage outcome={normal} crestLength={crestLength} />
         <PoolSeepage outcome={flood} crestLength={crestLength} />
       </div>
-      <Caution compact />
       <details
         className="text-sm"
         open={Boolean(values["handLines.normal"] || values["handLines.flood"]) || normal.source === "none"}

@@ -6,6 +6,7 @@ import { formValuesFrom, type ParameterFormValues } from "@/lib/materials/parame
 import { FieldError, FormBanner } from "@/components/ui/form-message";
 import { useMaterialSave } from "./use-material-save";
 import { ParameterFields } from "./parameter-fields";
+import { isWaterLike } from "@/lib/sections/material-palette";
 
 export interface MaterialParametersFormProps {
   projectId: number;
@@ -62,7 +63,13 @@ export function MaterialParametersForm({ projectId, material, canEdit, onSaved }
             className="h-8 w-14 rounded border border-rule"
             value={color}
             onChange={(e) => setColor(e.target.value.toUpperCase())}
+            aria-describedby={isWaterLike(color) ? "material-color-water" : undefined}
           />
+          {isWaterLike(color) ? (
+            <p id="material-color-water" className="mt-1 max-w-48 text-xs text-alarm-700">
+              Blue is kept for water: drawings show this material in the palette&apos;s colour instead.
+            </p>
+          ) : null}
           <FieldError messages={fields.color} />
         </div>
       </fieldset>

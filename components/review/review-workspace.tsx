@@ -62,6 +62,45 @@ export function ReviewWorkspace({ run, review, mode, canRevise }: ReviewWorkspac
     </>
   );
 
+  const comments = (
+    <section className="panel space-y-3 p-4" aria-labelledby="comments-heading">
+      <h2 id="comments-heading" className="font-semibold">
+        Comments
+      </h2>
+      <CommentList comments={review.comments} active={active} onSelect={setActive} />
+      {review.may.comment ? (
+        <CommentForm
+          apiBase={apiBase}
+          sliceCounts={sliceCounts}
+          pin={pin}
+          placing={placing}
+          onPlacing={setPlacing}
+          onClearPin={() => setPin(null)}
+        />
+      ) : null}
+    </section>
+  );
+
+  // The reviewer works beside the drawing: checklist and decision in a column next to it, the
+  // comments under it, and the long slice table folded away below.
+  const reviewAside =
+    mode === "review" ? (
+      <>
+        <ChecklistPanel
+          key={review.checklist.map((c) => `${c.state}:${c.note}`).join("|")}
+          apiBase={apiBase}
+          items={review.checklist}
+          editable={review.may.checklist}
+        />
+        <DecisionForm
+          apiBase={apiBase}
+          actions={review.may.actions}
+          openItems={openItems}
+          belowRequired={isBelowRequired(run) ? { requiredFs: run.requiredFs, lowestFs: governingFsOf(run) } : null}
+        />
+      </>
+    ) : null;
+
   return (
     <div className="space-y-4">
       <ReviewStatusNote record={review.record} />
@@ -77,56 +116,26 @@ export function ReviewWorkspace({ run, review, mode, canRevise }: ReviewWorkspac
         activePin={active}
         onSelectPin={setActive}
         actions={links}
-      />
-      <div className="grid gap-4 lg:grid-cols-2">
-        <section className="panel space-y-3 p-4" aria-labelledby="comments-heading">
-          <h2 id="comments-heading" className="font-semibold">
-            Comments
-          </h2>
-          <CommentList comments={review.comments} active={active} onSelect={setActive} />
-          {review.may.comment ? (
-            <CommentForm
-              apiBase={apiBase}
-              sliceCounts={sliceCounts}
-              pin={pin}
-              placing={placing}
-              onPlacing={setPlacing}
-              onClearPin={() => setPin(null)}
-            />
-          ) : null}
-        </section>
-        <div className="space-y-4">
-          {mode === "review" ? (
-            <>
-              <ChecklistPanel
-                key={review.checklist.map((c) => `${c.state}:${c.note}`).join("|")}
-                apiBase={apiBase}
-                items={review.checklist}
-                editable={review.may.checklist}
-              />
-              <DecisionForm
-                apiBase={apiBase}
-                actions={review.may.actions}
-                openItems={openItems}
-                belowRequired={
-                  isBelowRequired(run) ? { requiredFs: run.requiredFs, lowestFs: governingFsOf(run) } : null
-                }
-              />
-            </>
-          ) : (
-            <AuthorActions
-              apiBase={apiBase}
-              projectId={run.projectId}
-              title={run.title}
-              may={{
-                submit: review.may.actions.includes("submit"),
-                rename: review.may.rename,
-                delete: review.may.delete,
-              }}
-            />
-          )}
+        aside={reviewAside}
+        slicesOpen={mode !== "review"}
+      >
+        {mode === "review" ? comments : null}
+      </RunView>
+      {mode === "run" ? (
+        <div className="grid gap-4 lg:grid-cols-2">
+          {comments}
+          <AuthorActions
+            apiBase={apiBase}
+            projectId={run.projectId}
+            title={run.title}
+            may={{
+              submit: review.may.actions.includes("submit"),
+              rename: review.may.rename,
+              delete: review.may.delete,
+            }}
+          />
         </div>
-      </div>
+      ) : null}
     </div>
   );
 }

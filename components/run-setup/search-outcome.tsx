@@ -121,6 +121,7 @@ export function SearchOutcome({
       {error ? <FormBanner kind="error">{error}</FormBanner> : null}
       {critical[method] ? (
         <SliceTable
+          caution={false}
           rows={critical[method]!.slices}
           meta={{
             title,

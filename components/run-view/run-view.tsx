@@ -35,6 +35,12 @@ export interface RunViewProps {
   onSelectPin?: (n: number) => void;
   /** Extra links or buttons beside the view's own. */
   actions?: React.ReactNode;
+  /** Shown beside the drawing on wide screens (the reviewer's checklist and decision). */
+  aside?: React.ReactNode;
+  /** Shown under the FS summary, beside the aside, above the slice table. */
+  children?: React.ReactNode;
+  /** Whether the slice table starts unfolded (default true). */
+  slicesOpen?: boolean;
 }
 
 /** A kept run exactly as it was saved: its frozen section, settings, critical circles and slices. */
@@ -47,6 +53,9 @@ export function RunView({
   activePin,
   onSelectPin,
   actions,
+  aside,
+  children,
+  slicesOpen = true,
 }: RunViewProps) {
   const result = run.result as StoredResult;
   const tables = run.sliceTables as StoredSlices;
@@ -117,28 +126,41 @@ export function RunView({
         ) : null}
         {actions}
       </div>
-      <PinnedCanvas markers={markers} placing={placing} onPlace={onPlace} active={activePin} onSelect={onSelectPin}>
-        <RunCanvas
-          document={doc}
-          materialColors={colors}
-          result={result}
-          method={method}
-          slices={tables[method]?.slices}
-          drawdownTo={drawdownTo}
-          requiredFs={run.requiredFs}
-          grid={doc.analysis?.grid}
-          radii={doc.analysis?.radii}
-          height={480}
-        />
-      </PinnedCanvas>
-      <FsSummary
-        result={result}
-        requiredFs={run.requiredFs}
-        minMAlpha={{ bishop: tables.bishop?.minMAlpha, fellenius: tables.fellenius?.minMAlpha }}
-        staged={staged}
-      />
+      <div className={aside ? "grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_26rem]" : ""}>
+        <div className="min-w-0 space-y-4">
+          <PinnedCanvas markers={markers} placing={placing} onPlace={onPlace} active={activePin} onSelect={onSelectPin}>
+            <RunCanvas
+              caution={false}
+              document={doc}
+              materialColors={colors}
+              result={result}
+              method={method}
+              slices={tables[method]?.slices}
+              drawdownTo={drawdownTo}
+              requiredFs={run.requiredFs}
+              grid={doc.analysis?.grid}
+              radii={doc.analysis?.radii}
+              height={480}
+            />
+          </PinnedCanvas>
+          <FsSummary
+            result={result}
+            requiredFs={run.requiredFs}
+            minMAlpha={{ bishop: tables.bishop?.minMAlpha, fellenius: tables.fellenius?.minMAlpha }}
+            staged={staged}
+          />
+          {children}
+        </div>
+        {aside ? (
+          <aside className="space-y-4 xl:sticky xl:top-4" aria-label="Review">
+            {aside}
+          </aside>
+        ) : null}
+      </div>
       {tables[method] ? (
         <SliceTable
+          defaultOpen={slicesOpen}
+          caution={false}
           rows={tables[method]!.slices}
           meta={{
             method,

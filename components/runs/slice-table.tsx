@@ -22,6 +22,8 @@ export interface SliceTableProps {
   meta: SliceCsvMeta;
   /** Show the engineering caution under the table (default true). */
   caution?: boolean;
+  /** Whether the table starts unfolded (default true); its heading folds and unfolds it. */
+  defaultOpen?: boolean;
 }
 
 /** Bishop's mα below this is flagged in the table (after Whitman & Bailey 1967, as the engine does). */
@@ -31,7 +33,7 @@ const LOW_M_ALPHA = 0.2;
 const download = (text: string, name: string) => downloadText(name, text, "text/csv");
 
 /** The slices of a critical circle: sortable by any column, with units, and downloadable as CSV. */
-export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
+export function SliceTable({ rows, meta, caution = true, defaultOpen = true }: SliceTableProps) {
   const method = meta.method;
   const staged = isStagedSlices(rows);
   const columns = useMemo(() => sliceColumns(method, staged), [method, staged]);
@@ -48,12 +50,17 @@ export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
     );
 
   return (
-    <section className="panel p-3" data-testid="slice-table">
-      <div className="mb-2 flex flex-wrap items-center justify-between gap-2">
-        <h3 className="text-sm font-semibold">
-          Slices of the critical circle, {METHOD_NAME[method]}{" "}
-          <span className="font-normal text-ink-faint">({rows.length} slices; forces per metre run)</span>
-        </h3>
+    <details className="panel group p-3" data-testid="slice-table" open={defaultOpen}>
+      <summary className="cursor-pointer list-none text-sm font-semibold marker:hidden">
+        <span aria-hidden="true" className="mr-1 inline-block transition-transform group-open:rotate-90">
+          ▸
+        </span>
+        Slices of the critical circle, {METHOD_NAME[method]}{" "}
+        <span className="font-normal text-ink-faint">
+          ({rows.length === 1 ? "1 slice" : `${rows.length} slices`}; forces per metre run)
+        </span>
+      </summary>
+      <div className="my-2 flex flex-wrap items-center justify-end gap-2">
         <button
           type="button"
           className="btn-quiet"
@@ -135,6 +142,6 @@ export function SliceTable({ rows, meta, caution = true }: SliceTableProps) {
           <Caution compact />
         </div>
       ) : null}
-    </section>
+    </details>
   );
 }

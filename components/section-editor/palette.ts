@@ -8,7 +8,7 @@ export const CANVAS_COLORS = {
   axisBand: "#f6f4ef",
   ink: "#1f1d1a",
   inkSoft: "#4a4640",
-  inkFaint: "#7b756c",
+  inkFaint: "#66605a",
   grid: "#e8e3d8",
   gridStrong: "#d9d3c7",
   accent: "#b5562b",
@@ -23,15 +23,3 @@ export const CANVAS_COLORS = {
 /** Regions are filled at this opacity so the grid and outlines show through. */
 export const REGION_FILL_OPACITY = 0.55;
 export const POND_FILL_OPACITY = 0.35;
-
-/** Colours offered for materials that have none; a colour-blind-safe sequence. */
-export const FALLBACK_MATERIAL_COLORS = [
-  "#e69f00",
-  "#009e73",
-  "#56b4e9",
-  "#f0e442",
-  "#cc79a7",
-  "#0072b2",
-  "#d55e00",
-  "#999999",
-];

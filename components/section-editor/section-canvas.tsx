@@ -16,7 +16,8 @@ import { GridLayer } from "./layers/grid-layer";
 import { IssueMarkersLayer } from "./layers/issue-markers-layer";
 import { OverlayLayer } from "./layers/overlay-layer";
 import { SectionLayer } from "./layers/section-layer";
-import { CANVAS_COLORS, FALLBACK_MATERIAL_COLORS } from "./palette";
+import { CANVAS_COLORS } from "./palette";
+import { materialColorMap } from "@/lib/sections/material-palette";
 import type { EditorIssue, MaterialSwatch, ToolName } from "./types";
 import type { Hover } from "./use-canvas-pointer";
 
@@ -41,13 +42,8 @@ export default function SectionCanvas(props: SectionCanvasProps) {
   const { width, height, view, doc, materials } = props;
   const colorOf = useMemo(() => {
     const known = new Map(materials.map((m) => [m.key, m.color]));
-    const docOrder = doc.materials.map((m) => m.id);
-    return (key: string) =>
-      known.get(key) ??
-      doc.materials.find((m) => m.id === key)?.color ??
-      (docOrder.includes(key)
-        ? FALLBACK_MATERIAL_COLORS[docOrder.indexOf(key) % FALLBACK_MATERIAL_COLORS.length]
-        : CANVAS_COLORS.unknownMaterial);
+    const own = materialColorMap(doc.materials);
+    return (key: string) => known.get(key) ?? own[key] ?? CANVAS_COLORS.unknownMaterial;
   }, [materials, doc.materials]);
 
   return (

@@ -24,6 +24,7 @@ export function ImportPanel({ knownMaterialIds, onApply }: ImportPanelProps) {
       // Materials first, so a geometry file dropped with them may name them.
       const ordered = [...files].sort((a, b) => Number(/mater/i.test(b.name)) - Number(/mater/i.test(a.name)));
       const ids = new Set(knownMaterialIds);
+      let materialsUnread = false;
       for (const file of ordered) {
         if (file.size > MAX_BYTES) {
           parsed.push({
@@ -39,10 +40,17 @@ export function ImportPanel({ knownMaterialIds, onApply }: ImportPanelProps) {
           });
           continue;
         }
-        const p = parseDroppedFile(file.name, await file.text(), [...ids]);
+        const p = parseDroppedFile(file.name, await file.text(), materialsUnread ? null : [...ids]);
         if (p.kind === "materials" && p.apply)
           for (const m of p.apply({ version: 1, materials: [], regions: [] } as unknown as SectionDocument).materials)
             ids.add(m.id);
+        // A rejected materials file still names its materials: the geometry is checked against those
+        // ids, so its own report is not buried under "unknown material" for every region.
+        else if (p.kind === "materials") {
+          for (const row of p.preview) if (row.cells.id) ids.add(row.cells.id.trim());
+          // Not even the ids could be read: the geometry's materials are checked once that file is fixed.
+          if (p.preview.length === 0) materialsUnread = true;
+        }
         parsed.push(p);
       }
       setDrops(parsed);

@@ -28,7 +28,8 @@ const COLUMNS: Record<string, string[]> = {
   materials: ["id", "name", "model", "gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum"],
 };
 
-export function parseDroppedFile(fileName: string, text: string, knownMaterialIds: string[]): ParsedDrop {
+/** `knownMaterialIds` null: the materials are not checked (their file was dropped but could not be read). */
+export function parseDroppedFile(fileName: string, text: string, knownMaterialIds: string[] | null): ParsedDrop {
   const kind = detectSectionFile(fileName, text);
   const base = {
     fileName,
@@ -39,7 +40,7 @@ export function parseDroppedFile(fileName: string, text: string, knownMaterialId
   };
   switch (kind) {
     case "geometry": {
-      const r = parseGeometryCsv(text, { knownMaterialIds });
+      const r = parseGeometryCsv(text, knownMaterialIds ? { knownMaterialIds } : {});
       if (!r.ok)
         return {
           ...base,
@@ -57,6 +58,7 @@ export function parseDroppedFile(fileName: string, text: string, knownMaterialId
         apply: (doc) => ({
           ...doc,
           regions: r.value.map((g) => ({
+            ...(g.name ? { name: g.name } : {}),
             material: g.material,
             points: g.points.map(([x, y]) => [x, y] as [number, number]),
           })),

@@ -9,6 +9,7 @@ import { fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
 import { FormProblem, useApiForm } from "@/components/ui/use-api-form";
 import { ImportPanel } from "@/components/section-import/import-panel";
+import { SectionPreview } from "@/components/section-import/section-preview";
 
 const EMPTY: SectionDocument = { version: 1, materials: [], regions: [] } as unknown as SectionDocument;
 
@@ -82,8 +83,9 @@ export function NewSectionForm({ projectId }: { projectId: number }) {
               </ul>
             </div>
           ) : imported ? (
-            <p className="text-sm text-moss-700">✓ Imported: {imported.description}</p>
+            <p className="text-sm text-moss-700">✓ {imported.description}</p>
           ) : null}
+          {imported && imported.doc.regions.length > 0 ? <SectionPreview document={imported.doc} /> : null}
         </>
       ) : null}
       {notice ? (

@@ -9,6 +9,7 @@ import * as m008 from "./008-run-water-condition";
 import * as m009 from "./009-below-required-sign-off";
 import * as m010 from "./010-sign-in-counters-and-session-versions";
 import * as m011 from "./011-jobs";
+import * as m012 from "./012-section-archive";
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -28,6 +29,7 @@ const migrations: Record<string, Migration> = {
   "009-below-required-sign-off": m009,
   "010-sign-in-counters-and-session-versions": m010,
   "011-jobs": m011,
+  "012-section-archive": m012,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

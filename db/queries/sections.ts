@@ -37,6 +37,8 @@ export async function fetchSectionsOfProject(projectId: number, db: Knex = getDb
       "s.current_version",
       "v.created_at",
       "u.name as user_name",
+      "s.archived_at",
+      db.raw("(select count(*) from runs r where r.section_id = s.id) as run_count"),
     )
     .orderBy("s.name");
   return rows.map((r: Record<string, unknown>) => ({
@@ -47,6 +49,8 @@ export async function fetchSectionsOfProject(projectId: number, db: Knex = getDb
     currentVersion: r.current_version as number,
     updatedAt: new Date(r.created_at as Date).toISOString(),
     updatedByName: r.user_name as string,
+    archivedAt: r.archived_at ? new Date(r.archived_at as Date).toISOString() : null,
+    runCount: Number(r.run_count),
   }));
 }
 
@@ -102,7 +106,16 @@ export async function fetchSectionVersion(
 
 /** Creates a section with its first version, in one transaction. */
 export async function createSection(
-  input: { projectId: number; name: string; description: string; document: unknown; summary: string; userId: number },
+  input: {
+    projectId: number;
+    name: string;
+    description: string;
+    document: unknown;
+    summary: string;
+    userId: number;
+    /** What generated the section (see migration 010), so it can be found again. */
+    originKey?: string;
+  },
   db: Knex = getDb(),
 ): Promise<number> {
   return db.transaction(async (trx) => {
@@ -113,6 +126,7 @@ export async function createSection(
         description: input.description,
         current_version: 1,
         created_by: input.userId,
+        origin_key: input.originKey ?? null,
       }),
     );
     await trx("section_versions").insert({
@@ -176,4 +190,39 @@ export async function saveSectionVersion(
     );
     return version;
   });
+}
+
+/** The section a generator made earlier in the project (migration 010's origin_key), if any. */
+export async function findSectionByOrigin(
+  projectId: number,
+  originKey: string,
+  db: Knex = getDb(),
+): Promise<number | null> {
+  const row = await db("sections").where({ project_id: projectId, origin_key: originKey }).first("id");
+  return row ? (row.id as number) : null;
+}
+
+/** Archives a section (userId) or brings it back (null). Its versions and runs stay as they are. */
+export async function setSectionArchived(sectionId: number, userId: number | null, db: Knex = getDb()): Promise<void> {
+  await db("sections")
+    .where({ id: sectionId })
+    .update(
+      userId === null ? { archived_at: null, archived_by: null } : { archived_at: db.fn.now(), archived_by: userId },
+    );
+}
+
+/** How many runs use a section: a section with runs is archived, never deleted. */
+export async function countRunsOfSection(sectionId: number, db: Knex = getDb()): Promise<number> {
+  const row = await db("runs").where({ section_id: sectionId }).count({ n: "*" }).first();
+  return Number(row?.n ?? 0);
+}
+
+/** Deletes a section no run uses, with its versions; false when runs use it (the trigger refuses too). */
+export async function deleteUnusedSection(sectionId: number, db: Knex = getDb()): Promise<boolean> {
+  try {
+    return (await db("sections").where({ id: sectionId }).delete()) > 0;
+  } catch (err) {
+    if (err instanceof Error && /section_in_use:/.test(err.message)) return false;
+    throw err;
+  }
 }

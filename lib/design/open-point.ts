@@ -6,7 +6,8 @@
 import { ApiError } from "../api/errors";
 import type { RunSetup } from "../analysis/run-setup";
 import { keepRunOnNewSection, type KeptRun } from "../run-records/save-run";
-import { createSection } from "@/db/queries/sections";
+import { createHash } from "node:crypto";
+import { createSection, findSectionByOrigin } from "@/db/queries/sections";
 import { freeSectionName } from "@/db/queries/design-studies";
 import type { Material } from "../stability";
 import { compareKeptPoint } from "./compare-sweep";
@@ -22,7 +23,7 @@ const ratioText = (n: number) => `${n.toFixed(2)}:1`;
 export interface OpenPointInput {
   projectId: number;
   userId: number;
-  study: { name: string; parameters: EmbankmentParams; sweep: StoredSweep };
+  study: { id: number; name: string; parameters: EmbankmentParams; sweep: StoredSweep };
   point: SweepPoint;
   materials: readonly Material[];
   required: RequiredFs;
@@ -48,10 +49,31 @@ async function pointSection(o: OpenPointInput) {
   };
 }
 
-/** The section only, for the editor. */
-export async function openPointInEditor(o: OpenPointInput): Promise<number> {
+/**
+ * What made a section: the study and the exact generated document, so the same point of the same
+ * sweep opens the section made the first time, while changed parameters make a new one.
+ */
+function originKey(studyId: number, document: unknown): string {
+  return `design-study:${studyId}:${createHash("sha256").update(JSON.stringify(document)).digest("hex").slice(0, 40)}`;
+}
+
+/** The section only, for the editor: the one opened from this point before, or a new one. */
+export async function openPointInEditor(o: OpenPointInput): Promise<{ sectionId: number; reused: boolean }> {
   const section = await pointSection(o);
-  return createSection({ ...section, projectId: o.projectId, userId: o.userId });
+  const key = originKey(o.study.id, section.document);
+  const earlier = await findSectionByOrigin(o.projectId, key);
+  if (earlier !== null) return { sectionId: earlier, reused: true };
+  try {
+    return {
+      sectionId: await createSection({ ...section, projectId: o.projectId, userId: o.userId, originKey: key }),
+      reused: false,
+    };
+  } catch (err) {
+    // Two clicks at once: the unique (project, origin) index lets one create it; the other opens it.
+    const made = await findSectionByOrigin(o.projectId, key);
+    if (made !== null) return { sectionId: made, reused: true };
+    throw err;
+  }
 }
 
 /** The run set-up that reproduces a point's search: its case, face, grid and radii, the sweep's density. */

@@ -331,7 +331,7 @@ export async function buildRunReport(input: ReportInput): Promise<Uint8Array> {
   w.paragraph(`${input.projectName} — ${run.sectionName} v${run.sectionVersion}`, { size: 11 });
   w.paragraph(`Report generated ${day(input.generatedAt)} by ${input.generatedBy}.`, { size: 8, color: SOFT });
   writeStatus(w, input);
-  w.box("Engineering caution", CAUTION_TEXT, ALARM);
+  w.cautionBox("Engineering caution", CAUTION_TEXT, ALARM);
   writeInputs(w, input);
   writeResults(w, input);
   writeMaterials(w, input);

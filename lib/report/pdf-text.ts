@@ -1,45 +1,32 @@
 /**
- * Text for the PDF's standard fonts, which encode WinAnsi (Windows-1252) only: Greek letters and
- * a few symbols the engineering text uses are spelt out, anything else unknown becomes "?".
+ * Text for the report's embedded font (DejaVu Sans Condensed, lib/report/fonts): it draws Greek
+ * letters, primes and the usual symbols, so they are kept as written. A character the font lacks
+ * is spelt out where there is a plain-text form, or becomes "?", never a blank box.
  */
 import type { PDFFont } from "pdf-lib";
 
 const SPELT: Record<string, string> = {
-  φ: "phi",
-  γ: "gamma",
-  α: "alpha",
-  σ: "sigma",
-  τ: "tau",
-  Σ: "Sum ",
-  θ: "theta",
-  β: "beta",
-  Δ: "Delta ",
-  "′": "'",
-  "″": '"',
-  "≥": ">=",
-  "≤": "<=",
-  "−": "-",
   "✓": "ok",
   "✕": "x",
-  "→": "->",
-  "←": "<-",
-  "≈": "~",
-  ᵣ: "r",
 };
 
-// Code points WinAnsi holds beyond Latin-1's printable range.
-const WIN_ANSI_EXTRA = new Set("€‚ƒ„…†‡ˆ‰Š‹ŒŽ‘’“”•–—˜™š›œžŸ");
+const charsets = new WeakMap<PDFFont, Set<number>>();
 
-function encodable(ch: string): boolean {
-  const c = ch.codePointAt(0)!;
-  return (c >= 0x20 && c <= 0x7e) || (c >= 0xa0 && c <= 0xff) || WIN_ANSI_EXTRA.has(ch);
+function charsetOf(font: PDFFont): Set<number> {
+  let set = charsets.get(font);
+  if (!set) {
+    set = new Set(font.getCharacterSet());
+    charsets.set(font, set);
+  }
+  return set;
 }
 
-/** The text with every character the standard fonts can draw; tabs and line breaks become spaces. */
-export function pdfSafe(text: string): string {
+/** The text with every character `font` can draw; tabs and line breaks become spaces. */
+export function pdfSafe(text: string, font: PDFFont): string {
+  const set = charsetOf(font);
   let out = "";
-  for (const ch of text.replace(/[\t\r\n]+/g, " ").replace(/mα/g, "m-alpha")) {
-    if (encodable(ch)) out += ch;
+  for (const ch of text.replace(/[\t\r\n]+/g, " ")) {
+    if (set.has(ch.codePointAt(0)!)) out += ch;
     else out += SPELT[ch] ?? "?";
   }
   return out;
@@ -47,7 +34,7 @@ export function pdfSafe(text: string): string {
 
 /** Splits text into lines no wider than `width` points; a word longer than a line is cut. */
 export function wrapText(text: string, font: PDFFont, size: number, width: number): string[] {
-  const words = pdfSafe(text).split(/ +/).filter(Boolean);
+  const words = pdfSafe(text, font).split(/ +/).filter(Boolean);
   const lines: string[] = [];
   let line = "";
   const fits = (s: string) => font.widthOfTextAtSize(s, size) <= width;
@@ -73,10 +60,10 @@ export function wrapText(text: string, font: PDFFont, size: number, width: numbe
   return lines.length ? lines : [""];
 }
 
-/** Fits one line into `width` points, ending it with "..." when it is too long. */
+/** Fits one line into `width` points, ending it with "…" when it is too long. */
 export function clipText(text: string, font: PDFFont, size: number, width: number): string {
-  let s = pdfSafe(text);
+  let s = pdfSafe(text, font);
   if (font.widthOfTextAtSize(s, size) <= width) return s;
-  while (s.length > 1 && font.widthOfTextAtSize(`${s}...`, size) > width) s = s.slice(0, -1);
-  return `${s}...`;
+  while (s.length > 1 && font.widthOfTextAtSize(`${s}…`, size) > width) s = s.slice(0, -1);
+  return `${s}…`;
 }

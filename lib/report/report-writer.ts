@@ -2,13 +2,32 @@
  * A small flowing layout over pdf-lib: headings, paragraphs, label–value rows and tables that
  * continue on a new page when the current one is full. Units are PDF points (1/72 in).
  */
-import { PDFDocument, PDFFont, PDFPage, StandardFonts, rgb, type RGB } from "pdf-lib";
+import { readFile } from "node:fs/promises";
+import path from "node:path";
+import { PDFDocument, PDFFont, PDFPage, rgb, type RGB } from "pdf-lib";
+import fontkit from "@pdf-lib/fontkit";
 import { clipText, pdfSafe, wrapText } from "./pdf-text";
+
+// Shipped with the app (licence in lib/report/fonts/LICENSE.txt): the standard PDF fonts cannot draw φ′, γ or mα.
+const FONT_DIR = path.join(process.cwd(), "lib", "report", "fonts");
+const FONT_FILES = { regular: "DejaVuSansCondensed.ttf", bold: "DejaVuSansCondensed-Bold.ttf" } as const;
+
+// Read once per server process: every report embeds the same two files.
+const fontCache = new Map<string, Promise<Buffer>>();
+function fontBytes(file: string): Promise<Buffer> {
+  let bytes = fontCache.get(file);
+  if (!bytes) {
+    bytes = readFile(path.join(FONT_DIR, file));
+    fontCache.set(file, bytes);
+    bytes.catch(() => fontCache.delete(file));
+  }
+  return bytes;
+}
 
 export const A4: [number, number] = [595.28, 841.89];
 export const A4_LANDSCAPE: [number, number] = [841.89, 595.28];
 const MARGIN = 42;
-const FOOTER = 30;
+const FOOTER = 34;
 
 export const INK = rgb(0.12, 0.12, 0.13);
 export const SOFT = rgb(0.38, 0.38, 0.4);
@@ -25,6 +44,8 @@ export interface TableColumn {
 export class ReportWriter {
   page!: PDFPage;
   y = 0;
+  /** Pages that carry the caution in full in their body; the footer does not repeat it there. */
+  private readonly cautionPages = new Set<PDFPage>();
   private constructor(
     readonly doc: PDFDocument,
     readonly regular: PDFFont,
@@ -33,14 +54,14 @@ export class ReportWriter {
 
   static async create(title: string): Promise<ReportWriter> {
     const doc = await PDFDocument.create();
-    doc.setTitle(pdfSafe(title));
+    doc.registerFontkit(fontkit);
+    doc.setTitle(title);
     doc.setCreator("Scarpline");
     doc.setProducer("Scarpline calculation report (pdf-lib)");
-    const w = new ReportWriter(
-      doc,
-      await doc.embedFont(StandardFonts.Helvetica),
-      await doc.embedFont(StandardFonts.HelveticaBold),
+    const [regular, bold] = await Promise.all(
+      [FONT_FILES.regular, FONT_FILES.bold].map(async (f) => doc.embedFont(await fontBytes(f), { subset: true })),
     );
+    const w = new ReportWriter(doc, regular, bold);
     w.newPage();
     return w;
   }
@@ -63,11 +84,12 @@ export class ReportWriter {
   }
 
   text(s: string, x: number, y: number, size: number, opts: { bold?: boolean; color?: RGB } = {}): void {
-    this.page.drawText(pdfSafe(s), {
+    const font = opts.bold ? this.bold : this.regular;
+    this.page.drawText(pdfSafe(s, font), {
       x,
       y,
       size,
-      font: opts.bold ? this.bold : this.regular,
+      font,
       color: opts.color ?? INK,
     });
   }
@@ -137,16 +159,28 @@ export class ReportWriter {
     this.y = top - height - 8;
   }
 
-  /** A table whose header repeats on each page it spans; cells too long are cut with "...". */
+  /** The caution in a box, marking the page so its footer does not say it again. */
+  cautionBox(title: string, body: string, color: RGB): void {
+    this.box(title, body, color);
+    this.cautionPages.add(this.page);
+  }
+
+  /**
+   * A table whose header repeats on each page it spans. Headers wrap onto as many lines as their
+   * column needs (a line break in a header, e.g. label then unit, is kept); only body cells too
+   * long for their column are cut with "…".
+   */
   table(columns: readonly TableColumn[], rows: readonly string[][], size = 8): void {
     const rowHeight = size + 4;
-    // A header may hold a line break (label, then unit), so narrow columns stay readable.
-    const headerLines = Math.max(...columns.map((c) => c.header.split("\n").length));
+    const headerText = columns.map((c) =>
+      c.header.split("\n").flatMap((part) => wrapText(part, this.bold, size, c.width - 4)),
+    );
+    const headerLines = Math.max(...headerText.map((lines) => lines.length));
     const drawHeader = () => {
       this.ensure(rowHeight * (headerLines + 1));
       let x = this.left;
-      for (const c of columns) {
-        c.header.split("\n").forEach((line, i) => {
+      for (const [ci, c] of columns.entries()) {
+        headerText[ci].forEach((line, i) => {
           const y = this.y;
           this.y -= i * (size + 2);
           this.cell(line, x, c, size, true);
@@ -185,23 +219,19 @@ export class ReportWriter {
     this.page.drawText(t, { x: tx, y: this.y - size, size, font, color: bold ? SOFT : INK });
   }
 
-  /** Writes the footer on every page and returns the file. */
+  /**
+   * Writes the footer on every page and returns the file. The caution appears once on each page:
+   * in full in the footer, except on a page whose body already holds it in a box.
+   */
   async finish(footer: string, caution: string): Promise<Uint8Array> {
     const pages = this.doc.getPages();
     pages.forEach((p, i) => {
       const w = p.getWidth();
-      p.drawLine({
-        start: { x: MARGIN, y: MARGIN + 14 },
-        end: { x: w - MARGIN, y: MARGIN + 14 },
-        thickness: 0.4,
-        color: RULE,
-      });
-      p.drawText(clipText(caution, this.regular, 6.5, w - 2 * MARGIN), {
-        x: MARGIN,
-        y: MARGIN + 4,
-        size: 6.5,
-        font: this.regular,
-        color: SOFT,
+      const lines = this.cautionPages.has(p) ? [] : wrapText(caution, this.regular, 6.5, w - 2 * MARGIN);
+      const top = MARGIN + 2 + Math.max(1, lines.length) * 8.5;
+      p.drawLine({ start: { x: MARGIN, y: top }, end: { x: w - MARGIN, y: top }, thickness: 0.4, color: RULE });
+      lines.forEach((line, n) => {
+        p.drawText(line, { x: MARGIN, y: top - 8.5 * (n + 1), size: 6.5, font: this.regular, color: SOFT });
       });
       const right = `page ${i + 1} of ${pages.length}`;
       p.drawText(clipText(footer, this.regular, 7, w - 2 * MARGIN - 70), {

@@ -22,7 +22,7 @@ export function writeSliceTable(
       { size: 7.5, color: SOFT },
     );
     if (method === "bishop" && table.minMAlpha !== null)
-      w.paragraph(`Smallest m-alpha on this circle: ${table.minMAlpha.toFixed(3)}.`, { size: 7.5, color: SOFT });
+      w.paragraph(`Smallest mα on this circle: ${table.minMAlpha.toFixed(3)}.`, { size: 7.5, color: SOFT });
     const staged = isStagedSlices(table.slices);
     if (staged)
       w.paragraph(
@@ -37,7 +37,7 @@ export function writeSliceTable(
     // Each other column gets at least its longest header word, then an equal share of what is left.
     const longestWord = (c: (typeof cols)[number]) =>
       Math.max(
-        ...pdfSafe(c.label)
+        ...pdfSafe(c.label, w.bold)
           .split(/ +/)
           .map((word) => w.bold.widthOfTextAtSize(word, 7)),
       ) + 6;

@@ -93,11 +93,14 @@ export function readCsvTable(
     else columns.set(name, index);
   });
   const missing = required.filter((name) => !columns.has(name));
+  const unknown = header.cells.filter((raw) => raw !== "" && !byLower.has(raw.toLowerCase()));
+  // Name what stands where the column should be ("x,elev"), so the fix is plain.
+  const instead = unknown.length ? ` The header has ${unknown.map((u) => `'${u}'`).join(", ")} instead.` : "";
   for (const name of missing)
     problems.push({
       row: header.row,
       column: name,
-      message: `Column '${name}' is missing from the header: ${headerText}.`,
+      message: `Column '${name}' is missing from the header: ${headerText}.${instead}`,
     });
   // Without a required column the rows cannot be read; listing every row's gap would only be noise.
   if (missing.length > 0) return null;

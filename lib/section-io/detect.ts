@@ -12,8 +12,9 @@ export function detectSectionFile(name: string, text: string): SectionFileKind {
     .toLowerCase()
     .split(/[;,]/)
     .map((c) => c.trim());
-  if (header.includes("region") && header.includes("x") && header.includes("y")) return "geometry";
+  // A header that is nearly right (x,elev) is still told apart, so its parser can name the missing column.
+  if (header.includes("region")) return "geometry";
   if (header.includes("model") || (header.includes("id") && header.includes("phi"))) return "materials";
-  if (header.length >= 2 && header[0] === "x" && header[1] === "y") return "phreatic";
+  if (header.length >= 2 && header[0] === "x") return "phreatic";
   return "unknown";
 }

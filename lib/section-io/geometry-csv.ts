@@ -118,22 +118,28 @@ function closeRegion(
       message: `Region '${d.label}' uses material '${d.material}', which the section does not define.`,
     });
   }
-  if (d.incomplete) return { material: d.material, points: kept.map((v) => v.p) };
+  const region: SectionRegion = { name: d.label, material: d.material, points: kept.map((v) => v.p) };
+  if (d.incomplete) return region;
   if (kept.length < 3)
     problems.push(
       at(`Region '${d.label}' has ${kept.length} point${kept.length === 1 ? "" : "s"}; a region needs at least 3.`),
     );
   else if (polygonArea(kept.map((v) => v.p)) < 1e-6)
     problems.push(at(`Region '${d.label}' has no area: its points lie on one line.`));
-  return { material: d.material, points: kept.map((v) => v.p) };
+  return region;
 }
 
 /**
- * Writes regions as a geometry CSV, the material on every row. Regions have no names in the
- * document, so rows are labelled `labels[i]` or "R1", "R2", ….
+ * Writes regions as a geometry CSV, the material on every row. Rows are labelled `labels[i]`, else
+ * the region's own name, else "R1", "R2", …; names that repeat fall back to the numbering.
  */
 export function geometryToCsv(regions: readonly SectionRegion[], labels?: readonly string[]): string {
-  const names = regions.map((_, i) => labels?.[i] ?? `R${i + 1}`);
+  const own = regions.map((r, i) => r.name?.trim() || `R${i + 1}`);
+  const names = labels
+    ? regions.map((_, i) => labels[i] ?? `R${i + 1}`)
+    : new Set(own).size === own.length
+      ? own
+      : regions.map((_, i) => `R${i + 1}`);
   // Equal labels would merge two regions (or split one) when the file is read back.
   if (new Set(names).size !== names.length) throw new Error("region labels must be unique");
   const rows = regions.flatMap((region, i) => {

@@ -10,6 +10,8 @@ export type Point = [number, number];
 export interface SectionRegion {
   material: string;
   points: Point[];
+  /** The region's name as the user gave it (the geometry CSV's region column). */
+  name?: string;
 }
 
 export interface MohrCoulombMaterial {

@@ -8,6 +8,10 @@ export interface SectionSummary {
   currentVersion: number;
   updatedAt: string;
   updatedByName: string;
+  /** When the section was archived; null while it is in use. */
+  archivedAt: string | null;
+  /** Runs kept on any version of the section. */
+  runCount: number;
 }
 
 export interface SectionVersionMeta {

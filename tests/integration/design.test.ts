@@ -192,6 +192,14 @@ describe("design studies", () => {
     const { section } = await editor.json();
     const stored = await getDb()("sections").where({ id: section.id }).first();
     expect(stored.name).toMatch(/\(2\)$/); // the first open took the plain name
+    // Opening the same point in the editor again opens that section instead of making a third.
+    const again = await designer.request(`${base}/${id}/open`, {
+      method: "POST",
+      json: { pointId: point.id, target: "editor" },
+    });
+    expect(again.status).toBe(200);
+    expect((await again.json()).section).toEqual({ id: section.id, reused: true });
+    expect((await getDb()("sections").where("name", "like", `${stored.name.slice(0, -4)}%`)).length).toBe(2);
 
     const unknown = await designer.request(`${base}/${id}/open`, {
       method: "POST",

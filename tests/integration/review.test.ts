@@ -1,6 +1,5 @@
-import path from "node:path";
 import { describe, expect, test } from "vitest";
-import { getDocument } from "pdfjs-dist/legacy/build/pdf.mjs";
+import { pdfPages, pdfText } from "../support/pdf-text";
 import { signedIn, type AppClient } from "../support/http";
 import { getDb } from "@/db/index";
 import { runGridSearch, type SectionDocument } from "@/lib/stability";
@@ -111,21 +110,6 @@ async function review(client: AppClient, demo: Demo, runId: number) {
 /** Mail caught by the run's own SMTP fake (tests/support/stack.ts) about one run. */
 async function mailAbout(runTitle: string): Promise<CaughtMail[]> {
   return (await listCaughtMail(process.env.SMTP_MAIL_DIR!)).filter((m) => m.subject.includes(runTitle));
-}
-
-async function pdfText(bytes: ArrayBuffer): Promise<string> {
-  const doc = await getDocument({
-    data: new Uint8Array(bytes),
-    isEvalSupported: false,
-    standardFontDataUrl: path.resolve("node_modules/pdfjs-dist/standard_fonts") + "/",
-  }).promise;
-  let text = "";
-  for (let i = 1; i <= doc.numPages; i++) {
-    const content = await (await doc.getPage(i)).getTextContent();
-    text += content.items.map((it) => ("str" in it ? it.str : "")).join(" ") + "\n";
-  }
-  await doc.destroy();
-  return text.replace(/\s+/g, " ");
 }
 
 // ---- the review life of a run ---------------------------------------------------------------
@@ -455,6 +439,14 @@ describe("review of a run, against MariaDB and the real SMTP fake", () => {
     expect(text).toContain(CAUTION_TEXT);
     expect(text).toContain("Slices of the critical circle");
     expect(text).toContain("Drawing D-102 rev C");
+    // The slice table's headers keep the trade's symbols (effective friction angle φ′, Bishop's mα:
+    // Bishop 1955, Géotechnique 5(1)), drawn by the embedded font rather than spelt out.
+    expect(text).toContain("φ′");
+    expect(text).toContain("mα");
+    expect(text).not.toMatch(/\bphi'|m-alpha/);
+    const pages = await pdfPages(bytes);
+    const squeeze = (s: string) => s.replace(/\s+/g, "");
+    for (const page of pages) expect(squeeze(page).split(squeeze(CAUTION_TEXT)).length - 1).toBe(1);
 
     const outsider = await signedIn("admin@scarpline.test");
     expect((await outsider.request(api(demo, runId, "/report"))).status).toBe(200);

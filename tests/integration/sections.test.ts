@@ -1,6 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { AppClient, signedIn } from "../support/http";
 import { demoProject } from "../support/demo";
+import { quickSetup, searchFor } from "../support/runs";
 import { getDb } from "@/db/index";
 import type { SectionDocument } from "@/lib/stability";
 
@@ -150,5 +151,73 @@ describe("sections and their versions", () => {
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toContain("text/csv");
     expect((await res.text()).split("\r\n")[0]).toBe("region,material,x,y");
+  });
+});
+
+describe("archiving sections", () => {
+  test("a section with runs is archived, not deleted; its runs stay; an unused one may be deleted", async () => {
+    const engineer = await signedIn("engineer@scarpline.test");
+    const reviewer = await signedIn("reviewer@scarpline.test");
+    const demo = await demoProject(engineer);
+    const base = `/api/projects/${demo.projectId}/sections`;
+    // A draft run on the demo section, kept as the run page keeps one.
+    const setup = quickSetup(demo.document, "downstream");
+    const kept = await engineer.request(`/api/projects/${demo.projectId}/runs`, {
+      method: "POST",
+      json: {
+        sectionId: demo.sectionId,
+        sectionVersion: demo.version,
+        title: `Archive check ${Date.now()}`,
+        setup,
+        result: searchFor(demo.document, setup),
+      },
+    });
+    expect(kept.status).toBe(201);
+    const runsBefore = await count("runs");
+
+    const refused = await engineer.request(`${base}/${demo.sectionId}`, { method: "DELETE" });
+    expect(refused.status).toBe(409);
+    expect((await refused.json()).error.message).toMatch(/runs? uses? this section.*archive it instead/);
+    expect(await count("runs")).toBe(runsBefore);
+    // Below the application, the database refuses the delete too (migration 010's trigger).
+    await expect(getDb()("sections").where({ id: demo.sectionId }).delete()).rejects.toThrow(/section_in_use/);
+
+    expect(
+      (await reviewer.request(`${base}/${demo.sectionId}/archive`, { method: "POST", json: { archived: true } }))
+        .status,
+    ).toBe(403);
+    const bad = await engineer.request(`${base}/${demo.sectionId}/archive`, {
+      method: "POST",
+      json: { archived: "yes" },
+    });
+    expect(bad.status).toBe(400);
+    const archived = await engineer.request(`${base}/${demo.sectionId}/archive`, {
+      method: "POST",
+      json: { archived: true },
+    });
+    expect(archived.status).toBe(200);
+    const listed = (await (await engineer.request(base)).json()).sections as {
+      id: number;
+      archivedAt: string | null;
+    }[];
+    expect(listed.find((s) => s.id === demo.sectionId)!.archivedAt).toMatch(/^\d{4}-\d\d-\d\d/);
+    expect(await count("runs")).toBe(runsBefore);
+    // The archived section still opens, with every version.
+    expect((await engineer.request(`${base}/${demo.sectionId}`)).status).toBe(200);
+    const restored = await engineer.request(`${base}/${demo.sectionId}/archive`, {
+      method: "POST",
+      json: { archived: false },
+    });
+    expect(restored.status).toBe(200);
+    const back = (await (await engineer.request(base)).json()).sections as { id: number; archivedAt: string | null }[];
+    expect(back.find((s) => s.id === demo.sectionId)!.archivedAt).toBeNull();
+
+    const created = await engineer.request(base, {
+      method: "POST",
+      json: { name: `Unused bank ${Date.now()}`, description: "", document: bank() },
+    });
+    const { section } = await created.json();
+    expect((await engineer.request(`${base}/${section.id}`, { method: "DELETE" })).status).toBe(204);
+    expect(await getDb()("sections").where({ id: section.id }).first()).toBeUndefined();
   });
 });

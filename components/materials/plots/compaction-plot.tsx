@@ -1,5 +1,6 @@
 import type { CompactionResult } from "@/lib/lab";
 import { formatTick, niceDomain } from "@/lib/scales";
+import { clipPolyline } from "@/lib/materials/clip-polyline";
 import { DataLine, DataPoints, PLOT_COLORS, PlotFrame } from "./plot-frame";
 
 /**
@@ -11,11 +12,15 @@ export function CompactionPlot({ result }: { result: CompactionResult }) {
   const x = niceDomain([...result.curve.map((c) => c[0]), ...result.points.map((p) => p.x)]);
   // The zero-air-voids line climbs steeply on the dry side; the frame follows the test data instead.
   const y = niceDomain([...result.points.map((p) => p.y), result.maxDryDensity, acceptance.dryDensity], { count: 4 });
+  // The zero-air-voids curve inside the chart's range only; its label sits at the curve's top end in view.
+  const zav = clipPolyline(result.zeroAirVoids, { x0: x[0], x1: x[1], y0: y[0], y1: y[1] });
+  const zavEnd = zav.flat().reduce<[number, number] | null>((top, p) => (!top || p[1] > top[1] ? p : top), null);
   return (
     <PlotFrame
       title="Compaction curve"
       x={{ domain: x, label: "Moisture content w (%)" }}
       y={{ domain: y, label: "Dry density ρd (Mg/m³)" }}
+      marks={(sx, sy) => <DataPoints points={result.points} sx={sx} sy={sy} />}
     >
       {(sx, sy) => {
         const left = sx(acceptance.dryLimit.moistureContent);
@@ -43,7 +48,9 @@ export function CompactionPlot({ result }: { result: CompactionResult }) {
               dashed
               width={1.2}
             />
-            <DataLine points={result.zeroAirVoids} sx={sx} sy={sy} color={PLOT_COLORS.second} dashed />
+            {zav.map((piece, i) => (
+              <DataLine key={i} points={piece} sx={sx} sy={sy} color={PLOT_COLORS.second} dashed />
+            ))}
             <DataLine points={result.curve} sx={sx} sy={sy} color={PLOT_COLORS.line} />
             <line
               x1={sx(result.optimumMoistureContent)}
@@ -53,10 +60,17 @@ export function CompactionPlot({ result }: { result: CompactionResult }) {
               stroke={PLOT_COLORS.accent}
               strokeDasharray="2 3"
             />
-            <DataPoints points={result.points} sx={sx} sy={sy} />
-            <text x={sx(x[1]) - 4} y={sy(y[1]) + 12} fontSize={9} textAnchor="end" fill={PLOT_COLORS.second}>
-              zero air voids, Gs {result.specificGravity}
-            </text>
+            {zavEnd ? (
+              <text
+                x={Math.min(sx(zavEnd[0]) + 4, sx(x[1]) - 4)}
+                y={sy(zavEnd[1]) + 12}
+                fontSize={9}
+                textAnchor={sx(zavEnd[0]) > (sx(x[0]) + sx(x[1])) / 2 ? "end" : "start"}
+                fill={PLOT_COLORS.second}
+              >
+                zero air voids, Gs {result.specificGravity}
+              </text>
+            ) : null}
           </>
         );
       }}

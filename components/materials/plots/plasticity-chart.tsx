@@ -17,6 +17,18 @@ export function PlasticityChart({ result }: { result: AtterbergResult }) {
       title="Plasticity chart"
       x={{ domain: [0, llMax], label: "Liquid limit LL (%)" }}
       y={{ domain: [0, piMax], label: "Plasticity index PI (%)" }}
+      marks={(sx, sy) => (
+        <circle
+          cx={sx(result.liquidLimit)}
+          cy={sy(result.plasticityIndex)}
+          r={5}
+          fill={PLOT_COLORS.points}
+          stroke="#1f1d1a"
+          strokeWidth={1}
+        >
+          <title>{`LL ${result.liquidLimit} %, PI ${result.plasticityIndex.toFixed(1)} %`}</title>
+        </circle>
+      )}
     >
       {(sx, sy) => (
         <>
@@ -86,16 +98,6 @@ export function PlasticityChart({ result }: { result: AtterbergResult }) {
               {t}
             </text>
           ))}
-          <circle
-            cx={sx(result.liquidLimit)}
-            cy={sy(result.plasticityIndex)}
-            r={5}
-            fill={PLOT_COLORS.points}
-            stroke="#1f1d1a"
-            strokeWidth={1}
-          >
-            <title>{`LL ${result.liquidLimit} %, PI ${result.plasticityIndex.toFixed(1)} %`}</title>
-          </circle>
         </>
       )}
     </PlotFrame>

@@ -1,4 +1,5 @@
-import { formatTick, linearScale, niceTicks, type Scale } from "@/lib/scales";
+import { formatTick, linearScale, niceTicks } from "@/lib/scales";
+import { clipPolyline } from "@/lib/materials/clip-polyline";
 
 /** Colours of the lab plots (Tol's muted scheme, as the material colours). */
 export const PLOT_COLORS = {
@@ -8,10 +9,15 @@ export const PLOT_COLORS = {
   band: "#DDCC77",
   accent: "#882255",
   grid: "#d9d3c7",
-  axis: "#7b756c",
+  axis: "#66605a",
 } as const;
 
-export type { Scale };
+/** Data to pixels; `range` is the frame's extent in pixels along the axis, so lines can end on it. */
+export type Scale = ((value: number) => number) & { range?: readonly [number, number] };
+
+function frameScale(domain: [number, number], range: [number, number]): Scale {
+  return Object.assign(linearScale(domain, range), { range });
+}
 
 export interface PlotAxis {
   domain: [number, number];
@@ -25,15 +31,18 @@ export interface PlotFrameProps {
   y: PlotAxis;
   width?: number;
   height?: number;
+  /** Lines and areas, kept inside the frame. */
   children: (sx: Scale, sy: Scale) => React.ReactNode;
+  /** Measured points, drawn over the frame unclipped, so a point on its edge shows whole. */
+  marks?: (sx: Scale, sy: Scale) => React.ReactNode;
 }
 
 const M = { left: 52, right: 14, top: 12, bottom: 40 };
 
 /** Axes, grid and tick labels of a small plot; the plot's marks are drawn by `children`. */
-export function PlotFrame({ title, x, y, width = 380, height = 260, children }: PlotFrameProps) {
-  const sx = linearScale(x.domain, [M.left, width - M.right]);
-  const sy = linearScale(y.domain, [height - M.bottom, M.top]);
+export function PlotFrame({ title, x, y, width = 380, height = 260, children, marks }: PlotFrameProps) {
+  const sx = frameScale(x.domain, [M.left, width - M.right]);
+  const sy = frameScale(y.domain, [height - M.bottom, M.top]);
   // A domain may run downward (test numbers down the page), so ticks take its ends in order.
   const xTicks = niceTicks(Math.min(...x.domain), Math.max(...x.domain), 6);
   const yTicks = niceTicks(Math.min(...y.domain), Math.max(...y.domain), 5);
@@ -41,6 +50,7 @@ export function PlotFrame({ title, x, y, width = 380, height = 260, children }: 
   return (
     <svg
       viewBox={`0 0 ${width} ${height}`}
+      overflow="visible"
       className="h-auto w-full max-w-md"
       role="img"
       aria-label={title}
@@ -91,6 +101,7 @@ export function PlotFrame({ title, x, y, width = 380, height = 260, children }: 
         {y.label}
       </text>
       <g clipPath={`url(#${clipId})`}>{children(sx, sy)}</g>
+      {marks ? <g>{marks(sx, sy)}</g> : null}
     </svg>
   );
 }
@@ -111,14 +122,23 @@ export function DataLine({
   dashed?: boolean;
   width?: number;
 }) {
+  const frame = sx.range && sy.range ? { x0: sx.range[0], x1: sx.range[1], y0: sy.range[0], y1: sy.range[1] } : null;
+  const pixels = points.map(([x, y]) => [sx(x), sy(y)] as [number, number]);
+  // Cut at the frame itself rather than hidden by the clip path, so the line ends on the frame.
+  const pieces = frame ? clipPolyline(pixels, frame) : [pixels];
   return (
-    <polyline
-      points={points.map(([x, y]) => `${sx(x)},${sy(y)}`).join(" ")}
-      fill="none"
-      stroke={color}
-      strokeWidth={width}
-      strokeDasharray={dashed ? "5 4" : undefined}
-    />
+    <>
+      {pieces.map((piece, i) => (
+        <polyline
+          key={i}
+          points={piece.map(([px, py]) => `${px},${py}`).join(" ")}
+          fill="none"
+          stroke={color}
+          strokeWidth={width}
+          strokeDasharray={dashed ? "5 4" : undefined}
+        />
+      ))}
+    </>
   );
 }
 

@@ -35,15 +35,15 @@ export function StrengthLinePlot({ title, xLabel, yLabel, points, line, second }
   const y = niceDomain([...points.map((p) => p.y), line[0][1], line[1][1], ...moreY], { includeZero: true });
   return (
     <div>
-      <PlotFrame title={title} x={{ domain: x, label: xLabel }} y={{ domain: y, label: yLabel }}>
-        {(sx, sy) => (
+      <PlotFrame
+        title={title}
+        x={{ domain: x, label: xLabel }}
+        y={{ domain: y, label: yLabel }}
+        marks={(sx, sy) => (
           <>
-            <DataLine points={extend(line, x[1])} sx={sx} sy={sy} color={PLOT_COLORS.line} />
             <DataPoints points={points} sx={sx} sy={sy} />
-            {second ? (
-              <>
-                <DataLine points={extend(second.line, x[1])} sx={sx} sy={sy} color={PLOT_COLORS.second} dashed />
-                {second.points.map((p, i) => (
+            {second
+              ? second.points.map((p, i) => (
                   <rect
                     key={i}
                     x={sx(p.x) - 3.5}
@@ -54,8 +54,16 @@ export function StrengthLinePlot({ title, xLabel, yLabel, points, line, second }
                     stroke={PLOT_COLORS.second}
                     strokeWidth={1.5}
                   />
-                ))}
-              </>
+                ))
+              : null}
+          </>
+        )}
+      >
+        {(sx, sy) => (
+          <>
+            <DataLine points={extend(line, x[1])} sx={sx} sy={sy} color={PLOT_COLORS.line} />
+            {second ? (
+              <DataLine points={extend(second.line, x[1])} sx={sx} sy={sy} color={PLOT_COLORS.second} dashed />
             ) : null}
           </>
         )}

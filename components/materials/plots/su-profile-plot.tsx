@@ -29,12 +29,10 @@ export function SuProfilePlot({ result }: { result: UndrainedStrengthResult }) {
       title="Undrained strength with depth"
       x={{ domain: x, label: "su (kPa)" }}
       y={{ domain: placed ? yDomain : [yDomain[1], yDomain[0]], label: placed ? "Elevation (m)" : "Test number" }}
+      marks={(sx, sy) => <DataPoints points={points} sx={sx} sy={sy} />}
     >
       {(sx, sy) => (
-        <>
-          <DataLine points={line} sx={sx} sy={sy} color={PLOT_COLORS.line} dashed={result.model === "constant"} />
-          <DataPoints points={points} sx={sx} sy={sy} />
-        </>
+        <DataLine points={line} sx={sx} sy={sy} color={PLOT_COLORS.line} dashed={result.model === "constant"} />
       )}
     </PlotFrame>
   );

@@ -74,7 +74,8 @@ function input(doc: SectionDocument, review: Partial<ReportInput["review"]>, sta
   return value;
 }
 
-describe("the calculation report of a staged drawdown signed off below the required FS", () => {
+// Embedding and subsetting the report's font takes a second or two on a busy machine.
+describe("the calculation report of a staged drawdown signed off below the required FS", { timeout: 20_000 }, () => {
   test("states each stage's FS, lists the impenetrable layer, and says signed off — below the required FS", async () => {
     const { doc, result } = smallStagedRun();
     const reason = "Accepted as the record of a failing case; redesign follows.";

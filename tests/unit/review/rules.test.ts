@@ -12,7 +12,6 @@ import { CHECKLIST_KEYS, checklistHints, openChecklistItems } from "@/lib/review
 import { pinMarkers, toScreen, toWorld } from "@/lib/review/pin-markers";
 import { composeNotice } from "@/lib/mail/compose-notice";
 import { runsToCsv } from "@/lib/report/runs-csv";
-import { pdfSafe } from "@/lib/report/pdf-text";
 import type { RunStatus } from "@/lib/review/status";
 
 const author = { userId: 1, role: "engineer" as const };
@@ -215,9 +214,5 @@ describe("pins, notices and exports", () => {
     const rows = Papa.parse<string[]>(csv.trimEnd(), { newline: "\r\n", delimiter: "," }).data;
     expect(rows.slice(3, 7).map((r) => r[1])).toEqual(["'=1+1", "'+x", "'-y", "'@z"]);
     expect(rows[3].slice(8, 12)).toEqual(["1.600", "", "yes", "signed off"]);
-  });
-
-  test("pdfSafe spells out what the standard fonts cannot draw", () => {
-    expect(pdfSafe("φ′ ≥ 30° — mα")).toBe("phi' >= 30° — m-alpha");
   });
 });

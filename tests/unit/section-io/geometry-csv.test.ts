@@ -16,6 +16,7 @@ describe("parseGeometryCsv: well-formed files (shape of docs/engine-io.md region
     if (!r.ok) return;
     expect(r.value).toEqual([
       {
+        name: "bank",
         material: "fill",
         points: [
           [0, 0],
@@ -24,6 +25,7 @@ describe("parseGeometryCsv: well-formed files (shape of docs/engine-io.md region
         ],
       },
       {
+        name: "bed",
         material: "clay",
         points: [
           [0, 0],
@@ -43,6 +45,7 @@ describe("parseGeometryCsv: well-formed files (shape of docs/engine-io.md region
     const r = parseGeometryCsv(text);
     expect(r.ok && r.value).toEqual([
       {
+        name: "bank",
         material: "fill",
         points: [
           [0, 0],
@@ -195,6 +198,7 @@ describe("geometryToCsv", () => {
     const back = parseGeometryCsv(text);
     expect(back.ok && back.value).toEqual([
       {
+        name: "=bank",
         material: "-fill",
         points: [
           [-1.5, -2],

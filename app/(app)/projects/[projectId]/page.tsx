@@ -70,7 +70,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
               : "An engineer or designer on this project adds the cross-sections to analyse."}
           </EmptyState>
         ) : (
-          <ProjectSections projectId={project.id} sections={sections} />
+          <ProjectSections projectId={project.id} sections={sections} canEdit={canEditSections} />
         )}
       </section>
 

@@ -8,6 +8,8 @@ import { summarizeChange } from "@/lib/sections/diff";
 import { saveSectionSchema } from "@/lib/validations/section";
 import {
   DuplicateSectionNameError,
+  countRunsOfSection,
+  deleteUnusedSection,
   fetchSection,
   fetchSectionVersion,
   saveSectionVersion,
@@ -59,4 +61,19 @@ export const PUT = apiRoute(async (request: Request, { params }: Ctx) => {
     if (err instanceof DuplicateSectionNameError) throw conflict(`${err.message} Choose another name.`);
     throw err;
   }
+});
+
+/** Deletes a section no run uses; a section with runs is archived instead, so its runs stay. */
+export const DELETE = apiRoute(async (_request: Request, { params }: Ctx) => {
+  const user = await requireUser();
+  const { projectId, sectionId } = await ids(params);
+  await requireProjectAccess(user, projectId, "section.edit");
+  if (!(await fetchSection(projectId, sectionId))) throw notFound("The section");
+  const runs = await countRunsOfSection(sectionId);
+  const refusal = (n: number) =>
+    conflict(`${n === 1 ? "1 run uses" : `${n} runs use`} this section, so it cannot be deleted; archive it instead.`);
+  if (runs > 0) throw refusal(runs);
+  // A run kept between the count and the delete is caught by the database's own guard (migration 010).
+  if (!(await deleteUnusedSection(sectionId))) throw refusal(await countRunsOfSection(sectionId));
+  return new NextResponse(null, { status: 204 });
 });

@@ -26,10 +26,10 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   const { materials, required } = await fetchDesignContext(projectId);
   const open = { projectId, userId, study: { ...study, sweep: study.sweep }, point, materials, required };
   if (input.target === "editor") {
-    const sectionId = await openPointInEditor(open);
+    const { sectionId, reused } = await openPointInEditor(open);
     return NextResponse.json(
-      { section: { id: sectionId }, location: `/projects/${projectId}/sections/${sectionId}` },
-      { status: 201 },
+      { section: { id: sectionId, reused }, location: `/projects/${projectId}/sections/${sectionId}` },
+      { status: reused ? 200 : 201 },
     );
   }
   const kept = await openPointAsRun(open);
