@@ -6,7 +6,7 @@
 import { describe, expect, it } from "vitest";
 import { readFileSync } from "node:fs";
 import path from "node:path";
-import type { SectionDocument } from "@/lib/stability";
+import { validateSection, type SectionDocument } from "@/lib/stability";
 import { documentForRun, runSetupSchema, type RunSetup } from "@/lib/analysis/run-setup";
 import { moveSharedVertex } from "@/lib/editor/document-edits";
 import { automaticSetup, keptSection, liveDocument, liveSetupFor } from "@/lib/live/live-setup";
@@ -39,7 +39,10 @@ function liveFs(preview: SectionDocument) {
 function fullRunFs(preview: SectionDocument) {
   const version = JSON.parse(JSON.stringify(keptSection(stored, preview, active))) as SectionDocument;
   const runSetup = runSetupSchema.parse(JSON.parse(JSON.stringify({ ...setup, waterCondition: active })));
-  const record = searchRecord(documentForRun(version, runSetup));
+  // lib/run-records/run-record.ts searches the validated document.
+  const valid = validateSection(documentForRun(version, runSetup));
+  if (!valid.ok) throw new Error("kept state is invalid");
+  const record = searchRecord(valid.section);
   if (!record.ok) throw new Error("full run failed");
   return record.result.results;
 }
