@@ -17,6 +17,7 @@ import { stagedView } from "@/lib/runs/staged-view";
 import { StatusBadge } from "@/components/run-list/status-badge";
 import { PinnedCanvas } from "@/components/review/pinned-canvas";
 import type { PinMarker } from "@/lib/review/pin-markers";
+import { WhatIfPanel } from "./what-if-panel";
 
 type Method = "bishop" | "fellenius";
 export type StoredResult = GridSearchSuccess & { setup: RunSetup };
@@ -135,6 +136,11 @@ export function RunView({
         requiredFs={run.requiredFs}
         minMAlpha={{ bishop: tables.bishop?.minMAlpha, fellenius: tables.fellenius?.minMAlpha }}
         staged={staged}
+      />
+      <WhatIfPanel
+        document={doc}
+        storedFs={Object.fromEntries(methods.map((m) => [m, result.results[m]!.fs]))}
+        engineVersion={run.engineVersion}
       />
       {tables[method] ? (
         <SliceTable

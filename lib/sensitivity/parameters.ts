@@ -165,3 +165,17 @@ const fmt = (p: InputParameter, v: number) => {
 export function describeChange(p: InputParameter, value: number, fsStored: number, fsNow: number): string {
   return `${p.label} ${fmt(p, p.stored)} → ${fmt(p, value)}: FS ${fsStored.toFixed(3)} → ${fsNow.toFixed(3)}`;
 }
+
+/** Every changed input in words, then the FS they give together; null when nothing changed. */
+export function describeChanges(
+  params: readonly InputParameter[],
+  values: ParameterValues,
+  fsStored: number,
+  fsNow: number,
+): string | null {
+  const changed = params.filter((p) => values[p.key] !== undefined && !Object.is(values[p.key], p.stored));
+  if (changed.length === 0) return null;
+  if (changed.length === 1) return describeChange(changed[0], values[changed[0].key], fsStored, fsNow);
+  const parts = changed.map((p) => `${p.label} ${fmt(p, p.stored)} → ${fmt(p, values[p.key])}`);
+  return `${parts.join(", ")}: FS ${fsStored.toFixed(3)} → ${fsNow.toFixed(3)}`;
+}
