@@ -17,6 +17,7 @@ import { drawSection } from "./section-drawing";
 import { waterUsedText } from "../runs/water-used";
 import { writeSliceTable } from "./slice-pages";
 import { VARIANT_TEXT, stageCells, stagedView } from "../runs/staged-view";
+import { writeSensitivity, type ReportSensitivity } from "./sensitivity-section";
 
 export interface ReportInput {
   projectName: string;
@@ -56,6 +57,8 @@ export interface ReportInput {
   sourcesFrozen: boolean;
   generatedAt: string;
   generatedBy: string;
+  /** Present when the reader asked for the sensitivity section. */
+  sensitivity?: ReportSensitivity;
 }
 
 const day = (iso: string | null) => (iso ? new Date(iso).toISOString().replace("T", " ").slice(0, 16) + " UTC" : "—");
@@ -338,6 +341,7 @@ export async function buildRunReport(input: ReportInput): Promise<Uint8Array> {
   writeResults(w, input);
   writeMaterials(w, input);
   writeReview(w, input);
+  if (input.sensitivity) writeSensitivity(w, input.sensitivity);
   writeSliceTable(w, run.sliceTables, run.result.methods);
   return w.finish(
     `Scarpline calculation report — run ${run.id}, ` +

@@ -10,6 +10,7 @@ import { automaticSetup, setupOnWater } from "@/lib/live/live-setup";
 import { drawnConditionId } from "@/lib/sections/water-condition-edits";
 import { keepScreenshotOnFailure, launchBrowser, signInAs, watchConsole } from "../support/browser";
 import { worldToScreen } from "../support/canvas";
+import { quickSetup } from "../support/runs";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -35,6 +36,26 @@ async function finalFs(page: Page): Promise<Fs> {
   return JSON.parse((await badge.getAttribute("data-fs"))!) as Fs;
 }
 
+/** Signs in, copies the demo section (the demo itself is read by other tests and must stay as seeded). */
+async function copyOfDemo(page: Page, name: string) {
+  await signInAs(page, "engineer@scarpline.test");
+  await page.getByRole("link", { name: "Lower Wendle Reservoir embankment" }).click();
+  await page.waitForURL(/\/projects\/\d+$/);
+  const { origin, pathname: projectPath } = new URL(page.url());
+  const api = `${origin}/api${projectPath}`;
+  const sections = (await (await page.request.get(`${api}/sections`)).json()).sections as {
+    id: number;
+    name: string;
+  }[];
+  const demo = sections.find((s) => s.name.startsWith("Main embankment"))!;
+  const demoDoc = (await (await page.request.get(`${api}/sections/${demo.id}`)).json()).document as SectionDocument;
+  const created = await page.request.post(`${api}/sections`, {
+    data: { name: `${name} ${Date.now()}`, document: demoDoc },
+  });
+  expect(created.status()).toBe(201);
+  return { origin, projectPath, api, demoDoc, sectionId: (await created.json()).section.id as number };
+}
+
 /** Drags a world point to another in small steps, as a hand does. */
 async function dragWorld(page: Page, from: [number, number], to: [number, number], steps = 20) {
   const a = await worldToScreen(page, "editor-canvas", from[0], from[1]);
@@ -50,23 +71,7 @@ describe("live check of a section", () => {
     const page = await browser.newPage({ viewport: { width: 1500, height: 1000 } });
     const errors = watchConsole(page);
     await keepScreenshotOnFailure(page, "live-check", async () => {
-      await signInAs(page, "engineer@scarpline.test");
-      await page.getByRole("link", { name: "Lower Wendle Reservoir embankment" }).click();
-      await page.waitForURL(/\/projects\/\d+$/);
-      const { origin, pathname: projectPath } = new URL(page.url());
-      const api = `${origin}/api${projectPath}`;
-      // A copy of the demo section: the demo itself is read by other tests and must stay as seeded.
-      const sections = (await (await page.request.get(`${api}/sections`)).json()).sections as {
-        id: number;
-        name: string;
-      }[];
-      const demo = sections.find((s) => s.name.startsWith("Main embankment"))!;
-      const demoDoc = (await (await page.request.get(`${api}/sections/${demo.id}`)).json()).document as SectionDocument;
-      const created = await page.request.post(`${api}/sections`, {
-        data: { name: `Live check trial ${Date.now()}`, document: demoDoc },
-      });
-      expect(created.status()).toBe(201);
-      const sectionId = (await created.json()).section.id as number;
+      const { origin, projectPath, api, demoDoc, sectionId } = await copyOfDemo(page, "Live check trial");
       await page.goto(`${origin}${projectPath}/sections/${sectionId}`);
       await page.getByTestId("section-editor").waitFor();
 
@@ -102,6 +107,45 @@ describe("live check of a section", () => {
       await page.getByRole("button", { name: "End live check" }).click();
       await page.waitForTimeout(1500);
       expect(await page.getByTestId("live-badge").count()).toBe(0);
+      expect(errors).toEqual([]);
+    });
+    await page.close();
+  });
+
+  test("the what-if panel gives the kept FS at the kept values, follows a slider, and resets", async () => {
+    const page = await browser.newPage({ viewport: { width: 1500, height: 1100 } });
+    const errors = watchConsole(page);
+    await keepScreenshotOnFailure(page, "what-if", async () => {
+      const { origin, projectPath, api, demoDoc, sectionId } = await copyOfDemo(page, "What-if trial");
+      const run = await page.request.post(`${api}/runs`, {
+        data: { sectionId, sectionVersion: 1, title: "What-if base run", setup: quickSetup(demoDoc, "downstream") },
+      });
+      expect(run.status()).toBe(201);
+      const runId = (await run.json()).run.id as number;
+      const kept = (await (await page.request.get(`${api}/runs/${runId}`)).json()).run as {
+        result: { results: Record<"bishop" | "fellenius", { fs: number }> };
+      };
+      const stored = kept.result.results.bishop.fs;
+      await page.goto(`${origin}${projectPath}/runs/${runId}`);
+      await page.getByRole("button", { name: "Try other values" }).click();
+      const out = page.getByTestId("what-if-fs");
+      const finalBishop = async () => {
+        await expect.poll(() => out.getAttribute("data-state"), { timeout: 30_000 }).toBe("final");
+        return (JSON.parse((await out.getAttribute("data-fs"))!) as Fs).bishop!;
+      };
+      // At the kept values the browser's search is the kept search: the same number, bit for bit.
+      expect(await finalBishop()).toBe(stored);
+
+      // A weaker fill gives a lower FS (common practice), said in words.
+      await page.locator('input[data-key="material:fill:phi"]').fill("21.5");
+      await expect
+        .poll(() => page.getByTestId("what-if-words").textContent(), { timeout: 30_000 })
+        .toMatch(/^φ′ of Compacted clay fill 25\.9° → 21\.5°: FS \d\.\d{3} → \d\.\d{3}$/);
+      expect(await finalBishop()).toBeLessThan(stored);
+
+      await page.getByTestId("what-if-reset").click();
+      await expect.poll(() => page.getByTestId("what-if-words").count()).toBe(0);
+      expect(await finalBishop()).toBe(stored);
       expect(errors).toEqual([]);
     });
     await page.close();
