@@ -110,12 +110,14 @@ async function main() {
 
     const l = stats.latencies;
     console.log(
-      `circles per search: ${searchCircleCount(setup.grid, setup.radii)} (no refinement), ${setup.slices} slices, both methods`,
+      `circles per search: ${searchCircleCount(setup.grid, setup.radii)} (no refinement), ` +
+        `${setup.slices} slices, both methods`,
     );
     console.log(`pointer moves: ${moves} in ${DRAG_SECONDS} s; answers shown: ${l.length}`);
     if (l.length === 0) throw new Error("no live answer arrived during the drag");
     console.log(
-      `update latency ms: p50 ${pct(l, 0.5).toFixed(1)}, p95 ${pct(l, 0.95).toFixed(1)}, max ${Math.max(...l).toFixed(1)}`,
+      `update latency ms: p50 ${pct(l, 0.5).toFixed(1)}, p95 ${pct(l, 0.95).toFixed(1)}, ` +
+        `max ${Math.max(...l).toFixed(1)}`,
     );
     console.log(`frame rate during the drag: ${stats.fps.toFixed(1)} per second`);
     console.log(`live_p95_ms=${Math.round(pct(l, 0.95))}`);

@@ -56,7 +56,7 @@ export function SensitivityCharts({ bars, baseFs, sweep }: SensitivityChartsProp
           <figcaption className="text-xs text-ink-soft">
             FS along {sweep.label}
             {sweep.crossing !== null
-              ? `: FS reaches ${sweep.requiredFs.toFixed(2)} at ${sweep.crossing.toFixed(2)}${sweep.unit ? ` ${sweep.unit}` : ""}`
+              ? `: FS reaches ${sweep.requiredFs.toFixed(2)} at ${sweep.crossing.toFixed(2)} ${sweep.unit}`
               : `: FS does not reach ${sweep.requiredFs.toFixed(2)} in this range`}
           </figcaption>
           <ResponsiveContainer width="100%" height={240}>

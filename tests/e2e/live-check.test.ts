@@ -11,6 +11,7 @@ import { drawnConditionId } from "@/lib/sections/water-condition-edits";
 import { keepScreenshotOnFailure, launchBrowser, signInAs, watchConsole } from "../support/browser";
 import { worldToScreen } from "../support/canvas";
 import { quickSetup } from "../support/runs";
+import { pdfText } from "../support/pdf-text";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -146,6 +147,20 @@ describe("live check of a section", () => {
       await page.getByTestId("what-if-reset").click();
       await expect.poll(() => page.getByTestId("what-if-words").count()).toBe(0);
       expect(await finalBishop()).toBe(stored);
+
+      // The tornado: the demo dam is one clay fill, so its φ′ or c′ leads (the fill carries the whole face).
+      await page.getByRole("button", { name: "Run the study" }).click();
+      await page.getByTestId("fs-line").waitFor({ timeout: 120_000 });
+      const order = JSON.parse((await page.getByTestId("tornado").getAttribute("data-order"))!) as string[];
+      expect(order[0]).toMatch(/of Compacted clay fill$/);
+      // The PDF, asked for with the section, carries it as the server searched it.
+      const pdf = await page.request.get(`${api}/runs/${runId}/report?sensitivity=10`, { timeout: 120_000 });
+      expect(pdf.status()).toBe(200);
+      const text = await pdfText(new Uint8Array(await pdf.body()).buffer);
+      expect(text).toContain("Sensitivity");
+      expect(text).toContain(order[0].replace(/^\S+ /, ""));
+      const bad = await page.request.get(`${api}/runs/${runId}/report?sensitivity=90`);
+      expect(bad.status()).toBe(400);
       expect(errors).toEqual([]);
     });
     await page.close();
