@@ -25,6 +25,8 @@ export function useLiveSearch(doc: SectionDocument | null): LiveDisplay<LiveAnsw
   const scheduler = useRef<LiveScheduler<SectionDocument, LiveAnswer> | null>(null);
   const frame = useRef<number | null>(null);
   const latest = useRef<{ doc: SectionDocument; at: number } | null>(null);
+  // The document of the newest request: until the next frame sends a changed one, the shown answer is not final.
+  const [sent, setSent] = useState<SectionDocument | null>(null);
 
   if (!scheduler.current) {
     const s = new LiveScheduler<SectionDocument, LiveAnswer>(
@@ -80,6 +82,7 @@ export function useLiveSearch(doc: SectionDocument | null): LiveDisplay<LiveAnsw
       const next = latest.current;
       if (!next) return;
       latest.current = null;
+      setSent(next.doc);
       const id = s.request(next.doc);
       changedAt.current.set(id, next.at);
     });
@@ -95,5 +98,6 @@ export function useLiveSearch(doc: SectionDocument | null): LiveDisplay<LiveAnsw
     [],
   );
 
+  if (display.state === "final" && doc !== sent) return { ...display, state: "settling" };
   return display;
 }
