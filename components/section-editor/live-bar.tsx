@@ -44,6 +44,7 @@ export function LiveBar({ on, onToggle, display, setup, circles, onKeep, canKeep
             data-generation={display.state === "off" ? undefined : display.generation}
             data-answered={answer ? (display as { answered: number }).answered : undefined}
             data-latency-ms={answer ? answer.latencyMs.toFixed(1) : undefined}
+            data-search-ms={answer ? answer.elapsedMs.toFixed(1) : undefined}
             data-fs={
               answer
                 ? JSON.stringify(Object.fromEntries(answer.outcome.ghosts.map((g) => [g.method, g.fs])))
