@@ -73,13 +73,14 @@ async function main() {
     // Record every answer shown and every frame painted, inside the page. Plain text: tsx would wrap
     // a function's inner helpers in its own naming calls, which do not exist in the page.
     await page.evaluate(`(() => {
-      const b = { latencies: [], searches: [], frames: 0, start: performance.now(), on: true };
+      const b = { latencies: [], searches: [], withFs: 0, frames: 0, start: performance.now(), on: true };
       window.__bench = b;
       const el = document.querySelector('[data-testid="live-badge"]');
       new MutationObserver(() => {
         const l = el.getAttribute("data-latency-ms");
         if (b.on && l) b.latencies.push(Number(l));
         if (b.on && l) b.searches.push(Number(el.getAttribute("data-search-ms")));
+        if (b.on && l && (el.getAttribute("data-fs") || "{}") !== "{}") b.withFs++;
       }).observe(el, { attributes: true, attributeFilter: ["data-answered"] });
       const tick = () => {
         if (!b.on) return;
@@ -89,7 +90,7 @@ async function main() {
       requestAnimationFrame(tick);
     })()`);
 
-    // The demo's downstream toe is at (92, 6); swing it between x = 86 and 100.
+    // The demo's downstream toe is at (92, 6); swing it out to x = 100 and back (inward the drain is in the way).
     const toe = await toScreen(page, 92, 6);
     const far = await toScreen(page, 100, 6);
     const span = far.x - toe.x;
@@ -99,14 +100,15 @@ async function main() {
     let moves = 0;
     while (Date.now() - t0 < DRAG_SECONDS * 1000) {
       const t = (Date.now() - t0) / 1000;
-      await page.mouse.move(toe.x + span * Math.sin(t * Math.PI), toe.y);
+      await page.mouse.move(toe.x + span * (0.5 - 0.5 * Math.cos(t * Math.PI)), toe.y);
       moves++;
     }
     const stats = (await page.evaluate(`(() => {
       const b = window.__bench;
       b.on = false;
-      return { latencies: b.latencies, searches: b.searches, fps: (b.frames * 1000) / (performance.now() - b.start) };
-    })()`)) as { latencies: number[]; searches: number[]; fps: number };
+      const fps = (b.frames * 1000) / (performance.now() - b.start);
+      return { latencies: b.latencies, searches: b.searches, withFs: b.withFs, fps };
+    })()`)) as { latencies: number[]; searches: number[]; withFs: number; fps: number };
     await page.mouse.up();
     await badge.waitFor();
 
@@ -115,7 +117,7 @@ async function main() {
       `circles per search: ${searchCircleCount(setup.grid, setup.radii)} (no refinement), ` +
         `${setup.slices} slices, both methods`,
     );
-    console.log(`pointer moves: ${moves} in ${DRAG_SECONDS} s; answers shown: ${l.length}`);
+    console.log(`pointer moves: ${moves} in ${DRAG_SECONDS} s; answers shown: ${l.length}, ${stats.withFs} with an FS`);
     if (l.length === 0) throw new Error("no live answer arrived during the drag");
     console.log(
       `update latency ms: p50 ${pct(l, 0.5).toFixed(1)}, p95 ${pct(l, 0.95).toFixed(1)}, ` +
