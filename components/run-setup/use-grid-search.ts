@@ -2,7 +2,7 @@
 
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { SectionDocument } from "@/lib/stability";
-import type { WorkerMessage } from "./grid-search.worker";
+import { createSearchWorker, type WorkerMessage } from "./search-worker";
 
 export type SearchState =
   | { status: "idle" }
@@ -26,7 +26,7 @@ export function useGridSearch() {
   const start = useCallback(
     (doc: SectionDocument) => {
       stop();
-      const w = new Worker(new URL("./grid-search.worker.ts", import.meta.url), { type: "module" });
+      const w = createSearchWorker();
       worker.current = w;
       const startedAt = performance.now();
       setState({ status: "running", fraction: 0, startedAt });

@@ -18,6 +18,8 @@ import { StatusBadge } from "@/components/run-list/status-badge";
 import { PinnedCanvas } from "@/components/review/pinned-canvas";
 import type { PinMarker } from "@/lib/review/pin-markers";
 import { formatDateTime } from "@/lib/format";
+import { WhatIfPanel } from "./what-if-panel";
+import { SensitivityPanel } from "./sensitivity-panel";
 
 type Method = "bishop" | "fellenius";
 export type StoredResult = GridSearchSuccess & { setup: RunSetup };
@@ -149,6 +151,22 @@ export function RunView({
             minMAlpha={{ bishop: tables.bishop?.minMAlpha, fellenius: tables.fellenius?.minMAlpha }}
             staged={staged}
           />
+          <WhatIfPanel
+            document={doc}
+            storedFs={Object.fromEntries(methods.map((m) => [m, result.results[m]!.fs]))}
+            engineVersion={run.engineVersion}
+          />
+          {methods[0] ? (
+            <SensitivityPanel
+              runId={run.id}
+              projectId={run.projectId}
+              title={run.title}
+              document={doc}
+              method={methods[0]}
+              baseFs={result.results[methods[0]]!.fs}
+              requiredFs={run.requiredFs}
+            />
+          ) : null}
           {children}
         </div>
         {aside ? (

@@ -14,6 +14,8 @@ import type { ViewTransform } from "@/lib/editor/view-transform";
 import { AxesLayer } from "./layers/axes-layer";
 import { GridLayer } from "./layers/grid-layer";
 import { IssueMarkersLayer } from "./layers/issue-markers-layer";
+import { LiveGhostLayer } from "./layers/live-ghost-layer";
+import type { LiveGhost } from "@/lib/live/live-ghosts";
 import { OverlayLayer } from "./layers/overlay-layer";
 import { SectionLayer } from "./layers/section-layer";
 import { CANVAS_COLORS } from "./palette";
@@ -36,6 +38,8 @@ export interface SectionCanvasProps {
   issues: EditorIssue[];
   focusedIssue: number | null;
   reservoirPreview: { y: number; x1: number; x2: number } | null;
+  /** Live mode's critical circles; settling ones are drawn fainter. */
+  live?: { ghosts: LiveGhost[]; settling: boolean } | null;
 }
 
 export default function SectionCanvas(props: SectionCanvasProps) {
@@ -59,6 +63,7 @@ export default function SectionCanvas(props: SectionCanvasProps) {
         hover={props.hover}
         reservoirPreview={props.reservoirPreview}
       />
+      {props.live ? <LiveGhostLayer ghosts={props.live.ghosts} view={view} settling={props.live.settling} /> : null}
       <IssueMarkersLayer issues={props.issues} view={view} focused={props.focusedIssue} />
       <AxesLayer view={view} width={width} height={height} />
     </Stage>

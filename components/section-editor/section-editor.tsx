@@ -21,6 +21,9 @@ import { useEditorDocument } from "./use-editor-document";
 import { useEditorKeys } from "./use-editor-keys";
 import { useView, ZOOM_STEP } from "./use-view";
 import { VertexTable } from "./vertex-table";
+import { LiveBar } from "./live-bar";
+import { useLiveSearch } from "@/components/run-setup/use-live-search";
+import { keptSection, liveCircleCount, liveDocument, liveSetupFor, type LiveSetup } from "@/lib/live/live-setup";
 import { WaterPanel } from "./water-panel";
 import { WaterConditionsPanel } from "./water-conditions-panel";
 import {
@@ -53,6 +56,7 @@ export function SectionEditor({
   issues = [],
   readOnly = false,
   height = 520,
+  live,
 }: SectionEditorProps) {
   const history = useEditorDocument(document, onChange);
   const stored = history.current();
@@ -82,6 +86,17 @@ export function SectionEditor({
   const ground = useMemo(() => groundSurface(shown.regions), [shown.regions]);
   const ponds = useMemo(() => pondedWater(shown.water?.phreatic ?? [], ground), [shown.water?.phreatic, ground]);
   const view = useView(containerRef, height, bounds, exaggeration);
+  // Live mode: the search set-up is fixed when it starts, so the grid does not move under the pointer.
+  const [liveSetup, setLiveSetup] = useState<LiveSetup | null>(null);
+  const liveDoc = useMemo(
+    () => (liveSetup ? liveDocument(keptSection(stored, shown, activeWater), liveSetup.setup, activeWater) : null),
+    [liveSetup, stored, shown, activeWater],
+  );
+  const liveDisplay = useLiveSearch(liveDoc);
+  const liveAnswer =
+    liveDisplay.state === "settling" || liveDisplay.state === "final"
+      ? { ghosts: liveDisplay.result.outcome.ghosts, settling: liveDisplay.state === "settling" }
+      : null;
 
   const setTool = (t: ToolName) => {
     if (t !== tool) setDraft(null);
@@ -257,10 +272,23 @@ export function SectionEditor({
                   issues={issues}
                   focusedIssue={focusedIssue}
                   reservoirPreview={reservoirPreview}
+                  live={liveAnswer}
                 />
               )}
             </div>
           </div>
+          {live ? (
+            <LiveBar
+              on={liveSetup !== null}
+              onToggle={() => setLiveSetup(liveSetup ? null : liveSetupFor(stored, live.lastRunSetup))}
+              display={liveDisplay}
+              setup={liveSetup}
+              circles={liveSetup ? liveCircleCount(liveSetup.setup) : 0}
+              onKeep={readOnly ? undefined : live.onKeep}
+              canKeep={live.canKeep ?? false}
+              keepLabel={live.keepLabel}
+            />
+          ) : null}
           <StatusBar tool={tool} hover={pointer.hover} message={message} />
           <ShortcutHelp />
         </div>

@@ -1,5 +1,6 @@
 import type { SectionDocument } from "@/lib/stability";
 import type { EditorIssue } from "@/lib/editor/issue-paths";
+import type { RunSetup } from "@/lib/analysis/run-setup";
 
 export type { EditorIssue };
 
@@ -21,6 +22,17 @@ export interface SectionEditorProps {
   readOnly?: boolean;
   /** Canvas height in px (default 520). */
   height?: number;
+  /** Live checking of the drawing; absent, the editor offers none. */
+  live?: LiveModeProps;
+}
+
+export interface LiveModeProps {
+  /** The set-up of the section's last kept run; null: an automatic search of the downstream face. */
+  lastRunSetup: RunSetup | null;
+  /** Keeps the drawing as a new section version through the usual save. */
+  onKeep?: () => void;
+  canKeep?: boolean;
+  keepLabel?: string;
 }
 
 export type ToolName = "select" | "region" | "phreatic" | "reservoir" | "pan";

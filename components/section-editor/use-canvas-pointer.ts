@@ -7,7 +7,7 @@ import { appendDraftPoint, closesDraft, type Draft } from "@/lib/editor/drafts";
 import { groundSurface } from "@/lib/editor/ground-surface";
 import { hitEdge, hitRegion, hitVertex } from "@/lib/editor/hit-testing";
 import { allVertices, ownerOf, pointAt, type Owner, type VertexRef } from "@/lib/editor/refs";
-import { sideOf } from "@/lib/editor/reservoir-level";
+import { setReservoirLevel, sideOf } from "@/lib/editor/reservoir-level";
 import { snapPoint, VERTEX_SNAP_PX, type SnapKind } from "@/lib/editor/snapping";
 import { screenToWorld, type ViewTransform } from "@/lib/editor/view-transform";
 import type { EditorActions, EditorContext } from "./editor-actions";
@@ -41,6 +41,15 @@ type Gesture =
       startY: number;
       moved: boolean;
       detach: boolean;
+      result: SectionDocument | null;
+    }
+  // The reservoir tool: a click sets the level; a press dragged up or down moves it, shown live, committed on release.
+  | {
+      kind: "pool";
+      side: "left" | "right";
+      y: number;
+      startY: number;
+      moved: boolean;
       result: SectionDocument | null;
     };
 
@@ -84,6 +93,13 @@ export function useCanvasPointer(deps: PointerDeps): {
     if (g?.kind === "drag") {
       if (g.moved && g.result) d.commit(g.result);
       d.setPreview(null);
+    }
+    if (g?.kind === "pool") {
+      d.setPreview(null);
+      if (g.moved && g.result) {
+        d.commit(g.result);
+        d.say(`Reservoir set at ${g.y.toFixed(2)} m on the ${g.side}.`);
+      } else d.actions.applyReservoir(g.side, g.y);
     }
     start(null);
   };
@@ -148,7 +164,8 @@ export function useCanvasPointer(deps: PointerDeps): {
       d.setDraft(step.draft);
       d.say(null);
     } else if (d.tool === "reservoir") {
-      d.actions.applyReservoir(sideOf(groundSurface(d.doc.regions), s.point[0]), s.point[1]);
+      const side = sideOf(groundSurface(d.doc.regions), s.point[0]);
+      start({ kind: "pool", side, y: s.point[1], startY: e.sy, moved: false, result: null });
     }
   };
 
@@ -157,6 +174,15 @@ export function useCanvasPointer(deps: PointerDeps): {
     if (g?.kind === "pan") {
       d.pan(e.sx - g.lastX, e.sy - g.lastY);
       gestureRef.current = { ...g, lastX: e.sx, lastY: e.sy };
+      return;
+    }
+    if (g?.kind === "pool") {
+      if (!g.moved && Math.abs(e.sy - g.startY) < DRAG_THRESHOLD_PX) return;
+      const s = snapped(d, view, e.sx, e.sy);
+      const r = setReservoirLevel(d.doc, g.side, s.point[1]);
+      gestureRef.current = r.ok ? { ...g, moved: true, y: s.point[1], result: r.doc } : { ...g, moved: true };
+      if (r.ok) d.setPreview(r.doc);
+      setHover({ world: s.world, snapped: s.point, snap: s.kind, overVertex: false });
       return;
     }
     if (g?.kind === "drag") {

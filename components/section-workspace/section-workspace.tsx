@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import type { SectionDetail } from "@/lib/sections/types";
 import type { SectionDocument } from "@/lib/stability";
+import type { RunSetup } from "@/lib/analysis/run-setup";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FormBanner } from "@/components/ui/form-message";
 import { SectionEditor } from "@/components/section-editor/section-editor";
@@ -18,10 +19,19 @@ export interface SectionWorkspaceProps {
   document: SectionDocument;
   materials: { key: string; name: string; color: string }[];
   canEdit: boolean;
+  /** The set-up of the section's last run, searched by the editor's live check; null: automatic. */
+  lastRunSetup?: RunSetup | null;
 }
 
 /** The section's drawing, its import and export, saving a version, and its history. */
-export function SectionWorkspace({ projectId, section, document: saved, materials, canEdit }: SectionWorkspaceProps) {
+export function SectionWorkspace({
+  projectId,
+  section,
+  document: saved,
+  materials,
+  canEdit,
+  lastRunSetup = null,
+}: SectionWorkspaceProps) {
   const router = useRouter();
   const [doc, setDoc] = useState<SectionDocument>(saved);
   const [summary, setSummary] = useState("");
@@ -94,6 +104,12 @@ export function SectionWorkspace({ projectId, section, document: saved, material
           materials={palette}
           issues={[...errors, ...warnings]}
           readOnly={!canEdit}
+          live={{
+            lastRunSetup,
+            onKeep: canEdit ? save : undefined,
+            canKeep: !busy && dirty && errors.length === 0,
+            keepLabel: `Keep as version ${section.currentVersion + 1}`,
+          }}
         />
         {canEdit ? (
           <div className="panel flex flex-wrap items-end gap-3 p-3" data-testid="save-bar">

@@ -18,6 +18,7 @@ import { waterUsedText } from "../runs/water-used";
 import { writeSliceTable } from "./slice-pages";
 import { VARIANT_TEXT, stageCells, stagedView } from "../runs/staged-view";
 import { formatCount, formatDateTime } from "../format";
+import { writeSensitivity, type ReportSensitivity } from "./sensitivity-section";
 
 export interface ReportInput {
   projectName: string;
@@ -57,6 +58,8 @@ export interface ReportInput {
   sourcesFrozen: boolean;
   generatedAt: string;
   generatedBy: string;
+  /** Present when the reader asked for the sensitivity section. */
+  sensitivity?: ReportSensitivity;
 }
 
 const day = (iso: string | null) => (iso ? formatDateTime(iso) : "—");
@@ -336,6 +339,7 @@ export async function buildRunReport(input: ReportInput): Promise<Uint8Array> {
   writeResults(w, input);
   writeMaterials(w, input);
   writeReview(w, input);
+  if (input.sensitivity) writeSensitivity(w, input.sensitivity);
   writeSliceTable(w, run.sliceTables, run.result.methods);
   return w.finish(
     `Scarpline calculation report — run ${run.id}, ` +

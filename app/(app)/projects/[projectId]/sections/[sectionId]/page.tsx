@@ -11,6 +11,8 @@ import { SectionWorkspace } from "@/components/section-workspace/section-workspa
 import { DocumentsPanel } from "@/components/documents/documents-panel";
 import type { SectionDocument } from "@/lib/stability";
 import { pageId } from "@/lib/api/ids";
+import { fetchLastRunSetup } from "@/db/queries/last-run-setup";
+import { runSetupSchema } from "@/lib/analysis/run-setup";
 
 export const metadata: Metadata = { title: "Section" };
 
@@ -24,6 +26,8 @@ export default async function SectionPage({ params }: { params: Promise<{ projec
   const current = await fetchSectionVersion(section.id, section.currentVersion);
   const doc = current!.document as SectionDocument;
   const base = `/projects/${access.project.id}`;
+  // Live checking searches as the last run did; a set-up that no longer parses gives way to the automatic one.
+  const lastSetup = runSetupSchema.safeParse(await fetchLastRunSetup(access.project.id, section.id));
   return (
     <>
       <PageTitle
@@ -50,6 +54,7 @@ export default async function SectionPage({ params }: { params: Promise<{ projec
         document={doc}
         materials={materialPalette(doc.materials)}
         canEdit={can(access.role, "section.edit")}
+        lastRunSetup={lastSetup.success ? lastSetup.data : null}
       />
       <section className="mt-8" aria-labelledby="section-documents">
         <h2 id="section-documents" className="mb-2 text-lg font-semibold">
