@@ -7,6 +7,7 @@ import * as m006 from "./006-review";
 import * as m007 from "./007-design-studies";
 import * as m008 from "./008-run-water-condition";
 import * as m009 from "./009-below-required-sign-off";
+import * as m011 from "./011-seepage";
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -24,6 +25,7 @@ const migrations: Record<string, Migration> = {
   "007-design-studies": m007,
   "008-run-water-condition": m008,
   "009-below-required-sign-off": m009,
+  "011-seepage": m011,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {
