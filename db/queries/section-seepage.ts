@@ -12,7 +12,9 @@ export async function fetchSeepageSettings(
   waterConditionId: string,
   db: Knex = getDb(),
 ): Promise<SeepageSettingsInput> {
-  const row = await db("section_seepage").where({ section_id: sectionId, water_condition_id: waterConditionId }).first();
+  const row = await db("section_seepage")
+    .where({ section_id: sectionId, water_condition_id: waterConditionId })
+    .first();
   if (!row) return EMPTY_SEEPAGE_SETTINGS;
   // Stored rows passed the same schema when saved; parsing again keeps old rows readable if it grows.
   const parsed = seepageSettingsInputSchema.safeParse(JSON.parse(row.settings as string));

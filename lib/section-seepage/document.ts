@@ -32,6 +32,10 @@ export function buildSeepageDocument(
   const materials = section.materials.map((m, i) => {
     if (m.model === "impenetrable") return { ...m };
     const c = byKey.get(m.id);
+    // k lives in the library only: a value left in an older section copy must not win over it.
+    const own: SeepageDocument["materials"][number] = { ...m };
+    delete own.k;
+    delete own.kRatio;
     if (used.has(m.id) && c?.k === undefined)
       errors.push({
         path: `materials[${i}].k`,
@@ -39,7 +43,11 @@ export function buildSeepageDocument(
           `Material '${m.id}'${m.name ? ` (${m.name})` : ""} has no hydraulic conductivity kh: ` +
           "set it in the materials library (typed, or from a permeability test set).",
       });
-    return { ...m, ...(c?.k !== undefined ? { k: c.k } : {}), ...(c?.kRatio !== undefined ? { kRatio: c.kRatio } : {}) };
+    return {
+      ...own,
+      ...(c?.k !== undefined ? { k: c.k } : {}),
+      ...(c?.kRatio !== undefined ? { kRatio: c.kRatio } : {}),
+    };
   });
   if (errors.length > 0) return { ok: false, errors };
 

@@ -1,0 +1,100 @@
+import { describe, expect, it } from "vitest";
+import { validateSection, type SectionDocument } from "@/lib/stability";
+import { runSeepage } from "@/lib/seepage";
+import { checkWaterConditions } from "@/lib/sections/check-water-conditions";
+import { waterConditionsOf } from "@/lib/sections/water-conditions";
+import { buildSeepageDocument } from "@/lib/section-seepage/document";
+import { checkDrains } from "@/lib/section-seepage/check-drains";
+import { toEngineMaterial } from "@/lib/materials/engine-material";
+import { checkAndDeriveLabTest } from "@/lib/materials/lab-derive";
+import type { MaterialConductivity } from "@/lib/section-seepage/types";
+import {
+  CORE_PERMEABILITY_SET,
+  ZONED_MATERIALS,
+  ZONED_POOL,
+  ZONED_SEEPAGE_SETTINGS,
+  buildZonedDamSection,
+} from "@/db/seeds/demo-zoned-dam";
+
+const coreK = (() => {
+  const o = checkAndDeriveLabTest("permeability", CORE_PERMEABILITY_SET.data);
+  if (!o.ok || o.record.kind !== "permeability") throw new Error("demo permeability set");
+  return Number(o.record.result.k.toPrecision(2));
+})();
+const library: MaterialConductivity[] = ZONED_MATERIALS.map((m) => {
+  const p = m.parameters as { k?: number; kRatio?: number };
+  return { key: m.key, name: m.name, k: m.key === "core" ? coreK : p.k, kRatio: p.kRatio };
+});
+const section = buildZonedDamSection(ZONED_MATERIALS.map((m) => toEngineMaterial({ ...m })));
+const condition = waterConditionsOf(section)[0];
+
+describe("the demo zoned dam", () => {
+  it("is a section the engine accepts, with valid water conditions", () => {
+    expect(validateSection(section).ok).toBe(true);
+    expect(checkWaterConditions(section as SectionDocument).errors).toEqual([]);
+    expect(checkDrains(section, ZONED_SEEPAGE_SETTINGS)).toEqual({});
+  });
+
+  it("takes the core's kh from its falling-head set: of the order of a rolled clay core", () => {
+    // Compacted clay cores are about 10⁻⁹ to 10⁻⁸ m/s (common practice; Cedergren, from memory).
+    expect(coreK).toBeGreaterThan(1e-9);
+    expect(coreK).toBeLessThan(1e-8);
+  });
+
+  it("solves to a flow net whose flows balance and whose pool stands in the upstream shell", () => {
+    const built = buildSeepageDocument(section, condition, library, ZONED_SEEPAGE_SETTINGS);
+    if (!built.ok) throw new Error(JSON.stringify(built.errors));
+    const run = runSeepage(built.document);
+    if (!run.ok) throw new Error(JSON.stringify(run.errors));
+    const s = run.solution;
+    // Inflow and outflow balance within 1 % (issue 14, item 2: conservation of water).
+    expect(Math.abs(s.qIn - s.qOut) / s.q).toBeLessThan(0.01);
+    // q and qTotal are each rounded to six significant figures.
+    expect(Math.abs(s.qTotal! / (s.q * 320) - 1)).toBeLessThan(1e-5);
+    // A shell a thousand times more pervious than the core loses almost no head: the phreatic
+    // surface stays near the pool up to the core (fact of the trade for zoned dams).
+    const atCoreFace = s.phreatic.filter(([x]) => x > 55 && x < 62).map(([, y]) => y);
+    expect(Math.min(...atCoreFace)).toBeGreaterThan(ZONED_POOL - 1);
+    // The head lost is pool minus tailwater, and the hand check k·ΔH·Nf/Nd is of the same order as q.
+    expect(s.flowNet.deltaH).toBeCloseTo(ZONED_POOL - 6, 6);
+    expect(s.flowNet.qFlowNet / s.q).toBeGreaterThan(0.5);
+    expect(s.flowNet.qFlowNet / s.q).toBeLessThan(2);
+    expect(s.exitGradients.length).toBeGreaterThan(0);
+  });
+});
+
+describe("buildSeepageDocument", () => {
+  it("names a material with no kh in the library and where to set it", () => {
+    const noCore = library.map((c) => (c.key === "core" ? { key: c.key, name: c.name } : c));
+    const built = buildSeepageDocument(section, condition, noCore, ZONED_SEEPAGE_SETTINGS);
+    expect(built.ok).toBe(false);
+    if (!built.ok) {
+      expect(built.errors).toHaveLength(1);
+      expect(built.errors[0].path).toBe("materials[0].k");
+      expect(built.errors[0].message).toMatch(/'core'.*materials library/);
+    }
+  });
+
+  it("takes the pool from the water condition and the tailwater only on a dry side", () => {
+    const built = buildSeepageDocument(section, condition, library, ZONED_SEEPAGE_SETTINGS);
+    expect(built.ok && built.document.seepage.pools).toEqual([
+      { side: "left", level: ZONED_POOL },
+      { side: "right", level: 6 },
+    ]);
+  });
+});
+
+describe("checkDrains", () => {
+  it("names a drain point outside the section", () => {
+    const fields = checkDrains(section, {
+      drains: [
+        [
+          [108, 6],
+          [150, 6],
+        ],
+      ],
+    });
+    expect(Object.keys(fields)).toEqual(["settings.drains[0][1]"]);
+    expect(fields["settings.drains[0][1]"][0]).toMatch(/Drain 1, point 2 \(150, 6\) lies outside the section/);
+  });
+});
