@@ -5,6 +5,7 @@ import { checkWaterConditions } from "@/lib/sections/check-water-conditions";
 import { waterConditionsOf } from "@/lib/sections/water-conditions";
 import { buildSeepageDocument } from "@/lib/section-seepage/document";
 import { checkDrains } from "@/lib/section-seepage/check-drains";
+import { drainsFromText, drainsToText } from "@/lib/section-seepage/drain-text";
 import { toEngineMaterial } from "@/lib/materials/engine-material";
 import { checkAndDeriveLabTest } from "@/lib/materials/lab-derive";
 import type { MaterialConductivity } from "@/lib/section-seepage/types";
@@ -96,5 +97,36 @@ describe("checkDrains", () => {
     });
     expect(Object.keys(fields)).toEqual(["settings.drains[0][1]"]);
     expect(fields["settings.drains[0][1]"][0]).toMatch(/Drain 1, point 2 \(150, 6\) lies outside the section/);
+  });
+});
+
+describe("drains typed as text", () => {
+  it("reads one drain per line and writes it back the same way", () => {
+    const text = "108 6; 128 6\n90 6; 90 12.5; 92.5 12.5";
+    const r = drainsFromText(text);
+    expect(r).toEqual({
+      ok: true,
+      drains: [
+        [
+          [108, 6],
+          [128, 6],
+        ],
+        [
+          [90, 6],
+          [90, 12.5],
+          [92.5, 12.5],
+        ],
+      ],
+    });
+    if (r.ok) expect(drainsToText(r.drains)).toBe(text);
+  });
+
+  it("names the drain and point of a bad number, and a drain of one point", () => {
+    const r = drainsFromText("108 6; 128,5 6\n100 7");
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.problems[0]).toMatch(/^Drain 1, point 2: .*comma/);
+      expect(r.problems[1]).toBe("Drain 2: a drain needs at least 2 points.");
+    }
   });
 });
