@@ -33,7 +33,8 @@ export function drainsFromText(text: string): DrainTextOutcome {
       }
       points.push([x.value, y.value]);
     });
-    if (problems.length === before && points.length === 1) problems.push(`Drain ${i + 1}: a drain needs at least 2 points.`);
+    if (problems.length === before && points.length === 1)
+      problems.push(`Drain ${i + 1}: a drain needs at least 2 points.`);
     drains.push(points);
   });
   return problems.length > 0 ? { ok: false, problems } : { ok: true, drains };
