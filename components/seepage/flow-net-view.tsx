@@ -39,7 +39,16 @@ export function svgPath(view: RunView, line: readonly (readonly [number, number]
 }
 
 /** Equipotentials, flow lines, the phreatic surface and the exits with their piping factors. */
-export function FlowNetLayers({ view, solution }: { view: RunView; solution: SeepageSolution }) {
+export function FlowNetLayers({
+  view,
+  solution,
+  width = Infinity,
+}: {
+  view: RunView;
+  solution: SeepageSolution;
+  /** Drawing width (px): labels near the right edge are written to the left of their mark. */
+  width?: number;
+}) {
   const net = solution.flowNet;
   return (
     <>
@@ -64,10 +73,17 @@ export function FlowNetLayers({ view, solution }: { view: RunView; solution: See
         {solution.exitGradients.map((g, i) => {
           const [sx, sy] = toScreen(view, g.x, g.y);
           const factor = g.pipingFactor === null ? "no γsat" : `F = ${g.pipingFactor.toFixed(2)}`;
+          const leftward = sx > width - 160;
           return (
             <g key={i} data-exit={i} data-low={g.pipingFactor !== null && g.pipingFactor < 3 ? "yes" : "no"}>
               <path d={`M${sx},${sy - 9} l-6,10 h12 Z`} fill={EXIT} />
-              <text x={sx + 8} y={sy - 10} fontSize={11} fill="#1f1d1a">
+              <text
+                x={leftward ? sx - 8 : sx + 8}
+                y={sy - 10}
+                fontSize={11}
+                fill="#1f1d1a"
+                textAnchor={leftward ? "end" : "start"}
+              >
                 {`i = ${g.i.toFixed(3)}, ${factor}`}
               </text>
             </g>
@@ -78,9 +94,10 @@ export function FlowNetLayers({ view, solution }: { view: RunView; solution: See
   );
 }
 
-/** q beside the practitioner's k·ΔH·Nf/Nd. */
-export function FlowNetCaption({ solution }: { solution: SeepageSolution }) {
+/** q beside the practitioner's k·ΔH·Nf/Nd; `checkOnly` leaves q out where it is shown already. */
+export function FlowNetCaption({ solution, checkOnly = false }: { solution: SeepageSolution; checkOnly?: boolean }) {
   const net = solution.flowNet;
+  if (checkOnly) return <FlowNetCheck solution={solution} />;
   return (
     <>
       <span data-testid="flow-net-q">
@@ -88,12 +105,19 @@ export function FlowNetCaption({ solution }: { solution: SeepageSolution }) {
       </span>
       {solution.qTotal !== null ? <span> · {sci(solution.qTotal)} m³/s along the crest</span> : null}
       <br />
-      <span data-testid="flow-net-check">
-        Flow net: Nf = {net.flowChannels} channels, Nd = {net.headDrops} drops, ΔH = {net.deltaH.toFixed(2)} m, k of{" "}
-        {net.kRefMaterial} = {sci(net.kRef)} m/s → k·ΔH·Nf/Nd = {sci(net.qFlowNet)} m³/s/m, beside the computed q (a
-        hand check for one material: in a zoned section the cells are square only in that zone).
-      </span>
+      <FlowNetCheck solution={solution} />
     </>
+  );
+}
+
+function FlowNetCheck({ solution }: { solution: SeepageSolution }) {
+  const net = solution.flowNet;
+  return (
+    <span data-testid="flow-net-check">
+      Flow net: Nf = {net.flowChannels} channels, Nd = {net.headDrops} drops, ΔH = {net.deltaH.toFixed(2)} m, k of{" "}
+      {net.kRefMaterial} = {sci(net.kRef)} m/s → k·ΔH·Nf/Nd = {sci(net.qFlowNet)} m³/s/m, beside the computed q (a hand
+      check for one material: in a zoned section the cells are square only in that zone).
+    </span>
   );
 }
 
@@ -148,7 +172,7 @@ export function FlowNetView({
           ))}
         </g>
         {layers?.(view)}
-        {solution ? <FlowNetLayers view={view} solution={solution} /> : null}
+        {solution ? <FlowNetLayers view={view} solution={solution} width={width} /> : null}
       </svg>
       {caption && solution ? (
         <>

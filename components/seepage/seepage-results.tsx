@@ -32,7 +32,7 @@ export function SeepageResults({ solution, elapsedMs }: { solution: SeepageSolut
         </dd>
       </dl>
       <p className="text-sm text-ink-soft">
-        <FlowNetCaption solution={solution} />
+        <FlowNetCaption solution={solution} checkOnly />
       </p>
       <div className="overflow-x-auto rounded-lg border border-rule bg-paper-raised">
         <table className="w-full text-sm" data-testid="exit-gradients">

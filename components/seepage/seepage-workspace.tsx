@@ -55,6 +55,12 @@ export function SeepageWorkspace(props: SeepageWorkspaceProps) {
     groundAt: (x: number) => polylineAt(ground, x),
   };
   const pools = built?.ok ? (built.document.seepage.pools ?? []) : [];
+  // The section drawn at true scale, the drawing no taller than the section needs.
+  const span = extent.maxX - extent.minX;
+  const rise =
+    Math.max(...section.regions.flatMap((r) => r.points.map((p) => p[1]))) -
+    Math.min(...section.regions.flatMap((r) => r.points.map((p) => p[1])));
+  const height = span > 0 ? Math.round(Math.min(520, Math.max(220, (960 * rise) / span + 90))) : 420;
   const done = run.state.status === "done" ? run.state : null;
 
   function solve() {
@@ -148,6 +154,7 @@ export function SeepageWorkspace(props: SeepageWorkspaceProps) {
         regions={section.regions}
         solution={done?.solution ?? null}
         caption={false}
+        height={height}
         onPick={drawing ? (x, y) => setDrawing([...drawing, [tenth(x), tenth(y)]]) : undefined}
         layers={(view) => (
           <>
@@ -177,7 +184,13 @@ export function SeepageWorkspace(props: SeepageWorkspaceProps) {
           Conductivities in the materials library
         </Link>
       </div>
-      <SeepageSettingsFields form={form} onChange={setForm} fields={fields} pools={pools} />
+      <SeepageSettingsFields
+        form={form}
+        onChange={setForm}
+        fields={fields}
+        // buildSeepageDocument adds the tailwater object itself; it has its own fields below.
+        pools={pools.filter((p) => p !== settings?.tailwater)}
+      />
       {done ? <SeepageResults solution={done.solution} elapsedMs={done.elapsedMs} /> : null}
     </div>
   );
