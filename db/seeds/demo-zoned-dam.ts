@@ -167,9 +167,14 @@ export async function seedZonedDam(trx: Knex | Knex.Transaction, projectId: numb
         .where({ id: materialId })
         .update({ parameters: JSON.stringify(parameters), sources: JSON.stringify({ k: setId }) });
     }
-    engineMaterials.push(
-      toEngineMaterial({ key: m.key, name: m.name, color: m.color, parameters: parameters as MaterialParameters }),
-    );
+    // The section carries strengths only, as a saved section does (the engine's schema has no k):
+    // the seepage view reads k from the library.
+    const engine: Record<string, unknown> = {
+      ...toEngineMaterial({ key: m.key, name: m.name, color: m.color, parameters: parameters as MaterialParameters }),
+    };
+    delete engine.k;
+    delete engine.kRatio;
+    engineMaterials.push(engine as SectionDocument["materials"][number]);
   }
   const [sectionId] = await trx("sections").insert({
     project_id: projectId,
