@@ -6,6 +6,7 @@ import { waterConditionsOf } from "@/lib/sections/water-conditions";
 import { buildSeepageDocument } from "@/lib/section-seepage/document";
 import { checkDrains } from "@/lib/section-seepage/check-drains";
 import { drainsFromText, drainsToText } from "@/lib/section-seepage/drain-text";
+import { settingsFromForm, settingsToForm } from "@/lib/section-seepage/settings-form";
 import { toEngineMaterial } from "@/lib/materials/engine-material";
 import { checkAndDeriveLabTest } from "@/lib/materials/lab-derive";
 import type { MaterialConductivity } from "@/lib/section-seepage/types";
@@ -128,5 +129,34 @@ describe("drains typed as text", () => {
       expect(r.problems[0]).toMatch(/^Drain 1, point 2: .*comma/);
       expect(r.problems[1]).toBe("Drain 2: a drain needs at least 2 points.");
     }
+  });
+});
+
+describe("the seepage settings form", () => {
+  const blank = {
+    drains: "",
+    meshSize: "",
+    crestLength: "",
+    headDrops: "",
+    tailwaterSide: "",
+    tailwaterLevel: "",
+  } as const;
+
+  it("reads back what it writes, the demo's settings included", () => {
+    expect(settingsFromForm(settingsToForm(ZONED_SEEPAGE_SETTINGS))).toEqual({
+      ok: true,
+      settings: ZONED_SEEPAGE_SETTINGS,
+    });
+  });
+
+  it("names each bad field: a decimal comma, a tailwater side without its level, too few head drops", () => {
+    const r = settingsFromForm({ ...blank, crestLength: "320,5", tailwaterSide: "right", headDrops: "1" });
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.fields.crestLength[0]).toMatch(/comma/);
+      expect(r.fields.tailwaterLevel[0]).toMatch(/tailwater level/);
+    }
+    const drops = settingsFromForm({ ...blank, headDrops: "1" });
+    expect(!drops.ok && drops.fields.headDrops[0]).toMatch(/At least 2 head drops/);
   });
 });
