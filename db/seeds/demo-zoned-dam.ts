@@ -180,7 +180,8 @@ export async function seedZonedDam(trx: Knex | Knex.Transaction, projectId: numb
     project_id: projectId,
     name: ZONED_DAM_NAME,
     description:
-      "Zoned saddle dam on pervious alluvium: clay core, sand-gravel shells, gravel toe drain. Open the seepage view for its flow net.",
+      "Zoned saddle dam on pervious alluvium: clay core, sand-gravel shells, gravel toe drain. " +
+      "Open the seepage view for its flow net.",
     current_version: 1,
     created_by: userId,
   });
