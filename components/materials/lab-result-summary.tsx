@@ -92,6 +92,7 @@ function rowsOf(record: LabTestRecord): Row[] {
         ]),
         ["kh, geometric mean", sciK(r.k), "m/s"],
         ["Largest over smallest reading", formatValue(r.spread, 2), ""],
+        ["Formulas", r.source, ""],
       ];
     }
   }

@@ -99,6 +99,20 @@ describe("seepage view", () => {
       await page.getByRole("button", { name: "Add this drain" }).click();
       expect((await page.getByLabel(/^Drains/).inputValue()).split("\n")).toHaveLength(2);
       expect(await page.locator("[data-drain]").count()).toBe(2);
+
+      // A fine mesh takes a while: the progress shows the free-surface rounds, and Cancel stops it.
+      await page.getByLabel("Element size").fill("0.4");
+      await page.getByTestId("seepage-solve").click();
+      await page.getByTestId("seepage-progress").waitFor();
+      await page.getByRole("button", { name: "Cancel" }).click();
+      await page.getByText("Solve cancelled; nothing was kept.").waitFor();
+
+      // The core's kh traced to its falling-head set in the library.
+      await page.locator('tr[data-material="core"]').getByRole("link", { name: "edit in the library" }).click();
+      await page.waitForURL(/\/materials\/\d+$/);
+      await page.getByText("kh, geometric mean").first().waitFor();
+      expect(await page.locator("body").textContent()).toContain("Craig's Soil Mechanics");
+      await page.screenshot({ path: "test-results/seepage-core-permeability-set.png", fullPage: true });
       expect(errors).toEqual([]);
     });
     await page.close();
