@@ -8,6 +8,7 @@ import type { MaterialConductivity, SeepageSettingsInput } from "@/lib/section-s
 import { buildSeepageDocument } from "@/lib/section-seepage/document";
 import { settingsFromForm, settingsToForm, type SeepageSettingsForm } from "@/lib/section-seepage/settings-form";
 import { drainsToText } from "@/lib/section-seepage/drain-text";
+import { checkDrains } from "@/lib/section-seepage/check-drains";
 import { groundProfile, polylineAt } from "@/lib/analysis/ground-profile";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FormBanner } from "@/components/ui/form-message";
@@ -104,6 +105,19 @@ export function SeepageWorkspace(props: SeepageWorkspaceProps) {
     }
   }
 
+  /** A drain point must lie in pervious material, the rule the save and the solver apply. */
+  function pickDrainPoint(x: number, y: number) {
+    if (!drawing) return;
+    const p: [number, number] = [tenth(x), tenth(y)];
+    const problems = Object.values(checkDrains(section, { drains: [[p, p]] })).flat();
+    if (problems.length > 0) {
+      setBanner({ kind: "error", text: `(${p[0]}, ${p[1]}) is not in pervious material: click inside the section.` });
+      return;
+    }
+    setBanner(null);
+    setDrawing([...drawing, p]);
+  }
+
   function finishDrain() {
     if (drawing && drawing.length >= 2) {
       const current = settings?.drains ?? [];
@@ -155,7 +169,7 @@ export function SeepageWorkspace(props: SeepageWorkspaceProps) {
         solution={done?.solution ?? null}
         caption={false}
         height={height}
-        onPick={drawing ? (x, y) => setDrawing([...drawing, [tenth(x), tenth(y)]]) : undefined}
+        onPick={drawing ? pickDrainPoint : undefined}
         layers={(view) => (
           <>
             {done ? <MeshLayer view={view} mesh={done.mesh} colour={colour} showMesh={showMesh} /> : null}
