@@ -120,4 +120,21 @@ describe("seepage view", () => {
     });
     await page.close();
   });
+
+  test("a section whose materials have no kh says which and where to set it, before any solve", async () => {
+    const page = await browser.newPage({ viewport: { width: 1400, height: 1000 } });
+    const errors = watchConsole(page);
+    await keepScreenshotOnFailure(page, "seepage-no-k", async () => {
+      await signInAs(page, "engineer@scarpline.test");
+      await page.getByRole("link", { name: "Lower Wendle Reservoir embankment" }).click();
+      await page.getByRole("link", { name: /Main embankment/ }).click();
+      await page.getByRole("link", { name: "Seepage and flow net" }).click();
+      await page.getByTestId("seepage-solve").click();
+      await page.getByText("has no hydraulic conductivity kh").first().waitFor();
+      expect(await page.locator("body").textContent()).toMatch(/Material 'fill' \(Compacted clay fill\) has no/);
+      expect(await page.getByTestId("seepage-results").count()).toBe(0);
+      expect(errors).toEqual([]);
+    });
+    await page.close();
+  });
 });
