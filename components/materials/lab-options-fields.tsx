@@ -2,7 +2,7 @@ import type { LabTestKind } from "@/lib/materials/lab-kinds";
 import type { LabOptions } from "@/lib/materials/lab-rows";
 import type { TableProblem } from "@/lib/materials/problem-keys";
 import { FieldError } from "@/components/ui/form-message";
-import { BJERRUM_SOURCE } from "@/lib/lab";
+import { BJERRUM_SOURCE, PERMEABILITY_SOURCE } from "@/lib/lab";
 
 export interface LabOptionsFieldsProps {
   kind: LabTestKind;
@@ -210,6 +210,59 @@ export function LabOptionsFields({ kind, options, onChange, problems }: LabOptio
           />
         </div>
       );
+    case "permeability": {
+      const falling = options.permeabilityMethod === "falling-head";
+      return (
+        <div className="space-y-3">
+          <div>
+            <label className="label" htmlFor="lab-permeability-method">
+              Test
+            </label>
+            <select
+              id="lab-permeability-method"
+              className="field w-auto"
+              value={options.permeabilityMethod}
+              onChange={(e) => set("permeabilityMethod", e.target.value as LabOptions["permeabilityMethod"])}
+            >
+              <option value="falling-head">Falling head: k = aL/(At)·ln(h1/h2), for fine soils</option>
+              <option value="constant-head">Constant head: k = QL/(Aht), for sands and gravels</option>
+            </select>
+          </div>
+          <div className="grid gap-3 sm:grid-cols-3">
+            <NumberSetting
+              id="lab-specimen-length"
+              label="Specimen length L"
+              unit="mm"
+              value={options.specimenLength}
+              onChange={(v) => set("specimenLength", v)}
+              messages={messagesOf("length")}
+            />
+            <NumberSetting
+              id="lab-specimen-diameter"
+              label="Specimen diameter D"
+              unit="mm"
+              value={options.specimenDiameter}
+              onChange={(v) => set("specimenDiameter", v)}
+              messages={messagesOf("diameter")}
+            />
+            {falling ? (
+              <NumberSetting
+                id="lab-standpipe-diameter"
+                label="Standpipe diameter d"
+                unit="mm"
+                value={options.standpipeDiameter}
+                onChange={(v) => set("standpipeDiameter", v)}
+                messages={messagesOf("standpipeDiameter")}
+              />
+            ) : null}
+          </div>
+          <p className="max-w-xl text-xs text-ink-faint">
+            {PERMEABILITY_SOURCE}. No temperature correction is applied. The design kh is the geometric mean of the
+            readings.
+          </p>
+        </div>
+      );
+    }
     case "atterberg":
       return (
         <label className="flex items-center gap-2 text-sm">

@@ -46,5 +46,8 @@ export function LabResultPlot({ record }: { record: LabTestRecord }) {
       return <CompactionPlot result={record.result} />;
     case "atterberg":
       return <PlasticityChart result={record.result} />;
+    case "permeability":
+      // A handful of readings of one number: the table of each reading's k says more than a plot.
+      return null;
   }
 }

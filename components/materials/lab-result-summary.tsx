@@ -1,8 +1,10 @@
 import { BJERRUM_SOURCE, type UndrainedStrengthResult } from "@/lib/lab";
 import type { LabTestRecord } from "@/lib/materials/lab-kinds";
-import { formatValue } from "@/lib/materials/parameter-form";
+import { formatScientific, formatValue } from "@/lib/materials/parameter-form";
 
 type Row = [label: string, value: string, unit: string];
+
+const sciK = (k: number) => formatScientific(k);
 
 function rowsOf(record: LabTestRecord): Row[] {
   switch (record.kind) {
@@ -77,6 +79,20 @@ function rowsOf(record: LabTestRecord): Row[] {
         ["Plasticity index PI", formatValue(r.plasticityIndex, 0), "%"],
         ["Liquidity index", formatValue(r.liquidityIndex, 2), ""],
         ["A-line at this LL", formatValue(r.aLinePI, 1), "%"],
+      ];
+    }
+    case "permeability": {
+      const r = record.result;
+      return [
+        [r.method === "falling-head" ? "Falling-head test" : "Constant-head test", `${r.readings.length} readings`, ""],
+        ...r.readings.map((x): Row => [
+          `k of reading ${x.index}${x.specimen ? ` (${x.specimen})` : ""}`,
+          sciK(x.k),
+          "m/s",
+        ]),
+        ["kh, geometric mean", sciK(r.k), "m/s"],
+        ["Largest over smallest reading", formatValue(r.spread, 2), ""],
+        ["Formulas", r.source, ""],
       ];
     }
   }

@@ -10,11 +10,17 @@ export interface LabRowsTableProps {
   problems: readonly TableProblem[];
 }
 
-/** Columns that matter for the chosen settings: UU rows need q, vane rows need su. */
+/**
+ * Columns that matter for the chosen settings: UU rows need q, vane rows need su; falling-head
+ * readings need the end head, constant-head readings the water collected.
+ */
 function visibleColumns(kind: LabTestKind, options: LabOptions) {
-  return LAB_KIND_INFO[kind].columns.filter(
-    (c) => kind !== "undrained" || (options.source === "uu" ? c.key !== "su" : c.key !== "deviatorStress"),
-  );
+  return LAB_KIND_INFO[kind].columns.filter((c) => {
+    if (kind === "undrained") return options.source === "uu" ? c.key !== "su" : c.key !== "deviatorStress";
+    if (kind === "permeability")
+      return options.permeabilityMethod === "falling-head" ? c.key !== "volume" : c.key !== "headEnd";
+    return true;
+  });
 }
 
 /** The editable table of test results, units in the headers; cells with a problem are marked. */

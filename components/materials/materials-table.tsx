@@ -1,7 +1,7 @@
 import Link from "next/link";
 import type { LibraryMaterial } from "@/lib/materials/types";
 import { MODEL_LABELS, PARAMETER_INFO, parameterValue, type ParameterKey } from "@/lib/materials/parameters";
-import { formatValue } from "@/lib/materials/parameter-form";
+import { formatScientific, formatValue } from "@/lib/materials/parameter-form";
 import { SourceBadge } from "./source-badge";
 
 const COLUMNS: { key: ParameterKey; digits: number }[] = [
@@ -10,6 +10,8 @@ const COLUMNS: { key: ParameterKey; digits: number }[] = [
   { key: "c", digits: 1 },
   { key: "phi", digits: 1 },
   { key: "su", digits: 1 },
+  // Conductivity spans orders of magnitude: written as 4.9 × 10⁻⁸ (digits < 0 means that).
+  { key: "k", digits: -1 },
 ];
 
 /** The library as a table: one row per material, parameters with units and their lab sources. */
@@ -54,7 +56,12 @@ export function MaterialsTable({ projectId, materials }: { projectId: number; ma
                 const v = parameterValue(m.parameters, key);
                 return (
                   <td key={key} className="px-3 py-2 text-right tabular-nums">
-                    {formatValue(v, digits)}
+                    {digits < 0 ? formatScientific(v) : formatValue(v, digits)}
+                    {key === "k" && parameterValue(m.parameters, "kRatio") !== undefined ? (
+                      <div className="text-xs text-ink-faint">
+                        kv/kh {formatValue(parameterValue(m.parameters, "kRatio"), 2)}
+                      </div>
+                    ) : null}
                     {key === "su" && parameterValue(m.parameters, "suGradient") ? (
                       <div className="text-xs text-ink-faint">
                         +{formatValue(parameterValue(m.parameters, "suGradient"), 2)} kPa/m

@@ -10,6 +10,7 @@ import * as m009 from "./009-below-required-sign-off";
 import * as m010 from "./010-sign-in-counters-and-session-versions";
 import * as m011 from "./011-jobs";
 import * as m012 from "./012-section-archive";
+import * as m013 from "./013-seepage";
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -30,6 +31,7 @@ const migrations: Record<string, Migration> = {
   "010-sign-in-counters-and-session-versions": m010,
   "011-jobs": m011,
   "012-section-archive": m012,
+  "013-seepage": m013,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -3,6 +3,7 @@ import bcrypt from "bcryptjs";
 import { buildDemoSection } from "./demo-section";
 import { seedDemoMaterials } from "./demo-materials";
 import { seedDemoDesign } from "./demo-design";
+import { seedZonedDam } from "./demo-zoned-dam";
 import { fetchMaterialsOfProject } from "../queries/materials";
 import { toEngineMaterial } from "../../lib/materials/engine-material";
 
@@ -71,6 +72,7 @@ export async function seedDemo(knex: Knex): Promise<{ created: boolean }> {
       { project_id: projectId, user_id: ids.designer, role: "designer" },
     ]);
     await seedDemoDesign(trx, projectId, ids.designer);
+    await seedZonedDam(trx, projectId, ids.engineer);
   });
   return { created: true };
 }

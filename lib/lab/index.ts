@@ -6,4 +6,5 @@ export * from "./undrained-strength";
 export * from "./vane-correction";
 export * from "./compaction";
 export * from "./atterberg";
+export * from "./permeability";
 export * from "./schemas";

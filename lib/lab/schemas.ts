@@ -86,8 +86,42 @@ export const atterbergInputSchema = z.object({
   nonPlastic: z.boolean().optional(),
 });
 
+export const permeabilityReadingSchema = z.object({
+  ...rowRef,
+  head: positive,
+  headEnd: positive.optional(),
+  time: positive,
+  volume: positive.optional(),
+});
+export const permeabilityInputSchema = z
+  .object({
+    method: z.enum(["constant-head", "falling-head"]),
+    length: positive,
+    diameter: positive,
+    standpipeDiameter: positive.optional(),
+    readings: z.array(permeabilityReadingSchema).min(1).max(200),
+  })
+  .superRefine((input, ctx) => {
+    const field = input.method === "falling-head" ? "headEnd" : "volume";
+    if (input.method === "falling-head" && input.standpipeDiameter === undefined)
+      ctx.addIssue({
+        code: "custom",
+        path: ["standpipeDiameter"],
+        message: "a falling-head test needs the standpipe diameter",
+      });
+    input.readings.forEach((r, i) => {
+      if (r[field] === undefined)
+        ctx.addIssue({
+          code: "custom",
+          path: ["readings", i, field],
+          message: `${field} is required for ${input.method} tests`,
+        });
+    });
+  });
+
 export type DirectShearInputData = z.infer<typeof directShearInputSchema>;
 export type TriaxialCuInputData = z.infer<typeof triaxialCuInputSchema>;
 export type UndrainedStrengthInputData = z.infer<typeof undrainedStrengthInputSchema>;
 export type CompactionInputData = z.infer<typeof compactionInputSchema>;
 export type AtterbergInputData = z.infer<typeof atterbergInputSchema>;
+export type PermeabilityInputData = z.infer<typeof permeabilityInputSchema>;

@@ -33,6 +33,11 @@ const EXAMPLES: Record<LabTestKind, (string | number)[][]> = {
     ["P-5", 21, 1.59, ""],
   ],
   atterberg: [["AL-1", 42, 20, 18]],
+  permeability: [
+    ["FH-1", 1000, 350, 10800, ""],
+    ["FH-2", 1000, 420, 9000, ""],
+    ["FH-3", 900, 330, 10800, ""],
+  ],
 };
 
 const keysOf = (kind: LabTestKind) => LAB_KIND_INFO[kind].columns.map((c) => c.key);

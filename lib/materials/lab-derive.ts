@@ -8,7 +8,9 @@ import {
   deriveDirectShearStrength,
   deriveTriaxialCuStrength,
   deriveUndrainedStrength,
+  derivePermeability,
   directShearInputSchema,
+  permeabilityInputSchema,
   triaxialCuInputSchema,
   undrainedStrengthInputSchema,
 } from "@/lib/lab";
@@ -21,6 +23,7 @@ const INPUT_SCHEMAS: { [K in LabTestKind]: ZodType<LabInputByKind[K]> } = {
   undrained: undrainedStrengthInputSchema,
   compaction: compactionInputSchema,
   atterberg: atterbergInputSchema,
+  permeability: permeabilityInputSchema,
 };
 
 export type LabDeriveOutcome =
@@ -67,6 +70,10 @@ function derive(kind: LabTestKind, data: unknown): LabTestRecord {
     case "atterberg": {
       const d = data as LabInputByKind["atterberg"];
       return { kind, data: d, result: classifyAtterbergLimits(d) };
+    }
+    case "permeability": {
+      const d = data as LabInputByKind["permeability"];
+      return { kind, data: d, result: derivePermeability(d) };
     }
   }
 }

@@ -7,13 +7,22 @@ import type {
   DirectShearResult,
   TriaxialCuInputData,
   TriaxialCuResult,
+  PermeabilityInputData,
+  PermeabilityResult,
   UndrainedStrengthInputData,
   UndrainedStrengthResult,
 } from "@/lib/lab";
 import type { ParameterKey } from "./parameters";
 
 /** The kinds of lab test set the library stores (the `lab_test_sets.kind` column). */
-export const LAB_TEST_KINDS = ["direct-shear", "triaxial-cu", "undrained", "compaction", "atterberg"] as const;
+export const LAB_TEST_KINDS = [
+  "direct-shear",
+  "triaxial-cu",
+  "undrained",
+  "compaction",
+  "atterberg",
+  "permeability",
+] as const;
 export type LabTestKind = (typeof LAB_TEST_KINDS)[number];
 
 export interface LabInputByKind {
@@ -22,6 +31,7 @@ export interface LabInputByKind {
   undrained: UndrainedStrengthInputData;
   compaction: CompactionInputData;
   atterberg: AtterbergInputData;
+  permeability: PermeabilityInputData;
 }
 
 export interface LabResultByKind {
@@ -30,6 +40,7 @@ export interface LabResultByKind {
   undrained: UndrainedStrengthResult;
   compaction: CompactionResult;
   atterberg: AtterbergResult;
+  permeability: PermeabilityResult;
 }
 
 /** A lab test set's input and what was derived from it, tied together by `kind`. */
@@ -48,7 +59,7 @@ export interface LabColumn {
 export interface LabKindInfo {
   label: string;
   /** Where the rows sit in the input (`tests`, `specimens`, `points`), or null for one sample. */
-  rowsKey: "tests" | "specimens" | "points" | null;
+  rowsKey: "tests" | "specimens" | "points" | "readings" | null;
   columns: LabColumn[];
   /** Parameters of a material this kind can supply. */
   feeds: readonly ParameterKey[];
@@ -120,6 +131,19 @@ export const LAB_KIND_INFO: Record<LabTestKind, LabKindInfo> = {
     ],
     feeds: [],
     startRows: 1,
+  },
+  permeability: {
+    label: "Permeability (constant or falling head)",
+    rowsKey: "readings",
+    columns: [
+      specimen,
+      num("head", "Head h (falling head: start h1)", "mm"),
+      num("headEnd", "End head h2 (falling head)", "mm"),
+      num("time", "Time t", "s"),
+      num("volume", "Water collected Q (constant head)", "mL"),
+    ],
+    feeds: ["k"],
+    startRows: 3,
   },
 };
 

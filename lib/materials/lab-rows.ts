@@ -22,6 +22,11 @@ export interface LabOptions {
   specificGravity: string;
   acceptancePercent: string;
   nonPlastic: boolean;
+  permeabilityMethod: "constant-head" | "falling-head";
+  /** Permeability: specimen length L, diameter D and standpipe diameter d (mm). */
+  specimenLength: string;
+  specimenDiameter: string;
+  standpipeDiameter: string;
 }
 
 export const DEFAULT_LAB_OPTIONS: LabOptions = {
@@ -38,6 +43,10 @@ export const DEFAULT_LAB_OPTIONS: LabOptions = {
   specificGravity: "2.70",
   acceptancePercent: "95",
   nonPlastic: false,
+  permeabilityMethod: "falling-head",
+  specimenLength: "",
+  specimenDiameter: "",
+  standpipeDiameter: "",
 };
 
 /** A row with every cell blank. */
@@ -137,6 +146,25 @@ export function buildLabInput(kind: LabTestKind, rows: readonly LabRow[], option
     case "atterberg":
       data = { ...(records[0] ?? {}), nonPlastic: options.nonPlastic || undefined };
       break;
+    case "permeability": {
+      const falling = options.permeabilityMethod === "falling-head";
+      // Each method reads only its own columns, so a stray cell of the other is not stored.
+      const readings = records.map((r) => {
+        const out = { ...r };
+        delete out[falling ? "volume" : "headEnd"];
+        return out;
+      });
+      data = {
+        method: options.permeabilityMethod,
+        length: setting("length", options.specimenLength, "Specimen length L"),
+        diameter: setting("diameter", options.specimenDiameter, "Specimen diameter D"),
+        standpipeDiameter: falling
+          ? setting("standpipeDiameter", options.standpipeDiameter, "Standpipe diameter d")
+          : undefined,
+        readings,
+      };
+      break;
+    }
   }
   // Unset settings are left out so the stored input shows only what the user gave.
   for (const k of Object.keys(data)) if (data[k] === undefined) delete data[k];
@@ -169,6 +197,10 @@ export function labInputToRows(
     specificGravity: text(data.specificGravity, DEFAULT_LAB_OPTIONS.specificGravity),
     acceptancePercent: text(data.acceptancePercent, DEFAULT_LAB_OPTIONS.acceptancePercent),
     nonPlastic: data.nonPlastic === true,
+    permeabilityMethod: data.method === "constant-head" ? "constant-head" : "falling-head",
+    specimenLength: text(data.length, ""),
+    specimenDiameter: text(data.diameter, ""),
+    standpipeDiameter: text(data.standpipeDiameter, ""),
   };
   return { rows, options };
 }

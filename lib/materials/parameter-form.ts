@@ -24,6 +24,8 @@ export const EMPTY_PARAMETER_FORM: ParameterFormValues = {
   suDatum: "",
   cR: "",
   phiR: "",
+  k: "",
+  kRatio: "",
 };
 
 /** The form's values for stored parameters. */
@@ -60,6 +62,29 @@ export function parametersFromForm(values: ParameterFormValues): ParametersFromF
   if (values.model !== "impenetrable" && values.freeDraining) out.freeDraining = true;
   if (Object.keys(fields).length > 0) return { ok: false, fields };
   return { ok: true, parameters: out as MaterialParameters };
+}
+
+/** A very small or large number as the trade writes it: 4.9 × 10⁻⁸ (three significant figures at most). */
+export function formatScientific(value: number | undefined | null, digits = 2): string {
+  if (value === undefined || value === null || !Number.isFinite(value)) return "—";
+  if (value === 0) return "0";
+  const [mantissa, exponent] = value.toExponential(digits).split("e");
+  const sup: Record<string, string> = {
+    "-": "⁻",
+    "+": "",
+    0: "⁰",
+    1: "¹",
+    2: "²",
+    3: "³",
+    4: "⁴",
+    5: "⁵",
+    6: "⁶",
+    7: "⁷",
+    8: "⁸",
+    9: "⁹",
+  };
+  const power = [...exponent].map((ch) => sup[ch] ?? ch).join("");
+  return `${mantissa} × 10${power}`;
 }
 
 /** A number for tables: fixed decimals, without a trailing "-0". */

@@ -13,9 +13,18 @@ import type { Issue } from "@/lib/stability";
  * id, name and colour, which the library keeps in their own columns. Units: kN/m³, kPa, degrees, m.
  */
 const withoutIdentity = { id: true, name: true, color: true } as const;
+/**
+ * Conductivity for seepage (docs/seepage.md): horizontal k (m/s) and kRatio = kv/kh. The engine's
+ * stability schema does not know them, so the library keeps them beside the strengths; a seepage
+ * run reads them from here.
+ */
+const conductivity = {
+  k: z.number().positive("k must be a conductivity above 0 m/s").max(1, "k above 1 m/s is not a soil").optional(),
+  kRatio: z.number().positive("kv/kh must be above 0").max(1e6).optional(),
+};
 export const materialParametersSchema = z.discriminatedUnion("model", [
-  mohrCoulombMaterialSchema.omit(withoutIdentity),
-  undrainedMaterialSchema.omit(withoutIdentity),
+  mohrCoulombMaterialSchema.omit(withoutIdentity).extend(conductivity),
+  undrainedMaterialSchema.omit(withoutIdentity).extend(conductivity),
   impenetrableMaterialSchema.omit(withoutIdentity),
 ]);
 export type MaterialParameters = z.infer<typeof materialParametersSchema>;
@@ -24,7 +33,19 @@ export type MaterialModel = MaterialParameters["model"];
 export const MATERIAL_MODELS: readonly MaterialModel[] = ["mohr-coulomb", "undrained", "impenetrable"];
 
 /** Numeric parameters that can be typed in, or copied from a lab test set. */
-export const PARAMETER_KEYS = ["gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum", "cR", "phiR"] as const;
+export const PARAMETER_KEYS = [
+  "gamma",
+  "gammaSat",
+  "c",
+  "phi",
+  "su",
+  "suGradient",
+  "suDatum",
+  "cR",
+  "phiR",
+  "k",
+  "kRatio",
+] as const;
 export type ParameterKey = (typeof PARAMETER_KEYS)[number];
 
 export interface ParameterInfo {
@@ -46,12 +67,14 @@ export const PARAMETER_INFO: Record<ParameterKey, ParameterInfo> = {
   // The total-stress (R) envelope from CU tests, for the staged rapid-drawdown method (docs/engine.md §7(b)).
   cR: { label: "R-envelope intercept (staged drawdown)", symbol: "cR", unit: "kPa" },
   phiR: { label: "R-envelope angle (staged drawdown)", symbol: "φR", unit: "°" },
+  k: { label: "Hydraulic conductivity, horizontal", symbol: "kh", unit: "m/s" },
+  kRatio: { label: "Anisotropy kv/kh", symbol: "kv/kh", unit: "–" },
 };
 
 /** Which numeric parameters each model keeps (the engine's schema; su on Mohr–Coulomb is for end of construction). */
 export const MODEL_PARAMETERS: Record<MaterialModel, readonly ParameterKey[]> = {
-  "mohr-coulomb": ["gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum", "cR", "phiR"],
-  undrained: ["gamma", "gammaSat", "su", "suGradient", "suDatum"],
+  "mohr-coulomb": ["gamma", "gammaSat", "c", "phi", "su", "suGradient", "suDatum", "cR", "phiR", "k", "kRatio"],
+  undrained: ["gamma", "gammaSat", "su", "suGradient", "suDatum", "k", "kRatio"],
   impenetrable: ["gamma"],
 };
 

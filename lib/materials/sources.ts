@@ -139,5 +139,8 @@ export function suggestedValues(record: LabTestRecord): SuggestedValues[] {
       ];
     case "atterberg":
       return [];
+    case "permeability":
+      // Two significant figures: k is seldom known better, and 4.9e-8 reads as the lab wrote it.
+      return [{ label: "kh", values: { k: Number(record.result.k.toPrecision(2)) } }];
   }
 }

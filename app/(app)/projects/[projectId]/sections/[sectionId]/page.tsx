@@ -38,6 +38,9 @@ export default async function SectionPage({ params }: { params: Promise<{ projec
           </Link>
         }
       >
+        <Link href={`${base}/sections/${section.id}/seepage`} className="btn-quiet">
+          Seepage and flow net
+        </Link>
         <Link href={`${base}/runs?section=${section.id}`} className="btn-quiet">
           Runs of this section
         </Link>
