@@ -1,6 +1,4 @@
-import path from "node:path";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import { getDocument } from "pdfjs-dist/legacy/build/pdf.mjs";
 import type { Browser, Page } from "playwright-core";
 import { appUrl, launchBrowser, signInAs, watchConsole } from "../support/browser";
 import { signedIn, type AppClient } from "../support/http";
@@ -9,6 +7,7 @@ import { documentForRun, runSetupSchema, type RunSetup } from "@/lib/analysis/ru
 import { directionForFace } from "@/lib/analysis/face";
 import { suggestGrid } from "@/lib/analysis/auto-grid";
 import { listCaughtMail, type CaughtMail } from "@/lib/mail/caught-mail";
+import { pdfText } from "../support/pdf-text";
 
 // Each step waits for a server round trip and a page refresh, so polls get more than the default second.
 const WAIT = { timeout: 15_000 };
@@ -69,21 +68,6 @@ async function waitForMail(subjectStart: string, to: string): Promise<CaughtMail
     )
     .toBe(true);
   return found!;
-}
-
-async function pdfText(bytes: Uint8Array): Promise<string> {
-  const doc = await getDocument({
-    data: new Uint8Array(bytes),
-    isEvalSupported: false,
-    standardFontDataUrl: path.resolve("node_modules/pdfjs-dist/standard_fonts") + "/",
-  }).promise;
-  let text = "";
-  for (let i = 1; i <= doc.numPages; i++) {
-    const content = await (await doc.getPage(i)).getTextContent();
-    text += content.items.map((it) => ("str" in it ? it.str : "")).join(" ") + "\n";
-  }
-  await doc.destroy();
-  return text.replace(/\s+/g, " ");
 }
 
 const linkIn = (mail: CaughtMail) =>

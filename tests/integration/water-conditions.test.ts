@@ -1,27 +1,11 @@
-import path from "node:path";
 import { describe, expect, test } from "vitest";
-import { getDocument } from "pdfjs-dist/legacy/build/pdf.mjs";
 import { signedIn, type AppClient } from "../support/http";
 import { demoProject } from "../support/demo";
 import { quickSetup, searchFor } from "../support/runs";
 import { poolLevels, type StoredSection } from "@/lib/sections/water-conditions";
 import { DEMO_POOL } from "@/db/seeds/demo-section";
 import type { RunSetup } from "@/lib/analysis/run-setup";
-
-async function pdfText(bytes: ArrayBuffer): Promise<string> {
-  const doc = await getDocument({
-    data: new Uint8Array(bytes),
-    isEvalSupported: false,
-    standardFontDataUrl: path.resolve("node_modules/pdfjs-dist/standard_fonts") + "/",
-  }).promise;
-  let text = "";
-  for (let i = 1; i <= doc.numPages; i++) {
-    const content = await (await doc.getPage(i)).getTextContent();
-    text += content.items.map((it) => ("str" in it ? it.str : "")).join(" ") + "\n";
-  }
-  await doc.destroy();
-  return text.replace(/\s+/g, " ");
-}
+import { pdfText } from "../support/pdf-text";
 
 async function keepRun(client: AppClient, title: string, setup: RunSetup) {
   const demo = await demoProject(client);

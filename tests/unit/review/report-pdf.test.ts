@@ -3,28 +3,12 @@
  * drawdown's stages, every material including impenetrable ones, and a sign-off below the
  * required FS in words. Read back with an independent PDF reader (pdfjs-dist).
  */
-import path from "node:path";
 import { describe, expect, test } from "vitest";
-import { getDocument } from "pdfjs-dist/legacy/build/pdf.mjs";
 import { buildRunReport, type ReportInput } from "@/lib/report/build-report";
 import { buildMaterialSources } from "@/lib/review/material-sources";
 import { ENGINE_VERSION, type SectionDocument } from "@/lib/stability";
 import { smallStagedRun } from "../runs/staged-fixture";
-
-async function pdfText(bytes: Uint8Array): Promise<string> {
-  const doc = await getDocument({
-    data: bytes,
-    isEvalSupported: false,
-    standardFontDataUrl: path.resolve("node_modules/pdfjs-dist/standard_fonts") + "/",
-  }).promise;
-  let text = "";
-  for (let i = 1; i <= doc.numPages; i++) {
-    const content = await (await doc.getPage(i)).getTextContent();
-    text += content.items.map((it) => ("str" in it ? it.str : "")).join(" ") + "\n";
-  }
-  await doc.destroy();
-  return text.replace(/\s+/g, " ");
-}
+import { pdfText } from "../../support/pdf-text";
 
 function input(doc: SectionDocument, review: Partial<ReportInput["review"]>, status: ReportInput["run"]["status"]) {
   const { result, slices } = smallStagedRun();

@@ -6,7 +6,7 @@ import { requireProjectAccess } from "@/lib/projects/access";
 import { defaultParamsFor, embankmentParamsSchema } from "@/lib/design";
 import { createDesignStudy, fetchDesignStudiesOfProject } from "@/db/queries/design-studies";
 import { fetchDesignContext } from "@/lib/design/design-context";
-import { checkAgainstLibrary } from "./study-access";
+import { checkAgainstLibrary } from "@/lib/design/study-access";
 
 type Ctx = { params: Promise<{ projectId: string }> };
 

@@ -5,7 +5,7 @@ import { notFound } from "@/lib/api/errors";
 import { embankmentParamsSchema } from "@/lib/design";
 import { deleteDesignStudy, fetchDesignStudy, saveDesignParameters } from "@/db/queries/design-studies";
 import { fetchDesignContext } from "@/lib/design/design-context";
-import { checkAgainstLibrary, requireStudy } from "../study-access";
+import { checkAgainstLibrary, requireStudy } from "@/lib/design/study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };
 

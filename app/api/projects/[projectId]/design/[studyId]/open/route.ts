@@ -4,7 +4,7 @@ import { apiRoute, parseJson } from "@/lib/api/handler";
 import { notFound } from "@/lib/api/errors";
 import { openPointAsRun, openPointInEditor } from "@/lib/design/open-point";
 import { fetchDesignContext } from "@/lib/design/design-context";
-import { requireStudy } from "../../study-access";
+import { requireStudy } from "@/lib/design/study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };
 

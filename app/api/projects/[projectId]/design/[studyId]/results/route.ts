@@ -4,10 +4,8 @@ import { ApiError } from "@/lib/api/errors";
 import { storedSweepSchema, type StoredSweep } from "@/lib/design";
 import { checkBrowserSweep } from "@/lib/design/keep-sweep";
 import { awaitJob } from "@/lib/jobs/await-job";
-import { designStudySubject, designSweepKind } from "@/lib/jobs/design-sweep-job";
-import { startJob } from "@/lib/jobs/start-job";
-import { fetchDesignContext } from "@/lib/design/design-context";
-import { requireStudy } from "../../study-access";
+import { queueDesignSweep } from "@/lib/jobs/queue-design-sweep";
+import { requireStudy } from "@/lib/design/study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };
 
@@ -22,19 +20,12 @@ const WAIT_MS = 60_000;
 export const PUT = apiRoute(async (request: Request, { params }: Ctx) => {
   const { study, projectId, userId } = await requireStudy(params, "design.sweep");
   const sent = await parseJson(request, storedSweepSchema);
-  const context = await fetchDesignContext(projectId);
-  const job = await startJob(designSweepKind, {
+  const job = await queueDesignSweep({
+    study,
     projectId,
-    subject: designStudySubject(study.id),
     userId,
-    input: {
-      studyId: study.id,
-      params: study.parameters,
-      materials: context.materials,
-      settings: sent.settings,
-      required: context.required,
-      ranInBrowser: { elapsedMs: sent.elapsedMs, workers: sent.workers, finishedAt: sent.finishedAt },
-    },
+    settings: sent.settings,
+    ranInBrowser: { elapsedMs: sent.elapsedMs, workers: sent.workers, finishedAt: sent.finishedAt },
   });
   const ended = await awaitJob({ id: job.id, projectId }, { timeoutMs: WAIT_MS, signal: request.signal });
   if (!ended) return NextResponse.json({ job }, { status: 202 });

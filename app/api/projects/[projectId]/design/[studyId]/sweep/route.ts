@@ -2,11 +2,10 @@ import { NextResponse } from "next/server";
 import { z } from "zod";
 import { apiRoute, parseJson } from "@/lib/api/handler";
 import { sweepSettingsSchema } from "@/lib/design";
-import { designStudySubject, designSweepKind } from "@/lib/jobs/design-sweep-job";
-import { startJob } from "@/lib/jobs/start-job";
+import { designStudySubject } from "@/lib/jobs/design-sweep-job";
+import { queueDesignSweep } from "@/lib/jobs/queue-design-sweep";
 import { readLatestJob } from "@/lib/jobs/read-job";
-import { fetchDesignContext } from "@/lib/design/design-context";
-import { requireStudy } from "../../study-access";
+import { requireStudy } from "@/lib/design/study-access";
 
 type Ctx = { params: Promise<{ projectId: string; studyId: string }> };
 
@@ -19,19 +18,7 @@ const runSweepSchema = z.object({ settings: sweepSettingsSchema });
 export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   const { study, projectId, userId } = await requireStudy(params, "design.sweep");
   const { settings } = await parseJson(request, runSweepSchema);
-  const context = await fetchDesignContext(projectId);
-  const job = await startJob(designSweepKind, {
-    projectId,
-    subject: designStudySubject(study.id),
-    userId,
-    input: {
-      studyId: study.id,
-      params: study.parameters,
-      materials: context.materials,
-      settings,
-      required: context.required,
-    },
-  });
+  const job = await queueDesignSweep({ study, projectId, userId, settings });
   return NextResponse.json({ job }, { status: 202 });
 });
 
