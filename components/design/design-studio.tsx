@@ -21,7 +21,7 @@ import type { Material } from "@/lib/stability";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { Caution } from "@/components/ui/caution";
 import { FormBanner } from "@/components/ui/form-message";
-import { RunCanvas } from "@/components/runs/run-canvas";
+import { RunCanvas } from "@/components/runs/result/run-canvas";
 import { FsRatioChart } from "./fs-ratio-chart";
 import type { LibraryEntry } from "./parameter-inputs";
 import { ParametersForm } from "./parameters-form";

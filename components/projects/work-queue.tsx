@@ -7,7 +7,7 @@ import {
   type QueueRun,
   type ReviewerQueue,
 } from "@/lib/review/work-queue";
-import { PassMark, StatusBadge } from "@/components/run-list/status-badge";
+import { PassMark, StatusBadge } from "@/components/runs/list/status-badge";
 
 const runHref = (r: QueueRun, review = false) => `/projects/${r.projectId}/runs/${r.id}${review ? "/review" : ""}`;
 const conditionWords = (key: string) => loadingCondition(key as LoadingConditionKey)?.label ?? key;

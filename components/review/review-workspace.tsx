@@ -7,7 +7,7 @@ import type { ReviewState } from "@/lib/review/review-state";
 import { pinMarkers } from "@/lib/review/pin-markers";
 import { governingFsOf, isBelowRequired } from "@/lib/review/below-required";
 import type { SliceRow } from "@/lib/stability";
-import { RunView } from "@/components/run-view/run-view";
+import { RunView } from "@/components/runs/kept/run-view";
 import { AuthorActions } from "./author-actions";
 import { ChecklistPanel } from "./checklist-panel";
 import { CommentForm } from "./comment-form";

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import type { ChainLink } from "@/lib/runs/types";
-import { StatusBadge } from "@/components/run-list/status-badge";
+import { StatusBadge } from "@/components/runs/list/status-badge";
 
 /** The runs this one revises and those revising it, oldest first; the current one is marked. */
 export function RevisionChain({

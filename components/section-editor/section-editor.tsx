@@ -22,7 +22,7 @@ import { useEditorKeys } from "./use-editor-keys";
 import { useView, ZOOM_STEP } from "./use-view";
 import { VertexTable } from "./vertex-table";
 import { LiveBar } from "./live-bar";
-import { useLiveSearch } from "@/components/run-setup/use-live-search";
+import { useLiveSearch } from "@/components/runs/setup/use-live-search";
 import { keptSection, liveCircleCount, liveDocument, liveSetupFor, type LiveSetup } from "@/lib/live/live-setup";
 import { WaterPanel } from "./water-panel";
 import { WaterConditionsPanel } from "./water-conditions-panel";

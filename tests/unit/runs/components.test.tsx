@@ -1,10 +1,10 @@
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 import { CAUTION_TEXT } from "@/components/ui/caution";
-import { CompareTable } from "@/components/runs/compare-table";
-import { FsSummary } from "@/components/runs/fs-summary";
-import { InputDiff } from "@/components/runs/input-diff";
-import { SliceTable } from "@/components/runs/slice-table";
+import { CompareTable } from "@/components/runs/result/compare-table";
+import { FsSummary } from "@/components/runs/result/fs-summary";
+import { InputDiff } from "@/components/runs/result/input-diff";
+import { SliceTable } from "@/components/runs/result/slice-table";
 import { smallRun } from "./engine-run";
 import { SLICES } from "./fixtures";
 

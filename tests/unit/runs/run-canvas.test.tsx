@@ -4,7 +4,7 @@ import Konva from "konva";
 import { act } from "react";
 import { createRoot, type Root } from "react-dom/client";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
-import { RunCanvas, type RunCanvasProps } from "@/components/runs/run-canvas";
+import { RunCanvas, type RunCanvasProps } from "@/components/runs/result/run-canvas";
 import { toScreen, type RunView } from "@/lib/runs/view-fit";
 import { embankment, smallRun } from "./engine-run";
 

@@ -1,8 +1,8 @@
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
-import { FsSummary } from "@/components/runs/fs-summary";
-import { SliceTable } from "@/components/runs/slice-table";
-import { StatusBadge } from "@/components/run-list/status-badge";
+import { FsSummary } from "@/components/runs/result/fs-summary";
+import { SliceTable } from "@/components/runs/result/slice-table";
+import { StatusBadge } from "@/components/runs/list/status-badge";
 import { smallStagedRun } from "./staged-fixture";
 
 const text = (html: string) =>

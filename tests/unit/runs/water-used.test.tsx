@@ -1,6 +1,6 @@
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
-import { CompareTable } from "@/components/runs/compare-table";
+import { CompareTable } from "@/components/runs/result/compare-table";
 import { SINGLE_WATER_TEXT, waterUsedText } from "@/lib/runs/water-used";
 
 describe("which water a kept run analysed", () => {

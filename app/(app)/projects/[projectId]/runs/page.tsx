@@ -6,7 +6,7 @@ import { findProjectAccess } from "@/lib/projects/access";
 import { fetchRunsOfProject } from "@/db/queries/runs";
 import { PageTitle } from "@/components/ui/page-title";
 import { EmptyState } from "@/components/ui/empty-state";
-import { RunsTable } from "@/components/run-list/runs-table";
+import { RunsTable } from "@/components/runs/list/runs-table";
 import { pageId, toId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Runs" };

@@ -10,7 +10,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { ReviewWorkspace } from "@/components/review/review-workspace";
 import { RevisionChain } from "@/components/review/revision-chain";
 import { AuditTrail } from "@/components/review/audit-trail";
-import { PreviewNotice } from "@/components/run-view/preview-notice";
+import { PreviewNotice } from "@/components/runs/kept/preview-notice";
 import { readPreviewCheck } from "@/lib/run-records/compare-preview";
 import { pageId } from "@/lib/api/ids";
 

@@ -5,7 +5,7 @@ import { requirePageUser } from "@/lib/auth/session";
 import { findProjectAccess } from "@/lib/projects/access";
 import { fetchRunsByIds } from "@/db/queries/runs";
 import { PageTitle } from "@/components/ui/page-title";
-import { RunComparison } from "@/components/run-compare/run-comparison";
+import { RunComparison } from "@/components/runs/compare/run-comparison";
 import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Compare runs" };

@@ -7,7 +7,7 @@ import { can } from "@/lib/permissions";
 import { fetchSection, fetchSectionVersion } from "@/db/queries/sections";
 import { fetchRequiredFsMap } from "@/db/queries/loading-conditions";
 import { PageTitle } from "@/components/ui/page-title";
-import { RunSetupForm } from "@/components/run-setup/run-setup-form";
+import { RunSetupForm } from "@/components/runs/setup/run-setup-form";
 import type { SectionDocument } from "@/lib/stability";
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { fetchRun } from "@/db/queries/runs";

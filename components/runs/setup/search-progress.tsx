@@ -1,6 +1,6 @@
 "use client";
 
-import type { SearchState } from "./use-grid-search";
+import type { SearchState } from "@/components/runs/setup/use-grid-search";
 
 export function SearchProgress({ state, onCancel }: { state: SearchState; onCancel: () => void }) {
   if (state.status === "running") {

@@ -3,7 +3,7 @@
 import type { UseFormReturn } from "react-hook-form";
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { LOADING_CONDITIONS } from "@/lib/analysis/required-fs";
-import type { RunSetupInput } from "./form-values";
+import type { RunSetupInput } from "@/components/runs/setup/form-values";
 
 type SetupForm = UseFormReturn<RunSetupInput, unknown, RunSetup>;
 

@@ -6,11 +6,11 @@ import { Layer, Stage } from "react-konva";
 import type { Grid, Radii } from "@/lib/stability";
 import type { RunScene } from "@/lib/runs/run-scene";
 import type { RunView } from "@/lib/runs/view-fit";
-import { SectionShapes } from "./canvas-section";
-import { AxisMarks } from "./canvas-axes";
-import { CentreGridShapes } from "./canvas-centre-grid";
-import { CircleShapes } from "./canvas-circles";
-import { SetupHandles } from "./canvas-setup-handles";
+import { SectionShapes } from "@/components/runs/result/canvas-section";
+import { AxisMarks } from "@/components/runs/result/canvas-axes";
+import { CentreGridShapes } from "@/components/runs/result/canvas-centre-grid";
+import { CircleShapes } from "@/components/runs/result/canvas-circles";
+import { SetupHandles } from "@/components/runs/result/canvas-setup-handles";
 
 export interface RunCanvasStageProps {
   scene: RunScene;

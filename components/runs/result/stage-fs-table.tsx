@@ -1,7 +1,7 @@
 import { formatFs, verdictOf } from "@/lib/runs/verdict";
 import { METHOD_NAME } from "@/lib/runs/warning-text";
 import { VARIANT_TEXT, stageCells, type StageCell, type StagedView } from "@/lib/runs/staged-view";
-import { VerdictMark } from "./verdict-mark";
+import { VerdictMark } from "@/components/runs/result/verdict-mark";
 
 type Method = "bishop" | "fellenius";
 

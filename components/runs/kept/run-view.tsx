@@ -9,17 +9,17 @@ import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/requi
 import { materialPalette } from "@/lib/sections/material-palette";
 import { waterUsedText } from "@/lib/runs/water-used";
 import { downloadText, slug } from "@/lib/client/download";
-import { RunCanvas } from "@/components/runs/run-canvas";
-import { FsSummary } from "@/components/runs/fs-summary";
-import { SliceTable } from "@/components/runs/slice-table";
+import { RunCanvas } from "@/components/runs/result/run-canvas";
+import { FsSummary } from "@/components/runs/result/fs-summary";
+import { SliceTable } from "@/components/runs/result/slice-table";
 import { runFs } from "@/lib/runs/slice-csv";
 import { stagedView } from "@/lib/runs/staged-view";
-import { StatusBadge } from "@/components/run-list/status-badge";
+import { StatusBadge } from "@/components/runs/list/status-badge";
 import { PinnedCanvas } from "@/components/review/pinned-canvas";
 import type { PinMarker } from "@/lib/review/pin-markers";
 import { formatDateTime } from "@/lib/format";
-import { WhatIfPanel } from "./what-if-panel";
-import { SensitivityPanel } from "./sensitivity-panel";
+import { WhatIfPanel } from "@/components/runs/kept/what-if-panel";
+import { SensitivityPanel } from "@/components/runs/kept/sensitivity-panel";
 
 type Method = "bishop" | "fellenius";
 export type StoredResult = GridSearchSuccess & { setup: RunSetup };

@@ -7,11 +7,11 @@ import { Caution } from "@/components/ui/caution";
 import { criticalAttribute } from "@/lib/runs/circle-styles";
 import { buildRunScene, type CircleOverlay, type RunMethod } from "@/lib/runs/run-scene";
 import { fitView, panBy, zoomAt, type Box, type RunView } from "@/lib/runs/view-fit";
-import { FsMapLegend } from "./fs-map-legend";
-import { CanvasKey } from "./canvas-key";
+import { FsMapLegend } from "@/components/runs/result/fs-map-legend";
+import { CanvasKey } from "@/components/runs/result/canvas-key";
 
 // Konva needs a browser canvas: the stage loads on the client only.
-const RunCanvasStage = dynamic(() => import("./run-canvas-stage"), {
+const RunCanvasStage = dynamic(() => import("@/components/runs/result/run-canvas-stage"), {
   ssr: false,
   loading: () => <p className="p-4 text-sm text-ink-faint">Drawing the section…</p>,
 });

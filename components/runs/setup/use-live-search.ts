@@ -4,7 +4,7 @@ import { useEffect, useRef, useState } from "react";
 import type { SectionDocument } from "@/lib/stability";
 import { LiveScheduler, type LiveDisplay } from "@/lib/live/live-scheduler";
 import { liveOutcome, type LiveOutcome } from "@/lib/live/live-ghosts";
-import { createSearchWorker, type WorkerMessage } from "./search-worker";
+import { createSearchWorker, type WorkerMessage } from "@/components/runs/setup/search-worker";
 
 export interface LiveAnswer {
   outcome: LiveOutcome;

@@ -5,7 +5,7 @@ import { ENGINE_VERSION, type Method, type SectionDocument } from "@/lib/stabili
 import { describeChanges, inputParameters, withParameters } from "@/lib/sensitivity/parameters";
 import { METHOD_SHORT } from "@/lib/runs/warning-text";
 import { CAUTION_TEXT } from "@/lib/caution";
-import { useLiveSearch } from "@/components/run-setup/use-live-search";
+import { useLiveSearch } from "@/components/runs/setup/use-live-search";
 
 interface WhatIfPanelProps {
   /** The document the run analysed (its analysis block included), as stored with the run. */

@@ -6,7 +6,7 @@ import { useMemo, useState } from "react";
 import type { RunSummary } from "@/lib/runs/types";
 import { criticalRunIds, governingFs } from "@/lib/run-records/critical-cases";
 import { LOADING_CONDITIONS, loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
-import { PassMark, StatusBadge } from "./status-badge";
+import { PassMark, StatusBadge } from "@/components/runs/list/status-badge";
 import { formatDateTime } from "@/lib/format";
 import { BELOW_REQUIRED_LABEL, RUN_STATUSES, STATUS_LABELS } from "@/lib/review/status";
 

@@ -6,8 +6,8 @@ import { inputParameters } from "@/lib/sensitivity/parameters";
 import type { TornadoBar, Variation } from "@/lib/sensitivity/sensitivity";
 import { sensitivityCsv, sweepStudy, tornadoStudy, type SweepStudy } from "@/lib/sensitivity/study";
 import { downloadText, slug } from "@/lib/client/download";
-import { searchSequence } from "@/components/run-setup/search-worker";
-import { SensitivityCharts } from "./sensitivity-charts";
+import { searchSequence } from "@/components/runs/setup/search-worker";
+import { SensitivityCharts } from "@/components/runs/kept/sensitivity-charts";
 
 interface SensitivityPanelProps {
   runId: number;

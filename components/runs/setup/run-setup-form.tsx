@@ -16,13 +16,13 @@ import {
   waterConditionsOf,
   withWater,
 } from "@/lib/sections/water-conditions";
-import { ConditionFields, GridFields, MethodFields } from "./setup-fields";
-import { WaterConditionField } from "./water-condition-field";
-import { fromRunSetup, runSetupResolver, type RunSetupInput } from "./form-values";
-import { useGridSearch } from "./use-grid-search";
-import { SearchProgress } from "./search-progress";
-import { SearchOutcome } from "./search-outcome";
-import { RunCanvas } from "@/components/runs/run-canvas";
+import { ConditionFields, GridFields, MethodFields } from "@/components/runs/setup/setup-fields";
+import { WaterConditionField } from "@/components/runs/setup/water-condition-field";
+import { fromRunSetup, runSetupResolver, type RunSetupInput } from "@/components/runs/setup/form-values";
+import { useGridSearch } from "@/components/runs/setup/use-grid-search";
+import { SearchProgress } from "@/components/runs/setup/search-progress";
+import { SearchOutcome } from "@/components/runs/setup/search-outcome";
+import { RunCanvas } from "@/components/runs/result/run-canvas";
 
 export interface RunSetupFormProps {
   projectId: number;

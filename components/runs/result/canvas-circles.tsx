@@ -3,7 +3,7 @@ import { arcPoints } from "@/lib/runs/circle-arc";
 import type { CentreMark, DrawnCircle } from "@/lib/runs/circle-styles";
 import type { RunScene } from "@/lib/runs/run-scene";
 import { toScreen, type RunView } from "@/lib/runs/view-fit";
-import { screenPoints } from "./canvas-section";
+import { screenPoints } from "@/components/runs/result/canvas-section";
 
 const HALO = "#ffffff";
 

@@ -15,7 +15,7 @@ import {
   type GridCorner,
 } from "@/lib/runs/grid-edit";
 import { toScreen, toWorld, type Box, type RunView } from "@/lib/runs/view-fit";
-import { SETUP_ACCENT } from "./canvas-centre-grid";
+import { SETUP_ACCENT } from "@/components/runs/result/canvas-centre-grid";
 
 export interface SetupHandlesProps {
   grid: Grid;

@@ -2,8 +2,8 @@ import type { CircleFs, GridSearchSuccess } from "@/lib/stability";
 import { Caution } from "@/components/ui/caution";
 import { formatFs, verdictOf } from "@/lib/runs/verdict";
 import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "@/lib/runs/warning-text";
-import { VerdictMark } from "./verdict-mark";
-import { StageFsTable } from "./stage-fs-table";
+import { VerdictMark } from "@/components/runs/result/verdict-mark";
+import { StageFsTable } from "@/components/runs/result/stage-fs-table";
 import { stagedFromResult, type StagedView } from "@/lib/runs/staged-view";
 import { formatCount } from "@/lib/format";
 

@@ -1,7 +1,7 @@
 import { Caution } from "@/components/ui/caution";
 import { formatFs, roundFs, verdictOf } from "@/lib/runs/verdict";
 import { METHOD_NAME } from "@/lib/runs/warning-text";
-import { VerdictMark } from "./verdict-mark";
+import { VerdictMark } from "@/components/runs/result/verdict-mark";
 
 /** One run in the comparison. */
 export interface CompareRun {

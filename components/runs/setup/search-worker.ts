@@ -4,7 +4,7 @@
  * The one way the browser starts a search worker: the run form's preview and the editor's live
  * mode both go through here, so there is a single worker file and a single message contract.
  */
-import type { WorkerMessage, WorkerRequest } from "./grid-search.worker";
+import type { WorkerMessage, WorkerRequest } from "@/components/runs/setup/grid-search.worker";
 
 export type { WorkerMessage, WorkerRequest };
 

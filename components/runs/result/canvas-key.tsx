@@ -2,8 +2,8 @@ import type { ReactNode } from "react";
 import type { CentreMark } from "@/lib/runs/circle-styles";
 import type { RunScene } from "@/lib/runs/run-scene";
 import { METHOD_NAME } from "@/lib/runs/warning-text";
-import { WATER_FILL, WATER_LINE } from "./canvas-section";
-import { SETUP_ACCENT } from "./canvas-centre-grid";
+import { WATER_FILL, WATER_LINE } from "@/components/runs/result/canvas-section";
+import { SETUP_ACCENT } from "@/components/runs/result/canvas-centre-grid";
 
 function LineSample({
   colour,

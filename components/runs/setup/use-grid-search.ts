@@ -2,7 +2,7 @@
 
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { SectionDocument } from "@/lib/stability";
-import { createSearchWorker, type WorkerMessage } from "./search-worker";
+import { createSearchWorker, type WorkerMessage } from "@/components/runs/setup/search-worker";
 
 export type SearchState =
   | { status: "idle" }

@@ -8,9 +8,9 @@ import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/requi
 import { waterUsedText } from "@/lib/runs/water-used";
 import { materialPalette } from "@/lib/sections/material-palette";
 import { OVERLAY_COLOURS } from "@/lib/runs/circle-styles";
-import { RunCanvas } from "@/components/runs/run-canvas";
-import { CompareTable } from "@/components/runs/compare-table";
-import { InputDiff } from "@/components/runs/input-diff";
+import { RunCanvas } from "@/components/runs/result/run-canvas";
+import { CompareTable } from "@/components/runs/result/compare-table";
+import { InputDiff } from "@/components/runs/result/input-diff";
 
 const letter = (i: number) => String.fromCharCode(65 + i);
 
