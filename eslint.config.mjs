@@ -54,6 +54,11 @@ const config = [
       "@typescript-eslint/no-explicit-any": "error",
       "@typescript-eslint/no-unused-expressions": "error",
       "no-warning-comments": ["error", { terms: ["todo", "fixme", "xxx"], location: "start" }],
+      // Lines under 120 characters; Prettier wraps code, this keeps comments in line (long strings may run on).
+      "max-len": [
+        "error",
+        { code: 120, ignoreStrings: true, ignoreTemplateLiterals: true, ignoreUrls: true, ignoreRegExpLiterals: true },
+      ],
       // The build does not run the React Compiler, so its "compilation skipped" notices report nothing wrong.
       "react-hooks/preserve-manual-memoization": "off",
       "react-hooks/incompatible-library": "off",

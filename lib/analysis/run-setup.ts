@@ -31,7 +31,9 @@ export const runSetupSchema = z
     refine: z.boolean(),
     drawdownFrom: z.number().optional(),
     drawdownTo: z.number().optional(),
-    /** effective: pore pressures held (docs/engine.md §7(a)); staged: Duncan–Wright–Wong total-stress stages (§7(b)). */
+    /**
+     * effective: pore pressures held (docs/engine.md §7(a)); staged: Duncan–Wright–Wong total-stress stages (§7(b)).
+     */
     drawdownMethod: z.enum(["effective", "staged"]).default("effective"),
     requiredFs: z
       .number({ error: "Enter the required factor of safety." })

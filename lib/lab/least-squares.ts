@@ -66,7 +66,8 @@ function solveLeastSquares(
   xs: readonly number[],
   throughOrigin = false,
 ): { beta: number[]; covDiag: number[] } {
-  // Rank is decided on the data, not by a numerical tolerance: p parameters need p distinct x (a forced line, one x ≠ 0).
+  // Rank is decided on the data, not by a numerical tolerance: p parameters need p distinct x (a forced line, one x ≠
+  // 0).
   const distinct = new Set(xs.filter((x) => !throughOrigin || x !== 0)).size;
   if (distinct < rows[0].length) throw new Error("the points do not determine the fit (x values too few or all equal)");
   const X = new Matrix(rows);

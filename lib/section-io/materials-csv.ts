@@ -188,7 +188,10 @@ function buildMaterial(id: string, model: Model, n: Partial<Record<NumberColumn,
   };
 }
 
-/** docs/engine.md §1 bounds (error / warning): γ ∉ (5, 30] / ∉ [14, 24]; γsat ≤ γw / < γ; c' < 0 / > 200; φ' ∉ [0, 60) / > 45; su ≤ 0 / > 500. */
+/**
+ * docs/engine.md §1 bounds (error / warning): γ ∉ (5, 30] / ∉ [14, 24]; γsat ≤ γw / < γ; c' < 0 / > 200; φ' ∉ [0, 60) /
+ * > 45; su ≤ 0 / > 500.
+ */
 function checkBounds(r: RowReader, m: SectionMaterial, warnings: CsvProblem[]): void {
   if (m.model === "impenetrable") return;
   const warn = (col: string, message: string) => warnings.push(r.at(col, message));

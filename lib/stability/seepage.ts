@@ -69,7 +69,10 @@ export interface SeepageConstruction {
   parabola: BasicParabola;
   /** The phreatic line from B to the vertex on the filter, x increasing. */
   phreatic: Point[];
-  /** The same extended for a section document: pool level from the upstream toe, base level along the filter to the downstream toe. */
+  /**
+   * The same extended for a section document: pool level from the upstream toe, base level along the filter to the
+   * downstream toe.
+   */
   waterLine: Point[];
 }
 

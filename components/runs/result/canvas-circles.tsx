@@ -7,7 +7,10 @@ import { screenPoints } from "@/components/runs/result/canvas-section";
 
 const HALO = "#ffffff";
 
-/** The lowest circles (faint), the slices of the critical circle, then each critical circle with its centre, radius and label. */
+/**
+ * The lowest circles (faint), the slices of the critical circle, then each critical circle with its centre, radius and
+ * label.
+ */
 export function CircleShapes({ scene, view }: { scene: RunScene; view: RunView }) {
   return (
     <Group name="circles">

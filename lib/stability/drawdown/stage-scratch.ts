@@ -3,7 +3,10 @@
  * evaluator's scratch so that staging a circle allocates nothing.
  */
 
-/** Slice strength in the final stage: the undrained τ2 (φ = 0), drained c', φ' with post-drawdown u, or the document's su. */
+/**
+ * Slice strength in the final stage: the undrained τ2 (φ = 0), drained c', φ' with post-drawdown u, or the document's
+ * su.
+ */
 export const GOV_UNDRAINED = 0;
 export const GOV_DRAINED = 1;
 export const GOV_FIXED = 2;

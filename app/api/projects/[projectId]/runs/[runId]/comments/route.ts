@@ -15,7 +15,10 @@ export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
   return NextResponse.json({ comments: await fetchRunComments(run.id) });
 });
 
-/** A comment, pinned to a place on the section ({pin: {x, y}} in m) or to a slice ({slice: {number, method}}), or to neither. */
+/**
+ * A comment, pinned to a place on the section ({pin: {x, y}} in m) or to a slice ({slice: {number, method}}), or to
+ * neither.
+ */
 export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   const user = await requireUser();
   const { run, actor, facts } = await requireRunAccess(user, await params);

@@ -6,7 +6,9 @@ import { loadReviewState } from "@/lib/review/review-state";
 
 type Ctx = { params: Promise<{ projectId: string; runId: string }> };
 
-/** The run's review: status record, checklist with hints, comments, audit trail, revisions, and what the caller may do. */
+/**
+ * The run's review: status record, checklist with hints, comments, audit trail, revisions, and what the caller may do.
+ */
 export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
   const user = await requireUser();
   const { run, actor } = await requireRunAccess(user, await params);
