@@ -6,7 +6,7 @@
  * material only gives circles the engine rejects. The engineer moves the grid; the search warns
  * when its minimum sits on the grid's edge.
  */
-import type { SectionDocument } from "../stability";
+import type { SectionDocument } from "@/lib/stability";
 import { baseElevation, groundProfile, type XY } from "./ground-profile";
 import type { Side } from "./face";
 

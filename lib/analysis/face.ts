@@ -3,8 +3,8 @@
  * reservoir, the downstream face is dry. The reservoir side is read off the phreatic line
  * (higher water on the reservoir side); sliding on a face moves soil away from the crest.
  */
-import type { SectionDocument, Water } from "../stability";
-import { waterConditionsOf } from "../sections/water-conditions";
+import type { SectionDocument, Water } from "@/lib/stability";
+import { waterConditionsOf } from "@/lib/sections/water-conditions";
 
 export type Face = "upstream" | "downstream";
 export type Side = "left" | "right";

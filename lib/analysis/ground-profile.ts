@@ -3,7 +3,7 @@
  * polygon edge at every vertex x. The engine derives the exact ground itself; this only has
  * to be good enough to place a search grid.
  */
-import type { SectionDocument } from "../stability";
+import type { SectionDocument } from "@/lib/stability";
 
 export type XY = [number, number];
 

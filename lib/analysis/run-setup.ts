@@ -3,11 +3,16 @@
  * One zod schema serves the form (client) and the run route (server).
  */
 import { z } from "zod";
-import { gridSchema, radiiSchema, type Analysis, type SectionDocument } from "../stability";
+import { gridSchema, radiiSchema, type Analysis, type SectionDocument } from "@/lib/stability";
 import { directionForFace } from "./face";
 import { LOADING_CONDITION_KEYS, loadingCondition, type LoadingConditionKey } from "./required-fs";
-import { MAX_SEARCH_CIRCLES, searchCircleCount, tooManyCirclesMessage } from "../run-records/limits";
-import { findWaterCondition, pickWaterCondition, withWater, type WaterCondition } from "../sections/water-conditions";
+import { MAX_SEARCH_CIRCLES, searchCircleCount, tooManyCirclesMessage } from "@/lib/run-records/limits";
+import {
+  findWaterCondition,
+  pickWaterCondition,
+  withWater,
+  type WaterCondition,
+} from "@/lib/sections/water-conditions";
 
 export const runSetupSchema = z
   .object({

@@ -4,7 +4,7 @@ import CredentialsProvider from "next-auth/providers/credentials";
 import { bumpSessionVersion } from "@/db/queries/users";
 import { authenticate, SignInError, type SignedInUser } from "./sign-in";
 import { clientAddress } from "./client-address";
-import type { Role } from "../permissions";
+import type { Role } from "@/lib/permissions";
 
 /** Shown on the sign-in form when the database (or anything else) fails; the cause goes to the log. */
 export const SIGN_IN_UNAVAILABLE = "Sign-in is unavailable just now. Try again in a few minutes.";

@@ -3,8 +3,8 @@ import { getServerSession } from "next-auth";
 import { redirect } from "next/navigation";
 import { fetchSessionState } from "@/db/queries/users";
 import { authOptions } from "./options";
-import { unauthorized } from "../api/errors";
-import type { Role } from "../permissions";
+import { unauthorized } from "@/lib/api/errors";
+import type { Role } from "@/lib/permissions";
 
 export interface SessionUser {
   id: number;

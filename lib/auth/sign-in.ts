@@ -4,7 +4,7 @@ import { fetchUserByEmail } from "@/db/queries/users";
 import { bookCheckSlot, countSignInAttempt, takeBackSignInAttempt } from "@/db/queries/sign-in-counters";
 import { DUMMY_HASH, verifyPassword } from "./password";
 import { attemptKeys, decideThrottle, LOCK_MINUTES, SLOW_PATH_MAX_WAIT_MS, SLOW_PATH_SPACING_MS } from "./throttle";
-import type { Role } from "../permissions";
+import type { Role } from "@/lib/permissions";
 
 /** The one message for every failed sign-in: it never says whether the account exists. */
 export const SIGN_IN_FAILED = "The e-mail or password is not right.";

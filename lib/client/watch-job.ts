@@ -2,7 +2,7 @@
  * Following a queue job from a page: polls GET /api/projects/:id/jobs/:jobId about once a second
  * until the job ends. A server that does not answer (restarting) is tried again; the job goes on.
  */
-import type { JobView } from "../jobs/types";
+import type { JobView } from "@/lib/jobs/types";
 import { ApiClientError, fetchJson } from "./fetch-json";
 
 const POLL_MS = 1_000;

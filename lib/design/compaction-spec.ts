@@ -3,7 +3,7 @@
  * dry density (the acceptance percentage of the maximum) and the moisture window where the
  * fitted curve stays above it (lib/lab/compaction.ts), with the dry mass the fill volume needs.
  */
-import type { CompactionResult } from "../lab/compaction";
+import type { CompactionResult } from "@/lib/lab/compaction";
 
 export interface CompactionSpec {
   /** Which test set it came from. */

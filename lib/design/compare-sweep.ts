@@ -3,8 +3,8 @@
  * search of the same jobs. The server's values are what a study or a run keeps; these lists say
  * where the preview differed (beyond the tolerance of lib/run-records/compare-preview.ts).
  */
-import type { GridSearchSuccess } from "../stability";
-import { DifferenceList, MISSING, type PreviewCheck } from "../run-records/compare-preview";
+import type { GridSearchSuccess } from "@/lib/stability";
+import { DifferenceList, MISSING, type PreviewCheck } from "@/lib/run-records/compare-preview";
 import type { SweepPoint } from "./run-job";
 
 function comparePoint(d: DifferenceList, sent: SweepPoint, server: SweepPoint): void {

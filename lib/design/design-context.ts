@@ -3,9 +3,9 @@
 import { fetchLabTestSetsOfProject } from "@/db/queries/lab-tests";
 import { fetchRequiredFsMap } from "@/db/queries/loading-conditions";
 import { fetchMaterialsOfProject } from "@/db/queries/materials";
-import type { CompactionResult } from "../lab/compaction";
-import { toEngineMaterial } from "../materials/engine-material";
-import type { Material } from "../stability";
+import type { CompactionResult } from "@/lib/lab/compaction";
+import { toEngineMaterial } from "@/lib/materials/engine-material";
+import type { Material } from "@/lib/stability";
 import type { RequiredFs } from "./pick-ratio";
 import { requiredFsForSweep } from "./sweep-results";
 

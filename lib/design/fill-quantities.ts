@@ -3,7 +3,7 @@
  * volumes for a crest length, taken as a prism (the section is the maximum one, so the volume is
  * an upper bound for a dam whose height falls toward the abutments).
  */
-import { polygonArea } from "../plane-geometry";
+import { polygonArea } from "@/lib/plane-geometry";
 import type { EmbankmentGeometry } from "./embankment-geometry";
 
 export interface FillQuantities {

@@ -3,7 +3,7 @@
  * a nice step, and labels with as many decimals as the step needs, so every label reads exactly
  * the value its tick sits at (a tick at 1.05 is never printed "1.1").
  */
-import { decimalsFor, niceTicks } from "../scales";
+import { decimalsFor, niceTicks } from "@/lib/scales";
 
 export interface FsAxis {
   domain: [number, number];

@@ -3,7 +3,7 @@
  * that the section editor opens and changes like any other: regions for the base, the foundation,
  * the fill (or core and shells) and the toe drain, and the phreatic line for the chosen pool.
  */
-import type { Material, Region, SectionDocument } from "../stability";
+import type { Material, Region, SectionDocument } from "@/lib/stability";
 import { embankmentGeometry, type EmbankmentGeometry, type XY } from "./embankment-geometry";
 import { fillQuantities, type FillQuantities } from "./fill-quantities";
 import { materialRoles, type EmbankmentParams } from "./parameters";

@@ -3,8 +3,8 @@
  * (lib/analysis/auto-grid.ts, after docs/engine.md §9), is moved once by half its size when the
  * minimum lies on its edge, and reports how much one grid step changes FS near the minimum.
  */
-import { suggestGrid } from "../analysis/auto-grid";
-import type { FsMap, Grid, Radii, SectionDocument } from "../stability";
+import { suggestGrid } from "@/lib/analysis/auto-grid";
+import type { FsMap, Grid, Radii, SectionDocument } from "@/lib/stability";
 import type { DesignFace } from "./sweep-plan";
 
 export interface JobGrid {

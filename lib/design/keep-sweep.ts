@@ -3,10 +3,10 @@
  * settings (lib/jobs/design-sweep-job.ts) and the study keeps the worker's points; the answer says
  * where the browser's differed. A point without an FS, or with a doctored one, is never kept as sent.
  */
-import { ENGINE_VERSION } from "../stability";
+import { ENGINE_VERSION } from "@/lib/stability";
 import type { StoredSweep } from "./sweep-results";
 import { compareSweepPoints } from "./compare-sweep";
-import type { PreviewCheck } from "../run-records/compare-preview";
+import type { PreviewCheck } from "@/lib/run-records/compare-preview";
 
 export interface KeptSweep {
   sweep: StoredSweep;

@@ -3,13 +3,13 @@
  * for a run, keeping a run on it through the one save routine (lib/run-records/save-run.ts): the
  * server searches the point's section itself and stores its own result.
  */
-import { ApiError } from "../api/errors";
-import type { RunSetup } from "../analysis/run-setup";
-import { keepRunOnNewSection, type KeptRun } from "../run-records/save-run";
+import { ApiError } from "@/lib/api/errors";
+import type { RunSetup } from "@/lib/analysis/run-setup";
+import { keepRunOnNewSection, type KeptRun } from "@/lib/run-records/save-run";
 import { createHash } from "node:crypto";
 import { createSection, findSectionByOrigin } from "@/db/queries/sections";
 import { freeSectionName } from "@/db/queries/design-studies";
-import type { Material } from "../stability";
+import type { Material } from "@/lib/stability";
 import { compareKeptPoint } from "./compare-sweep";
 import { generateEmbankment } from "./generate-embankment";
 import type { EmbankmentParams } from "./parameters";

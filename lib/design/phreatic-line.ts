@@ -5,7 +5,7 @@
  * dam, a pervious foundation, a berm under water, a line that emerges on the face) it returns
  * the reasons and asks for a hand-drawn line rather than guessing one.
  */
-import { computeFilterSeepage, type SeepageLimit, type SeepageResult } from "../stability";
+import { computeFilterSeepage, type SeepageLimit, type SeepageResult } from "@/lib/stability";
 import type { EmbankmentGeometry, XY } from "./embankment-geometry";
 import type { EmbankmentParams } from "./parameters";
 import { assessPipingExits, type PipingAtExits } from "./piping-exit";

@@ -14,7 +14,7 @@
  * A seepage solution (flow net) would give the gradients inside the fill; until there is one this
  * is what the line alone supports.
  */
-import { criticalGradient } from "../stability";
+import { criticalGradient } from "@/lib/stability";
 import type { XY } from "./embankment-geometry";
 
 /** Where the line meets the downstream face, and the check there. */

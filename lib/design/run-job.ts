@@ -13,7 +13,7 @@ import {
   type Material,
   type Radii,
   type SectionDocument,
-} from "../stability";
+} from "@/lib/stability";
 import { DesignInputError, generateEmbankment, type GeneratedEmbankment } from "./generate-embankment";
 import { gridForFace, gridResolution, shiftTowardEdge, slideDirection } from "./grid-follow";
 import type { EmbankmentParams } from "./parameters";

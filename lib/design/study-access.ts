@@ -7,7 +7,7 @@ import type { Action } from "@/lib/permissions";
 import { DesignInputError, generateEmbankment, type EmbankmentParams } from "@/lib/design";
 import type { Material } from "@/lib/stability";
 import { fetchDesignStudy } from "@/db/queries/design-studies";
-import type { DesignStudy } from "@/lib/design/types";
+import type { DesignStudy } from "./types";
 
 /** Checks the session and the action on the project, then loads the study or answers 404. */
 export async function requireStudy(

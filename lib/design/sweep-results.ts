@@ -4,7 +4,7 @@
  * only the shape and size are checked here.
  */
 import { z } from "zod";
-import { gridSchema, radiiSchema } from "../stability";
+import { gridSchema, radiiSchema } from "@/lib/stability";
 import type { SweepPoint } from "./run-job";
 import { sweepSettingsSchema, type SweepCaseKey } from "./sweep-plan";
 import type { RequiredFs } from "./pick-ratio";

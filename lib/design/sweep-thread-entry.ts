@@ -5,8 +5,8 @@
  * sources a thread could load. Sweep jobs run on the job queue's workers (lib/jobs).
  */
 import { parentPort } from "node:worker_threads";
-import type { EngineFailure, SectionDocument } from "../stability";
-import { searchRecord, type SearchRecord } from "../run-records/search-record";
+import type { EngineFailure, SectionDocument } from "@/lib/stability";
+import { searchRecord, type SearchRecord } from "@/lib/run-records/search-record";
 
 /** The whole search of a run's document, as the browser's preview ran it. */
 export interface RecordRequest {

@@ -2,7 +2,7 @@
  * Waiting, inside a request, for a queue job that should end within seconds (a browser sweep's
  * check). The work runs on the workers; the request only reads the job's row.
  */
-import { fetchJob, requestCancel } from "../../db/queries/jobs";
+import { fetchJob, requestCancel } from "@/db/queries/jobs";
 import type { JobRecord } from "./types";
 
 const POLL_MS = 200;

@@ -14,9 +14,9 @@ import {
   sweepSettingsSchema,
   type StoredSweep,
   type SweepJob,
-} from "../design";
-import { ENGINE_VERSION, type Material } from "../stability";
-import { fetchDesignStudy, saveDesignSweep } from "../../db/queries/design-studies";
+} from "@/lib/design";
+import { ENGINE_VERSION, type Material } from "@/lib/stability";
+import { fetchDesignStudy, saveDesignSweep } from "@/db/queries/design-studies";
 import { CANCELLED, type JobKind } from "./kind";
 
 const fs = z.coerce.number().positive();

@@ -5,8 +5,8 @@
  * own result, inside the one transaction that ends the job.
  */
 import type { ZodType } from "zod";
-import type { Knex } from "../../db/index";
-import type { Action } from "../permissions";
+import type { Knex } from "@/db/index";
+import type { Action } from "@/lib/permissions";
 import type { JobRecord } from "./types";
 
 /** What a running job may ask of its worker. */

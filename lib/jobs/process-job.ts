@@ -12,8 +12,8 @@ import {
   markFailed,
   markRetrying,
   saveJobProgress,
-} from "../../db/queries/jobs";
-import { ApiError } from "../api/errors";
+} from "@/db/queries/jobs";
+import { ApiError } from "@/lib/api/errors";
 import { CANCELLED, type JobContext } from "./kind";
 import { jobKind } from "./kinds";
 

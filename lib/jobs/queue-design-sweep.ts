@@ -1,7 +1,7 @@
 import "server-only";
-import type { DesignStudy } from "../design/types";
-import type { SweepSettings } from "../design/sweep-plan";
-import { fetchDesignContext } from "../design/design-context";
+import type { DesignStudy } from "@/lib/design/types";
+import type { SweepSettings } from "@/lib/design/sweep-plan";
+import { fetchDesignContext } from "@/lib/design/design-context";
 import { designStudySubject, designSweepKind, type DesignSweepInput } from "./design-sweep-job";
 import { startJob } from "./start-job";
 import type { JobView } from "./types";

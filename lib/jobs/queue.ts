@@ -4,7 +4,7 @@
  * "job-<row id>"), so a row may be offered again whenever there is doubt that Redis holds it.
  */
 import { Queue, type ConnectionOptions } from "bullmq";
-import { readServerEnv } from "../env";
+import { readServerEnv } from "@/lib/env";
 
 export const QUEUE_NAME = "scarpline-jobs";
 

@@ -2,7 +2,7 @@
  * Reading a job for a page: the row, with the queue's health. A row still waiting for a queue
  * that was down is offered again here, so a page that polls also brings its job in.
  */
-import { fetchJobOfProject, fetchLatestJob } from "../../db/queries/jobs";
+import { fetchJobOfProject, fetchLatestJob } from "@/db/queries/jobs";
 import { queueUp } from "./queue";
 import { enqueueRow } from "./reconcile";
 import type { JobRecord, JobView } from "./types";

@@ -5,7 +5,7 @@
  * queue job failed for good (a worker died on every try) are marked failed.
  */
 import type { Queue } from "bullmq";
-import { fetchEnqueuedActiveJobs, fetchUnenqueuedJobs, markEnqueued, markFailed } from "../../db/queries/jobs";
+import { fetchEnqueuedActiveJobs, fetchUnenqueuedJobs, markEnqueued, markFailed } from "@/db/queries/jobs";
 import { bullJobId, offerJob, type QueueJobData } from "./queue";
 
 const BATCH = 100;

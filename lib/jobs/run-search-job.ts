@@ -5,20 +5,21 @@
  * the transaction that ends the job. The job's own result is the new run's id and the preview check.
  */
 import { z } from "zod";
-import { runSetupSchema } from "../analysis/run-setup";
-import { searchResultSchema } from "../run-records/result-schema";
-import { comparePreview, type PreviewCheck } from "../run-records/compare-preview";
-import { computeRunRecord, type RunRecord } from "../run-records/run-record";
-import { runRow } from "../run-records/run-row";
-import { searchCircleCount, MAX_SEARCH_CIRCLES } from "../run-records/limits";
-import { sectionDocumentSchema } from "../stability/schema";
-import { createRun } from "../../db/queries/runs";
+import { runSetupSchema } from "@/lib/analysis/run-setup";
+import { searchResultSchema } from "@/lib/run-records/result-schema";
+import { comparePreview, type PreviewCheck } from "@/lib/run-records/compare-preview";
+import { computeRunRecord, type RunRecord } from "@/lib/run-records/run-record";
+import { runRow } from "@/lib/run-records/run-row";
+import { searchCircleCount, MAX_SEARCH_CIRCLES } from "@/lib/run-records/limits";
+import { storedSectionSchema } from "@/lib/sections/water-conditions";
+import { createRun } from "@/db/queries/runs";
 import type { JobKind } from "./kind";
 
 export const runSearchInputSchema = z.object({
   sectionId: z.number().int().positive(),
   sectionVersionId: z.number().int().positive(),
-  document: sectionDocumentSchema,
+  // With its named water conditions: the set-up picks one of them (lib/analysis/run-setup.ts).
+  document: storedSectionSchema,
   setup: runSetupSchema,
   title: z.string().min(1).max(200),
   revisesRunId: z.number().int().positive().nullable(),

@@ -3,8 +3,8 @@
  * the row (input frozen), then offer it to the queue. When Redis is down the row stays queued
  * and the workers enqueue it as soon as Redis answers (lib/jobs/reconcile.ts); nothing is lost.
  */
-import { ApiError } from "../api/errors";
-import { countActiveJobs, createJob, fetchJob } from "../../db/queries/jobs";
+import { ApiError } from "@/lib/api/errors";
+import { countActiveJobs, createJob, fetchJob } from "@/db/queries/jobs";
 import type { JobKind } from "./kind";
 import { enqueueRow } from "./reconcile";
 import { toJobView } from "./view";

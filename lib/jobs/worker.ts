@@ -5,7 +5,7 @@
  */
 import os from "node:os";
 import { Queue, UnrecoverableError, Worker } from "bullmq";
-import { readServerEnv } from "../env";
+import { readServerEnv } from "@/lib/env";
 import { JOB_ATTEMPTS, QUEUE_NAME, redisConnection, type QueueJobData } from "./queue";
 import { JobInputError, processJob } from "./process-job";
 import { reconcile } from "./reconcile";

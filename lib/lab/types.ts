@@ -1,4 +1,4 @@
-import type { LabTestRecord } from "../materials/lab-kinds";
+import type { LabTestRecord } from "@/lib/materials/lab-kinds";
 
 // A stored lab test set (db/queries/lab-tests.ts reads and writes it).
 

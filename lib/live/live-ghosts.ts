@@ -2,7 +2,7 @@
  * What the editor draws from a live search: each method's critical circle and FS, or, when the
  * drawing under the pointer cannot be analysed, the engine's first objection in its own words.
  */
-import type { Circle, GridSearchResult, Method } from "../stability";
+import type { Circle, GridSearchResult, Method } from "@/lib/stability";
 
 export interface LiveGhost {
   method: Method;

@@ -5,14 +5,14 @@
  * server uses when a run is kept, so a live FS and the FS of a full run of the same state are
  * the same number (the engine is deterministic; docs/engine.md §5).
  */
-import { suggestGrid } from "../analysis/auto-grid";
-import { directionForFace } from "../analysis/face";
-import { loadingCondition, type LoadingConditionKey } from "../analysis/required-fs";
-import { documentForRun, type RunSetup } from "../analysis/run-setup";
-import { searchCircleCount } from "../run-records/limits";
-import { storeDrawnWater } from "../sections/water-condition-edits";
-import { findWaterCondition, pickWaterCondition } from "../sections/water-conditions";
-import type { SectionDocument } from "../stability";
+import { suggestGrid } from "@/lib/analysis/auto-grid";
+import { directionForFace } from "@/lib/analysis/face";
+import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
+import { documentForRun, type RunSetup } from "@/lib/analysis/run-setup";
+import { searchCircleCount } from "@/lib/run-records/limits";
+import { storeDrawnWater } from "@/lib/sections/water-condition-edits";
+import { findWaterCondition, pickWaterCondition } from "@/lib/sections/water-conditions";
+import type { SectionDocument } from "@/lib/stability";
 
 /** The set-up a new run form starts from: steady seepage, downstream face, both methods, the automatic grid. */
 export function automaticSetup(doc: SectionDocument, condition: LoadingConditionKey = "steady-seepage"): RunSetup {

@@ -2,9 +2,9 @@
  * The words of each review notice, as plain text that reads the same in any mail program.
  * Pure: the sender gathers the facts and the links.
  */
-import { CAUTION_TEXT } from "../caution";
-import type { NoticeKind } from "../review/notices";
-import { formatDateTime } from "../format";
+import { CAUTION_TEXT } from "@/lib/caution";
+import type { NoticeKind } from "@/lib/review/notices";
+import { formatDateTime } from "@/lib/format";
 
 export interface NoticeFacts {
   projectName: string;

@@ -1,12 +1,12 @@
 import "server-only";
-import { readServerEnv } from "../env";
-import { loadingCondition, type LoadingConditionKey } from "../analysis/required-fs";
+import { readServerEnv } from "@/lib/env";
+import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import type { RunDetail } from "@/lib/runs/types";
 import { fetchRunComments, recordRunEvent } from "@/db/queries/review";
 import { fetchNoticeRecipients, type NoticeRecipient } from "@/db/queries/notifications";
-import type { TransitionAction } from "../review/status";
-import type { NoticeKind } from "../review/notices";
-import { commentLabel } from "../review/comment-label";
+import type { TransitionAction } from "@/lib/review/status";
+import type { NoticeKind } from "@/lib/review/notices";
+import { commentLabel } from "@/lib/review/comment-label";
 import { composeNotice, type NoticeFacts } from "./compose-notice";
 import { mailFrom, mailTransport } from "./transport";
 

@@ -1,6 +1,6 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
-import { readServerEnv } from "../env";
+import { readServerEnv } from "@/lib/env";
 
 const g = globalThis as unknown as { scarplineMail?: Transporter };
 

@@ -1,8 +1,8 @@
 import "server-only";
 import { fetchMemberRole, fetchProjectById } from "@/db/queries/projects";
-import { ApiError, notFound, forbidden } from "../api/errors";
-import { can, effectiveProjectRole, type Action, type Role } from "../permissions";
-import type { SessionUser } from "../auth/session";
+import { ApiError, notFound, forbidden } from "@/lib/api/errors";
+import { can, effectiveProjectRole, type Action, type Role } from "@/lib/permissions";
+import type { SessionUser } from "@/lib/auth/session";
 
 export interface ProjectAccess {
   project: NonNullable<Awaited<ReturnType<typeof fetchProjectById>>>;

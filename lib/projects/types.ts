@@ -1,4 +1,4 @@
-import type { ProjectRole } from "../permissions";
+import type { ProjectRole } from "@/lib/permissions";
 
 // A project and its members as the pages read them (db/queries/projects.ts fills them from rows).
 

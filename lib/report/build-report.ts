@@ -3,21 +3,21 @@
  * required FS, the drawing, the slices, the warnings, and where the review stands.
  * Pure: the route gathers the records; this only lays them out.
  */
-import type { GridSearchSuccess, Radii, SectionDocument, SliceRow } from "../stability";
-import type { RunSetup } from "../analysis/run-setup";
-import { LOADING_CONDITIONS } from "../analysis/required-fs";
-import { CAUTION_TEXT } from "../caution";
-import { formatFs, verdictOf, verdictWords } from "../runs/verdict";
-import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "../runs/warning-text";
-import { fullChecklist, type ChecklistEntry } from "../review/checklist";
-import { STATUS_WORDS, statusWords, type RunStatus } from "../review/status";
-import type { MaterialSourceRecord } from "../review/material-sources";
+import type { GridSearchSuccess, Radii, SectionDocument, SliceRow } from "@/lib/stability";
+import type { RunSetup } from "@/lib/analysis/run-setup";
+import { LOADING_CONDITIONS } from "@/lib/analysis/required-fs";
+import { CAUTION_TEXT } from "@/lib/caution";
+import { formatFs, verdictOf, verdictWords } from "@/lib/runs/verdict";
+import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "@/lib/runs/warning-text";
+import { fullChecklist, type ChecklistEntry } from "@/lib/review/checklist";
+import { STATUS_WORDS, statusWords, type RunStatus } from "@/lib/review/status";
+import type { MaterialSourceRecord } from "@/lib/review/material-sources";
 import { ALARM, MOSS, ReportWriter, SOFT, INK } from "./report-writer";
 import { drawSection } from "./section-drawing";
-import { waterUsedText } from "../runs/water-used";
+import { waterUsedText } from "@/lib/runs/water-used";
 import { writeSliceTable } from "./slice-pages";
-import { VARIANT_TEXT, stageCells, stagedView } from "../runs/staged-view";
-import { formatCount, formatDateTime } from "../format";
+import { VARIANT_TEXT, stageCells, stagedView } from "@/lib/runs/staged-view";
+import { formatCount, formatDateTime } from "@/lib/format";
 import { writeSensitivity, type ReportSensitivity } from "./sensitivity-section";
 
 export interface ReportInput {

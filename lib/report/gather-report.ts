@@ -1,9 +1,9 @@
 import "server-only";
 import type { RunDetail } from "@/lib/runs/types";
 import { fetchChecklist, fetchReviewRecord, fetchRunComments } from "@/db/queries/review";
-import { collectMaterialSources } from "../review/collect-material-sources";
-import { commentLabel } from "../review/comment-label";
-import type { SectionDocument } from "../stability";
+import { collectMaterialSources } from "@/lib/review/collect-material-sources";
+import { commentLabel } from "@/lib/review/comment-label";
+import type { SectionDocument } from "@/lib/stability";
 import type { ReportInput } from "./build-report";
 
 /** Everything the report of one run shows, read from the database. */

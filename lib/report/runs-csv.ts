@@ -2,11 +2,11 @@
  * The project's runs as CSV, one row per run, through the app's one writer
  * (lib/section-io/csv-write.ts), with a leading `#` caution line as the slice CSV has.
  */
-import { CAUTION_TEXT } from "../caution";
-import { LOADING_CONDITIONS } from "../analysis/required-fs";
-import { writeCsv } from "../section-io/csv-write";
-import { verdictOf } from "../runs/verdict";
-import { statusWords, type RunStatus } from "../review/status";
+import { CAUTION_TEXT } from "@/lib/caution";
+import { LOADING_CONDITIONS } from "@/lib/analysis/required-fs";
+import { writeCsv } from "@/lib/section-io/csv-write";
+import { verdictOf } from "@/lib/runs/verdict";
+import { statusWords, type RunStatus } from "@/lib/review/status";
 
 export interface RunCsvRow {
   id: number;

@@ -4,11 +4,11 @@
  * method's critical circle (the slip arc bold, its centre marked).
  */
 import { rgb, type RGB } from "pdf-lib";
-import type { CircleFs, Grid, SectionDocument } from "../stability";
-import { arcPoints } from "../runs/circle-arc";
-import { buildRunScene } from "../runs/run-scene";
-import { niceTicks } from "../scales";
-import { materialPalette } from "../sections/material-palette";
+import type { CircleFs, Grid, SectionDocument } from "@/lib/stability";
+import { arcPoints } from "@/lib/runs/circle-arc";
+import { buildRunScene } from "@/lib/runs/run-scene";
+import { niceTicks } from "@/lib/scales";
+import { materialPalette } from "@/lib/sections/material-palette";
 import { INK, SOFT, type ReportWriter } from "./report-writer";
 
 export interface DrawingInput {

@@ -4,7 +4,7 @@
  */
 import type { ReportWriter } from "./report-writer";
 import { SOFT } from "./report-writer";
-import type { TornadoBar } from "../sensitivity/sensitivity";
+import type { TornadoBar } from "@/lib/sensitivity/sensitivity";
 
 export interface ReportSensitivity {
   /** "±10 % of each value" or "one standard deviation". */

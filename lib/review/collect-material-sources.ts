@@ -1,5 +1,5 @@
 import "server-only";
-import type { SectionDocument } from "../stability";
+import type { SectionDocument } from "@/lib/stability";
 import { fetchMaterialsOfProject } from "@/db/queries/materials";
 import { fetchLabTestSetsOfProject } from "@/db/queries/lab-tests";
 import { buildMaterialSources, type MaterialSourceRecord } from "./material-sources";

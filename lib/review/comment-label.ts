@@ -1,4 +1,4 @@
-import type { RunComment } from "@/lib/review/types";
+import type { RunComment } from "./types";
 
 /** Comments are numbered 1…n in the order written; the canvas markers carry the same numbers. */
 export function commentLabel(c: Pick<RunComment, "pin" | "slice">, index: number): string {

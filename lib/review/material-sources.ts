@@ -3,10 +3,10 @@
  * report still says what the reviewer saw after the library changes.
  * A library source counts only while the library value equals the value the run analysed.
  */
-import type { Material } from "../stability";
-import { LAB_KIND_INFO, type LabTestKind } from "../materials/lab-kinds";
-import { MODEL_PARAMETERS, PARAMETER_INFO, parameterValue, type MaterialParameters } from "../materials/parameters";
-import type { ParameterSources } from "../materials/sources";
+import type { Material } from "@/lib/stability";
+import { LAB_KIND_INFO, type LabTestKind } from "@/lib/materials/lab-kinds";
+import { MODEL_PARAMETERS, PARAMETER_INFO, parameterValue, type MaterialParameters } from "@/lib/materials/parameters";
+import type { ParameterSources } from "@/lib/materials/sources";
 
 export interface ParameterSourceLine {
   symbol: string;

@@ -2,7 +2,7 @@
  * Where each comment's numbered marker sits on the section (m): at its pin, or at the middle of
  * its slice's base on the critical circle. Comments pinned to nothing get no marker.
  */
-import type { SliceRow } from "../stability";
+import type { SliceRow } from "@/lib/stability";
 
 export interface PinMarker {
   /** The comment's number, 1-based in the order written. */

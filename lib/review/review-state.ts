@@ -1,6 +1,6 @@
 import "server-only";
 import { fetchChecklist, fetchReviewRecord, fetchRunComments, fetchRunEvents } from "@/db/queries/review";
-import type { ReviewRecord, RunComment, RunEvent } from "@/lib/review/types";
+import type { ReviewRecord, RunComment, RunEvent } from "./types";
 import { fetchRevisionChain } from "@/db/queries/runs";
 import type { ChainLink, RunDetail } from "@/lib/runs/types";
 import { availableActions, checkChecklistEdit, checkComment, checkDraftChange, type Actor } from "./rules";

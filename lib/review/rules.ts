@@ -4,7 +4,7 @@
  * Refusals come back as data: 403 when the person may not, 409 when the run's state forbids it,
  * 422 when something the action needs is missing.
  */
-import { can, type Role } from "../permissions";
+import { can, type Role } from "@/lib/permissions";
 import { TRANSITIONS, TRANSITION_ACTIONS, type RunStatus, type TransitionAction } from "./status";
 import { openChecklistItems, type ChecklistEntry } from "./checklist";
 import { MIN_BELOW_REQUIRED_REASON } from "./below-required";

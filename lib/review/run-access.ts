@@ -1,8 +1,8 @@
 import "server-only";
-import { ApiError, notFound } from "../api/errors";
-import { parseId } from "../api/handler";
-import { requireProjectAccess, type ProjectAccess } from "../projects/access";
-import type { SessionUser } from "../auth/session";
+import { ApiError, notFound } from "@/lib/api/errors";
+import { parseId } from "@/lib/api/handler";
+import { requireProjectAccess, type ProjectAccess } from "@/lib/projects/access";
+import type { SessionUser } from "@/lib/auth/session";
 import { fetchRun } from "@/db/queries/runs";
 import type { RunDetail } from "@/lib/runs/types";
 import type { Actor, Refusal, RunFacts } from "./rules";

@@ -4,7 +4,7 @@
  * the run page can say so. Pure: no engine calls here.
  */
 import { z } from "zod";
-import type { CircleFs, FsMap, GridSearchSuccess, Method } from "../stability";
+import type { CircleFs, FsMap, GridSearchSuccess, Method } from "@/lib/stability";
 import type { StoredSearchResult } from "./result-schema";
 
 /** Relative agreement required; the engine is deterministic, so anything beyond float noise is a difference. */

@@ -3,25 +3,25 @@
  * search (critical circles, FS map, lowest circles, counts, warnings), its slice tables, and how
  * the preview compared. Nothing the browser computed is stored.
  */
-import { ApiError } from "../api/errors";
+import { ApiError } from "@/lib/api/errors";
 import {
   documentForRun,
   runSetupSchema,
   UnknownWaterConditionError,
   waterConditionForRun,
   type RunSetup,
-} from "../analysis/run-setup";
-import type { WaterCondition } from "../sections/water-conditions";
+} from "@/lib/analysis/run-setup";
+import type { WaterCondition } from "@/lib/sections/water-conditions";
 import {
   validateSection,
   type GridSearchSuccess,
   type Method,
   type SectionDocument,
   type SliceRow,
-} from "../stability";
+} from "@/lib/stability";
 import type { PreviewCheck } from "./compare-preview";
 import { searchOnServer } from "./server-search";
-import { userIssue } from "../runs/engine-issue-text";
+import { userIssue } from "@/lib/runs/engine-issue-text";
 
 export type StoredSliceTables = Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>;
 

@@ -1,8 +1,8 @@
 /** What a kept run's row is made of: the one place a run record's fields meet the runs table's. */
-import { ApiError } from "../api/errors";
-import { loadingCondition } from "../analysis/required-fs";
-import type { RunSetup } from "../analysis/run-setup";
-import { ENGINE_VERSION } from "../stability";
+import { ApiError } from "@/lib/api/errors";
+import { loadingCondition } from "@/lib/analysis/required-fs";
+import type { RunSetup } from "@/lib/analysis/run-setup";
+import { ENGINE_VERSION } from "@/lib/stability";
 import type { NewRun } from "@/db/queries/runs";
 import type { RunRecord } from "./run-record";
 

@@ -3,14 +3,14 @@
  * searches the stored section version itself (computeRunRecord), stores its own result, and
  * answers with how the preview compared. Route handlers only authenticate and parse.
  */
-import { notFound } from "../api/errors";
-import { runSetupSchema } from "../analysis/run-setup";
-import type { GridSearchSuccess, SectionDocument } from "../stability";
+import { notFound } from "@/lib/api/errors";
+import { runSetupSchema } from "@/lib/analysis/run-setup";
+import type { GridSearchSuccess, SectionDocument } from "@/lib/stability";
 import { fetchSection, fetchSectionVersion } from "@/db/queries/sections";
 import { createRun, createSectionWithRun, fetchRunProjectId, RevisedRunNotFoundError } from "@/db/queries/runs";
-import { startJob } from "../jobs/start-job";
-import { runSearchKind, runSearchSubject } from "../jobs/run-search-job";
-import type { JobView } from "../jobs/types";
+import { startJob } from "@/lib/jobs/start-job";
+import { runSearchKind, runSearchSubject } from "@/lib/jobs/run-search-job";
+import type { JobView } from "@/lib/jobs/types";
 import { QUEUE_SEARCH_CIRCLES, searchCircleCount } from "./limits";
 import { revisedNotFound, runRow, type RunMeta } from "./run-row";
 import { comparePreview, type PreviewCheck } from "./compare-preview";

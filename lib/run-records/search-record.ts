@@ -14,7 +14,7 @@ import {
   type GridSearchSuccess,
   type Method,
   type SectionDocument,
-} from "../stability";
+} from "@/lib/stability";
 
 export type CriticalReports = Partial<Record<Method, CircleSuccess>>;
 

@@ -4,8 +4,8 @@
  * stall other users' requests. Without the bundle the search runs in this process after yielding
  * once, and the outcome says so.
  */
-import type { EngineFailure, SectionDocument } from "../stability";
-import { engineBundle, onEngineThread } from "../design/engine-threads";
+import type { EngineFailure, SectionDocument } from "@/lib/stability";
+import { engineBundle, onEngineThread } from "@/lib/design/engine-threads";
 import { searchRecord, type SearchRecord } from "./search-record";
 
 export interface ServerSearch {

@@ -6,7 +6,7 @@
  * ground there is the lowered pool; beyond the crest the pre-drawdown line stands unchanged.
  */
 import { groundAt } from "./section-outline";
-import { elevationAt } from "../plane-geometry";
+import { elevationAt } from "@/lib/plane-geometry";
 
 type Pt = readonly [number, number];
 

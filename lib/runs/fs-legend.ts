@@ -2,7 +2,7 @@
  * What the colour bar under the FS map shows: tick values with their position along the
  * bar, the gradient's colour stops, and where the required FS falls.
  */
-import { niceTicks } from "../scales";
+import { niceTicks } from "@/lib/scales";
 import { FS_MAP_SCALE, scaleHex, type ColourScale } from "./colour-scale";
 import { fsToUnit, type FsRange } from "./fs-map-cells";
 

@@ -11,7 +11,7 @@ import { fsMapCells, fsRange, type FsCell, type FsRange } from "./fs-map-cells";
 import { bandLines, normaliseGrid, type BandLine } from "./grid-edit";
 import { materialFills } from "./material-tints";
 import { groundAt, groundLine, pondedWater, poolLevelSpans, sectionBox } from "./section-outline";
-import { elevationAt } from "../plane-geometry";
+import { elevationAt } from "@/lib/plane-geometry";
 import { poolSide, waterAfterDrawdown } from "./drawdown-water";
 import { unionBoxes, type Box } from "./view-fit";
 

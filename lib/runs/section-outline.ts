@@ -5,7 +5,7 @@
  */
 import type { SectionDocument } from "@/lib/stability";
 import { sectionGround } from "@/lib/stability/prepare";
-import { elevationAt } from "../plane-geometry";
+import { elevationAt } from "@/lib/plane-geometry";
 import { boxOfPoints, type Box } from "./view-fit";
 
 type Pt = readonly [number, number];

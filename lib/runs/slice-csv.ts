@@ -3,7 +3,7 @@
  * formula escaping, byte-order mark). Leading lines starting with `#` carry the engineering
  * caution and the run's details.
  */
-import { CAUTION_TEXT } from "../caution";
+import { CAUTION_TEXT } from "@/lib/caution";
 import {
   columnHeader,
   formatCell,
@@ -13,7 +13,7 @@ import {
   type SliceMethod,
 } from "./slice-columns";
 import { VARIANT_TEXT, stageLine, type StagedView } from "./staged-view";
-import { writeCsv } from "../section-io/csv-write";
+import { writeCsv } from "@/lib/section-io/csv-write";
 import type { Circle, SliceRow } from "@/lib/stability";
 
 /** What the leading comment lines say about the run. */

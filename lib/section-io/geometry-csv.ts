@@ -1,5 +1,5 @@
 import { RowReader, finish, readCsvTable, type CsvParseResult, type CsvProblem } from "./csv-read";
-import { polygonArea } from "../plane-geometry";
+import { polygonArea } from "@/lib/plane-geometry";
 import { writeCsv } from "./csv-write";
 import type { Point, SectionRegion } from "./section-types";
 

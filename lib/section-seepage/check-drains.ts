@@ -1,5 +1,5 @@
-import type { SectionDocument } from "../stability";
-import { distanceToSegment, pointInPolygon } from "../editor/hit-testing";
+import type { SectionDocument } from "@/lib/stability";
+import { distanceToSegment, pointInPolygon } from "@/lib/editor/hit-testing";
 import type { SeepageSettingsInput } from "./types";
 
 const ON_EDGE = 1e-6;

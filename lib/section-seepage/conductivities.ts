@@ -1,5 +1,5 @@
-import type { MaterialParameters } from "../materials/parameters";
-import type { ParameterSources } from "../materials/sources";
+import type { MaterialParameters } from "@/lib/materials/parameters";
+import type { ParameterSources } from "@/lib/materials/sources";
 import type { MaterialConductivity } from "./types";
 
 /** The conductivities a seepage run takes from the library, with the test set kh came from. */

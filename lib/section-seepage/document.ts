@@ -2,9 +2,9 @@
  * The seepage solver's input (docs/seepage.md; docs/engine-io.md §2) from a stored section, one of
  * its water conditions, the library's conductivities and the saved seepage settings.
  */
-import type { SectionDocument } from "../stability";
-import type { SeepageDocument } from "../seepage";
-import { poolLevels, type WaterCondition } from "../sections/water-conditions";
+import type { SectionDocument } from "@/lib/stability";
+import type { SeepageDocument } from "@/lib/seepage";
+import { poolLevels, type WaterCondition } from "@/lib/sections/water-conditions";
 import type { MaterialConductivity, SeepageSettingsInput } from "./types";
 
 export interface SeepageIssueForView {

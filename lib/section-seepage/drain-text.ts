@@ -2,7 +2,7 @@
  * Drains typed as text: one drain per line, its points as "x y" pairs separated by semicolons,
  * e.g. "108 6; 128 6". The numbers are metres; a decimal comma is refused with the fix.
  */
-import { parseDecimal } from "../section-io";
+import { parseDecimal } from "@/lib/section-io";
 
 type Point = [number, number];
 

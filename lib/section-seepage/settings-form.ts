@@ -1,4 +1,4 @@
-import { parseDecimal } from "../section-io";
+import { parseDecimal } from "@/lib/section-io";
 import { drainsFromText, drainsToText } from "./drain-text";
 import { seepageSettingsInputSchema, type SeepageSettingsInput } from "./types";
 

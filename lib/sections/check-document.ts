@@ -1,8 +1,8 @@
-import { validateSection, type SectionDocument, type Issue } from "../stability";
-import { ApiError } from "../api/errors";
+import { validateSection, type SectionDocument, type Issue } from "@/lib/stability";
+import { ApiError } from "@/lib/api/errors";
 import { checkWaterConditions } from "./check-water-conditions";
 import type { StoredSection } from "./water-conditions";
-import { sectionLimitErrors } from "../validations/section-limits";
+import { sectionLimitErrors } from "@/lib/validations/section-limits";
 
 /**
  * Validates a section document with the engine's own rules, and its named water conditions, before

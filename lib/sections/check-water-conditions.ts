@@ -4,8 +4,8 @@
  * each water block by the engine's own rules (reported at waterConditions[i].water…).
  */
 import { z } from "zod";
-import { validateSection, type Issue, type SectionDocument } from "../stability";
-import { loadingCondition } from "../analysis/required-fs";
+import { validateSection, type Issue, type SectionDocument } from "@/lib/stability";
+import { loadingCondition } from "@/lib/analysis/required-fs";
 import { poolBefore, poolLevels, waterConditionSchema, withWater, type WaterCondition } from "./water-conditions";
 
 const listSchema = z.array(waterConditionSchema).max(20, "At most 20 water conditions per section.");

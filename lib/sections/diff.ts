@@ -3,7 +3,7 @@
  * summary of a saved version and for the input diff when runs are compared.
  * Pure: no framework or database imports.
  */
-import type { Material, SectionDocument } from "../stability";
+import type { Material, SectionDocument } from "@/lib/stability";
 import type { StoredSection } from "./water-conditions";
 
 export type DiffArea = "materials" | "geometry" | "water" | "loads" | "analysis";

@@ -1,4 +1,4 @@
-import type { SectionDocument } from "../stability";
+import type { SectionDocument } from "@/lib/stability";
 
 /**
  * The drawing a new section starts from when nothing is imported: a plain 8 m bank at 2H:1V on

@@ -3,7 +3,7 @@
  * editor's undo history. The editor draws one water at a time: the document's own `water` is
  * the drawn copy of the condition being edited, written back into it on every edit.
  */
-import type { SectionDocument, Water } from "../stability";
+import type { SectionDocument, Water } from "@/lib/stability";
 import { waterConditionsOf, type StoredSection, type WaterCondition } from "./water-conditions";
 
 const sameWater = (a: Water | undefined, b: Water | undefined) =>

@@ -9,10 +9,10 @@
  * phreatic line stands above the ground at that edge (docs/engine-io.md, ponded water).
  */
 import { z } from "zod";
-import { waterSchema, type SectionDocument, type Water } from "../stability";
-import { LOADING_CONDITION_KEYS, type LoadingConditionKey } from "../analysis/required-fs";
-import { groundProfile } from "../analysis/ground-profile";
-import { elevationAt } from "../plane-geometry";
+import { sectionDocumentSchema, waterSchema, type SectionDocument, type Water } from "@/lib/stability";
+import { LOADING_CONDITION_KEYS, type LoadingConditionKey } from "@/lib/analysis/required-fs";
+import { groundProfile } from "@/lib/analysis/ground-profile";
+import { elevationAt } from "@/lib/plane-geometry";
 
 /**
  * construction: pore pressures of construction, no reservoir; steady: seepage from the pools;
@@ -47,6 +47,11 @@ export type WaterCondition = z.infer<typeof waterConditionSchema>;
 
 /** The stored section: the engine document plus its named water conditions. */
 export type StoredSection = SectionDocument & { waterConditions?: WaterCondition[] };
+
+/** A stored section version as it is frozen into a job: the engine's document plus its named waters. */
+export const storedSectionSchema = sectionDocumentSchema.extend({
+  waterConditions: z.array(waterConditionSchema).optional(),
+});
 
 /** The kind of water each loading condition calls for (common practice, e.g. USACE EM 1110-2-1902 ch. 3). */
 export const USUAL_KIND: Record<LoadingConditionKey, WaterKind> = {

@@ -4,7 +4,7 @@
  * to move in. Applying values writes only those that differ from the stored ones, so the stored
  * values give back the stored document itself and therefore the stored FS, bit for bit.
  */
-import type { Material, SectionDocument } from "../stability";
+import type { Material, SectionDocument } from "@/lib/stability";
 
 export interface InputParameter {
   /** Stable key: "material:<id>:c|phi|su|gamma", "drawdown:to", "water:ru", "loads:kh". */

@@ -3,9 +3,9 @@
  * engine threads, as a kept run is searched), never taken from the browser.
  */
 import { z } from "zod";
-import type { Method, SectionDocument } from "../stability";
-import { searchOnServer } from "../run-records/server-search";
-import type { ReportSensitivity } from "../report/sensitivity-section";
+import type { Method, SectionDocument } from "@/lib/stability";
+import { searchOnServer } from "@/lib/run-records/server-search";
+import type { ReportSensitivity } from "@/lib/report/sensitivity-section";
 import { inputParameters } from "./parameters";
 import { tornadoStudy } from "./study";
 import type { Variation } from "./sensitivity";

@@ -3,8 +3,8 @@
  * with its crossing of the required FS. The FS of a trial document comes from the caller (the
  * browser's worker, or the server's own search for the PDF), so both use this one routine.
  */
-import type { SectionDocument } from "../stability";
-import { writeCsv } from "../section-io/csv-write";
+import type { SectionDocument } from "@/lib/stability";
+import { writeCsv } from "@/lib/section-io/csv-write";
 import { withParameters, type InputParameter } from "./parameters";
 import {
   bisectTarget,

@@ -1,6 +1,6 @@
 import "server-only";
 import { materialBelongsToProject, sectionBelongsToProject } from "@/db/queries/documents";
-import { ApiError } from "../api/errors";
+import { ApiError } from "@/lib/api/errors";
 import { classifyUpload, SNIFF_BYTES, type FileTypeSpec } from "./file-types";
 import type { UploadedFile, UploadFields } from "./upload-form";
 

@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { ApiError } from "../api/errors";
-import { fieldErrors } from "../api/handler";
+import { ApiError } from "@/lib/api/errors";
+import { fieldErrors } from "@/lib/api/handler";
 import type { DocumentFilter } from "@/lib/documents/types";
 
 const optionalId = (what: string) =>

@@ -2,7 +2,7 @@ import "server-only";
 import { createHash, randomUUID } from "node:crypto";
 import { deleteDocument, insertDocument } from "@/db/queries/documents";
 import type { DocumentRecord } from "@/lib/documents/types";
-import { ApiError } from "../api/errors";
+import { ApiError } from "@/lib/api/errors";
 import type { FileTypeSpec } from "./file-types";
 import { deleteObject, putObject } from "./object-store";
 import type { UploadedFile, UploadFields } from "./upload-form";

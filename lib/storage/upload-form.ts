@@ -1,7 +1,7 @@
 import "server-only";
 import { z } from "zod";
-import { ApiError } from "../api/errors";
-import { fieldErrors } from "../api/handler";
+import { ApiError } from "@/lib/api/errors";
+import { fieldErrors } from "@/lib/api/handler";
 import { cleanFileName } from "./content-disposition";
 import { DOCUMENT_KINDS } from "./document-kinds";
 import { formatBytes, MAX_UPLOAD_BYTES, MAX_UPLOAD_LABEL, MULTIPART_OVERHEAD_BYTES } from "./upload-limits";

@@ -1,4 +1,4 @@
-import type { Role } from "../permissions";
+import type { Role } from "@/lib/permissions";
 
 // A person as the app shows them: never the password hash (db/queries/users.ts reads the row).
 

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { PROJECT_ROLES } from "../permissions";
+import { PROJECT_ROLES } from "@/lib/permissions";
 
 export const createProjectSchema = z.object({
   name: z.string().trim().min(3, "At least 3 characters.").max(200, "At most 200 characters."),

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { ROLES } from "../permissions";
+import { ROLES } from "@/lib/permissions";
 
 export const passwordRule = z
   .string()

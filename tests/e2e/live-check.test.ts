@@ -98,8 +98,10 @@ describe("live check of a section", () => {
       const kept = (await (await page.request.get(`${api}/runs/${runId}`)).json()).run as {
         result: { results: Record<"bishop" | "fellenius", { fs: number }> };
       };
-      expect(kept.result.results.bishop.fs).toBe(after.bishop);
-      expect(kept.result.results.fellenius.fs).toBe(after.fellenius);
+      // The same engine code in Chromium and in Node: the two JavaScript engines' Math functions may differ in
+      // the last bit (seen: 5e-16 on the ordinary method), so agreement is held at 1e-12 relative, not bit for bit.
+      expect(Math.abs(kept.result.results.bishop.fs / after.bishop! - 1)).toBeLessThan(1e-12);
+      expect(Math.abs(kept.result.results.fellenius.fs / after.fellenius! - 1)).toBeLessThan(1e-12);
 
       // Leaving live mode takes the number off the screen, also when a search is still running.
       await page.getByRole("button", { name: "End live check" }).click();

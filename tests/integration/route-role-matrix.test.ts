@@ -45,6 +45,10 @@ const MATRIX: Record<string, Gate> = {
   [`POST ${P}/design/[studyId]/open`]: project("design.sweep"),
   [`PUT ${P}/design/[studyId]/results`]: project("design.sweep"),
   [`POST ${P}/design/[studyId]/sweep`]: project("design.sweep"),
+  [`GET ${P}/design/[studyId]/sweep`]: project("project.view"),
+  [`GET ${P}/jobs/[jobId]`]: project("project.view"),
+  // Then only a role that may start the job's kind (lib/jobs/kinds.ts) cancels it.
+  [`DELETE ${P}/jobs/[jobId]`]: project("project.view"),
   [`GET ${P}/documents`]: project("project.view"),
   [`POST ${P}/documents`]: project("document.upload"),
   [`GET ${P}/documents/[documentId]`]: project("project.view"),
@@ -83,6 +87,10 @@ const MATRIX: Record<string, Gate> = {
   [`POST ${P}/sections`]: project("section.edit"),
   [`GET ${P}/sections/[sectionId]`]: project("project.view"),
   [`PUT ${P}/sections/[sectionId]`]: project("section.edit"),
+  [`DELETE ${P}/sections/[sectionId]`]: project("section.edit"),
+  [`POST ${P}/sections/[sectionId]/archive`]: project("section.edit"),
+  [`GET ${P}/sections/[sectionId]/seepage/[conditionId]`]: project("project.view"),
+  [`PUT ${P}/sections/[sectionId]/seepage/[conditionId]`]: project("section.edit"),
   [`GET ${P}/sections/[sectionId]/versions/[version]`]: project("project.view"),
   [`POST ${P}/sections/[sectionId]/versions/[version]/restore`]: project("section.edit"),
 };

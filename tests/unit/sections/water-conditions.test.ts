@@ -5,6 +5,7 @@ import { directionForFace } from "@/lib/analysis/face";
 import { LOADING_CONDITIONS } from "@/lib/analysis/required-fs";
 import { checkWaterConditions } from "@/lib/sections/check-water-conditions";
 import { requireValidSection } from "@/lib/sections/check-document";
+import { storedSectionSchema } from "@/lib/sections/water-conditions";
 import {
   pickWaterCondition,
   poolLevels,
@@ -162,5 +163,14 @@ describe("the summary of a saved version", () => {
       "water condition “Steady seepage, maximum surcharge pool 17.0 m” renamed “Surcharge pool”; " +
         "water condition “Rapid drawdown, 16.0 m to 8.0 m”: drawdownTo changed",
     );
+  });
+});
+
+describe("storedSectionSchema: a section frozen into a queue job keeps its named waters", () => {
+  it("parses the demo section with every water condition, so a queued run finds the one its set-up names", () => {
+    const demo = buildDemoSection();
+    const frozen = storedSectionSchema.parse(JSON.parse(JSON.stringify(demo)));
+    expect(frozen.waterConditions?.map((c) => c.id)).toEqual(demo.waterConditions?.map((c) => c.id));
+    expect(frozen.waterConditions?.length).toBeGreaterThan(1);
   });
 });
