@@ -1,7 +1,8 @@
 import type { Config } from "tailwindcss";
 
 // Scarpline's own palette: warm paper and ink for the page, clay for actions.
-// Result colours live in lib/runs/colour-scale.ts and lib/runs/circle-styles.ts, chosen for colour-blind readers.
+// Result colours live in lib/runs/view/colour-scale.ts and lib/runs/view/circle-styles.ts, chosen for
+// colour-blind readers.
 const config: Config = {
   content: ["./app/**/*.{ts,tsx}", "./components/**/*.{ts,tsx}"],
   theme: {

@@ -12,7 +12,7 @@ import { chromium, type Page } from "playwright-core";
 import { acquireStack, releaseStack } from "../tests/support/stack";
 import { quickSetup } from "../tests/support/runs";
 import type { SectionDocument } from "../lib/stability";
-import { searchCircleCount } from "../lib/run-records/limits";
+import { searchCircleCount } from "../lib/runs/record/limits";
 
 const DRAG_SECONDS = 5;
 const pct = (xs: number[], p: number) =>

@@ -10,11 +10,11 @@ import { buildDemoSection } from "../db/seeds/demo-section";
 import { suggestGrid } from "../lib/analysis/auto-grid";
 import { directionForFace } from "../lib/analysis/face";
 import { documentForRun, type RunSetup } from "../lib/analysis/run-setup";
-import { comparePreview } from "../lib/run-records/compare-preview";
-import { searchResultSchema } from "../lib/run-records/result-schema";
-import { computeRunRecord } from "../lib/run-records/run-record";
-import { searchRecord } from "../lib/run-records/search-record";
-import { searchCircleCount } from "../lib/run-records/limits";
+import { comparePreview } from "../lib/runs/record/compare-preview";
+import { searchResultSchema } from "../lib/runs/record/result-schema";
+import { computeRunRecord } from "../lib/runs/record/run-record";
+import { searchRecord } from "../lib/runs/record/search-record";
+import { searchCircleCount } from "../lib/runs/record/limits";
 
 const section = buildDemoSection();
 const g = suggestGrid(section, directionForFace(section, "downstream"));

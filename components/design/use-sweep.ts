@@ -10,7 +10,7 @@ import {
 } from "@/lib/design";
 import { ENGINE_VERSION, type Material } from "@/lib/stability";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
-import type { PreviewCheck } from "@/lib/run-records/compare-preview";
+import type { PreviewCheck } from "@/lib/runs/record/compare-preview";
 import type { JobView } from "@/lib/jobs/types";
 import { watchJob } from "@/lib/client/watch-job";
 import { startWorkerPool, type WorkerPool } from "./worker-pool";

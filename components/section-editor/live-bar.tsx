@@ -3,7 +3,7 @@
 import { CAUTION_TEXT } from "@/lib/caution";
 import type { LiveDisplay } from "@/lib/live/live-scheduler";
 import type { LiveSetup } from "@/lib/live/live-setup";
-import { METHOD_SHORT } from "@/lib/runs/warning-text";
+import { METHOD_SHORT } from "@/lib/runs/view/warning-text";
 import type { LiveAnswer } from "@/components/runs/setup/use-live-search";
 
 interface LiveBarProps {

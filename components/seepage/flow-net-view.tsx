@@ -2,7 +2,7 @@ import type { MouseEvent, ReactNode } from "react";
 import type { SeepageSolution } from "@/lib/seepage";
 import { materialPalette } from "@/lib/sections/material-palette";
 import { formatScientific } from "@/lib/materials/parameter-form";
-import { boxOfPoints, fitView, toScreen, type RunView } from "@/lib/runs/view-fit";
+import { boxOfPoints, fitView, toScreen, type RunView } from "@/lib/runs/view/view-fit";
 import { Caution } from "@/components/ui/caution";
 
 /** Water and net colours: a blue surface, a darker blue for flow lines, warm grey for head contours. */

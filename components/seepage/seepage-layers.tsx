@@ -1,5 +1,5 @@
 import type { Pool } from "@/lib/seepage";
-import { toScreen, type RunView } from "@/lib/runs/view-fit";
+import { toScreen, type RunView } from "@/lib/runs/view/view-fit";
 import type { MeshField } from "./seepage.worker";
 import { svgPath } from "./flow-net-view";
 

@@ -6,7 +6,7 @@ import { z } from "zod";
 import { gridSchema, radiiSchema, type Analysis, type SectionDocument } from "@/lib/stability";
 import { directionForFace } from "./face";
 import { LOADING_CONDITION_KEYS, loadingCondition, type LoadingConditionKey } from "./required-fs";
-import { MAX_SEARCH_CIRCLES, searchCircleCount, tooManyCirclesMessage } from "@/lib/run-records/limits";
+import { MAX_SEARCH_CIRCLES, searchCircleCount, tooManyCirclesMessage } from "@/lib/runs/record/limits";
 import {
   findWaterCondition,
   pickWaterCondition,

@@ -1,10 +1,10 @@
 /**
  * How a sweep's preview (the browser's points, or one kept point) compares with the server's own
  * search of the same jobs. The server's values are what a study or a run keeps; these lists say
- * where the preview differed (beyond the tolerance of lib/run-records/compare-preview.ts).
+ * where the preview differed (beyond the tolerance of lib/runs/record/compare-preview.ts).
  */
 import type { GridSearchSuccess } from "@/lib/stability";
-import { DifferenceList, MISSING, type PreviewCheck } from "@/lib/run-records/compare-preview";
+import { DifferenceList, MISSING, type PreviewCheck } from "@/lib/runs/record/compare-preview";
 import type { SweepPoint } from "./run-job";
 
 function comparePoint(d: DifferenceList, sent: SweepPoint, server: SweepPoint): void {

@@ -6,7 +6,7 @@
 import { ENGINE_VERSION } from "@/lib/stability";
 import type { StoredSweep } from "./sweep-results";
 import { compareSweepPoints } from "./compare-sweep";
-import type { PreviewCheck } from "@/lib/run-records/compare-preview";
+import type { PreviewCheck } from "@/lib/runs/record/compare-preview";
 
 export interface KeptSweep {
   sweep: StoredSweep;

@@ -1,11 +1,11 @@
 /**
  * Opening a kept sweep point as an ordinary section (version 1 is the generated document) and,
- * for a run, keeping a run on it through the one save routine (lib/run-records/save-run.ts): the
+ * for a run, keeping a run on it through the one save routine (lib/runs/record/save-run.ts): the
  * server searches the point's section itself and stores its own result.
  */
 import { ApiError } from "@/lib/api/errors";
 import type { RunSetup } from "@/lib/analysis/run-setup";
-import { keepRunOnNewSection, type KeptRun } from "@/lib/run-records/save-run";
+import { keepRunOnNewSection, type KeptRun } from "@/lib/runs/record/save-run";
 import { createHash } from "node:crypto";
 import { createSection, findSectionByOrigin } from "@/db/queries/sections";
 import { freeSectionName } from "@/db/queries/design-studies";

@@ -1,16 +1,16 @@
 /**
- * The search of a large kept run as a queue job (lib/run-records/save-run.ts sends set-ups past
+ * The search of a large kept run as a queue job (lib/runs/record/save-run.ts sends set-ups past
  * QUEUE_SEARCH_CIRCLES here). The section version's document and the set-up are frozen in the
  * job; the worker searches on an engine thread (computeRunRecord), and the run row is written in
  * the transaction that ends the job. The job's own result is the new run's id and the preview check.
  */
 import { z } from "zod";
 import { runSetupSchema } from "@/lib/analysis/run-setup";
-import { searchResultSchema } from "@/lib/run-records/result-schema";
-import { comparePreview, type PreviewCheck } from "@/lib/run-records/compare-preview";
-import { computeRunRecord, type RunRecord } from "@/lib/run-records/run-record";
-import { runRow } from "@/lib/run-records/run-row";
-import { searchCircleCount, MAX_SEARCH_CIRCLES } from "@/lib/run-records/limits";
+import { searchResultSchema } from "@/lib/runs/record/result-schema";
+import { comparePreview, type PreviewCheck } from "@/lib/runs/record/compare-preview";
+import { computeRunRecord, type RunRecord } from "@/lib/runs/record/run-record";
+import { runRow } from "@/lib/runs/record/run-row";
+import { searchCircleCount, MAX_SEARCH_CIRCLES } from "@/lib/runs/record/limits";
 import { storedSectionSchema } from "@/lib/sections/water-conditions";
 import { createRun } from "@/db/queries/runs";
 import type { JobKind } from "./kind";

@@ -9,7 +9,7 @@ import { suggestGrid } from "@/lib/analysis/auto-grid";
 import { directionForFace } from "@/lib/analysis/face";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import { documentForRun, type RunSetup } from "@/lib/analysis/run-setup";
-import { searchCircleCount } from "@/lib/run-records/limits";
+import { searchCircleCount } from "@/lib/runs/record/limits";
 import { storeDrawnWater } from "@/lib/sections/water-condition-edits";
 import { findWaterCondition, pickWaterCondition } from "@/lib/sections/water-conditions";
 import type { SectionDocument } from "@/lib/stability";

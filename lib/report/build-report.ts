@@ -7,16 +7,16 @@ import type { GridSearchSuccess, Radii, SectionDocument, SliceRow } from "@/lib/
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { LOADING_CONDITIONS } from "@/lib/analysis/required-fs";
 import { CAUTION_TEXT } from "@/lib/caution";
-import { formatFs, verdictOf, verdictWords } from "@/lib/runs/verdict";
-import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "@/lib/runs/warning-text";
+import { formatFs, verdictOf, verdictWords } from "@/lib/runs/view/verdict";
+import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "@/lib/runs/view/warning-text";
 import { fullChecklist, type ChecklistEntry } from "@/lib/review/checklist";
 import { STATUS_WORDS, statusWords, type RunStatus } from "@/lib/review/status";
 import type { MaterialSourceRecord } from "@/lib/review/material-sources";
 import { ALARM, MOSS, ReportWriter, SOFT, INK } from "./report-writer";
 import { drawSection } from "./section-drawing";
-import { waterUsedText } from "@/lib/runs/water-used";
+import { waterUsedText } from "@/lib/runs/view/water-used";
 import { writeSliceTable } from "./slice-pages";
-import { VARIANT_TEXT, stageCells, stagedView } from "@/lib/runs/staged-view";
+import { VARIANT_TEXT, stageCells, stagedView } from "@/lib/runs/view/staged-view";
 import { formatCount, formatDateTime } from "@/lib/format";
 import { writeSensitivity, type ReportSensitivity } from "./sensitivity-section";
 

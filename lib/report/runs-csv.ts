@@ -5,7 +5,7 @@
 import { CAUTION_TEXT } from "@/lib/caution";
 import { LOADING_CONDITIONS } from "@/lib/analysis/required-fs";
 import { writeCsv } from "@/lib/section-io/csv-write";
-import { verdictOf } from "@/lib/runs/verdict";
+import { verdictOf } from "@/lib/runs/view/verdict";
 import { statusWords, type RunStatus } from "@/lib/review/status";
 
 export interface RunCsvRow {

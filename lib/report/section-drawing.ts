@@ -5,8 +5,8 @@
  */
 import { rgb, type RGB } from "pdf-lib";
 import type { CircleFs, Grid, SectionDocument } from "@/lib/stability";
-import { arcPoints } from "@/lib/runs/circle-arc";
-import { buildRunScene } from "@/lib/runs/run-scene";
+import { arcPoints } from "@/lib/runs/view/circle-arc";
+import { buildRunScene } from "@/lib/runs/view/run-scene";
 import { niceTicks } from "@/lib/scales";
 import { materialPalette } from "@/lib/sections/material-palette";
 import { INK, SOFT, type ReportWriter } from "./report-writer";

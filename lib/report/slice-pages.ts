@@ -1,7 +1,7 @@
 /** The slice tables of a run's critical circles, on landscape pages so every column fits. */
 import type { SliceRow } from "@/lib/stability";
-import { formatCell, isStagedSlices, numberSlices, sliceColumns } from "@/lib/runs/slice-columns";
-import { METHOD_NAME } from "@/lib/runs/warning-text";
+import { formatCell, isStagedSlices, numberSlices, sliceColumns } from "@/lib/runs/view/slice-columns";
+import { METHOD_NAME } from "@/lib/runs/view/warning-text";
 import { A4_LANDSCAPE, SOFT, type ReportWriter } from "./report-writer";
 import { pdfSafe, wrapText } from "./pdf-text";
 

@@ -3,7 +3,7 @@
  * failing case is sometimes kept on record on purpose, but never by accident: the reviewer states
  * why, and the status reads "signed off — below the required FS" wherever it is shown.
  */
-import { verdictOf } from "@/lib/runs/verdict";
+import { verdictOf } from "@/lib/runs/view/verdict";
 
 /** Shortest reason accepted: a few words, not a stray key press. */
 export const MIN_BELOW_REQUIRED_REASON = 10;

@@ -3,7 +3,7 @@
  * flagged as a concern, or left open; a run is signed off only with every item confirmed.
  * Two items get a hint computed from the run itself, which the reviewer still has to confirm.
  */
-import { verdictOf } from "@/lib/runs/verdict";
+import { verdictOf } from "@/lib/runs/view/verdict";
 
 export const CHECKLIST_KEYS = ["geometry", "strengths", "water", "grid", "fs"] as const;
 export type ChecklistKey = (typeof CHECKLIST_KEYS)[number];

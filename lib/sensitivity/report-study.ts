@@ -4,7 +4,7 @@
  */
 import { z } from "zod";
 import type { Method, SectionDocument } from "@/lib/stability";
-import { searchOnServer } from "@/lib/run-records/server-search";
+import { searchOnServer } from "@/lib/runs/record/server-search";
 import type { ReportSensitivity } from "@/lib/report/sensitivity-section";
 import { inputParameters } from "./parameters";
 import { tornadoStudy } from "./study";

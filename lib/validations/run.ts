@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { runSetupSchema } from "@/lib/analysis/run-setup";
-import { searchResultSchema } from "@/lib/run-records/result-schema";
+import { searchResultSchema } from "@/lib/runs/record/result-schema";
 
 export const createRunSchema = z.object({
   sectionId: z.number().int().positive(),

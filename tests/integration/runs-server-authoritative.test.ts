@@ -9,9 +9,9 @@ import { quickSetup, searchFor } from "../support/runs";
 import { getDb } from "@/db/index";
 import { analyzeCircle, type Radii } from "@/lib/stability";
 import { documentForRun, type RunSetup } from "@/lib/analysis/run-setup";
-import { searchRecord } from "@/lib/run-records/search-record";
-import { MAX_SEARCH_CIRCLES } from "@/lib/run-records/limits";
-import { describeWarning } from "@/lib/runs/warning-text";
+import { searchRecord } from "@/lib/runs/record/search-record";
+import { MAX_SEARCH_CIRCLES } from "@/lib/runs/record/limits";
+import { describeWarning } from "@/lib/runs/view/warning-text";
 import { pdfText } from "../support/pdf-text";
 
 const runCount = async () => Number((await getDb()("runs").count({ n: "*" }).first())?.n);

@@ -1,4 +1,4 @@
-import { differenceLine, type PreviewCheck } from "@/lib/run-records/compare-preview";
+import { differenceLine, type PreviewCheck } from "@/lib/runs/record/compare-preview";
 
 /**
  * Said on a kept run whose preview (the browser's search, or a design sweep's point) differed from

@@ -7,13 +7,13 @@ import type { GridSearchSuccess, SectionDocument, SliceRow } from "@/lib/stabili
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import { materialPalette } from "@/lib/sections/material-palette";
-import { waterUsedText } from "@/lib/runs/water-used";
+import { waterUsedText } from "@/lib/runs/view/water-used";
 import { downloadText, slug } from "@/lib/client/download";
 import { RunCanvas } from "@/components/runs/result/run-canvas";
 import { FsSummary } from "@/components/runs/result/fs-summary";
 import { SliceTable } from "@/components/runs/result/slice-table";
-import { runFs } from "@/lib/runs/slice-csv";
-import { stagedView } from "@/lib/runs/staged-view";
+import { runFs } from "@/lib/runs/view/slice-csv";
+import { stagedView } from "@/lib/runs/view/staged-view";
 import { StatusBadge } from "@/components/runs/list/status-badge";
 import { PinnedCanvas } from "@/components/review/pinned-canvas";
 import type { PinMarker } from "@/lib/review/pin-markers";

@@ -3,7 +3,7 @@
 import { useMemo, useState } from "react";
 import { ENGINE_VERSION, type Method, type SectionDocument } from "@/lib/stability";
 import { describeChanges, inputParameters, withParameters } from "@/lib/sensitivity/parameters";
-import { METHOD_SHORT } from "@/lib/runs/warning-text";
+import { METHOD_SHORT } from "@/lib/runs/view/warning-text";
 import { CAUTION_TEXT } from "@/lib/caution";
 import { useLiveSearch } from "@/components/runs/setup/use-live-search";
 

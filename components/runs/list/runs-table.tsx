@@ -4,7 +4,7 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import type { RunSummary } from "@/lib/runs/types";
-import { criticalRunIds, governingFs } from "@/lib/run-records/critical-cases";
+import { criticalRunIds, governingFs } from "@/lib/runs/record/critical-cases";
 import { LOADING_CONDITIONS, loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import { PassMark, StatusBadge } from "@/components/runs/list/status-badge";
 import { formatDateTime } from "@/lib/format";

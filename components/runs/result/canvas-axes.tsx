@@ -1,6 +1,6 @@
 import { Group, Line, Text } from "react-konva";
 import { niceTicks } from "@/lib/scales";
-import { toScreen, visibleBox, type RunView } from "@/lib/runs/view-fit";
+import { toScreen, visibleBox, type RunView } from "@/lib/runs/view/view-fit";
 
 const RULE = "#d9d3c7";
 const LABEL = "#4a4640";

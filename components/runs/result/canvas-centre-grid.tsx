@@ -1,7 +1,7 @@
 import { Circle, Group, Line, Rect, Text } from "react-konva";
-import type { RunScene } from "@/lib/runs/run-scene";
-import { bandLineLabel } from "@/lib/runs/grid-edit";
-import { toScreen, type RunView } from "@/lib/runs/view-fit";
+import type { RunScene } from "@/lib/runs/view/run-scene";
+import { bandLineLabel } from "@/lib/runs/view/grid-edit";
+import { toScreen, type RunView } from "@/lib/runs/view/view-fit";
 
 export const SETUP_ACCENT = "#9c4722";
 const EMPTY_HATCH = "#7b756c";

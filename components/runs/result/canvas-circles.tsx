@@ -1,8 +1,8 @@
 import { Circle, Group, Label, Line, Rect, RegularPolygon, Tag, Text } from "react-konva";
-import { arcPoints } from "@/lib/runs/circle-arc";
-import type { CentreMark, DrawnCircle } from "@/lib/runs/circle-styles";
-import type { RunScene } from "@/lib/runs/run-scene";
-import { toScreen, type RunView } from "@/lib/runs/view-fit";
+import { arcPoints } from "@/lib/runs/view/circle-arc";
+import type { CentreMark, DrawnCircle } from "@/lib/runs/view/circle-styles";
+import type { RunScene } from "@/lib/runs/view/run-scene";
+import { toScreen, type RunView } from "@/lib/runs/view/view-fit";
 import { screenPoints } from "@/components/runs/result/canvas-section";
 
 const HALO = "#ffffff";

@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
-import type { CentreMark } from "@/lib/runs/circle-styles";
-import type { RunScene } from "@/lib/runs/run-scene";
-import { METHOD_NAME } from "@/lib/runs/warning-text";
+import type { CentreMark } from "@/lib/runs/view/circle-styles";
+import type { RunScene } from "@/lib/runs/view/run-scene";
+import { METHOD_NAME } from "@/lib/runs/view/warning-text";
 import { WATER_FILL, WATER_LINE } from "@/components/runs/result/canvas-section";
 import { SETUP_ACCENT } from "@/components/runs/result/canvas-centre-grid";
 

@@ -1,6 +1,6 @@
 import { Group, Line, Text } from "react-konva";
-import type { RunScene } from "@/lib/runs/run-scene";
-import { toScreen, type RunView } from "@/lib/runs/view-fit";
+import type { RunScene } from "@/lib/runs/view/run-scene";
+import { toScreen, type RunView } from "@/lib/runs/view/view-fit";
 
 /** Water colours: a mid blue line reads in greyscale print as well as in colour. */
 export const WATER_LINE = "#1f5f99";

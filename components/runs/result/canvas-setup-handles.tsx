@@ -13,8 +13,8 @@ import {
   normaliseGrid,
   type BandKey,
   type GridCorner,
-} from "@/lib/runs/grid-edit";
-import { toScreen, toWorld, type Box, type RunView } from "@/lib/runs/view-fit";
+} from "@/lib/runs/view/grid-edit";
+import { toScreen, toWorld, type Box, type RunView } from "@/lib/runs/view/view-fit";
 import { SETUP_ACCENT } from "@/components/runs/result/canvas-centre-grid";
 
 export interface SetupHandlesProps {

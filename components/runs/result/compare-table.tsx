@@ -1,6 +1,6 @@
 import { Caution } from "@/components/ui/caution";
-import { formatFs, roundFs, verdictOf } from "@/lib/runs/verdict";
-import { METHOD_NAME } from "@/lib/runs/warning-text";
+import { formatFs, roundFs, verdictOf } from "@/lib/runs/view/verdict";
+import { METHOD_NAME } from "@/lib/runs/view/warning-text";
 import { VerdictMark } from "@/components/runs/result/verdict-mark";
 
 /** One run in the comparison. */

@@ -1,6 +1,6 @@
-import { buildFsLegend } from "@/lib/runs/fs-legend";
-import type { FsRange } from "@/lib/runs/fs-map-cells";
-import { METHOD_NAME } from "@/lib/runs/warning-text";
+import { buildFsLegend } from "@/lib/runs/view/fs-legend";
+import type { FsRange } from "@/lib/runs/view/fs-map-cells";
+import { METHOD_NAME } from "@/lib/runs/view/warning-text";
 
 export interface FsMapLegendProps {
   range: FsRange;

@@ -1,14 +1,14 @@
 import type { CircleFs, GridSearchSuccess } from "@/lib/stability";
 import { Caution } from "@/components/ui/caution";
-import { formatFs, verdictOf } from "@/lib/runs/verdict";
-import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "@/lib/runs/warning-text";
+import { formatFs, verdictOf } from "@/lib/runs/view/verdict";
+import { METHOD_NAME, describeWarnings, ordinaryFormText, rejectionList } from "@/lib/runs/view/warning-text";
 import { VerdictMark } from "@/components/runs/result/verdict-mark";
 import { StageFsTable } from "@/components/runs/result/stage-fs-table";
-import { stagedFromResult, type StagedView } from "@/lib/runs/staged-view";
+import { stagedFromResult, type StagedView } from "@/lib/runs/view/staged-view";
 import { formatCount } from "@/lib/format";
 
 export interface FsSummaryProps {
-  /** The search, its warnings already gathered into one list (lib/run-records/search-record.ts keptWarnings). */
+  /** The search, its warnings already gathered into one list (lib/runs/record/search-record.ts keptWarnings). */
   result: GridSearchSuccess;
   /** The FS the run must reach; without it no pass or fail is shown. */
   requiredFs?: number;

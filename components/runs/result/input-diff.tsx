@@ -1,5 +1,5 @@
 import type { DiffArea, Difference } from "@/lib/sections/diff";
-import { groupDifferences } from "@/lib/runs/diff-groups";
+import { groupDifferences } from "@/lib/runs/view/diff-groups";
 
 export interface InputDiffProps {
   differences: readonly Difference[];

@@ -4,9 +4,9 @@ import dynamic from "next/dynamic";
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
 import type { Grid, GridSearchSuccess, Radii, SectionDocument, SliceRow } from "@/lib/stability";
 import { Caution } from "@/components/ui/caution";
-import { criticalAttribute } from "@/lib/runs/circle-styles";
-import { buildRunScene, type CircleOverlay, type RunMethod } from "@/lib/runs/run-scene";
-import { fitView, panBy, zoomAt, type Box, type RunView } from "@/lib/runs/view-fit";
+import { criticalAttribute } from "@/lib/runs/view/circle-styles";
+import { buildRunScene, type CircleOverlay, type RunMethod } from "@/lib/runs/view/run-scene";
+import { fitView, panBy, zoomAt, type Box, type RunView } from "@/lib/runs/view/view-fit";
 import { FsMapLegend } from "@/components/runs/result/fs-map-legend";
 import { CanvasKey } from "@/components/runs/result/canvas-key";
 

@@ -12,9 +12,9 @@ import {
   sortSlices,
   type SliceColumnKey,
   type SortDirection,
-} from "@/lib/runs/slice-columns";
-import { sliceCsvFileName, sliceTableToCsv, type SliceCsvMeta } from "@/lib/runs/slice-csv";
-import { METHOD_NAME } from "@/lib/runs/warning-text";
+} from "@/lib/runs/view/slice-columns";
+import { sliceCsvFileName, sliceTableToCsv, type SliceCsvMeta } from "@/lib/runs/view/slice-csv";
+import { METHOD_NAME } from "@/lib/runs/view/warning-text";
 
 export interface SliceTableProps {
   rows: readonly SliceRow[];

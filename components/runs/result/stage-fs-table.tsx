@@ -1,6 +1,6 @@
-import { formatFs, verdictOf } from "@/lib/runs/verdict";
-import { METHOD_NAME } from "@/lib/runs/warning-text";
-import { VARIANT_TEXT, stageCells, type StageCell, type StagedView } from "@/lib/runs/staged-view";
+import { formatFs, verdictOf } from "@/lib/runs/view/verdict";
+import { METHOD_NAME } from "@/lib/runs/view/warning-text";
+import { VARIANT_TEXT, stageCells, type StageCell, type StagedView } from "@/lib/runs/view/staged-view";
 import { VerdictMark } from "@/components/runs/result/verdict-mark";
 
 type Method = "bishop" | "fellenius";

@@ -1,4 +1,4 @@
-import { verdictWords, type Verdict } from "@/lib/runs/verdict";
+import { verdictWords, type Verdict } from "@/lib/runs/view/verdict";
 
 /** ✓ or ✕ with words; the colour only repeats what the shape and the words say. */
 export function VerdictMark({ verdict, required }: { verdict: Verdict; required?: number | null }) {

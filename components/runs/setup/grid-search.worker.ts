@@ -1,11 +1,11 @@
 /// <reference lib="webworker" />
 /**
  * Runs the search off the main thread so the page stays responsive. It calls the same routine
- * the server runs when the run is kept (lib/run-records/search-record.ts), so the preview and the
+ * the server runs when the run is kept (lib/runs/record/search-record.ts), so the preview and the
  * kept run agree exactly. Cancelling terminates the worker; the search itself is synchronous.
  */
 import type { CircleSuccess, GridSearchResult, SectionDocument } from "@/lib/stability";
-import { searchRecord } from "@/lib/run-records/search-record";
+import { searchRecord } from "@/lib/runs/record/search-record";
 
 /** `id` is echoed on the answer so a long-lived worker's caller can tell which request it answers. */
 export type WorkerRequest = { doc: SectionDocument; id?: number; progress?: boolean };

@@ -10,9 +10,9 @@ import { FsSummary } from "@/components/runs/result/fs-summary";
 import { SliceTable } from "@/components/runs/result/slice-table";
 import type { WorkerMessage } from "@/components/runs/setup/grid-search.worker";
 import { loadingCondition } from "@/lib/analysis/required-fs";
-import { userIssue } from "@/lib/runs/engine-issue-text";
-import { runFs } from "@/lib/runs/slice-csv";
-import { stagedFromResult } from "@/lib/runs/staged-view";
+import { userIssue } from "@/lib/runs/view/engine-issue-text";
+import { runFs } from "@/lib/runs/view/slice-csv";
+import { stagedFromResult } from "@/lib/runs/view/staged-view";
 import { formatCount } from "@/lib/format";
 
 export interface SearchOutcomeProps {

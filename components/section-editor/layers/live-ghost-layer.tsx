@@ -3,9 +3,9 @@
 import { Fragment } from "react";
 import { Layer, Line, Rect, Text } from "react-konva";
 import type { LiveGhost } from "@/lib/live/live-ghosts";
-import { arcPoints } from "@/lib/runs/circle-arc";
-import { METHOD_STYLE } from "@/lib/runs/circle-styles";
-import { METHOD_SHORT } from "@/lib/runs/warning-text";
+import { arcPoints } from "@/lib/runs/view/circle-arc";
+import { METHOD_STYLE } from "@/lib/runs/view/circle-styles";
+import { METHOD_SHORT } from "@/lib/runs/view/warning-text";
 import { worldToScreen, type ViewTransform } from "@/lib/editor/view-transform";
 import { CANVAS_FONT } from "./draw-helpers";
 

@@ -10,7 +10,7 @@ import path from "node:path";
 import fc from "fast-check";
 import type { GridSearchSuccess, SectionDocument } from "@/lib/stability";
 import { LiveScheduler, type LiveDisplay } from "@/lib/live/live-scheduler";
-import { searchRecord } from "@/lib/run-records/search-record";
+import { searchRecord } from "@/lib/runs/record/search-record";
 
 const base = JSON.parse(
   readFileSync(path.resolve(__dirname, "../../fixtures/sections/three-material-embankment.json"), "utf8"),

@@ -11,7 +11,7 @@ import { documentForRun, runSetupSchema, type RunSetup } from "@/lib/analysis/ru
 import { moveSharedVertex } from "@/lib/editor/document-edits";
 import { automaticSetup, keptSection, liveDocument, liveSetupFor } from "@/lib/live/live-setup";
 import { liveOutcome } from "@/lib/live/live-ghosts";
-import { searchRecord } from "@/lib/run-records/search-record";
+import { searchRecord } from "@/lib/runs/record/search-record";
 import { drawnConditionId, showWaterCondition } from "@/lib/sections/water-condition-edits";
 
 const stored = JSON.parse(
@@ -39,7 +39,7 @@ function liveFs(preview: SectionDocument) {
 function fullRunFs(preview: SectionDocument) {
   const version = JSON.parse(JSON.stringify(keptSection(stored, preview, active))) as SectionDocument;
   const runSetup = runSetupSchema.parse(JSON.parse(JSON.stringify({ ...setup, waterCondition: active })));
-  // lib/run-records/run-record.ts searches the validated document.
+  // lib/runs/record/run-record.ts searches the validated document.
   const valid = validateSection(documentForRun(version, runSetup));
   if (!valid.ok) throw new Error("kept state is invalid");
   const record = searchRecord(valid.section);

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { arcPoints, arcY, sliceSides } from "@/lib/runs/circle-arc";
+import { arcPoints, arcY, sliceSides } from "@/lib/runs/view/circle-arc";
 
 // A circle, and two abscissae on its lower arc (docs/engine.md §3: ya(x) = yc − √(R² − (x − xc)²)).
 const circleWithEnds = fc

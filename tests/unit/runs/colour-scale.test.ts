@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { CIVIDIS, VIRIDIS, rgbToHex, sampleScale, scaleHex } from "@/lib/runs/colour-scale";
-import { cieLightness, labelInkFor } from "@/lib/runs/cie-lightness";
+import { CIVIDIS, VIRIDIS, rgbToHex, sampleScale, scaleHex } from "@/lib/runs/view/colour-scale";
+import { cieLightness, labelInkFor } from "@/lib/runs/view/cie-lightness";
 
 describe("cieLightness (CIE 15:2004 L* from IEC 61966-2-1 sRGB)", () => {
   it("gives the published CIELAB L* of reference sRGB colours", () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { buildDemoSection, DEMO_POOL } from "@/db/seeds/demo-section";
-import { buildRunScene } from "@/lib/runs/run-scene";
-import { waterAfterDrawdown } from "@/lib/runs/drawdown-water";
+import { buildRunScene } from "@/lib/runs/view/run-scene";
+import { waterAfterDrawdown } from "@/lib/runs/view/drawdown-water";
 import { elevationAt } from "@/lib/plane-geometry";
 
 /*

@@ -2,7 +2,7 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, test } from "vitest";
 import { validateSection, type SectionDocument } from "@/lib/stability";
-import { userIssue } from "@/lib/runs/engine-issue-text";
+import { userIssue } from "@/lib/runs/view/engine-issue-text";
 import { materialsToCsv, parseMaterialsCsv } from "@/lib/section-io";
 
 const fixture = (): SectionDocument =>

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { CIVIDIS, scaleHex } from "@/lib/runs/colour-scale";
-import { buildFsLegend } from "@/lib/runs/fs-legend";
-import { cellEdges, fsMapCells, fsRange } from "@/lib/runs/fs-map-cells";
+import { CIVIDIS, scaleHex } from "@/lib/runs/view/colour-scale";
+import { buildFsLegend } from "@/lib/runs/view/fs-legend";
+import { cellEdges, fsMapCells, fsRange } from "@/lib/runs/view/fs-map-cells";
 import { smallRun } from "./engine-run";
 
 describe("fsRange", () => {

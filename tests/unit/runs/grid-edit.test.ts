@@ -9,7 +9,7 @@ import {
   dragCorner,
   moveGrid,
   snap,
-} from "@/lib/runs/grid-edit";
+} from "@/lib/runs/view/grid-edit";
 
 const onStep = (v: number) => Math.abs(v / SNAP_STEP - Math.round(v / SNAP_STEP)) < 1e-9;
 const coord = fc.double({ min: -500, max: 500, noNaN: true });

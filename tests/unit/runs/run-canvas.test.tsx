@@ -5,7 +5,7 @@ import { act } from "react";
 import { createRoot, type Root } from "react-dom/client";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { RunCanvas, type RunCanvasProps } from "@/components/runs/result/run-canvas";
-import { toScreen, type RunView } from "@/lib/runs/view-fit";
+import { toScreen, type RunView } from "@/lib/runs/view/view-fit";
 import { embankment, smallRun } from "./engine-run";
 
 (globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;

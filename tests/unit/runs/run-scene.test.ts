@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { arcY } from "@/lib/runs/circle-arc";
-import { criticalAttribute } from "@/lib/runs/circle-styles";
-import { buildRunScene, gridCentres } from "@/lib/runs/run-scene";
+import { arcY } from "@/lib/runs/view/circle-arc";
+import { criticalAttribute } from "@/lib/runs/view/circle-styles";
+import { buildRunScene, gridCentres } from "@/lib/runs/view/run-scene";
 import { embankment, smallRun } from "./engine-run";
 
 const inside = (b: { minX: number; minY: number; maxX: number; maxY: number }, x: number, y: number) =>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { groundAt, groundLine, pondedWater, poolLevelSpans } from "@/lib/runs/section-outline";
+import { groundAt, groundLine, pondedWater, poolLevelSpans } from "@/lib/runs/view/section-outline";
 import { embankment } from "./engine-run";
 
 /** Shoelace area of a flat ring, m². */

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { formatCell, numberSlices, sliceColumns, sortSlices } from "@/lib/runs/slice-columns";
+import { formatCell, numberSlices, sliceColumns, sortSlices } from "@/lib/runs/view/slice-columns";
 import { SLICES, slice } from "./fixtures";
 
 const cols = sliceColumns("bishop");

@@ -1,8 +1,8 @@
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
 import { CAUTION_TEXT } from "@/components/ui/caution";
-import { runFs, sliceCsvFileName, sliceTableToCsv } from "@/lib/runs/slice-csv";
-import { columnHeader, sliceColumns } from "@/lib/runs/slice-columns";
+import { runFs, sliceCsvFileName, sliceTableToCsv } from "@/lib/runs/view/slice-csv";
+import { columnHeader, sliceColumns } from "@/lib/runs/view/slice-columns";
 import { SLICES } from "./fixtures";
 
 describe("sliceTableToCsv", () => {

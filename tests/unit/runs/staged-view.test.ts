@@ -4,9 +4,9 @@
  */
 import Papa from "papaparse";
 import { describe, expect, test } from "vitest";
-import { columnHeader, governingText, isStagedSlices, numberSlices, sliceColumns } from "@/lib/runs/slice-columns";
-import { sliceTableToCsv, runFs } from "@/lib/runs/slice-csv";
-import { stageCells, stagedFromResult, stagedView, stageLine } from "@/lib/runs/staged-view";
+import { columnHeader, governingText, isStagedSlices, numberSlices, sliceColumns } from "@/lib/runs/view/slice-columns";
+import { sliceTableToCsv, runFs } from "@/lib/runs/view/slice-csv";
+import { stageCells, stagedFromResult, stagedView, stageLine } from "@/lib/runs/view/staged-view";
 import { ENGINE_VERSION, type GridSearchSuccess } from "@/lib/stability";
 import { smallStagedRun } from "./staged-fixture";
 

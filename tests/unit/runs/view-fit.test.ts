@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { DEFAULT_PADDING, fitView, panBy, toScreen, toWorld, zoomAt, type Box } from "@/lib/runs/view-fit";
+import { DEFAULT_PADDING, fitView, panBy, toScreen, toWorld, zoomAt, type Box } from "@/lib/runs/view/view-fit";
 
 const coord = fc.double({ min: -1e4, max: 1e4, noNaN: true });
 const boxArb = fc

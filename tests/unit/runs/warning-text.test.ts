@@ -6,7 +6,7 @@ import {
   ordinaryFormText,
   rejectionList,
   rejectionText,
-} from "@/lib/runs/warning-text";
+} from "@/lib/runs/view/warning-text";
 import { embankment } from "./engine-run";
 
 describe("warning sentences", () => {

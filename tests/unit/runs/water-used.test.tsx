@@ -1,7 +1,7 @@
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 import { CompareTable } from "@/components/runs/result/compare-table";
-import { SINGLE_WATER_TEXT, waterUsedText } from "@/lib/runs/water-used";
+import { SINGLE_WATER_TEXT, waterUsedText } from "@/lib/runs/view/water-used";
 
 describe("which water a kept run analysed", () => {
   it("is the recorded condition's name, or says the section had a single water line", () => {

@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
 import { isWaterLike, MATERIAL_FILLS, materialPalette } from "@/lib/sections/material-palette";
-import { materialFills } from "@/lib/runs/material-tints";
+import { materialFills } from "@/lib/runs/view/material-tints";
 import { CANVAS_COLORS } from "@/components/section-editor/palette";
 import type { SectionDocument } from "@/lib/stability";
 

@@ -8,7 +8,7 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import type { SectionDocument } from "@/lib/stability";
 import { describeChange, inputParameters, withParameters } from "@/lib/sensitivity/parameters";
-import { searchRecord } from "@/lib/run-records/search-record";
+import { searchRecord } from "@/lib/runs/record/search-record";
 
 const doc = JSON.parse(
   readFileSync(path.resolve(__dirname, "../../fixtures/sections/three-material-embankment.json"), "utf8"),

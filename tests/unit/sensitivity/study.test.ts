@@ -10,7 +10,7 @@ import Papa from "papaparse";
 import type { SectionDocument } from "@/lib/stability";
 import { inputParameters } from "@/lib/sensitivity/parameters";
 import { sensitivityCsv, sweepStudy, tornadoStudy } from "@/lib/sensitivity/study";
-import { searchRecord } from "@/lib/run-records/search-record";
+import { searchRecord } from "@/lib/runs/record/search-record";
 
 const doc = JSON.parse(
   readFileSync(path.resolve(__dirname, "../../fixtures/sections/three-material-embankment.json"), "utf8"),

@@ -3,7 +3,7 @@ import { apiRoute, parseId, parseJson } from "@/lib/api/handler";
 import { requireUser } from "@/lib/auth/session";
 import { requireProjectAccess } from "@/lib/projects/access";
 import { createRunSchema } from "@/lib/validations/run";
-import { keepRun } from "@/lib/run-records/save-run";
+import { keepRun } from "@/lib/runs/record/save-run";
 import { fetchRunsOfProject } from "@/db/queries/runs";
 
 type Ctx = { params: Promise<{ projectId: string }> };
@@ -18,7 +18,7 @@ export const GET = apiRoute(async (_request: Request, { params }: Ctx) => {
 /**
  * Keeps a run. The server searches the stored section version with the set-up itself and stores
  * its own result; the browser's result is a preview, and `preview` in the answer says whether it
- * matched (lib/run-records/save-run.ts). A set-up past QUEUE_SEARCH_CIRCLES answers 202 with a job.
+ * matched (lib/runs/record/save-run.ts). A set-up past QUEUE_SEARCH_CIRCLES answers 202 with a job.
  */
 export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
   const user = await requireUser();

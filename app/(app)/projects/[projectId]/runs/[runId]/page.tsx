@@ -11,7 +11,7 @@ import { ReviewWorkspace } from "@/components/review/review-workspace";
 import { RevisionChain } from "@/components/review/revision-chain";
 import { AuditTrail } from "@/components/review/audit-trail";
 import { PreviewNotice } from "@/components/runs/kept/preview-notice";
-import { readPreviewCheck } from "@/lib/run-records/compare-preview";
+import { readPreviewCheck } from "@/lib/runs/record/compare-preview";
 import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Run" };

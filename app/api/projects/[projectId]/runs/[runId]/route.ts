@@ -7,7 +7,7 @@ import { checkDraftChange } from "@/lib/review/rules";
 import { renameRunSchema } from "@/lib/review/validations";
 import { deleteDraftRun, fetchRevisionIds, renameDraftRun } from "@/db/queries/runs";
 import { isFrozenRunError } from "@/db/queries/review";
-import { stagedView } from "@/lib/runs/staged-view";
+import { stagedView } from "@/lib/runs/view/staged-view";
 import type { SectionDocument } from "@/lib/stability";
 
 type Ctx = { params: Promise<{ projectId: string; runId: string }> };

@@ -2,7 +2,7 @@ import { apiRoute } from "@/lib/api/handler";
 import { ApiError } from "@/lib/api/errors";
 import { requireUser } from "@/lib/auth/session";
 import { requireRunAccess } from "@/lib/review/run-access";
-import { runFs, sliceCsvFileName, sliceTableToCsv } from "@/lib/runs/slice-csv";
+import { runFs, sliceCsvFileName, sliceTableToCsv } from "@/lib/runs/view/slice-csv";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import type { Circle, SliceRow } from "@/lib/stability";
 

@@ -2,9 +2,9 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import type { SectionDocument } from "@/lib/stability";
-import { searchRecord } from "@/lib/run-records/search-record";
-import { comparePreview, differenceLine, readPreviewCheck, sameNumber } from "@/lib/run-records/compare-preview";
-import { searchResultSchema } from "@/lib/run-records/result-schema";
+import { searchRecord } from "@/lib/runs/record/search-record";
+import { comparePreview, differenceLine, readPreviewCheck, sameNumber } from "@/lib/runs/record/compare-preview";
+import { searchResultSchema } from "@/lib/runs/record/result-schema";
 
 const doc = JSON.parse(
   readFileSync(path.join(__dirname, "..", "..", "fixtures", "sections", "three-material-embankment.json"), "utf8"),

@@ -2,7 +2,7 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { analyzeCircle, runGridSearch, type SectionDocument } from "@/lib/stability";
-import { keptWarnings, searchRecord, warningMethod } from "@/lib/run-records/search-record";
+import { keptWarnings, searchRecord, warningMethod } from "@/lib/runs/record/search-record";
 
 const fixture = (name: string) =>
   JSON.parse(readFileSync(path.join(__dirname, "..", "..", "fixtures", "sections", name), "utf8")) as SectionDocument;

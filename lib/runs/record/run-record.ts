@@ -21,7 +21,7 @@ import {
 } from "@/lib/stability";
 import type { PreviewCheck } from "./compare-preview";
 import { searchOnServer } from "./server-search";
-import { userIssue } from "@/lib/runs/engine-issue-text";
+import { userIssue } from "@/lib/runs/view/engine-issue-text";
 
 export type StoredSliceTables = Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>;
 
@@ -61,7 +61,7 @@ export async function computeRunRecord(
   rawSetup: RunSetup,
   compare: (server: GridSearchSuccess) => PreviewCheck,
 ): Promise<RunRecord> {
-  // The shared schema carries the bound on the search's size (lib/run-records/limits.ts).
+  // The shared schema carries the bound on the search's size (lib/runs/record/limits.ts).
   const setup = runSetupSchema.parse(rawSetup);
   const water = waterConditionOrRefuse(section, setup);
   const valid = validateSection(documentForRun(section, setup, water));

@@ -1,6 +1,6 @@
 /**
  * How large a search the server runs when it keeps a run. A save re-runs the whole search on
- * the server (lib/run-records/save-run.ts), so its size is bounded: 250,000 trial circles is far past
+ * the server (lib/runs/record/save-run.ts), so its size is bounded: 250,000 trial circles is far past
  * what a careful search of one section needs (the default set-up tries a few thousand) and keeps
  * one save to a few seconds of one core.
  */
