@@ -7,7 +7,10 @@ import { comparePreview, differenceLine, readPreviewCheck, sameNumber } from "@/
 import { searchResultSchema } from "@/lib/runs/record/result-schema";
 
 const doc = JSON.parse(
-  readFileSync(path.join(__dirname, "..", "..", "..", "fixtures", "sections", "three-material-embankment.json"), "utf8"),
+  readFileSync(
+    path.join(__dirname, "..", "..", "..", "fixtures", "sections", "three-material-embankment.json"),
+    "utf8",
+  ),
 ) as SectionDocument;
 const record = searchRecord(doc);
 if (!record.ok) throw new Error("the fixture must search");

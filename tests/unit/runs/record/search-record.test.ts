@@ -5,7 +5,9 @@ import { analyzeCircle, runGridSearch, type SectionDocument } from "@/lib/stabil
 import { keptWarnings, searchRecord, warningMethod } from "@/lib/runs/record/search-record";
 
 const fixture = (name: string) =>
-  JSON.parse(readFileSync(path.join(__dirname, "..", "..", "..", "fixtures", "sections", name), "utf8")) as SectionDocument;
+  JSON.parse(
+    readFileSync(path.join(__dirname, "..", "..", "..", "fixtures", "sections", name), "utf8"),
+  ) as SectionDocument;
 
 // A staged-drawdown embankment whose Bishop and ordinary-method critical circles differ, and
 // where N′ comes out negative on some slices of each (the case of issue 13 item 4).
