@@ -1,5 +1,5 @@
 /**
- * A probabilistic run (ENGINE-IO-2.md §4, docs/probabilistic.md): the deterministic grid
+ * A probabilistic run (docs/probabilistic.md): the deterministic grid
  * search, then n sampled sets of c′, φ′, su, γ and pool level evaluated in the chosen mode, with
  * the Taylor-series estimate beside them. Synchronous, deterministic for a seed, cancellable
  * through the progress callback like the grid search.

@@ -1,5 +1,5 @@
 /**
- * The probabilistic keys of a section document (ENGINE-IO-2.md §4, docs/probabilistic.md):
+ * The probabilistic keys of a section document (docs/probabilistic.md):
  * `vary` on a material and `analysis.probabilistic`. They are read from the raw document here
  * rather than in ../schema.ts, so a deterministic run never depends on them.
  */

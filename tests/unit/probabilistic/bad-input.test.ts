@@ -1,5 +1,5 @@
 /**
- * Bad input (issue 17 item 6; ENGINE-IO.md "Errors"): every problem comes back with a code, a
+ * Bad input (issue 17 item 6; docs/engine-io.md, errors): every problem comes back with a code, a
  * path into the document and a message saying what to change; nothing is computed.
  */
 import { spawnSync } from "node:child_process";

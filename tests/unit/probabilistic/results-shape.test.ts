@@ -1,5 +1,5 @@
 /**
- * The figures that go with pf (ENGINE-IO-2.md §4; docs/probabilistic.md "Results"): the
+ * The figures that go with pf (docs/probabilistic.md "Results"): the
  * histogram counts every valid sample, the empirical CDF read at FS = 1 is pf (definition of the
  * CDF), the convergence record ends at the final pf, and a cancelled run says so and keeps the
  * samples done (as the grid search does).

@@ -28,7 +28,7 @@ describe("the missing-R-envelope error in the user's words", () => {
     expect(v.ok).toBe(false);
     if (v.ok) return;
     const missing = v.errors.filter((e) => e.code === "r-envelope-missing");
-    // Only the core: the free-draining shell needs no R envelope (ENGINE.md §7(b)).
+    // Only the core: the free-draining shell needs no R envelope (docs/engine.md §7(b)).
     expect(missing.map((e) => e.path)).toEqual(["materials[1]"]);
     const u = userIssue(missing[0], doc.materials);
     expect(u.where).toBe("Material 'Clay core'");
