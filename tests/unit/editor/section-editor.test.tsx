@@ -1,97 +1,10 @@
 // @vitest-environment jsdom
-import "vitest-canvas-mock";
-import { act, useEffect, useState } from "react";
-import { createRoot, type Root } from "react-dom/client";
-import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
-import type { SectionDocument } from "@/lib/stability";
-import { SectionEditor, type EditorIssue } from "@/components/section-editor/section-editor";
-import { worldToScreen, type ViewTransform } from "@/lib/editor/view-transform";
+import { act } from "react";
+import { describe, expect, it } from "vitest";
 import { embankment } from "./fixtures";
-
-(globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
-
-const MATERIALS = [
-  { key: "fill", name: "Compacted fill", color: "#e69f00" },
-  { key: "clay", name: "Soft clay", color: "#009e73" },
-];
-
-let container: HTMLDivElement;
-let root: Root;
-let latest: SectionDocument;
-const changes = vi.fn();
-
-function Harness({ issues, readOnly }: { issues?: EditorIssue[]; readOnly?: boolean }) {
-  const [doc, setDoc] = useState<SectionDocument>(embankment);
-  useEffect(() => {
-    latest = doc;
-  });
-  return (
-    <>
-      <button type="button" data-testid="parent-revert" onClick={() => setDoc(embankment())} />
-      <SectionEditor
-        document={doc}
-        onChange={(d) => {
-          changes(d);
-          setDoc(d);
-        }}
-        materials={MATERIALS}
-        issues={issues}
-        readOnly={readOnly}
-        height={400}
-      />
-    </>
-  );
-}
-
-async function mount(props: { issues?: EditorIssue[]; readOnly?: boolean } = {}) {
-  await act(async () => root.render(<Harness {...props} />));
-  // next/dynamic loads the konva module asynchronously; the first load takes a while.
-  for (let i = 0; i < 100 && !container.querySelector("canvas"); i++) {
-    await act(async () => new Promise((r) => setTimeout(r, 30)));
-  }
-}
-
-const byTestId = (id: string) => {
-  const el = container.querySelector(`[data-testid="${id}"]`);
-  if (!el) throw new Error(`no element with data-testid ${id}`);
-  return el as HTMLElement;
-};
-
-function view(): ViewTransform {
-  return JSON.parse(byTestId("editor-canvas").dataset.view ?? "null") as ViewTransform;
-}
-
-async function mouse(type: "mousedown" | "mousemove" | "mouseup" | "dblclick", x: number, y: number) {
-  const [sx, sy] = worldToScreen(view(), x, y);
-  await act(async () => {
-    byTestId("editor-canvas").dispatchEvent(
-      new MouseEvent(type, { bubbles: true, clientX: sx, clientY: sy, button: 0, detail: type === "dblclick" ? 2 : 1 }),
-    );
-  });
-}
-
-async function click(x: number, y: number) {
-  await mouse("mousedown", x, y);
-  await mouse("mouseup", x, y);
-}
-
-async function key(k: string, init: KeyboardEventInit = {}) {
-  await act(async () => {
-    byTestId("editor-canvas").dispatchEvent(new KeyboardEvent("keydown", { key: k, bubbles: true, ...init }));
-  });
-}
-
-beforeEach(() => {
-  container = document.createElement("div");
-  document.body.appendChild(container);
-  root = createRoot(container);
-  changes.mockReset();
-});
-
-afterEach(async () => {
-  await act(async () => root.unmount());
-  container.remove();
-});
+import type { EditorIssue } from "@/components/section-editor/section-editor";
+import { worldToScreen } from "@/lib/editor/view-transform";
+import { mount, byTestId, view, mouse, click, key, changes, latestDoc } from "./editor-harness";
 
 describe("SectionEditor", () => {
   it("renders its parts with stable test ids and a view contract", async () => {
@@ -121,12 +34,12 @@ describe("SectionEditor", () => {
     await mouse("mousemove", 18.9, 10.1);
     await mouse("mouseup", 18.9, 10.1);
     expect(changes).toHaveBeenCalledTimes(1);
-    expect(latest.regions[0].points[0]).toEqual([19, 10]);
-    expect(latest.regions[1].points[4]).toEqual([19, 10]);
+    expect(latestDoc().regions[0].points[0]).toEqual([19, 10]);
+    expect(latestDoc().regions[1].points[4]).toEqual([19, 10]);
     await act(async () => byTestId("undo").click());
-    expect(latest).toEqual(embankment());
+    expect(latestDoc()).toEqual(embankment());
     await key("z", { ctrlKey: true, shiftKey: true });
-    expect(latest.regions[0].points[0]).toEqual([19, 10]);
+    expect(latestDoc().regions[0].points[0]).toEqual([19, 10]);
   });
 
   it("types an exact coordinate in the table and the document follows", async () => {
@@ -140,7 +53,7 @@ describe("SectionEditor", () => {
       input.dispatchEvent(new Event("input", { bubbles: true }));
     });
     await act(async () => input.blur());
-    expect(latest.regions[0].points[2]).toEqual([35, 21.125]);
+    expect(latestDoc().regions[0].points[2]).toEqual([35, 21.125]);
   });
 
   it("draws a region with clicks and Enter, and Escape drops a drawing", async () => {
@@ -151,8 +64,8 @@ describe("SectionEditor", () => {
     await click(10, 20);
     await click(10, 25);
     await key("Enter");
-    expect(latest.regions).toHaveLength(3);
-    expect(latest.regions[2]).toEqual({
+    expect(latestDoc().regions).toHaveLength(3);
+    expect(latestDoc().regions[2]).toEqual({
       material: "fill",
       points: [
         [0, 20],
@@ -163,7 +76,7 @@ describe("SectionEditor", () => {
     await click(40, 30);
     await key("Escape");
     await key("Enter");
-    expect(latest.regions).toHaveLength(3);
+    expect(latestDoc().regions).toHaveLength(3);
   });
 
   it("refuses to delete below 3 vertices with a message", async () => {
@@ -171,9 +84,9 @@ describe("SectionEditor", () => {
     await click(30, 15);
     await key("]");
     await key("Delete");
-    expect(latest.regions[0].points).toHaveLength(3);
+    expect(latestDoc().regions[0].points).toHaveLength(3);
     await key("Delete");
-    expect(latest.regions[0].points).toHaveLength(3);
+    expect(latestDoc().regions[0].points).toHaveLength(3);
     expect(byTestId("editor-message").textContent).toMatch(/at least 3 vertices/);
   });
 
@@ -181,15 +94,15 @@ describe("SectionEditor", () => {
     await mount();
     await click(30, 15);
     await mouse("dblclick", 30, 20);
-    expect(latest.regions[0].points).toHaveLength(5);
-    expect(latest.regions[0].points[2][0]).toBeCloseTo(30, 6);
+    expect(latestDoc().regions[0].points).toHaveLength(5);
+    expect(latestDoc().regions[0].points[2][0]).toBeCloseTo(30, 6);
   });
 
   it("nudges the selected vertex with the arrows by the snap step", async () => {
     await mount();
     await click(25, 20);
     await key("ArrowUp");
-    expect(latest.regions[0].points[1]).toEqual([25, 20.5]);
+    expect(latestDoc().regions[0].points[1]).toEqual([25, 20.5]);
   });
 
   it("picking an issue selects the vertex its path names", async () => {
@@ -212,7 +125,7 @@ describe("SectionEditor", () => {
       input.dispatchEvent(new Event("input", { bubbles: true }));
     });
     await act(async () => byTestId("reservoir-apply").click());
-    expect(latest.water?.phreatic?.slice(0, 2)).toEqual([
+    expect(latestDoc().water?.phreatic?.slice(0, 2)).toEqual([
       [0, 15],
       [22.5, 15],
     ]);
@@ -231,7 +144,7 @@ describe("SectionEditor", () => {
     await mount();
     await click(25, 20);
     await key("ArrowUp");
-    expect(latest.regions[0].points[1]).toEqual([25, 20.5]);
+    expect(latestDoc().regions[0].points[1]).toEqual([25, 20.5]);
     await act(async () => byTestId("parent-revert").click());
     await click(30, 15);
     expect((byTestId("vertex-y-1") as HTMLInputElement).value).toBe("20.00");
