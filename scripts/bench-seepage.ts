@@ -6,86 +6,10 @@
  * printed above it). Figures only, no pass or fail.
  */
 import { runSeepage } from "../lib/seepage";
+import { zonedDam } from "../tests/unit/seepage/sections";
 
-const DAM = {
-  materials: [
-    { id: "core", model: "mohr-coulomb", gamma: 19, gammaSat: 20, c: 10, phi: 25, k: 1e-9, kRatio: 0.25 },
-    { id: "shell", model: "mohr-coulomb", gamma: 20, gammaSat: 21, c: 0, phi: 36, k: 1e-5 },
-    { id: "foundation", model: "mohr-coulomb", gamma: 18, gammaSat: 19, c: 4, phi: 28, k: 1e-7, kRatio: 0.5 },
-    { id: "drain", model: "mohr-coulomb", gamma: 20, gammaSat: 21, c: 0, phi: 38, k: 1e-3 },
-    { id: "rock", model: "impenetrable", gamma: 23 },
-  ],
-  regions: [
-    {
-      material: "rock",
-      points: [
-        [0, -4],
-        [120, -4],
-        [120, 0],
-        [0, 0],
-      ],
-    },
-    {
-      material: "foundation",
-      points: [
-        [0, 0],
-        [120, 0],
-        [120, 6],
-        [98, 6],
-        [84, 6],
-        [64, 6],
-        [48, 6],
-        [20, 6],
-        [0, 6],
-      ],
-    },
-    {
-      material: "shell",
-      points: [
-        [20, 6],
-        [48, 6],
-        [56, 24],
-        [54, 24],
-      ],
-    },
-    {
-      material: "core",
-      points: [
-        [48, 6],
-        [64, 6],
-        [60, 24],
-        [56, 24],
-      ],
-    },
-    {
-      material: "shell",
-      points: [
-        [64, 6],
-        [84, 6],
-        [84, 7],
-        [96, 7],
-        [62, 24],
-        [60, 24],
-      ],
-    },
-    {
-      material: "drain",
-      points: [
-        [84, 6],
-        [98, 6],
-        [96, 7],
-        [84, 7],
-      ],
-    },
-  ],
-  seepage: {
-    pools: [
-      { side: "left", level: 21 },
-      { side: "right", level: 6 },
-    ],
-    meshSize: 0.62,
-  },
-};
+// The same invented zoned dam the seepage tests solve (one definition of it).
+const DAM = zonedDam(0.62);
 
 const RUNS = 5;
 
