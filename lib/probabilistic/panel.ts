@@ -16,16 +16,7 @@ import { fetchLatestProbabilistic } from "@/db/queries/probabilistic";
 import { materialDefaults, type BackingSet, type DocMaterial } from "./defaults";
 import { probabilisticDocument, requestFieldErrors, UnknownMaterialError, type ProbabilisticRequest } from "./request";
 import { readReliabilityTarget } from "./read-target";
-import type { MaterialDefaults, ReliabilityTarget, StoredProbabilistic } from "./types";
-
-export interface ProbabilisticPanelData {
-  defaults: MaterialDefaults[];
-  /** The lowered pool of a drawdown run (the level a spread may be given to), else null. */
-  drawdownTo: number | null;
-  job: JobView | null;
-  stored: StoredProbabilistic | null;
-  target: ReliabilityTarget;
-}
+import type { MaterialDefaults, ProbabilisticPanelData } from "./types";
 
 interface RunDoc {
   materials: DocMaterial[];

@@ -1,4 +1,5 @@
 /** Probabilistic runs of a kept run (docs/probabilistic.md): plain types shared by server and browser code. */
+import type { JobView } from "@/lib/jobs/types";
 import type { EngineWarning, MethodProbabilistic, ProbabilisticRunInfo, Vary } from "@/lib/stability";
 
 export type VariedQuantity = "c" | "phi" | "su" | "gamma";
@@ -46,4 +47,14 @@ export interface ReliabilityTarget {
   basis: string;
   reason: string | null;
   updatedByName: string | null;
+}
+
+/** What the probabilistic panel of a run reads (GET /api/projects/:id/runs/:runId/probabilistic). */
+export interface ProbabilisticPanelData {
+  defaults: MaterialDefaults[];
+  /** The lowered pool of a drawdown run (the level a spread may be given to), else null. */
+  drawdownTo: number | null;
+  job: JobView | null;
+  stored: StoredProbabilistic | null;
+  target: ReliabilityTarget;
 }
