@@ -9,8 +9,22 @@
  * Bad input is refused at the edge with the field named, and nothing is queued.
  */
 import { afterAll, beforeAll, describe, expect, inject, test } from "vitest";
+import type { ChildProcess } from "node:child_process";
+import { randomBytes } from "node:crypto";
+import { AppClient } from "../support/http";
+import { createDatabase, dropDatabase, startAppServer } from "../support/stack";
+import {
+  freePort,
+  startRedis,
+  startWorkerProcess,
+  stopProcess,
+  stopRedis,
+  type TestRedis,
+  type TestWorker,
+} from "../../scripts/lib/queue-processes";
+import { QUEUE_DOWN_NOTICE } from "@/lib/jobs/view";
 import { openTestDb, type TestDb } from "../support/direct-db";
-import { signedIn, type AppClient } from "../support/http";
+import { signedIn } from "../support/http";
 import { pollJob } from "../support/jobs";
 import { demoProject } from "../support/demo";
 import { quickSetup } from "../support/runs";
@@ -173,4 +187,74 @@ describe("probabilistic runs of a kept run", () => {
     await reviewer.request(target, { method: "PUT", json: { beta: 3, reason: "Back to the default level" } });
     expect((await panel()).target.reason).toBeNull();
   });
+});
+
+describe("a probabilistic run while the queue is down (a web app of its own, with its own Redis)", () => {
+  const dbName = `scarpline_test_p${process.pid}_${randomBytes(3).toString("hex")}`;
+  let redis: TestRedis;
+  let worker: TestWorker;
+  let app: ChildProcess;
+  let own: TestDb;
+  let client: AppClient;
+
+  beforeAll(async () => {
+    await createDatabase(dbName);
+    own = openTestDb(dbName);
+    redis = await startRedis(await freePort());
+    const port = await freePort();
+    const appUrl = `http://127.0.0.1:${port}`;
+    const env = {
+      ...inject("appEnv"),
+      DATABASE_NAME: dbName,
+      REDIS_PORT: String(redis.port),
+      NEXTAUTH_URL: appUrl,
+      APP_URL: appUrl,
+    };
+    worker = await startWorkerProcess(env);
+    app = await startAppServer(env, port);
+    client = new AppClient(appUrl);
+    expect((await client.signIn("engineer@scarpline.test", "scarpline-demo")).ok).toBe(true);
+  }, 120_000);
+
+  afterAll(async () => {
+    if (app) await stopProcess(app);
+    if (worker) await stopProcess(worker.process);
+    if (redis) await stopRedis(redis);
+    await own?.destroy();
+    await dropDatabase(dbName);
+  }, 180_000);
+
+  test("the page is told so, the job is kept, and it runs when the queue returns", async () => {
+    const demo = await demoProject(client);
+    const kept = await client.request(`/api/projects/${demo.projectId}/runs`, {
+      method: "POST",
+      json: {
+        sectionId: demo.sectionId,
+        sectionVersion: demo.version,
+        title: "Queue down",
+        setup: quickSetup(demo.document, "downstream"),
+      },
+    });
+    expect(kept.status).toBe(201);
+    const id = (await kept.json()).run.id as number;
+    const path = `/api/projects/${demo.projectId}/runs/${id}/probabilistic`;
+    const p = (await (await client.request(path)).json()) as ProbabilisticPanelData;
+
+    await stopRedis(redis, true);
+    const request = requestFrom(p, { samples: 2_000 });
+    const res = await client.request(path, { method: "POST", json: request });
+    expect(res.status).toBe(202);
+    const { job } = (await res.json()) as { job: JobView };
+    expect(job).toMatchObject({ state: "queued", queue: "down", notice: QUEUE_DOWN_NOTICE });
+    const row = await own("jobs").where({ id: job.id }).first();
+    expect(row.enqueued_at).toBeNull();
+    expect(JSON.parse(row.input).request).toEqual(request);
+    const seen = (await (await client.request(path)).json()) as ProbabilisticPanelData;
+    expect(seen.job).toMatchObject({ id: job.id, queue: "down", notice: QUEUE_DOWN_NOTICE });
+
+    redis = await startRedis(redis.port, redis.folder);
+    const ended = await pollJob(client, demo.projectId, job.id, { timeoutMs: 90_000 });
+    expect(ended.job).toMatchObject({ state: "done", queue: "up", notice: null });
+    expect(await own("probabilistic_results").where({ job_id: job.id })).toHaveLength(1);
+  }, 180_000);
 });

@@ -239,7 +239,7 @@ export function ScatterStudyForm({ defaults, drawdownTo, fields, busy, onSubmit 
                   onChange={(e) => setLevel({ ...level, max: e.target.value })}
                 />
               </td>
-              <td className="px-2 py-1 text-xs text-ink-soft">the run's lowered pool as the mean</td>
+              <td className="px-2 py-1 text-xs text-ink-soft">the run&apos;s lowered pool as the mean</td>
             </tr>
           ) : null}
         </tbody>

@@ -47,7 +47,7 @@ function MethodRows({ method, s, fs }: { method: string; s: MethodProbabilistic;
   );
 }
 
-/** The kept probabilistic result: figures per method with the Taylor-series estimate beside them, the verdict and charts. */
+/** The kept probabilistic result: figures per method with the Taylor series beside them, the verdict, the charts. */
 export function ScatterStudyResults({ stored, target }: { stored: StoredProbabilistic; target: ReliabilityTarget }) {
   const o = stored.outcome;
   const methods = o.methods.filter((m) => o.probabilistic[m]);
