@@ -60,7 +60,10 @@ export function materialDefaults(
   const scatter = strengthSet ? labSetScatter(strengthSet.record) : null;
   for (const key of keys) {
     const mean = m[key] as number;
-    if (key === "c" && mean === 0) continue; // nothing to spread: a lognormal needs a mean above 0
+    if (key === "c" && mean === 0) {
+      basis.c = "not varied: c′ = 0 (a cohesionless material)";
+      continue;
+    }
     if ((key === "c" || key === "phi") && scatter && strengthSet) {
       const sd = key === "c" ? scatter.cSd : scatter.phiSd;
       if (sd !== null && sd > 0) {

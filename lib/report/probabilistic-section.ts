@@ -61,16 +61,16 @@ export function writeProbabilistic(w: ReportWriter, { stored, target }: ReportPr
       ];
     }),
   );
-  const first = methods[0] ? o.probabilistic[methods[0]]! : null;
-  if (first) {
+  for (const m of methods) {
+    const s = o.probabilistic[m]!;
     const v = reliabilityVerdict({
-      betaNormal: first.betaNormal,
-      betaLognormal: first.betaLognormal,
-      pf: first.pf,
-      valid: first.valid,
+      betaNormal: s.betaNormal,
+      betaLognormal: s.betaLognormal,
+      pf: s.pf,
+      valid: s.valid,
       target: target.beta,
     });
-    w.paragraph(`${METHOD[methods[0]] ?? methods[0]}: ${v.sentence}`);
+    w.paragraph(`${METHOD[m] ?? m}: ${v.sentence}`);
   }
   w.table(
     [

@@ -144,20 +144,22 @@ export function ScatterStudyForm({ defaults, drawdownTo, fields, busy, onSubmit 
                       />
                     </td>
                     <td className="px-2 py-1">
-                      <input
-                        className="field w-16"
-                        inputMode="decimal"
-                        aria-label={`${m.name} ${SYMBOL[k]} min`}
-                        value={r.min}
-                        onChange={(e) => edit(m.materialId, k, { min: e.target.value })}
-                      />{" "}
-                      <input
-                        className="field w-16"
-                        inputMode="decimal"
-                        aria-label={`${m.name} ${SYMBOL[k]} max`}
-                        value={r.max}
-                        onChange={(e) => edit(m.materialId, k, { max: e.target.value })}
-                      />
+                      <div className="flex gap-1">
+                        <input
+                          className="field w-14"
+                          inputMode="decimal"
+                          aria-label={`${m.name} ${SYMBOL[k]} min`}
+                          value={r.min}
+                          onChange={(e) => edit(m.materialId, k, { min: e.target.value })}
+                        />
+                        <input
+                          className="field w-14"
+                          inputMode="decimal"
+                          aria-label={`${m.name} ${SYMBOL[k]} max`}
+                          value={r.max}
+                          onChange={(e) => edit(m.materialId, k, { max: e.target.value })}
+                        />
+                      </div>
                     </td>
                     <td className="px-2 py-1 text-xs text-ink-soft">{m.basis[k] ?? "entered here"}</td>
                   </tr>
@@ -226,18 +228,20 @@ export function ScatterStudyForm({ defaults, drawdownTo, fields, busy, onSubmit 
                 />
               </td>
               <td className="px-2 py-1">
-                <input
-                  className="field w-16"
-                  aria-label="Pool level min"
-                  value={level.min}
-                  onChange={(e) => setLevel({ ...level, min: e.target.value })}
-                />{" "}
-                <input
-                  className="field w-16"
-                  aria-label="Pool level max"
-                  value={level.max}
-                  onChange={(e) => setLevel({ ...level, max: e.target.value })}
-                />
+                <div className="flex gap-1">
+                  <input
+                    className="field w-14"
+                    aria-label="Pool level min"
+                    value={level.min}
+                    onChange={(e) => setLevel({ ...level, min: e.target.value })}
+                  />
+                  <input
+                    className="field w-14"
+                    aria-label="Pool level max"
+                    value={level.max}
+                    onChange={(e) => setLevel({ ...level, max: e.target.value })}
+                  />
+                </div>
               </td>
               <td className="px-2 py-1 text-xs text-ink-soft">the run&apos;s lowered pool as the mean</td>
             </tr>

@@ -52,15 +52,17 @@ export function ScatterStudyResults({ stored, target }: { stored: StoredProbabil
   const o = stored.outcome;
   const methods = o.methods.filter((m) => o.probabilistic[m]);
   const first = methods[0] ? o.probabilistic[methods[0]]! : null;
-  const verdict = first
-    ? reliabilityVerdict({
-        betaNormal: first.betaNormal,
-        betaLognormal: first.betaLognormal,
-        pf: first.pf,
-        valid: first.valid,
-        target: target.beta,
-      })
-    : null;
+  const verdicts = methods.map((m) => {
+    const p = o.probabilistic[m]!;
+    const v = reliabilityVerdict({
+      betaNormal: p.betaNormal,
+      betaLognormal: p.betaLognormal,
+      pf: p.pf,
+      valid: p.valid,
+      target: target.beta,
+    });
+    return { method: m, ...v };
+  });
   return (
     <div className="space-y-3" data-testid="scatter-results">
       <p className="text-xs text-ink-soft">
@@ -69,15 +71,15 @@ export function ScatterStudyResults({ stored, target }: { stored: StoredProbabil
         {o.run.mode === "full-search" ? "a whole search per sample" : "the critical circle re-evaluated"}), by{" "}
         {stored.createdByName}, {formatDateTime(stored.createdAt)}, in {(o.elapsedMs / 1000).toFixed(1)} s.
       </p>
-      {verdict ? (
+      {verdicts.map((v) => (
         <p
-          className={`rounded-md border-l-4 px-3 py-2 text-sm ${verdict.meets ? "border-moss-600 bg-moss-50" : "border-alarm-600 bg-alarm-50"}`}
+          key={v.method}
+          className={`rounded-md border-l-4 px-3 py-2 text-sm ${v.meets ? "border-moss-600 bg-moss-50" : "border-alarm-600 bg-alarm-50"}`}
           data-testid="scatter-verdict"
         >
-          {methods[0] ? `${METHOD_LABEL[methods[0]] ?? methods[0]}: ` : null}
-          {verdict.sentence}
+          {METHOD_LABEL[v.method] ?? v.method}: {v.sentence}
         </p>
-      ) : null}
+      ))}
       <div className="overflow-x-auto">
         <table className="w-full text-sm">
           <thead className="text-left text-xs text-ink-soft">
