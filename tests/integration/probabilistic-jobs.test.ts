@@ -40,6 +40,7 @@ let db: TestDb;
 let projectId: number;
 let runId: number;
 let runDocument: unknown;
+const spare: TestWorker[] = [];
 
 beforeAll(async () => {
   engineer = await signedIn("engineer@scarpline.test");
@@ -56,6 +57,7 @@ beforeAll(async () => {
   runDocument = documentForRun(demo.document, setup);
 });
 afterAll(async () => {
+  await Promise.all(spare.map((w) => stopProcess(w.process)));
   await db?.destroy();
 });
 
@@ -132,6 +134,32 @@ describe("probabilistic runs of a kept run", () => {
     expect(ended.job.state).toBe("cancelled");
     expect(await db("probabilistic_results").where({ job_id: job.id }).first()).toBeUndefined();
   }, 90_000);
+
+  test("a worker killed mid-run (SIGKILL): the job is retried on another from its frozen input and lands once", async () => {
+    const p = await panel();
+    const res = await engineer.request(url(), {
+      method: "POST",
+      json: requestFrom(p, { mode: "full-search", samples: 1_000, seed: 23 }),
+    });
+    const { job } = (await res.json()) as { job: JobView };
+    await pollJob(engineer, projectId, job.id, {
+      timeoutMs: 60_000,
+      until: (j) => j.state === "running" && j.done >= 5,
+    });
+    const row = await db("jobs").where({ id: job.id }).first();
+    const pid = Number(String(row.worker).split(":").at(-1));
+    // Only a worker this test run started is killed; a replacement starts as a supervisor would start one.
+    expect(inject("workerPids")).toContain(pid);
+    process.kill(pid, "SIGKILL");
+    spare.push(await startWorkerProcess(inject("appEnv")));
+    expect(await db("probabilistic_results").where({ job_id: job.id })).toHaveLength(0);
+    const ended = await pollJob(engineer, projectId, job.id, { timeoutMs: 120_000 });
+    expect(ended.job.state).toBe("done");
+    expect(ended.job.attempts).toBe(2);
+    const rows = await db("probabilistic_results").where({ job_id: job.id });
+    expect(rows).toHaveLength(1);
+    expect(JSON.parse(rows[0].result).run.samplesDone).toBe(1_000);
+  }, 180_000);
 
   test("a finished run is stored once, equal to the engine's own figures for the same seed, and reported", async () => {
     const p = await panel();
