@@ -19,6 +19,7 @@ import { writeSliceTable } from "./slice-pages";
 import { VARIANT_TEXT, stageCells, stagedView } from "@/lib/runs/view/staged-view";
 import { formatCount, formatDateTime } from "@/lib/format";
 import { writeSensitivity, type ReportSensitivity } from "./sensitivity-section";
+import { writeProbabilistic, type ReportProbabilistic } from "./probabilistic-section";
 
 export interface ReportInput {
   projectName: string;
@@ -60,6 +61,8 @@ export interface ReportInput {
   generatedBy: string;
   /** Present when the reader asked for the sensitivity section. */
   sensitivity?: ReportSensitivity;
+  /** Present when the run has a kept probabilistic result. */
+  probabilistic?: ReportProbabilistic;
 }
 
 const day = (iso: string | null) => (iso ? formatDateTime(iso) : "—");
@@ -340,6 +343,7 @@ export async function buildRunReport(input: ReportInput): Promise<Uint8Array> {
   writeMaterials(w, input);
   writeReview(w, input);
   if (input.sensitivity) writeSensitivity(w, input.sensitivity);
+  if (input.probabilistic) writeProbabilistic(w, input.probabilistic);
   writeSliceTable(w, run.sliceTables, run.result.methods);
   return w.finish(
     `Scarpline calculation report — run ${run.id}, ` +

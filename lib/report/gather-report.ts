@@ -5,13 +5,16 @@ import { collectMaterialSources } from "@/lib/review/collect-material-sources";
 import { commentLabel } from "@/lib/review/comment-label";
 import type { SectionDocument } from "@/lib/stability";
 import type { ReportInput } from "./build-report";
+import { fetchLatestProbabilistic } from "@/db/queries/probabilistic";
+import { readReliabilityTarget } from "@/lib/probabilistic/read-target";
 
 /** Everything the report of one run shows, read from the database. */
 export async function gatherReport(run: RunDetail, projectName: string, generatedBy: string): Promise<ReportInput> {
-  const [review, checklist, comments] = await Promise.all([
+  const [review, checklist, comments, probabilistic] = await Promise.all([
     fetchReviewRecord(run.id),
     fetchChecklist(run.id),
     fetchRunComments(run.id),
+    fetchLatestProbabilistic(run.projectId, run.id),
   ]);
   const frozen = review?.materialSources ?? null;
   return {
@@ -41,5 +44,8 @@ export async function gatherReport(run: RunDetail, projectName: string, generate
     sourcesFrozen: frozen !== null,
     generatedAt: new Date().toISOString(),
     generatedBy,
+    ...(probabilistic
+      ? { probabilistic: { stored: probabilistic, target: await readReliabilityTarget(run.projectId) } }
+      : {}),
   };
 }

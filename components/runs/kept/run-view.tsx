@@ -20,6 +20,7 @@ import type { PinMarker } from "@/lib/review/pin-markers";
 import { formatDateTime } from "@/lib/format";
 import { WhatIfPanel } from "@/components/runs/kept/what-if-panel";
 import { SensitivityPanel } from "@/components/runs/kept/sensitivity-panel";
+import { ScatterStudyPanel } from "@/components/runs/kept/scatter-study-panel";
 
 type Method = "bishop" | "fellenius";
 export type StoredResult = GridSearchSuccess & { setup: RunSetup };
@@ -167,6 +168,7 @@ export function RunView({
               requiredFs={run.requiredFs}
             />
           ) : null}
+          <ScatterStudyPanel projectId={run.projectId} runId={run.id} canRun={canRevise} />
           {children}
         </div>
         {aside ? (

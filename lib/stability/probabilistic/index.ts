@@ -2,6 +2,7 @@
 export {
   runProbabilistic,
   hasProbabilisticSettings,
+  probabilisticInputErrors,
   type ProbabilisticOptions,
   type ProbabilisticResult,
   type ProbabilisticSuccess,

@@ -101,6 +101,11 @@ function readInput(doc: unknown) {
   return { errors, warnings: v.warnings, section: v.section, settings, mode, sampling, variables, correlations };
 }
 
+/** Every error a probabilistic document has, with its path, without running anything (for checks at the edge). */
+export function probabilisticInputErrors(doc: unknown): Issue[] {
+  return readInput(doc).errors;
+}
+
 /**
  * Runs a probabilistic analysis of a section document that carries analysis.probabilistic.
  * @returns the deterministic search result plus `probabilistic` (per method) and `probabilisticRun`

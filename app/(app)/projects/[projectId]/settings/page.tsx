@@ -8,6 +8,8 @@ import { fetchConditionSettings } from "@/db/queries/loading-conditions";
 import { GUIDANCE_NOTE } from "@/lib/analysis/required-fs";
 import { PageTitle } from "@/components/ui/page-title";
 import { RequiredFsTable } from "@/components/settings/required-fs-table";
+import { ReliabilityTargetForm } from "@/components/settings/reliability-target-form";
+import { readReliabilityTarget } from "@/lib/probabilistic/read-target";
 import { pageId } from "@/lib/api/ids";
 
 export const metadata: Metadata = { title: "Required factors of safety" };
@@ -35,6 +37,11 @@ export default async function SettingsPage({ params }: { params: Promise<{ proje
       <RequiredFsTable
         projectId={access.project.id}
         initial={await fetchConditionSettings(access.project.id)}
+        canEdit={can(access.role, "settings.edit")}
+      />
+      <ReliabilityTargetForm
+        projectId={access.project.id}
+        initial={await readReliabilityTarget(access.project.id)}
         canEdit={can(access.role, "settings.edit")}
       />
     </>

@@ -1,0 +1,93 @@
+/**
+ * Target reliability index and the words for a result against it. The levels of expected
+ * performance against β are the table of the U.S. Army Corps of Engineers' engineering technical
+ * letters on reliability (ETL 1110-2-547, 1995, reproduced in ETL 1110-2-556, 1999). The search
+ * tool did not reach either document, so which of the two first holds the table, the level names
+ * and the β values are from memory; each probability is computed here as Φ(−β), not copied.
+ * The default target, β = 3 ("above average"), is the level often quoted for dams (common practice,
+ * from memory); projects set their own with a reason, and local codes and the engineer of record govern.
+ */
+import { normalCdf } from "@/lib/stability";
+
+export const PERFORMANCE_LEVELS = [
+  { beta: 1.0, level: "hazardous" },
+  { beta: 1.5, level: "unsatisfactory" },
+  { beta: 2.0, level: "poor" },
+  { beta: 2.5, level: "below average" },
+  { beta: 3.0, level: "above average" },
+  { beta: 4.0, level: "good" },
+  { beta: 5.0, level: "high" },
+] as const;
+
+export const DEFAULT_TARGET_BETA = 3.0;
+export const TARGET_BASIS =
+  "Levels of expected performance against β after USACE ETL 1110-2-547 (1995) and ETL 1110-2-556 (1999) " +
+  "(table recalled from memory); the default target β = 3.0 is the 'above average' level.";
+
+/** The probability of unsatisfactory performance that a β stands for, Φ(−β). */
+export const pfOfBeta = (beta: number) => normalCdf(-beta);
+
+/** The table's level for a β: the highest level whose β it reaches, or "below hazardous". */
+export function performanceLevel(beta: number): { level: string; from: number | null; to: number | null } {
+  let at = -1;
+  PERFORMANCE_LEVELS.forEach((l, i) => {
+    if (beta >= l.beta) at = i;
+  });
+  if (at < 0) return { level: "below the hazardous level", from: null, to: PERFORMANCE_LEVELS[0].beta };
+  return {
+    level: PERFORMANCE_LEVELS[at].level,
+    from: PERFORMANCE_LEVELS[at].beta,
+    to: PERFORMANCE_LEVELS[at + 1]?.beta ?? null,
+  };
+}
+
+export interface VerdictInput {
+  betaNormal: number | null;
+  betaLognormal: number | null;
+  pf: number | null;
+  /** Samples with a factor of safety. */
+  valid: number;
+  target: number;
+}
+
+export interface Verdict {
+  /** The β judged: the lower of the normal and lognormal forms. */
+  beta: number | null;
+  meets: boolean | null;
+  level: string | null;
+  sentence: string;
+}
+
+const pct = (p: number) => (p >= 0.001 ? `${(p * 100).toFixed(2)} %` : p.toExponential(1));
+
+/**
+ * pf and β against the project's target, in words. The lower of the two forms of β is judged, so
+ * the verdict does not rest on assuming either distribution of FS.
+ */
+export function reliabilityVerdict(v: VerdictInput): Verdict {
+  const betas = [v.betaNormal, v.betaLognormal].filter((b): b is number => b !== null && Number.isFinite(b));
+  const targetPf = pfOfBeta(v.target);
+  if (betas.length === 0)
+    return {
+      beta: null,
+      meets: null,
+      level: null,
+      sentence: "No reliability index could be computed from these samples.",
+    };
+  const beta = Math.min(...betas);
+  const meets = beta >= v.target;
+  const lvl = performanceLevel(beta);
+  const range = lvl.from === null ? `β < ${lvl.to}` : lvl.to === null ? `β ≥ ${lvl.from}` : `β ${lvl.from}–${lvl.to}`;
+  const pfText =
+    v.pf === null
+      ? ""
+      : v.pf === 0
+        ? ` No sample of ${v.valid.toLocaleString("en-US")} failed, so pf is below about 1 in ${v.valid.toLocaleString("en-US")};`
+        : ` pf = ${pct(v.pf)} of the samples failed;`;
+  const sentence =
+    `β = ${beta.toFixed(2)} (the lower of its normal and lognormal forms) is ` +
+    `${meets ? "at or above" : "below"} the project's target of ${v.target.toFixed(2)}.` +
+    `${pfText} the target stands for pf = Φ(−${v.target.toFixed(2)}) = ${pct(targetPf)}. ` +
+    `The USACE table puts this β at "${lvl.level}" expected performance (${range}).`;
+  return { beta, meets, level: lvl.level, sentence };
+}
