@@ -5,7 +5,7 @@ set -euo pipefail
 . "$(dirname "$0")/lib/common.sh"
 cd "$ROOT"
 mkdir -p "$DATA_ROOT"
-node scripts/build-engine.mjs --if-missing >/dev/null || die "bundling the queue worker failed"
+node scripts/build-engine.mjs >/dev/null || die "bundling the queue worker failed"
 log_file="$DATA_ROOT/worker-starting-$$.log"
 # nohup execs node, so $! is the worker itself.
 nohup node .engine/worker.mjs >>"$log_file" 2>&1 &
