@@ -11,6 +11,7 @@ import * as m010 from "./010-sign-in-counters-and-session-versions";
 import * as m011 from "./011-jobs";
 import * as m012 from "./012-section-archive";
 import * as m013 from "./013-seepage";
+import * as m015 from "./015-password-resets-and-last-sign-in";
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -32,6 +33,7 @@ const migrations: Record<string, Migration> = {
   "011-jobs": m011,
   "012-section-archive": m012,
   "013-seepage": m013,
+  "015-password-resets-and-last-sign-in": m015,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {
