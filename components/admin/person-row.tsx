@@ -47,7 +47,7 @@ export function PersonRow({ person, isSelf, holdsLastAdminSeat, onChanged }: Per
         </label>
         <select
           id={`role-${person.id}`}
-          className="field py-1"
+          className="field w-36 py-1"
           value={person.role}
           disabled={busy || holdsLastAdminSeat}
           aria-describedby={holdsLastAdminSeat ? seatNoteId : undefined}
@@ -74,7 +74,7 @@ export function PersonRow({ person, isSelf, holdsLastAdminSeat, onChanged }: Per
         )}
       </td>
       <td className="px-3 py-2">
-        <div className="flex flex-wrap gap-2">
+        <div className="flex flex-wrap gap-2 whitespace-nowrap">
           {person.active ? (
             <button
               type="button"

@@ -103,7 +103,7 @@ describe("reset links over HTTP", () => {
     const anyone = new AppClient();
     const weak = await anyone.request("/api/password-reset", {
       method: "POST",
-      json: { token, newPassword: "short", confirmPassword: "short" },
+      json: { token, newPassword: "short1", confirmPassword: "short1" },
     });
     expect(weak.status).toBe(400);
     expect((await weak.json()).error.fields.newPassword).toEqual(["At least 10 characters."]);
