@@ -18,8 +18,14 @@ export function UsersManager({ initialUsers, currentUserId }: UsersManagerProps)
   const { data, mutate } = useSWR<{ users: PublicUser[] }>("/api/users", { fallbackData: { users: initialUsers } });
   const people = data?.users ?? [];
   // A change to one person is put in place at once, then the list is read again for everyone else's state.
-  const replace = (user: PublicUser) =>
-    mutate({ users: people.map((p) => (p.id === user.id ? user : p)) }, { revalidate: true });
+  // A change to one's own role or status ends one's own sessions too, so that means signing in again.
+  const replace = async (user: PublicUser) => {
+    const before = people.find((p) => p.id === user.id);
+    const ownSessionsEnded =
+      user.id === currentUserId && (before?.role !== user.role || before?.active !== user.active);
+    if (ownSessionsEnded) return window.location.assign("/sign-in");
+    return mutate({ users: people.map((p) => (p.id === user.id ? user : p)) }, { revalidate: true });
+  };
   const {
     onSubmit,
     fields,

@@ -49,6 +49,7 @@ describe("the sign-in form", () => {
       .poll(() => page.locator(".field-error").allTextContents())
       .toEqual(["Enter your e-mail address.", "Enter your password."]);
     expect(await page.getByLabel("E-mail").getAttribute("aria-invalid")).toBe("true");
+    await page.screenshot({ path: "test-results/sign-in-empty.png" });
     await page.getByLabel("E-mail").fill("engineer@scarpline.test");
     await page.getByRole("button", { name: "Sign in" }).click();
     await expect.poll(() => page.locator(".field-error").allTextContents()).toEqual(["Enter your password."]);
@@ -153,6 +154,7 @@ describe("managing people", () => {
     const person = await browser.newPage();
     await keepScreenshotOnFailure(person, "people-reset", async () => {
       await person.goto(url);
+      await person.screenshot({ path: "test-results/reset-form.png" });
       await person.getByLabel("New password", { exact: true }).fill("short1");
       await person.getByLabel("New password again").fill("short1");
       await person.getByRole("button", { name: "Set new password" }).click();
@@ -171,6 +173,7 @@ describe("managing people", () => {
       // The same link a second time.
       await person.goto(url);
       expect(await person.getByTestId("reset-refused").textContent()).toMatch(/works only once/);
+      await person.screenshot({ path: "test-results/reset-refused.png" });
     });
 
     // A fresh link, moved past its expiry.
@@ -198,6 +201,7 @@ describe("managing people", () => {
     await signInAs(a, email, PASSWORD);
     await signInAs(b, email, PASSWORD);
     await a.goto(appUrl("/account"));
+    await a.screenshot({ path: "test-results/account-page.png", fullPage: true });
     await a.getByRole("button", { name: "Sign out everywhere" }).click();
     await a.waitForURL(/\/sign-in/, WAIT);
     await b.goto(appUrl("/account"));
