@@ -1,6 +1,7 @@
 "use client";
 
 import useSWR from "swr";
+import { useRouter } from "next/navigation";
 import type { PublicUser } from "@/lib/users/types";
 import { ROLES, ROLE_LABELS } from "@/lib/permissions";
 import { fetchJson } from "@/lib/client/fetch-json";
@@ -16,6 +17,7 @@ export interface UsersManagerProps {
 
 export function UsersManager({ initialUsers, currentUserId }: UsersManagerProps) {
   const { data, mutate } = useSWR<{ users: PublicUser[] }>("/api/users", { fallbackData: { users: initialUsers } });
+  const router = useRouter();
   const people = data?.users ?? [];
   // A change to one person is put in place at once, then the list is read again for everyone else's state.
   // A change to one's own role or status ends one's own sessions too, so that means signing in again.
@@ -23,7 +25,7 @@ export function UsersManager({ initialUsers, currentUserId }: UsersManagerProps)
     const before = people.find((p) => p.id === user.id);
     const ownSessionsEnded =
       user.id === currentUserId && (before?.role !== user.role || before?.active !== user.active);
-    if (ownSessionsEnded) return window.location.assign("/sign-in");
+    if (ownSessionsEnded) return router.replace("/sign-in");
     return mutate({ users: people.map((p) => (p.id === user.id ? user : p)) }, { revalidate: true });
   };
   const {
