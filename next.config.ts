@@ -8,6 +8,8 @@ const nextConfig: NextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   reactStrictMode: true,
   poweredByHeader: false,
+  // forbidden() from next/navigation: admin-only pages answer a real 403 (lib/auth/page-access.ts).
+  experimental: { authInterrupts: true },
   async headers() {
     return [
       { source: "/:path*", headers: COMMON_SECURITY_HEADERS },

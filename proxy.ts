@@ -1,10 +1,11 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { pagePolicy } from "@/lib/api/content-security";
 import { SERVICE_UNAVAILABLE } from "@/lib/api/service-down";
+import { REQUEST_PATH_HEADER } from "@/lib/api/request-path";
 import { pingDatabase } from "@/db/queries/health";
 
 // Pages that read the database answer 503 while it is out of reach, instead of rendering "not found".
-const PAGES_NEEDING_DB = /^\/($|(projects|account|admin)(\/|$))/;
+const PAGES_NEEDING_DB = /^\/($|(projects|account|admin|reset-password)(\/|$))/;
 const PING_TTL_MS = 2000;
 let lastPing: { at: number; ok: boolean } | null = null;
 
@@ -38,6 +39,8 @@ export async function proxy(request: NextRequest): Promise<NextResponse> {
   const headers = new Headers(request.headers);
   headers.set("x-nonce", nonce);
   headers.set("content-security-policy", policy);
+  // Pages behind sign-in read it to send the visitor back here after signing in (lib/auth/session.ts).
+  headers.set(REQUEST_PATH_HEADER, request.nextUrl.pathname + request.nextUrl.search);
   const response = NextResponse.next({ request: { headers } });
   response.headers.set("content-security-policy", policy);
   return response;

@@ -1,14 +1,33 @@
 "use client";
 
 import useSWR from "swr";
+import { useRouter } from "next/navigation";
 import type { PublicUser } from "@/lib/users/types";
 import { ROLES, ROLE_LABELS } from "@/lib/permissions";
 import { fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
 import { useApiForm } from "@/components/ui/use-api-form";
+import { isLastActiveAdmin } from "@/lib/users/admin-seat";
+import { PersonRow } from "./person-row";
 
-export function UsersManager({ initialUsers }: { initialUsers: PublicUser[] }) {
+export interface UsersManagerProps {
+  initialUsers: PublicUser[];
+  currentUserId: number;
+}
+
+export function UsersManager({ initialUsers, currentUserId }: UsersManagerProps) {
   const { data, mutate } = useSWR<{ users: PublicUser[] }>("/api/users", { fallbackData: { users: initialUsers } });
+  const router = useRouter();
+  const people = data?.users ?? [];
+  // A change to one person is put in place at once, then the list is read again for everyone else's state.
+  // A change to one's own role or status ends one's own sessions too, so that means signing in again.
+  const replace = async (user: PublicUser) => {
+    const before = people.find((p) => p.id === user.id);
+    const ownSessionsEnded =
+      user.id === currentUserId && (before?.role !== user.role || before?.active !== user.active);
+    if (ownSessionsEnded) return router.replace("/sign-in");
+    return mutate({ users: people.map((p) => (p.id === user.id ? user : p)) }, { revalidate: true });
+  };
   const {
     onSubmit,
     fields,
@@ -29,25 +48,29 @@ export function UsersManager({ initialUsers }: { initialUsers: PublicUser[] }) {
   });
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+    <div className="grid gap-6 xl:grid-cols-[3fr_1fr]">
       <table
         className="w-full self-start rounded-lg border border-rule bg-paper-raised text-sm"
         data-testid="user-table"
       >
         <thead className="bg-paper-sunk text-left text-xs uppercase tracking-wide text-ink-soft">
           <tr>
-            <th className="px-3 py-2">Name</th>
-            <th className="px-3 py-2">E-mail</th>
+            <th className="px-3 py-2">Person</th>
             <th className="px-3 py-2">Role</th>
+            <th className="px-3 py-2">Status</th>
+            <th className="px-3 py-2">Last sign-in</th>
+            <th className="px-3 py-2">Actions</th>
           </tr>
         </thead>
         <tbody>
-          {(data?.users ?? []).map((u) => (
-            <tr key={u.id} className="border-t border-rule">
-              <td className="px-3 py-2">{u.name}</td>
-              <td className="px-3 py-2 text-ink-soft">{u.email}</td>
-              <td className="px-3 py-2">{ROLE_LABELS[u.role]}</td>
-            </tr>
+          {people.map((u) => (
+            <PersonRow
+              key={u.id}
+              person={u}
+              isSelf={u.id === currentUserId}
+              holdsLastAdminSeat={isLastActiveAdmin(u, people)}
+              onChanged={replace}
+            />
           ))}
         </tbody>
       </table>

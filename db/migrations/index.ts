@@ -12,6 +12,7 @@ import * as m011 from "./011-jobs";
 import * as m012 from "./012-section-archive";
 import * as m013 from "./013-seepage";
 import * as m014 from "./014-probabilistic";
+import * as m015 from "./015-password-resets-and-last-sign-in";
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -34,6 +35,7 @@ const migrations: Record<string, Migration> = {
   "012-section-archive": m012,
   "013-seepage": m013,
   "014-probabilistic": m014,
+  "015-password-resets-and-last-sign-in": m015,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

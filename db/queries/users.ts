@@ -14,6 +14,7 @@ export interface UserRow {
   active: number | boolean;
   password_hash: string;
   session_version: number;
+  last_sign_in_at: Date | null;
 }
 
 const toPublic = (r: UserRow): PublicUser => ({
@@ -23,6 +24,7 @@ const toPublic = (r: UserRow): PublicUser => ({
   name: r.name,
   role: r.role,
   active: Boolean(r.active),
+  lastSignInAt: r.last_sign_in_at ? new Date(r.last_sign_in_at).toISOString() : null,
 });
 
 export async function fetchUserByEmail(email: string, db: Knex = getDb()): Promise<UserRow | undefined> {
@@ -85,27 +87,50 @@ export async function updatePasswordHash(userId: number, passwordHash: string, d
   });
 }
 
-/** Changes a user's role or active flag in one organisation; either change ends the user's sessions. */
+export type AccessChange =
+  | { kind: "changed"; user: PublicUser }
+  | { kind: "not-found" }
+  /** The change would leave the organisation without an active administrator. */
+  | { kind: "last-admin" };
+
+/**
+ * Changes a user's role or active flag in one organisation; either change ends the user's sessions.
+ * The organisation's administrator rows are locked while counting, so two administrators demoting each
+ * other at once cannot leave nobody able to manage people.
+ */
 export async function updateUserAccess(
   input: { organisationId: number; userId: number; role?: Role; active?: boolean },
   db: Knex = getDb(),
-): Promise<PublicUser | null> {
+): Promise<AccessChange> {
   return db.transaction(async (trx) => {
+    const admins = await trx<UserRow>("users")
+      .where({ organisation_id: input.organisationId, role: "admin", active: true })
+      .forUpdate()
+      .select("id");
     const row = await trx<UserRow>("users")
       .where({ id: input.userId, organisation_id: input.organisationId })
       .forUpdate()
       .first();
-    if (!row) return null;
+    if (!row) return { kind: "not-found" } as const;
     const changes: Record<string, unknown> = {};
     if (input.role !== undefined && input.role !== row.role) changes.role = input.role;
     if (input.active !== undefined && input.active !== Boolean(row.active)) changes.active = input.active;
+    const leavesAdminSeat = row.role === "admin" && Boolean(row.active) && ("role" in changes || "active" in changes);
+    if (leavesAdminSeat && admins.every((a) => a.id === row.id)) return { kind: "last-admin" } as const;
     if (Object.keys(changes).length) {
       await trx("users")
         .where({ id: input.userId })
         .update({ ...changes, updated_at: trx.fn.now(), session_version: nextVersion(trx) });
     }
-    return toPublic((await trx<UserRow>("users").where({ id: input.userId }).first())!);
+    return { kind: "changed", user: toPublic((await trx<UserRow>("users").where({ id: input.userId }).first())!) };
   });
+}
+
+/** Notes a successful sign-in, for the people screen. */
+export async function recordSignIn(userId: number, db: Knex = getDb()): Promise<void> {
+  await db("users")
+    .where({ id: userId })
+    .update({ last_sign_in_at: db.raw("UTC_TIMESTAMP()") });
 }
 
 export { toPublic as toPublicUser };

@@ -4,6 +4,7 @@ import CredentialsProvider from "next-auth/providers/credentials";
 import { bumpSessionVersion } from "@/db/queries/users";
 import { authenticate, SignInError, type SignedInUser } from "./sign-in";
 import { clientAddress } from "./client-address";
+import { safeCallbackPath } from "./callback-path";
 import type { Role } from "@/lib/permissions";
 
 /** Shown on the sign-in form when the database (or anything else) fails; the cause goes to the log. */
@@ -29,6 +30,10 @@ export const authOptions: NextAuthOptions = {
     }),
   ],
   callbacks: {
+    // After sign-in next-auth goes to the callbackUrl only when it is a page of this app (lib/auth/callback-path.ts).
+    async redirect({ url, baseUrl }) {
+      return baseUrl + (safeCallbackPath(url, baseUrl) ?? "/projects");
+    },
     async jwt({ token, user }) {
       if (user) {
         const signedIn = user as unknown as SignedInUser;

@@ -1,9 +1,12 @@
 import "server-only";
 import { getServerSession } from "next-auth";
+import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { fetchSessionState } from "@/db/queries/users";
 import { authOptions } from "./options";
 import { unauthorized } from "@/lib/api/errors";
+import { REQUEST_PATH_HEADER } from "@/lib/api/request-path";
+import { signInPathFor } from "./callback-path";
 import type { Role } from "@/lib/permissions";
 
 export interface SessionUser {
@@ -37,9 +40,12 @@ export async function requireUser(): Promise<SessionUser> {
   return user;
 }
 
-/** For pages: no session sends the visitor to sign in. */
+/**
+ * For pages: no session sends the visitor to sign in, with the page they asked for as the callbackUrl,
+ * so a link from a mail brings them back to its item (proxy.ts passes the path on).
+ */
 export async function requirePageUser(): Promise<SessionUser> {
   const user = await getSessionUser();
-  if (!user) redirect("/sign-in");
+  if (!user) redirect(signInPathFor((await headers()).get(REQUEST_PATH_HEADER)));
   return user;
 }

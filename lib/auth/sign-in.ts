@@ -1,6 +1,6 @@
 import "server-only";
 import { z } from "zod";
-import { fetchUserByEmail } from "@/db/queries/users";
+import { fetchUserByEmail, recordSignIn } from "@/db/queries/users";
 import { bookCheckSlot, countSignInAttempt, takeBackSignInAttempt } from "@/db/queries/sign-in-counters";
 import { DUMMY_HASH, verifyPassword } from "./password";
 import { attemptKeys, decideThrottle, LOCK_MINUTES, SLOW_PATH_MAX_WAIT_MS, SLOW_PATH_SPACING_MS } from "./throttle";
@@ -8,6 +8,9 @@ import type { Role } from "@/lib/permissions";
 
 /** The one message for every failed sign-in: it never says whether the account exists. */
 export const SIGN_IN_FAILED = "The e-mail or password is not right.";
+
+/** Said only after the right password, so it tells nothing to someone guessing. */
+export const SIGN_IN_DEACTIVATED = "This account is deactivated. Ask your administrator to reactivate it.";
 
 const BUSY = "Sign-in for this e-mail is being tried very often just now. Try again in a minute.";
 
@@ -60,8 +63,10 @@ export async function authenticate(raw: unknown, clientAddress: string): Promise
 
   const user = await fetchUserByEmail(email);
   const ok = await verifyPassword(password, user?.password_hash ?? DUMMY_HASH);
-  if (!user || !ok || !user.active) throw new SignInError(SIGN_IN_FAILED);
+  if (!user || !ok) throw new SignInError(SIGN_IN_FAILED);
+  if (!user.active) throw new SignInError(SIGN_IN_DEACTIVATED);
   await takeBackSignInAttempt(Object.values(keys));
+  await recordSignIn(user.id);
   return {
     id: String(user.id),
     email: user.email,

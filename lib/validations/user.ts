@@ -41,3 +41,15 @@ export const updateUserAccessSchema = z
     path: ["_"],
     message: "Send a role, an active flag or unlockSignIn.",
   });
+
+/** Setting a password from a mailed reset link: the same password rule as everywhere else. */
+export const resetPasswordSchema = z
+  .object({
+    token: z.string().min(20, "The link is incomplete.").max(200, "The link is not valid."),
+    newPassword: passwordRule,
+    confirmPassword: z.string(),
+  })
+  .refine((v) => v.newPassword === v.confirmPassword, {
+    path: ["confirmPassword"],
+    message: "The two new passwords differ.",
+  });

@@ -76,3 +76,26 @@ describe("colour contrast of the main pages (axe-core, WCAG 2.1 AA)", () => {
     expect(found).toEqual({});
   });
 });
+
+describe("colour contrast of the people and sign-in pages (axe-core, WCAG 2.1 AA)", () => {
+  test("people, mail log, account and the sign-in form with its messages have no contrast failures", async () => {
+    const found: Record<string, string[]> = {};
+    const anonymous = await browser.newPage();
+    await anonymous.goto(appUrl("/sign-in"));
+    await anonymous.getByRole("button", { name: "Sign in" }).click();
+    await anonymous.locator(".field-error").first().waitFor();
+    const signInProblems = await contrastProblems(anonymous);
+    if (signInProblems.length) found["/sign-in (empty form)"] = signInProblems;
+    await anonymous.close();
+
+    const page = await browser.newPage({ viewport: { width: 1400, height: 1000 } });
+    await signInAs(page, "admin@scarpline.test");
+    for (const path of ["/admin/users", "/admin/mail", "/account"]) {
+      await page.goto(appUrl(path));
+      await page.waitForLoadState("networkidle");
+      const problems = await contrastProblems(page);
+      if (problems.length) found[path] = problems;
+    }
+    expect(found).toEqual({});
+  });
+});

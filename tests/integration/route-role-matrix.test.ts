@@ -30,11 +30,14 @@ const MATRIX: Record<string, Gate> = {
   "GET /api/account/notifications": SIGNED_IN,
   "PUT /api/account/notifications": SIGNED_IN,
   "POST /api/account/password": SIGNED_IN,
+  "DELETE /api/account/sessions": SIGNED_IN,
+  "POST /api/password-reset": PUBLIC,
   "GET /api/projects": SIGNED_IN,
   "POST /api/projects": org("projects.create"),
   "GET /api/users": org("users.manage"),
   "POST /api/users": org("users.manage"),
   "PATCH /api/users/[userId]": org("users.manage"),
+  "POST /api/users/[userId]/password-reset": org("users.manage"),
   "GET /api/admin/mail": org("mail.view"),
   [`GET ${P}`]: project("project.view"),
   [`GET ${P}/design`]: project("project.view"),
@@ -220,7 +223,10 @@ describe("route × role matrix", () => {
   test("each role gets exactly what the permission matrix grants on every route, and never a 500", async () => {
     const wrong: string[] = [];
     let calls = 0;
-    for (const key of Object.keys(MATRIX).filter((k) => k !== "POST /api/auth/[...nextauth]")) {
+    // Signing out everywhere ends the caller's sessions, so it is called last.
+    const ENDS_SESSIONS = "DELETE /api/account/sessions";
+    const keys = Object.keys(MATRIX).filter((k) => k !== "POST /api/auth/[...nextauth]" && k !== ENDS_SESSIONS);
+    for (const key of [...keys, ENDS_SESSIONS]) {
       const method = key.split(" ")[0];
       const url = urlFor(key);
       for (const c of callers) {

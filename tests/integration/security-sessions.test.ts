@@ -65,12 +65,18 @@ describe("sessions end when they should (issue 12, item 6)", () => {
     expect((await asCookie(after, "/api/projects")).status).toBe(401);
   });
 
-  test("only an administrator changes roles, and not their own", async () => {
+  test("only an administrator changes roles, and the last active administrator keeps the seat", async () => {
     const id = await newUser("notadmin@scarpline.test");
     const engineer = await signedIn("engineer@scarpline.test");
     expect((await engineer.request(`/api/users/${id}`, { method: "PATCH", json: { role: "admin" } })).status).toBe(403);
     const admin = await signedIn("admin@scarpline.test");
     const me = (await (await admin.request("/api/auth/session")).json()).user.id as number;
-    expect((await admin.request(`/api/users/${me}`, { method: "PATCH", json: { active: false } })).status).toBe(400);
+    // The demo organisation has one administrator: deactivating or demoting them would leave nobody to manage people.
+    for (const json of [{ active: false }, { role: "engineer" }]) {
+      const refused = await admin.request(`/api/users/${me}`, { method: "PATCH", json });
+      expect(refused.status).toBe(409);
+      expect((await refused.json()).error.code).toBe("last_admin");
+    }
+    expect((await admin.request("/api/projects")).status).toBe(200);
   });
 });

@@ -5,6 +5,7 @@ import { fetchNoticePreferences } from "@/db/queries/notifications";
 import { PageTitle } from "@/components/ui/page-title";
 import { PasswordForm } from "@/components/account/password-form";
 import { NotificationPrefs } from "@/components/account/notification-prefs";
+import { SignOutEverywhere } from "@/components/account/sign-out-everywhere";
 
 export const metadata: Metadata = { title: "Account" };
 
@@ -26,7 +27,10 @@ export default async function AccountPage() {
           </dl>
           <NotificationPrefs initial={notices} />
         </div>
-        <PasswordForm />
+        <div className="space-y-6 self-start">
+          <PasswordForm />
+          <SignOutEverywhere />
+        </div>
       </div>
     </>
   );

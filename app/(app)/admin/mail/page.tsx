@@ -1,7 +1,7 @@
 import path from "node:path";
 import type { Metadata } from "next";
 import { requirePageUser } from "@/lib/auth/session";
-import { can } from "@/lib/permissions";
+import { requirePagePermission } from "@/lib/auth/page-access";
 import { readServerEnv } from "@/lib/env";
 import { listCaughtMail } from "@/lib/mail/caught-mail";
 import { PageTitle } from "@/components/ui/page-title";
@@ -13,16 +13,7 @@ export const dynamic = "force-dynamic";
 /** What the local fake SMTP server caught: the notices as their recipients would read them. */
 export default async function MailLogPage() {
   const user = await requirePageUser();
-  if (!can(user.role, "mail.view")) {
-    return (
-      <div className="panel p-6" data-testid="forbidden">
-        <h1 className="text-lg font-semibold">Administrators only</h1>
-        <p className="mt-1 text-sm text-ink-soft">
-          The mail log shows every notice the app sent; ask your administrator.
-        </p>
-      </div>
-    );
-  }
+  requirePagePermission(user.role, "mail.view");
   const folder = path.resolve(process.cwd(), readServerEnv().SMTP_MAIL_DIR);
   const messages = await listCaughtMail(folder);
   return (

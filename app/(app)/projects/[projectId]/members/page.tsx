@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requirePageUser } from "@/lib/auth/session";
 import { findProjectAccess } from "@/lib/projects/access";
-import { can } from "@/lib/permissions";
+import { requirePagePermission } from "@/lib/auth/page-access";
 import { fetchProjectMembers } from "@/db/queries/projects";
 import { fetchUsersOfOrganisation } from "@/db/queries/users";
 import { PageTitle } from "@/components/ui/page-title";
@@ -16,14 +16,7 @@ export default async function MembersPage({ params }: { params: Promise<{ projec
   const user = await requirePageUser();
   const access = await findProjectAccess(user, pageId((await params).projectId));
   if (!access) notFound();
-  if (!can(access.role, "members.manage")) {
-    return (
-      <div className="panel p-6" data-testid="forbidden">
-        <h1 className="text-lg font-semibold">Administrators only</h1>
-        <p className="mt-1 text-sm text-ink-soft">Only an administrator changes who works on a project.</p>
-      </div>
-    );
-  }
+  requirePagePermission(access.role, "members.manage");
   const [members, users] = await Promise.all([
     fetchProjectMembers(access.project.id),
     fetchUsersOfOrganisation(user.organisationId),
