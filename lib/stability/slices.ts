@@ -10,6 +10,8 @@ import * as cases from "./load-cases";
 import type { PreparedSection } from "./prepare";
 import type { Scratch } from "./scratch";
 import * as status from "./status";
+import { addBishopRow, clearBishop } from "./methods/bishop";
+import { rawNormal } from "./methods/ordinary";
 import { findStrip } from "./strip-table";
 import { addFaceThrust } from "./vertical-faces";
 
@@ -164,8 +166,11 @@ function offerBreak(
 }
 
 /**
- * Builds the slices of mass [xA, xB] of circle (xc, yc, r) sliding in direction dir.
- * @returns a status code; on OK, S.n slices are filled and S.depth is the mass thickness (m).
+ * Builds the slices of mass [xA, xB] of circle (xc, yc, r) sliding in direction dir, and as it
+ * goes the mass's driving term S.D (with S.gross), the ordinary method's resisting term S.resO
+ * (S.negO) and the Bishop table, so that a search never reads the slices back. With `keep` every
+ * per-slice array of S is written too, for a report or a staged drawdown that reads them.
+ * @returns a status code; on OK, S.n slices are counted and S.depth is the mass thickness (m).
  */
 export function buildSlices(
   P: PreparedSection,
@@ -176,6 +181,7 @@ export function buildSlices(
   xA: number,
   xB: number,
   dir: number,
+  keep: boolean,
 ): number {
   const nk = collectBreaks(P, S, xc, yc, r, xA, xB);
   if (nk < 0) return TOO_MANY_BREAKS;
@@ -187,6 +193,8 @@ export function buildSlices(
   const T = P.table;
   const M = P.mat;
   const r2 = r * r;
+  const invR = 1 / r;
+  const invR2 = 1 / r2;
   const gw = P.gammaW;
   const line = P.waterKind === 1;
   const ruMode = P.waterKind === 2;
@@ -205,6 +213,14 @@ export function buildSlices(
   let n = 0;
   let depth = 0;
   let weightless = -1;
+  const hasFaces = P.hasFaces;
+  const eff = P.ordinaryForm === 1;
+  const BT = S.bishop;
+  clearBishop(BT);
+  let D = 0;
+  let gross = 0;
+  let resO = 0;
+  let negO = 0;
   // The arc at the left side of the next slice (offset d from the centre, half-height √(R² − d²)),
   // carried over from slice to slice.
   let dPrev = kept[0] - xc;
@@ -226,12 +242,12 @@ export function buildSlices(
       const sNext = Math.sqrt(Math.max(0, r2 - dNext * dNext));
       // The angle the slice's arc subtends, from its sine and cosine (no asin per boundary):
       // a short series for the usual thin slice, atan2 for a wide one.
-      const sinD = (dNext * sPrev - dPrev * sNext) / r2;
+      const sinD = (dNext * sPrev - dPrev * sNext) * invR2;
       let dTheta: number;
       if (sinD < 0.1) {
         const z2 = sinD * sinD;
         dTheta = sinD * (1 + z2 * (1 / 6 + z2 * (3 / 40 + z2 * (5 / 112 + z2 * (35 / 1152)))));
-      } else dTheta = Math.atan2(sinD, (sNext * sPrev + dNext * dPrev) / r2);
+      } else dTheta = Math.atan2(sinD, (sNext * sPrev + dNext * dPrev) * invR2);
       // Exact arc length R·Δθ, and the area between the arc and its midpoint height (≤ 0):
       // ∫√(R² − d²) dd over the slice is ½(d·√(R² − d²))|ends + ½R²·Δθ.
       const arcLen = r * dTheta;
@@ -246,14 +262,16 @@ export function buildSlices(
       let wsum = 0;
       let wy = 0;
       let gBase = 0;
+      let bot = 0;
       let baseMat = layerMat[e - 1];
-      for (let li = o; li < e; li++) {
-        const top = lineA[li] + lineB[li] * xm;
+      // Each layer's top is the bottom of the one above: one line evaluated per layer.
+      let top = yg;
+      for (let li = o; li < e; li++, top = bot) {
         if (top <= ym) {
           baseMat = li > o ? layerMat[li - 1] : layerMat[o];
           break;
         }
-        const bot = lineA[li + 1] + lineB[li + 1] * xm;
+        bot = lineA[li + 1] + lineB[li + 1] * xm;
         const mi = layerMat[li];
         const last = bot <= ym + 1e-9;
         const lowBot = last ? ym : bot;
@@ -284,8 +302,8 @@ export function buildSlices(
       if (kind === KIND_RIGID) return RIGID;
       // The weight uses the exact area above the arc; the base angle is the midpoint's.
       const W = wsum * b + gBase * areaCorr;
-      const sinA = (dir * (xc - xm)) / r;
-      const cosA = sm / r;
+      const sinA = dir * (xc - xm) * invR;
+      const cosA = sm * invR;
       dPrev = dNext;
       sPrev = sNext;
       // u is the base's mean pore pressure over its width: the exact area above the arc enters
@@ -330,28 +348,55 @@ export function buildSlices(
         c = M.c[baseMat];
         tp = M.tanPhi[baseMat];
       }
-      S.xL[n] = xl;
-      S.xR[n] = xr;
-      S.ym[n] = ym;
-      S.b[n] = b;
-      S.sinA[n] = sinA;
-      S.cosA[n] = cosA;
-      S.len[n] = arcLen;
-      S.bb[n] = arcLen * cosA;
-      S.W[n] = W;
-      S.Ww[n] = Ww;
-      S.Q[n] = Q;
-      S.V[n] = V;
-      S.Fw[n] = Fw;
-      S.Hs[n] = Hs;
-      S.u[n] = uEff;
-      S.uRaw[n] = u;
-      S.c[n] = c;
-      S.tanPhi[n] = tp;
-      S.mat[n] = baseMat;
-      S.Hn[n] = Fw + Hs;
-      S.dD[n] = V * sinA + dH / r;
-      if (P.hasFaces) addFaceThrust(P, S, n, ks, xl, xr, xc, yc, r, dir);
+      const bb = arcLen * cosA;
+      let Hn = Fw + Hs;
+      let dd = V * sinA + dH * invR;
+      if (keep) {
+        S.xL[n] = xl;
+        S.xR[n] = xr;
+        S.xm[n] = xm;
+        S.ym[n] = ym;
+        S.b[n] = b;
+        S.W[n] = W;
+        S.Ww[n] = Ww;
+        S.Q[n] = Q;
+        S.sinA[n] = sinA;
+        S.cosA[n] = cosA;
+        S.len[n] = arcLen;
+        S.bb[n] = bb;
+        S.V[n] = V;
+        S.Hs[n] = Hs;
+        S.u[n] = uEff;
+        S.uRaw[n] = u;
+        S.c[n] = c;
+        S.tanPhi[n] = tp;
+        S.mat[n] = baseMat;
+      }
+      if (hasFaces) {
+        S.Fw[n] = Fw;
+        S.Hn[n] = Hn;
+        S.dD[n] = dd;
+        addFaceThrust(P, S, n, ks, xl, xr, xc, yc, r, dir);
+        Hn = S.Hn[n];
+        dd = S.dD[n];
+      } else if (keep) {
+        S.Fw[n] = Fw;
+        S.Hn[n] = Hn;
+        S.dD[n] = dd;
+      }
+      // The mass's driving term and both methods' F-free sums, gathered while the slice is at hand.
+      D += dd;
+      gross += dd < 0 ? -dd : dd;
+      if (tp === 0) resO += c * arcLen;
+      else {
+        const Np = rawNormal(V, cosA, sinA, Hn, Hs, uEff, arcLen, bb, eff);
+        if (Np > 0) resO += c * arcLen + Np * tp;
+        else {
+          resO += c * arcLen;
+          negO++;
+        }
+      }
+      addBishopRow(BT, n, c, tp, bb, cosA, sinA, V, uEff, arcLen, xm);
       n++;
     }
   }
@@ -361,6 +406,10 @@ export function buildSlices(
   }
   S.n = n;
   S.depth = depth;
+  S.D = D;
+  S.gross = gross;
+  S.resO = resO;
+  S.negO = negO;
   if (P.minDepth > 0 && depth < P.minDepth) return SHALLOW;
   return OK;
 }
