@@ -12,11 +12,11 @@ import type { Scratch } from "./scratch";
 import * as status from "./status";
 import { addBishopRow, clearBishop } from "./methods/bishop";
 import { rawNormal } from "./methods/ordinary";
+import { collectBreaks } from "./slice-breaks";
 import { findStrip } from "./strip-table";
 import { addFaceThrust } from "./vertical-faces";
 
 // Module-local copies: imported bindings are property reads on every use in the hot loop.
-const MERGE_FRACTION = defaults.MERGE_FRACTION;
 const SLICE_CAPACITY = defaults.SLICE_CAPACITY;
 const KIND_RIGID = cases.KIND_RIGID;
 const KIND_UNDRAINED = cases.KIND_UNDRAINED;
@@ -26,144 +26,6 @@ const RIGID = status.RIGID;
 const RIGID_NO_WEIGHT = status.RIGID_NO_WEIGHT;
 const SHALLOW = status.SHALLOW;
 const TOO_MANY_BREAKS = status.TOO_MANY_BREAKS;
-
-/**
- * Streaming state of the break merge: [the last break seen, a vertex waiting on its right
- * neighbour (NaN when none), 1 if that vertex is clear of its left neighbour].
- */
-const merge = new Float64Array(3);
-
-/**
- * Collects the slice boundaries of mass [xA, xB] into S.kept (docs/engine.md §3). Hard
- * breaks (the ends, arc crossings of material boundaries and water lines, ground corners)
- * are all kept, merged only when closer than max(0.1 mm, 1e-7·R). Any other vertex of the ground
- * or of a layer is kept only when both its neighbours lie at least MERGE_FRACTION of a
- * nominal slice width away; otherwise the slices run across it. The rule looks at both
- * neighbours, so it is the same read left to right or right to left (mirror invariance),
- * and a survey of thousands of vertices cuts about as many slices as its outline.
- * @returns how many breaks are kept (−1 if a buffer would overflow)
- */
-function collectBreaks(
-  P: PreparedSection,
-  S: Scratch,
-  xc: number,
-  yc: number,
-  r: number,
-  xA: number,
-  xB: number,
-): number {
-  const T = P.table;
-  const brk = S.brk;
-  const kept = S.kept;
-  const cap = kept.length - 2;
-  const r2 = r * r;
-  const line = P.waterKind === 1;
-  const extraA = P.extraWaterA;
-  const extraB = P.extraWaterB;
-  const sharp = P.sharp;
-  const tolHard = 1e-7 * r > 1e-4 ? 1e-7 * r : 1e-4;
-  const tolSoft = (MERGE_FRACTION * (xB - xA)) / P.slices;
-  let nk = 0;
-  kept[nk++] = xA;
-  merge[0] = xA;
-  merge[1] = NaN;
-  let k = findStrip(T, xA);
-  for (;;) {
-    const x0 = T.xs[k] > xA ? T.xs[k] : xA;
-    const x1 = T.xs[k + 1] < xB ? T.xs[k + 1] : xB;
-    let nb = 0;
-    const o = T.lineOff[k];
-    const e = T.lineOff[k + 1];
-    const last = extraA === null ? e : e + 1;
-    // Arc crossings with material boundaries, the base, the water line and the other stage's line.
-    for (let i = o; i <= last; i++) {
-      let a: number;
-      let b: number;
-      if (i < e) {
-        if (T.lineBreak[i] === 0) continue;
-        a = T.lineA[i];
-        b = T.lineB[i];
-      } else if (i === e) {
-        if (!line) continue;
-        a = P.waterA[k];
-        b = P.waterB[k];
-      } else {
-        a = extraA![k];
-        b = extraB![k];
-      }
-      const qa = 1 + b * b;
-      const qb = b * (a - yc) - xc;
-      const qc = xc * xc + (a - yc) * (a - yc) - r2;
-      const disc = qb * qb - qa * qc;
-      if (disc <= 0) continue;
-      const sq = Math.sqrt(disc);
-      for (let s = -1; s <= 1; s += 2) {
-        const x = (-qb + s * sq) / qa;
-        if (x > x0 && x < x1 && a + b * x < yc) {
-          if (nb >= brk.length) return -1;
-          brk[nb++] = x;
-        }
-      }
-    }
-    for (let i = 1; i < nb; i++) {
-      const v = brk[i];
-      let j = i - 1;
-      while (j >= 0 && brk[j] > v) {
-        brk[j + 1] = brk[j];
-        j--;
-      }
-      brk[j + 1] = v;
-    }
-    for (let i = 0; i < nb; i++) {
-      nk = offerBreak(kept, nk, cap, brk[i], true, tolHard, tolSoft);
-      if (nk < 0) return -1;
-    }
-    if (x1 >= xB || k + 1 >= T.n) break;
-    // The strip's right end: a vertex, hard where the ground steps or turns sharply (a toe, a crest, a face).
-    nk = offerBreak(kept, nk, cap, x1, sharp[k + 1] !== 0, tolHard, tolSoft);
-    if (nk < 0) return -1;
-    k++;
-  }
-  nk = offerBreak(kept, nk, cap, xB, true, tolHard, tolSoft);
-  // The mass's far end closes the last slice; a hard break too close to it gives way.
-  if (nk > 0 && kept[nk - 1] !== xB) {
-    if (nk > 1) kept[nk - 1] = xB;
-    else kept[nk++] = xB;
-  }
-  return nk;
-}
-
-/** Offers the next break (x increasing) to the merge; returns the new kept count (−1 on overflow). */
-function offerBreak(
-  kept: Float64Array,
-  nk: number,
-  cap: number,
-  x: number,
-  hard: boolean,
-  tolHard: number,
-  tolSoft: number,
-): number {
-  const pending = merge[1];
-  if (pending === pending) {
-    // A vertex stays only when clear of both neighbours.
-    if (merge[2] === 1 && x - pending >= tolSoft) {
-      if (nk >= cap) return -1;
-      kept[nk++] = pending;
-    }
-    merge[1] = NaN;
-  }
-  if (hard) {
-    if (x - kept[nk - 1] >= tolHard) {
-      if (nk >= cap) return -1;
-      kept[nk++] = x;
-    }
-  } else {
-    merge[1] = x;
-    merge[2] = x - merge[0] >= tolSoft ? 1 : 0;
-  }
-  merge[0] = x;
-  return nk;
-}
 
 /**
  * Builds the slices of mass [xA, xB] of circle (xc, yc, r) sliding in direction dir, and as it
@@ -244,7 +106,11 @@ export function buildSlices(
       // a short series for the usual thin slice, atan2 for a wide one.
       const sinD = (dNext * sPrev - dPrev * sNext) * invR2;
       let dTheta: number;
-      if (sinD < 0.1) {
+      // Both series stop where the next term is below 3e-12 of the angle.
+      if (sinD < 0.02) {
+        const z2 = sinD * sinD;
+        dTheta = sinD * (1 + z2 * (1 / 6 + z2 * (3 / 40)));
+      } else if (sinD < 0.1) {
         const z2 = sinD * sinD;
         dTheta = sinD * (1 + z2 * (1 / 6 + z2 * (3 / 40 + z2 * (5 / 112 + z2 * (35 / 1152)))));
       } else dTheta = Math.atan2(sinD, (sNext * sPrev + dNext * dPrev) * invR2);
