@@ -45,6 +45,8 @@ export interface Scratch {
   nMass: number;
   brk: Float64Array;
   kept: Float64Array;
+  /** How many equal slices each kept interval is cut into. */
+  parts: Int32Array;
   /**
    * True when a one-circle report reads the slices back: then every per-slice array is written.
    * A search leaves them unwritten and reads only the sums and the Bishop table.
@@ -120,6 +122,7 @@ export function createScratch(detail = false): Scratch {
     detail,
     brk: new Float64Array(BREAK_CAP),
     kept: new Float64Array(BREAK_CAP),
+    parts: new Int32Array(BREAK_CAP),
     n: 0,
     xL: f(),
     xR: f(),

@@ -49,8 +49,13 @@ export function buildSlices(
   if (nk < 0) return TOO_MANY_BREAKS;
   const kept = S.kept;
   const bmax = (xB - xA) / P.slices;
+  const parts = S.parts;
   let total = 0;
-  for (let i = 1; i < nk; i++) total += Math.max(1, Math.ceil((kept[i] - kept[i - 1]) / bmax - 1e-9));
+  for (let i = 1; i < nk; i++) {
+    const m = Math.max(1, Math.ceil((kept[i] - kept[i - 1]) / bmax - 1e-9));
+    parts[i] = m;
+    total += m;
+  }
   if (total > SLICE_CAPACITY) return TOO_MANY_BREAKS;
   const T = P.table;
   const M = P.mat;
@@ -90,7 +95,7 @@ export function buildSlices(
   for (let i = 1; i < nk; i++) {
     const p = kept[i - 1];
     const q = kept[i];
-    const m = Math.max(1, Math.ceil((q - p) / bmax - 1e-9));
+    const m = parts[i];
     const w = (q - p) / m;
     for (let j = 0; j < m; j++) {
       const xl = p + j * w;
