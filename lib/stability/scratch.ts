@@ -48,8 +48,9 @@ export interface Scratch {
   /** How many equal slices each kept interval is cut into. */
   parts: Int32Array;
   /**
-   * True when a one-circle report reads the slices back: then every per-slice array is written.
-   * A search leaves them unwritten and reads only the sums and the Bishop table.
+   * True when something reads the slices back (a one-circle report, a method other than Bishop's
+   * and the ordinary one): then buildSlices writes every per-slice array. Otherwise a search
+   * leaves them unwritten and reads only the sums and the Bishop table the slice loop gathers.
    */
   detail: boolean;
   // Per slice (current mass)
