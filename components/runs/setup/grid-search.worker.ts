@@ -31,8 +31,11 @@ export type WorkerMessage =
 const ctx = self as unknown as DedicatedWorkerGlobalScope;
 const post = (m: WorkerMessage) => ctx.postMessage(m);
 
-/** A little over one animation frame: while the pointer moves, the next state arrives within it. */
-const SETTLE_MS = 24;
+/**
+ * How long the drawing must rest before the full set-up runs (ms): while a hand drags, the next
+ * state comes sooner than this, so a running full pass never holds up the next coarse answer.
+ */
+const SETTLE_MS = 150;
 /** The newest request received: a coarse pass's full search is dropped once a newer one came. */
 let newest: number | undefined;
 
