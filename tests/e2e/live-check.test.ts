@@ -141,8 +141,9 @@ describe("live check of a section", () => {
       const moved = await finalFs(page);
       expect(moved.bishop).not.toBe(before.bishop);
 
-      // The whole fill dragged 1 m downstream from inside it (clear of the phreatic line): its shared corners with the foundation and
-      // the drain go along, so the section stays whole and is searched as it moves.
+      // The whole fill dragged 1 m downstream from inside it (clear of the phreatic line): its shared
+      // corners with the foundation and the drain go along, so the section stays whole and is searched as
+      // it moves.
       const g1 = await generation();
       await dragWorld(page, [45, 10], [46, 10]);
       expect(await generation()).toBeGreaterThan(g1 + 1);
