@@ -5,9 +5,11 @@
  * centres × 10 radii, no refinement) so live mode searches that set-up, then drags the
  * downstream toe back and forth for 5 s in Chromium.
  * Latency: from the drawing changing to the answer for that state being shown (the badge's
- * data-latency-ms). Frame rate: animation frames the page painted during the drag.
+ * data-latency-ms; during a drag mostly the coarse pass's, docs/live-stability.md). Frame rate:
+ * animation frames the page painted during the drag. Also: from release to the final answer.
  * Prints figures only; the last line is `live_p95_ms=N`. SCARPLINE_SKIP_BUILD=1 reuses a build.
  */
+import os from "node:os";
 import { chromium, type Page } from "playwright-core";
 import { acquireStack, releaseStack } from "../tests/support/stack";
 import { quickSetup } from "../tests/support/runs";
@@ -109,8 +111,19 @@ async function main() {
       const fps = (b.frames * 1000) / (performance.now() - b.start);
       return { latencies: b.latencies, searches: b.searches, withFs: b.withFs, fps };
     })()`)) as { latencies: number[]; searches: number[]; withFs: number; fps: number };
+    const released = Date.now();
     await page.mouse.up();
     await badge.waitFor();
+    // The answers during the drag are mostly the coarse pass's ("settling"); the full set-up's final
+    // answer comes once the drawing rests.
+    await page.waitForFunction(() => {
+      const b = document.querySelector('[data-testid="live-badge"]');
+      return (
+        b?.getAttribute("data-state") === "final" &&
+        b.getAttribute("data-answered") === b.getAttribute("data-generation")
+      );
+    });
+    const toFinal = Date.now() - released;
 
     const l = stats.latencies;
     console.log(
@@ -126,6 +139,8 @@ async function main() {
     const sm = stats.searches;
     console.log(`search time in the worker ms: p50 ${pct(sm, 0.5).toFixed(1)}, p95 ${pct(sm, 0.95).toFixed(1)}`);
     console.log(`frame rate during the drag: ${stats.fps.toFixed(1)} per second`);
+    console.log(`from release to the final answer (full set-up): ${toFinal} ms`);
+    console.log(`machine load average (1 min): ${os.loadavg()[0].toFixed(2)} on ${os.cpus().length} cores`);
     console.log(`live_p95_ms=${Math.round(pct(l, 0.95))}`);
   } finally {
     await browser.close();

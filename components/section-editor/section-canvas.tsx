@@ -18,6 +18,7 @@ import { LiveGhostLayer } from "./layers/live-ghost-layer";
 import type { LiveGhost } from "@/lib/live/live-ghosts";
 import { OverlayLayer } from "./layers/overlay-layer";
 import { SectionLayer } from "./layers/section-layer";
+import { SurchargeLayer } from "./layers/surcharge-layer";
 import { CANVAS_COLORS } from "./palette";
 import { materialColorMap } from "@/lib/sections/material-palette";
 import type { EditorIssue, MaterialSwatch, ToolName } from "./types";
@@ -54,6 +55,7 @@ export default function SectionCanvas(props: SectionCanvasProps) {
     <Stage width={width} height={height} listening={false}>
       <GridLayer view={view} width={width} height={height} />
       <SectionLayer doc={doc} view={view} colorOf={colorOf} ground={props.ground} ponds={props.ponds} />
+      <SurchargeLayer doc={doc} view={view} ground={props.ground} />
       <OverlayLayer
         doc={doc}
         view={view}

@@ -11,6 +11,7 @@ import { setReservoirLevel, sideOf } from "@/lib/editor/reservoir-level";
 import { snapPoint, VERTEX_SNAP_PX, type SnapKind } from "@/lib/editor/snapping";
 import { screenToWorld, type ViewTransform } from "@/lib/editor/view-transform";
 import type { EditorActions, EditorContext } from "./editor-actions";
+import { dragPart, partMessage, pressRegion, pressSurcharge, type PartDrag } from "./part-drag";
 import type { CanvasPointer, ToolName } from "./types";
 
 /** Where the pointer is: raw and snapped (m), and whether it is over a vertex. */
@@ -51,7 +52,9 @@ type Gesture =
       startY: number;
       moved: boolean;
       result: SectionDocument | null;
-    };
+    }
+  // A whole region or a surcharge moved with the select tool (./part-drag.ts).
+  | PartDrag;
 
 /** Pixels the pointer must travel before a press on a vertex becomes a drag. */
 const DRAG_THRESHOLD_PX = 3;
@@ -65,8 +68,9 @@ function snapCandidates(doc: SectionDocument, draft: Draft | null, skip?: Point)
 }
 
 /**
- * Turns canvas pointer events into editor actions: selecting, dragging vertices (one undo
- * step per drag, committed on release), drawing, setting the reservoir, panning and zooming.
+ * Turns canvas pointer events into editor actions: selecting, dragging vertices, whole regions and
+ * surcharges (one undo step per drag, committed on release), drawing, setting the reservoir,
+ * panning and zooming.
  */
 export function useCanvasPointer(deps: PointerDeps): {
   handle(e: CanvasPointer): void;
@@ -93,6 +97,13 @@ export function useCanvasPointer(deps: PointerDeps): {
     if (g?.kind === "drag") {
       if (g.moved && g.result) d.commit(g.result);
       d.setPreview(null);
+    }
+    if (g?.kind === "part") {
+      d.setPreview(null);
+      if (g.moved && g.result) {
+        d.commit(g.result);
+        d.say(partMessage(g));
+      }
     }
     if (g?.kind === "pool") {
       d.setPreview(null);
@@ -150,8 +161,16 @@ export function useCanvasPointer(deps: PointerDeps): {
       }
       if (hitEdge(d.doc, { kind: "phreatic" }, view, e.sx, e.sy, EDGE_HIT_PX))
         return d.setSelection({ kind: "phreatic", vertex: null });
+      const load = pressSurcharge(d.doc, view, e.sx, e.sy);
+      if (load) {
+        d.setSelection(null);
+        d.say(`Surcharge ${load.index + 1}: drag it along the ground to move it.`);
+        if (!d.readOnly) start(load.drag);
+        return;
+      }
       const region = hitRegion(d.doc, screenToWorld(view, e.sx, e.sy));
       d.setSelection(region >= 0 ? { kind: "region", region, vertex: null } : null);
+      if (region >= 0 && !d.readOnly) start(pressRegion(region, view, e.sx, e.sy, e.altKey));
       return;
     }
     if (d.readOnly) return d.say("This section is read-only.");
@@ -183,6 +202,15 @@ export function useCanvasPointer(deps: PointerDeps): {
       gestureRef.current = r.ok ? { ...g, moved: true, y: s.point[1], result: r.doc } : { ...g, moved: true };
       if (r.ok) d.setPreview(r.doc);
       setHover({ world: s.world, snapped: s.point, snap: s.kind, overVertex: false });
+      return;
+    }
+    if (g?.kind === "part") {
+      const next = dragPart(g, d.doc, view, e.sx, e.sy, d.gridStep, e.altKey);
+      if (next === g) return;
+      gestureRef.current = next;
+      if (next.result) d.setPreview(next.result);
+      const w = screenToWorld(view, e.sx, e.sy);
+      setHover({ world: w, snapped: w, snap: "none", overVertex: false });
       return;
     }
     if (g?.kind === "drag") {

@@ -86,7 +86,7 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
   const v = validateSection(doc);
   if (!v.ok) return v;
   const P = prepareSection(v.section);
-  const S = createScratch();
+  const S = createScratch(true);
   const c: Circle = { xc: circle.xc, yc: circle.yc, r: circle.r };
   const warnings: EngineWarning[] = [...issuesToWarnings(v.warnings), ...P.warnings];
   const base = {

@@ -7,7 +7,6 @@
 import { arcY, isDriven, massDirection } from "./circle-direction";
 import { evaluateStagedCircle } from "./drawdown/staged-circle";
 import { bishopFactor } from "./methods/bishop";
-import { ordinaryFactor } from "./methods/ordinary";
 import { findMasses } from "./intersect";
 import type { PreparedSection } from "./prepare";
 import type { Scratch } from "./scratch";
@@ -23,7 +22,8 @@ export { arcY };
 
 /**
  * Slices mass m of the circle and computes its driving term; returns a status code.
- * On OK, S holds the slices, S.D the driving term (kN, may be ≤ 0) and S.gross Σ|terms|.
+ * On OK, S holds the slices, S.D the driving term (kN, may be ≤ 0), S.gross Σ|terms|, S.resO the
+ * ordinary method's resisting term and the Bishop table.
  */
 export function sliceMass(
   P: PreparedSection,
@@ -34,18 +34,7 @@ export function sliceMass(
   m: number,
   dir: number,
 ): number {
-  const st = buildSlices(P, S, xc, yc, r, S.massA[m], S.massB[m], dir);
-  if (st !== OK) return st;
-  let D = 0;
-  let gross = 0;
-  for (let i = 0; i < S.n; i++) {
-    const d = S.dD[i];
-    D += d;
-    gross += d < 0 ? -d : d;
-  }
-  S.D = D;
-  S.gross = gross;
-  return OK;
+  return buildSlices(P, S, xc, yc, r, S.massA[m], S.massB[m], dir, S.detail);
 }
 
 /**
@@ -98,7 +87,6 @@ function runMasses(P: PreparedSection, S: Scratch, xc: number, yc: number, r: nu
   let negO = 0;
   let iterations = 0;
   let driving = false;
-  const eff = P.ordinaryForm === 1;
   for (let m = 0; m < S.nMass; m++) {
     const d0 = massDirection(P, S, xc, yc, r, m);
     const tries = d0 === 0 ? 2 : 1;
@@ -107,8 +95,7 @@ function runMasses(P: PreparedSection, S: Scratch, xc: number, yc: number, r: nu
       const st = sliceMass(P, S, xc, yc, r, m, dir);
       if (st !== OK) return reject(S, st);
       const D = S.D;
-      // The ordinary method's resisting term at D = 1 is its numerator.
-      const res = ordinaryFactor(S, 1, eff);
+      const res = S.resO;
       if (!isDriven(D, S.gross, res)) continue;
       driving = true;
       const f0 = res / D;

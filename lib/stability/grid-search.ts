@@ -81,8 +81,10 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
   const grid = analysis.grid as Grid;
   const radii = analysis.radii as Radii;
   const P = prepareSection(v.section, analysis);
-  const S = createScratch();
   const methods = analysis.methods;
+  // Bishop's and the ordinary method read only the sums the slice loop gathers; any other method
+  // reads the slices back, so they are all written for it (Scratch.detail).
+  const S = createScratch(methods.some((m) => m !== "bishop" && m !== "fellenius"));
   const wantB = methods.includes("bishop");
   const xs = spaced(grid.x1, grid.x2, grid.nx);
   const ys = spaced(grid.y1, grid.y2, grid.ny);

@@ -10,11 +10,13 @@ import * as cases from "./load-cases";
 import type { PreparedSection } from "./prepare";
 import type { Scratch } from "./scratch";
 import * as status from "./status";
+import { addBishopRow, clearBishop } from "./methods/bishop";
+import { rawNormal } from "./methods/ordinary";
+import { collectBreaks } from "./slice-breaks";
 import { findStrip } from "./strip-table";
 import { addFaceThrust } from "./vertical-faces";
 
 // Module-local copies: imported bindings are property reads on every use in the hot loop.
-const MERGE_FRACTION = defaults.MERGE_FRACTION;
 const SLICE_CAPACITY = defaults.SLICE_CAPACITY;
 const KIND_RIGID = cases.KIND_RIGID;
 const KIND_UNDRAINED = cases.KIND_UNDRAINED;
@@ -26,146 +28,11 @@ const SHALLOW = status.SHALLOW;
 const TOO_MANY_BREAKS = status.TOO_MANY_BREAKS;
 
 /**
- * Streaming state of the break merge: [the last break seen, a vertex waiting on its right
- * neighbour (NaN when none), 1 if that vertex is clear of its left neighbour].
- */
-const merge = new Float64Array(3);
-
-/**
- * Collects the slice boundaries of mass [xA, xB] into S.kept (docs/engine.md §3). Hard
- * breaks (the ends, arc crossings of material boundaries and water lines, ground corners)
- * are all kept, merged only when closer than max(0.1 mm, 1e-7·R). Any other vertex of the ground
- * or of a layer is kept only when both its neighbours lie at least MERGE_FRACTION of a
- * nominal slice width away; otherwise the slices run across it. The rule looks at both
- * neighbours, so it is the same read left to right or right to left (mirror invariance),
- * and a survey of thousands of vertices cuts about as many slices as its outline.
- * @returns how many breaks are kept (−1 if a buffer would overflow)
- */
-function collectBreaks(
-  P: PreparedSection,
-  S: Scratch,
-  xc: number,
-  yc: number,
-  r: number,
-  xA: number,
-  xB: number,
-): number {
-  const T = P.table;
-  const brk = S.brk;
-  const kept = S.kept;
-  const cap = kept.length - 2;
-  const r2 = r * r;
-  const line = P.waterKind === 1;
-  const extraA = P.extraWaterA;
-  const extraB = P.extraWaterB;
-  const sharp = P.sharp;
-  const tolHard = 1e-7 * r > 1e-4 ? 1e-7 * r : 1e-4;
-  const tolSoft = (MERGE_FRACTION * (xB - xA)) / P.slices;
-  let nk = 0;
-  kept[nk++] = xA;
-  merge[0] = xA;
-  merge[1] = NaN;
-  let k = findStrip(T, xA);
-  for (;;) {
-    const x0 = T.xs[k] > xA ? T.xs[k] : xA;
-    const x1 = T.xs[k + 1] < xB ? T.xs[k + 1] : xB;
-    let nb = 0;
-    const o = T.lineOff[k];
-    const e = T.lineOff[k + 1];
-    const last = extraA === null ? e : e + 1;
-    // Arc crossings with material boundaries, the base, the water line and the other stage's line.
-    for (let i = o; i <= last; i++) {
-      let a: number;
-      let b: number;
-      if (i < e) {
-        if (T.lineBreak[i] === 0) continue;
-        a = T.lineA[i];
-        b = T.lineB[i];
-      } else if (i === e) {
-        if (!line) continue;
-        a = P.waterA[k];
-        b = P.waterB[k];
-      } else {
-        a = extraA![k];
-        b = extraB![k];
-      }
-      const qa = 1 + b * b;
-      const qb = b * (a - yc) - xc;
-      const qc = xc * xc + (a - yc) * (a - yc) - r2;
-      const disc = qb * qb - qa * qc;
-      if (disc <= 0) continue;
-      const sq = Math.sqrt(disc);
-      for (let s = -1; s <= 1; s += 2) {
-        const x = (-qb + s * sq) / qa;
-        if (x > x0 && x < x1 && a + b * x < yc) {
-          if (nb >= brk.length) return -1;
-          brk[nb++] = x;
-        }
-      }
-    }
-    for (let i = 1; i < nb; i++) {
-      const v = brk[i];
-      let j = i - 1;
-      while (j >= 0 && brk[j] > v) {
-        brk[j + 1] = brk[j];
-        j--;
-      }
-      brk[j + 1] = v;
-    }
-    for (let i = 0; i < nb; i++) {
-      nk = offerBreak(kept, nk, cap, brk[i], true, tolHard, tolSoft);
-      if (nk < 0) return -1;
-    }
-    if (x1 >= xB || k + 1 >= T.n) break;
-    // The strip's right end: a vertex, hard where the ground steps or turns sharply (a toe, a crest, a face).
-    nk = offerBreak(kept, nk, cap, x1, sharp[k + 1] !== 0, tolHard, tolSoft);
-    if (nk < 0) return -1;
-    k++;
-  }
-  nk = offerBreak(kept, nk, cap, xB, true, tolHard, tolSoft);
-  // The mass's far end closes the last slice; a hard break too close to it gives way.
-  if (nk > 0 && kept[nk - 1] !== xB) {
-    if (nk > 1) kept[nk - 1] = xB;
-    else kept[nk++] = xB;
-  }
-  return nk;
-}
-
-/** Offers the next break (x increasing) to the merge; returns the new kept count (−1 on overflow). */
-function offerBreak(
-  kept: Float64Array,
-  nk: number,
-  cap: number,
-  x: number,
-  hard: boolean,
-  tolHard: number,
-  tolSoft: number,
-): number {
-  const pending = merge[1];
-  if (pending === pending) {
-    // A vertex stays only when clear of both neighbours.
-    if (merge[2] === 1 && x - pending >= tolSoft) {
-      if (nk >= cap) return -1;
-      kept[nk++] = pending;
-    }
-    merge[1] = NaN;
-  }
-  if (hard) {
-    if (x - kept[nk - 1] >= tolHard) {
-      if (nk >= cap) return -1;
-      kept[nk++] = x;
-    }
-  } else {
-    merge[1] = x;
-    merge[2] = x - merge[0] >= tolSoft ? 1 : 0;
-  }
-  merge[0] = x;
-  return nk;
-}
-
-/**
- * Builds the slices of mass [xA, xB] of circle (xc, yc, r) sliding in direction dir.
- * @returns a status code; on OK, S.n slices are filled and S.depth is the mass thickness (m).
+ * Builds the slices of mass [xA, xB] of circle (xc, yc, r) sliding in direction dir, and as it
+ * goes the mass's driving term S.D (with S.gross), the ordinary method's resisting term S.resO
+ * (S.negO) and the Bishop table, so that a search never reads the slices back. With `keep` every
+ * per-slice array of S is written too, for a report or a staged drawdown that reads them.
+ * @returns a status code; on OK, S.n slices are counted and S.depth is the mass thickness (m).
  */
 export function buildSlices(
   P: PreparedSection,
@@ -176,17 +43,25 @@ export function buildSlices(
   xA: number,
   xB: number,
   dir: number,
+  keep: boolean,
 ): number {
   const nk = collectBreaks(P, S, xc, yc, r, xA, xB);
   if (nk < 0) return TOO_MANY_BREAKS;
   const kept = S.kept;
   const bmax = (xB - xA) / P.slices;
+  const parts = S.parts;
   let total = 0;
-  for (let i = 1; i < nk; i++) total += Math.max(1, Math.ceil((kept[i] - kept[i - 1]) / bmax - 1e-9));
+  for (let i = 1; i < nk; i++) {
+    const m = Math.max(1, Math.ceil((kept[i] - kept[i - 1]) / bmax - 1e-9));
+    parts[i] = m;
+    total += m;
+  }
   if (total > SLICE_CAPACITY) return TOO_MANY_BREAKS;
   const T = P.table;
   const M = P.mat;
   const r2 = r * r;
+  const invR = 1 / r;
+  const invR2 = 1 / r2;
   const gw = P.gammaW;
   const line = P.waterKind === 1;
   const ruMode = P.waterKind === 2;
@@ -205,6 +80,14 @@ export function buildSlices(
   let n = 0;
   let depth = 0;
   let weightless = -1;
+  const hasFaces = P.hasFaces;
+  const eff = P.ordinaryForm === 1;
+  const BT = S.bishop;
+  clearBishop(BT);
+  let D = 0;
+  let gross = 0;
+  let resO = 0;
+  let negO = 0;
   // The arc at the left side of the next slice (offset d from the centre, half-height √(R² − d²)),
   // carried over from slice to slice.
   let dPrev = kept[0] - xc;
@@ -212,7 +95,7 @@ export function buildSlices(
   for (let i = 1; i < nk; i++) {
     const p = kept[i - 1];
     const q = kept[i];
-    const m = Math.max(1, Math.ceil((q - p) / bmax - 1e-9));
+    const m = parts[i];
     const w = (q - p) / m;
     for (let j = 0; j < m; j++) {
       const xl = p + j * w;
@@ -226,12 +109,16 @@ export function buildSlices(
       const sNext = Math.sqrt(Math.max(0, r2 - dNext * dNext));
       // The angle the slice's arc subtends, from its sine and cosine (no asin per boundary):
       // a short series for the usual thin slice, atan2 for a wide one.
-      const sinD = (dNext * sPrev - dPrev * sNext) / r2;
+      const sinD = (dNext * sPrev - dPrev * sNext) * invR2;
       let dTheta: number;
-      if (sinD < 0.1) {
+      // Both series stop where the next term is below 3e-12 of the angle.
+      if (sinD < 0.02) {
+        const z2 = sinD * sinD;
+        dTheta = sinD * (1 + z2 * (1 / 6 + z2 * (3 / 40)));
+      } else if (sinD < 0.1) {
         const z2 = sinD * sinD;
         dTheta = sinD * (1 + z2 * (1 / 6 + z2 * (3 / 40 + z2 * (5 / 112 + z2 * (35 / 1152)))));
-      } else dTheta = Math.atan2(sinD, (sNext * sPrev + dNext * dPrev) / r2);
+      } else dTheta = Math.atan2(sinD, (sNext * sPrev + dNext * dPrev) * invR2);
       // Exact arc length R·Δθ, and the area between the arc and its midpoint height (≤ 0):
       // ∫√(R² − d²) dd over the slice is ½(d·√(R² − d²))|ends + ½R²·Δθ.
       const arcLen = r * dTheta;
@@ -246,14 +133,16 @@ export function buildSlices(
       let wsum = 0;
       let wy = 0;
       let gBase = 0;
+      let bot = 0;
       let baseMat = layerMat[e - 1];
-      for (let li = o; li < e; li++) {
-        const top = lineA[li] + lineB[li] * xm;
+      // Each layer's top is the bottom of the one above: one line evaluated per layer.
+      let top = yg;
+      for (let li = o; li < e; li++, top = bot) {
         if (top <= ym) {
           baseMat = li > o ? layerMat[li - 1] : layerMat[o];
           break;
         }
-        const bot = lineA[li + 1] + lineB[li + 1] * xm;
+        bot = lineA[li + 1] + lineB[li + 1] * xm;
         const mi = layerMat[li];
         const last = bot <= ym + 1e-9;
         const lowBot = last ? ym : bot;
@@ -284,8 +173,8 @@ export function buildSlices(
       if (kind === KIND_RIGID) return RIGID;
       // The weight uses the exact area above the arc; the base angle is the midpoint's.
       const W = wsum * b + gBase * areaCorr;
-      const sinA = (dir * (xc - xm)) / r;
-      const cosA = sm / r;
+      const sinA = dir * (xc - xm) * invR;
+      const cosA = sm * invR;
       dPrev = dNext;
       sPrev = sNext;
       // u is the base's mean pore pressure over its width: the exact area above the arc enters
@@ -330,28 +219,55 @@ export function buildSlices(
         c = M.c[baseMat];
         tp = M.tanPhi[baseMat];
       }
-      S.xL[n] = xl;
-      S.xR[n] = xr;
-      S.ym[n] = ym;
-      S.b[n] = b;
-      S.sinA[n] = sinA;
-      S.cosA[n] = cosA;
-      S.len[n] = arcLen;
-      S.bb[n] = arcLen * cosA;
-      S.W[n] = W;
-      S.Ww[n] = Ww;
-      S.Q[n] = Q;
-      S.V[n] = V;
-      S.Fw[n] = Fw;
-      S.Hs[n] = Hs;
-      S.u[n] = uEff;
-      S.uRaw[n] = u;
-      S.c[n] = c;
-      S.tanPhi[n] = tp;
-      S.mat[n] = baseMat;
-      S.Hn[n] = Fw + Hs;
-      S.dD[n] = V * sinA + dH / r;
-      if (P.hasFaces) addFaceThrust(P, S, n, ks, xl, xr, xc, yc, r, dir);
+      const bb = arcLen * cosA;
+      let Hn = Fw + Hs;
+      let dd = V * sinA + dH * invR;
+      if (keep) {
+        S.xL[n] = xl;
+        S.xR[n] = xr;
+        S.xm[n] = xm;
+        S.ym[n] = ym;
+        S.b[n] = b;
+        S.W[n] = W;
+        S.Ww[n] = Ww;
+        S.Q[n] = Q;
+        S.sinA[n] = sinA;
+        S.cosA[n] = cosA;
+        S.len[n] = arcLen;
+        S.bb[n] = bb;
+        S.V[n] = V;
+        S.Hs[n] = Hs;
+        S.u[n] = uEff;
+        S.uRaw[n] = u;
+        S.c[n] = c;
+        S.tanPhi[n] = tp;
+        S.mat[n] = baseMat;
+      }
+      if (hasFaces) {
+        S.Fw[n] = Fw;
+        S.Hn[n] = Hn;
+        S.dD[n] = dd;
+        addFaceThrust(P, S, n, ks, xl, xr, xc, yc, r, dir);
+        Hn = S.Hn[n];
+        dd = S.dD[n];
+      } else if (keep) {
+        S.Fw[n] = Fw;
+        S.Hn[n] = Hn;
+        S.dD[n] = dd;
+      }
+      // The mass's driving term and both methods' F-free sums, gathered while the slice is at hand.
+      D += dd;
+      gross += dd < 0 ? -dd : dd;
+      if (tp === 0) resO += c * arcLen;
+      else {
+        const Np = rawNormal(V, cosA, sinA, Hn, Hs, uEff, arcLen, bb, eff);
+        if (Np > 0) resO += c * arcLen + Np * tp;
+        else {
+          resO += c * arcLen;
+          negO++;
+        }
+      }
+      addBishopRow(BT, n, c, tp, bb, cosA, sinA, V, uEff, arcLen, xm);
       n++;
     }
   }
@@ -361,6 +277,10 @@ export function buildSlices(
   }
   S.n = n;
   S.depth = depth;
+  S.D = D;
+  S.gross = gross;
+  S.resO = resO;
+  S.negO = negO;
   if (P.minDepth > 0 && depth < P.minDepth) return SHALLOW;
   return OK;
 }

@@ -115,6 +115,45 @@ describe("live check of a section", () => {
     await page.close();
   });
 
+  test("live check follows a surcharge dragged along the crest and a whole region dragged", async () => {
+    const page = await browser.newPage({ viewport: { width: 1500, height: 1000 } });
+    const errors = watchConsole(page);
+    await keepScreenshotOnFailure(page, "live-parts", async () => {
+      const { origin, projectPath, api, demoDoc } = await copyOfDemo(page, "Live parts trial");
+      // A 30 kPa strip on the crest (x = 56…62 at 18 m): invented, as a construction load would stand there.
+      const loaded = { ...demoDoc, loads: { ...demoDoc.loads, surcharges: [{ x1: 56.5, x2: 59.5, q: 30 }] } };
+      const created = await page.request.post(`${api}/sections`, {
+        data: { name: `Live parts loaded ${Date.now()}`, document: loaded },
+      });
+      expect(created.status()).toBe(201);
+      const sectionId = (await created.json()).section.id as number;
+      await page.goto(`${origin}${projectPath}/sections/${sectionId}`);
+      await page.getByTestId("section-editor").waitFor();
+      await page.getByRole("button", { name: "Live check" }).click();
+      const before = await finalFs(page);
+      const badge = page.getByTestId("live-badge");
+      const generation = async () => Number(await badge.getAttribute("data-generation"));
+
+      // The band stands just above the crest; dragged to its downstream edge, the load moves over the slip mass.
+      const g0 = await generation();
+      await dragWorld(page, [58, 18.4], [60.5, 18.4]);
+      expect(await generation()).toBeGreaterThan(g0 + 1);
+      const moved = await finalFs(page);
+      expect(moved.bishop).not.toBe(before.bishop);
+
+      // The whole fill dragged 1 m downstream from inside it (clear of the phreatic line): its shared
+      // corners with the foundation and the drain go along, so the section stays whole and is searched as
+      // it moves.
+      const g1 = await generation();
+      await dragWorld(page, [45, 10], [46, 10]);
+      expect(await generation()).toBeGreaterThan(g1 + 1);
+      const dragged = await finalFs(page);
+      expect(dragged.bishop).toBeGreaterThan(0);
+      expect(errors).toEqual([]);
+    });
+    await page.close();
+  });
+
   test("the what-if panel gives the kept FS at the kept values, follows a slider, and resets", async () => {
     const page = await browser.newPage({ viewport: { width: 1500, height: 1100 } });
     const errors = watchConsole(page);

@@ -15,8 +15,9 @@ export interface LiveAnswer {
 
 /**
  * Re-runs the search whenever the document changes while `doc` is not null. Requests go out at
- * most once per animation frame; one long-lived worker runs them (see LiveScheduler for how
- * stale ones are dropped). A null document cancels: the worker is terminated and nothing shows.
+ * most once per animation frame; one long-lived worker runs them, a coarse pass first and the full
+ * set-up once the drawing rests (see LiveScheduler for how stale ones are dropped). A null
+ * document cancels: the worker is terminated and nothing shows.
  */
 export function useLiveSearch(doc: SectionDocument | null): LiveDisplay<LiveAnswer> {
   const [display, setDisplay] = useState<LiveDisplay<LiveAnswer>>({ state: "off" });
@@ -39,22 +40,25 @@ export function useLiveSearch(doc: SectionDocument | null): LiveDisplay<LiveAnsw
               w.onmessage = (e: MessageEvent<WorkerMessage>) => {
                 const m = e.data;
                 if (m.type === "progress" || m.id === undefined) return;
+                const full = m.type !== "done" || m.full !== false;
                 const at = changedAt.current.get(m.id) ?? performance.now();
-                // Requests displaced before they ran never answer; their clocks go with this one.
-                for (const id of changedAt.current.keys()) if (id <= m.id) changedAt.current.delete(id);
+                // Requests displaced before they ran never answer; their clocks go with this one,
+                // whose own clock stays until its full answer.
+                for (const id of changedAt.current.keys())
+                  if (id < m.id || (id === m.id && full)) changedAt.current.delete(id);
                 const outcome: LiveOutcome =
                   m.type === "done"
                     ? liveOutcome(m.result)
                     : { ghosts: [], problem: `The search stopped: ${m.message}`, circlesTried: 0 };
-                scheduler.current?.answer(m.id, {
-                  outcome,
-                  elapsedMs: m.type === "done" ? m.elapsedMs : 0,
-                  latencyMs: performance.now() - at,
-                });
+                scheduler.current?.answer(
+                  m.id,
+                  { outcome, elapsedMs: m.type === "done" ? m.elapsedMs : 0, latencyMs: performance.now() - at },
+                  full,
+                );
               };
               worker.current = w;
             }
-            worker.current.postMessage({ doc: request, id, progress: false });
+            worker.current.postMessage({ doc: request, id, progress: false, coarse: true });
           },
           stop() {
             worker.current?.terminate();

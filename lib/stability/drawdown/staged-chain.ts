@@ -10,7 +10,7 @@
  * give its τ2. Allocation-free; writes into the scratch.
  */
 import * as cases from "../load-cases";
-import { bishopFactor } from "../methods/bishop";
+import { bishopFactor, gatherBishop } from "../methods/bishop";
 import { ordinaryFactor, ordinaryNormal } from "../methods/ordinary";
 import type { PreparedSection } from "../prepare";
 import type { Scratch } from "../scratch";
@@ -52,7 +52,7 @@ export function stageMass(
   const pre = P.staged!.pre;
   gov.clearFactors(St.curO);
   gov.clearFactors(St.curB);
-  let st = buildSlices(pre, S, xc, yc, r, xA, xB, dir);
+  let st = buildSlices(pre, S, xc, yc, r, xA, xB, dir, true);
   if (st !== OK) return st;
   const n1 = S.n;
   let D1 = 0;
@@ -68,7 +68,7 @@ export function stageMass(
     St.curB.fs1 = f1b;
     if (!Number.isNaN(f1b)) consolidationStresses(P, S, f1b, true);
   }
-  st = buildSlices(P, S, xc, yc, r, xA, xB, dir);
+  st = buildSlices(P, S, xc, yc, r, xA, xB, dir, true);
   if (st !== OK) return st;
   // Both stages share the strip table and the break set, so the slices are the same.
   if (S.n !== n1) return TOO_MANY_BREAKS;
@@ -152,6 +152,7 @@ function runChain(P: PreparedSection, S: Scratch, D: number, bishop: boolean, ou
   }
   const eff = P.ordinaryForm === 1;
   const start = out.fs1 > 0 && Number.isFinite(out.fs1) ? out.fs1 : 1;
+  if (bishop) gatherBishop(S);
   const f2 = bishop ? bishopFactor(S, D, start) : ordinaryFactor(S, D, eff);
   out.fs2 = f2;
   out.final = f2;
@@ -181,6 +182,7 @@ function runChain(P: PreparedSection, S: Scratch, D: number, bishop: boolean, ou
   }
   out.switched = switched;
   if (switched === 0) return;
+  if (bishop) gatherBishop(S);
   const f3 = bishop ? bishopFactor(S, D, f2) : ordinaryFactor(S, D, eff);
   out.fs3 = f3;
   out.final = f3;

@@ -7,8 +7,13 @@
  * bisection on [0.05, 50] as a fallback. mα ≤ 0 on any slice at the solution makes the
  * result invalid; min mα is reported for the warning below 0.2 (Whitman & Bailey 1967).
  * A mass with no strength at all (c' = 0, φ' = 0 on every slice) has FS = 0 exactly.
+ *
+ * Speed (docs/engine.md §5): the slice terms that do not depend on F are written once per mass,
+ * as the slices are cut, into the scratch's Bishop table (frictional slices only; a base without
+ * friction adds the constant c'·l), so each pass of the iteration reads five numbers a slice and
+ * divides once.
  */
-import type { Scratch } from "../scratch";
+import type { BishopTable, Scratch } from "../scratch";
 import * as status from "../status";
 
 const M_ALPHA = status.M_ALPHA;
@@ -18,34 +23,100 @@ const OK = status.OK;
 const REL_TOL = 1e-6;
 const MAX_PASSES = 60;
 
-/** ΣSi at trial F over the slices in S; its derivative dΣSi/dF is left in `deriv[0]`. */
-const deriv = new Float64Array(1);
-function resisting(S: Scratch, F: number): number {
-  let sum = 0;
-  let dsum = 0;
-  const n = S.n;
-  const inv = 1 / F;
-  for (let i = 0; i < n; i++) {
-    const tp = S.tanPhi[i];
-    const c = S.c[i];
-    if (tp === 0) {
-      sum += c * S.len[i];
-      continue;
+/** Starts an empty Bishop table for the slices about to be cut or re-gathered. */
+export function clearBishop(T: BishopTable): void {
+  T.n = 0;
+  T.cohesive = 0;
+  T.strength = false;
+  T.flatCos = Infinity;
+  T.flatSin = NaN;
+  T.flatX = NaN;
+  T.flatAt = -1;
+}
+
+/**
+ * Adds slice i (base midpoint x = xm) to the Bishop table: a base without friction adds its
+ * constant c'·l, and is remembered when its mα = cos α is the lowest so far; a frictional one
+ * adds a row with the numerator c'·b + (V − u·b)·tan φ', sin α·tan φ', cos α, sin α, the two
+ * parts of the N' sign test (V − u·b)·cos α and c'·b·sin α, and c'·l. b is the base's
+ * horizontal width.
+ */
+export function addBishopRow(
+  T: BishopTable,
+  i: number,
+  c: number,
+  tp: number,
+  b: number,
+  cos: number,
+  sin: number,
+  V: number,
+  u: number,
+  len: number,
+  xm: number,
+): void {
+  if (tp === 0) {
+    if (c !== 0) T.strength = true;
+    T.cohesive += c * len;
+    if (cos < T.flatCos) {
+      T.flatCos = cos;
+      T.flatSin = sin;
+      T.flatX = xm;
+      T.flatAt = i;
     }
-    const b = S.bb[i];
-    const cos = S.cosA[i];
-    const t = S.sinA[i] * tp;
-    const p = S.V[i] - S.u[i] * b;
+    return;
+  }
+  T.strength = true;
+  const k = T.n;
+  const p = V - u * b;
+  T.idx[k] = i;
+  T.x[k] = xm;
+  T.sin[k] = sin;
+  T.num[k] = c * b + p * tp;
+  T.t[k] = sin * tp;
+  T.cos[k] = cos;
+  T.pCos[k] = p * cos;
+  T.cbSin[k] = c * b * sin;
+  T.cl[k] = c * len;
+  T.n = k + 1;
+}
+
+/**
+ * Refills the Bishop table from the slices in S, for callers that change the slices' strengths
+ * or pore pressures after cutting them (the staged drawdown's later stages).
+ */
+export function gatherBishop(S: Scratch): void {
+  const T = S.bishop;
+  clearBishop(T);
+  for (let i = 0; i < S.n; i++)
+    addBishopRow(T, i, S.c[i], S.tanPhi[i], S.bb[i], S.cosA[i], S.sinA[i], S.V[i], S.u[i], S.len[i], S.xm[i]);
+}
+
+/** ΣSi at trial F from the Bishop table plus the cohesive constant; dΣSi/dF is left in `deriv[0]`. */
+const deriv = new Float64Array(1);
+function resisting(S: Scratch, cohesive: number, F: number): number {
+  const T = S.bishop;
+  const num = T.num;
+  const tt = T.t;
+  const cs = T.cos;
+  const pCos = T.pCos;
+  const cbSin = T.cbSin;
+  const cl = T.cl;
+  const n = T.n;
+  const inv = 1 / F;
+  let sum = cohesive;
+  let dsum = 0;
+  for (let k = 0; k < n; k++) {
     // N' < 0 ⇔ (V − u·b)·cos α − c'·b·sin α/F < 0 while mα > 0.
-    if (p * cos - c * b * S.sinA[i] * inv < 0) sum += c * S.len[i];
+    if (pCos[k] - cbSin[k] * inv < 0) sum += cl[k];
     else {
-      const m = cos + t * inv;
-      const s = (c * b + p * tp) / m;
+      const t = tt[k];
+      const im = 1 / (cs[k] + t * inv);
+      const s = num[k] * im;
       sum += s;
-      dsum += (s * t * inv * inv) / m;
+      dsum += s * t * im;
     }
   }
-  deriv[0] = dsum;
+  deriv[0] = dsum * inv * inv;
   return sum;
 }
 
@@ -53,16 +124,18 @@ function resisting(S: Scratch, F: number): number {
  * Bishop factor of safety of the slices in S, starting from F0.
  * Solves F = ΣSi(F)/D by Newton steps on g(F) = F − ΣSi(F)/D (a plain fixed-point step
  * where Newton would misbehave) until |ΔF| ≤ 1e-6·F.
+ * Reads the Bishop table the slice loop fills (gatherBishop refills it after a change of strengths).
  * Sets S.fsB (NaN when invalid), S.reasonB, S.minMa (+ its x and α in degrees), S.negB and S.iterations.
  */
 export function bishopFactor(S: Scratch, D: number, F0: number): number {
-  if (noStrength(S)) return zeroStrength(S);
+  if (!S.bishop.strength) return zeroStrength(S);
+  const cohesive = S.bishop.cohesive;
   let F = F0 > 0 && Number.isFinite(F0) ? F0 : 1;
   let done = false;
   let it = 0;
   const invD = 1 / D;
   for (; it < MAX_PASSES; it++) {
-    const fixed = resisting(S, F) * invD;
+    const fixed = resisting(S, cohesive, F) * invD;
     const slope = 1 - deriv[0] * invD;
     let Fn = slope > 0.2 ? F - (F - fixed) / slope : fixed;
     if (!(Fn > 0)) Fn = fixed;
@@ -76,7 +149,7 @@ export function bishopFactor(S: Scratch, D: number, F0: number): number {
     F = Fn;
   }
   if (!done) {
-    const f = bisect(S, D);
+    const f = bisect(S, cohesive, D);
     if (!(f > 0)) {
       S.fsB = NaN;
       S.reasonB = NOT_CONVERGED;
@@ -89,25 +162,12 @@ export function bishopFactor(S: Scratch, D: number, F0: number): number {
   return finish(S, F);
 }
 
-/** True when no slice has any strength (c' = 0 and tan φ' = 0 everywhere): then FS = 0 exactly. */
-function noStrength(S: Scratch): boolean {
-  for (let i = 0; i < S.n; i++) if (S.c[i] !== 0 || S.tanPhi[i] !== 0) return false;
-  return true;
-}
-
 /** The result for a mass without strength: FS 0, mα = cos α (φ' = 0), every normal force as computed. */
 function zeroStrength(S: Scratch): number {
-  let minMa = Infinity;
-  let at = 0;
-  for (let i = 0; i < S.n; i++) {
-    if (S.cosA[i] < minMa) {
-      minMa = S.cosA[i];
-      at = i;
-    }
-  }
-  S.minMa = minMa;
-  S.minMaX = (S.xL[at] + S.xR[at]) / 2;
-  S.minMaAlpha = (Math.atan2(S.sinA[at], S.cosA[at]) * 180) / Math.PI;
+  const T = S.bishop;
+  S.minMa = T.flatCos;
+  S.minMaX = T.flatX;
+  S.minMaAlpha = (Math.atan2(T.flatSin, T.flatCos) * 180) / Math.PI;
   S.negB = 0;
   S.iterations = 0;
   S.fsB = 0;
@@ -115,23 +175,33 @@ function zeroStrength(S: Scratch): number {
   return 0;
 }
 
-/** Records mα and negative-normal counts at the solution F and checks mα > 0. */
+/**
+ * Records mα and negative-normal counts at the solution F and checks mα > 0. Among equal
+ * lowest mα the first slice is reported, as a left-to-right scan would find it.
+ */
 function finish(S: Scratch, F: number): number {
-  let minMa = Infinity;
-  let at = 0;
+  const T = S.bishop;
+  const inv = 1 / F;
+  let minMa = T.flatCos;
+  let at = T.flatAt;
+  let x = T.flatX;
+  let sin = T.flatSin;
+  let cos = T.flatCos;
   let neg = 0;
-  for (let i = 0; i < S.n; i++) {
-    const tp = S.tanPhi[i];
-    const ma = S.cosA[i] + (S.sinA[i] * tp) / F;
-    if (ma < minMa) {
+  for (let k = 0; k < T.n; k++) {
+    const ma = T.cos[k] + T.t[k] * inv;
+    if (ma < minMa || (ma === minMa && T.idx[k] < at)) {
       minMa = ma;
-      at = i;
+      at = T.idx[k];
+      x = T.x[k];
+      sin = T.sin[k];
+      cos = T.cos[k];
     }
-    if (tp !== 0 && (S.V[i] - S.u[i] * S.bb[i]) * S.cosA[i] - (S.c[i] * S.bb[i] * S.sinA[i]) / F < 0) neg++;
+    if (T.pCos[k] - T.cbSin[k] * inv < 0) neg++;
   }
   S.minMa = minMa;
-  S.minMaX = (S.xL[at] + S.xR[at]) / 2;
-  S.minMaAlpha = (Math.atan2(S.sinA[at], S.cosA[at]) * 180) / Math.PI;
+  S.minMaX = x;
+  S.minMaAlpha = (Math.atan2(sin, cos) * 180) / Math.PI;
   S.negB = neg;
   if (!(minMa > 0)) {
     S.fsB = NaN;
@@ -144,15 +214,16 @@ function finish(S: Scratch, F: number): number {
 }
 
 /** Fallback: bisection of g(F) = F − ΣSi(F)/D on the interval where every mα > 0. */
-function bisect(S: Scratch, D: number): number {
+function bisect(S: Scratch, cohesive: number, D: number): number {
+  const T = S.bishop;
   let lo = 0.05;
-  for (let i = 0; i < S.n; i++) {
-    const t = S.sinA[i] * S.tanPhi[i];
-    if (t < 0) lo = Math.max(lo, (-t / S.cosA[i]) * (1 + 1e-9));
+  for (let k = 0; k < T.n; k++) {
+    const t = T.t[k];
+    if (t < 0) lo = Math.max(lo, (-t / T.cos[k]) * (1 + 1e-9));
   }
   let hi = 50;
   if (lo >= hi) return NaN;
-  const g = (F: number) => F - resisting(S, F) / D;
+  const g = (F: number) => F - resisting(S, cohesive, F) / D;
   let glo = g(lo);
   const ghi = g(hi);
   if (!(glo * ghi <= 0)) return NaN;

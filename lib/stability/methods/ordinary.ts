@@ -24,9 +24,7 @@ export function ordinaryFactor(S: Scratch, D: number, effectiveWeight: boolean):
       res += S.c[i] * l;
       continue;
     }
-    const Np = effectiveWeight
-      ? (S.V[i] - S.u[i] * S.bb[i]) * S.cosA[i] - S.Hs[i] * S.sinA[i]
-      : S.V[i] * S.cosA[i] - S.Hn[i] * S.sinA[i] - S.u[i] * l;
+    const Np = rawNormal(S.V[i], S.cosA[i], S.sinA[i], S.Hn[i], S.Hs[i], S.u[i], l, S.bb[i], effectiveWeight);
     if (Np > 0) res += S.c[i] * l + Np * tp;
     else {
       res += S.c[i] * l;
@@ -37,10 +35,26 @@ export function ordinaryFactor(S: Scratch, D: number, effectiveWeight: boolean):
   return res / D;
 }
 
+/**
+ * Base normal force N' (kN/m) of one slice by the chosen form, before it is held at zero:
+ * the one place the ordinary method's normal is written (the slice loop sums it as it goes).
+ */
+export function rawNormal(
+  V: number,
+  cosA: number,
+  sinA: number,
+  Hn: number,
+  Hs: number,
+  u: number,
+  len: number,
+  bb: number,
+  effectiveWeight: boolean,
+): number {
+  return effectiveWeight ? (V - u * bb) * cosA - Hs * sinA : V * cosA - Hn * sinA - u * len;
+}
+
 /** Effective base normal force N' (kN/m) of slice i by the chosen form, not below zero. */
 export function ordinaryNormal(S: Scratch, i: number, effectiveWeight: boolean): number {
-  const Np = effectiveWeight
-    ? (S.V[i] - S.u[i] * S.bb[i]) * S.cosA[i] - S.Hs[i] * S.sinA[i]
-    : S.V[i] * S.cosA[i] - S.Hn[i] * S.sinA[i] - S.u[i] * S.len[i];
+  const Np = rawNormal(S.V[i], S.cosA[i], S.sinA[i], S.Hn[i], S.Hs[i], S.u[i], S.len[i], S.bb[i], effectiveWeight);
   return Np > 0 ? Np : 0;
 }

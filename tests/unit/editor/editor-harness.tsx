@@ -24,8 +24,15 @@ let latest: SectionDocument;
 export const latestDoc = (): SectionDocument => latest;
 export const changes = vi.fn();
 
-function Harness({ issues, readOnly }: { issues?: EditorIssue[]; readOnly?: boolean }) {
-  const [doc, setDoc] = useState<SectionDocument>(embankment);
+interface HarnessProps {
+  issues?: EditorIssue[];
+  readOnly?: boolean;
+  /** The document to start from (the two-region embankment when absent). */
+  start?: () => SectionDocument;
+}
+
+function Harness({ issues, readOnly, start = embankment }: HarnessProps) {
+  const [doc, setDoc] = useState<SectionDocument>(start);
   useEffect(() => {
     latest = doc;
   });
@@ -47,7 +54,7 @@ function Harness({ issues, readOnly }: { issues?: EditorIssue[]; readOnly?: bool
   );
 }
 
-export async function mount(props: { issues?: EditorIssue[]; readOnly?: boolean } = {}) {
+export async function mount(props: HarnessProps = {}) {
   await act(async () => root.render(<Harness {...props} />));
   // next/dynamic loads the konva module asynchronously; the first load takes a while.
   for (let i = 0; i < 100 && !container.querySelector("canvas"); i++) {

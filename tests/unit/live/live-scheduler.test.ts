@@ -9,6 +9,7 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import fc from "fast-check";
 import type { GridSearchSuccess, SectionDocument } from "@/lib/stability";
+import { coarseDocument } from "@/lib/live/coarse-pass";
 import { LiveScheduler, type LiveDisplay } from "@/lib/live/live-scheduler";
 import { searchRecord } from "@/lib/runs/record/search-record";
 
@@ -113,6 +114,93 @@ describe("LiveScheduler", () => {
         },
       ),
       { numRuns: 15 },
+    );
+  });
+});
+
+/**
+ * A runner that answers as the live worker does (components/runs/setup/grid-search.worker.ts):
+ * a coarse pass first (lib/live/coarse-pass.ts, answered as not full), then the full set-up unless
+ * a newer request started meanwhile; with `late` the full pass of an older request had already
+ * begun and still answers after the newer one's coarse answer.
+ */
+function coarseHarness(late = false) {
+  const shown: LiveDisplay<number>[] = [];
+  let newest = 0;
+  const s: LiveScheduler<SectionDocument, number> = new LiveScheduler<SectionDocument, number>(
+    {
+      start(id, doc) {
+        newest = id;
+        setTimeout(() => {
+          const c = coarseDocument(doc);
+          const r = searchRecord(c ?? doc);
+          s.answer(id, r.ok ? -(r.result as GridSearchSuccess).results.bishop!.fs : NaN, false);
+          setTimeout(
+            () => {
+              if (newest !== id && !late) return;
+              const f = searchRecord(doc);
+              s.answer(id, f.ok ? (f.result as GridSearchSuccess).results.bishop!.fs : NaN);
+            },
+            late ? 12 : 4,
+          );
+        }, 1);
+      },
+      stop() {},
+    },
+    (d) => shown.push(d),
+  );
+  return { s, shown, settle: () => new Promise((r) => setTimeout(r, 30)) };
+}
+
+/** A set-up big enough for a coarse pass (coarse answers carry −FS here, to tell them apart). */
+function bigger(phi: number): SectionDocument {
+  const d = withPhi(phi);
+  return {
+    ...d,
+    analysis: {
+      ...d.analysis!,
+      grid: { ...d.analysis!.grid!, nx: 12, ny: 12 },
+      radii: { tangentY1: 10, tangentY2: 1, n: 12 },
+    },
+  };
+}
+
+describe("LiveScheduler with a coarse pass first", () => {
+  it("shows the coarse answer as settling and the full set-up's answer as final", async () => {
+    const h = coarseHarness();
+    h.s.request(bigger(24));
+    for (let i = 0; i < 20 && h.shown.at(-1)?.state !== "final"; i++) await h.settle();
+    const coarse = h.shown.find((d) => d.state === "settling" && d.answered === 1);
+    expect(coarse && coarse.state === "settling" && coarse.result < 0).toBe(true);
+    const last = h.shown.at(-1)!;
+    expect(last.state).toBe("final");
+    const full = searchRecord(bigger(24));
+    if (last.state === "final" && full.ok) expect(Object.is(last.result, full.result.results.bishop!.fs)).toBe(true);
+  });
+
+  it("never leaves an older state's answer, or a coarse one, as the last shown (random bursts, late full passes)", async () => {
+    await fc.assert(
+      fc.asyncProperty(
+        fc.array(fc.integer({ min: 18, max: 30 }), { minLength: 1, maxLength: 5 }),
+        fc.boolean(),
+        async (phis, late) => {
+          const h = coarseHarness(late);
+          for (const [i, phi] of phis.entries()) {
+            h.s.request(bigger(phi));
+            if (i % 2 === 0) await new Promise((r) => setTimeout(r, 3));
+          }
+          for (let i = 0; i < 30 && (h.s.busy || h.shown.at(-1)?.state !== "final"); i++) await h.settle();
+          const last = h.shown.at(-1)!;
+          expect(last.state).toBe("final");
+          const full = searchRecord(bigger(phis.at(-1)!));
+          if (last.state === "final" && full.ok)
+            expect(Object.is(last.result, full.result.results.bishop!.fs)).toBe(true);
+          // Answers on screen never go back to an older state.
+          const answered = h.shown.flatMap((d) => (d.state === "settling" || d.state === "final" ? [d.answered] : []));
+          for (let i = 1; i < answered.length; i++) expect(answered[i]).toBeGreaterThanOrEqual(answered[i - 1]);
+        },
+      ),
+      { numRuns: 10 },
     );
   });
 });

@@ -5,7 +5,7 @@
  */
 import { describe, expect, test } from "vitest";
 import { infiniteSlopeFactor, infiniteSlopeUndrained } from "@/lib/stability";
-import { bishopFactor } from "@/lib/stability/methods/bishop";
+import { bishopFactor, gatherBishop } from "@/lib/stability/methods/bishop";
 import { ordinaryFactor } from "@/lib/stability/methods/ordinary";
 import { createScratch } from "@/lib/stability/scratch";
 import { circle, clone, expectRelative, loadFixture, search } from "./helpers";
@@ -65,8 +65,11 @@ describe("ordinaryFactor / bishopFactor on synthetic slices at α = β (docs/eng
       S.Hs[i] = 0;
       S.xL[i] = i;
       S.xR[i] = i + 1;
+      S.xm[i] = i + 0.5;
     }
     S.n = n;
+    // Slices written by hand, not cut by the slice loop: Bishop's table is gathered from them.
+    gatherBishop(S);
     let D = 0;
     for (let i = 0; i < n; i++) D += S.V[i] * S.sinA[i];
     return { S, D };
