@@ -13,7 +13,8 @@ import { DEFAULT_GRID_STEP } from "@/lib/editor/snapping";
 import { createEditorActions } from "./editor-actions";
 import { IssueList } from "./issue-list";
 import { SelectionPanel } from "./selection-panel";
-import { ShortcutHelp, StatusBar } from "./status-bar";
+import { ShortcutHelp } from "./shortcut-help";
+import { describeSelection, StatusBar } from "./status-bar";
 import { Toolbar } from "./toolbar";
 import type { CanvasPointer, SectionEditorProps, ToolName } from "./types";
 import { useCanvasPointer } from "./use-canvas-pointer";
@@ -77,6 +78,8 @@ export function SectionEditor({
   const [focusedIssue, setFocusedIssue] = useState<number | null>(null);
   const [newRegionMaterial, setNewRegionMaterial] = useState(materials[0]?.key ?? doc.materials[0]?.id ?? "");
   const containerRef = useRef<HTMLDivElement>(null);
+  const rootRef = useRef<HTMLDivElement>(null);
+  const [helpOpen, setHelpOpen] = useState(false);
   const commit = (next: SectionDocument) => history.commit(storeDrawnWater(stored, next, activeWater));
 
   // Undo or a deletion can leave the selection pointing past the end.
@@ -138,6 +141,20 @@ export function SectionEditor({
     zoomBy: (f) => view.zoomBy(f),
     fit: view.fit,
     readOnly,
+    doc,
+    helpOpen,
+    setHelpOpen,
+    openCoordinates: () => {
+      const vertex = selection?.vertex ?? 0;
+      if (selection && selection.vertex === null) setSelection({ ...selection, vertex });
+      // The table renders the row on the next frame when the selection has just changed.
+      requestAnimationFrame(() => {
+        const field = rootRef.current?.querySelector<HTMLInputElement>(`[data-testid='vertex-x-${vertex}']`);
+        field?.focus();
+        field?.select();
+      });
+    },
+    focusCanvas: () => containerRef.current?.focus(),
   });
   const pointer = useCanvasPointer({
     ...editing,
@@ -210,7 +227,13 @@ export function SectionEditor({
   const v = view.view;
 
   return (
-    <div data-testid="section-editor" className="flex flex-col gap-3" onKeyDown={keys.onKeyDown} onKeyUp={keys.onKeyUp}>
+    <div
+      ref={rootRef}
+      data-testid="section-editor"
+      className="flex flex-col gap-3"
+      onKeyDown={keys.onKeyDown}
+      onKeyUp={keys.onKeyUp}
+    >
       <Toolbar
         tool={tool}
         onTool={setTool}
@@ -246,8 +269,9 @@ export function SectionEditor({
               }
               tabIndex={0}
               role="application"
-              aria-label="Section drawing. Use the tool keys, arrows to move the selected vertex, plus and minus to zoom."
-              className="relative overflow-hidden rounded-lg"
+              aria-label="Section drawing. Tab chooses a region, arrows choose and move a vertex, Enter types its coordinates, question mark lists every key."
+              aria-describedby="editor-chosen"
+              className="relative overflow-hidden rounded-lg outline-none focus:ring-2 focus:ring-clay-600 focus:ring-offset-2"
               style={{ height, cursor }}
               onMouseDown={forward("down")}
               onMouseMove={forward("move")}
@@ -289,8 +313,13 @@ export function SectionEditor({
               keepLabel={live.keepLabel}
             />
           ) : null}
-          <StatusBar tool={tool} hover={pointer.hover} message={message} />
-          <ShortcutHelp />
+          <StatusBar
+            tool={tool}
+            hover={pointer.hover}
+            message={message}
+            chosen={describeSelection(doc, selection, materials)}
+          />
+          <ShortcutHelp open={helpOpen} onToggle={() => setHelpOpen(!helpOpen)} />
         </div>
         <aside className="flex w-full flex-col gap-3 lg:w-80" aria-label="Section details">
           <SelectionPanel

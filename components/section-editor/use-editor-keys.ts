@@ -3,13 +3,16 @@
 import { useRef, type KeyboardEvent } from "react";
 import type { Draft } from "@/lib/editor/drafts";
 import { dropLastDraftPoint } from "@/lib/editor/drafts";
+import { pickVertexToward, stepItem } from "@/lib/editor/keyboard-selection";
 import type { Selection } from "@/lib/editor/refs";
+import type { SectionDocument } from "@/lib/stability";
 import type { EditorActions } from "./editor-actions";
 import { toolByKey } from "./tools";
 import type { ToolName } from "./types";
 import { ZOOM_STEP } from "./use-view";
 
 interface KeyDeps {
+  doc: SectionDocument;
   actions: EditorActions;
   draft: Draft | null;
   setDraft(d: Draft | null): void;
@@ -22,6 +25,12 @@ interface KeyDeps {
   zoomBy(factor: number): void;
   fit(): void;
   readOnly: boolean;
+  /** Puts the keyboard in the coordinate fields of the selected vertex. */
+  openCoordinates(): void;
+  /** Gives the keyboard back to the drawing. */
+  focusCanvas(): void;
+  helpOpen: boolean;
+  setHelpOpen(open: boolean): void;
 }
 
 /** Keys typed into a field belong to the field, not to the drawing. */
@@ -29,6 +38,9 @@ function isTyping(target: EventTarget | null): boolean {
   if (!(target instanceof HTMLElement)) return false;
   return target.isContentEditable || ["INPUT", "SELECT", "TEXTAREA"].includes(target.tagName);
 }
+
+/** Shift with an arrow moves this many grid steps at once. */
+export const BIG_STEPS = 10;
 
 const ARROWS: Record<string, [number, number]> = {
   ArrowLeft: [-1, 0],
@@ -45,7 +57,26 @@ export function useEditorKeys(deps: KeyDeps) {
   const space = useRef(false);
 
   const onKeyDown = (e: KeyboardEvent<HTMLElement>) => {
-    if (isTyping(e.target)) return;
+    if (isTyping(e.target)) {
+      // Escape in a coordinate field goes back to the drawing, where the keyboard came from.
+      const inTable = e.target instanceof HTMLElement && e.target.closest("[data-testid='vertex-table']");
+      if (e.key === "Escape" && inTable) deps.focusCanvas();
+      return;
+    }
+    // "?" opens the shortcut list from anywhere in the editor; Escape closes it first.
+    if (e.key === "?") {
+      deps.setHelpOpen(!deps.helpOpen);
+      return e.preventDefault();
+    }
+    if (e.key === "Escape" && deps.helpOpen) {
+      deps.setHelpOpen(false);
+      return e.preventDefault();
+    }
+    // The drawing's own keys act only while the drawing has the focus; elsewhere Tab and the
+    // arrows keep their usual meaning.
+    if (!(e.target instanceof HTMLElement) || e.target.dataset.testid !== "editor-canvas") {
+      if (e.key === "Tab" || e.key in ARROWS) return;
+    }
     // Space and Enter on a focused button press the button.
     if ((e.key === " " || e.key === "Enter") && e.target instanceof HTMLButtonElement) return;
     const d = deps;
@@ -57,20 +88,28 @@ export function useEditorKeys(deps: KeyDeps) {
       else d.undo();
     } else if (mod && key.toLowerCase() === "y") d.redo();
     else if (mod || e.altKey) handled = false;
-    else if (key === " ") space.current = true;
+    else if (key === "Tab") {
+      // Tab walks regions then the phreatic line; off either end the focus moves on as usual.
+      const next = stepItem(d.doc, d.selection, e.shiftKey ? -1 : 1);
+      if (next === "leave") handled = false;
+      else d.setSelection(next === "clear" ? null : next);
+    } else if (key === " ") space.current = true;
     else if (key === "Escape") {
       if (d.draft) d.setDraft(null);
       else if (d.selection?.kind && d.selection.vertex !== null) d.setSelection({ ...d.selection, vertex: null });
       else if (d.selection) d.setSelection(null);
       else d.setTool("select");
-    } else if (key === "Enter") d.actions.finishDraft();
-    else if (key === "Delete" || key === "Backspace") {
+    } else if (key === "Enter") {
+      if (d.draft) d.actions.finishDraft();
+      else if (d.selection) d.openCoordinates();
+      else handled = false;
+    } else if (key === "Delete" || key === "Backspace") {
       if (d.draft) d.setDraft(d.draft.points.length > 1 ? dropLastDraftPoint(d.draft) : null);
       else d.actions.deleteSelection();
-    } else if (key in ARROWS && d.selection?.vertex != null) {
+    } else if (key in ARROWS && d.selection) {
       const [dx, dy] = ARROWS[key];
-      const times = e.shiftKey ? 10 : 1;
-      d.actions.nudge(dx * times, dy * times);
+      if (d.selection.vertex === null) d.setSelection(pickVertexToward(d.doc, d.selection, dx, dy));
+      else d.actions.nudge(dx * (e.shiftKey ? BIG_STEPS : 1), dy * (e.shiftKey ? BIG_STEPS : 1));
     } else if (key === "+" || key === "=") d.zoomBy(ZOOM_STEP);
     else if (key === "-" || key === "_") d.zoomBy(1 / ZOOM_STEP);
     else if (key === "f" || key === "F") d.fit();
@@ -92,14 +131,34 @@ export function useEditorKeys(deps: KeyDeps) {
   return { onKeyDown, onKeyUp, spaceHeld: () => space.current };
 }
 
-/** Shortcut list shown in the editor's help. */
-export const SHORTCUTS: readonly [string, string][] = [
-  ["S R W L H", "tools: select, region, water line, reservoir level, pan"],
-  ["Enter / Esc", "finish / drop a drawing; Esc also clears the selection"],
-  ["Delete", "delete the selected vertex (or region, or line)"],
-  ["Arrows", "move the selected vertex one snap step (Shift: ten)"],
-  ["[ ]", "previous / next vertex"],
-  ["I", "add a vertex after the selected one"],
-  ["+ − F", "zoom in, zoom out, fit"],
-  ["Ctrl+Z / Ctrl+Shift+Z", "undo / redo (Ctrl+Y also redoes)"],
+/** Shortcut list shown in the editor's help panel, grouped as a user looks for them. */
+export const SHORTCUTS: readonly { group: string; keys: readonly [string, string][] }[] = [
+  {
+    group: "Choosing",
+    keys: [
+      ["Tab / Shift+Tab", "next / previous region, then the phreatic line (the drawing must have the focus)"],
+      ["Arrows", "with a whole region or line chosen: pick its vertex furthest that way"],
+      ["[ ]", "previous / next vertex of the chosen region or line"],
+      ["Esc", "step back: vertex → region → nothing; also closes this list"],
+    ],
+  },
+  {
+    group: "Editing",
+    keys: [
+      ["Arrows", "move the chosen vertex one grid step (Shift: ten steps)"],
+      ["Enter", "type the chosen vertex's coordinates; Enter applies, Esc returns to the drawing"],
+      ["I", "add a vertex halfway along the edge after the chosen one"],
+      ["Delete", "delete the chosen vertex, or the whole region or line"],
+      ["Ctrl+Z / Ctrl+Shift+Z", "undo / redo (Ctrl+Y also redoes)"],
+    ],
+  },
+  {
+    group: "Drawing and view",
+    keys: [
+      ["S R W L H", "tools: select, draw region, draw phreatic line, reservoir level, pan"],
+      ["Enter / Esc", "while drawing: finish / drop the outline"],
+      ["+ − F", "zoom in, zoom out, fit the section"],
+      ["?", "show or hide this list"],
+    ],
+  },
 ];

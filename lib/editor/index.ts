@@ -11,3 +11,4 @@ export * from "./history";
 export * from "./issue-paths";
 export * from "./bounds";
 export * from "./drafts";
+export * from "./keyboard-selection";
