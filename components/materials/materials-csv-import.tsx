@@ -66,8 +66,10 @@ export function MaterialsCsvImport({ projectId, existingKeys, onImported }: Mate
         </CsvDownloadLink>
       </div>
       <p className="text-xs text-ink-faint">
-        Columns: {MATERIAL_COLUMNS.join(", ")}. Units: γ and γsat in kN/m³, c and su in kPa, φ in degrees, suGradient in
-        kPa/m, suDatum in m.
+        {/* The column names are the file's own spelling, so they are shown as code. */}
+        Columns: <code className="font-mono">{MATERIAL_COLUMNS.join(", ")}</code>. Units: γ and γsat in kN/m³, c and su
+        in kPa, φ in degrees, <code className="font-mono">suGradient</code> in kPa/m,{" "}
+        <code className="font-mono">suDatum</code> in m.
       </p>
       <CsvDropZone
         label="Drop a materials CSV here, or click to choose one"

@@ -1,5 +1,6 @@
 "use client";
 
+import { placeWords } from "@/lib/issue-words";
 import type { EditorIssue } from "./types";
 
 interface IssueListProps {
@@ -41,8 +42,8 @@ export function IssueList({ issues, focused, onPick }: IssueListProps) {
                       {i + 1}. {warning ? "Warning" : "Error"}
                     </span>
                     <span className="text-ink">{issue.message}</span>
-                    <span className="mt-0.5 block font-mono text-[10px] text-ink-faint">
-                      {issue.path || "section"}
+                    <span className="mt-0.5 block text-[11px] text-ink-faint">
+                      {placeWords(issue.path)}
                       {issue.at ? ` · at (${issue.at[0].toFixed(2)}, ${issue.at[1].toFixed(2)})` : ""}
                     </span>
                   </button>

@@ -17,7 +17,8 @@ import { drawSection } from "./section-drawing";
 import { waterUsedText } from "@/lib/runs/view/water-used";
 import { writeSliceTable } from "./slice-pages";
 import { VARIANT_TEXT, stageCells, stagedView } from "@/lib/runs/view/staged-view";
-import { formatCount, formatDateTime } from "@/lib/format";
+import { formatCount, formatDateTime, withUnit } from "@/lib/format";
+import { conditionWords, faceWords, MODEL_SHORT } from "@/lib/vocabulary";
 import { writeSensitivity, type ReportSensitivity } from "./sensitivity-section";
 
 export interface ReportInput {
@@ -118,10 +119,7 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
     ["Section", `${run.sectionName}, version ${run.sectionVersion}`],
     ["Run", `${run.title} (run ${run.id})${run.revisesRunId ? `, revising run ${run.revisesRunId}` : ""}`],
     ["Analysed by", `${run.authorName}, ${day(run.createdAt)}, engine ${run.engineVersion}`],
-    [
-      "Loading condition",
-      `${condition?.label ?? run.loadingCondition} (engine case: ${run.result.case}), ${run.face} face`,
-    ],
+    ["Loading condition", `${condition?.label ?? conditionWords(run.loadingCondition)}, ${faceWords(run.face, true)}`],
     [
       "Required FS",
       `${run.requiredFs.toFixed(2)}${condition ? ` — default from ${condition.basis}; the project may have set its own value` : ""}`,
@@ -225,6 +223,8 @@ function writeResults(w: ReportWriter, input: ReportInput): void {
     );
 }
 
+const modelShort = (model: string) => (MODEL_SHORT as Record<string, string>)[model] ?? model;
+
 function materialRemark(model: string): string {
   return model === "impenetrable"
     ? "no slip surface may enter it; no strength is used"
@@ -281,12 +281,13 @@ function writeMaterials(w: ReportWriter, input: ReportInput): void {
   const rows: string[][] = [];
   for (const m of input.materials) {
     // An impenetrable layer often has no number at all, yet it bounds every slip surface: list it anyway.
-    if (m.parameters.length === 0) rows.push([`${m.name} (${m.key})`, m.model, "—", materialRemark(m.model)]);
+    if (m.parameters.length === 0)
+      rows.push([`${m.name} (${m.key})`, modelShort(m.model), "—", materialRemark(m.model)]);
     m.parameters.forEach((p, i) =>
       rows.push([
         i === 0 ? `${m.name} (${m.key})` : "",
-        i === 0 ? m.model : "",
-        `${p.symbol} = ${p.value} ${p.unit}`,
+        i === 0 ? modelShort(m.model) : "",
+        `${p.symbol} = ${withUnit(p.value, p.unit)}`,
         p.source ?? (m.inLibrary ? "typed value, no lab set" : "not in the library: value of the section"),
       ]),
     );

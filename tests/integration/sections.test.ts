@@ -49,7 +49,7 @@ describe("sections and their versions", () => {
     const s2 = await save2.json();
     expect(s2.section.version).toBe(2);
     // The one-line summary names what changed when the user gives none.
-    expect(s2.summary).toMatch(/φ' 26° → 30°/);
+    expect(s2.summary).toMatch(/φ′ 26° → 30°/);
 
     const v3 = {
       ...v2,
@@ -69,7 +69,7 @@ describe("sections and their versions", () => {
     const detail = await (await engineer.request(`/api/projects/${projectId}/sections/${section.id}`)).json();
     expect(detail.section.versions.map((v: { version: number; summary: string }) => [v.version, v.summary])).toEqual([
       [3, "Added the seepage line"],
-      [2, expect.stringContaining("φ'")],
+      [2, expect.stringContaining("φ′")],
       [1, "First version"],
     ]);
     const first = await (await engineer.request(`/api/projects/${projectId}/sections/${section.id}/versions/1`)).json();

@@ -6,6 +6,7 @@
 import { z } from "zod";
 import type { CircleFs, FsMap, GridSearchSuccess, Method } from "@/lib/stability";
 import type { StoredSearchResult } from "./result-schema";
+import { countOf } from "@/lib/format";
 
 /** Relative agreement required; the engine is deterministic, so anything beyond float noise is a difference. */
 const FS_TOLERANCE = 1e-6;
@@ -88,7 +89,8 @@ function compareMap(d: DifferenceList, field: string, sent: FsMap | undefined, s
       if (first < 0) first = i;
     }
   });
-  if (cells > 0) d.add(`${field}.values`, `${cells} cell(s) differ, first at ${first}`, show(server.values[first]));
+  if (cells > 0)
+    d.add(`${field}.values`, `${countOf(cells, "cell")} differ, first at ${first}`, show(server.values[first]));
 }
 
 function compareLowest(d: DifferenceList, field: string, sent: SentCircle[] | undefined, server: CircleFs[] = []) {
