@@ -9,6 +9,7 @@ import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FormBanner } from "@/components/ui/form-message";
 import { CsvDownloadLink, CsvDropZone } from "./csv-drop-zone";
 import { CsvProblemList } from "./csv-problem-list";
+import { countOf } from "@/lib/format";
 
 export interface MaterialsCsvImportProps {
   projectId: number;
@@ -129,7 +130,9 @@ export function MaterialsCsvImport({ projectId, existingKeys, onImported }: Mate
               disabled={!check.ok || check.materials.length === 0 || busy}
               onClick={send}
             >
-              {busy ? "Adding…" : `Add these ${check.materials.length} materials`}
+              {busy
+                ? "Adding…"
+                : `Add ${check.materials.length === 1 ? "this material" : `these ${countOf(check.materials.length, "material")}`}`}
             </button>
             <button type="button" className="btn-quiet" onClick={() => setFile(null)}>
               Discard the file

@@ -17,7 +17,7 @@ import { drawSection } from "./section-drawing";
 import { waterUsedText } from "@/lib/runs/view/water-used";
 import { writeSliceTable } from "./slice-pages";
 import { VARIANT_TEXT, stageCells, stagedView } from "@/lib/runs/view/staged-view";
-import { formatCount, formatDateTime, withUnit } from "@/lib/format";
+import { countOf, formatCount, formatDateTime, withUnit } from "@/lib/format";
 import { conditionWords, faceWords, MODEL_SHORT } from "@/lib/vocabulary";
 import { writeSensitivity, type ReportSensitivity } from "./sensitivity-section";
 
@@ -132,7 +132,7 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
     const ys = water.phreatic.map((p) => p[1]);
     rows.push([
       "Phreatic line",
-      `${water.phreatic.length} points, x ${m2(water.phreatic[0][0])} to ${m2(water.phreatic.at(-1)![0])} m, elevation ${m2(Math.min(...ys))} to ${m2(Math.max(...ys))} m`,
+      `${countOf(water.phreatic.length, "point")}, x ${m2(water.phreatic[0][0])} to ${m2(water.phreatic.at(-1)![0])} m, elevation ${m2(Math.min(...ys))} to ${m2(Math.max(...ys))} m`,
     ]);
     if (water.cos2Correction) rows.push(["Pore pressure", "phreatic head reduced by cos² of the line's slope"]);
   }

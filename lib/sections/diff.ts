@@ -5,7 +5,7 @@
  */
 import type { Material, SectionDocument } from "@/lib/stability";
 import type { StoredSection } from "./water-conditions";
-import { withUnit } from "@/lib/format";
+import { countOf, withUnit } from "@/lib/format";
 import { ANALYSIS_SETTING_WORDS, analysisSettingWords, modelWords } from "@/lib/vocabulary";
 
 export type DiffArea = "materials" | "geometry" | "water" | "loads" | "analysis";
@@ -84,7 +84,7 @@ function diffRegions(a: SectionDocument, b: SectionDocument, out: Difference[]):
       out.push({
         area: "geometry",
         path: `regions[${i}]`,
-        text: `${label} added (${r1!.points.length} points, material ${r1!.material})`,
+        text: `${label} added (${countOf(r1!.points.length, "point")}, material ${r1!.material})`,
       });
     else if (!r1) out.push({ area: "geometry", path: `regions[${i}]`, text: `${label} removed` });
     else {

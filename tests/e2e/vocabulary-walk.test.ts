@@ -9,14 +9,16 @@ import { pdfText } from "../support/pdf-text";
 import { findEngineWords } from "../support/engine-words";
 
 let browser: Browser;
+let comparePage = "";
 beforeAll(async () => {
   browser = await launchBrowser();
   // Runs in three states, so the run pages, the queue and the report have something to show.
   const engineer = await signedIn("engineer@scarpline.test");
   const demo = await demoProject(engineer);
-  await createDraft(engineer, demo, "Walk: a draft below its required FS", undefined, 1.5);
+  const below = await createDraft(engineer, demo, "Walk: a draft below its required FS", undefined, 1.5);
   const submitted = await createDraft(engineer, demo, "Walk: a run awaiting review");
   await move(engineer, demo, submitted, "submit");
+  comparePage = `/projects/${demo.projectId}/runs/compare?ids=${submitted},${below}`;
 });
 afterAll(async () => {
   await browser?.close();
@@ -32,7 +34,7 @@ const shape = (p: string) => p.replace(/\d+/g, ":id").replace(/\?.*$/, "");
 async function walk(page: Page, role: string): Promise<{ pages: Record<string, string>; reports: string[] }> {
   const seen = new Set<string>();
   const shapes = new Map<string, number>();
-  const queue = [...START];
+  const queue = [...START, comparePage];
   const pages: Record<string, string> = {};
   const reports = new Set<string>();
   await fs.mkdir(path.join(OUT, role), { recursive: true });
@@ -44,11 +46,16 @@ async function walk(page: Page, role: string): Promise<{ pages: Record<string, s
     const res = await page.goto(appUrl(at));
     if (!res || res.status() >= 400) continue;
     await page.waitForLoadState("networkidle").catch(() => undefined);
-    const text = await page.evaluate(() => document.body.innerText);
+    await page.screenshot({ path: path.join(OUT, role, `${Object.keys(pages).length + 1}.png`), fullPage: true });
+    // A file's column names (shown as code) are the file's own spelling, not words for a reader.
+    const text = await page.evaluate(() => {
+      for (const c of document.querySelectorAll("code")) c.textContent = "";
+      return document.body.innerText;
+    });
     pages[at] = text;
     const name = `${Object.keys(pages).length}-${at.replace(/[^a-z0-9]+/gi, "-")}`.slice(0, 90);
     await fs.writeFile(path.join(OUT, role, `${name}.txt`), text);
-    await page.screenshot({ path: path.join(OUT, role, `${name}.png`), fullPage: true });
+    await fs.rename(path.join(OUT, role, `${Object.keys(pages).length}.png`), path.join(OUT, role, `${name}.png`));
     const links = await page.$$eval("a[href^='/']", (as) => as.map((a) => a.getAttribute("href") ?? ""));
     for (const l of links) {
       if (/\/report(\?|$)/.test(l)) reports.add(l);

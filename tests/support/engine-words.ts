@@ -7,7 +7,7 @@ const ENGINE_CODES: readonly RegExp[] = [
   /\bfellenius\b/i,
   /\bbishop\b(?!'s)/,
   /\bengine case\b/i,
-  /\bsubmitted\b/,
+  /\bsubmitted\b(?! (by|for|to))/,
   /\bsteady\b(?! seepage| state| flow)/i,
   /\bgamma(Sat)?\b/i,
   /\bphi'?\b/,

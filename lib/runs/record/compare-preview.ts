@@ -162,8 +162,12 @@ export function differenceWords(field: string): string {
 export function differenceLine(d: PreviewDifference): string {
   const what = differenceWords(d.field);
   if (d.field === "warnings") {
-    if (d.sent === MISSING) return `A warning the server's search raises was missing from the preview: ${d.server}`;
-    if (d.server === MISSING) return `A warning in the preview that the server's search does not raise: ${d.sent}`;
+    // Stored as "code: message"; the reader gets the message alone.
+    const words = (w: string) => w.replace(/^[a-z0-9]+(?:-[a-z0-9]+)*: /, "");
+    if (d.sent === MISSING)
+      return `A warning the server's search raises was missing from the preview: ${words(d.server)}`;
+    if (d.server === MISSING)
+      return `A warning in the preview that the server's search does not raise: ${words(d.sent)}`;
   }
   const a = Number(d.sent);
   const b = Number(d.server);
