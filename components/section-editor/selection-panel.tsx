@@ -96,7 +96,9 @@ export function SelectionPanel(p: SelectionPanelProps) {
           <p className="text-xs text-ink-faint">{countOf(p.doc.water.phreatic.length, "point")}, left to right.</p>
         </div>
       ) : (
-        <p className="text-xs text-ink-faint">Nothing selected. Click a region or the phreatic line.</p>
+        <p className="text-xs text-ink-faint">
+          Nothing selected. Click a region or the phreatic line, or press Tab in the drawing.
+        </p>
       )}
       {sel && !p.readOnly && (
         <div className="mt-3 flex flex-wrap gap-1.5">

@@ -57,6 +57,8 @@ export function RunComparison({ runs }: { runs: RunDetail[] }) {
           materialColors={Object.fromEntries(materialPalette(baseDoc.materials).map((m) => [m.key, m.color]))}
           overlays={overlays}
           height={460}
+          // The table above already carries the page's caution; once per page is enough.
+          caution={false}
         />
         {!sameGeometry ? (
           <p className="mt-1 text-xs text-ink-soft">
