@@ -75,6 +75,8 @@ describe("editing a section with the keyboard alone", () => {
       // "?" lists the shortcuts.
       await page.keyboard.press("?");
       await expect.poll(() => page.getByTestId("shortcut-help").textContent()).toContain("Tab / Shift+Tab");
+      // Kept for reading: the focus ring, the chosen vertex and the shortcut list.
+      await page.screenshot({ path: "test-results/keyboard-editing-help.png", fullPage: true });
       await page.keyboard.press("Escape");
 
       await page.getByTestId("save-version").focus();

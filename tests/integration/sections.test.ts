@@ -119,6 +119,12 @@ describe("sections and their versions", () => {
     const keys = Object.keys(body.error.fields);
     expect(keys.some((k) => k.startsWith("document.regions[0]"))).toBe(true);
     expect(keys.some((k) => k.startsWith("document.materials[0]"))).toBe(true);
+    // The messages number regions and vertices as the side panel does, from 1 (issue 18, item 5).
+    const messages = Object.values(body.error.fields as Record<string, string[]>)
+      .flat()
+      .join(" ");
+    expect(messages).toMatch(/Region 1( \([^)]*\))?: the edges between vertices \d–\d and \d–\d cross/);
+    expect(messages).not.toMatch(/regions\[\d\]|edges \d–\d and/);
     expect(await count("sections")).toBe(sectionsBefore);
   });
 
