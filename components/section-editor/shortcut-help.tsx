@@ -27,7 +27,7 @@ export function ShortcutHelp({ open, onToggle }: ShortcutHelpProps) {
           id="editor-shortcuts"
           data-testid="shortcut-help"
           aria-label="Keyboard shortcuts"
-          className="panel mt-2 grid gap-3 p-3 sm:grid-cols-3"
+          className="panel mt-2 grid gap-3 p-3"
         >
           {SHORTCUTS.map((g) => (
             <div key={g.group}>
