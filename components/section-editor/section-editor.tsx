@@ -2,14 +2,14 @@
 
 import dynamic from "next/dynamic";
 import { useEffect, useEffectEvent, useMemo, useRef, useState, type MouseEvent } from "react";
-import type { SectionDocument } from "@/lib/stability";
+import type { Point, SectionDocument } from "@/lib/stability";
 import { documentBounds } from "@/lib/editor/bounds";
 import type { Draft } from "@/lib/editor/drafts";
 import { groundSurface } from "@/lib/editor/ground-surface";
 import { pondedWater } from "@/lib/editor/ponded-water";
 import { clampSelection, type Selection } from "@/lib/editor/refs";
 import { reservoirSpan, sideOf } from "@/lib/editor/reservoir-level";
-import { DEFAULT_GRID_STEP } from "@/lib/editor/snapping";
+import { DEFAULT_GRID_STEP, snapToGrid } from "@/lib/editor/snapping";
 import { createEditorActions } from "./editor-actions";
 import { IssueList } from "./issue-list";
 import { SelectionPanel } from "./selection-panel";
@@ -80,6 +80,7 @@ export function SectionEditor({
   const containerRef = useRef<HTMLDivElement>(null);
   const rootRef = useRef<HTMLDivElement>(null);
   const [helpOpen, setHelpOpen] = useState(false);
+  const [keyPoint, setKeyPoint] = useState<Point | null>(null);
   const commit = (next: SectionDocument) => history.commit(storeDrawnWater(stored, next, activeWater));
 
   // Undo or a deletion can leave the selection pointing past the end.
@@ -155,6 +156,11 @@ export function SectionEditor({
       });
     },
     focusCanvas: () => containerRef.current?.focus(),
+    keyPoint,
+    setKeyPoint,
+    startPoint: () =>
+      draft?.points.at(-1) ?? snapToGrid([(bounds.minX + bounds.maxX) / 2, (bounds.minY + bounds.maxY) / 2], gridStep),
+    gridStep,
   });
   const pointer = useCanvasPointer({
     ...editing,
@@ -166,6 +172,13 @@ export function SectionEditor({
     zoomBy: view.zoomBy,
     setPreview,
   });
+
+  // The keyboard's cursor stands in for the pointer while a drawing tool is active.
+  const keyHover =
+    keyPoint && tool !== "select" && tool !== "pan"
+      ? { world: keyPoint, snapped: keyPoint, snap: "grid" as const, overVertex: false }
+      : null;
+  const hover = pointer.hover ?? keyHover;
 
   // React's wheel listener is passive; zooming must stop the page from scrolling.
   const handleWheel = useEffectEvent((e: Parameters<typeof pointer.handle>[0]) => pointer.handle(e));
@@ -208,11 +221,11 @@ export function SectionEditor({
   };
 
   const reservoirPreview = useMemo(() => {
-    if (tool !== "reservoir" || !pointer.hover || readOnly) return null;
-    const y = pointer.hover.snapped[1];
-    const span = reservoirSpan(ground, sideOf(ground, pointer.hover.snapped[0]), y);
+    if (tool !== "reservoir" || !hover || readOnly) return null;
+    const y = hover.snapped[1];
+    const span = reservoirSpan(ground, sideOf(ground, hover.snapped[0]), y);
     return span ? { y, ...span } : null;
-  }, [tool, pointer.hover, ground, readOnly]);
+  }, [tool, hover, ground, readOnly]);
 
   const cursor =
     pointer.gesture === "pan"
@@ -292,7 +305,7 @@ export function SectionEditor({
                   tool={tool}
                   selection={selection}
                   draft={draft}
-                  hover={pointer.hover}
+                  hover={hover}
                   issues={issues}
                   focusedIssue={focusedIssue}
                   reservoirPreview={reservoirPreview}
@@ -315,7 +328,7 @@ export function SectionEditor({
           ) : null}
           <StatusBar
             tool={tool}
-            hover={pointer.hover}
+            hover={hover}
             message={message}
             chosen={describeSelection(doc, selection, materials)}
           />

@@ -5,7 +5,8 @@ import type { Draft } from "@/lib/editor/drafts";
 import { dropLastDraftPoint } from "@/lib/editor/drafts";
 import { pickVertexToward, stepItem } from "@/lib/editor/keyboard-selection";
 import type { Selection } from "@/lib/editor/refs";
-import type { SectionDocument } from "@/lib/stability";
+import type { Point, SectionDocument } from "@/lib/stability";
+import { nudgeStep } from "@/lib/editor/snapping";
 import type { EditorActions } from "./editor-actions";
 import { toolByKey } from "./tools";
 import type { ToolName } from "./types";
@@ -31,7 +32,17 @@ interface KeyDeps {
   focusCanvas(): void;
   helpOpen: boolean;
   setHelpOpen(open: boolean): void;
+  /** The keyboard's cursor for the drawing tools, in metres; null until an arrow moves it. */
+  keyPoint: Point | null;
+  setKeyPoint(p: Point | null): void;
+  /** Where the keyboard's cursor starts: the last point drawn, or the middle of the section. */
+  startPoint(): Point;
+  gridStep: number;
 }
+
+const DRAWING_TOOLS = ["region", "phreatic", "reservoir"] as const;
+type DrawingTool = (typeof DRAWING_TOOLS)[number];
+const isDrawingTool = (t: ToolName): t is DrawingTool => (DRAWING_TOOLS as readonly string[]).includes(t);
 
 /** Keys typed into a field belong to the field, not to the drawing. */
 function isTyping(target: EventTarget | null): boolean {
@@ -106,6 +117,15 @@ export function useEditorKeys(deps: KeyDeps) {
     } else if (key === "Delete" || key === "Backspace") {
       if (d.draft) d.setDraft(d.draft.points.length > 1 ? dropLastDraftPoint(d.draft) : null);
       else d.actions.deleteSelection();
+    } else if (key in ARROWS && isDrawingTool(d.tool) && !d.readOnly) {
+      // With a drawing tool the arrows move a cursor; A puts a point where it stands.
+      const [dx, dy] = ARROWS[key];
+      const step = nudgeStep(d.gridStep) * (e.shiftKey ? BIG_STEPS : 1);
+      const from = d.keyPoint ?? d.startPoint();
+      const tidy = (v: number) => Math.round(v * 1e9) / 1e9;
+      d.setKeyPoint(d.keyPoint ? [tidy(from[0] + dx * step), tidy(from[1] + dy * step)] : from);
+    } else if ((key === "a" || key === "A") && isDrawingTool(d.tool)) {
+      d.actions.placeAt(d.tool, d.keyPoint ?? d.startPoint());
     } else if (key in ARROWS && d.selection) {
       const [dx, dy] = ARROWS[key];
       if (d.selection.vertex === null) d.setSelection(pickVertexToward(d.doc, d.selection, dx, dy));
@@ -156,6 +176,9 @@ export const SHORTCUTS: readonly { group: string; keys: readonly [string, string
     group: "Drawing and view",
     keys: [
       ["S R W L H", "tools: select, draw region, draw phreatic line, reservoir level, pan"],
+      ["Arrows", "with a drawing tool: move the keyboard cursor one grid step (Shift: ten)"],
+      ["A", "put a point at the cursor (on the first corner it closes the outline); sets the reservoir level"],
+      ["Backspace", "while drawing: take back the last point"],
       ["Enter / Esc", "while drawing: finish / drop the outline"],
       ["+ − F", "zoom in, zoom out, fit the section"],
       ["?", "show or hide this list"],

@@ -59,7 +59,8 @@ export const LOADING_CONDITION_KEYS = LOADING_CONDITIONS.map((c) => c.key) as [
 ];
 
 export const GUIDANCE_NOTE =
-  "Defaults follow one published guideline; local codes and the engineer of record decide the values that apply.";
+  "Defaults follow one published guideline; local codes and the engineer of record decide the values that apply. " +
+  "The normal and flood pools are what that guideline calls the maximum storage and maximum surcharge pools.";
 
 export function loadingCondition(key: LoadingConditionKey) {
   return LOADING_CONDITIONS.find((c) => c.key === key)!;

@@ -54,4 +54,24 @@ describe("editing the section with the keyboard alone", () => {
     await key("Escape");
     expect(() => byTestId("shortcut-help")).toThrow();
   });
+
+  it("draws a region with the keyboard cursor: arrows move it, A puts a corner, Enter closes the outline", async () => {
+    await mount();
+    await key("r");
+    // The cursor starts at the middle of the section, on the grid: (30, 10) for this 60 × 20 m bank.
+    await key("ArrowUp");
+    await key("a");
+    await key("ArrowRight", { shiftKey: true });
+    await key("a");
+    await key("ArrowUp", { shiftKey: true });
+    await key("a");
+    expect(byTestId("editor-message").textContent).toBe("Corner 3 at x 35.00 m, elevation 15.00 m.");
+    await key("Enter");
+    expect(latestDoc().regions).toHaveLength(3);
+    expect(latestDoc().regions[2].points).toEqual([
+      [30, 10],
+      [35, 10],
+      [35, 15],
+    ]);
+  });
 });
