@@ -2,14 +2,14 @@
 
 import dynamic from "next/dynamic";
 import { useEffect, useEffectEvent, useMemo, useRef, useState, type MouseEvent } from "react";
-import type { Point, SectionDocument } from "@/lib/stability";
+import type { SectionDocument } from "@/lib/stability";
 import { documentBounds } from "@/lib/editor/bounds";
 import type { Draft } from "@/lib/editor/drafts";
 import { groundSurface } from "@/lib/editor/ground-surface";
 import { pondedWater } from "@/lib/editor/ponded-water";
 import { clampSelection, type Selection } from "@/lib/editor/refs";
 import { reservoirSpan, sideOf } from "@/lib/editor/reservoir-level";
-import { DEFAULT_GRID_STEP, snapToGrid } from "@/lib/editor/snapping";
+import { DEFAULT_GRID_STEP } from "@/lib/editor/snapping";
 import { createEditorActions } from "./editor-actions";
 import { IssueList } from "./issue-list";
 import { SelectionPanel } from "./selection-panel";
@@ -79,8 +79,6 @@ export function SectionEditor({
   const [newRegionMaterial, setNewRegionMaterial] = useState(materials[0]?.key ?? doc.materials[0]?.id ?? "");
   const containerRef = useRef<HTMLDivElement>(null);
   const rootRef = useRef<HTMLDivElement>(null);
-  const [helpOpen, setHelpOpen] = useState(false);
-  const [keyPoint, setKeyPoint] = useState<Point | null>(null);
   const commit = (next: SectionDocument) => history.commit(storeDrawnWater(stored, next, activeWater));
 
   // Undo or a deletion can leave the selection pointing past the end.
@@ -143,24 +141,10 @@ export function SectionEditor({
     fit: view.fit,
     readOnly,
     doc,
-    helpOpen,
-    setHelpOpen,
-    openCoordinates: () => {
-      const vertex = selection?.vertex ?? 0;
-      if (selection && selection.vertex === null) setSelection({ ...selection, vertex });
-      // The table renders the row on the next frame when the selection has just changed.
-      requestAnimationFrame(() => {
-        const field = rootRef.current?.querySelector<HTMLInputElement>(`[data-testid='vertex-x-${vertex}']`);
-        field?.focus();
-        field?.select();
-      });
-    },
-    focusCanvas: () => containerRef.current?.focus(),
-    keyPoint,
-    setKeyPoint,
-    startPoint: () =>
-      draft?.points.at(-1) ?? snapToGrid([(bounds.minX + bounds.maxX) / 2, (bounds.minY + bounds.maxY) / 2], gridStep),
+    bounds,
     gridStep,
+    rootRef,
+    canvasRef: containerRef,
   });
   const pointer = useCanvasPointer({
     ...editing,
@@ -174,11 +158,7 @@ export function SectionEditor({
   });
 
   // The keyboard's cursor stands in for the pointer while a drawing tool is active.
-  const keyHover =
-    keyPoint && tool !== "select" && tool !== "pan"
-      ? { world: keyPoint, snapped: keyPoint, snap: "grid" as const, overVertex: false }
-      : null;
-  const hover = pointer.hover ?? keyHover;
+  const hover = pointer.hover ?? keys.cursor;
 
   // React's wheel listener is passive; zooming must stop the page from scrolling.
   const handleWheel = useEffectEvent((e: Parameters<typeof pointer.handle>[0]) => pointer.handle(e));
@@ -332,7 +312,7 @@ export function SectionEditor({
             message={message}
             chosen={describeSelection(doc, selection, materials)}
           />
-          <ShortcutHelp open={helpOpen} onToggle={() => setHelpOpen(!helpOpen)} />
+          <ShortcutHelp open={keys.helpOpen} onToggle={() => keys.setHelpOpen(!keys.helpOpen)} />
         </div>
         <aside className="flex w-full flex-col gap-3 lg:w-80" aria-label="Section details">
           <SelectionPanel

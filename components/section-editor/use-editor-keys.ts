@@ -1,12 +1,14 @@
 "use client";
 
-import { useRef, type KeyboardEvent } from "react";
+import { useRef, useState, type KeyboardEvent, type RefObject } from "react";
 import type { Draft } from "@/lib/editor/drafts";
 import { dropLastDraftPoint } from "@/lib/editor/drafts";
 import { pickVertexToward, stepItem } from "@/lib/editor/keyboard-selection";
 import type { Selection } from "@/lib/editor/refs";
 import type { Point, SectionDocument } from "@/lib/stability";
-import { nudgeStep } from "@/lib/editor/snapping";
+import { nudgeStep, snapToGrid } from "@/lib/editor/snapping";
+import type { Bounds } from "@/lib/editor/view-transform";
+import type { Hover } from "./use-canvas-pointer";
 import type { EditorActions } from "./editor-actions";
 import { toolByKey } from "./tools";
 import type { ToolName } from "./types";
@@ -26,18 +28,12 @@ interface KeyDeps {
   zoomBy(factor: number): void;
   fit(): void;
   readOnly: boolean;
-  /** Puts the keyboard in the coordinate fields of the selected vertex. */
-  openCoordinates(): void;
-  /** Gives the keyboard back to the drawing. */
-  focusCanvas(): void;
-  helpOpen: boolean;
-  setHelpOpen(open: boolean): void;
-  /** The keyboard's cursor for the drawing tools, in metres; null until an arrow moves it. */
-  keyPoint: Point | null;
-  setKeyPoint(p: Point | null): void;
-  /** Where the keyboard's cursor starts: the last point drawn, or the middle of the section. */
-  startPoint(): Point;
+  /** The drawing's extent: the keyboard's cursor starts in its middle. */
+  bounds: Bounds;
   gridStep: number;
+  /** The editor's root (where the coordinate fields are) and the drawing (where Escape returns). */
+  rootRef: RefObject<HTMLElement | null>;
+  canvasRef: RefObject<HTMLElement | null>;
 }
 
 const DRAWING_TOOLS = ["region", "phreatic", "reservoir"] as const;
@@ -64,8 +60,35 @@ const ARROWS: Record<string, [number, number]> = {
  * Keyboard use of the editor. Returns handlers for the editor's root element and a probe
  * telling whether Space is held (Space-drag pans with any tool).
  */
-export function useEditorKeys(deps: KeyDeps) {
+export function useEditorKeys(input: KeyDeps) {
   const space = useRef(false);
+  const [helpOpen, setHelpOpen] = useState(false);
+  // The keyboard's cursor for the drawing tools, in metres; null until an arrow moves it.
+  const [keyPoint, setKeyPoint] = useState<Point | null>(null);
+  const { selection, setSelection, bounds, gridStep } = input;
+  const deps = {
+    ...input,
+    helpOpen,
+    setHelpOpen,
+    keyPoint,
+    setKeyPoint,
+    /** Where the keyboard's cursor starts: the last point drawn, or the middle of the section. */
+    startPoint: (): Point =>
+      input.draft?.points.at(-1) ??
+      snapToGrid([(bounds.minX + bounds.maxX) / 2, (bounds.minY + bounds.maxY) / 2], gridStep),
+    /** Puts the keyboard in the coordinate fields of the selected vertex. */
+    openCoordinates: () => {
+      const vertex = selection?.vertex ?? 0;
+      if (selection && selection.vertex === null) setSelection({ ...selection, vertex });
+      // The table renders the row on the next frame when the selection has just changed.
+      requestAnimationFrame(() => {
+        const field = input.rootRef.current?.querySelector<HTMLInputElement>(`[data-testid='vertex-x-${vertex}']`);
+        field?.focus();
+        field?.select();
+      });
+    },
+    focusCanvas: () => input.canvasRef.current?.focus(),
+  };
 
   const onKeyDown = (e: KeyboardEvent<HTMLElement>) => {
     if (isTyping(e.target)) {
@@ -148,7 +171,9 @@ export function useEditorKeys(deps: KeyDeps) {
     if (e.key === " ") space.current = false;
   };
 
-  return { onKeyDown, onKeyUp, spaceHeld: () => space.current };
+  const drawing = keyPoint !== null && isDrawingTool(input.tool);
+  const cursor: Hover | null = drawing ? { world: keyPoint, snapped: keyPoint, snap: "grid", overVertex: false } : null;
+  return { onKeyDown, onKeyUp, spaceHeld: () => space.current, helpOpen, setHelpOpen, cursor };
 }
 
 /** Shortcut list shown in the editor's help panel, grouped as a user looks for them. */
