@@ -5,6 +5,7 @@
  * report that shows an engine issue passes it through here, and only here.
  */
 import type { Issue } from "@/lib/stability";
+import { ANALYSIS_SETTING_WORDS } from "@/lib/vocabulary";
 
 /** Field names of the document, as the material form and the panels label them. */
 const FIELD_WORDS: Record<string, string> = {
@@ -67,7 +68,10 @@ export function placeWords(path: string, names: PlaceNames = {}): string {
   });
   if (text !== path) return text;
   if (path === "water.phreatic") return "Phreatic line";
-  // Other paths (analysis.grid.x1): their last names, in words where the form has words for them.
+  const [head, setting, ...more] = path.split(".");
+  if (head === "analysis" && setting)
+    return [`Analysis settings, ${(ANALYSIS_SETTING_WORDS[setting] ?? setting).toLowerCase()}`, ...more].join(", ");
+  // Other paths (water.gammaW): their names, in words where the form has words for them.
   return path
     .split(".")
     .map((k) => FIELD_WORDS[k] ?? k)
