@@ -41,7 +41,7 @@ export function MaterialsCsvImport({ projectId, existingKeys, onImported }: Mate
       onImported(result.materials);
       setBanner({
         kind: "ok",
-        text: `Added ${result.materials.length} material${result.materials.length === 1 ? "" : "s"} from ${file.name}.`,
+        text: `Added ${countOf(result.materials.length, "material")} from ${file.name}.`,
       });
       setFile(null);
     } catch (err) {
@@ -85,7 +85,7 @@ export function MaterialsCsvImport({ projectId, existingKeys, onImported }: Mate
       {check && file ? (
         <>
           <p className="text-sm text-ink-soft">
-            {file.name}: {check.preview.length} row{check.preview.length === 1 ? "" : "s"} read.
+            {file.name}: {countOf(check.preview.length, "row")} read.
           </p>
           {check.preview.length > 0 ? (
             <div className="max-h-72 overflow-auto rounded border border-rule">

@@ -2,6 +2,7 @@
 
 import { placeWords } from "@/lib/issue-words";
 import type { EditorIssue } from "./types";
+import { countOf } from "@/lib/format";
 
 interface IssueListProps {
   issues: EditorIssue[];
@@ -21,8 +22,7 @@ export function IssueList({ issues, focused, onPick }: IssueListProps) {
       ) : (
         <>
           <p className="mb-2 text-xs text-ink-soft">
-            {errors} {errors === 1 ? "error" : "errors"}, {warnings} {warnings === 1 ? "warning" : "warnings"}. Pick one
-            to find it.
+            {countOf(errors, "error")}, {countOf(warnings, "warning")}. Pick one to find it.
           </p>
           <ol className="flex max-h-72 flex-col gap-1 overflow-y-auto">
             {issues.map((issue, i) => {

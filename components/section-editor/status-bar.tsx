@@ -6,6 +6,7 @@ import type { SnapKind } from "@/lib/editor/snapping";
 import { toolInfo } from "./tools";
 import type { MaterialSwatch, ToolName } from "./types";
 import type { Hover } from "./use-canvas-pointer";
+import { countOf } from "@/lib/format";
 
 interface StatusBarProps {
   tool: ToolName;
@@ -29,7 +30,7 @@ export function describeSelection(
     item = `Region ${sel.region + 1} (${materials.find((m) => m.key === key)?.name ?? key})`;
   }
   const p = sel.vertex === null ? undefined : pts[sel.vertex];
-  if (!p || sel.vertex === null) return `${item}, ${pts.length} ${pts.length === 1 ? "vertex" : "vertices"}`;
+  if (!p || sel.vertex === null) return `${item}, ${countOf(pts.length, "vertex", "vertices")}`;
   return `${item}, vertex ${sel.vertex + 1} of ${pts.length}: x ${p[0].toFixed(2)} m, elevation ${p[1].toFixed(2)} m`;
 }
 

@@ -55,7 +55,7 @@ export function parseDroppedFile(fileName: string, text: string, knownMaterialId
         problems: [],
         preview: r.preview,
         warnings: r.warnings,
-        summary: `Geometry: ${r.value.length} region${r.value.length === 1 ? "" : "s"}, ${r.value.reduce((n, g) => n + g.points.length, 0)} points`,
+        summary: `Geometry: ${countOf(r.value.length, "region")}, ${r.value.reduce((n, g) => n + g.points.length, 0)} points`,
         apply: (doc) => ({
           ...doc,
           regions: r.value.map((g) => ({

@@ -4,6 +4,7 @@ import { checkWaterConditions } from "./check-water-conditions";
 import type { StoredSection } from "./water-conditions";
 import { sectionLimitErrors } from "@/lib/validations/section-limits";
 import { messageWords, placeNamesOf } from "@/lib/issue-words";
+import { countOf } from "@/lib/format";
 
 /**
  * Validates a section document with the engine's own rules, and its named water conditions, before
@@ -28,7 +29,7 @@ export function requireValidSection(raw: unknown): { document: StoredSection; wa
     throw new ApiError(
       400,
       "invalid_section",
-      `The section has ${errors.length} problem${errors.length === 1 ? "" : "s"}; nothing was saved.`,
+      `The section has ${countOf(errors.length, "problem")}; nothing was saved.`,
       fields,
     );
   }

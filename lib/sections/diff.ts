@@ -105,7 +105,7 @@ function diffRegions(a: SectionDocument, b: SectionDocument, out: Difference[]):
           path: `regions[${i}].points`,
           text:
             moved !== null
-              ? `${label}: ${moved} point${moved === 1 ? "" : "s"} moved`
+              ? `${label}: ${countOf(moved, "point")} moved`
               : `${label}: ${r0.points.length} → ${r1.points.length} points`,
         });
       }
