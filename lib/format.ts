@@ -22,3 +22,52 @@ const counts = new Intl.NumberFormat("en-GB", { maximumFractionDigits: 0 });
 export function formatCount(value: number): string {
   return counts.format(value);
 }
+
+/** A very small or large number as the trade writes it: 6.31 × 10⁻⁹ (`digits` decimals on the mantissa). */
+export function formatScientific(value: number | undefined | null, digits = 2): string {
+  if (value === undefined || value === null || !Number.isFinite(value)) return "—";
+  if (value === 0) return "0";
+  const [mantissa, exponent] = value.toExponential(digits).split("e");
+  const sup: Record<string, string> = {
+    "-": "⁻",
+    "+": "",
+    0: "⁰",
+    1: "¹",
+    2: "²",
+    3: "³",
+    4: "⁴",
+    5: "⁵",
+    6: "⁶",
+    7: "⁷",
+    8: "⁸",
+    9: "⁹",
+  };
+  const power = [...exponent].map((ch) => sup[ch] ?? ch).join("");
+  return `${mantissa} × 10${power}`;
+}
+
+/** A number for tables: fixed decimals, without a trailing "-0". */
+export function formatValue(value: number | undefined | null, digits = 1): string {
+  if (value === undefined || value === null || !Number.isFinite(value)) return "—";
+  const s = value.toFixed(digits);
+  return /^-0(\.0+)?$/.test(s) ? s.slice(1) : s;
+}
+
+/** Units written straight after the number, with no space: angles (26.9°, 12′). */
+const UNSPACED_UNITS = new Set(["°", "′", "″"]);
+
+/**
+ * A value with its unit as the trade writes it (SI Brochure, 9th ed., §5.4.3: a space between
+ * number and unit, except for the plane-angle signs): 19 kN/m³, 26.9°, 6.31 × 10⁻⁹ m³/s. A unit
+ * of "" or "–" leaves the number alone.
+ */
+export function withUnit(value: string | number, unit: string | undefined): string {
+  const v = String(value);
+  if (!unit || unit === "–" || unit === "-") return v;
+  return UNSPACED_UNITS.has(unit) ? `${v}${unit}` : `${v} ${unit}`;
+}
+
+/** A count with its noun, singular or plural as English needs: "1 slice", "3 slices", "0 slices". */
+export function countOf(n: number, one: string, many = `${one}s`): string {
+  return `${formatCount(n)} ${n === 1 ? one : many}`;
+}

@@ -2,9 +2,10 @@
 
 import { lineToText, type FormValues, type PhreaticOutcome, type PipingAtExits } from "@/lib/design";
 import { FieldError } from "@/components/ui/form-message";
+import { formatScientific } from "@/lib/format";
 
 const SECONDS_PER_DAY = 86400;
-const sci = (v: number) => v.toExponential(2).replace("e", " × 10^").replace("^+", "^");
+const sci = (v: number) => formatScientific(v, 2);
 
 function Row({ term, value, from }: { term: string; value: string; from: string }) {
   return (

@@ -3,6 +3,7 @@
 import { DEFAULT_SWEEP, FINE_SWEEP, sweepRatios, type SweepSettings } from "@/lib/design";
 import { FieldError } from "@/components/ui/form-message";
 import type { SweepRunState, SweepWhere } from "./use-sweep";
+import { countOf } from "@/lib/format";
 
 export interface SweepControlsProps {
   settings: SweepSettings;
@@ -98,7 +99,8 @@ export function SweepControls({
       </div>
       <p className="text-xs text-ink-soft">
         {count} ratios × 3 cases ({count * 3} searches, then 3 to recheck the chosen pair). Each search:{" "}
-        {`${settings.nx} × ${settings.ny}`} centres × {settings.radii} radii, {settings.slices} slices
+        {`${settings.nx} × ${settings.ny}`} centres × {countOf(settings.radii, "radius", "radii")},{" "}
+        {countOf(settings.slices, "slice")}
         {settings.refine ? ", refined around the best centres" : ""}; the grid follows each geometry and moves once if
         its minimum is on an edge.
         {fine ? "" : COARSE_GRID_NOTE}

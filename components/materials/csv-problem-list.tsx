@@ -1,4 +1,5 @@
 import type { CsvProblem } from "@/lib/section-io";
+import { countOf } from "@/lib/format";
 
 /** Problems (or warnings) of a file, each with its row and column as a spreadsheet shows them. */
 export function CsvProblemList({ items, kind }: { items: readonly CsvProblem[]; kind: "problem" | "warning" }) {
@@ -12,8 +13,8 @@ export function CsvProblemList({ items, kind }: { items: readonly CsvProblem[]; 
     >
       <p className="font-medium">
         {kind === "problem"
-          ? `${items.length} problem${items.length === 1 ? "" : "s"}: nothing will be saved until the file is fixed.`
-          : `${items.length} note${items.length === 1 ? "" : "s"}:`}
+          ? `${countOf(items.length, "problem")}: nothing will be saved until the file is fixed.`
+          : `${countOf(items.length, "note")}:`}
       </p>
       <ul className="mt-1 space-y-0.5">
         {items.map((p, i) => (

@@ -12,8 +12,8 @@ function rowsOf(record: LabTestRecord): Row[] {
     case "triaxial-cu": {
       const r = record.result;
       const rows: Row[] = [
-        ["Cohesion intercept c'", formatValue(r.cohesion, 1), "kPa"],
-        ["Friction angle φ'", formatValue(r.frictionAngle, 1), "°"],
+        ["Cohesion intercept c′", formatValue(r.cohesion, 1), "kPa"],
+        ["Friction angle φ′", formatValue(r.frictionAngle, 1), "°"],
         ["R² of the fit", formatValue(r.fit.rSquared, 3), ""],
         ["Scatter about the line", formatValue(r.fit.standardError, 1), "kPa"],
         ["Tests used", String(r.fit.n), ""],

@@ -7,7 +7,7 @@ import { LAB_KIND_INFO } from "@/lib/materials/lab-kinds";
 import { labInputToRows } from "@/lib/materials/lab-rows";
 import { MODEL_PARAMETERS, PARAMETER_INFO, type ParameterKey } from "@/lib/materials/parameters";
 import { suggestedValues, type SuggestedValues } from "@/lib/materials/sources";
-import { formatScientific } from "@/lib/materials/parameter-form";
+import { formatScientific, withUnit, countOf } from "@/lib/format";
 import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FormBanner } from "@/components/ui/form-message";
 import { LabResultPlot } from "./lab-result-plot";
@@ -25,7 +25,8 @@ export interface LabTestCardProps {
 const describe = (s: SuggestedValues) =>
   (Object.entries(s.values) as [ParameterKey, number][])
     .map(
-      ([k, v]) => `${PARAMETER_INFO[k].symbol} = ${k === "k" ? formatScientific(v, 1) : v} ${PARAMETER_INFO[k].unit}`,
+      ([k, v]) =>
+        `${PARAMETER_INFO[k].symbol} = ${withUnit(k === "k" ? formatScientific(v, 1) : v, PARAMETER_INFO[k].unit)}`,
     )
     .join(", ");
 
@@ -91,7 +92,7 @@ export function LabTestCard({ projectId, material, set, canEdit, onChanged }: La
           <LabResultSummary record={set} />
           <details className="text-xs">
             <summary className="cursor-pointer text-ink-soft">
-              The {rows.length} test{rows.length === 1 ? "" : "s"} behind these numbers
+              The {countOf(rows.length, "test")} behind these numbers
             </summary>
             <table className="mt-2 w-full">
               <thead className="text-left text-ink-faint">

@@ -9,6 +9,7 @@ import { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 import { FormBanner } from "@/components/ui/form-message";
 import { CsvDownloadLink, CsvDropZone } from "./csv-drop-zone";
 import { CsvProblemList } from "./csv-problem-list";
+import { countOf } from "@/lib/format";
 
 export interface MaterialsCsvImportProps {
   projectId: number;
@@ -40,7 +41,7 @@ export function MaterialsCsvImport({ projectId, existingKeys, onImported }: Mate
       onImported(result.materials);
       setBanner({
         kind: "ok",
-        text: `Added ${result.materials.length} material${result.materials.length === 1 ? "" : "s"} from ${file.name}.`,
+        text: `Added ${countOf(result.materials.length, "material")} from ${file.name}.`,
       });
       setFile(null);
     } catch (err) {
@@ -66,8 +67,10 @@ export function MaterialsCsvImport({ projectId, existingKeys, onImported }: Mate
         </CsvDownloadLink>
       </div>
       <p className="text-xs text-ink-faint">
-        Columns: {MATERIAL_COLUMNS.join(", ")}. Units: γ and γsat in kN/m³, c and su in kPa, φ in degrees, suGradient in
-        kPa/m, suDatum in m.
+        {/* The column names are the file's own spelling, so they are shown as code. */}
+        Columns: <code className="font-mono">{MATERIAL_COLUMNS.join(", ")}</code>. Units: γ and γsat in kN/m³, c and su
+        in kPa, φ in degrees, <code className="font-mono">suGradient</code> in kPa/m,{" "}
+        <code className="font-mono">suDatum</code> in m.
       </p>
       <CsvDropZone
         label="Drop a materials CSV here, or click to choose one"
@@ -82,7 +85,7 @@ export function MaterialsCsvImport({ projectId, existingKeys, onImported }: Mate
       {check && file ? (
         <>
           <p className="text-sm text-ink-soft">
-            {file.name}: {check.preview.length} row{check.preview.length === 1 ? "" : "s"} read.
+            {file.name}: {countOf(check.preview.length, "row")} read.
           </p>
           {check.preview.length > 0 ? (
             <div className="max-h-72 overflow-auto rounded border border-rule">
@@ -127,7 +130,9 @@ export function MaterialsCsvImport({ projectId, existingKeys, onImported }: Mate
               disabled={!check.ok || check.materials.length === 0 || busy}
               onClick={send}
             >
-              {busy ? "Adding…" : `Add these ${check.materials.length} materials`}
+              {busy
+                ? "Adding…"
+                : `Add ${check.materials.length === 1 ? "this material" : `these ${countOf(check.materials.length, "material")}`}`}
             </button>
             <button type="button" className="btn-quiet" onClick={() => setFile(null)}>
               Discard the file

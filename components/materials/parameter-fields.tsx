@@ -79,7 +79,7 @@ export function ParameterFields({
       </div>
       {model === "mohr-coulomb" ? (
         <p className="text-xs text-ink-faint">
-          An su on a drained material is used only for the end-of-construction case.
+          An su on a drained material is used only for the end of construction check.
         </p>
       ) : null}
       {model !== "impenetrable" ? (

@@ -6,6 +6,7 @@ import { useState } from "react";
 import type { ProjectSummary } from "@/lib/projects/types";
 import { EmptyState } from "@/components/ui/empty-state";
 import { NewProjectForm } from "./new-project-form";
+import { countOf } from "@/lib/format";
 
 export interface ProjectListProps {
   initialProjects: ProjectSummary[];
@@ -54,9 +55,7 @@ export function ProjectList({ initialProjects, canCreate }: ProjectListProps) {
                   ) : null}
                 </div>
                 <p className="mt-1 line-clamp-2 text-sm text-ink-soft">{p.description || "No description."}</p>
-                <p className="mt-2 text-xs text-ink-faint">
-                  {p.memberCount} member{p.memberCount === 1 ? "" : "s"}
-                </p>
+                <p className="mt-2 text-xs text-ink-faint">{countOf(p.memberCount, "member")}</p>
               </Link>
             </li>
           ))}

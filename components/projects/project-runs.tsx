@@ -1,5 +1,7 @@
 import Link from "next/link";
 import type { RunSummary } from "@/lib/runs/types";
+import { conditionWords, FACE_WORDS } from "@/lib/vocabulary";
+import { StatusBadge } from "@/components/runs/list/status-badge";
 
 const fmt = (v: number | null) => (v === null ? "—" : v.toFixed(3));
 
@@ -14,7 +16,7 @@ export function ProjectRuns({ runs }: { runs: RunSummary[] }) {
         <tr>
           <th className="px-3 py-2">Run</th>
           <th className="px-3 py-2">Section</th>
-          <th className="px-3 py-2">Case</th>
+          <th className="px-3 py-2">Loading condition</th>
           <th className="px-3 py-2">Face</th>
           <th className="px-3 py-2 text-right">FS Bishop</th>
           <th className="px-3 py-2">Status</th>
@@ -31,10 +33,12 @@ export function ProjectRuns({ runs }: { runs: RunSummary[] }) {
             <td className="px-3 py-2">
               {r.sectionName} v{r.sectionVersion}
             </td>
-            <td className="px-3 py-2">{r.loadCase}</td>
-            <td className="px-3 py-2">{r.face}</td>
+            <td className="px-3 py-2">{conditionWords(r.loadingCondition)}</td>
+            <td className="px-3 py-2">{FACE_WORDS[r.face] ?? r.face}</td>
             <td className="px-3 py-2 text-right tabular-nums">{fmt(r.fsBishop)}</td>
-            <td className="px-3 py-2">{r.status}</td>
+            <td className="px-3 py-2">
+              <StatusBadge status={r.status} belowRequired={r.belowRequiredReason !== null} />
+            </td>
           </tr>
         ))}
       </tbody>

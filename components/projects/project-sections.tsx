@@ -1,6 +1,6 @@
 import Link from "next/link";
 import type { SectionSummary } from "@/lib/sections/types";
-import { formatDate } from "@/lib/format";
+import { formatDate, countOf } from "@/lib/format";
 import { ArchiveSectionButton } from "./archive-section-button";
 
 function SectionRows({
@@ -22,7 +22,7 @@ function SectionRows({
             </Link>
             <p className="text-xs text-ink-soft">
               v{s.currentVersion} · saved by {s.updatedByName} on {formatDate(s.updatedAt)} ·{" "}
-              {s.runCount === 1 ? "1 run" : `${s.runCount} runs`}
+              {countOf(s.runCount, "run")}
               {s.archivedAt ? ` · archived ${formatDate(s.archivedAt)}` : ""}
             </p>
           </div>

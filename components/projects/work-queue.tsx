@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
+import { conditionWords, faceWords } from "@/lib/vocabulary";
 import {
   daysWaiting,
   daysWaitingWords,
@@ -10,7 +10,6 @@ import {
 import { PassMark, StatusBadge } from "@/components/runs/list/status-badge";
 
 const runHref = (r: QueueRun, review = false) => `/projects/${r.projectId}/runs/${r.id}${review ? "/review" : ""}`;
-const conditionWords = (key: string) => loadingCondition(key as LoadingConditionKey)?.label ?? key;
 const day = (iso: string | null) => (iso ? iso.slice(0, 10) : "—");
 
 function Fs({ run }: { run: QueueRun }) {
@@ -88,7 +87,8 @@ export function ReviewerQueuePanel({ queue, now }: { queue: ReviewerQueue; now: 
                         {r.sectionName} v{r.sectionVersion}
                       </td>
                       <td className={TD}>
-                        {conditionWords(r.loadingCondition)}, <span className="text-ink-soft">{r.face}</span>
+                        {conditionWords(r.loadingCondition)},{" "}
+                        <span className="text-ink-soft">{faceWords(r.face, true)}</span>
                       </td>
                       <td className={TD}>
                         <Fs run={r} />

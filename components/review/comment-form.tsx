@@ -3,6 +3,7 @@
 import { useState } from "react";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
 import { useRunAction } from "./use-run-action";
+import { countOf } from "@/lib/format";
 
 type Attach = "none" | "place" | "slice";
 
@@ -121,7 +122,7 @@ export function CommentForm({ apiBase, sliceCounts, pin, placing, onPlacing, onC
               >
                 {methods.map((m) => (
                   <option key={m} value={m}>
-                    {METHOD_LABEL[m]} ({sliceCounts[m]} slices)
+                    {METHOD_LABEL[m]} ({countOf(sliceCounts[m] ?? 0, "slice")})
                   </option>
                 ))}
               </select>

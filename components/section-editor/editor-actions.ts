@@ -12,10 +12,11 @@ import {
   setPhreatic,
   setRegionMaterial,
 } from "@/lib/editor/document-edits";
-import { draftProblem, type Draft } from "@/lib/editor/drafts";
+import { appendDraftPoint, closesDraft, draftProblem, type Draft } from "@/lib/editor/drafts";
+import { groundSurface } from "@/lib/editor/ground-surface";
 import { parseIssuePath } from "@/lib/editor/issue-paths";
 import { ownerOf, ownerPoints, selectedVertex, type Owner, type Selection, type VertexRef } from "@/lib/editor/refs";
-import { setReservoirLevel, type Side } from "@/lib/editor/reservoir-level";
+import { setReservoirLevel, sideOf, type Side } from "@/lib/editor/reservoir-level";
 import { nudgeStep } from "@/lib/editor/snapping";
 import type { EditorIssue } from "./types";
 
@@ -88,6 +89,15 @@ export function createEditorActions(ctx: EditorContext) {
     ctx.commit(moveSharedVertex(doc, ref, p));
   };
 
+  const applyReservoir = (side: Side, y: number) => {
+    if (!editable()) return;
+    const r = setReservoirLevel(doc, side, y);
+    if (!r.ok) return ctx.say(r.reason);
+    ctx.commit(r.doc);
+    ctx.setSelection({ kind: "phreatic", vertex: null });
+    ctx.say(`Reservoir set at ${y.toFixed(2)} m on the ${side}.`);
+  };
+
   return {
     finishDraft,
     deletePointAt,
@@ -139,13 +149,23 @@ export function createEditorActions(ctx: EditorContext) {
       if (editable()) ctx.commit(setRegionMaterial(doc, region, key));
     },
 
-    applyReservoir(side: Side, y: number) {
+    applyReservoir,
+
+    /**
+     * The keyboard's click: with a drawing tool, adds the point to the outline or line being drawn
+     * (on the first corner it closes the outline); with the reservoir tool, sets the pool there.
+     */
+    placeAt(tool: "region" | "phreatic" | "reservoir", p: Point) {
       if (!editable()) return;
-      const r = setReservoirLevel(doc, side, y);
-      if (!r.ok) return ctx.say(r.reason);
-      ctx.commit(r.doc);
-      ctx.setSelection({ kind: "phreatic", vertex: null });
-      ctx.say(`Reservoir set at ${y.toFixed(2)} m on the ${side}.`);
+      if (tool === "reservoir") return applyReservoir(sideOf(groundSurface(doc.regions), p[0]), p[1]);
+      const draft = ctx.draft?.kind === tool ? ctx.draft : { kind: tool, points: [] };
+      if (closesDraft(draft, p)) return finishDraft();
+      const step = appendDraftPoint(draft, p);
+      if (!step.ok) return ctx.say(step.reason);
+      ctx.setDraft(step.draft);
+      ctx.say(
+        `${tool === "region" ? "Corner" : "Point"} ${step.draft.points.length} at x ${p[0].toFixed(2)} m, elevation ${p[1].toFixed(2)} m.`,
+      );
     },
 
     /** Selects what an issue's path names and brings its location into view. */

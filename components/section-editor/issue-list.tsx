@@ -1,6 +1,8 @@
 "use client";
 
+import { placeWords } from "@/lib/issue-words";
 import type { EditorIssue } from "./types";
+import { countOf } from "@/lib/format";
 
 interface IssueListProps {
   issues: EditorIssue[];
@@ -20,8 +22,7 @@ export function IssueList({ issues, focused, onPick }: IssueListProps) {
       ) : (
         <>
           <p className="mb-2 text-xs text-ink-soft">
-            {errors} {errors === 1 ? "error" : "errors"}, {warnings} {warnings === 1 ? "warning" : "warnings"}. Pick one
-            to find it.
+            {countOf(errors, "error")}, {countOf(warnings, "warning")}. Pick one to find it.
           </p>
           <ol className="flex max-h-72 flex-col gap-1 overflow-y-auto">
             {issues.map((issue, i) => {
@@ -41,8 +42,8 @@ export function IssueList({ issues, focused, onPick }: IssueListProps) {
                       {i + 1}. {warning ? "Warning" : "Error"}
                     </span>
                     <span className="text-ink">{issue.message}</span>
-                    <span className="mt-0.5 block font-mono text-[10px] text-ink-faint">
-                      {issue.path || "section"}
+                    <span className="mt-0.5 block text-[11px] text-ink-faint">
+                      {placeWords(issue.path)}
                       {issue.at ? ` · at (${issue.at[0].toFixed(2)}, ${issue.at[1].toFixed(2)})` : ""}
                     </span>
                   </button>

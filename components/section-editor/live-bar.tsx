@@ -5,6 +5,7 @@ import type { LiveDisplay } from "@/lib/live/live-scheduler";
 import type { LiveSetup } from "@/lib/live/live-setup";
 import { METHOD_SHORT } from "@/lib/runs/view/warning-text";
 import type { LiveAnswer } from "@/components/runs/setup/use-live-search";
+import { countOf } from "@/lib/format";
 
 interface LiveBarProps {
   on: boolean;
@@ -32,7 +33,7 @@ export function LiveBar({ on, onToggle, display, setup, circles, onKeep, canKeep
         {on && setup ? (
           <span className="text-xs text-ink-faint">
             {setup.source === "last-run" ? "Search of the last run" : "Automatic search of the downstream face"} ·{" "}
-            {circles.toLocaleString("en")} circles
+            {countOf(circles, "circle")}
           </span>
         ) : (
           <span className="text-xs text-ink-faint">The factor of safety follows the drawing as you drag.</span>

@@ -13,7 +13,8 @@ import { DEFAULT_GRID_STEP } from "@/lib/editor/snapping";
 import { createEditorActions } from "./editor-actions";
 import { IssueList } from "./issue-list";
 import { SelectionPanel } from "./selection-panel";
-import { ShortcutHelp, StatusBar } from "./status-bar";
+import { ShortcutHelp } from "./shortcut-help";
+import { describeSelection, StatusBar } from "./status-bar";
 import { Toolbar } from "./toolbar";
 import type { CanvasPointer, SectionEditorProps, ToolName } from "./types";
 import { useCanvasPointer } from "./use-canvas-pointer";
@@ -77,6 +78,7 @@ export function SectionEditor({
   const [focusedIssue, setFocusedIssue] = useState<number | null>(null);
   const [newRegionMaterial, setNewRegionMaterial] = useState(materials[0]?.key ?? doc.materials[0]?.id ?? "");
   const containerRef = useRef<HTMLDivElement>(null);
+  const rootRef = useRef<HTMLDivElement>(null);
   const commit = (next: SectionDocument) => history.commit(storeDrawnWater(stored, next, activeWater));
 
   // Undo or a deletion can leave the selection pointing past the end.
@@ -138,6 +140,11 @@ export function SectionEditor({
     zoomBy: (f) => view.zoomBy(f),
     fit: view.fit,
     readOnly,
+    doc,
+    bounds,
+    gridStep,
+    rootRef,
+    canvasRef: containerRef,
   });
   const pointer = useCanvasPointer({
     ...editing,
@@ -149,6 +156,9 @@ export function SectionEditor({
     zoomBy: view.zoomBy,
     setPreview,
   });
+
+  // The keyboard's cursor stands in for the pointer while a drawing tool is active.
+  const hover = pointer.hover ?? keys.cursor;
 
   // React's wheel listener is passive; zooming must stop the page from scrolling.
   const handleWheel = useEffectEvent((e: Parameters<typeof pointer.handle>[0]) => pointer.handle(e));
@@ -191,11 +201,11 @@ export function SectionEditor({
   };
 
   const reservoirPreview = useMemo(() => {
-    if (tool !== "reservoir" || !pointer.hover || readOnly) return null;
-    const y = pointer.hover.snapped[1];
-    const span = reservoirSpan(ground, sideOf(ground, pointer.hover.snapped[0]), y);
+    if (tool !== "reservoir" || !hover || readOnly) return null;
+    const y = hover.snapped[1];
+    const span = reservoirSpan(ground, sideOf(ground, hover.snapped[0]), y);
     return span ? { y, ...span } : null;
-  }, [tool, pointer.hover, ground, readOnly]);
+  }, [tool, hover, ground, readOnly]);
 
   const cursor =
     pointer.gesture === "pan"
@@ -210,7 +220,13 @@ export function SectionEditor({
   const v = view.view;
 
   return (
-    <div data-testid="section-editor" className="flex flex-col gap-3" onKeyDown={keys.onKeyDown} onKeyUp={keys.onKeyUp}>
+    <div
+      ref={rootRef}
+      data-testid="section-editor"
+      className="flex flex-col gap-3"
+      onKeyDown={keys.onKeyDown}
+      onKeyUp={keys.onKeyUp}
+    >
       <Toolbar
         tool={tool}
         onTool={setTool}
@@ -246,8 +262,9 @@ export function SectionEditor({
               }
               tabIndex={0}
               role="application"
-              aria-label="Section drawing. Use the tool keys, arrows to move the selected vertex, plus and minus to zoom."
-              className="relative overflow-hidden rounded-lg"
+              aria-label="Section drawing. Tab chooses a region, arrows choose and move a vertex, Enter types its coordinates, question mark lists every key."
+              aria-describedby="editor-chosen"
+              className="relative overflow-hidden rounded-lg outline-none focus:ring-2 focus:ring-clay-600 focus:ring-offset-2"
               style={{ height, cursor }}
               onMouseDown={forward("down")}
               onMouseMove={forward("move")}
@@ -268,7 +285,7 @@ export function SectionEditor({
                   tool={tool}
                   selection={selection}
                   draft={draft}
-                  hover={pointer.hover}
+                  hover={hover}
                   issues={issues}
                   focusedIssue={focusedIssue}
                   reservoirPreview={reservoirPreview}
@@ -289,8 +306,13 @@ export function SectionEditor({
               keepLabel={live.keepLabel}
             />
           ) : null}
-          <StatusBar tool={tool} hover={pointer.hover} message={message} />
-          <ShortcutHelp />
+          <StatusBar
+            tool={tool}
+            hover={hover}
+            message={message}
+            chosen={describeSelection(doc, selection, materials)}
+          />
+          <ShortcutHelp open={keys.helpOpen} onToggle={() => keys.setHelpOpen(!keys.helpOpen)} />
         </div>
         <aside className="flex w-full flex-col gap-3 lg:w-80" aria-label="Section details">
           <SelectionPanel

@@ -3,6 +3,7 @@
 import type { SectionDocument } from "@/lib/stability";
 import type { Selection } from "@/lib/editor/refs";
 import type { MaterialSwatch, ToolName } from "./types";
+import { countOf } from "@/lib/format";
 
 interface SelectionPanelProps {
   doc: SectionDocument;
@@ -76,7 +77,7 @@ export function SelectionPanel(p: SelectionPanelProps) {
               style={{ background: swatch?.color ?? "#bdb6aa" }}
             />
             <h3 className="text-sm font-semibold">Region {sel.region + 1}</h3>
-            <span className="text-xs text-ink-faint">{region.points.length} vertices</span>
+            <span className="text-xs text-ink-faint">{countOf(region.points.length, "vertex", "vertices")}</span>
           </div>
           <label className="label" htmlFor="region-material">
             Material
@@ -92,10 +93,12 @@ export function SelectionPanel(p: SelectionPanelProps) {
       ) : sel?.kind === "phreatic" && p.doc.water?.phreatic ? (
         <div className="mb-1">
           <h3 className="text-sm font-semibold">Phreatic line</h3>
-          <p className="text-xs text-ink-faint">{p.doc.water.phreatic.length} points, left to right.</p>
+          <p className="text-xs text-ink-faint">{countOf(p.doc.water.phreatic.length, "point")}, left to right.</p>
         </div>
       ) : (
-        <p className="text-xs text-ink-faint">Nothing selected. Click a region or the phreatic line.</p>
+        <p className="text-xs text-ink-faint">
+          Nothing selected. Click a region or the phreatic line, or press Tab in the drawing.
+        </p>
       )}
       {sel && !p.readOnly && (
         <div className="mt-3 flex flex-wrap gap-1.5">

@@ -1,4 +1,5 @@
 import type { ParsedDrop } from "./parse-drop";
+import { countOf } from "@/lib/format";
 
 /** One dropped file: its problems by row and column, then the first rows as read. */
 export function DropPreview({ drop }: { drop: ParsedDrop }) {
@@ -8,9 +9,7 @@ export function DropPreview({ drop }: { drop: ParsedDrop }) {
       <div className="flex items-center justify-between border-b border-rule bg-paper-sunk px-3 py-1.5 text-sm">
         <span className="font-medium">{drop.fileName}</span>
         <span className={drop.apply ? "text-moss-700" : "text-alarm-700"}>
-          {drop.apply
-            ? `✓ ${drop.summary}`
-            : `✕ ${drop.problems.length} problem${drop.problems.length === 1 ? "" : "s"}`}
+          {drop.apply ? `✓ ${drop.summary}` : `✕ ${countOf(drop.problems.length, "problem")}`}
         </span>
       </div>
       {drop.problems.length > 0 ? (

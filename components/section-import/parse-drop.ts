@@ -8,6 +8,7 @@ import {
   type SectionFileKind,
 } from "@/lib/section-io";
 import { validateSection, type SectionDocument } from "@/lib/stability";
+import { countOf } from "@/lib/format";
 
 /** One dropped file after parsing: what it is, what it would change, and every problem found. */
 export interface ParsedDrop {
@@ -54,7 +55,7 @@ export function parseDroppedFile(fileName: string, text: string, knownMaterialId
         problems: [],
         preview: r.preview,
         warnings: r.warnings,
-        summary: `Geometry: ${r.value.length} region${r.value.length === 1 ? "" : "s"}, ${r.value.reduce((n, g) => n + g.points.length, 0)} points`,
+        summary: `Geometry: ${countOf(r.value.length, "region")}, ${r.value.reduce((n, g) => n + g.points.length, 0)} points`,
         apply: (doc) => ({
           ...doc,
           regions: r.value.map((g) => ({
@@ -74,7 +75,7 @@ export function parseDroppedFile(fileName: string, text: string, knownMaterialId
         problems: [],
         preview: r.preview,
         warnings: r.warnings,
-        summary: `Phreatic line: ${r.value.length} points`,
+        summary: `Phreatic line: ${countOf(r.value.length, "point")}`,
         apply: (doc) => ({
           ...doc,
           water: { ...(doc.water ?? {}), ru: undefined, phreatic: r.value.map(([x, y]) => [x, y] as [number, number]) },
@@ -121,7 +122,7 @@ export function parseDroppedFile(fileName: string, text: string, knownMaterialId
       return {
         ...base,
         problems: [],
-        summary: `Section document: ${v.section.regions.length} regions, ${v.section.materials.length} materials`,
+        summary: `Section document: ${countOf(v.section.regions.length, "region")}, ${countOf(v.section.materials.length, "material")}`,
         apply: () => v.section,
       };
     }

@@ -1,6 +1,7 @@
 import type { SectionDocument } from "@/lib/stability";
 import { materialPalette } from "@/lib/sections/material-palette";
 import { CANVAS_COLORS, REGION_FILL_OPACITY } from "@/components/section-editor/palette";
+import { countOf } from "@/lib/format";
 
 const W = 640;
 const H = 260;
@@ -31,7 +32,7 @@ export function SectionPreview({ document: doc }: { document: SectionDocument })
         viewBox={`0 0 ${W} ${H}`}
         className="h-auto w-full"
         role="img"
-        aria-label={`Drawing of the imported section: ${doc.regions.length} regions`}
+        aria-label={`Drawing of the imported section: ${countOf(doc.regions.length, "region")}`}
       >
         <rect x={0} y={0} width={W} height={H} fill={CANVAS_COLORS.paper} />
         {doc.regions.map((r, i) => (

@@ -10,6 +10,7 @@ import { FieldError, FormBanner } from "@/components/ui/form-message";
 import { FormProblem, useApiForm } from "@/components/ui/use-api-form";
 import { ImportPanel } from "@/components/section-import/import-panel";
 import { SectionPreview } from "@/components/section-import/section-preview";
+import { countOf } from "@/lib/format";
 
 const EMPTY: SectionDocument = { version: 1, materials: [], regions: [] } as unknown as SectionDocument;
 
@@ -71,8 +72,7 @@ export function NewSectionForm({ projectId }: { projectId: number }) {
           {imported && check && !check.ok ? (
             <div className="panel p-3 text-sm" data-testid="new-section-issues">
               <p className="font-medium text-alarm-700">
-                The imported section has {check.errors.length} problem{check.errors.length === 1 ? "" : "s"}; fix the
-                files and drop them again:
+                The imported section has {countOf(check.errors.length, "problem")}; fix the files and drop them again:
               </p>
               <ul className="mt-1 list-disc pl-5 text-xs">
                 {check.errors.map((e, i) => (

@@ -12,6 +12,7 @@ import { ImportPanel } from "@/components/section-import/import-panel";
 import { ExportButtons } from "@/components/section-import/export-buttons";
 import { VersionList } from "./version-list";
 import { useValidation } from "./use-validation";
+import { countOf } from "@/lib/format";
 
 export interface SectionWorkspaceProps {
   projectId: number;
@@ -137,7 +138,7 @@ export function SectionWorkspace({
             </button>
             {errors.length > 0 ? (
               <span className="text-xs text-alarm-700">
-                Fix the {errors.length} problem{errors.length === 1 ? "" : "s"} listed beside the drawing to save.
+                Fix the {countOf(errors.length, "problem")} listed beside the drawing to save.
               </span>
             ) : !dirty ? (
               <span className="text-xs text-ink-faint">No unsaved changes.</span>

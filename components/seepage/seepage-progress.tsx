@@ -1,6 +1,7 @@
 "use client";
 
 import type { SeepageRunState } from "./use-seepage-run";
+import { messageWords, placeWords } from "@/lib/issue-words";
 
 /** Free-surface rounds as progress, with cancel; the input problems a solve found, each with its place. */
 export function SeepageProgress({ state, onCancel }: { state: SeepageRunState; onCancel: () => void }) {
@@ -34,7 +35,7 @@ export function SeepageProgress({ state, onCancel }: { state: SeepageRunState; o
       <ul className="list-disc pl-5 text-sm text-alarm-700" data-testid="seepage-errors">
         {state.errors.map((e, i) => (
           <li key={i}>
-            {e.message} <span className="font-mono text-xs">({e.path})</span>
+            {messageWords(e.message)} <span className="text-xs">({placeWords(e.path)})</span>
           </li>
         ))}
       </ul>

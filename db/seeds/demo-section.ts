@@ -9,7 +9,7 @@ import type { StoredSection, WaterCondition } from "../../lib/sections/water-con
  * The phreatic line is the Kozeny–Casagrande line for that drain, treating the foundation as
  * much less permeable than the fill (stated on the section so the engineer can change it).
  * Its water conditions are the set a dam file carries (levels invented): steady seepage at the
- * maximum storage and surcharge pools, end of construction with no reservoir, and a drawdown
+ * normal and flood pools, end of construction with no reservoir, and a drawdown
  * from each pool.
  */
 export const DEMO_POOL = { normal: 16, flood: 17, drawdownTo: 8, constructionGroundwater: 5.5 };
@@ -92,14 +92,14 @@ function demoWaterConditions(materials: SectionDocument["materials"]): WaterCond
   return [
     {
       id: "storage-pool",
-      name: `Steady seepage, maximum storage pool ${DEMO_POOL.normal.toFixed(1)} m`,
+      name: `Steady seepage, normal pool ${DEMO_POOL.normal.toFixed(1)} m`,
       kind: "steady",
       water: storage,
       usualFor: ["steady-seepage"],
     },
     {
       id: "surcharge-pool",
-      name: `Steady seepage, maximum surcharge pool ${DEMO_POOL.flood.toFixed(1)} m`,
+      name: `Steady seepage, flood pool ${DEMO_POOL.flood.toFixed(1)} m`,
       kind: "steady",
       water: surcharge,
       usualFor: ["surcharge-pool"],

@@ -81,7 +81,7 @@ function zonedWaterConditions(): WaterCondition[] {
   return [
     {
       id: "storage-pool",
-      name: `Steady seepage, maximum storage pool ${ZONED_POOL.toFixed(1)} m`,
+      name: `Steady seepage, normal pool ${ZONED_POOL.toFixed(1)} m`,
       kind: "steady",
       // A hand-drawn line for the stability check; the seepage view computes the real one.
       water: {

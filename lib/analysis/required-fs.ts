@@ -4,12 +4,15 @@
  * steady seepage at maximum storage pool 1.5 (from memory); maximum surcharge pool 1.4 (from
  * memory); rapid drawdown 1.1–1.3 (range published; 1.3 from maximum storage pool and 1.1 from
  * maximum surcharge pool, the split from memory). Local codes and the engineer of record govern;
- * projects may change each value with a stated reason.
+ * projects may change each value with a stated reason. The guideline's maximum storage and maximum
+ * surcharge pools are called the normal and the flood pool here, as in the designer (lib/vocabulary.ts).
  */
+import { CONDITION_WORDS } from "@/lib/vocabulary";
+
 export const LOADING_CONDITIONS = [
   {
     key: "end-of-construction",
-    label: "End of construction",
+    label: CONDITION_WORDS["end-of-construction"],
     engineCase: "undrained",
     faces: "both",
     requiredFs: 1.3,
@@ -17,7 +20,7 @@ export const LOADING_CONDITIONS = [
   },
   {
     key: "steady-seepage",
-    label: "Long-term steady seepage (maximum storage pool)",
+    label: CONDITION_WORDS["steady-seepage"],
     engineCase: "steady",
     faces: "downstream",
     requiredFs: 1.5,
@@ -25,7 +28,7 @@ export const LOADING_CONDITIONS = [
   },
   {
     key: "surcharge-pool",
-    label: "Maximum surcharge pool",
+    label: CONDITION_WORDS["surcharge-pool"],
     engineCase: "steady",
     faces: "downstream",
     requiredFs: 1.4,
@@ -33,7 +36,7 @@ export const LOADING_CONDITIONS = [
   },
   {
     key: "drawdown-storage",
-    label: "Rapid drawdown from maximum storage pool",
+    label: CONDITION_WORDS["drawdown-storage"],
     engineCase: "drawdown",
     faces: "upstream",
     requiredFs: 1.3,
@@ -41,7 +44,7 @@ export const LOADING_CONDITIONS = [
   },
   {
     key: "drawdown-surcharge",
-    label: "Rapid drawdown from maximum surcharge pool",
+    label: CONDITION_WORDS["drawdown-surcharge"],
     engineCase: "drawdown",
     faces: "upstream",
     requiredFs: 1.1,
@@ -56,7 +59,8 @@ export const LOADING_CONDITION_KEYS = LOADING_CONDITIONS.map((c) => c.key) as [
 ];
 
 export const GUIDANCE_NOTE =
-  "Defaults follow one published guideline; local codes and the engineer of record decide the values that apply.";
+  "Defaults follow one published guideline; local codes and the engineer of record decide the values that apply. " +
+  "The normal and flood pools are what that guideline calls the maximum storage and maximum surcharge pools.";
 
 export function loadingCondition(key: LoadingConditionKey) {
   return LOADING_CONDITIONS.find((c) => c.key === key)!;

@@ -12,3 +12,4 @@ export * from "./issue-paths";
 export * from "./bounds";
 export * from "./drafts";
 export * from "./move-parts";
+export * from "./keyboard-selection";

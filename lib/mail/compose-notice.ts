@@ -5,6 +5,7 @@
 import { CAUTION_TEXT } from "@/lib/caution";
 import type { NoticeKind } from "@/lib/review/notices";
 import { formatDateTime } from "@/lib/format";
+import { faceWords } from "@/lib/vocabulary";
 
 export interface NoticeFacts {
   projectName: string;
@@ -45,7 +46,7 @@ function runLines(f: NoticeFacts): string[] {
     `Project:           ${f.projectName}`,
     `Run:               ${f.runTitle} (run ${f.runId})`,
     `Section:           ${f.section}`,
-    `Loading condition: ${f.condition}, ${f.face} face`,
+    `Loading condition: ${f.condition}, ${faceWords(f.face, true)}`,
     "Factors of safety:",
     ...[
       fsLine("Bishop's simplified", f.fs.bishop, f.requiredFs),

@@ -1,6 +1,6 @@
 import "server-only";
 import { readServerEnv } from "@/lib/env";
-import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
+import { conditionWords } from "@/lib/vocabulary";
 import type { RunDetail } from "@/lib/runs/types";
 import { fetchRunComments, recordRunEvent } from "@/db/queries/review";
 import { fetchNoticeRecipients, type NoticeRecipient } from "@/db/queries/notifications";
@@ -49,7 +49,7 @@ async function factsFor(kind: NoticeKind, input: TransitionNoticeInput): Promise
     runId: run.id,
     runTitle: run.title,
     section: `${run.sectionName} v${run.sectionVersion}`,
-    condition: loadingCondition(run.loadingCondition as LoadingConditionKey)?.label ?? run.loadingCondition,
+    condition: conditionWords(run.loadingCondition),
     face: run.face,
     requiredFs: run.requiredFs,
     fs: { bishop: run.fsBishop, fellenius: run.fsFellenius },

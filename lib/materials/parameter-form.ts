@@ -64,32 +64,5 @@ export function parametersFromForm(values: ParameterFormValues): ParametersFromF
   return { ok: true, parameters: out as MaterialParameters };
 }
 
-/** A very small or large number as the trade writes it: 4.9 × 10⁻⁸ (three significant figures at most). */
-export function formatScientific(value: number | undefined | null, digits = 2): string {
-  if (value === undefined || value === null || !Number.isFinite(value)) return "—";
-  if (value === 0) return "0";
-  const [mantissa, exponent] = value.toExponential(digits).split("e");
-  const sup: Record<string, string> = {
-    "-": "⁻",
-    "+": "",
-    0: "⁰",
-    1: "¹",
-    2: "²",
-    3: "³",
-    4: "⁴",
-    5: "⁵",
-    6: "⁶",
-    7: "⁷",
-    8: "⁸",
-    9: "⁹",
-  };
-  const power = [...exponent].map((ch) => sup[ch] ?? ch).join("");
-  return `${mantissa} × 10${power}`;
-}
-
-/** A number for tables: fixed decimals, without a trailing "-0". */
-export function formatValue(value: number | undefined | null, digits = 1): string {
-  if (value === undefined || value === null || !Number.isFinite(value)) return "—";
-  const s = value.toFixed(digits);
-  return /^-0(\.0+)?$/.test(s) ? s.slice(1) : s;
-}
+// Number formats live in the one formatting module.
+export { formatScientific, formatValue } from "@/lib/format";

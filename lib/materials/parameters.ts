@@ -59,8 +59,8 @@ export interface ParameterInfo {
 export const PARAMETER_INFO: Record<ParameterKey, ParameterInfo> = {
   gamma: { label: "Unit weight", symbol: "γ", unit: "kN/m³" },
   gammaSat: { label: "Saturated unit weight", symbol: "γsat", unit: "kN/m³" },
-  c: { label: "Effective cohesion", symbol: "c'", unit: "kPa" },
-  phi: { label: "Effective friction angle", symbol: "φ'", unit: "°" },
+  c: { label: "Effective cohesion", symbol: "c′", unit: "kPa" },
+  phi: { label: "Effective friction angle", symbol: "φ′", unit: "°" },
   su: { label: "Undrained shear strength", symbol: "su", unit: "kPa" },
   suGradient: { label: "Increase of su per metre of depth", symbol: "su gradient", unit: "kPa/m" },
   suDatum: { label: "Elevation where su applies", symbol: "su datum", unit: "m" },
@@ -78,11 +78,8 @@ export const MODEL_PARAMETERS: Record<MaterialModel, readonly ParameterKey[]> = 
   impenetrable: ["gamma"],
 };
 
-export const MODEL_LABELS: Record<MaterialModel, string> = {
-  "mohr-coulomb": "Drained strength (c', φ')",
-  undrained: "Undrained strength (su, φ = 0)",
-  impenetrable: "Impenetrable (no slip through it)",
-};
+// The model names live with every other code-to-words mapping, in lib/vocabulary.ts.
+export { MODEL_LABELS } from "@/lib/vocabulary";
 
 /** The value of a numeric parameter, or undefined when the model lacks it or it is unset. */
 export function parameterValue(p: MaterialParameters, key: ParameterKey): number | undefined {

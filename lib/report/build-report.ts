@@ -17,7 +17,8 @@ import { drawSection } from "./section-drawing";
 import { waterUsedText } from "@/lib/runs/view/water-used";
 import { writeSliceTable } from "./slice-pages";
 import { VARIANT_TEXT, stageCells, stagedView } from "@/lib/runs/view/staged-view";
-import { formatCount, formatDateTime } from "@/lib/format";
+import { countOf, formatCount, formatDateTime, withUnit } from "@/lib/format";
+import { conditionWords, faceWords, MODEL_SHORT } from "@/lib/vocabulary";
 import { writeSensitivity, type ReportSensitivity } from "./sensitivity-section";
 import { writeProbabilistic, type ReportProbabilistic } from "./probabilistic-section";
 
@@ -121,10 +122,7 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
     ["Section", `${run.sectionName}, version ${run.sectionVersion}`],
     ["Run", `${run.title} (run ${run.id})${run.revisesRunId ? `, revising run ${run.revisesRunId}` : ""}`],
     ["Analysed by", `${run.authorName}, ${day(run.createdAt)}, engine ${run.engineVersion}`],
-    [
-      "Loading condition",
-      `${condition?.label ?? run.loadingCondition} (engine case: ${run.result.case}), ${run.face} face`,
-    ],
+    ["Loading condition", `${condition?.label ?? conditionWords(run.loadingCondition)}, ${faceWords(run.face, true)}`],
     [
       "Required FS",
       `${run.requiredFs.toFixed(2)}${condition ? ` — default from ${condition.basis}; the project may have set its own value` : ""}`,
@@ -137,7 +135,7 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
     const ys = water.phreatic.map((p) => p[1]);
     rows.push([
       "Phreatic line",
-      `${water.phreatic.length} points, x ${m2(water.phreatic[0][0])} to ${m2(water.phreatic.at(-1)![0])} m, elevation ${m2(Math.min(...ys))} to ${m2(Math.max(...ys))} m`,
+      `${countOf(water.phreatic.length, "point")}, x ${m2(water.phreatic[0][0])} to ${m2(water.phreatic.at(-1)![0])} m, elevation ${m2(Math.min(...ys))} to ${m2(Math.max(...ys))} m`,
     ]);
     if (water.cos2Correction) rows.push(["Pore pressure", "phreatic head reduced by cos² of the line's slope"]);
   }
@@ -228,6 +226,8 @@ function writeResults(w: ReportWriter, input: ReportInput): void {
     );
 }
 
+const modelShort = (model: string) => (MODEL_SHORT as Record<string, string>)[model] ?? model;
+
 function materialRemark(model: string): string {
   return model === "impenetrable"
     ? "no slip surface may enter it; no strength is used"
@@ -284,12 +284,13 @@ function writeMaterials(w: ReportWriter, input: ReportInput): void {
   const rows: string[][] = [];
   for (const m of input.materials) {
     // An impenetrable layer often has no number at all, yet it bounds every slip surface: list it anyway.
-    if (m.parameters.length === 0) rows.push([`${m.name} (${m.key})`, m.model, "—", materialRemark(m.model)]);
+    if (m.parameters.length === 0)
+      rows.push([`${m.name} (${m.key})`, modelShort(m.model), "—", materialRemark(m.model)]);
     m.parameters.forEach((p, i) =>
       rows.push([
         i === 0 ? `${m.name} (${m.key})` : "",
-        i === 0 ? m.model : "",
-        `${p.symbol} = ${p.value} ${p.unit}`,
+        i === 0 ? modelShort(m.model) : "",
+        `${p.symbol} = ${withUnit(p.value, p.unit)}`,
         p.source ?? (m.inLibrary ? "typed value, no lab set" : "not in the library: value of the section"),
       ]),
     );

@@ -1,3 +1,5 @@
+import { STATUS_WORDS } from "@/lib/vocabulary";
+
 /**
  * The review life of a run. A run is saved as a draft; its author submits it; a reviewer who is
  * not its author approves it (signed off) or returns it with a note. A returned run stays as it
@@ -20,24 +22,11 @@ export const TRANSITIONS: Record<TransitionAction, Transition> = {
   return: { from: "submitted", to: "returned" },
 };
 
-/** Short labels of a status, for its badge and the runs filter. */
-export const STATUS_LABELS: Record<RunStatus, string> = {
-  draft: "Draft",
-  submitted: "Awaiting review",
-  returned: "Returned",
-  approved: "Signed off",
-};
-
 /** The badge and filter label of a run signed off although its FS is below the required value. */
 export const BELOW_REQUIRED_LABEL = "Signed off — below the required FS";
 
-/** Words for a status in sentences, mail and the report (the badge and filter use STATUS_LABELS). */
-export const STATUS_WORDS: Record<RunStatus, string> = {
-  draft: "draft",
-  submitted: "awaiting review",
-  returned: "returned with comments",
-  approved: "signed off",
-};
+// The words live with every other code-to-words mapping, in lib/vocabulary.ts.
+export { STATUS_LABELS, STATUS_WORDS } from "@/lib/vocabulary";
 
 export function isRunStatus(value: string): value is RunStatus {
   return (RUN_STATUSES as readonly string[]).includes(value);

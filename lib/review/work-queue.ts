@@ -4,6 +4,7 @@
  * fills them.
  */
 import type { RunStatus } from "./status";
+import { countOf } from "@/lib/format";
 
 export interface QueueRun {
   id: number;
@@ -63,5 +64,5 @@ export function daysWaiting(since: string | null, now: Date = new Date()): numbe
 /** "today", "1 day", "4 days". */
 export function daysWaitingWords(days: number): string {
   if (days <= 0) return "today";
-  return days === 1 ? "1 day" : `${days} days`;
+  return countOf(days, "day");
 }

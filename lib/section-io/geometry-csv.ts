@@ -2,6 +2,7 @@ import { RowReader, finish, readCsvTable, type CsvParseResult, type CsvProblem }
 import { polygonArea } from "@/lib/plane-geometry";
 import { writeCsv } from "./csv-write";
 import type { Point, SectionRegion } from "./section-types";
+import { countOf } from "@/lib/format";
 
 export const GEOMETRY_COLUMNS = ["region", "material", "x", "y"] as const;
 
@@ -121,9 +122,7 @@ function closeRegion(
   const region: SectionRegion = { name: d.label, material: d.material, points: kept.map((v) => v.p) };
   if (d.incomplete) return region;
   if (kept.length < 3)
-    problems.push(
-      at(`Region '${d.label}' has ${kept.length} point${kept.length === 1 ? "" : "s"}; a region needs at least 3.`),
-    );
+    problems.push(at(`Region '${d.label}' has ${countOf(kept.length, "point")}; a region needs at least 3.`));
   else if (polygonArea(kept.map((v) => v.p)) < 1e-6)
     problems.push(at(`Region '${d.label}' has no area: its points lie on one line.`));
   return region;

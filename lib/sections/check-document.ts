@@ -3,6 +3,8 @@ import { ApiError } from "@/lib/api/errors";
 import { checkWaterConditions } from "./check-water-conditions";
 import type { StoredSection } from "./water-conditions";
 import { sectionLimitErrors } from "@/lib/validations/section-limits";
+import { messageWords, placeNamesOf } from "@/lib/issue-words";
+import { countOf } from "@/lib/format";
 
 /**
  * Validates a section document with the engine's own rules, and its named water conditions, before
@@ -21,11 +23,13 @@ export function requireValidSection(raw: unknown): { document: StoredSection; wa
   const errors = result.ok ? water.errors : result.errors;
   if (!result.ok || errors.length > 0) {
     const fields: Record<string, string[]> = {};
-    for (const issue of errors) (fields[`document.${issue.path || "_"}`] ??= []).push(issue.message);
+    const names = placeNamesOf(raw);
+    for (const issue of errors)
+      (fields[`document.${issue.path || "_"}`] ??= []).push(messageWords(issue.message, names));
     throw new ApiError(
       400,
       "invalid_section",
-      `The section has ${errors.length} problem${errors.length === 1 ? "" : "s"}; nothing was saved.`,
+      `The section has ${countOf(errors.length, "problem")}; nothing was saved.`,
       fields,
     );
   }

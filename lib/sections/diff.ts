@@ -5,6 +5,8 @@
  */
 import type { Material, SectionDocument } from "@/lib/stability";
 import type { StoredSection } from "./water-conditions";
+import { countOf, withUnit } from "@/lib/format";
+import { ANALYSIS_SETTING_WORDS, analysisSettingWords, modelWords } from "@/lib/vocabulary";
 
 export type DiffArea = "materials" | "geometry" | "water" | "loads" | "analysis";
 
@@ -13,24 +15,35 @@ export interface Difference {
   /** Where, in document terms: `materials[fill].phi`, `regions[2]`, `analysis.grid`. */
   path: string;
   text: string;
+  /** What changed without its values ("fill: φ′"), for tables that show before and after in columns. */
+  what?: string;
   before?: string;
   after?: string;
 }
 
 const MATERIAL_KEYS: { key: string; label: string; unit: string }[] = [
   { key: "model", label: "model", unit: "" },
-  { key: "gamma", label: "γ", unit: " kN/m³" },
-  { key: "gammaSat", label: "γsat", unit: " kN/m³" },
-  { key: "c", label: "c'", unit: " kPa" },
-  { key: "phi", label: "φ'", unit: "°" },
-  { key: "su", label: "su", unit: " kPa" },
-  { key: "suGradient", label: "su gradient", unit: " kPa/m" },
-  { key: "suDatum", label: "su datum", unit: " m" },
+  { key: "gamma", label: "γ", unit: "kN/m³" },
+  { key: "gammaSat", label: "γsat", unit: "kN/m³" },
+  { key: "c", label: "c′", unit: "kPa" },
+  { key: "phi", label: "φ′", unit: "°" },
+  { key: "su", label: "su", unit: "kPa" },
+  { key: "suGradient", label: "su gradient", unit: "kPa/m" },
+  { key: "suDatum", label: "su datum", unit: "m" },
   { key: "freeDraining", label: "free-draining", unit: "" },
 ];
 
 const show = (v: unknown, unit = "") =>
-  v === undefined || v === null ? "—" : `${typeof v === "number" ? +v.toFixed(4) : String(v)}${unit}`;
+  v === undefined || v === null
+    ? "—"
+    : typeof v === "boolean"
+      ? v
+        ? "yes"
+        : "no"
+      : withUnit(typeof v === "number" ? +v.toFixed(4) : String(v), unit);
+/** A material setting's value: the model in words, the rest with its unit. */
+const showSetting = (key: string, v: unknown, unit: string) =>
+  key === "model" && typeof v === "string" ? modelWords(v) : show(v, unit);
 const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
 
 function diffMaterials(a: Material[], b: Material[], out: Difference[]): void {
@@ -49,9 +62,10 @@ function diffMaterials(a: Material[], b: Material[], out: Difference[]): void {
         out.push({
           area: "materials",
           path: `materials[${id}].${key}`,
-          text: `${id}: ${label} ${show(x, unit)} → ${show(y, unit)}`,
-          before: show(x, unit),
-          after: show(y, unit),
+          text: `${id}: ${label} ${showSetting(key, x, unit)} → ${showSetting(key, y, unit)}`,
+          what: `${id}: ${label}`,
+          before: showSetting(key, x, unit),
+          after: showSetting(key, y, unit),
         });
       }
     }
@@ -70,7 +84,7 @@ function diffRegions(a: SectionDocument, b: SectionDocument, out: Difference[]):
       out.push({
         area: "geometry",
         path: `regions[${i}]`,
-        text: `${label} added (${r1!.points.length} points, ${r1!.material})`,
+        text: `${label} added (${countOf(r1!.points.length, "point")}, material ${r1!.material})`,
       });
     else if (!r1) out.push({ area: "geometry", path: `regions[${i}]`, text: `${label} removed` });
     else {
@@ -79,6 +93,7 @@ function diffRegions(a: SectionDocument, b: SectionDocument, out: Difference[]):
           area: "geometry",
           path: `regions[${i}].material`,
           text: `${label}: material ${r0.material} → ${r1.material}`,
+          what: `${label}: material`,
           before: r0.material,
           after: r1.material,
         });
@@ -90,7 +105,7 @@ function diffRegions(a: SectionDocument, b: SectionDocument, out: Difference[]):
           path: `regions[${i}].points`,
           text:
             moved !== null
-              ? `${label}: ${moved} point${moved === 1 ? "" : "s"} moved`
+              ? `${label}: ${countOf(moved, "point")} moved`
               : `${label}: ${r0.points.length} → ${r1.points.length} points`,
         });
       }
@@ -113,12 +128,20 @@ function diffWater(a: SectionDocument, b: SectionDocument, out: Difference[]): v
       area: "water",
       path: "water.ru",
       text: `ru ${show(wa.ru)} → ${show(wb.ru)}`,
+      what: "ru",
       before: show(wa.ru),
       after: show(wb.ru),
     });
   if (!same(wa.gammaW, wb.gammaW))
     out.push({ area: "water", path: "water.gammaW", text: `γw ${show(wa.gammaW)} → ${show(wb.gammaW)}` });
 }
+
+const CONDITION_PART_WORDS = {
+  kind: "kind",
+  water: "water",
+  drawdownTo: "level after drawdown",
+  usualFor: "the loading conditions it is proposed for",
+} as const;
 
 const renamed = (a: string, b: string) => `water condition “${a}” renamed “${b}”`;
 
@@ -136,7 +159,11 @@ function diffWaterConditions(a: SectionDocument, b: SectionDocument, out: Differ
     if (old.name !== c.name) out.push({ area: "water", path: `${path}.name`, text: renamed(old.name, c.name) });
     const changed = (["kind", "water", "drawdownTo", "usualFor"] as const).filter((k) => !same(old[k], c[k]));
     if (changed.length > 0)
-      out.push({ area: "water", path, text: `water condition “${c.name}”: ${changed.join(", ")} changed` });
+      out.push({
+        area: "water",
+        path,
+        text: `water condition “${c.name}”: ${changed.map((k) => CONDITION_PART_WORDS[k]).join(", ")} changed`,
+      });
   }
   for (const [id, c] of before)
     if (!after.has(id))
@@ -155,13 +182,14 @@ function diffAnalysis(a: SectionDocument, b: SectionDocument, out: Difference[])
   const y = (b.analysis ?? {}) as Record<string, unknown>;
   for (const key of new Set([...Object.keys(x), ...Object.keys(y)])) {
     if (!same(x[key], y[key])) {
-      const simple = (v: unknown) => (typeof v === "object" && v !== null ? JSON.stringify(v) : show(v));
+      const words = (v: unknown) => analysisSettingWords(key, v);
       out.push({
         area: "analysis",
         path: `analysis.${key}`,
-        text: `${key}: ${simple(x[key])} → ${simple(y[key])}`,
-        before: simple(x[key]),
-        after: simple(y[key]),
+        text: `${ANALYSIS_SETTING_WORDS[key] ?? key}: ${words(x[key])} → ${words(y[key])}`,
+        what: ANALYSIS_SETTING_WORDS[key] ?? key,
+        before: words(x[key]),
+        after: words(y[key]),
       });
     }
   }
@@ -179,10 +207,10 @@ export function diffDocuments(a: SectionDocument, b: SectionDocument): Differenc
   return out;
 }
 
-/** One line for a version list, e.g. "fill: φ' 28° → 30°; phreatic line changed". */
 /** The length of section_versions.summary (db/migrations/002-sections-materials-runs.ts). */
 export const SUMMARY_MAX_LENGTH = 300;
 
+/** One line for a version list, e.g. "fill: φ′ 28° → 30°; phreatic line changed". */
 export function summarizeChange(a: SectionDocument, b: SectionDocument, max = 3): string {
   const d = diffDocuments(a, b);
   if (d.length === 0) return "No change to the section";

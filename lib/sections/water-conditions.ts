@@ -1,6 +1,6 @@
 /**
  * Named water conditions of a section. A dam is checked under several waters (steady seepage at
- * the maximum storage pool, at the surcharge pool, end of construction with no reservoir, a
+ * the normal pool, at the flood pool, end of construction with no reservoir, a
  * drawdown from one pool to another), so the stored section keeps one engine `water` block per
  * condition and a run picks one. The engine still sees ONE `water` block: the chosen condition's
  * (see documentForRun in lib/analysis/run-setup.ts).

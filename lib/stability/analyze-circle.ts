@@ -145,12 +145,12 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
   if (negO > 0)
     warnings.push({
       code: "negative-normal",
-      message: `Ordinary method: N' came out negative on ${negO} slice(s) and was set to zero.`,
+      message: `Ordinary method: N′ came out negative on ${negO} ${negO === 1 ? "slice" : "slices"} and was set to zero.`,
     });
   if (Number.isFinite(fsB) && negB > 0)
     warnings.push({
       code: "negative-normal",
-      message: `Bishop's simplified method: N' came out negative on ${negB} slice(s); their shear strength is c'·l only.`,
+      message: `Bishop's simplified method: N′ came out negative on ${negB} ${negB === 1 ? "slice" : "slices"}; their shear strength is c′·l only.`,
     });
   if (S.nMass > 1)
     warnings.push({

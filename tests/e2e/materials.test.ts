@@ -62,7 +62,7 @@ describe("materials from lab results", () => {
       await expect.poll(() => page.getByTestId("lab-set").count()).toBe(setsBefore + 1);
 
       const card = page.getByTestId("lab-set").filter({ hasText: "Borrow area B, shear box, browser test" });
-      await card.getByRole("button", { name: /^Use c'/ }).click();
+      await card.getByRole("button", { name: /^Use c′/ }).click();
       await expect
         .poll(async () => (await page.getByTestId("source-badge").allTextContents()).join(" "))
         .toMatch(/lab test set/);

@@ -68,7 +68,7 @@ describe("water per loading condition", () => {
       await page.getByRole("link", { name: /Main embankment/ }).click();
       await page.getByRole("link", { name: "New run" }).click();
       await page.getByTestId("run-setup-form").waitFor();
-      await page.getByLabel("Loading condition").selectOption({ label: "Rapid drawdown from maximum storage pool" });
+      await page.getByLabel("Loading condition").selectOption({ label: "Rapid drawdown from the normal pool" });
       // The loading condition proposes its usual water and the pools it drains between.
       expect(await page.getByTestId("water-condition").inputValue()).toBe("drawdown-storage");
       expect(await page.getByLabel("Pool before").inputValue()).toBe("16");
@@ -76,7 +76,7 @@ describe("water per loading condition", () => {
       await page.screenshot({ path: "test-results/water-run-form-drawdown.png" });
       await page.goto(projectUrl);
 
-      await runAndKeep(page, "Rapid drawdown from maximum storage pool", "Upstream, drawdown 16 to 8 m");
+      await runAndKeep(page, "Rapid drawdown from the normal pool", "Upstream, drawdown 16 to 8 m");
       expect(await page.getByTestId("run-water").textContent()).toContain("Rapid drawdown, 16.0 m to 8.0 m");
       // Over the reservoir (x = 5 m, ground at 6.0 m) water stands to the lowered pool (8.0 m), not to 16.0 m.
       expect(await waterAt(page, 5, 7)).toBe(true);

@@ -49,7 +49,7 @@ describe("sections and their versions", () => {
     const s2 = await save2.json();
     expect(s2.section.version).toBe(2);
     // The one-line summary names what changed when the user gives none.
-    expect(s2.summary).toMatch(/φ' 26° → 30°/);
+    expect(s2.summary).toMatch(/φ′ 26° → 30°/);
 
     const v3 = {
       ...v2,
@@ -69,7 +69,7 @@ describe("sections and their versions", () => {
     const detail = await (await engineer.request(`/api/projects/${projectId}/sections/${section.id}`)).json();
     expect(detail.section.versions.map((v: { version: number; summary: string }) => [v.version, v.summary])).toEqual([
       [3, "Added the seepage line"],
-      [2, expect.stringContaining("φ'")],
+      [2, expect.stringContaining("φ′")],
       [1, "First version"],
     ]);
     const first = await (await engineer.request(`/api/projects/${projectId}/sections/${section.id}/versions/1`)).json();
@@ -119,6 +119,12 @@ describe("sections and their versions", () => {
     const keys = Object.keys(body.error.fields);
     expect(keys.some((k) => k.startsWith("document.regions[0]"))).toBe(true);
     expect(keys.some((k) => k.startsWith("document.materials[0]"))).toBe(true);
+    // The messages number regions and vertices as the side panel does, from 1 (issue 18, item 5).
+    const messages = Object.values(body.error.fields as Record<string, string[]>)
+      .flat()
+      .join(" ");
+    expect(messages).toMatch(/Region 1( \([^)]*\))?: the edges between vertices \d–\d and \d–\d cross/);
+    expect(messages).not.toMatch(/regions\[\d\]|edges \d–\d and/);
     expect(await count("sections")).toBe(sectionsBefore);
   });
 

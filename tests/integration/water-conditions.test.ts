@@ -35,7 +35,7 @@ describe("water conditions", () => {
     const engineer = await signedIn("engineer@scarpline.test");
     const demo = await demoProject(engineer);
     const doc = structuredClone(demo.document) as StoredSection;
-    doc.waterConditions![1].name = "Steady seepage, maximum surcharge pool 17.0 m (checked)";
+    doc.waterConditions![1].name = "Steady seepage, flood pool 17.0 m (checked)";
     const put = (document: unknown, baseVersion: number) =>
       engineer.request(`/api/projects/${demo.projectId}/sections/${demo.sectionId}`, {
         method: "PUT",

@@ -4,8 +4,8 @@ import Link from "next/link";
 import type { RunDetail } from "@/lib/runs/types";
 import type { GridSearchSuccess, SectionDocument } from "@/lib/stability";
 import { diffDocuments } from "@/lib/sections/diff";
-import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import { waterUsedText } from "@/lib/runs/view/water-used";
+import { conditionWords, faceWords } from "@/lib/vocabulary";
 import { materialPalette } from "@/lib/sections/material-palette";
 import { OVERLAY_COLOURS } from "@/lib/runs/view/circle-styles";
 import { RunCanvas } from "@/components/runs/result/run-canvas";
@@ -44,7 +44,7 @@ export function RunComparison({ runs }: { runs: RunDetail[] }) {
         runs={runs.map((r, i) => ({
           id: r.id,
           label: `${letter(i)}: ${r.title}`,
-          detail: `${r.sectionName} v${r.sectionVersion} · ${loadingCondition(r.loadingCondition as LoadingConditionKey)?.label ?? r.loadingCondition} · ${r.face}`,
+          detail: `${r.sectionName} v${r.sectionVersion} · ${conditionWords(r.loadingCondition)} · ${faceWords(r.face, true)}`,
           water: waterUsedText(r),
           requiredFs: r.requiredFs,
           fs: { bishop: r.fsBishop, fellenius: r.fsFellenius },
@@ -57,6 +57,8 @@ export function RunComparison({ runs }: { runs: RunDetail[] }) {
           materialColors={Object.fromEntries(materialPalette(baseDoc.materials).map((m) => [m.key, m.color]))}
           overlays={overlays}
           height={460}
+          // The table above already carries the page's caution; once per page is enough.
+          caution={false}
         />
         {!sameGeometry ? (
           <p className="mt-1 text-xs text-ink-soft">
@@ -74,7 +76,10 @@ export function RunComparison({ runs }: { runs: RunDetail[] }) {
               ? {
                   area: "analysis" as const,
                   path: "requiredFs",
-                  text: `required FS ${base.requiredFs} → ${run.requiredFs}`,
+                  text: `required FS ${base.requiredFs.toFixed(2)} → ${run.requiredFs.toFixed(2)}`,
+                  what: "Required FS",
+                  before: base.requiredFs.toFixed(2),
+                  after: run.requiredFs.toFixed(2),
                 }
               : null,
             waterUsedText(run) !== waterUsedText(base)
@@ -82,13 +87,19 @@ export function RunComparison({ runs }: { runs: RunDetail[] }) {
                   area: "analysis" as const,
                   path: "waterCondition",
                   text: `water ${waterUsedText(base)} → ${waterUsedText(run)}`,
+                  what: "Water",
+                  before: waterUsedText(base),
+                  after: waterUsedText(run),
                 }
               : null,
             run.loadingCondition !== base.loadingCondition
               ? {
                   area: "analysis" as const,
                   path: "condition",
-                  text: `loading condition ${base.loadingCondition} → ${run.loadingCondition}`,
+                  text: `loading condition ${conditionWords(base.loadingCondition)} → ${conditionWords(run.loadingCondition)}`,
+                  what: "Loading condition",
+                  before: conditionWords(base.loadingCondition),
+                  after: conditionWords(run.loadingCondition),
                 }
               : null,
           ].filter((d): d is NonNullable<typeof d> => d !== null);

@@ -18,6 +18,7 @@ import { StatusBadge } from "@/components/runs/list/status-badge";
 import { PinnedCanvas } from "@/components/review/pinned-canvas";
 import type { PinMarker } from "@/lib/review/pin-markers";
 import { formatDateTime } from "@/lib/format";
+import { conditionWords, faceWords } from "@/lib/vocabulary";
 import { WhatIfPanel } from "@/components/runs/kept/what-if-panel";
 import { SensitivityPanel } from "@/components/runs/kept/sensitivity-panel";
 import { ScatterStudyPanel } from "@/components/runs/kept/scatter-study-panel";
@@ -74,8 +75,8 @@ export function RunView({
     <div className="space-y-4">
       <div className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm text-ink-soft" data-testid="run-meta">
         <StatusBadge status={run.status} belowRequired={run.belowRequiredReason !== null} />
-        <span>{condition?.label ?? run.loadingCondition}</span>
-        <span className="capitalize">{run.face} face</span>
+        <span>{condition?.label ?? conditionWords(run.loadingCondition)}</span>
+        <span>{faceWords(run.face)}</span>
         <span data-testid="run-water">Water: {waterUsedText(run)}</span>
         <span>
           {run.sectionName} v{run.sectionVersion}

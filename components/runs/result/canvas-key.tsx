@@ -4,6 +4,7 @@ import type { RunScene } from "@/lib/runs/view/run-scene";
 import { METHOD_NAME } from "@/lib/runs/view/warning-text";
 import { WATER_FILL, WATER_LINE } from "@/components/runs/result/canvas-section";
 import { SETUP_ACCENT } from "@/components/runs/result/canvas-centre-grid";
+import { countOf } from "@/lib/format";
 
 function LineSample({
   colour,
@@ -79,7 +80,7 @@ export function CanvasKey({ scene, setup }: { scene: RunScene; setup: boolean })
       ) : null}
       {scene.slices.length > 0 ? (
         <Item sample={<LineSample colour="#4a4640" width={1} dash={[1, 3]} />}>
-          slice sides ({scene.slices.length - 1} slices)
+          slice sides ({countOf(scene.slices.length - 1, "slice")})
         </Item>
       ) : null}
       {scene.phreatic ? (

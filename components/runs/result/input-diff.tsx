@@ -16,7 +16,7 @@ const AREA_TITLE: Record<DiffArea, string> = {
   analysis: "Analysis settings",
 };
 
-/** What differs between the inputs of two runs, grouped by area. */
+/** What differs between the inputs of two runs, grouped by area: one table row per change, in words. */
 export function InputDiff({ differences, beforeLabel = "first run", afterLabel = "second run" }: InputDiffProps) {
   const groups = groupDifferences(differences);
   if (groups.length === 0) {
@@ -32,25 +32,33 @@ export function InputDiff({ differences, beforeLabel = "first run", afterLabel =
         What changed from {beforeLabel} to {afterLabel}
       </h3>
       {groups.map((g) => (
-        <div key={g.area} data-area={g.area}>
-          <h4 className="font-semibold">
+        <table key={g.area} data-area={g.area} className="w-full text-left">
+          <caption className="text-left font-semibold">
             {AREA_TITLE[g.area]} <span className="font-normal text-ink-faint">({g.items.length})</span>
-          </h4>
-          <ul className="mt-1 space-y-0.5">
+          </caption>
+          <thead className="text-xs text-ink-soft">
+            <tr>
+              <th className="py-1 pr-3 font-normal">Change</th>
+              <th className="py-1 pr-3 font-normal">{beforeLabel}</th>
+              <th className="py-1 font-normal">{afterLabel}</th>
+            </tr>
+          </thead>
+          <tbody>
             {g.items.map((d, i) => (
-              <li key={`${d.path}-${i}`} className="flex flex-wrap items-baseline gap-x-2">
-                <span>{d.text}</span>
-                {d.before !== undefined || d.after !== undefined ? (
-                  <span className="text-xs tabular-nums text-ink-soft">
-                    <del className="decoration-ink-faint">{d.before ?? "—"}</del> →{" "}
-                    <ins className="no-underline font-medium text-ink">{d.after ?? "—"}</ins>
-                  </span>
-                ) : null}
-                <code className="text-[11px] text-ink-faint">{d.path}</code>
-              </li>
+              <tr key={`${d.path}-${i}`} className="border-t border-rule align-baseline">
+                <td className="py-1 pr-3">
+                  {d.before !== undefined || d.after !== undefined ? (d.what ?? d.text) : d.text}
+                </td>
+                <td className="py-1 pr-3 tabular-nums text-ink-soft">
+                  {d.before !== undefined ? <del className="decoration-ink-faint">{d.before}</del> : "—"}
+                </td>
+                <td className="py-1 tabular-nums">
+                  {d.after !== undefined ? <ins className="font-medium no-underline">{d.after}</ins> : "—"}
+                </td>
+              </tr>
             ))}
-          </ul>
-        </div>
+          </tbody>
+        </table>
       ))}
     </section>
   );

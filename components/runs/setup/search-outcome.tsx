@@ -13,7 +13,7 @@ import { loadingCondition } from "@/lib/analysis/required-fs";
 import { userIssue } from "@/lib/runs/view/engine-issue-text";
 import { runFs } from "@/lib/runs/view/slice-csv";
 import { stagedFromResult } from "@/lib/runs/view/staged-view";
-import { formatCount } from "@/lib/format";
+import { countOf } from "@/lib/format";
 
 export interface SearchOutcomeProps {
   projectId: number;
@@ -95,7 +95,7 @@ export function SearchOutcome({
   return (
     <div className="space-y-3" data-testid="search-outcome">
       <p className="text-xs text-ink-faint">
-        {formatCount(result.circles.tried)} circles in {(outcome.elapsedMs / 1000).toFixed(2)} s
+        {countOf(result.circles.tried, "circle")} in {(outcome.elapsedMs / 1000).toFixed(2)} s
       </p>
       <FsSummary
         result={result}

@@ -6,6 +6,7 @@
 import { z } from "zod";
 import type { CircleFs, FsMap, GridSearchSuccess, Method } from "@/lib/stability";
 import type { StoredSearchResult } from "./result-schema";
+import { countOf } from "@/lib/format";
 
 /** Relative agreement required; the engine is deterministic, so anything beyond float noise is a difference. */
 const FS_TOLERANCE = 1e-6;
@@ -88,7 +89,8 @@ function compareMap(d: DifferenceList, field: string, sent: FsMap | undefined, s
       if (first < 0) first = i;
     }
   });
-  if (cells > 0) d.add(`${field}.values`, `${cells} cell(s) differ, first at ${first}`, show(server.values[first]));
+  if (cells > 0)
+    d.add(`${field}.values`, `${countOf(cells, "cell")} differ, first at ${first}`, show(server.values[first]));
 }
 
 function compareLowest(d: DifferenceList, field: string, sent: SentCircle[] | undefined, server: CircleFs[] = []) {
@@ -160,8 +162,12 @@ export function differenceWords(field: string): string {
 export function differenceLine(d: PreviewDifference): string {
   const what = differenceWords(d.field);
   if (d.field === "warnings") {
-    if (d.sent === MISSING) return `A warning the server's search raises was missing from the preview: ${d.server}`;
-    if (d.server === MISSING) return `A warning in the preview that the server's search does not raise: ${d.sent}`;
+    // Stored as "code: message"; the reader gets the message alone.
+    const words = (w: string) => w.replace(/^[a-z0-9]+(?:-[a-z0-9]+)*: /, "");
+    if (d.sent === MISSING)
+      return `A warning the server's search raises was missing from the preview: ${words(d.server)}`;
+    if (d.server === MISSING)
+      return `A warning in the preview that the server's search does not raise: ${words(d.sent)}`;
   }
   const a = Number(d.sent);
   const b = Number(d.server);

@@ -4,6 +4,7 @@
  * its name and the library's fields. Translated here, at the edge where errors are shown, so the
  * engine's own messages stay exact for the command line and the API.
  */
+import { messageWords, placeWords } from "@/lib/issue-words";
 
 export interface IssueLike {
   code: string;
@@ -31,8 +32,9 @@ const PLAIN: Record<string, string> = {
 export function userIssue(issue: IssueLike, materials: readonly { id: string; name?: string }[]): UserIssue {
   const m = MATERIAL_PATH.exec(issue.path);
   const material = m ? materials[Number(m[1])] : undefined;
-  if (!material) return { where: issue.path, message: issue.message };
-  const field = m![2].replace(/^\./, "");
+  // Places other than a material read in the panels' numbering (lib/issue-words.ts).
+  if (!material) return { where: placeWords(issue.path), message: messageWords(issue.message) };
+  const field = placeWords(`materials[0]${m![2]}`).replace(/^Material 1,? ?/, "");
   const where = `Material '${material.name ?? material.id}'${field ? `, ${field}` : ""}`;
-  return { where, message: PLAIN[issue.code] ?? issue.message };
+  return { where, message: PLAIN[issue.code] ?? messageWords(issue.message) };
 }

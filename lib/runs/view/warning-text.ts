@@ -110,11 +110,5 @@ export function ordinaryFormText(form: string | undefined): string {
     : "classical form: N′ = N − u·l, with N from every force on the slice but the base forces";
 }
 
-/** Names of the methods as the result views print them. */
-export const METHOD_NAME: Record<"bishop" | "fellenius", string> = {
-  bishop: "Bishop's simplified method",
-  fellenius: "Ordinary method of slices",
-};
-
-/** Short names for labels on the canvas. */
-export const METHOD_SHORT: Record<"bishop" | "fellenius", string> = { bishop: "Bishop", fellenius: "Ordinary" };
+// The method names live with every other code-to-words mapping, in lib/vocabulary.ts.
+export { METHOD_NAME, METHOD_SHORT } from "@/lib/vocabulary";

@@ -39,7 +39,7 @@ describe("checkSources", () => {
     expect(errors["sources.c"][0]).toMatch(/not set on this undrained material/);
     expect(errors["sources.gamma"][0]).toMatch(/another material/);
     expect(errors["sources.su"][0]).toMatch(/not found/);
-    expect(checkSources(1, mc(10, 26), { phi: 6 }, sets)["sources.phi"][0]).toMatch(/does not give φ'/);
+    expect(checkSources(1, mc(10, 26), { phi: 6 }, sets)["sources.phi"][0]).toMatch(/does not give φ′/);
   });
 
   test("kindsThatFeed(key) inverts what each kind supplies", () => {

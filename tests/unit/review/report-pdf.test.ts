@@ -74,7 +74,7 @@ describe("the calculation report of a staged drawdown signed off below the requi
     expect(text).toContain(`Stage 1: before drawdown, effective stress (consolidation) ${b.fs1!.toFixed(3)}`);
     expect(text).toContain("— (no slice drained)");
     // Bedrock has no number at all, yet bounds every slip surface.
-    expect(text).toContain("Bedrock (rock) impenetrable");
+    expect(text).toContain("Bedrock (rock) Impenetrable");
     expect(text).toContain("no slip surface may enter it");
     // The staged slice table heads its strengths as the final stage's, not c' and phi'.
     expect(text).toContain("Governing strength");

@@ -41,10 +41,14 @@ describe("the missing-R-envelope error in the user's words", () => {
       { code: "x", path: "materials[2].phi", message: "φ' is outside [0, 60)." },
       fixture().materials,
     );
-    expect(u).toEqual({ where: "Material 'Silty clay foundation', phi", message: "φ' is outside [0, 60)." });
+    expect(u).toEqual({ where: "Material 'Silty clay foundation', φ′", message: "φ′ is outside [0, 60)." });
     expect(userIssue({ code: "x", path: "analysis.grid", message: "m" }, [])).toEqual({
-      where: "analysis.grid",
+      where: "Analysis settings, grid of centres",
       message: "m",
+    });
+    expect(userIssue({ code: "x", path: "regions[1].points[0]", message: "regions[1]: too thin" }, [])).toEqual({
+      where: "Region 2, vertex 1",
+      message: "Region 2: too thin",
     });
   });
 

@@ -160,8 +160,8 @@ describe("the summary of a saved version", () => {
     next.waterConditions![3].drawdownTo = 9;
     next.waterConditions![1].name = "Surcharge pool";
     expect(summarizeChange(demo, next)).toBe(
-      "water condition “Steady seepage, maximum surcharge pool 17.0 m” renamed “Surcharge pool”; " +
-        "water condition “Rapid drawdown, 16.0 m to 8.0 m”: drawdownTo changed",
+      "water condition “Steady seepage, flood pool 17.0 m” renamed “Surcharge pool”; " +
+        "water condition “Rapid drawdown, 16.0 m to 8.0 m”: level after drawdown changed",
     );
   });
 });

@@ -82,7 +82,7 @@ describe("differenceLine", () => {
       "Bishop's FS: preview 1.341570000, server 1.341569000",
     );
     expect(differenceLine({ field: "warnings", sent: "none", server: "m-alpha-low: mα falls to 0.150" })).toBe(
-      "A warning the server's search raises was missing from the preview: m-alpha-low: mα falls to 0.150",
+      "A warning the server's search raises was missing from the preview: mα falls to 0.150",
     );
   });
 });

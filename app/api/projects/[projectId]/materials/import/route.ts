@@ -8,6 +8,7 @@ import { checkMaterialsImport, csvProblemsToTable } from "@/lib/materials/import
 import { problemsToFields } from "@/lib/materials/problem-keys";
 import { IMPENETRABLE_COLOR, pickMaterialColors } from "@/lib/materials/palette";
 import { DuplicateMaterialKeyError, createMaterials, fetchMaterialsOfProject } from "@/db/queries/materials";
+import { countOf } from "@/lib/format";
 
 type Ctx = { params: Promise<{ projectId: string }> };
 
@@ -30,7 +31,7 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
     throw new ApiError(
       400,
       "invalid_csv",
-      `The file has ${n} problem${n === 1 ? "" : "s"}; nothing was saved.`,
+      `The file has ${countOf(n, "problem")}; nothing was saved.`,
       problemsToFields(csvProblemsToTable(check.problems)),
     );
   }

@@ -6,6 +6,7 @@ import { refusalError, requireRunAccess } from "@/lib/review/run-access";
 import { checkComment } from "@/lib/review/rules";
 import { commentSchema } from "@/lib/review/validations";
 import { addRunComment, fetchRunComments, isFrozenRunError, RunStateError } from "@/db/queries/review";
+import { countOf } from "@/lib/format";
 
 type Ctx = { params: Promise<{ projectId: string; runId: string }> };
 
@@ -36,7 +37,7 @@ export const POST = apiRoute(async (request: Request, { params }: Ctx) => {
       throw new ApiError(
         400,
         "invalid_input",
-        `The critical circle has ${count} slices; slice ${input.slice.number} does not exist.`,
+        `The critical circle has ${countOf(count, "slice")}; slice ${input.slice.number} does not exist.`,
         { "slice.number": [`Use a slice from 1 to ${count}.`] },
       );
     }
