@@ -3,3 +3,4 @@ export { solveWater, asksForSeepage, withSeepageKeys, type SolvedWater } from ".
 export { prepareWater, searchOnWater, circleOnWater } from "./run";
 export { seepageWaterLine } from "./water-line";
 export type { SeepageSummary } from "./types";
+export { attachSeepage, seepageWaterBlock, type SeepageInputs, type AttachedSeepage } from "./attach";

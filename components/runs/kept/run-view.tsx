@@ -7,7 +7,7 @@ import type { GridSearchSuccess, SectionDocument, SliceRow } from "@/lib/stabili
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import { materialPalette } from "@/lib/sections/material-palette";
-import { waterUsedText } from "@/lib/runs/view/water-used";
+import { runSeepage, seepageUsedText, waterUsedText } from "@/lib/runs/view/water-used";
 import { downloadText, slug } from "@/lib/client/download";
 import { RunCanvas } from "@/components/runs/result/run-canvas";
 import { FsSummary } from "@/components/runs/result/fs-summary";
@@ -68,6 +68,7 @@ export function RunView({
   const drawdownTo = doc.analysis?.drawdown?.to;
   const condition = loadingCondition(run.loadingCondition as LoadingConditionKey);
   const staged = useMemo(() => stagedView(result, doc, run.engineVersion), [result, doc, run.engineVersion]);
+  const seepage = runSeepage(run);
 
   return (
     <div className="space-y-4">
@@ -76,6 +77,7 @@ export function RunView({
         <span>{condition?.label ?? run.loadingCondition}</span>
         <span className="capitalize">{run.face} face</span>
         <span data-testid="run-water">Water: {waterUsedText(run)}</span>
+        {seepage ? <span data-testid="run-water-seepage">Pore pressures {seepageUsedText(seepage)}</span> : null}
         <span>
           {run.sectionName} v{run.sectionVersion}
         </span>
