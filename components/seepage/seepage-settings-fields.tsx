@@ -69,7 +69,7 @@ export function SeepageSettingsFields({
           {pools.length === 0
             ? "none"
             : pools.map((p) => `${p.side === "left" ? "left" : "right"} edge at ${p.level.toFixed(2)} m`).join(", ")}
-          . Type a level below or drag a pool's mark on the drawing.
+          . Type a level below or drag a pool’s mark on the drawing.
         </p>
         <div className="grid grid-cols-2 gap-3">
           <Num
