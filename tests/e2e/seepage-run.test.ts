@@ -26,7 +26,7 @@ function readSci(text: string): number {
   return Number(m[1]) * 10 ** Number(exp);
 }
 
-describe("a run on the seepage solution", () => {
+describe("a run on the seepage solution, and the pools it starts from", () => {
   test("the zoned dam's kept run shows its FS and where its pore pressures came from; a new one runs alike", async () => {
     const page = await browser.newPage({ viewport: { width: 1500, height: 1100 } });
     const errors = watchConsole(page);
@@ -71,6 +71,25 @@ describe("a run on the seepage solution", () => {
       expect(Number(await page.getByTestId("fs-value-bishop").textContent())).toBeGreaterThan(0);
       expect(await page.getByTestId("run-water-seepage").textContent()).toContain("finite-element seepage solution");
       await page.screenshot({ path: "test-results/seepage-run-new.png", fullPage: true });
+
+      // The pools of the seepage view: the left pool's mark dragged down lowers its level; typed, it follows.
+      await page.goto(projectUrl);
+      await page.getByRole("link", { name: ZONED_DAM_NAME }).click();
+      await page.getByRole("link", { name: "Seepage and flow net" }).click();
+      await page.waitForURL(/\/seepage/);
+      const handle = page.locator('[data-pool-handle="left"]');
+      const box = (await handle.boundingBox())!;
+      await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+      await page.mouse.down();
+      await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2 + 20, { steps: 5 });
+      await page.mouse.up();
+      const dragged = Number(await page.locator("#seepage-pool-left").inputValue());
+      expect(dragged).toBeLessThan(23);
+      expect(dragged).toBeGreaterThan(15);
+      expect(await page.locator('[data-pool="left"]').textContent()).toContain(`${dragged.toFixed(2)} m`);
+      await page.locator("#seepage-pool-left").fill("21.5");
+      expect(await page.locator('[data-pool="left"]').textContent()).toContain("21.50 m");
+      expect(await page.getByTestId("seepage-pools").textContent()).toContain("left edge at 21.50 m");
     });
     expect(errors).toEqual([]);
     await page.close();
