@@ -134,8 +134,8 @@ export const ZONED_SEEPAGE_SETTINGS: SeepageSettingsInput = {
 
 /**
  * Adds the zoned dam to the demo project: its four materials (the core's kh from its falling-head
- * set, recorded as the source), the section, its seepage settings and a kept run on its seepage water. Existing demo records are
- * left as they are. Run inside the caller's transaction.
+ * set, recorded as the source), the section, its seepage settings and a kept run on its seepage
+ * water. Existing demo records are left as they are. Run inside the caller's transaction.
  */
 export async function seedZonedDam(trx: Knex.Transaction, projectId: number, userId: number): Promise<void> {
   const engineMaterials: SectionDocument["materials"] = [];
