@@ -63,6 +63,7 @@ export function solveWater(doc: unknown, onRound?: (round: number, most: number)
       freeSurfaceRounds: solution.iterations.freeSurface,
       converged: solution.iterations.converged,
       pools: water.pools,
+      waterLine: line,
       warnings: solution.warnings.map((w) => ({ code: w.code, message: w.message })),
     },
   };

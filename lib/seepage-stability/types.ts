@@ -14,5 +14,7 @@ export interface SeepageSummary {
   freeSurfaceRounds: number;
   converged: boolean;
   pools: Pool[];
+  /** The water line the engine was handed (solution's phreatic surface and pools), for drawing the run. */
+  waterLine: [number, number][];
   warnings: { code: string; message: string }[];
 }

@@ -31,3 +31,12 @@ export function seepageUsedText(s: SeepageSummary): string {
     (s.converged ? "" : "; its phreatic surface had not fully settled, see the warnings")
   );
 }
+
+/**
+ * The document a run on seepage water is drawn with: its frozen document asks for the solution, so
+ * the solved water line kept with the result is put in for the drawing. Other runs draw as stored.
+ */
+export function documentToDraw<T extends { water?: object }>(doc: T, seepage: SeepageSummary | null): T {
+  if (!seepage || !Array.isArray(seepage.waterLine) || seepage.waterLine.length < 2) return doc;
+  return { ...doc, water: { ...doc.water, phreatic: seepage.waterLine } };
+}

@@ -1,7 +1,13 @@
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 import { CompareTable } from "@/components/runs/result/compare-table";
-import { SINGLE_WATER_TEXT, runSeepage, seepageUsedText, waterUsedText } from "@/lib/runs/view/water-used";
+import {
+  SINGLE_WATER_TEXT,
+  documentToDraw,
+  runSeepage,
+  seepageUsedText,
+  waterUsedText,
+} from "@/lib/runs/view/water-used";
 
 describe("which water a kept run analysed", () => {
   it("is the recorded condition's name, or says the section had a single water line", () => {
@@ -22,6 +28,10 @@ describe("which water a kept run analysed", () => {
       freeSurfaceRounds: 29,
       converged: true,
       pools: [],
+      waterLine: [
+        [0, 23],
+        [140, 6],
+      ] as [number, number][],
       warnings: [],
     };
     const run = { waterCondition: { name: "Steady seepage, 23.0 m" }, result: { seepage } };
@@ -33,6 +43,14 @@ describe("which water a kept run analysed", () => {
     );
     expect(seepageUsedText({ ...seepage, converged: false })).toMatch(/had not fully settled/);
     expect(runSeepage({ result: { results: {} } })).toBeNull();
+    // Drawn with the solved line; a run on any other water is drawn as stored.
+    const doc = { water: { source: "seepage", gammaW: 9.81 } };
+    expect(documentToDraw(doc, seepage).water).toEqual({
+      source: "seepage",
+      gammaW: 9.81,
+      phreatic: seepage.waterLine,
+    });
+    expect(documentToDraw(doc, null)).toBe(doc);
   });
 
   it("has its own row in the comparison, one cell per run", () => {
