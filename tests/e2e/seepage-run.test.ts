@@ -70,6 +70,9 @@ describe("a run on the seepage solution, and the pools it starts from", () => {
       await page.getByTestId("fs-summary").waitFor();
       expect(Number(await page.getByTestId("fs-value-bishop").textContent())).toBeGreaterThan(0);
       expect(await page.getByTestId("run-water-seepage").textContent()).toContain("finite-element seepage solution");
+      // The drawing shows the solved phreatic surface and the pool, kept with the result.
+      await page.waitForSelector('[data-testid="run-canvas"][data-view] canvas');
+      expect(await page.getByTestId("run-canvas-key").textContent()).toContain("phreatic line");
       await page.screenshot({ path: "test-results/seepage-run-new.png", fullPage: true });
 
       // The pools of the seepage view: the left pool's mark dragged down lowers its level; typed, it follows.
