@@ -8,12 +8,13 @@
  * reports each stage's FS under `stages`; the FS shown is the final stage's.
  * A document with `vary` on its materials and analysis.probabilistic (docs/probabilistic.md) adds
  * `probabilistic` per method and `probabilisticRun` to the search's output.
+ * `"water": {"source": "seepage"}` solves the document's seepage first (docs/seepage.md §6) and adds
+ * `seepage` (q, mesh) to the output; the pore pressure at each slice base comes from that solution.
  * Standard output carries only JSON. Exit 0 with "ok": true; exit 2 with "ok": false and
  * the error list on bad input or bad arguments; exit 1 on an internal failure.
  */
 import { readFileSync } from "node:fs";
-import { analyzeCircle } from "../lib/stability/analyze-circle";
-import { runGridSearch } from "../lib/stability/grid-search";
+import { asksForSeepage, circleOnWater, searchOnWater } from "../lib/seepage-stability";
 import { hasProbabilisticSettings, runProbabilistic } from "../lib/stability/probabilistic";
 
 interface CliError {
@@ -102,11 +103,22 @@ function main(): void {
   const { file, circle, map } = parseArgs(process.argv.slice(2));
   const doc = readInput(file);
   if (circle) {
-    const r = analyzeCircle(doc, circle);
+    const r = circleOnWater(doc, circle);
     finish(r, r.ok ? 0 : 2);
     return;
   }
-  const r = hasProbabilisticSettings(doc) ? runProbabilistic(doc) : runGridSearch(doc);
+  const probabilistic = hasProbabilisticSettings(doc);
+  if (probabilistic && asksForSeepage(doc))
+    fail(2, [
+      {
+        code: "probabilistic-seepage",
+        path: "water.source",
+        message:
+          "A probabilistic run cannot take its water from seepage yet: draw the line (or use the solution's " +
+          "phreatic surface as a drawn line) for analysis.probabilistic.",
+      },
+    ]);
+  const r = probabilistic ? runProbabilistic(doc) : searchOnWater(doc);
   if (!r.ok) {
     finish(r, 2);
     return;

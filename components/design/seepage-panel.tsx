@@ -67,6 +67,43 @@ function PoolSeepage({ outcome, crestLength }: { outcome: PhreaticOutcome; crest
       </div>
     );
   }
+  if (outcome.source === "seepage-solution" && outcome.solution) {
+    const fe = outcome.solution;
+    const least = fe.leastPipingFactor;
+    return (
+      <div data-testid={`seepage-fe-${outcome.pool}`}>
+        <h4 className="text-sm font-semibold">{title}</h4>
+        <p className="text-sm text-ink-soft">
+          Phreatic surface and pore pressures from the finite-element seepage solution (the basic parabola does not
+          apply to a zoned fill or a pervious foundation); a drawdown starts from this surface.
+        </p>
+        <table className="mt-1 w-full text-sm">
+          <tbody>
+            <Row term="Seepage q per metre" value={`${sci(fe.q)} m³/s/m`} from="through the section (qIn ≈ qOut)" />
+            <Row
+              term={`Seepage for ${crestLength} m of dam`}
+              value={`${sci(fe.q * crestLength)} m³/s`}
+              from="q × crest length (upper bound: the section is the highest)"
+            />
+            <Row term="Mesh" value={`${fe.nodes} nodes`} from={`elements of about ${fe.meshSize.toPrecision(2)} m`} />
+            {least ? (
+              <Row
+                term="Least factor against piping"
+                value={(least.pipingFactor ?? 0).toFixed(1)}
+                from={`i_cr / i_exit at (${least.x.toFixed(1)}, ${least.y.toFixed(1)}) m, ${least.material}`}
+              />
+            ) : null}
+          </tbody>
+        </table>
+        {outcome.piping ? <PipingAtExitsView piping={outcome.piping} /> : null}
+        {outcome.limits.map((l) => (
+          <p key={l.code} className="mt-1 text-xs text-ink-soft">
+            {l.message}
+          </p>
+        ))}
+      </div>
+    );
+  }
   if (!s || !s.ok) {
     return (
       <div data-testid={`seepage-limits-${outcome.pool}`}>

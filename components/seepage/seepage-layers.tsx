@@ -89,9 +89,12 @@ export function WaterLayer({
   drains,
   drawing,
   extent,
+  onPoolDrag,
 }: {
   view: RunView;
   pools: Pool[];
+  /** Dragging a pool's mark up or down sets its level (m); absent, the marks stay put. */
+  onPoolDrag?: (side: Pool["side"], level: number) => void;
   drains: [number, number][][];
   /** A drain being drawn, not yet added. */
   drawing: [number, number][] | null;
@@ -112,7 +115,27 @@ export function WaterLayer({
         return (
           <g key={i} data-pool={p.side}>
             <line x1={ax} y1={ay} x2={bx} y2={ay} stroke={POOL} strokeWidth={2} />
-            <path d={`M${mid - 6},${ay - 10} h12 l-6,9 Z`} fill={POOL} />
+            <path
+              d={`M${mid - 6},${ay - 10} h12 l-6,9 Z`}
+              fill={POOL}
+              data-pool-handle={p.side}
+              className={onPoolDrag ? "cursor-ns-resize" : undefined}
+              onPointerDown={onPoolDrag ? (e) => e.currentTarget.setPointerCapture(e.pointerId) : undefined}
+              onPointerMove={
+                onPoolDrag
+                  ? (e) => {
+                      if (!e.currentTarget.hasPointerCapture(e.pointerId)) return;
+                      const ctm = e.currentTarget.ownerSVGElement?.getScreenCTM();
+                      if (!ctm) return;
+                      const q = new DOMPoint(e.clientX, e.clientY).matrixTransform(ctm.inverse());
+                      // The mark's tip sits 1 px above the level line; levels go to the centimetre.
+                      const level = (view.offsetY - (q.y + 1)) / view.scale;
+                      onPoolDrag(p.side, Math.round(level * 100) / 100);
+                    }
+                  : undefined
+              }
+              onPointerUp={onPoolDrag ? (e) => e.currentTarget.releasePointerCapture(e.pointerId) : undefined}
+            />
             <text x={mid + 9} y={ay - 3} fontSize={11} fill="#1f1d1a">
               {p.level.toFixed(2)} m
             </text>

@@ -42,30 +42,55 @@ function Num({
   );
 }
 
-/** Drains by coordinates, the element size, the crest length, the head drops and a tailwater. */
+const levelText = (v: number | null) => (v === null ? "none" : `${v.toFixed(2)} m`);
+
+/** Pool levels, drains by coordinates, the element size, the crest length, the head drops and a tailwater. */
 export function SeepageSettingsFields({
   form,
   onChange,
   fields,
   pools,
+  conditionPools,
 }: {
   form: SeepageSettingsForm;
   onChange: (f: SeepageSettingsForm) => void;
   fields: Record<string, string[]>;
   pools: Pool[];
+  /** The water condition's own pool levels, shown as what a blank field keeps. */
+  conditionPools: { left: number | null; right: number | null };
 }) {
   const set = <K extends keyof SeepageSettingsForm>(k: K, v: SeepageSettingsForm[K]) => onChange({ ...form, [k]: v });
   return (
     <fieldset className="panel grid gap-4 p-4 lg:grid-cols-[2fr_3fr]">
       <legend className="px-1 text-sm font-semibold">Water and mesh</legend>
       <div className="space-y-2 text-sm">
-        <p className="text-ink-soft">
-          Pools from the water condition:{" "}
+        <p className="text-ink-soft" data-testid="seepage-pools">
+          Pools:{" "}
           {pools.length === 0
             ? "none"
             : pools.map((p) => `${p.side === "left" ? "left" : "right"} edge at ${p.level.toFixed(2)} m`).join(", ")}
-          .
+          . Type a level below or drag a pool’s mark on the drawing.
         </p>
+        <div className="grid grid-cols-2 gap-3">
+          <Num
+            id="seepage-pool-left"
+            label="Pool level, left edge"
+            unit="m"
+            value={form.poolLeft}
+            onChange={(v) => set("poolLeft", v)}
+            messages={fields.poolLeft ?? fields.pools}
+            hint={`Blank: the water condition's (${levelText(conditionPools.left)}).`}
+          />
+          <Num
+            id="seepage-pool-right"
+            label="Pool level, right edge"
+            unit="m"
+            value={form.poolRight}
+            onChange={(v) => set("poolRight", v)}
+            messages={fields.poolRight}
+            hint={`Blank: the water condition's (${levelText(conditionPools.right)}).`}
+          />
+        </div>
         <div>
           <label className="label normal-case" htmlFor="seepage-drains">
             Drains (atmospheric pressure): one per line, points as “x y” separated by “;” (m)

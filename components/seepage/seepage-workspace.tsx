@@ -3,7 +3,7 @@
 import { useMemo, useState } from "react";
 import Link from "next/link";
 import type { SectionDocument } from "@/lib/stability";
-import type { WaterCondition } from "@/lib/sections/water-conditions";
+import { poolLevels, type WaterCondition } from "@/lib/sections/water-conditions";
 import type { MaterialConductivity, SeepageSettingsInput } from "@/lib/section-seepage/types";
 import { buildSeepageDocument } from "@/lib/section-seepage/document";
 import { settingsFromForm, settingsToForm, type SeepageSettingsForm } from "@/lib/section-seepage/settings-form";
@@ -57,6 +57,7 @@ export function SeepageWorkspace(props: SeepageWorkspaceProps) {
     groundAt: (x: number) => elevationAt(ground, x),
   };
   const pools = built?.ok ? (built.document.seepage.pools ?? []) : [];
+  const conditionPools = useMemo(() => poolLevels(section, condition.water), [section, condition]);
   // The section drawn at true scale, the drawing no taller than the section needs.
   const span = extent.maxX - extent.minX;
   const rise =
@@ -119,6 +120,11 @@ export function SeepageWorkspace(props: SeepageWorkspaceProps) {
     setDrawing([...drawing, p]);
   }
 
+  /** A pool's mark dragged on the drawing: its level goes into the typed field, saved with the settings. */
+  function dragPool(side: "left" | "right", level: number) {
+    setForm((f) => ({ ...f, [side === "left" ? "poolLeft" : "poolRight"]: String(level) }));
+  }
+
   function finishDrain() {
     if (drawing && drawing.length >= 2) {
       const current = settings?.drains ?? [];
@@ -174,7 +180,14 @@ export function SeepageWorkspace(props: SeepageWorkspaceProps) {
         layers={(view) => (
           <>
             {done ? <MeshLayer view={view} mesh={done.mesh} colour={colour} showMesh={showMesh} /> : null}
-            <WaterLayer view={view} pools={pools} drains={settings?.drains ?? []} drawing={drawing} extent={extent} />
+            <WaterLayer
+              view={view}
+              pools={pools}
+              drains={settings?.drains ?? []}
+              drawing={drawing}
+              extent={extent}
+              onPoolDrag={drawing ? undefined : dragPool}
+            />
           </>
         )}
       />
@@ -205,6 +218,7 @@ export function SeepageWorkspace(props: SeepageWorkspaceProps) {
         fields={fields}
         // buildSeepageDocument adds the tailwater object itself; it has its own fields below.
         pools={pools.filter((p) => p !== settings?.tailwater)}
+        conditionPools={conditionPools}
       />
       {done ? <SeepageResults solution={done.solution} elapsedMs={done.elapsedMs} /> : null}
     </div>

@@ -7,6 +7,7 @@ import { checkAndDeriveLabTest } from "../../lib/materials/lab-derive";
 import { suggestedValues } from "../../lib/materials/sources";
 import { MATERIAL_COLORS } from "../../lib/materials/palette";
 import { toEngineMaterial } from "../../lib/materials/engine-material";
+import { seedZonedRun } from "./demo-zoned-run";
 
 /**
  * An invented zoned saddle dam beside the demo embankment, for the seepage view: a clay core
@@ -133,10 +134,10 @@ export const ZONED_SEEPAGE_SETTINGS: SeepageSettingsInput = {
 
 /**
  * Adds the zoned dam to the demo project: its four materials (the core's kh from its falling-head
- * set, recorded as the source), the section and its seepage settings. Existing demo records are
- * left as they are. Run inside the caller's transaction.
+ * set, recorded as the source), the section, its seepage settings and a kept run on its seepage
+ * water. Existing demo records are left as they are. Run inside the caller's transaction.
  */
-export async function seedZonedDam(trx: Knex | Knex.Transaction, projectId: number, userId: number): Promise<void> {
+export async function seedZonedDam(trx: Knex.Transaction, projectId: number, userId: number): Promise<void> {
   const engineMaterials: SectionDocument["materials"] = [];
   for (const m of ZONED_MATERIALS) {
     const parameters: Record<string, unknown> = { ...m.parameters };
@@ -185,10 +186,11 @@ export async function seedZonedDam(trx: Knex | Knex.Transaction, projectId: numb
     current_version: 1,
     created_by: userId,
   });
-  await trx("section_versions").insert({
+  const section = buildZonedDamSection(engineMaterials);
+  const [sectionVersionId] = await trx("section_versions").insert({
     section_id: sectionId,
     version: 1,
-    document: JSON.stringify(buildZonedDamSection(engineMaterials)),
+    document: JSON.stringify(section),
     summary: "First version from the saddle dam drawings",
     created_by: userId,
   });
@@ -198,4 +200,5 @@ export async function seedZonedDam(trx: Knex | Knex.Transaction, projectId: numb
     settings: JSON.stringify(ZONED_SEEPAGE_SETTINGS),
     updated_by: userId,
   });
+  await seedZonedRun(trx, { projectId, sectionId, sectionVersionId, userId, section });
 }

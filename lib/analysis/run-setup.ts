@@ -13,12 +13,18 @@ import {
   withWater,
   type WaterCondition,
 } from "@/lib/sections/water-conditions";
+import { seepageWaterBlock } from "@/lib/seepage-stability/attach";
 
 export const runSetupSchema = z
   .object({
     condition: z.enum(LOADING_CONDITION_KEYS, { error: "Choose a loading condition." }),
     /** Key of the section's water condition analysed; absent: the loading condition's usual water. */
     waterCondition: z.string().max(40).optional(),
+    /**
+     * Where the pore pressures come from: the condition's own water (absent), or the finite-element
+     * seepage solution of that condition (docs/seepage.md §6; its pools come from the condition).
+     */
+    waterSource: z.enum(["condition", "seepage"]).optional(),
     face: z.enum(["upstream", "downstream"], { error: "Choose the face to check." }),
     methods: z.array(z.enum(["bishop", "fellenius"])).min(1, "Choose at least one method."),
     slices: z
@@ -110,10 +116,12 @@ export function waterConditionForRun(section: SectionDocument, setup: Pick<RunSe
 
 /**
  * The document a run analyses: the section version with the chosen condition's water as the
- * engine's one water block, and the run's analysis block.
+ * engine's one water block (or, for water from seepage, the block that asks for the solution: the
+ * section must then carry its seepage block, lib/seepage-stability/attach.ts), and the run's analysis block.
  */
 export function documentForRun(section: SectionDocument, setup: RunSetup, water?: WaterCondition): SectionDocument {
   const condition = water ?? waterConditionForRun(section, setup);
+  const block = setup.waterSource === "seepage" ? seepageWaterBlock(condition.water?.gammaW) : condition.water;
   // The face's direction is read from the whole section: an end-of-construction water has no pool to tell it.
-  return { ...withWater(section, condition.water), analysis: toAnalysis(section, setup) };
+  return { ...withWater(section, block), analysis: toAnalysis(section, setup) };
 }

@@ -7,7 +7,16 @@ import type { Material, Region, SectionDocument } from "@/lib/stability";
 import { embankmentGeometry, type EmbankmentGeometry, type XY } from "./embankment-geometry";
 import { fillQuantities, type FillQuantities } from "./fill-quantities";
 import { materialRoles, type EmbankmentParams } from "./parameters";
-import { phreaticForPool, saturatedUnitWeight, type PhreaticOutcome, type PoolName } from "./phreatic-line";
+import { HAND_LINE_REQUEST } from "./phreatic-line";
+import {
+  phreaticForPool,
+  pipingOnLine,
+  saturatedUnitWeight,
+  spanSection,
+  type PhreaticOutcome,
+  type PoolName,
+} from "./phreatic-line";
+import { solveDesignSeepage, SOLVED_BY_SEEPAGE } from "./seepage-solution";
 
 export interface DesignWarning {
   code: string;
@@ -178,18 +187,46 @@ export function generateEmbankment(
     );
   }
   const fillKey = params.zoning.kind === "homogeneous" ? params.zoning.fill : params.zoning.core;
-  const seepage = phreaticForPool(
-    params,
-    g,
-    options.pool ?? "normal",
-    saturatedUnitWeight(used.find((m) => m.id === fillKey)),
-  );
-  const document: SectionDocument = {
+  const gammaSat = saturatedUnitWeight(used.find((m) => m.id === fillKey));
+  let seepage = phreaticForPool(params, g, options.pool ?? "normal", gammaSat);
+  const regions = [...groundRegions(params, g), ...zoneRegions(params, g)];
+  let document: SectionDocument = {
     version: 1,
     materials: used,
-    regions: [...groundRegions(params, g), ...zoneRegions(params, g)],
+    regions,
     ...(seepage.line ? { water: { gammaW: 9.81, phreatic: seepage.line } } : {}),
   };
+  // What the basic parabola refuses (a zoned fill, a pervious foundation) the finite-element solution answers.
+  if (seepage.source === "none" && seepage.limits.some((l) => SOLVED_BY_SEEPAGE.has(l.code))) {
+    const fe = solveDesignSeepage(params, g, seepage.poolLevel, used, regions);
+    if (fe.ok) {
+      const line = spanSection(fe.seepage.phreatic, g.xmax);
+      seepage = {
+        ...seepage,
+        source: "seepage-solution",
+        line,
+        limits: fe.seepage.warnings.map((w) => ({ code: w.code, severity: "warning" as const, message: w.message })),
+        piping: pipingOnLine(params, g, line, gammaSat),
+        solution: fe.seepage,
+      };
+      // The line is kept for drawing; a run solves the seepage again from the block (one orchestrator).
+      document = {
+        ...document,
+        materials: fe.seepage.materials,
+        water: { gammaW: 9.81, source: "seepage", phreatic: line },
+        seepage: fe.seepage.block,
+      } as SectionDocument;
+    } else {
+      seepage = {
+        ...seepage,
+        limits: fe.errors.map((e) => ({
+          code: "E_DESIGN_SEEPAGE",
+          severity: "error" as const,
+          message: `The seepage solution cannot be found: ${e.message} ${HAND_LINE_REQUEST}`,
+        })),
+      };
+    }
+  }
   const warnings = freeboardWarnings(params);
   for (const l of seepage.limits) warnings.push({ code: l.code, message: l.message });
   return { document, geometry: g, quantities: fillQuantities(g, params.crestLength), seepage, warnings };

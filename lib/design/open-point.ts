@@ -38,7 +38,12 @@ async function pointSection(o: OpenPointInput) {
   const base =
     `${study.name}: upstream ${ratioText(point.upstreamRatio)}, downstream ${ratioText(point.downstreamRatio)}, ` +
     pool;
-  const line = generated.seepage.source === "hand-drawn" ? "drawn by hand" : "Kozeny–Casagrande construction";
+  const line =
+    generated.seepage.source === "hand-drawn"
+      ? "drawn by hand"
+      : generated.seepage.source === "seepage-solution"
+        ? "finite-element seepage solution"
+        : "Kozeny–Casagrande construction";
   return {
     name: await freeSectionName(o.projectId, base.slice(0, 190)),
     description:

@@ -9,6 +9,7 @@ import { computeFilterSeepage, type SeepageLimit, type SeepageResult } from "@/l
 import type { EmbankmentGeometry, XY } from "./embankment-geometry";
 import type { EmbankmentParams } from "./parameters";
 import { assessPipingExits, type PipingAtExits } from "./piping-exit";
+import type { DesignSeepage } from "./seepage-solution";
 
 export type PoolName = "normal" | "flood";
 
@@ -17,8 +18,11 @@ export const HAND_LINE_REQUEST = "Draw the phreatic line by hand for this pool (
 export interface PhreaticOutcome {
   pool: PoolName;
   poolLevel: number;
-  /** "constructed" by the method, "hand-drawn" by the designer, or "none" when neither is available. */
-  source: "constructed" | "hand-drawn" | "none";
+  /**
+   * "constructed" by the method, "hand-drawn" by the designer, "seepage-solution" from the finite-element
+   * solution (zoned fills, pervious foundations: lib/design/seepage-solution.ts), or "none".
+   */
+  source: "constructed" | "hand-drawn" | "seepage-solution" | "none";
   /** The line across the whole section (x from 0 to xmax), for the document; null when there is none. */
   line: XY[] | null;
   /** The construction's result (flow, piping, construction values), when the method applied. */
@@ -27,6 +31,8 @@ export interface PhreaticOutcome {
   limits: SeepageLimit[];
   /** Piping where the line shows water leaving the fill (lib/design/piping-exit.ts); null without a line. */
   piping: PipingAtExits | null;
+  /** The finite-element solution the line came from (source "seepage-solution"). */
+  solution?: DesignSeepage;
 }
 
 /** γsat of a material, for the critical gradient (kN/m³); 20 when the material has none. */
@@ -88,6 +94,17 @@ function wettedUpstreamFace(
   return { points: g.upstreamFace };
 }
 
+/** Piping at the exits a line shows, for any line of the generated section. */
+export function pipingOnLine(p: EmbankmentParams, g: EmbankmentGeometry, line: readonly XY[], gammaSat: number) {
+  return assessPipingExits({
+    line,
+    downstreamFace: g.downstreamFace,
+    drainTop: g.drain.top,
+    gammaSat,
+    required: p.requiredPipingFactor,
+  });
+}
+
 export function phreaticForPool(
   p: EmbankmentParams,
   g: EmbankmentGeometry,
@@ -95,14 +112,7 @@ export function phreaticForPool(
   fillGammaSat: number,
 ): PhreaticOutcome {
   const poolLevel = pool === "normal" ? p.normalPool : p.floodPool;
-  const exits = (line: readonly XY[]): PipingAtExits =>
-    assessPipingExits({
-      line,
-      downstreamFace: g.downstreamFace,
-      drainTop: g.drain.top,
-      gammaSat: fillGammaSat,
-      required: p.requiredPipingFactor,
-    });
+  const exits = (line: readonly XY[]): PipingAtExits => pipingOnLine(p, g, line, fillGammaSat);
   const hand = p.handLines[pool];
   if (hand) {
     const line = spanSection(hand, g.xmax);

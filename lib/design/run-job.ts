@@ -14,6 +14,7 @@ import {
   type Radii,
   type SectionDocument,
 } from "@/lib/stability";
+import { prepareWater } from "@/lib/seepage-stability";
 import { DesignInputError, generateEmbankment, type GeneratedEmbankment } from "./generate-embankment";
 import { gridForFace, gridResolution, shiftTowardEdge, slideDirection } from "./grid-follow";
 import type { EmbankmentParams } from "./parameters";
@@ -127,12 +128,14 @@ export function searchJob(
     return { ok: false, error: why, generated };
   }
   const first = gridForFace(generated.document, c.face, settings);
+  // Water from a seepage solution is solved once per job (one orchestrator), then each grid reuses it.
+  const water = prepareWater(generated.document);
+  if (!water.ok) return { ok: false, error: water.errors.map((e) => `${e.path}: ${e.message}`).join("; "), generated };
+  const solved = water.document as SectionDocument;
   const run = (grid: Grid, radii: Radii) => {
-    const document: SectionDocument = {
-      ...generated.document,
-      analysis: analysisForJob(params, job, grid, radii, settings),
-    };
-    return { document, result: runGridSearch(document) };
+    const analysis = analysisForJob(params, job, grid, radii, settings);
+    const result = runGridSearch({ ...solved, analysis }, { waterField: water.waterField });
+    return { document: { ...generated.document, analysis } as SectionDocument, result };
   };
   let best = run(first.grid, first.radii);
   if (!best.result.ok)

@@ -14,7 +14,7 @@ import { STATUS_WORDS, statusWords, type RunStatus } from "@/lib/review/status";
 import type { MaterialSourceRecord } from "@/lib/review/material-sources";
 import { ALARM, MOSS, ReportWriter, SOFT, INK } from "./report-writer";
 import { drawSection } from "./section-drawing";
-import { waterUsedText } from "@/lib/runs/view/water-used";
+import { runSeepage, seepageUsedText, waterUsedText } from "@/lib/runs/view/water-used";
 import { writeSliceTable } from "./slice-pages";
 import { VARIANT_TEXT, stageCells, stagedView } from "@/lib/runs/view/staged-view";
 import { countOf, formatCount, formatDateTime, withUnit } from "@/lib/format";
@@ -131,6 +131,8 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
   w.heading("Water conditions");
   const water = doc.water;
   const rows: [string, string][] = [["Water condition", waterUsedText(run)]];
+  const seepage = runSeepage(run);
+  if (seepage) rows.push(["Pore pressures", seepageUsedText(seepage)]);
   if (water?.phreatic?.length) {
     const ys = water.phreatic.map((p) => p[1]);
     rows.push([
@@ -146,7 +148,7 @@ function writeInputs(w: ReportWriter, input: ReportInput): void {
       `pool from ${m2(doc.analysis.drawdown.from)} m to ${m2(doc.analysis.drawdown.to)} m (${doc.analysis.drawdown.method ?? "effective"} method)`,
     ]);
   rows.push(["Unit weight of water", `${(water?.gammaW ?? 9.81).toFixed(2)} kN/m³`]);
-  if (!water?.phreatic?.length && water?.ru === undefined)
+  if (!water?.phreatic?.length && water?.ru === undefined && !seepage)
     rows.splice(1, 0, ["Water", "dry: no phreatic line and no ru"]);
   w.keyValues(rows);
 

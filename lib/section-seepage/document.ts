@@ -51,7 +51,12 @@ export function buildSeepageDocument(
   });
   if (errors.length > 0) return { ok: false, errors };
 
-  const levels = poolLevels(section, condition.water);
+  // Levels set in the seepage view win over the water condition's line, side by side.
+  const drawn = poolLevels(section, condition.water);
+  const levels = {
+    left: settings.pools?.left ?? drawn.left,
+    right: settings.pools?.right ?? drawn.right,
+  };
   const pools: { side: "left" | "right"; level: number }[] = [];
   if (levels.left !== null) pools.push({ side: "left", level: levels.left });
   if (levels.right !== null) pools.push({ side: "right", level: levels.right });

@@ -10,6 +10,9 @@ export interface SeepageSettingsForm {
   headDrops: string;
   tailwaterSide: "" | "left" | "right";
   tailwaterLevel: string;
+  /** Pool levels set here; blank keeps the water condition's. */
+  poolLeft: string;
+  poolRight: string;
 }
 
 const text = (v: number | undefined) => (v === undefined ? "" : String(v));
@@ -22,6 +25,8 @@ export function settingsToForm(s: SeepageSettingsInput): SeepageSettingsForm {
     headDrops: text(s.headDrops),
     tailwaterSide: s.tailwater?.side ?? "",
     tailwaterLevel: text(s.tailwater?.level),
+    poolLeft: text(s.pools?.left),
+    poolRight: text(s.pools?.right),
   };
 }
 
@@ -50,10 +55,17 @@ export function settingsFromForm(f: SeepageSettingsForm): SettingsFromForm {
     crestLength: num("crestLength", "Crest length"),
     headDrops: num("headDrops", "Head drops"),
     tailwater: f.tailwaterSide !== "" && level !== undefined ? { side: f.tailwaterSide, level } : undefined,
+    pools: poolsOf(num("poolLeft", "Left pool level"), num("poolRight", "Right pool level")),
   };
   if (Object.keys(fields).length > 0) return { ok: false, fields };
   const parsed = seepageSettingsInputSchema.safeParse(raw);
   if (parsed.success) return { ok: true, settings: parsed.data };
   for (const issue of parsed.error.issues) (fields[String(issue.path[0] ?? "_")] ??= []).push(issue.message);
   return { ok: false, fields };
+}
+
+/** The pools set in the view, or undefined when both sides keep the water condition's. */
+function poolsOf(left: number | undefined, right: number | undefined): SeepageSettingsInput["pools"] {
+  if (left === undefined && right === undefined) return undefined;
+  return { ...(left !== undefined ? { left } : {}), ...(right !== undefined ? { right } : {}) };
 }

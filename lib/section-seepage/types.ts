@@ -22,6 +22,8 @@ export const seepageSettingsInputSchema = z.object({
    * toe, say), so the foundation discharges there rather than through the section's far side.
    */
   tailwater: z.object({ side: z.enum(["left", "right"]), level: coordinate }).optional(),
+  /** Pool levels set in the seepage view (typed or dragged), replacing the water condition's on that side (m). */
+  pools: z.object({ left: coordinate.optional(), right: coordinate.optional() }).optional(),
 });
 
 export type SeepageSettingsInput = z.infer<typeof seepageSettingsInputSchema>;

@@ -28,6 +28,8 @@ const HEAD_TOL = 1e-5;
 const SHARE_TOL = 1e-4;
 const SETTLED_TOL = 3e-4;
 const LIFT = 0.02;
+/** Rounds over which an unsettled run reports how much q still varied. */
+export const FLOW_WINDOW = 20;
 
 export interface FlowState {
   pattern: CsrPattern;
@@ -42,6 +44,10 @@ export interface FlowState {
   rounds: number;
   /** Largest head change in the last round (m): how far from settled an unconverged run stopped. */
   lastChange: number;
+  /** Where that change was largest (m), or null when nothing moved. */
+  lastChangeAt: [number, number] | null;
+  /** (max − min)/max of the flow over the last FLOW_WINDOW rounds: how settled q is. */
+  flowSpread: number;
   solverIterations: number;
   converged: boolean;
 }
@@ -94,6 +100,8 @@ export function solveUnconfined(
   let lastFlow = 0;
   let settled = 0;
   let lastChange = Infinity;
+  let movedAt = -1;
+  const flows = new Float64Array(FLOW_WINDOW);
   for (rounds = 1; rounds <= MAX_ROUNDS; rounds++) {
     assemble(pattern, ke, relative, values);
     previous.set(head);
@@ -141,7 +149,14 @@ export function solveUnconfined(
     if (dRel > lastChange) relax = Math.max(RELAX_MIN, relax * 0.7);
     lastChange = dRel;
     let dHead = 0;
-    for (let v = 0; v < n; v++) if (!fixed[v]) dHead = Math.max(dHead, Math.abs(head[v] - previous[v]));
+    let moved = -1;
+    for (let v = 0; v < n; v++)
+      if (!fixed[v] && Math.abs(head[v] - previous[v]) > dHead) {
+        dHead = Math.abs(head[v] - previous[v]);
+        moved = v;
+      }
+    movedAt = moved;
+    flows[(rounds - 1) % FLOW_WINDOW] = scale;
     // A few elements astride the phreatic surface can keep trading small shares long after the
     // heads and the flow have settled; three quiet rounds in a row end the iteration too.
     headMoved = dHead;
@@ -159,7 +174,23 @@ export function solveUnconfined(
   assemble(pattern, ke, relative, values);
   solverIterations += solveMasked(pattern, values, head, fixed, FINAL_TOL).iterations;
   for (let v = 0; v < n; v++) if (bc.kind[v] === INACTIVE) head[v] = NaN;
-  return { pattern, values, head, fixed, relative, rounds, lastChange: headMoved, solverIterations, converged };
+  const window = flows.subarray(0, Math.min(rounds, FLOW_WINDOW));
+  const fMax = Math.max(...window);
+  const flowSpread = fMax > 0 ? (fMax - Math.min(...window)) / fMax : 0;
+  const lastChangeAt: [number, number] | null = movedAt >= 0 ? [mesh.x[movedAt], mesh.y[movedAt]] : null;
+  return {
+    pattern,
+    values,
+    head,
+    fixed,
+    relative,
+    rounds,
+    lastChange: headMoved,
+    lastChangeAt,
+    flowSpread,
+    solverIterations,
+    converged,
+  };
 }
 
 function assemble(p: CsrPattern, ke: Float64Array, relative: Float64Array, values: Float64Array): void {

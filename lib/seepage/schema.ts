@@ -41,6 +41,8 @@ export const seepageSettingsSchema = z.object({
   crestLength: z.number().positive().max(LIMIT).optional(),
   /** Equal head drops of the drawn flow net; default 12. */
   headDrops: z.number().int().min(2).max(100).optional(),
+  /** Ids of materials that pass no water here, as if impenetrable (a base taken as tight, say). */
+  noFlow: z.array(z.string()).max(100).optional(),
 });
 
 export const seepageDocumentSchema = z

@@ -44,8 +44,15 @@ export function buildProblem(doc: unknown, maxNodes = MAX_NODES): ProblemOutcome
       errors.push(issue("empty-region", `regions[${i}].points`, `Region ${i} encloses no area.`));
     return { material: m ?? 0, points: r.points as Point[] };
   });
+  const noFlow = new Set(d.seepage.noFlow ?? []);
+  (d.seepage.noFlow ?? []).forEach((id, i) => {
+    if (!index.has(id))
+      errors.push(
+        issue("unknown-material", `seepage.noFlow[${i}]`, `seepage.noFlow names "${id}", which is not in materials.`),
+      );
+  });
   const materials: FlowMaterial[] = d.materials.map((m, i) => {
-    const pervious = m.model !== "impenetrable";
+    const pervious = m.model !== "impenetrable" && !noFlow.has(m.id);
     if (pervious && m.k === undefined && used.has(i))
       errors.push(
         issue(

@@ -15,6 +15,8 @@ import { OK, REASONS, REASON_TEXT, RIGID_NO_WEIGHT, rigidNoWeightText } from "./
 import { validateSection } from "./validate";
 import { ENGINE_VERSION } from "./version";
 import { arcY } from "./evaluate-circle";
+import { checkWaterField, type WaterFieldOptions } from "./water-field";
+import { resolveAnalysis } from "./defaults";
 import { replayStagedMass } from "./drawdown/staged-circle";
 import { sliceStage, stageSummary, stageWarnings, type SliceStage, type StageFs } from "./drawdown/staged-report";
 
@@ -82,10 +84,13 @@ export type CircleResult = CircleSuccess | EngineFailure;
  * Analyses one circle (xc, yc, r in m) of a section document by both methods.
  * @returns FS per method (null with a reason when the circle is invalid) and the slice table
  */
-export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
+export function analyzeCircle(doc: unknown, circle: Circle, opts: WaterFieldOptions = {}): CircleResult {
   const v = validateSection(doc);
   if (!v.ok) return v;
-  const P = prepareSection(v.section);
+  const analysis = resolveAnalysis(v.section.analysis);
+  const noField = checkWaterField(v.section, analysis.case, opts.waterField);
+  if (noField.length > 0) return { ok: false, errors: noField, warnings: v.warnings };
+  const P = prepareSection(v.section, analysis, opts.waterField);
   const S = createScratch(true);
   const c: Circle = { xc: circle.xc, yc: circle.yc, r: circle.r };
   const warnings: EngineWarning[] = [...issuesToWarnings(v.warnings), ...P.warnings];

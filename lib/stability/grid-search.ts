@@ -28,9 +28,10 @@ import { OK, REASONS, RIGID_NO_WEIGHT, TOO_MANY_BREAKS } from "./status";
 import { validateSection } from "./validate";
 import { checkSearchSettings } from "./validate-analysis";
 import { ENGINE_VERSION } from "./version";
+import { checkWaterField, type WaterFieldOptions } from "./water-field";
 
 /** Options of a search run. */
-export interface GridSearchOptions {
+export interface GridSearchOptions extends WaterFieldOptions {
   /** Called about once per row of centres with the fraction done; return false to cancel. */
   onProgress?: (fraction: number) => boolean | void;
 }
@@ -78,9 +79,11 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
   const missing = checkSearchSettings(v.section.analysis);
   if (missing.length > 0) return { ok: false, errors: missing, warnings: v.warnings };
   const analysis = resolveAnalysis(v.section.analysis);
+  const noField = checkWaterField(v.section, analysis.case, opts.waterField);
+  if (noField.length > 0) return { ok: false, errors: noField, warnings: v.warnings };
   const grid = analysis.grid as Grid;
   const radii = analysis.radii as Radii;
-  const P = prepareSection(v.section, analysis);
+  const P = prepareSection(v.section, analysis, opts.waterField);
   const methods = analysis.methods;
   // Bishop's and the ordinary method read only the sums the slice loop gathers; any other method
   // reads the slices back, so they are all written for it (Scratch.detail).

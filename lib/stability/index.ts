@@ -15,6 +15,7 @@ export { runGridSearch, type GridSearchOptions, type GridSearchResult, type Grid
 export { analyzeCircle, type CircleResult, type CircleSuccess, type SliceRow } from "./analyze-circle";
 export type { Circle, CircleFs, FsMap, EngineFailure, MethodRecord } from "./results";
 export { sectionGround } from "./prepare";
+export { usesSeepageWater, type WaterField, type WaterFieldOptions } from "./water-field";
 export type { StageFs, SliceStage } from "./drawdown/staged-report";
 export {
   threeStageStrength,

@@ -10,6 +10,7 @@ import { buildMaterialTable, type MaterialTable } from "./load-cases";
 import type { SectionDocument } from "./schema";
 import { buildStripTable, type RingInput, type StripTable } from "./strip-table";
 import { buildWaterModel, WATER_LINE, type WaterModel } from "./water";
+import { activeField, type WaterField } from "./water-field";
 import { buildStagedModel, VARIANT_THREE_STAGE, VARIANT_TWO_STAGE, type StagedModel } from "./drawdown/staged-model";
 
 /** A ground vertex turning by more than this (rad, 30°) is a corner the slices must not run across. */
@@ -34,6 +35,8 @@ export interface PreparedSection {
   /** A second water surface per strip whose arc crossings also break slices (staged drawdown), or null. */
   extraWaterA: Float64Array | null;
   extraWaterB: Float64Array | null;
+  /** Pore pressure at a slice base from outside (seepage water, docs/engine.md §3(d)), or null: the line's. */
+  uField: WaterField | null;
   /** Surcharge pressure per strip (kPa). */
   q: Float64Array;
   kh: number;
@@ -81,7 +84,11 @@ export function isStagedDrawdown(analysis: ResolvedAnalysis): boolean {
  * `staged.pre`; both share one strip table, so a circle cuts both into identical slices.
  * @throws Error when the regions cannot form a strip table (call validateSection first).
  */
-export function prepareSection(doc: SectionDocument, analysisIn?: ResolvedAnalysis): PreparedSection {
+export function prepareSection(
+  doc: SectionDocument,
+  analysisIn?: ResolvedAnalysis,
+  field?: WaterField,
+): PreparedSection {
   const analysis = analysisIn ?? resolveAnalysis(doc.analysis);
   const rings = sectionRings(doc);
   const base = buildStripTable(rings);
@@ -103,6 +110,7 @@ export function prepareSection(doc: SectionDocument, analysisIn?: ResolvedAnalys
   const table = breaks.length === 0 ? base.table : (buildStripTable(rings, breaks).table ?? base.table);
   const { table: mat, warnings } = buildMaterialTable(doc.materials, analysis.case);
   const P = assemble(doc, analysis, table, water, mat, warnings);
+  P.uField = water.kind === WATER_LINE ? activeField(doc, analysis.case, field) : null;
   if (preWater) {
     // The section as it stands before drawdown (stage 1); each breaks at the other's line.
     const pre = assemble(doc, analysis, table, preWater, mat, []);
@@ -186,6 +194,7 @@ function assemble(
     waterCos2,
     extraWaterA: null,
     extraWaterB: null,
+    uField: null,
     q,
     kh: doc.loads?.kh ?? 0,
     hasFaces: hasFaces && water.kind === WATER_LINE,

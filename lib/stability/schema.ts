@@ -86,6 +86,8 @@ export const waterSchema = z.object({
   ru: z.number().min(-10).max(10).optional(),
   /** Multiply phreatic pore pressure by cos²θ of the line's slope (seepage parallel to it), docs/engine.md §3. */
   cos2Correction: z.boolean().optional(),
+  /** Pore pressures from a seepage solution (docs/engine.md §3(d)); `phreatic` is then the solution's. */
+  source: z.literal("seepage").optional(),
 });
 
 /** A vertical pressure q (kPa) on the ground between x1 and x2 (m). */

@@ -15,6 +15,7 @@ import { rawNormal } from "./methods/ordinary";
 import { collectBreaks } from "./slice-breaks";
 import { findStrip } from "./strip-table";
 import { addFaceThrust } from "./vertical-faces";
+import { fieldPressure } from "./water-field";
 
 // Module-local copies: imported bindings are property reads on every use in the hot loop.
 const SLICE_CAPACITY = defaults.SLICE_CAPACITY;
@@ -74,6 +75,7 @@ export function buildSlices(
   const layerMat = T.layerMat;
   const waterA = P.waterA;
   const waterB = P.waterB;
+  const uField = P.uField;
   const nStrips = T.n;
   // The strip under each slice midpoint, advanced as the slices go right.
   let ks = findStrip(T, kept[0]);
@@ -180,7 +182,8 @@ export function buildSlices(
       // u is the base's mean pore pressure over its width: the exact area above the arc enters
       // it as it enters W, so that u·b is the water's true vertical thrust on the base.
       let u = 0;
-      if (line) u = yw > ym ? gw * (yw - ym + areaCorr / b) * P.waterCos2[ks] : 0;
+      if (uField !== null) u = fieldPressure(uField, xm, ym, (gw * areaCorr) / b);
+      else if (line) u = yw > ym ? gw * (yw - ym + areaCorr / b) * P.waterCos2[ks] : 0;
       else if (ruMode) u = (P.ru * W) / b;
       let Ww = 0;
       let Fw = 0;

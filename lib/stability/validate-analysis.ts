@@ -116,6 +116,8 @@ function checkDrawdown(
       ),
     );
   const line = water?.phreatic;
+  // Seepage water brings its line when solved (docs/engine.md §3(d)); the run itself refuses it unsolved.
+  if (!line && water?.source === "seepage") return;
   if (!line) {
     errors.push(
       issue(

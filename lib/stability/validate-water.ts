@@ -23,6 +23,8 @@ export function checkWater(
   if (water.phreatic && water.ru !== undefined) {
     errors.push(issue("water-both-models", "water", "water has both a phreatic line and ru: keep one of them."));
   }
+  if (water.source === "seepage" && water.ru !== undefined && !water.phreatic)
+    errors.push(issue("water-both-models", "water", "water comes from seepage and has ru: keep one of them."));
   if (water.ru !== undefined) {
     if (!(water.ru >= 0 && water.ru < 1))
       errors.push(issue("ru-out-of-range", "water.ru", `water.ru = ${water.ru} is outside [0, 1).`));

@@ -7,7 +7,7 @@ import type { GridSearchSuccess, SectionDocument, SliceRow } from "@/lib/stabili
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { loadingCondition, type LoadingConditionKey } from "@/lib/analysis/required-fs";
 import { materialPalette } from "@/lib/sections/material-palette";
-import { waterUsedText } from "@/lib/runs/view/water-used";
+import { documentToDraw, runSeepage, seepageUsedText, waterUsedText } from "@/lib/runs/view/water-used";
 import { downloadText, slug } from "@/lib/client/download";
 import { RunCanvas } from "@/components/runs/result/run-canvas";
 import { FsSummary } from "@/components/runs/result/fs-summary";
@@ -70,6 +70,8 @@ export function RunView({
   const drawdownTo = doc.analysis?.drawdown?.to;
   const condition = loadingCondition(run.loadingCondition as LoadingConditionKey);
   const staged = useMemo(() => stagedView(result, doc, run.engineVersion), [result, doc, run.engineVersion]);
+  const seepage = runSeepage(run);
+  const drawnDoc = useMemo(() => documentToDraw(doc, seepage), [doc, seepage]);
 
   return (
     <div className="space-y-4">
@@ -78,6 +80,7 @@ export function RunView({
         <span>{condition?.label ?? conditionWords(run.loadingCondition)}</span>
         <span>{faceWords(run.face)}</span>
         <span data-testid="run-water">Water: {waterUsedText(run)}</span>
+        {seepage ? <span data-testid="run-water-seepage">Pore pressures {seepageUsedText(seepage)}</span> : null}
         <span>
           {run.sectionName} v{run.sectionVersion}
         </span>
@@ -135,7 +138,7 @@ export function RunView({
           <PinnedCanvas markers={markers} placing={placing} onPlace={onPlace} active={activePin} onSelect={onSelectPin}>
             <RunCanvas
               caution={false}
-              document={doc}
+              document={drawnDoc}
               materialColors={colors}
               result={result}
               method={method}

@@ -11,6 +11,8 @@ export interface RunSetupInput {
   condition: LoadingConditionKey;
   /** Key of the section's water condition; "" leaves it to the loading condition's usual water. */
   waterCondition: string;
+  /** true: pore pressures from the condition's finite-element seepage solution. */
+  fromSeepage: boolean;
   face: "upstream" | "downstream";
   methods: ("bishop" | "fellenius")[];
   slices: number;
@@ -35,6 +37,7 @@ export function toRunSetup(v: RunSetupInput): unknown {
   return {
     condition: v.condition,
     waterCondition: v.waterCondition || undefined,
+    ...(v.fromSeepage ? { waterSource: "seepage" } : {}),
     face: v.face,
     methods: Array.isArray(v.methods) ? v.methods : [v.methods].filter(Boolean),
     slices: v.slices,
@@ -57,6 +60,7 @@ export function fromRunSetup(s: RunSetup): RunSetupInput {
   return {
     condition: s.condition,
     waterCondition: s.waterCondition ?? "",
+    fromSeepage: s.waterSource === "seepage",
     face: s.face,
     methods: s.methods,
     slices: s.slices,

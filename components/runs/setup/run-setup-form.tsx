@@ -23,6 +23,8 @@ import { useGridSearch } from "@/components/runs/setup/use-grid-search";
 import { SearchProgress } from "@/components/runs/setup/search-progress";
 import { SearchOutcome } from "@/components/runs/setup/search-outcome";
 import { RunCanvas } from "@/components/runs/result/run-canvas";
+import { SeepageWaterField } from "@/components/runs/setup/seepage-water-field";
+import { attachSeepage, type SeepageInputs } from "@/lib/seepage-stability/attach";
 
 export interface RunSetupFormProps {
   projectId: number;
@@ -32,6 +34,8 @@ export interface RunSetupFormProps {
   initial?: RunSetup;
   revisesRunId?: number;
   materialColors?: Record<string, string>;
+  /** Conductivities and saved seepage settings per water condition id, for water from seepage. */
+  seepageInputs?: Record<string, SeepageInputs>;
 }
 
 function defaults(doc: SectionDocument, requiredFs: Record<LoadingConditionKey, number>): RunSetupInput {
@@ -40,6 +44,7 @@ function defaults(doc: SectionDocument, requiredFs: Record<LoadingConditionKey, 
   return {
     condition: "steady-seepage",
     waterCondition: pickWaterCondition(doc, "steady-seepage").id,
+    fromSeepage: false,
     face,
     methods: ["bishop", "fellenius"],
     slices: 50,
@@ -73,6 +78,7 @@ export function RunSetupForm({
   initial,
   revisesRunId,
   materialColors,
+  seepageInputs,
 }: RunSetupFormProps) {
   const router = useRouter();
   const form = useForm<RunSetupInput, unknown, RunSetup>({
@@ -113,9 +119,25 @@ export function RunSetupForm({
     }
   }
 
+  const [seepageError, setSeepageError] = useState<string | null>(null);
   const onRun = form.handleSubmit((valid) => {
+    setSeepageError(null);
+    let runDoc = doc;
+    if (valid.waterSource === "seepage") {
+      // The same section the server attaches on save (lib/runs/record/seepage-section.ts), so both solve alike.
+      const water = waterConditionForRun(doc, valid);
+      const inputs = seepageInputs?.[water.id];
+      const attached = inputs ? attachSeepage(doc, water, inputs) : null;
+      if (!attached?.ok) {
+        setSeepageError(
+          attached ? attached.errors.map((e) => e.message).join(" ") : "This water has no seepage settings.",
+        );
+        return;
+      }
+      runDoc = attached.section;
+    }
     setSetup(valid);
-    search.start(documentForRun(doc, valid));
+    search.start(documentForRun(runDoc, valid));
   });
 
   const gridForCanvas = Number.isFinite(values.grid?.x1) ? values.grid : undefined;
@@ -152,6 +174,17 @@ export function RunSetupForm({
             loadingCondition={values.condition}
             value={chosenWater?.id ?? ""}
             onChange={(id) => onWater(id)}
+          />
+          <SeepageWaterField
+            checked={values.fromSeepage}
+            available={Boolean(seepageInputs) && chosenWater?.kind !== "construction"}
+            seepageHref={
+              chosenWater
+                ? `/projects/${projectId}/sections/${section.id}/seepage?condition=${encodeURIComponent(chosenWater.id)}`
+                : null
+            }
+            error={seepageError}
+            onChange={(on) => form.setValue("fromSeepage", on)}
           />
         </ConditionFields>
         <MethodFields form={form} />

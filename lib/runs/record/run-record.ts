@@ -22,11 +22,17 @@ import {
 import type { PreviewCheck } from "./compare-preview";
 import { searchOnServer } from "./server-search";
 import { userIssue } from "@/lib/runs/view/engine-issue-text";
+import { withSeepageKeys, type SeepageSummary } from "@/lib/seepage-stability";
 
 export type StoredSliceTables = Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>;
 
 /** The result JSON of a kept run: the server's search, the set-up it ran, and the preview's comparison. */
-export type StoredRunResult = GridSearchSuccess & { setup: RunSetup; previewCheck: PreviewCheck };
+export type StoredRunResult = GridSearchSuccess & {
+  setup: RunSetup;
+  previewCheck: PreviewCheck;
+  /** Water from a seepage solution: its q and mesh, for the run page and the review. */
+  seepage?: SeepageSummary;
+};
 
 export interface RunRecord {
   document: SectionDocument;
@@ -64,11 +70,14 @@ export async function computeRunRecord(
   // The shared schema carries the bound on the search's size (lib/runs/record/limits.ts).
   const setup = runSetupSchema.parse(rawSetup);
   const water = waterConditionOrRefuse(section, setup);
-  const valid = validateSection(documentForRun(section, setup, water));
+  const runDocument = documentForRun(section, setup, water);
+  const valid = validateSection(runDocument);
   if (!valid.ok) throw invalid("The section and set-up do not validate.", valid.errors, section);
-  const { record, mode } = await searchOnServer(valid.section);
+  // Water from seepage keeps the keys the engine's validation drops, so the frozen document solves again.
+  const document = withSeepageKeys(runDocument, valid.section);
+  const { record, mode } = await searchOnServer(document);
   if (!record.ok) throw invalid("The section and set-up do not validate.", record.errors, section);
-  const { result, critical } = record;
+  const { result, critical, seepage } = record;
   const sliceTables: StoredSliceTables = {};
   for (const method of result.methods) {
     const one = critical[method];
@@ -81,8 +90,8 @@ export async function computeRunRecord(
   }
   const fsOf = (m: Method) => (result.methods.includes(m) ? (result.results[m]?.fs ?? null) : null);
   return {
-    document: valid.section,
-    result: { ...result, setup, previewCheck: compare(result) },
+    document,
+    result: { ...result, setup, previewCheck: compare(result), ...(seepage ? { seepage } : {}) },
     sliceTables,
     fsBishop: fsOf("bishop"),
     fsFellenius: fsOf("fellenius"),

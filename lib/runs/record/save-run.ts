@@ -16,6 +16,7 @@ import { revisedNotFound, runRow, type RunMeta } from "./run-row";
 import { comparePreview, type PreviewCheck } from "./compare-preview";
 import type { StoredSearchResult } from "./result-schema";
 import { computeRunRecord } from "./run-record";
+import { sectionForSeepageRun } from "./seepage-section";
 
 export interface KeptRun {
   id: number;
@@ -45,6 +46,7 @@ export async function keepRun(
   if (!version) throw notFound("The section version");
   await checkRevises(input.projectId, input.revisesRunId);
   const setup = runSetupSchema.parse(input.setup);
+  const document = await sectionForSeepageRun(input.projectId, section.id, version.document as SectionDocument, setup);
   if (searchCircleCount(setup.grid, setup.radii) > QUEUE_SEARCH_CIRCLES) {
     const job = await startJob(runSearchKind, {
       projectId: input.projectId,
@@ -53,7 +55,7 @@ export async function keepRun(
       input: {
         sectionId: section.id,
         sectionVersionId: version.id,
-        document: version.document as SectionDocument,
+        document,
         setup,
         title: input.title,
         revisesRunId: input.revisesRunId ?? null,
@@ -62,9 +64,7 @@ export async function keepRun(
     });
     return { job };
   }
-  const record = await computeRunRecord(version.document as SectionDocument, input.setup, (server) =>
-    comparePreview(server, input.preview),
-  );
+  const record = await computeRunRecord(document, input.setup, (server) => comparePreview(server, input.preview));
   try {
     const id = await createRun({ ...runRow(record, input), sectionId: section.id, sectionVersionId: version.id });
     return { id, previewCheck: record.result.previewCheck };

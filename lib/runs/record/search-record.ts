@@ -2,7 +2,8 @@
  * The one search a run record is made of: the grid search of the run's document, then each
  * method's critical circle reported slice by slice, with the warnings of both gathered into one
  * list. The browser's worker calls it for the preview and the server calls it on save, with the
- * same document, so the two agree exactly (the engine is deterministic; docs/engine.md §5).
+ * same document, so the two agree exactly (the engine is deterministic; docs/engine.md §5). Water from
+ * a seepage solution is solved once here, through the one orchestrator (lib/seepage-stability).
  */
 import {
   analyzeCircle,
@@ -15,6 +16,7 @@ import {
   type Method,
   type SectionDocument,
 } from "@/lib/stability";
+import { prepareWater, type SeepageSummary } from "@/lib/seepage-stability";
 
 export type CriticalReports = Partial<Record<Method, CircleSuccess>>;
 
@@ -24,6 +26,8 @@ export interface SearchRecord {
   result: GridSearchSuccess;
   /** Each method's critical circle, reported slice by slice. */
   critical: CriticalReports;
+  /** Where the pore pressures came from when the water is a seepage solution's (q, mesh). */
+  seepage?: SeepageSummary;
 }
 
 /**
@@ -73,14 +77,23 @@ export function keptWarnings(result: GridSearchSuccess, critical: CriticalReport
 
 /** Runs the search of a run's document and reports its critical circles; engine failures pass through. */
 export function searchRecord(doc: SectionDocument, opts: GridSearchOptions = {}): SearchRecord | EngineFailure {
-  const result = runGridSearch(doc, opts);
+  const water = prepareWater(doc);
+  if (!water.ok) return water;
+  const { document, waterField, seepage } = water;
+  const result = runGridSearch(document, { ...opts, waterField });
   if (!result.ok) return result;
   const critical: CriticalReports = {};
   for (const method of result.methods) {
     const best = result.results[method];
     if (!best) continue;
-    const one = analyzeCircle(doc, best.circle);
+    const one = analyzeCircle(document, best.circle, { waterField });
     if (one.ok) critical[method] = one;
   }
-  return { ok: true, result: { ...result, warnings: keptWarnings(result, critical) }, critical };
+  const kept = { ...result, warnings: [...keptWarnings(result, critical), ...seepageWarnings(seepage)] };
+  return { ok: true, result: kept, critical, ...(seepage ? { seepage } : {}) };
+}
+
+/** The seepage solution's own warnings (a phreatic surface that did not settle, say) travel with the run. */
+function seepageWarnings(seepage: SeepageSummary | null): EngineWarning[] {
+  return (seepage?.warnings ?? []).map((w) => ({ code: `seepage-${w.code}`, message: `Seepage: ${w.message}` }));
 }

@@ -30,6 +30,26 @@ const library: MaterialConductivity[] = ZONED_MATERIALS.map((m) => {
 const section = buildZonedDamSection(ZONED_MATERIALS.map((m) => toEngineMaterial({ ...m })));
 const condition = waterConditionsOf(section)[0];
 
+describe("pools set in the seepage view", () => {
+  it("replace the water condition's on their side, and a lower pool passes less water", () => {
+    const own = buildSeepageDocument(section, condition, library, ZONED_SEEPAGE_SETTINGS);
+    const lower = buildSeepageDocument(section, condition, library, { ...ZONED_SEEPAGE_SETTINGS, pools: { left: 18 } });
+    if (!own.ok || !lower.ok) throw new Error("demo document");
+    expect(own.document.seepage.pools).toEqual([
+      { side: "left", level: ZONED_POOL },
+      { side: "right", level: 6 },
+    ]);
+    expect(lower.document.seepage.pools).toEqual([
+      { side: "left", level: 18 },
+      { side: "right", level: 6 },
+    ]);
+    // Darcy's law (fact of physics): q grows with the head lost, so 5 m less pool passes less water.
+    const [a, b] = [runSeepage(own.document), runSeepage(lower.document)];
+    if (!a.ok || !b.ok) throw new Error("demo solve");
+    expect(b.solution.q).toBeLessThan(a.solution.q);
+  });
+});
+
 describe("the demo zoned dam", () => {
   it("is a section the engine accepts, with valid water conditions", () => {
     expect(validateSection(section).ok).toBe(true);
@@ -140,6 +160,8 @@ describe("the seepage settings form", () => {
     headDrops: "",
     tailwaterSide: "",
     tailwaterLevel: "",
+    poolLeft: "",
+    poolRight: "",
   } as const;
 
   it("reads back what it writes, the demo's settings included", () => {
@@ -147,6 +169,13 @@ describe("the seepage settings form", () => {
       ok: true,
       settings: ZONED_SEEPAGE_SETTINGS,
     });
+  });
+
+  it("keeps pool levels typed (or dragged) in the view, and a bad one is named", () => {
+    const withPools = { ...ZONED_SEEPAGE_SETTINGS, pools: { left: 21.5 } };
+    expect(settingsFromForm(settingsToForm(withPools))).toEqual({ ok: true, settings: withPools });
+    const bad = settingsFromForm({ ...blank, poolRight: "6,5" });
+    expect(!bad.ok && bad.fields.poolRight[0]).toMatch(/Right pool level/);
   });
 
   it("names each bad field: a decimal comma, a tailwater side without its level, too few head drops", () => {

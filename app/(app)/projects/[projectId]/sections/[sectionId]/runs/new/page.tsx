@@ -12,6 +12,7 @@ import type { SectionDocument } from "@/lib/stability";
 import type { RunSetup } from "@/lib/analysis/run-setup";
 import { fetchRun } from "@/db/queries/runs";
 import { pageId, toId } from "@/lib/api/ids";
+import { loadSeepageInputsByCondition } from "@/lib/seepage-stability/load-inputs";
 
 export const metadata: Metadata = { title: "New run" };
 
@@ -37,6 +38,8 @@ export default async function NewRunPage({
   }
   const version = await fetchSectionVersion(section.id, section.currentVersion);
   const requiredFs = await fetchRequiredFsMap(access.project.id);
+  const document = version!.document as SectionDocument;
+  const seepageInputs = await loadSeepageInputsByCondition(access.project.id, section.id, document);
   // "Revise as a new run" starts from the earlier run's settings, on the section as it is now.
   const from = toId((await searchParams).from);
   const earlier = from ? await fetchRun(access.project.id, from) : null;
@@ -61,7 +64,8 @@ export default async function NewRunPage({
       <RunSetupForm
         projectId={access.project.id}
         section={{ id: section.id, name: section.name, version: section.currentVersion }}
-        document={version!.document as SectionDocument}
+        document={document}
+        seepageInputs={seepageInputs}
         requiredFs={requiredFs}
         initial={initial}
         revisesRunId={earlier && initial ? earlier.id : undefined}
