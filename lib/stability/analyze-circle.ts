@@ -14,6 +14,7 @@ import { M_ALPHA_WARN } from "./search-warnings";
 import { OK, REASONS, REASON_TEXT, RIGID_NO_WEIGHT, rigidNoWeightText } from "./status";
 import { validateSection } from "./validate";
 import { ENGINE_VERSION } from "./version";
+import type { AnalysisFsRecord, LambdaRecord, RigorousRecord } from "./rigorous-types";
 import { arcY } from "./evaluate-circle";
 import { replayStagedMass } from "./drawdown/staged-circle";
 import { sliceStage, stageSummary, stageWarnings, type SliceStage, type StageFs } from "./drawdown/staged-report";
@@ -57,7 +58,12 @@ export interface CircleSuccess {
   ok: true;
   engineVersion: string;
   circle: Circle;
-  fs: { bishop: number | null; fellenius: number | null };
+  /** Bishop and the ordinary method always; Spencer and Morgenstern–Price when analysis.methods asks. */
+  fs: { bishop: number | null; fellenius: number | null } & AnalysisFsRecord;
+  /** λ beside fs for Spencer and Morgenstern–Price (docs/engine-io.md). */
+  lambda?: LambdaRecord;
+  /** Their full solutions: interslice forces, line of thrust, warnings with their place. */
+  rigorous?: RigorousRecord;
   reason?: string;
   reasonText?: string;
   entry?: [number, number];

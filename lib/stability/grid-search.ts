@@ -19,7 +19,7 @@ import {
   type FsMap,
   type MethodRecord,
 } from "./results";
-import type { Grid, Method, Radii, SectionDocument } from "./schema";
+import type { Grid, IntersliceFunction, Method, Radii, RigorousMethod, SectionDocument } from "./schema";
 import { createScratch } from "./scratch";
 import { stageWarnings } from "./drawdown/staged-report";
 import { createMethodState, localMinima, recordFs, type MethodState } from "./search-state";
@@ -40,7 +40,15 @@ export interface GridSearchSuccess {
   ok: true;
   engineVersion: string;
   case: string;
+  /** The circular methods run (their results are keyed by these names). */
   methods: Method[];
+  /**
+   * Spencer and Morgenstern–Price, when asked for: their results sit beside the circular methods'
+   * in `results`, `fsMap` and `lowest`, each with its own critical circle and `lambda`.
+   */
+  rigorousMethods?: RigorousMethod[];
+  /** The Morgenstern–Price interslice function, when that method ran. */
+  interslice?: IntersliceFunction;
   ordinaryForm: string;
   results: MethodRecord<CircleFs | null>;
   fsMap: MethodRecord<FsMap>;

@@ -14,6 +14,22 @@ export {
 export { runGridSearch, type GridSearchOptions, type GridSearchResult, type GridSearchSuccess } from "./grid-search";
 export { analyzeCircle, type CircleResult, type CircleSuccess, type SliceRow } from "./analyze-circle";
 export type { Circle, CircleFs, FsMap, EngineFailure, MethodRecord } from "./results";
+export {
+  RIGOROUS_METHODS,
+  type XY,
+  type IntersliceForce,
+  type RigorousSlice,
+  type RigorousWarning,
+  type RigorousWarningCode,
+  type RigorousFs,
+  type RigorousRecord,
+  type LambdaRecord,
+  type AnalysisFsRecord,
+  type MethodReason,
+  type SurfaceSliceRow,
+  type SurfaceSuccess,
+  type SurfaceSearchProgress,
+} from "./rigorous-types";
 export { sectionGround } from "./prepare";
 export type { StageFs, SliceStage } from "./drawdown/staged-report";
 export {

@@ -2,7 +2,8 @@
  * Result shapes shared by the grid search and the one-circle report (docs/engine-io.md
  * "Output"). Plain JSON: numbers, arrays, null; never NaN or Infinity.
  */
-import type { Method } from "./schema";
+import type { AnalysisMethod, Method } from "./schema";
+import type { XY } from "./rigorous-types";
 import type { EngineWarning, Issue } from "./issues";
 import { arcY, evaluateCircle } from "./evaluate-circle";
 import type { PreparedSection } from "./prepare";
@@ -26,6 +27,10 @@ export interface CircleFs {
   direction: "left" | "right";
   /** Staged drawdown only (docs/engine.md §7(b)): this method's FS at each stage; `fs` is the final one. */
   stages?: StageFs;
+  /** Spencer and Morgenstern–Price only: λ of the interslice force function at this surface. */
+  lambda?: number;
+  /** A surfaces search only (docs/engine-io.md): the slip surface, [x, y] (m), x increasing. */
+  surface?: XY[];
 }
 
 /** Minimum FS over radii at every centre, row by row: values[iy·nx + ix], null where no circle was valid. */
@@ -44,7 +49,7 @@ export interface EngineFailure {
   warnings: Issue[];
 }
 
-export type MethodRecord<T> = Partial<Record<Method, T>>;
+export type MethodRecord<T> = Partial<Record<AnalysisMethod, T>>;
 
 /** Replaces NaN and ±Infinity by null for JSON output. */
 export function finiteOrNull(v: number): number | null {

@@ -1,0 +1,125 @@
+/**
+ * Spencer and Morgenstern–Price on a circle (docs/engine.md §11): the slices the circle evaluator
+ * cut are handed to the general limit-equilibrium solver with the centre as the moment point and
+ * the radius as the length scale, so that its moment equation at λ = 0 is Bishop's simplified
+ * method term by term (the same driving terms S.dD, the same base strengths).
+ */
+import { isDriven, massDirection } from "./circle-direction";
+import { sliceMass } from "./evaluate-circle";
+import { lowestF, type GleSlices } from "./methods/gle";
+import { ordinaryFactor } from "./methods/ordinary";
+import type { PreparedSection } from "./prepare";
+import { NO_DRIVING, OK } from "./status";
+import { morgensternPriceFactor } from "./methods/morgenstern-price";
+import { spencerFactor } from "./methods/spencer";
+import type { Scratch } from "./scratch";
+import type { RigorousMethod } from "./schema";
+
+/**
+ * Copies the slices now in S (one mass of circle (xc, yc, r) sliding in direction dir) into G in
+ * the solver's frame: x' = dir·x, numbered from the upslope end.
+ */
+export function circleToGle(S: Scratch, G: GleSlices, xc: number, yc: number, r: number, dir: number): void {
+  const n = S.n;
+  G.n = n;
+  for (let j = 0; j < n; j++) {
+    const i = dir >= 0 ? j : n - 1 - j;
+    G.xl[j] = dir >= 0 ? S.xL[i] : -S.xR[i];
+    G.xr[j] = dir >= 0 ? S.xR[i] : -S.xL[i];
+    G.ym[j] = S.ym[i];
+    G.sinA[j] = S.sinA[i];
+    G.cosA[j] = S.cosA[i];
+    G.len[j] = S.len[i];
+    G.V[j] = S.V[i];
+    const H = S.Hn[i];
+    G.H[j] = H;
+    // S.dD = V·sin α + ΣH·(yc − y)/R: the horizontal forces' resultant height follows from it.
+    G.yH[j] = H !== 0 ? yc - ((S.dD[i] - S.V[i] * S.sinA[i]) * r) / H : S.ym[i];
+    G.u[j] = S.u[i];
+    G.c[j] = S.c[i];
+    G.tp[j] = S.tanPhi[i];
+    G.drive[j] = S.dD[i];
+    G.armS[j] = 1;
+    G.armN[j] = 0;
+  }
+  void xc;
+}
+
+/**
+ * The rigorous method's F on the slices in G, starting from F0 (Bishop's F is a good start).
+ * NaN with G.status set when there is no acceptable solution.
+ */
+export function rigorousFactor(G: GleSlices, method: RigorousMethod, halfSine: boolean, F0: number): number {
+  const start = F0 > lowestF(G) ? F0 : 1;
+  return method === "spencer" ? spencerFactor(G, start) : morgensternPriceFactor(G, start, halfSine);
+}
+
+/** Where the last rigorousOnCircle found its lowest factor: mass index and direction (−1 mass when none). */
+export interface RigorousPick {
+  fs: number;
+  lambda: number;
+  mass: number;
+  dir: number;
+  /** Status of the failure when no mass gave a factor. */
+  status: number;
+}
+
+export function createRigorousPick(): RigorousPick {
+  return { fs: NaN, lambda: NaN, mass: -1, dir: 1, status: 0 };
+}
+
+/**
+ * Runs a rigorous method on every driven mass of the circle last evaluated in S (evaluateCircle
+ * returned OK), each in its own direction (both ways when level), and keeps the lowest factor in
+ * `out`. A mass without an acceptable solution makes the circle's result a failure with that
+ * status, as Bishop's does. Re-slices the masses, so S's slice arrays change.
+ */
+export function rigorousOnCircle(
+  P: PreparedSection,
+  S: Scratch,
+  G: GleSlices,
+  xc: number,
+  yc: number,
+  r: number,
+  method: RigorousMethod,
+  halfSine: boolean,
+  out: RigorousPick,
+): number {
+  const F0 = S.fsB > 0 ? S.fsB : S.fsO > 0 ? S.fsO : 1;
+  out.fs = NaN;
+  out.lambda = NaN;
+  out.mass = -1;
+  out.status = OK;
+  let best = Infinity;
+  const eff = P.ordinaryForm === 1;
+  const nMass = S.nMass;
+  for (let m = 0; m < nMass; m++) {
+    const d0 = massDirection(P, S, xc, yc, r, m);
+    const tries = d0 === 0 ? 2 : 1;
+    for (let t = 0; t < tries; t++) {
+      const dir = d0 !== 0 ? d0 : t === 0 ? 1 : -1;
+      if (sliceMass(P, S, xc, yc, r, m, dir) !== OK) continue;
+      const negO = S.negO;
+      const res = ordinaryFactor(S, 1, eff);
+      S.negO = negO;
+      if (!isDriven(S.D, S.gross, res)) continue;
+      circleToGle(S, G, xc, yc, r, dir);
+      const f = rigorousFactor(G, method, halfSine, F0);
+      if (!(f >= 0)) {
+        out.status = G.status;
+        out.fs = NaN;
+        out.mass = -1;
+        return NaN;
+      }
+      if (f < best) {
+        best = f;
+        out.fs = f;
+        out.lambda = G.lambda;
+        out.mass = m;
+        out.dir = dir;
+      }
+    }
+  }
+  if (out.mass < 0) out.status = NO_DRIVING;
+  return out.fs;
+}
