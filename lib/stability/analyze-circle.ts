@@ -15,6 +15,7 @@ import { OK, REASONS, REASON_TEXT, RIGID_NO_WEIGHT, rigidNoWeightText } from "./
 import { validateSection } from "./validate";
 import { ENGINE_VERSION } from "./version";
 import type { AnalysisFsRecord, LambdaRecord, RigorousRecord } from "./rigorous-types";
+import { circleRigorous } from "./rigorous-circle";
 import { arcY } from "./evaluate-circle";
 import { replayStagedMass } from "./drawdown/staged-circle";
 import { sliceStage, stageSummary, stageWarnings, type SliceStage, type StageFs } from "./drawdown/staged-report";
@@ -105,7 +106,7 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
   if (![c.xc, c.yc, c.r].every(Number.isFinite)) {
     return {
       ...base,
-      fs: { bishop: null, fellenius: null },
+      fs: { bishop: null, fellenius: null, ...noRigorous(P) },
       reason: "radius-not-positive",
       reasonText: "The circle needs finite xc, yc and r.",
       masses: 0,
@@ -116,7 +117,7 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
   if (st !== OK) {
     return {
       ...base,
-      fs: { bishop: null, fellenius: null },
+      fs: { bishop: null, fellenius: null, ...noRigorous(P) },
       reason: REASONS[st],
       reasonText: st === RIGID_NO_WEIGHT ? rigidNoWeightText(P.mat.ids[S.rigidMat]) : REASON_TEXT[st],
       masses: S.nMass,
@@ -163,9 +164,11 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
       code: "several-slip-masses",
       message: `The circle cuts ${S.nMass} separate pieces of soil; each was analysed and the lowest FS is reported. The slices shown are those of the governing piece.`,
     });
+  const rig = rigorousPart(P, S, c, warnings);
   return {
     ...base,
-    fs: { bishop: finiteOrNull(fsB), fellenius: finiteOrNull(fsO) },
+    fs: { bishop: finiteOrNull(fsB), fellenius: finiteOrNull(fsO), ...(rig?.fs ?? {}) },
+    ...(rig ? { lambda: rig.lambda, rigorous: rig.rigorous } : {}),
     ...(Number.isFinite(fsB) ? {} : { reason: REASONS[reasonB], reasonText: REASON_TEXT[reasonB] }),
     entry: dir >= 0 ? a : b,
     exit: dir >= 0 ? b : a,
@@ -177,6 +180,32 @@ export function analyzeCircle(doc: unknown, circle: Circle): CircleResult {
     ...(staged ? { stages: staged.stages, stagedVariant: staged.variant } : {}),
     slices,
   };
+}
+
+/** null for each rigorous method asked for: a circle without a slip mass has no factor. */
+function noRigorous(P: PreparedSection): AnalysisFsRecord {
+  const out: AnalysisFsRecord = {};
+  for (const m of P.analysis.rigorous) out[m] = null;
+  return out;
+}
+
+/**
+ * Spencer and Morgenstern–Price on the circle, when asked for (after the slice table, since they
+ * re-slice). A staged drawdown has no rigorous form here: null with a warning.
+ */
+function rigorousPart(P: PreparedSection, S: Scratch, c: Circle, warnings: EngineWarning[]) {
+  const methods = P.analysis.rigorous;
+  if (methods.length === 0) return null;
+  if (P.staged !== null) {
+    warnings.push({
+      code: "rigorous-not-staged",
+      message: "Spencer and Morgenstern–Price are not run in a staged drawdown; use the effective-stress drawdown.",
+    });
+    return { fs: noRigorous(P), lambda: noRigorous(P), rigorous: {} };
+  }
+  const r = circleRigorous(P, S, c, methods, P.analysis.interslice);
+  warnings.push(...r.warnings);
+  return r;
 }
 
 /**

@@ -4,16 +4,21 @@
  * the radius as the length scale, so that its moment equation at λ = 0 is Bishop's simplified
  * method term by term (the same driving terms S.dD, the same base strengths).
  */
-import { isDriven, massDirection } from "./circle-direction";
+import { arcY, isDriven, massDirection } from "./circle-direction";
+import { groundAt } from "./ground";
+import type { EngineWarning } from "./issues";
+import type { Circle } from "./results";
+import { rigorousReport } from "./rigorous-report";
+import type { AnalysisFsRecord, LambdaRecord, RigorousRecord } from "./rigorous-types";
 import { sliceMass } from "./evaluate-circle";
-import { lowestF, type GleSlices } from "./methods/gle";
+import { createGleSlices, lowestF, type GleSlices } from "./methods/gle";
 import { ordinaryFactor } from "./methods/ordinary";
 import type { PreparedSection } from "./prepare";
-import { NO_DRIVING, OK } from "./status";
+import { NO_DRIVING, NOT_CONVERGED, OK } from "./status";
 import { morgensternPriceFactor } from "./methods/morgenstern-price";
 import { spencerFactor } from "./methods/spencer";
 import type { Scratch } from "./scratch";
-import type { RigorousMethod } from "./schema";
+import type { IntersliceFunction, RigorousMethod } from "./schema";
 
 /**
  * Copies the slices now in S (one mass of circle (xc, yc, r) sliding in direction dir) into G in
@@ -122,4 +127,49 @@ export function rigorousOnCircle(
   }
   if (out.mass < 0) out.status = NO_DRIVING;
   return out.fs;
+}
+
+/** Spencer / Morgenstern–Price on one circle, as reported by `--circle`. */
+export interface CircleRigorous {
+  fs: AnalysisFsRecord;
+  lambda: LambdaRecord;
+  rigorous: RigorousRecord;
+  warnings: EngineWarning[];
+}
+
+/**
+ * Every rigorous method asked for on circle c, which evaluateCircle has just accepted (S holds
+ * its masses). Each method's governing mass is re-sliced and solved again so that the reported
+ * forces are those of its factor. S's slice arrays change.
+ */
+export function circleRigorous(
+  P: PreparedSection,
+  S: Scratch,
+  c: Circle,
+  methods: readonly RigorousMethod[],
+  interslice: IntersliceFunction,
+): CircleRigorous {
+  const out: CircleRigorous = { fs: {}, lambda: {}, rigorous: {}, warnings: [] };
+  const G = createGleSlices();
+  const pick = createRigorousPick();
+  const halfSine = interslice === "half-sine";
+  const geo = (dir: number) => ({
+    dir,
+    baseAt: (x: number) => arcY(c.xc, c.yc, c.r, x),
+    topAt: (x: number) => groundAt(P.ground, x),
+  });
+  for (const m of methods) {
+    const f = rigorousOnCircle(P, S, G, c.xc, c.yc, c.r, m, halfSine, pick);
+    if (Number.isFinite(f)) {
+      sliceMass(P, S, c.xc, c.yc, c.r, pick.mass, pick.dir);
+      circleToGle(S, G, c.xc, c.yc, c.r, pick.dir);
+      rigorousFactor(G, m, halfSine, f);
+    } else G.status = pick.status === OK ? NOT_CONVERGED : pick.status;
+    const rep = rigorousReport(G, m, interslice, geo(pick.dir));
+    out.fs[m] = rep.fs;
+    out.lambda[m] = rep.lambda;
+    out.rigorous[m] = rep;
+    out.warnings.push(...rep.warnings.map((w) => ({ code: w.code, message: w.message })));
+  }
+  return out;
 }

@@ -121,9 +121,14 @@ export interface SurfaceSuccess {
   lambda: LambdaRecord;
   /** Methods without a factor, and why (`circular-only`, `not-converged`, …). */
   reasons: Partial<Record<AnalysisMethod, MethodReason>>;
-  entry: XY;
-  exit: XY;
-  direction: "left" | "right";
+  /** Set when the surface itself is refused (every fs null): why, in words, and where. */
+  reason?: string;
+  reasonText?: string;
+  at?: XY | null;
+  /** Upslope end, toe end and sliding direction; absent when the surface is refused. */
+  entry?: XY;
+  exit?: XY;
+  direction?: "left" | "right";
   slices: SurfaceSliceRow[];
   rigorous: RigorousRecord;
   warnings: EngineWarning[];
