@@ -11,7 +11,7 @@
  */
 import { describe, expect, test } from "vitest";
 import { type SectionDocument } from "@/lib/stability";
-import { createGleSlices, factorAt } from "@/lib/stability/methods/gle";
+import { factorAt } from "@/lib/stability/methods/gle";
 import { prepareSection } from "@/lib/stability/prepare";
 import { analyzeSurface } from "@/lib/stability/surfaces/analyze-surface";
 import { createSurfaceEvaluator, evaluateSurface, surfaceToGle } from "@/lib/stability/surfaces/evaluate-surface";
