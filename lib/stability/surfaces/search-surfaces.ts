@@ -13,6 +13,7 @@ import { prepareSection, type PreparedSection } from "../prepare";
 import type { CircleFs } from "../results";
 import type { RigorousMethod } from "../schema";
 import type { SurfaceSearchProgress, XY } from "../rigorous-types";
+import { M_ALPHA_WARN } from "../search-warnings";
 import { validateSection } from "../validate";
 import { checkSurface } from "./check-surface";
 import { createSurfaceEvaluator, evaluateSurface, type SurfaceEvaluator } from "./evaluate-surface";
@@ -172,8 +173,10 @@ function improve(
     const cand = toPts(p);
     const ok = checkSurface(P, cand);
     if (!ok.ok) return Infinity;
-    const fs = evaluateSurface(P, E, ok.px, ok.py, method, halfSine, best < Infinity ? best : scale);
-    if (!(fs > 0)) return Infinity;
+    // The same start for every surface (not the best so far), so that where the equations have more
+    // than one root the search does not wander onto another; a solution with mα < 0.2 is not accepted.
+    const fs = evaluateSurface(P, E, ok.px, ok.py, method, halfSine);
+    if (!(fs > 0) || E.G.minMa < M_ALPHA_WARN) return Infinity;
     if (fs < best) {
       best = fs;
       bestPts = Array.from(ok.px, (x, i) => [x, ok.py[i]] as XY);
