@@ -9,6 +9,7 @@ import type { RigorousMethod } from "./schema";
 import type { Scratch } from "./scratch";
 import { createMethodState, recordFs, type MethodState } from "./search-state";
 import { REASONS } from "./status";
+import { M_ALPHA_WARN } from "./search-warnings";
 import type { EngineWarning } from "./issues";
 
 const LABEL: Record<RigorousMethod, string> = {
@@ -25,7 +26,7 @@ export function rigorousFailureWarnings(rig: RigorousSearch, out: EngineWarning[
       code: "rigorous-no-solution",
       message:
         `${LABEL[m]}: no acceptable solution on some circles that have a Bishop factor (${parts.join(", ")}); ` +
-        "they are left out of its search, never given a number.",
+        "they are left out of its search.",
     });
   });
 }
@@ -58,8 +59,11 @@ export function createRigorousSearch(P: PreparedSection, cells: number, lowestCo
     visit(S, xc, yc, r, cell, ix, iy, ir) {
       for (let k = 0; k < methods.length; k++) {
         const f = rigorousOnCircle(P, S, G, xc, yc, r, methods[k], halfSine, pick);
-        last[k] = f;
-        if (f > 0) recordFs(states[k], f, xc, yc, r, cell, ix, iy, ir);
+        last[k] = f > 0 && pick.minMa >= M_ALPHA_WARN ? f : NaN;
+        // A search keeps no solution whose mα falls below 0.2: there the equations admit spurious
+        // roots with huge base forces (the same guard as the surfaces search).
+        if (f > 0 && pick.minMa >= M_ALPHA_WARN) recordFs(states[k], f, xc, yc, r, cell, ix, iy, ir);
+        else if (f > 0) failures[k]["m-alpha-below-0.2"] = (failures[k]["m-alpha-below-0.2"] ?? 0) + 1;
         else if (S.fsB > 0) {
           const why = REASONS[pick.status] ?? "not-converged";
           failures[k][why] = (failures[k][why] ?? 0) + 1;
