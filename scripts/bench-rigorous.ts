@@ -1,11 +1,13 @@
 /**
  * Benchmark of the rigorous methods (docs/engine.md §11–§12): the cost of one 50-slice circle by
  * Bishop's simplified method and by Spencer and Morgenstern–Price (each on top of the same slicing),
- * on the three-material embankment of `npm run bench`; target Spencer ≤ 5 × Bishop. Then the time
- * of a surfaces search on the demo weak-layer section (target < 5 s on one core). Prints figures only.
+ * on the three-material embankment of `npm run bench`; target Spencer ≤ 5 × Bishop. Then the CPU time
+ * of a surfaces search on the weak-layer section and on the app's demo embankment (target < 5 s on
+ * one core). Prints figures only.
  */
 import { readFileSync } from "node:fs";
 import path from "node:path";
+import { buildDemoSection } from "../db/seeds/demo-section";
 import { evaluateCircle } from "../lib/stability/evaluate-circle";
 import { createGleSlices } from "../lib/stability/methods/gle";
 import { prepareSection } from "../lib/stability/prepare";
@@ -84,3 +86,26 @@ for (let k = 0; k < 3; k++)
 searchTimes.sort((a, b) => a - b);
 console.log(`surfaces search on the weak-layer demo: ${found}`);
 console.log(`surfaces_search_seconds=${searchTimes[1].toFixed(2)} (target < 5 s, one core)`);
+
+// The same search on the app's demo embankment (db/seeds/demo-section.ts), downstream face, 12 × 10 × 8 circles first.
+const demo = buildDemoSection() as unknown as SectionDocument;
+demo.analysis = {
+  methods: ["spencer", "morgenstern-price"],
+  search: "surfaces",
+  grid: { x1: 64, y1: 20, x2: 96, y2: 44, nx: 12, ny: 10 },
+  radii: { tangentY1: 12, tangentY2: 1, n: 8 },
+};
+let demoFound = "";
+const demoTimes: number[] = [];
+for (let k = 0; k < 3; k++)
+  demoTimes.push(
+    cpuSeconds(() => {
+      const r = runSurfaceSearch(demo);
+      if (!r.ok) throw new Error("demo section is invalid");
+      const s = r.results.spencer;
+      demoFound = `Spencer ${s?.fs.toFixed(4)} (${s?.surface ? "non-circular" : "circle"})`;
+    }),
+  );
+demoTimes.sort((a, b) => a - b);
+console.log(`surfaces search on the demo embankment: ${demoFound}`);
+console.log(`demo_surfaces_search_seconds=${demoTimes[1].toFixed(2)} (target < 5 s, one core)`);
