@@ -26,8 +26,8 @@ export interface SurfaceSearchOptions {
 }
 
 /** Evaluations of the factor per start, and in the final polish of the best. */
-const START_BUDGET = 700;
-const POLISH_BUDGET = 900;
+const START_BUDGET = 1200;
+const POLISH_BUDGET = 2000;
 
 /** A grid search of circles, then (analysis.search "surfaces") the search of surfaces of any shape. */
 export function runSurfaceSearch(doc: unknown, opts: SurfaceSearchOptions = {}): GridSearchResult {

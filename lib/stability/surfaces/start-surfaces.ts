@@ -13,7 +13,7 @@ import type { XY } from "../rigorous-types";
 import { findStrip } from "../strip-table";
 
 /** Interior vertices of a circle turned into a polyline. */
-export const CIRCLE_VERTICES = 7;
+export const CIRCLE_VERTICES = 11;
 
 /** Entry and exit of circle c's mass that spans [xa, xb] (m): a polyline with its ends on the ground. */
 export function circlePolyline(P: PreparedSection, c: Circle, xa: number, xb: number, lift = false): XY[] {
