@@ -2,6 +2,7 @@
  * Command-line tool of the stability engine (docs/engine-io.md):
  *   npx tsx scripts/analyze.ts section.json                       grid search
  *   npx tsx scripts/analyze.ts section.json --circle xc,yc,r      one circle, slice table
+ *   npx tsx scripts/analyze.ts section.json --surface "x1,y1 x2,y2 ..."   one polyline slip surface
  *   cat section.json | npx tsx scripts/analyze.ts -               read standard input
  * Options: --map adds the minimum-FS map per method to a search's output.
  * A drawdown with analysis.drawdown.method "staged" (materials with cR, phiR or freeDraining)
@@ -14,7 +15,7 @@
  * the error list on bad input or bad arguments; exit 1 on an internal failure.
  */
 import { readFileSync } from "node:fs";
-import { asksForSeepage, circleOnWater, searchOnWater } from "../lib/seepage-stability";
+import { asksForSeepage, circleOnWater, searchOnWater, surfaceOnWater } from "../lib/seepage-stability";
 import { hasProbabilisticSettings, runProbabilistic } from "../lib/stability/probabilistic";
 
 interface CliError {
@@ -23,7 +24,7 @@ interface CliError {
   message: string;
 }
 
-const USAGE = "usage: analyze.ts <section.json | -> [--circle xc,yc,r] [--map]";
+const USAGE = 'usage: analyze.ts <section.json | -> [--circle xc,yc,r | --surface "x1,y1 x2,y2 ..."] [--map]';
 
 /** Bad arguments or input: carried up to the top level, which writes the errors and sets the exit status. */
 class CliFailure extends Error {
@@ -48,9 +49,43 @@ function finish(value: unknown, status: number): void {
   process.exitCode = status;
 }
 
-function parseArgs(argv: string[]): { file: string; circle?: { xc: number; yc: number; r: number }; map: boolean } {
+interface Args {
+  file: string;
+  circle?: { xc: number; yc: number; r: number };
+  surface?: [number, number][];
+  map: boolean;
+}
+
+/** Parses "x1,y1 x2,y2 ..." (points apart by spaces or semicolons) into points, or fails naming the bad one. */
+function parseSurface(spec: string | undefined): [number, number][] {
+  const parts = (spec ?? "")
+    .trim()
+    .split(/[\s;]+/)
+    .filter((p) => p !== "");
+  const pts: [number, number][] = [];
+  parts.forEach((p, i) => {
+    const nums = p.split(",").map((s) => Number(s.trim()));
+    if (nums.length !== 2 || !nums.every(Number.isFinite))
+      fail(2, [
+        {
+          code: "bad-argument",
+          path: "--surface",
+          message: `--surface point ${i + 1} ("${p}") must be two numbers x,y in metres. ${USAGE}`,
+        },
+      ]);
+    pts.push([nums[0], nums[1]]);
+  });
+  if (pts.length < 2)
+    fail(2, [
+      { code: "bad-argument", path: "--surface", message: `--surface needs at least two points x,y. ${USAGE}` },
+    ]);
+  return pts;
+}
+
+function parseArgs(argv: string[]): Args {
   let file: string | undefined;
   let circle: { xc: number; yc: number; r: number } | undefined;
+  let surface: [number, number][] | undefined;
   let map = false;
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i];
@@ -67,7 +102,8 @@ function parseArgs(argv: string[]): { file: string; circle?: { xc: number; yc: n
         ]);
       }
       circle = { xc: nums[0], yc: nums[1], r: nums[2] };
-    } else if (a === "--map") map = true;
+    } else if (a === "--surface") surface = parseSurface(argv[++i]);
+    else if (a === "--map") map = true;
     else if (a.startsWith("--")) fail(2, [{ code: "bad-argument", path: a, message: `Unknown option ${a}. ${USAGE}` }]);
     else if (file === undefined) file = a;
     else
@@ -76,7 +112,9 @@ function parseArgs(argv: string[]): { file: string; circle?: { xc: number; yc: n
       ]);
   }
   if (file === undefined) fail(2, [{ code: "bad-argument", path: "", message: `No input given. ${USAGE}` }]);
-  return { file, circle, map };
+  if (circle && surface)
+    fail(2, [{ code: "bad-argument", path: "--surface", message: `Give --circle or --surface, not both. ${USAGE}` }]);
+  return { file, circle, surface, map };
 }
 
 function readInput(file: string): unknown {
@@ -100,8 +138,13 @@ function readInput(file: string): unknown {
 }
 
 function main(): void {
-  const { file, circle, map } = parseArgs(process.argv.slice(2));
+  const { file, circle, surface, map } = parseArgs(process.argv.slice(2));
   const doc = readInput(file);
+  if (surface) {
+    const r = surfaceOnWater(doc, surface);
+    finish(r, r.ok ? 0 : 2);
+    return;
+  }
   if (circle) {
     const r = circleOnWater(doc, circle);
     finish(r, r.ok ? 0 : 2);
@@ -118,6 +161,7 @@ function main(): void {
           "phreatic surface as a drawn line) for analysis.probabilistic.",
       },
     ]);
+  // The grid search, then the surfaces search when analysis.search asks for it.
   const r = probabilistic ? runProbabilistic(doc) : searchOnWater(doc);
   if (!r.ok) {
     finish(r, 2);

@@ -5,12 +5,15 @@
  */
 import {
   analyzeCircle,
-  runGridSearch,
+  analyzeSurface,
+  runSurfaceSearch,
   type Circle,
   type CircleSuccess,
   type EngineFailure,
-  type GridSearchOptions,
   type GridSearchSuccess,
+  type SurfaceResult,
+  type SurfaceSearchOptions,
+  type SurfaceSuccess,
 } from "@/lib/stability";
 import { solveWater, type SolvedWater } from "./solve-water";
 import type { SeepageSummary } from "./types";
@@ -27,14 +30,14 @@ export function prepareWater(doc: unknown): Solved | EngineFailure {
   return w.ok ? w : failure(w);
 }
 
-/** The grid search of a document on its water, seepage included. */
+/** The grid search of a document on its water, seepage included, then its surfaces when analysis.search asks. */
 export function searchOnWater(
   doc: unknown,
-  opts: GridSearchOptions = {},
+  opts: SurfaceSearchOptions = {},
 ): (GridSearchSuccess & { seepage?: SeepageSummary }) | EngineFailure {
   const w = prepareWater(doc);
   if (!w.ok) return w;
-  const r = runGridSearch(w.document, { ...opts, waterField: w.waterField });
+  const r = runSurfaceSearch(w.document, { ...opts, waterField: w.waterField });
   return r.ok && w.seepage ? { ...r, seepage: w.seepage } : r;
 }
 
@@ -46,5 +49,16 @@ export function circleOnWater(
   const w = prepareWater(doc);
   if (!w.ok) return w;
   const r = analyzeCircle(w.document, circle, { waterField: w.waterField });
+  return r.ok && w.seepage ? { ...r, seepage: w.seepage } : r;
+}
+
+/** One slip surface of any shape of a document on its water, seepage included. */
+export function surfaceOnWater(
+  doc: unknown,
+  points: ReadonlyArray<readonly [number, number]>,
+): (SurfaceSuccess & { seepage?: SeepageSummary }) | EngineFailure {
+  const w = prepareWater(doc);
+  if (!w.ok) return w;
+  const r: SurfaceResult = analyzeSurface(w.document, points, { waterField: w.waterField });
   return r.ok && w.seepage ? { ...r, seepage: w.seepage } : r;
 }

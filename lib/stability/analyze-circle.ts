@@ -14,6 +14,8 @@ import { M_ALPHA_WARN } from "./search-warnings";
 import { OK, REASONS, REASON_TEXT, RIGID_NO_WEIGHT, rigidNoWeightText } from "./status";
 import { validateSection } from "./validate";
 import { ENGINE_VERSION } from "./version";
+import type { AnalysisFsRecord, LambdaRecord, RigorousRecord } from "./rigorous-types";
+import { circleRigorous } from "./rigorous-circle";
 import { arcY } from "./evaluate-circle";
 import { checkWaterField, type WaterFieldOptions } from "./water-field";
 import { resolveAnalysis } from "./defaults";
@@ -59,7 +61,12 @@ export interface CircleSuccess {
   ok: true;
   engineVersion: string;
   circle: Circle;
-  fs: { bishop: number | null; fellenius: number | null };
+  /** Bishop and the ordinary method always; Spencer and Morgenstern–Price when analysis.methods asks. */
+  fs: { bishop: number | null; fellenius: number | null } & AnalysisFsRecord;
+  /** λ beside fs for Spencer and Morgenstern–Price (docs/engine-io.md). */
+  lambda?: LambdaRecord;
+  /** Their full solutions: interslice forces, line of thrust, warnings with their place. */
+  rigorous?: RigorousRecord;
   reason?: string;
   reasonText?: string;
   entry?: [number, number];
@@ -104,7 +111,7 @@ export function analyzeCircle(doc: unknown, circle: Circle, opts: WaterFieldOpti
   if (![c.xc, c.yc, c.r].every(Number.isFinite)) {
     return {
       ...base,
-      fs: { bishop: null, fellenius: null },
+      fs: { bishop: null, fellenius: null, ...noRigorous(P) },
       reason: "radius-not-positive",
       reasonText: "The circle needs finite xc, yc and r.",
       masses: 0,
@@ -115,7 +122,7 @@ export function analyzeCircle(doc: unknown, circle: Circle, opts: WaterFieldOpti
   if (st !== OK) {
     return {
       ...base,
-      fs: { bishop: null, fellenius: null },
+      fs: { bishop: null, fellenius: null, ...noRigorous(P) },
       reason: REASONS[st],
       reasonText: st === RIGID_NO_WEIGHT ? rigidNoWeightText(P.mat.ids[S.rigidMat]) : REASON_TEXT[st],
       masses: S.nMass,
@@ -162,9 +169,11 @@ export function analyzeCircle(doc: unknown, circle: Circle, opts: WaterFieldOpti
       code: "several-slip-masses",
       message: `The circle cuts ${S.nMass} separate pieces of soil; each was analysed and the lowest FS is reported. The slices shown are those of the governing piece.`,
     });
+  const rig = rigorousPart(P, S, c, warnings);
   return {
     ...base,
-    fs: { bishop: finiteOrNull(fsB), fellenius: finiteOrNull(fsO) },
+    fs: { bishop: finiteOrNull(fsB), fellenius: finiteOrNull(fsO), ...(rig?.fs ?? {}) },
+    ...(rig ? { lambda: rig.lambda, rigorous: rig.rigorous } : {}),
     ...(Number.isFinite(fsB) ? {} : { reason: REASONS[reasonB], reasonText: REASON_TEXT[reasonB] }),
     entry: dir >= 0 ? a : b,
     exit: dir >= 0 ? b : a,
@@ -176,6 +185,32 @@ export function analyzeCircle(doc: unknown, circle: Circle, opts: WaterFieldOpti
     ...(staged ? { stages: staged.stages, stagedVariant: staged.variant } : {}),
     slices,
   };
+}
+
+/** null for each rigorous method asked for: a circle without a slip mass has no factor. */
+function noRigorous(P: PreparedSection): AnalysisFsRecord {
+  const out: AnalysisFsRecord = {};
+  for (const m of P.analysis.rigorous) out[m] = null;
+  return out;
+}
+
+/**
+ * Spencer and Morgenstern–Price on the circle, when asked for (after the slice table, since they
+ * re-slice). A staged drawdown has no rigorous form here: null with a warning.
+ */
+function rigorousPart(P: PreparedSection, S: Scratch, c: Circle, warnings: EngineWarning[]) {
+  const methods = P.analysis.rigorous;
+  if (methods.length === 0) return null;
+  if (P.staged !== null) {
+    warnings.push({
+      code: "rigorous-not-staged",
+      message: "Spencer and Morgenstern–Price are not run in a staged drawdown; use the effective-stress drawdown.",
+    });
+    return { fs: noRigorous(P), lambda: noRigorous(P), rigorous: {} };
+  }
+  const r = circleRigorous(P, S, c, methods, P.analysis.interslice);
+  warnings.push(...r.warnings);
+  return r;
 }
 
 /**

@@ -3,7 +3,20 @@
  * 50 slices, direction auto, both methods, steady case, classical ordinary method,
  * 10 lowest circles kept, no refinement, no minimum depth.
  */
-import type { Analysis, Direction, Drawdown, Grid, LoadCase, Method, OrdinaryForm, Radii } from "./schema";
+import type {
+  Analysis,
+  AnalysisMethod,
+  Direction,
+  Drawdown,
+  Grid,
+  IntersliceFunction,
+  LoadCase,
+  Method,
+  OrdinaryForm,
+  Radii,
+  RigorousMethod,
+  SearchKind,
+} from "./schema";
 
 export const DEFAULT_SLICES = 50;
 export const DEFAULT_GAMMA_W = 9.81; // kN/m³
@@ -22,7 +35,14 @@ export const SLICE_CAPACITY = Math.ceil(MAX_SLICES * (1 + 1 / MERGE_FRACTION)) +
 /** An analysis with every default applied; grid and radii stay optional (one-circle runs need neither). */
 export interface ResolvedAnalysis {
   case: LoadCase;
+  /** The circular methods asked for (both when analysis.methods is not given). */
   methods: Method[];
+  /** Spencer and Morgenstern–Price, when asked for (docs/engine.md §11). */
+  rigorous: RigorousMethod[];
+  /** Every method asked for, in the order given. */
+  allMethods: AnalysisMethod[];
+  interslice: IntersliceFunction;
+  search: SearchKind;
   slices: number;
   direction: Direction;
   ordinaryForm: OrdinaryForm;
@@ -37,10 +57,17 @@ export interface ResolvedAnalysis {
 /** Returns a complete analysis from a partial one (or none), without changing the input. */
 export function resolveAnalysis(analysis?: Analysis | null): ResolvedAnalysis {
   const a = analysis ?? {};
-  const methods: Method[] = a.methods && a.methods.length > 0 ? [...new Set(a.methods)] : ["bishop", "fellenius"];
+  const allMethods: AnalysisMethod[] =
+    a.methods && a.methods.length > 0 ? [...new Set(a.methods)] : ["bishop", "fellenius"];
+  const methods = allMethods.filter((m): m is Method => m === "bishop" || m === "fellenius");
+  const rigorous = allMethods.filter((m): m is RigorousMethod => m === "spencer" || m === "morgenstern-price");
   const out: ResolvedAnalysis = {
     case: a.case ?? "steady",
     methods,
+    rigorous,
+    allMethods,
+    interslice: a.interslice ?? "half-sine",
+    search: a.search ?? "circles",
     slices: a.slices ?? DEFAULT_SLICES,
     direction: a.direction ?? "auto",
     ordinaryForm: a.ordinaryForm ?? "classical",

@@ -14,6 +14,24 @@ export {
 export { runGridSearch, type GridSearchOptions, type GridSearchResult, type GridSearchSuccess } from "./grid-search";
 export { analyzeCircle, type CircleResult, type CircleSuccess, type SliceRow } from "./analyze-circle";
 export type { Circle, CircleFs, FsMap, EngineFailure, MethodRecord } from "./results";
+export {
+  RIGOROUS_METHODS,
+  type XY,
+  type IntersliceForce,
+  type RigorousSlice,
+  type RigorousWarning,
+  type RigorousWarningCode,
+  type RigorousFs,
+  type RigorousRecord,
+  type LambdaRecord,
+  type AnalysisFsRecord,
+  type MethodReason,
+  type SurfaceSliceRow,
+  type SurfaceSuccess,
+  type SurfaceSearchProgress,
+} from "./rigorous-types";
+export { analyzeSurface, type SurfaceResult } from "./surfaces/analyze-surface";
+export { runSurfaceSearch, type SurfaceSearchOptions } from "./surfaces/search-surfaces";
 export { sectionGround } from "./prepare";
 export { usesSeepageWater, type WaterField, type WaterFieldOptions } from "./water-field";
 export type { StageFs, SliceStage } from "./drawdown/staged-report";

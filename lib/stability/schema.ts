@@ -135,7 +135,16 @@ export const drawdownSchema = z.object({
   stagedVariant: stagedVariantSchema.optional(),
 });
 
+/** The methods that assume a circular slip surface (moment equilibrium about its centre). */
 export const methodSchema = z.enum(["bishop", "fellenius"]);
+/** Methods that satisfy force and moment equilibrium on a slip surface of any shape (docs/engine.md §11). */
+export const rigorousMethodSchema = z.enum(["spencer", "morgenstern-price"]);
+/** Any method a run may ask for. */
+export const analysisMethodSchema = z.enum(["bishop", "fellenius", "spencer", "morgenstern-price"]);
+/** The Morgenstern–Price interslice function f(x) (Spencer's method is f = 1). */
+export const intersliceSchema = z.enum(["half-sine", "constant"]);
+/** Which slip surfaces a search tries: circles on the grid (default) or surfaces of any shape. */
+export const searchKindSchema = z.enum(["circles", "surfaces"]);
 export const loadCaseSchema = z.enum(["steady", "drawdown", "undrained"]);
 export const directionSchema = z.enum(["auto", "left", "right"]);
 export const ordinaryFormSchema = z.enum(["classical", "effective-weight"]);
@@ -143,7 +152,11 @@ export const ordinaryFormSchema = z.enum(["classical", "effective-weight"]);
 /** Analysis settings; every key is optional here and completed by resolveAnalysis(). */
 export const analysisSchema = z.object({
   case: loadCaseSchema.optional(),
-  methods: z.array(methodSchema).min(1, "choose at least one method").optional(),
+  methods: z.array(analysisMethodSchema).min(1, "choose at least one method").optional(),
+  /** Morgenstern–Price interslice function (default half-sine). */
+  interslice: intersliceSchema.optional(),
+  /** "circles" (the grid, default) or "surfaces" (non-circular search, docs/engine.md §12). */
+  search: searchKindSchema.optional(),
   slices: z.number().int().min(1).max(500).optional(),
   direction: directionSchema.optional(),
   grid: gridSchema.optional(),
@@ -204,6 +217,10 @@ export type Drawdown = z.infer<typeof drawdownSchema>;
 export type DrawdownMethod = z.infer<typeof drawdownMethodSchema>;
 export type StagedVariant = z.infer<typeof stagedVariantSchema>;
 export type Method = z.infer<typeof methodSchema>;
+export type RigorousMethod = z.infer<typeof rigorousMethodSchema>;
+export type AnalysisMethod = z.infer<typeof analysisMethodSchema>;
+export type IntersliceFunction = z.infer<typeof intersliceSchema>;
+export type SearchKind = z.infer<typeof searchKindSchema>;
 export type LoadCase = z.infer<typeof loadCaseSchema>;
 export type Direction = z.infer<typeof directionSchema>;
 export type OrdinaryForm = z.infer<typeof ordinaryFormSchema>;

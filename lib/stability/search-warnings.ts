@@ -7,12 +7,18 @@ import type { EngineWarning } from "./issues";
 import { fmt } from "./issues";
 import type { PreparedSection } from "./prepare";
 import type { CircleFs } from "./results";
-import type { Grid, Method } from "./schema";
+import type { AnalysisMethod, Grid } from "./schema";
 import type { Scratch } from "./scratch";
 import type { MethodState } from "./search-state";
 import { evaluateCircle } from "./evaluate-circle";
+import { circleRigorous } from "./rigorous-circle";
 
-const LABEL: Record<Method, string> = { bishop: "Bishop's simplified method", fellenius: "The ordinary method" };
+const LABEL: Record<AnalysisMethod, string> = {
+  bishop: "Bishop's simplified method",
+  fellenius: "The ordinary method",
+  spencer: "Spencer's method",
+  "morgenstern-price": "The Morgenstern–Price method",
+};
 /** Bishop's mα below this flags a suspect result (after Whitman & Bailey 1967). */
 export const M_ALPHA_WARN = 0.2;
 
@@ -44,7 +50,7 @@ export function gridEdgeWarnings(M: MethodState, grid: Grid, nr: number, out: En
 export function criticalWarnings(
   P: PreparedSection,
   S: Scratch,
-  method: Method,
+  method: AnalysisMethod,
   crit: CircleFs | null,
   out: EngineWarning[],
 ): void {
@@ -63,6 +69,13 @@ export function criticalWarnings(
       code: "mass-near-section-side",
       message: `${LABEL[method]}: the critical slip mass comes within 1% of a side of the section; extend the section so the side does not limit the circle.`,
     });
+  }
+  if ((method === "spencer" || method === "morgenstern-price") && !crit.surface) {
+    // The acceptability of the critical circle's solution: thrust line, tension, mα, with their places.
+    if (evaluateCircle(P, S, crit.circle.xc, crit.circle.yc, crit.circle.r, true) === 0) {
+      const r = circleRigorous(P, S, crit.circle, [method], P.analysis.interslice);
+      for (const w of r.warnings) out.push({ code: w.code, message: `${w.message} (critical circle)` });
+    }
   }
   if (method === "bishop") {
     evaluateCircle(P, S, crit.circle.xc, crit.circle.yc, crit.circle.r, true);
