@@ -155,7 +155,7 @@ describe("at λ = 0: the moment equation is Bishop's simplified method, the forc
     const v = validateSection(doc);
     if (!v.ok) throw new Error("fixture invalid");
     const P = prepareSection(v.section);
-    const S = createScratch();
+    const S = createScratch(true);
     expect(evaluateCircle(P, S, xc, yc, R, true)).toBe(0);
     const bishop = S.fsB;
     expect(S.negB).toBe(0);
