@@ -3,7 +3,15 @@
  * One zod schema serves the form (client) and the run route (server).
  */
 import { z } from "zod";
-import { gridSchema, radiiSchema, type Analysis, type SectionDocument } from "@/lib/stability";
+import {
+  analysisMethodSchema,
+  gridSchema,
+  intersliceSchema,
+  pointSchema,
+  radiiSchema,
+  type Analysis,
+  type SectionDocument,
+} from "@/lib/stability";
 import { directionForFace } from "./face";
 import { LOADING_CONDITION_KEYS, loadingCondition, type LoadingConditionKey } from "./required-fs";
 import { MAX_SEARCH_CIRCLES, searchCircleCount, tooManyCirclesMessage } from "@/lib/runs/record/limits";
@@ -14,13 +22,33 @@ import {
   type WaterCondition,
 } from "@/lib/sections/water-conditions";
 
+/** More bends than a hand-drawn surface along layers needs; keeps a stored set-up small. */
+export const MAX_SURFACE_POINTS = 40;
+
 export const runSetupSchema = z
   .object({
     condition: z.enum(LOADING_CONDITION_KEYS, { error: "Choose a loading condition." }),
     /** Key of the section's water condition analysed; absent: the loading condition's usual water. */
     waterCondition: z.string().max(40).optional(),
     face: z.enum(["upstream", "downstream"], { error: "Choose the face to check." }),
-    methods: z.array(z.enum(["bishop", "fellenius"])).min(1, "Choose at least one method."),
+    methods: z
+      .array(analysisMethodSchema)
+      .min(1, "Choose at least one method.")
+      .refine(
+        (ms) => ms.includes("bishop") || ms.includes("fellenius"),
+        "Keep Bishop's simplified or the ordinary method: the circle search runs on them.",
+      ),
+    /** Morgenstern–Price's interslice function; absent: half-sine (docs/engine-io.md). */
+    interslice: intersliceSchema.optional(),
+    /**
+     * One slip surface the user drew, from ground to ground ([x, y] in m): every method asked for is
+     * also reported on it. The engine judges whether it is admissible (lib/runs/record/rigorous-part.ts).
+     */
+    surface: z
+      .array(pointSchema)
+      .min(2, "A slip surface needs at least two points.")
+      .max(MAX_SURFACE_POINTS, `A drawn slip surface may have at most ${MAX_SURFACE_POINTS} points.`)
+      .optional(),
     slices: z
       .number({ error: "Enter a number of slices." })
       .int("Whole slices only.")
@@ -86,6 +114,7 @@ export function toAnalysis(doc: SectionDocument, setup: RunSetup): Analysis {
     refine: setup.refine,
     ordinaryForm: setup.ordinaryForm,
   };
+  if (setup.methods.includes("morgenstern-price")) analysis.interslice = setup.interslice ?? "half-sine";
   if (condition.engineCase === "drawdown") {
     analysis.drawdown = { from: setup.drawdownFrom!, to: setup.drawdownTo!, method: setup.drawdownMethod };
   }

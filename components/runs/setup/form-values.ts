@@ -6,13 +6,17 @@
 import type { FieldErrors, Resolver } from "react-hook-form";
 import { runSetupSchema, type RunSetup } from "@/lib/analysis/run-setup";
 import type { LoadingConditionKey } from "@/lib/analysis/required-fs";
+import type { AnalysisMethod, IntersliceFunction } from "@/lib/stability";
 
 export interface RunSetupInput {
   condition: LoadingConditionKey;
   /** Key of the section's water condition; "" leaves it to the loading condition's usual water. */
   waterCondition: string;
   face: "upstream" | "downstream";
-  methods: ("bishop" | "fellenius")[];
+  methods: AnalysisMethod[];
+  interslice: IntersliceFunction;
+  /** The drawn slip surface ([x, y] in m), or none. */
+  surface?: [number, number][];
   slices: number;
   ordinaryForm: "classical" | "effective-weight";
   grid: { x1: number; y1: number; x2: number; y2: number; nx: number; ny: number };
@@ -37,6 +41,8 @@ export function toRunSetup(v: RunSetupInput): unknown {
     waterCondition: v.waterCondition || undefined,
     face: v.face,
     methods: Array.isArray(v.methods) ? v.methods : [v.methods].filter(Boolean),
+    interslice: v.interslice ?? "half-sine",
+    surface: v.surface && v.surface.length > 0 ? v.surface : undefined,
     slices: v.slices,
     ordinaryForm: v.ordinaryForm,
     grid: v.grid,
@@ -59,6 +65,8 @@ export function fromRunSetup(s: RunSetup): RunSetupInput {
     waterCondition: s.waterCondition ?? "",
     face: s.face,
     methods: s.methods,
+    interslice: s.interslice ?? "half-sine",
+    surface: s.surface,
     slices: s.slices,
     ordinaryForm: s.ordinaryForm,
     grid: s.grid,

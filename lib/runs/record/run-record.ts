@@ -20,13 +20,20 @@ import {
   type SliceRow,
 } from "@/lib/stability";
 import type { PreviewCheck } from "./compare-preview";
+import { refusalText } from "@/lib/runs/view/rigorous-text";
 import { searchOnServer } from "./server-search";
 import { userIssue } from "@/lib/runs/view/engine-issue-text";
+import { analyzeDrawnSurface, rigorousPart, surfaceRefusal, type RigorousRunPart } from "./rigorous-part";
 
 export type StoredSliceTables = Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>;
 
 /** The result JSON of a kept run: the server's search, the set-up it ran, and the preview's comparison. */
-export type StoredRunResult = GridSearchSuccess & { setup: RunSetup; previewCheck: PreviewCheck };
+export type StoredRunResult = GridSearchSuccess & {
+  setup: RunSetup;
+  previewCheck: PreviewCheck;
+  /** Spencer and Morgenstern–Price on the critical circle and every method on a drawn surface, when asked. */
+  rigorous?: RigorousRunPart;
+};
 
 export interface RunRecord {
   document: SectionDocument;
@@ -79,16 +86,29 @@ export async function computeRunRecord(
       setup: ["No trial circle gave a factor of safety: check that the grid lies above the slope."],
     });
   }
+  const surface = setup.surface ? drawnSurfaceOrRefuse(valid.section, setup.surface) : null;
+  const rigorous = rigorousPart(valid.section, critical, surface);
   const fsOf = (m: Method) => (result.methods.includes(m) ? (result.results[m]?.fs ?? null) : null);
   return {
     document: valid.section,
-    result: { ...result, setup, previewCheck: compare(result) },
+    result: { ...result, setup, previewCheck: compare(result), ...(rigorous ? { rigorous } : {}) },
     sliceTables,
     fsBishop: fsOf("bishop"),
     fsFellenius: fsOf("fellenius"),
     waterCondition: { id: water.id, name: water.name },
     mode,
   };
+}
+
+/** The drawn slip surface analysed; a surface the engine refuses is a 400 with its reason and place. */
+function drawnSurfaceOrRefuse(section: SectionDocument, points: [number, number][]) {
+  const surface = analyzeDrawnSurface(section, points);
+  const refused = surface ? surfaceRefusal(surface) : null;
+  if (!surface || refused) {
+    const text = refused ? refusalText(refused) : "The drawn slip surface could not be analysed.";
+    throw new ApiError(400, "invalid_surface", text, { "setup.surface": [text] });
+  }
+  return surface;
 }
 
 /** The water condition the set-up names (or its loading condition's usual one); 400 if the version lacks it. */
