@@ -20,9 +20,13 @@ import type { PinMarker } from "@/lib/review/pin-markers";
 import { formatDateTime } from "@/lib/format";
 import { WhatIfPanel } from "@/components/runs/kept/what-if-panel";
 import { SensitivityPanel } from "@/components/runs/kept/sensitivity-panel";
+import { MethodComparison } from "@/components/runs/result/method-comparison";
+import { IntersliceTable } from "@/components/runs/result/interslice-table";
+import { useSolutionChoice } from "@/components/runs/result/use-solution-choice";
+import type { RigorousRunPart } from "@/lib/runs/record/rigorous-part";
 
 type Method = "bishop" | "fellenius";
-export type StoredResult = GridSearchSuccess & { setup: RunSetup };
+export type StoredResult = GridSearchSuccess & { setup: RunSetup; rigorous?: RigorousRunPart };
 export type StoredSlices = Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>;
 
 export interface RunViewProps {
@@ -68,6 +72,7 @@ export function RunView({
   const drawdownTo = doc.analysis?.drawdown?.to;
   const condition = loadingCondition(run.loadingCondition as LoadingConditionKey);
   const staged = useMemo(() => stagedView(result, doc, run.engineVersion), [result, doc, run.engineVersion]);
+  const solution = useSolutionChoice(result.rigorous);
 
   return (
     <div className="space-y-4">
@@ -143,6 +148,7 @@ export function RunView({
               grid={doc.analysis?.grid}
               radii={doc.analysis?.radii}
               height={480}
+              surface={solution.current?.overlay}
             />
           </PinnedCanvas>
           <FsSummary
@@ -151,6 +157,17 @@ export function RunView({
             minMAlpha={{ bishop: tables.bishop?.minMAlpha, fellenius: tables.fellenius?.minMAlpha }}
             staged={staged}
           />
+          {result.rigorous ? (
+            <MethodComparison
+              result={result}
+              part={result.rigorous}
+              requiredFs={run.requiredFs}
+              choices={solution.choices}
+              chosen={solution.chosen}
+              onChoose={solution.setChosen}
+            />
+          ) : null}
+          {solution.current ? <IntersliceTable choice={solution.current} /> : null}
           <WhatIfPanel
             document={doc}
             storedFs={Object.fromEntries(methods.map((m) => [m, result.results[m]!.fs]))}

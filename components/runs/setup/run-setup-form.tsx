@@ -23,6 +23,12 @@ import { useGridSearch } from "@/components/runs/setup/use-grid-search";
 import { SearchProgress } from "@/components/runs/setup/search-progress";
 import { SearchOutcome } from "@/components/runs/setup/search-outcome";
 import { RunCanvas } from "@/components/runs/result/run-canvas";
+import { SurfaceField } from "@/components/runs/setup/surface-field";
+import { useSolutionChoice } from "@/components/runs/result/use-solution-choice";
+import { analyzeDrawnSurface, checkDrawnSurface, rigorousPart } from "@/lib/runs/record/rigorous-part";
+import { groundLine } from "@/lib/runs/view/section-outline";
+import { addClick, moveVertex, type DrawState } from "@/lib/runs/view/surface-draw";
+import type { SurfaceOverlay } from "@/lib/runs/view/surface-overlay";
 
 export interface RunSetupFormProps {
   projectId: number;
@@ -84,6 +90,13 @@ export function RunSetupForm({
   const search = useGridSearch();
   const [setup, setSetup] = useState<RunSetup | null>(null);
   const values = form.watch();
+  const [draw, setDraw] = useState<DrawState>(() => ({ points: initial?.surface ?? [], finished: true }));
+  const [drawing, setDrawing] = useState(false);
+
+  function setSurface(next: DrawState) {
+    setDraw(next);
+    form.setValue("surface", next.finished && next.points.length >= 2 ? next.points : undefined);
+  }
 
   function placeGrid(face = values.face) {
     const g = suggestGrid(doc, directionForFace(doc, face));
@@ -115,6 +128,9 @@ export function RunSetupForm({
   }
 
   const onRun = form.handleSubmit((valid) => {
+    // A refused surface already shows its reason beside the drawing; no factor is computed for it.
+    if (surfaceCheck && !surfaceCheck.ok) return;
+    setDrawing(false);
     setSetup(valid);
     search.start(documentForRun(doc, valid));
   });
@@ -142,6 +158,32 @@ export function RunSetupForm({
     }
   }, [doc, values.condition, values.waterCondition]);
   const shownDoc = useMemo(() => (chosenWater ? withWater(doc, chosenWater.water) : doc), [doc, chosenWater]);
+  const ground = useMemo(() => groundLine(doc), [doc]);
+  const surfaceCheck = useMemo(
+    () => (draw.finished && draw.points.length >= 2 ? checkDrawnSurface(shownDoc, draw.points) : null),
+    [shownDoc, draw],
+  );
+  // The rigorous part of the preview, built as the save builds it (lib/runs/record/rigorous-part.ts).
+  const part = useMemo(() => {
+    if (!done || !setup || !done.result.ok) return undefined;
+    const runDoc = documentForRun(doc, setup);
+    const drawn = setup.surface ? analyzeDrawnSurface(runDoc, setup.surface) : null;
+    return rigorousPart(runDoc, done.critical, drawn) ?? undefined;
+  }, [done, setup, doc]);
+  const solution = useSolutionChoice(part);
+  const drawnOverlay: SurfaceOverlay | undefined =
+    draw.points.length > 1
+      ? {
+          line: draw.points,
+          sides: [],
+          thrust: [],
+          marks:
+            surfaceCheck && !surfaceCheck.ok && surfaceCheck.at
+              ? [{ at: surfaceCheck.at, n: 1, text: "where the surface is refused" }]
+              : [],
+          label: "Drawn slip surface",
+        }
+      : undefined;
 
   return (
     <div className="grid gap-4 xl:grid-cols-[22rem_1fr]">
@@ -166,6 +208,15 @@ export function RunSetupForm({
         </p>
       </form>
       <div className="min-w-0 space-y-3">
+        <SurfaceField
+          points={draw.points}
+          finished={draw.finished}
+          drawing={drawing}
+          onDrawing={setDrawing}
+          onTyped={(points) => setSurface({ points, finished: true })}
+          onClear={() => setSurface({ points: [], finished: true })}
+          check={surfaceCheck}
+        />
         <SearchProgress state={search.state} onCancel={search.cancel} />
         <RunCanvas
           document={shownDoc}
@@ -194,6 +245,16 @@ export function RunSetupForm({
           requiredFs={values.requiredFs}
           height={460}
           caution={false}
+          surface={drawing ? undefined : ((done && solution.current?.overlay) ?? drawnOverlay)}
+          drawing={
+            drawing
+              ? {
+                  points: draw.points,
+                  onClick: (x, y, mpp) => setSurface(addClick(draw, x, y, ground, 8 * mpp)),
+                  onMove: (i, x, y) => setSurface({ ...draw, points: moveVertex(draw.points, i, x, y, ground) }),
+                }
+              : undefined
+          }
         />
         {done && setup ? (
           <SearchOutcome
@@ -201,6 +262,8 @@ export function RunSetupForm({
             section={section}
             setup={setup}
             outcome={done}
+            rigorous={part}
+            solution={solution}
             revisesRunId={revisesRunId}
             materials={doc.materials}
             onSaved={(id) => router.push(`/projects/${projectId}/runs/${id}`)}

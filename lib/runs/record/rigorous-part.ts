@@ -18,6 +18,7 @@ import type {
 } from "@/lib/stability";
 import { analyzeSurface } from "@/lib/stability/surfaces/analyze-surface";
 import type { CriticalReports } from "./search-record";
+import { refusalText } from "@/lib/runs/view/rigorous-text";
 
 /** Spencer and Morgenstern–Price on one circle: the critical circle of `basis`. */
 export interface RigorousOnCircle {
@@ -88,4 +89,18 @@ function pickRigorous(fs: AnalysisFsRecord): AnalysisFsRecord {
   if ("spencer" in fs) out.spencer = fs.spencer;
   if ("morgenstern-price" in fs) out["morgenstern-price"] = fs["morgenstern-price"];
   return out;
+}
+
+export type SurfaceCheck = { ok: true; surface: SurfaceSuccess } | { ok: false; text: string; at: XY | null };
+
+/**
+ * Whether a drawn surface is admissible on a document, as the save will judge it: the engine's
+ * reason and place when it is refused (Spencer is run so that a surface without a solution says so).
+ */
+export function checkDrawnSurface(doc: SectionDocument, points: readonly XY[]): SurfaceCheck {
+  const s = analyzeDrawnSurface({ ...doc, analysis: { ...doc.analysis, methods: ["spencer"] } }, points);
+  if (!s) return { ok: false, text: "The section does not validate, so no surface can be checked on it.", at: null };
+  const refused = surfaceRefusal(s);
+  if (refused) return { ok: false, text: refusalText(refused), at: refused.at };
+  return { ok: true, surface: s };
 }
