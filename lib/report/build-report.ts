@@ -19,6 +19,8 @@ import { writeSliceTable } from "./slice-pages";
 import { VARIANT_TEXT, stageCells, stagedView } from "@/lib/runs/view/staged-view";
 import { formatCount, formatDateTime } from "@/lib/format";
 import { writeSensitivity, type ReportSensitivity } from "./sensitivity-section";
+import { writeRigorous } from "./rigorous-section";
+import type { RigorousRunPart } from "@/lib/runs/record/rigorous-part";
 
 export interface ReportInput {
   projectName: string;
@@ -39,7 +41,7 @@ export interface ReportInput {
     engineVersion: string;
     revisesRunId: number | null;
     document: SectionDocument;
-    result: GridSearchSuccess & { setup?: RunSetup };
+    result: GridSearchSuccess & { setup?: RunSetup; rigorous?: RigorousRunPart };
     sliceTables: Partial<Record<"bishop" | "fellenius", { slices: SliceRow[]; minMAlpha: number | null }>>;
   };
   review: {
@@ -337,6 +339,7 @@ export async function buildRunReport(input: ReportInput): Promise<Uint8Array> {
   w.cautionBox("Engineering caution", CAUTION_TEXT, ALARM);
   writeInputs(w, input);
   writeResults(w, input);
+  writeRigorous(w, run);
   writeMaterials(w, input);
   writeReview(w, input);
   if (input.sensitivity) writeSensitivity(w, input.sensitivity);
