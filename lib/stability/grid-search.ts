@@ -19,7 +19,16 @@ import {
   type FsMap,
   type MethodRecord,
 } from "./results";
-import type { Grid, IntersliceFunction, Method, Radii, RigorousMethod, SectionDocument } from "./schema";
+import type {
+  AnalysisMethod,
+  Grid,
+  IntersliceFunction,
+  Method,
+  Radii,
+  RigorousMethod,
+  SectionDocument,
+} from "./schema";
+import { createRigorousSearch } from "./rigorous-search";
 import { createScratch } from "./scratch";
 import { stageWarnings } from "./drawdown/staged-report";
 import { createMethodState, localMinima, recordFs, type MethodState } from "./search-state";
@@ -91,7 +100,10 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
   const P = prepareSection(v.section, analysis);
   const S = createScratch();
   const methods = analysis.methods;
-  const wantB = methods.includes("bishop");
+  const askB = methods.includes("bishop");
+  const rig = createRigorousSearch(P, grid.nx * grid.ny, analysis.lowestCount);
+  // Bishop's factor is the rigorous methods' starting guess.
+  const wantB = askB || rig !== null;
   const xs = spaced(grid.x1, grid.x2, grid.nx);
   const ys = spaced(grid.y1, grid.y2, grid.ny);
   const rv =
@@ -113,10 +125,11 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
       if (st === RIGID_NO_WEIGHT) weightless.add(P.mat.ids[S.rigidMat] ?? "?");
       return false;
     }
-    if (wantB && !(S.fsB > 0)) rejected[REASONS[S.reasonB]] = (rejected[REASONS[S.reasonB]] ?? 0) + 1;
+    if (askB && !(S.fsB > 0)) rejected[REASONS[S.reasonB]] = (rejected[REASONS[S.reasonB]] ?? 0) + 1;
     else valid++;
     if (stO) recordFs(stO, S.fsO, xc, yc, r, cell, ix, iy, ir);
     if (stB && S.fsB > 0) recordFs(stB, S.fsB, xc, yc, r, cell, ix, iy, ir);
+    if (rig) rig.visit(S, xc, yc, r, cell, ix, iy, ir);
     return true;
   };
   const share = analysis.refine ? 0.8 : 1;
@@ -128,19 +141,20 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
     }
     if (opts.onProgress && opts.onProgress((share * (iy + 1)) / grid.ny) === false) cancelled = true;
   }
-  for (const M of states) {
+  const allStates = rig ? [...states, ...rig.states] : states;
+  for (const M of allStates) {
     M.coarseIx = M.bestIx;
     M.coarseIy = M.bestIy;
     M.coarseIr = M.bestIr;
   }
-  const fsOf = (m: Method) => (m === "bishop" ? S.fsB : S.fsO);
-  if (analysis.refine && !cancelled) cancelled = !refineAll(states, grid, rv, xs, ys, visit, fsOf, opts);
+  const fsOf = (m: AnalysisMethod) => (m === "bishop" ? S.fsB : m === "fellenius" ? S.fsO : rig ? rig.fsOf(m) : NaN);
+  if (analysis.refine && !cancelled) cancelled = !refineAll(allStates, grid, rv, xs, ys, visit, fsOf, opts);
   if (!cancelled && opts.onProgress) opts.onProgress(1);
   const warnings: EngineWarning[] = [...issuesToWarnings(v.warnings), ...P.warnings];
   const results: MethodRecord<CircleFs | null> = {};
   const fsMap: MethodRecord<FsMap> = {};
   const lowest: MethodRecord<CircleFs[]> = {};
-  for (const M of states) {
+  for (const M of allStates) {
     const crit = Number.isFinite(M.bestFs)
       ? describeCircle(P, S, { xc: M.bestXc, yc: M.bestYc, r: M.bestR }, M.method)
       : null;
@@ -154,7 +168,8 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
     lowest[M.method] = list;
     gridEdgeWarnings(M, grid, rv.length, warnings);
     criticalWarnings(P, S, M.method, crit, warnings);
-    stageWarnings(M.method, crit?.stages, "critical circle", warnings);
+    if (M.method === "bishop" || M.method === "fellenius")
+      stageWarnings(M.method, crit?.stages, "critical circle", warnings);
   }
   if (weightless.size > 0)
     warnings.push({
@@ -189,6 +204,7 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
     circles: { tried, valid, rejected },
     warnings,
     cancelled,
+    ...(rig ? { rigorousMethods: rig.methods, interslice: analysis.interslice } : {}),
     ...(P.staged !== null ? { stagedVariant: analysis.drawdown?.stagedVariant ?? "three-stage" } : {}),
   };
 }
@@ -201,7 +217,7 @@ function refineAll(
   xs: number[],
   ys: number[],
   visit: (xc: number, yc: number, r: number, cell: number, ix: number, iy: number, ir: number) => boolean,
-  fsOf: (m: Method) => number,
+  fsOf: (m: AnalysisMethod) => number,
   opts: GridSearchOptions,
 ): boolean {
   const dx = grid.nx > 1 ? xs[1] - xs[0] : grid.ny > 1 ? ys[1] - ys[0] : 1;

@@ -2,13 +2,14 @@
  * Result shapes shared by the grid search and the one-circle report (docs/engine-io.md
  * "Output"). Plain JSON: numbers, arrays, null; never NaN or Infinity.
  */
-import type { AnalysisMethod, Method } from "./schema";
+import type { AnalysisMethod } from "./schema";
 import type { XY } from "./rigorous-types";
 import type { EngineWarning, Issue } from "./issues";
 import { arcY, evaluateCircle } from "./evaluate-circle";
 import type { PreparedSection } from "./prepare";
 import type { Scratch } from "./scratch";
 import { stageSummary, type StageFs } from "./drawdown/staged-report";
+import { describeRigorousCircle } from "./rigorous-circle";
 
 /** A trial circle: centre (xc, yc) and radius r, m. */
 export interface Circle {
@@ -60,7 +61,8 @@ export function finiteOrNull(v: number): number | null {
  * Entry and exit of the governing mass of a method for a circle, found by re-evaluating it.
  * Returns null if the circle turns out invalid for that method.
  */
-export function describeCircle(P: PreparedSection, S: Scratch, c: Circle, method: Method): CircleFs | null {
+export function describeCircle(P: PreparedSection, S: Scratch, c: Circle, method: AnalysisMethod): CircleFs | null {
+  if (method === "spencer" || method === "morgenstern-price") return describeRigorousCircle(P, S, c, method);
   evaluateCircle(P, S, c.xc, c.yc, c.r, true);
   const fs = method === "bishop" ? S.fsB : S.fsO;
   const m = method === "bishop" ? S.govB : S.govO;

@@ -7,10 +7,10 @@
 import { arcY, isDriven, massDirection } from "./circle-direction";
 import { groundAt } from "./ground";
 import type { EngineWarning } from "./issues";
-import type { Circle } from "./results";
+import type { Circle, CircleFs } from "./results";
 import { rigorousReport } from "./rigorous-report";
 import type { AnalysisFsRecord, LambdaRecord, RigorousRecord } from "./rigorous-types";
-import { sliceMass } from "./evaluate-circle";
+import { evaluateCircle, sliceMass } from "./evaluate-circle";
 import { createGleSlices, lowestF, type GleSlices } from "./methods/gle";
 import { ordinaryFactor } from "./methods/ordinary";
 import type { PreparedSection } from "./prepare";
@@ -172,4 +172,31 @@ export function circleRigorous(
     out.warnings.push(...rep.warnings.map((w) => ({ code: w.code, message: w.message })));
   }
   return out;
+}
+
+/** A rigorous method's critical (or one of its lowest) circle as reported by a search, with λ. */
+export function describeRigorousCircle(
+  P: PreparedSection,
+  S: Scratch,
+  c: Circle,
+  method: RigorousMethod,
+): CircleFs | null {
+  if (evaluateCircle(P, S, c.xc, c.yc, c.r, true) !== OK) return null;
+  const G = createGleSlices();
+  const pick = createRigorousPick();
+  const f = rigorousOnCircle(P, S, G, c.xc, c.yc, c.r, method, P.analysis.interslice === "half-sine", pick);
+  if (!Number.isFinite(f)) return null;
+  const xa = S.massA[pick.mass];
+  const xb = S.massB[pick.mass];
+  const a: [number, number] = [xa, arcY(c.xc, c.yc, c.r, xa)];
+  const b: [number, number] = [xb, arcY(c.xc, c.yc, c.r, xb)];
+  const right = pick.dir >= 0;
+  return {
+    fs: f,
+    circle: { ...c },
+    entry: right ? a : b,
+    exit: right ? b : a,
+    direction: right ? "right" : "left",
+    lambda: pick.lambda,
+  };
 }

@@ -3,10 +3,10 @@
  * centres (with the radius that gave it) and the N lowest circles.
  */
 import { createLowest, offerLowest, type LowestList } from "./lowest";
-import type { Method } from "./schema";
+import type { AnalysisMethod } from "./schema";
 
 export interface MethodState {
-  method: Method;
+  method: AnalysisMethod;
   bestFs: number;
   bestXc: number;
   bestYc: number;
@@ -24,7 +24,7 @@ export interface MethodState {
   lowest: LowestList;
 }
 
-export function createMethodState(method: Method, cells: number, lowestCount: number): MethodState {
+export function createMethodState(method: AnalysisMethod, cells: number, lowestCount: number): MethodState {
   return {
     method,
     bestFs: Infinity,

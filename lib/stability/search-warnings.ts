@@ -7,12 +7,17 @@ import type { EngineWarning } from "./issues";
 import { fmt } from "./issues";
 import type { PreparedSection } from "./prepare";
 import type { CircleFs } from "./results";
-import type { Grid, Method } from "./schema";
+import type { AnalysisMethod, Grid } from "./schema";
 import type { Scratch } from "./scratch";
 import type { MethodState } from "./search-state";
 import { evaluateCircle } from "./evaluate-circle";
 
-const LABEL: Record<Method, string> = { bishop: "Bishop's simplified method", fellenius: "The ordinary method" };
+const LABEL: Record<AnalysisMethod, string> = {
+  bishop: "Bishop's simplified method",
+  fellenius: "The ordinary method",
+  spencer: "Spencer's method",
+  "morgenstern-price": "The Morgenstern–Price method",
+};
 /** Bishop's mα below this flags a suspect result (after Whitman & Bailey 1967). */
 export const M_ALPHA_WARN = 0.2;
 
@@ -44,7 +49,7 @@ export function gridEdgeWarnings(M: MethodState, grid: Grid, nr: number, out: En
 export function criticalWarnings(
   P: PreparedSection,
   S: Scratch,
-  method: Method,
+  method: AnalysisMethod,
   crit: CircleFs | null,
   out: EngineWarning[],
 ): void {

@@ -186,24 +186,24 @@ export function factorAt(G: GleSlices, lam: number, eq: Equation): number {
   return NaN;
 }
 
+/** The root of one equation in F on [a, b] (residuals ra, rb of opposite sign): regula falsi, Illinois variant. */
 function refineRoot(G: GleSlices, lam: number, eq: Equation, a: number, b: number, ra: number, rb: number): number {
   let side = 0;
-  for (let it = 0; it < 100 && b - a > 1e-12 * b; it++) {
+  for (let it = 0; it < 200 && b - a > 1e-13 * b; it++) {
     let x = (a * rb - b * ra) / (rb - ra);
     if (!(x > a && x < b)) x = (a + b) / 2;
     const rx = march(G, x, lam) ? res[eq] : NaN;
     if (!Number.isFinite(rx)) return NaN;
     if (rx === 0) return x;
-    if (rx * rb < 0) {
-      a = b;
-      ra = rb;
+    if (rx * ra < 0) {
       b = x;
       rb = rx;
-      side = 0;
+      if (side === -1) ra /= 2;
+      side = -1;
     } else {
-      b = x;
-      rb = rx;
-      if (side === 1) ra /= 2;
+      a = x;
+      ra = rx;
+      if (side === 1) rb /= 2;
       side = 1;
     }
   }
