@@ -16,7 +16,16 @@ export function SurfaceShapes({ overlay, view }: { overlay: SurfaceOverlay; view
       {overlay.sides.map((s, i) => {
         const [x, yb] = toScreen(view, s.x, s.yBase);
         const [, yt] = toScreen(view, s.x, s.yTop);
-        return <Line key={i} name="surface-slice" points={[x, yb, x, yt]} stroke="#4a4640" strokeWidth={0.6} />;
+        return (
+          <Line
+            key={i}
+            name="surface-slice"
+            points={[x, yb, x, yt]}
+            stroke={SURFACE_COLOUR}
+            strokeWidth={0.75}
+            opacity={0.7}
+          />
+        );
       })}
       {overlay.line.length > 1 ? (
         <>
