@@ -171,6 +171,9 @@ export function RunSetupForm({
     return rigorousPart(runDoc, done.critical, drawn) ?? undefined;
   }, [done, setup, doc]);
   const solution = useSolutionChoice(part);
+  // The searched solution is drawn only while the surface on the canvas is still the one searched.
+  const searchedThisSurface =
+    done !== null && JSON.stringify(setup?.surface ?? []) === JSON.stringify(draw.finished ? draw.points : []);
   const drawnOverlay: SurfaceOverlay | undefined =
     draw.points.length > 1
       ? {
@@ -245,7 +248,7 @@ export function RunSetupForm({
           requiredFs={values.requiredFs}
           height={460}
           caution={false}
-          surface={drawing ? undefined : ((done && solution.current?.overlay) ?? drawnOverlay)}
+          surface={drawing ? undefined : (searchedThisSurface && solution.current?.overlay) || drawnOverlay}
           drawing={
             drawing
               ? {

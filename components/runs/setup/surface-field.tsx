@@ -87,6 +87,11 @@ export function SurfaceField({ points, finished, drawing, onDrawing, onTyped, on
         </button>
       </div>
       {typedError ? <p className="field-error">{typedError}</p> : null}
+      {!drawing && !finished && points.length > 0 ? (
+        <p className="field-error" data-testid="surface-unfinished">
+          The surface is not finished: draw again and end it with a click on the ground, or clear it.
+        </p>
+      ) : null}
       {check && !check.ok ? (
         <p className="field-error" role="alert" data-testid="surface-refused">
           Not a usable slip surface: {check.text}
