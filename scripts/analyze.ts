@@ -15,7 +15,7 @@
 import { readFileSync } from "node:fs";
 import { analyzeCircle } from "../lib/stability/analyze-circle";
 import { analyzeSurface } from "../lib/stability/surfaces/analyze-surface";
-import { runGridSearch } from "../lib/stability/grid-search";
+import { runSurfaceSearch } from "../lib/stability/surfaces/search-surfaces";
 import { hasProbabilisticSettings, runProbabilistic } from "../lib/stability/probabilistic";
 
 interface CliError {
@@ -150,7 +150,8 @@ function main(): void {
     finish(r, r.ok ? 0 : 2);
     return;
   }
-  const r = hasProbabilisticSettings(doc) ? runProbabilistic(doc) : runGridSearch(doc);
+  // runSurfaceSearch is the grid search, followed by the surfaces search when analysis.search asks for it.
+  const r = hasProbabilisticSettings(doc) ? runProbabilistic(doc) : runSurfaceSearch(doc);
   if (!r.ok) {
     finish(r, 2);
     return;

@@ -12,6 +12,7 @@ import { prepareSection } from "../lib/stability/prepare";
 import { createRigorousPick, rigorousOnCircle } from "../lib/stability/rigorous-circle";
 import type { RigorousMethod, SectionDocument } from "../lib/stability/schema";
 import { createScratch } from "../lib/stability/scratch";
+import { runSurfaceSearch } from "../lib/stability/surfaces/search-surfaces";
 import { validateSection } from "../lib/stability/validate";
 
 const fixtures = path.join(__dirname, "..", "tests", "fixtures", "sections");
@@ -66,3 +67,20 @@ console.log(`rigorous circles: ${valid.length} valid 50-slice circles on the thr
 console.log(`bishop_us_per_circle=${(tb * 1e6).toFixed(1)}`);
 console.log(`spencer_us_per_circle=${(ts * 1e6).toFixed(1)} (${(ts / tb).toFixed(2)} x Bishop; target <= 5)`);
 console.log(`morgenstern_price_us_per_circle=${(tm * 1e6).toFixed(1)} (${(tm / tb).toFixed(2)} x Bishop)`);
+
+// The surfaces search on the weak-layer demo section (Spencer and Morgenstern–Price), CPU time on one core.
+const weak = JSON.parse(readFileSync(path.join(fixtures, "weak-layer-outline.json"), "utf8")) as SectionDocument;
+weak.analysis = { ...weak.analysis, methods: ["spencer", "morgenstern-price"], search: "surfaces" };
+let found = "";
+const searchTimes: number[] = [];
+for (let k = 0; k < 3; k++)
+  searchTimes.push(
+    cpuSeconds(() => {
+      const r = runSurfaceSearch(weak);
+      if (!r.ok) throw new Error("demo section is invalid");
+      found = `Spencer ${r.results.spencer?.fs.toFixed(4)}, M–P ${r.results["morgenstern-price"]?.fs.toFixed(4)}`;
+    }),
+  );
+searchTimes.sort((a, b) => a - b);
+console.log(`surfaces search on the weak-layer demo: ${found}`);
+console.log(`surfaces_search_seconds=${searchTimes[1].toFixed(2)} (target < 5 s, one core)`);

@@ -30,6 +30,8 @@ export {
   type SurfaceSuccess,
   type SurfaceSearchProgress,
 } from "./rigorous-types";
+export { analyzeSurface, type SurfaceResult } from "./surfaces/analyze-surface";
+export { runSurfaceSearch, type SurfaceSearchOptions } from "./surfaces/search-surfaces";
 export { sectionGround } from "./prepare";
 export type { StageFs, SliceStage } from "./drawdown/staged-report";
 export {
