@@ -89,7 +89,10 @@ export function buildWeakLayerSection(): StoredSection {
  */
 export const WEAK_LAYER_SURFACE: [number, number][] = [P(37, 20), P(48, 6.2), P(72, 6.2), P(80, 8)];
 
-/** The kept run's set-up: all four methods, the circle search on the downstream face, the seam surface. */
+/**
+ * The kept run's set-up: all four methods on the downstream face, circles then surfaces of any shape,
+ * and the seam surface drawn by hand beside what the search finds.
+ */
 export function weakLayerSetup(): RunSetup {
   return {
     condition: "steady-seepage",
@@ -97,6 +100,7 @@ export function weakLayerSetup(): RunSetup {
     face: "downstream",
     methods: ["bishop", "fellenius", "spencer", "morgenstern-price"],
     interslice: "half-sine",
+    search: "surfaces",
     slices: 50,
     ordinaryForm: "classical",
     grid: { x1: 44, y1: 22, x2: 70, y2: 44, nx: 14, ny: 12 },

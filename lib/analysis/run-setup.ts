@@ -8,6 +8,7 @@ import {
   gridSchema,
   intersliceSchema,
   pointSchema,
+  searchKindSchema,
   radiiSchema,
   type Analysis,
   type SectionDocument,
@@ -38,6 +39,8 @@ export const runSetupSchema = z
         (ms) => ms.includes("bishop") || ms.includes("fellenius"),
         "Keep Bishop's simplified or the ordinary method: the circle search runs on them.",
       ),
+    /** Circles on the grid (absent), or then surfaces of any shape for the rigorous methods. */
+    search: searchKindSchema.optional(),
     /** Morgenstern–Price's interslice function; absent: half-sine (docs/engine-io.md). */
     interslice: intersliceSchema.optional(),
     /**
@@ -75,6 +78,12 @@ export const runSetupSchema = z
     ordinaryForm: z.enum(["classical", "effective-weight"]).default("classical"),
   })
   .superRefine((v, ctx) => {
+    if (v.search === "surfaces" && !v.methods.some((m) => m === "spencer" || m === "morgenstern-price"))
+      ctx.addIssue({
+        code: "custom",
+        path: ["search"],
+        message: "A search of surfaces of any shape runs Spencer's or the Morgenstern–Price method: tick one.",
+      });
     if (loadingCondition(v.condition).engineCase === "drawdown") {
       if (v.drawdownFrom === undefined)
         ctx.addIssue({ code: "custom", path: ["drawdownFrom"], message: "Enter the pool level before drawdown (m)." });
@@ -115,6 +124,7 @@ export function toAnalysis(doc: SectionDocument, setup: RunSetup): Analysis {
     ordinaryForm: setup.ordinaryForm,
   };
   if (setup.methods.includes("morgenstern-price")) analysis.interslice = setup.interslice ?? "half-sine";
+  if (setup.search === "surfaces") analysis.search = "surfaces";
   if (condition.engineCase === "drawdown") {
     analysis.drawdown = { from: setup.drawdownFrom!, to: setup.drawdownTo!, method: setup.drawdownMethod };
   }

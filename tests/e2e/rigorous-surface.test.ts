@@ -33,10 +33,13 @@ async function sideBySide(page: Page) {
   const surface = await fsOf(page, "method-surface-spencer");
   const circle = await fsOf(page, "method-circle-bishop");
   expect(await page.getByTestId("method-surface-spencer").textContent()).toMatch(/λ = \d\.\d{3}/);
-  // The seam governs: the drawn surface along it is clearly below the critical circle.
+  // The seam governs: the drawn surface along it, and the surface the search finds, are clearly
+  // below the critical circle.
   expect(surface).toBeLessThan(circle * 0.9);
+  const searched = await fsOf(page, "method-searched-spencer");
+  expect(searched).toBeLessThan((await fsOf(page, "method-circle-spencer")) * 0.9);
   await page.getByTestId("thrust-key").waitFor();
-  return { surface, circle };
+  return { surface, circle, searched };
 }
 
 describe("a slip surface drawn along a weak seam", () => {
@@ -53,6 +56,7 @@ describe("a slip surface drawn along a weak seam", () => {
       await page.getByLabel("Spencer's method").check();
       await page.getByLabel("Morgenstern–Price").check();
       await page.getByLabel("Morgenstern–Price interslice function").selectOption("half-sine");
+      await page.getByLabel("Circles, then surfaces of any shape").check();
 
       await page.getByRole("button", { name: "Draw on the section" }).click();
       await page.waitForSelector('[data-testid="run-canvas"][data-mode="drawing"]');
@@ -67,7 +71,8 @@ describe("a slip surface drawn along a weak seam", () => {
       await page.getByRole("button", { name: "Done drawing" }).click();
 
       await page.getByRole("button", { name: "Run the search" }).click();
-      await page.getByTestId("search-outcome").waitFor({ timeout: 60_000 });
+      await page.getByTestId("search-progress").waitFor();
+      await page.getByTestId("search-outcome").waitFor({ timeout: 90_000 });
       const preview = await sideBySide(page);
 
       await page.getByLabel("Name of the run").fill("Seam surface drawn in the browser");

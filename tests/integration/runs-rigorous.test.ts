@@ -59,8 +59,11 @@ describe("a kept run with the rigorous methods and a drawn surface (issue 15)", 
     expect(kept.surface.fs.bishop).toBeNull();
     expect(kept.surface.reasons.bishop.reason).toBe("circular-only");
     expect(kept.surface.rigorous.spencer.thrustLine.length).toBeGreaterThan(5);
-    expect(kept.onCircle.basis).toBe("bishop");
-    expect(kept.onCircle.lambda.spencer).not.toBeNull();
+    expect(kept.circles.spencer.solution.lambda).not.toBeNull();
+    // The surfaces search's surface along the seam, kept with its own solution.
+    expect(stored.result.setup.search).toBe("surfaces");
+    expect(kept.searched.spencer.surface.length).toBeGreaterThan(2);
+    expect(kept.searched.spencer.solution.fs).toBeLessThan(kept.circles.spencer.solution.fs * 0.9);
     // A seam governs: the surface along it is clearly below the critical circle (common practice).
     expect(kept.surface.fs.spencer).toBeLessThan(stored.fsBishop * 0.9);
   });
@@ -80,8 +83,8 @@ describe("a kept run with the rigorous methods and a drawn surface (issue 15)", 
     const stored = (await (await engineer.request(`/api/projects/${demo.projectId}/runs/${id}`)).json()).run;
     const record = searchRecord(documentForRun(demo.document, setup));
     if (!record.ok) throw new Error("search failed");
-    const spencer = stored.result.rigorous.onCircle.fs.spencer;
-    expect(spencer).toBeCloseTo(record.critical.bishop!.fs.spencer!, 9);
+    const spencer = stored.result.rigorous.circles.spencer.solution.fs;
+    expect(spencer).toBeCloseTo(record.result.results.spencer!.fs, 9);
     // Circles of ordinary slopes: Spencer within a few per cent of Bishop's simplified method
     // (Fredlund & Krahn 1977, from memory; Duncan & Wright, Soil Strength and Slope Stability, ch. 7).
     expect(Math.abs(spencer - stored.fsBishop) / stored.fsBishop).toBeLessThan(0.05);

@@ -43,6 +43,7 @@ function Cell({ cell, requiredFs, testid }: { cell: MethodCell; requiredFs?: num
 export function MethodComparison({ result, part, requiredFs, choices, chosen, onChoose }: MethodComparisonProps) {
   const rows = methodRows(result, part);
   const hasSurface = Boolean(part?.surface);
+  const hasSearched = part?.search === "surfaces";
   const usesMp = rows.some((r) => r.method === "morgenstern-price");
   return (
     <section className="panel space-y-3 p-4 text-sm" data-testid="method-comparison" aria-label="Methods side by side">
@@ -54,6 +55,7 @@ export function MethodComparison({ result, part, requiredFs, choices, chosen, on
           <tr>
             <th className="py-1 pr-3 font-medium">Method</th>
             <th className="py-1 pr-3 font-medium">Critical circle</th>
+            {hasSearched ? <th className="py-1 pr-3 font-medium">Searched surface</th> : null}
             {hasSurface ? <th className="py-1 pr-3 font-medium">Drawn surface</th> : null}
           </tr>
         </thead>
@@ -64,6 +66,9 @@ export function MethodComparison({ result, part, requiredFs, choices, chosen, on
                 {r.name}
               </th>
               <Cell cell={r.circle} requiredFs={requiredFs} testid={`method-circle-${r.method}`} />
+              {hasSearched ? (
+                <Cell cell={r.searched} requiredFs={requiredFs} testid={`method-searched-${r.method}`} />
+              ) : null}
               {hasSurface ? (
                 <Cell cell={r.surface} requiredFs={requiredFs} testid={`method-surface-${r.method}`} />
               ) : null}
@@ -72,10 +77,9 @@ export function MethodComparison({ result, part, requiredFs, choices, chosen, on
         </tbody>
       </table>
       <p className="text-xs text-ink-faint">
-        {part?.onCircle
-          ? "Spencer and Morgenstern–Price on the circle are solved on the critical circle of " +
-            (part.onCircle.basis === "bishop" ? "Bishop's simplified method" : "the ordinary method") +
-            ". "
+        Each method on its own critical circle.{" "}
+        {hasSearched
+          ? "The surfaces search started Spencer and Morgenstern–Price from their circles and from wedges along the weakest layers. "
           : ""}
         {usesMp && part ? `Morgenstern–Price with a ${INTERSLICE_NAME[part.interslice]}. ` : ""}
         Bishop&apos;s simplified and the ordinary method assume a circle, so they give no factor on a drawn surface.

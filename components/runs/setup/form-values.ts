@@ -15,6 +15,7 @@ export interface RunSetupInput {
   face: "upstream" | "downstream";
   methods: AnalysisMethod[];
   interslice: IntersliceFunction;
+  search: "circles" | "surfaces";
   /** The drawn slip surface ([x, y] in m), or none. */
   surface?: [number, number][];
   slices: number;
@@ -42,6 +43,7 @@ export function toRunSetup(v: RunSetupInput): unknown {
     face: v.face,
     methods: Array.isArray(v.methods) ? v.methods : [v.methods].filter(Boolean),
     interslice: v.interslice ?? "half-sine",
+    search: v.search === "surfaces" ? "surfaces" : undefined,
     surface: v.surface && v.surface.length > 0 ? v.surface : undefined,
     slices: v.slices,
     ordinaryForm: v.ordinaryForm,
@@ -66,6 +68,7 @@ export function fromRunSetup(s: RunSetup): RunSetupInput {
     face: s.face,
     methods: s.methods,
     interslice: s.interslice ?? "half-sine",
+    search: s.search ?? "circles",
     surface: s.surface,
     slices: s.slices,
     ordinaryForm: s.ordinaryForm,

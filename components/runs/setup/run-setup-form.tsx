@@ -49,6 +49,7 @@ function defaults(doc: SectionDocument, requiredFs: Record<LoadingConditionKey, 
     face,
     methods: ["bishop", "fellenius"],
     interslice: "half-sine",
+    search: "circles",
     slices: 50,
     ordinaryForm: "classical",
     grid: g.grid,
@@ -168,7 +169,7 @@ export function RunSetupForm({
     if (!done || !setup || !done.result.ok) return undefined;
     const runDoc = documentForRun(doc, setup);
     const drawn = setup.surface ? analyzeDrawnSurface(runDoc, setup.surface) : null;
-    return rigorousPart(runDoc, done.critical, drawn) ?? undefined;
+    return rigorousPart(runDoc, done.result, drawn) ?? undefined;
   }, [done, setup, doc]);
   const solution = useSolutionChoice(part);
   // The searched solution is drawn only while the surface on the canvas is still the one searched.

@@ -136,6 +136,18 @@ export function MethodFields({ form }: { form: SetupForm }) {
           </select>
         </div>
       ) : null}
+      <div className="flex flex-col gap-1 text-sm" role="radiogroup" aria-label="Slip surfaces searched">
+        <span className="label">Slip surfaces searched</span>
+        <label className="inline-flex items-center gap-1.5">
+          <input type="radio" value="circles" {...form.register("search")} /> Circles on the grid of centres
+        </label>
+        <label className="inline-flex items-center gap-1.5">
+          <input type="radio" value="surfaces" {...form.register("search")} /> Circles, then surfaces of any shape
+        </label>
+        {form.formState.errors.search?.message ? (
+          <p className="field-error">{form.formState.errors.search.message}</p>
+        ) : null}
+      </div>
       <div className="grid grid-cols-2 gap-2">
         <Num form={form} name="slices" label="Slices" step="1" />
         <div>

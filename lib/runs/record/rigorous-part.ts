@@ -1,38 +1,42 @@
 /**
  * What a run keeps of the methods that satisfy force and moment equilibrium (Spencer,
- * Morgenstern–Price) and of a slip surface the user drew (docs/engine-io.md "Methods and slip
- * surfaces of any shape"): the rigorous methods on the governing critical circle, and every method
- * asked for on the drawn surface. The browser's preview and the server's save build it with this
- * one function from the same engine results, so the two agree.
+ * Morgenstern–Price) and of slip surfaces of any shape (docs/engine-io.md "Methods and slip surfaces
+ * of any shape"): each rigorous method on its own critical circle and on the surface a surfaces
+ * search found, and every method asked for on a surface the user drew. The browser's preview and the
+ * server's save build it with this one function from the same search result, so the two agree.
  */
-import type {
-  AnalysisFsRecord,
-  Circle,
-  IntersliceFunction,
-  LambdaRecord,
-  Method,
-  RigorousRecord,
-  SectionDocument,
-  SurfaceSuccess,
-  XY,
+import {
+  analyzeCircle,
+  analyzeSurface,
+  type Circle,
+  type GridSearchSuccess,
+  type IntersliceFunction,
+  type RigorousFs,
+  type RigorousMethod,
+  type SectionDocument,
+  type SurfaceSuccess,
+  type XY,
 } from "@/lib/stability";
-import { analyzeSurface } from "@/lib/stability/surfaces/analyze-surface";
-import type { CriticalReports } from "./search-record";
 import { refusalText } from "@/lib/runs/view/rigorous-text";
 
-/** Spencer and Morgenstern–Price on one circle: the critical circle of `basis`. */
-export interface RigorousOnCircle {
-  basis: Method;
+/** One rigorous method's solution on a slip surface: its critical circle or a searched surface. */
+export interface RigorousOn {
   circle: Circle;
-  fs: AnalysisFsRecord;
-  lambda: LambdaRecord;
-  rigorous: RigorousRecord;
+  /** The searched surface ([x, y] m, x increasing); absent on the circle itself. */
+  surface?: XY[];
+  entry: XY;
+  exit: XY;
+  solution: RigorousFs;
 }
 
 export interface RigorousRunPart {
   interslice: IntersliceFunction;
-  /** null when no rigorous method was asked for or no circle gave a factor. */
-  onCircle: RigorousOnCircle | null;
+  /** What the search tried: circles on the grid, or then surfaces of any shape. */
+  search: "circles" | "surfaces";
+  /** Each rigorous method on its own critical circle of the grid search. */
+  circles: Partial<Record<RigorousMethod, RigorousOn>>;
+  /** A surfaces search: each rigorous method's lowest surface, when lower than its circle. */
+  searched: Partial<Record<RigorousMethod, RigorousOn>>;
   /** The drawn surface's analysis; null when the set-up had none. */
   surface: SurfaceSuccess | null;
 }
@@ -57,38 +61,38 @@ export function analyzeDrawnSurface(doc: SectionDocument, surface: readonly XY[]
 }
 
 /**
- * The rigorous part of a run from the critical circles' reports (which carry Spencer and
- * Morgenstern–Price when the document asks for them) and the drawn surface's analysis.
- * null when the run asked for neither.
+ * The rigorous part of a run: each rigorous method's solution (interslice forces, line of thrust,
+ * placed warnings) on its own critical circle and on its searched surface, re-analysed from the
+ * search's result, and the drawn surface's analysis. null when the run asked for neither.
  */
 export function rigorousPart(
   doc: SectionDocument,
-  critical: CriticalReports,
+  result: GridSearchSuccess,
   surface: SurfaceSuccess | null,
 ): RigorousRunPart | null {
-  const methods = doc.analysis?.methods ?? [];
-  const wantsRigorous = methods.includes("spencer") || methods.includes("morgenstern-price");
-  if (!wantsRigorous && !surface) return null;
-  const basis: Method | undefined = critical.bishop ? "bishop" : critical.fellenius ? "fellenius" : undefined;
-  const report = basis ? critical[basis] : undefined;
-  const onCircle: RigorousOnCircle | null =
-    wantsRigorous && basis && report?.rigorous
-      ? {
-          basis,
-          circle: report.circle,
-          fs: pickRigorous(report.fs),
-          lambda: report.lambda ?? {},
-          rigorous: report.rigorous,
-        }
-      : null;
-  return { interslice: doc.analysis?.interslice ?? "half-sine", onCircle, surface };
-}
-
-function pickRigorous(fs: AnalysisFsRecord): AnalysisFsRecord {
-  const out: AnalysisFsRecord = {};
-  if ("spencer" in fs) out.spencer = fs.spencer;
-  if ("morgenstern-price" in fs) out["morgenstern-price"] = fs["morgenstern-price"];
-  return out;
+  const methods = result.rigorousMethods ?? [];
+  if (methods.length === 0 && !surface) return null;
+  const part: RigorousRunPart = {
+    interslice: doc.analysis?.interslice ?? "half-sine",
+    search: doc.analysis?.search ?? "circles",
+    circles: {},
+    searched: {},
+    surface,
+  };
+  for (const m of methods) {
+    const best = result.results[m];
+    if (!best) continue;
+    const one = analyzeCircle(doc, best.circle);
+    const onCircle = one.ok ? one.rigorous?.[m] : undefined;
+    if (one.ok && onCircle && one.entry && one.exit)
+      part.circles[m] = { circle: best.circle, entry: one.entry, exit: one.exit, solution: onCircle };
+    if (best.surface) {
+      const s = analyzeSurface(doc, best.surface);
+      const sol = s.ok ? s.rigorous[m] : undefined;
+      if (sol) part.searched[m] = { ...best, surface: best.surface, solution: sol };
+    }
+  }
+  return part;
 }
 
 export type SurfaceCheck = { ok: true; surface: SurfaceSuccess } | { ok: false; text: string; at: XY | null };

@@ -87,7 +87,7 @@ export async function computeRunRecord(
     });
   }
   const surface = setup.surface ? drawnSurfaceOrRefuse(valid.section, setup.surface) : null;
-  const rigorous = rigorousPart(valid.section, critical, surface);
+  const rigorous = rigorousPart(valid.section, result, surface);
   const fsOf = (m: Method) => (result.methods.includes(m) ? (result.results[m]?.fs ?? null) : null);
   return {
     document: valid.section,

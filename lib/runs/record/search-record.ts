@@ -6,7 +6,7 @@
  */
 import {
   analyzeCircle,
-  runGridSearch,
+  runSurfaceSearch,
   type CircleSuccess,
   type EngineFailure,
   type EngineWarning,
@@ -73,7 +73,8 @@ export function keptWarnings(result: GridSearchSuccess, critical: CriticalReport
 
 /** Runs the search of a run's document and reports its critical circles; engine failures pass through. */
 export function searchRecord(doc: SectionDocument, opts: GridSearchOptions = {}): SearchRecord | EngineFailure {
-  const result = runGridSearch(doc, opts);
+  // The grid of circles, then (analysis.search "surfaces") the search of surfaces of any shape.
+  const result = runSurfaceSearch(doc, { onProgress: opts.onProgress && ((p) => opts.onProgress!(p.fraction)) });
   if (!result.ok) return result;
   const critical: CriticalReports = {};
   for (const method of result.methods) {

@@ -3,7 +3,15 @@
  * engine's codes (circular-only, thrust-outside, tension, m-alpha-low) become sentences with the
  * place they concern, measured along the slip surface from its upper end to its toe.
  */
-import type { AnalysisMethod, GridSearchSuccess, RigorousFs, RigorousWarning, XY } from "@/lib/stability";
+import type {
+  AnalysisMethod,
+  GridSearchSuccess,
+  RigorousFs,
+  RigorousMethod,
+  RigorousWarning,
+  SurfaceSuccess,
+  XY,
+} from "@/lib/stability";
 import type { RigorousRunPart, SurfaceRefused } from "@/lib/runs/record/rigorous-part";
 
 export const ALL_METHODS: readonly AnalysisMethod[] = ["bishop", "fellenius", "spencer", "morgenstern-price"];
@@ -35,8 +43,10 @@ export type MethodCell = { fs: number; lambda: number | null } | { note: string 
 export interface MethodRow {
   method: AnalysisMethod;
   name: string;
-  /** On the critical circle (each circular method's own; the rigorous ones on the basis circle). */
+  /** On each method's own critical circle of the grid. */
   circle: MethodCell;
+  /** A surfaces search's lowest surface; null when the search tried circles only. */
+  searched: MethodCell;
   /** On the drawn surface; null when the run has none. */
   surface: MethodCell;
 }
@@ -51,42 +61,53 @@ function noteOf(reason: string | undefined, text: string | undefined): { note: s
   return { note: (reason && REASON_WORDS[reason]) || text || "no factor" };
 }
 
+const isRigorous = (m: AnalysisMethod): m is RigorousMethod => m === "spencer" || m === "morgenstern-price";
+
 /**
- * The rows of the side-by-side table: every method the run asked for, on the critical circle and
- * on the drawn surface. Bishop and the ordinary method read "circle only" on a drawn surface.
+ * The rows of the side-by-side table: every method the run asked for, on its critical circle, on
+ * the surface a surfaces search found and on the drawn surface. Bishop and the ordinary method read
+ * "circle only" off circles.
  */
 export function methodRows(result: GridSearchSuccess, part: RigorousRunPart | undefined): MethodRow[] {
-  const asked = new Set<AnalysisMethod>([...result.methods, ...rigorousAsked(part)]);
+  const asked = new Set<AnalysisMethod>([...result.methods, ...(result.rigorousMethods ?? [])]);
+  for (const k of Object.keys(part?.surface?.fs ?? {})) asked.add(k as AnalysisMethod);
   const rows: MethodRow[] = [];
   for (const method of ALL_METHODS) {
     if (!asked.has(method)) continue;
-    rows.push({ method, name: ANY_METHOD_NAME[method], circle: circleCell(result, part, method), surface: null });
-    const row = rows[rows.length - 1];
-    const s = part?.surface;
-    if (s) {
-      const fs = s.fs[method];
-      const why = s.reasons[method];
-      const lambda = method === "spencer" || method === "morgenstern-price" ? (s.lambda[method] ?? null) : null;
-      if (typeof fs === "number") row.surface = { fs, lambda };
-      else row.surface = noteOf(why?.reason, why?.reasonText);
-    }
+    rows.push({
+      method,
+      name: ANY_METHOD_NAME[method],
+      circle: circleCell(result, part, method),
+      searched: part?.search === "surfaces" ? searchedCell(part, method) : null,
+      surface: part?.surface ? drawnCell(part.surface, method) : null,
+    });
   }
   return rows;
 }
 
-function rigorousAsked(part: RigorousRunPart | undefined): AnalysisMethod[] {
-  const out = new Set<AnalysisMethod>();
-  for (const k of Object.keys(part?.onCircle?.fs ?? {})) out.add(k as AnalysisMethod);
-  for (const k of Object.keys(part?.surface?.fs ?? {})) out.add(k as AnalysisMethod);
-  return [...out];
+function drawnCell(s: SurfaceSuccess, method: AnalysisMethod): MethodCell {
+  const fs = s.fs[method];
+  const why = s.reasons[method];
+  const lambda = isRigorous(method) ? (s.lambda[method] ?? null) : null;
+  return typeof fs === "number" ? { fs, lambda } : noteOf(why?.reason, why?.reasonText);
+}
+
+function searchedCell(part: RigorousRunPart, method: AnalysisMethod): MethodCell {
+  if (!isRigorous(method)) return { note: "circle only" };
+  const on = part.searched[method];
+  if (!on) return { note: "no surface below its circle" };
+  return on.solution.fs !== null
+    ? { fs: on.solution.fs, lambda: on.solution.lambda }
+    : noteOf(on.solution.reason, on.solution.reasonText);
 }
 
 function circleCell(result: GridSearchSuccess, part: RigorousRunPart | undefined, method: AnalysisMethod): MethodCell {
-  const own = result.results[method];
-  if (own) return { fs: own.fs, lambda: own.lambda ?? null };
-  if (method === "bishop" || method === "fellenius") return { note: "no valid circle" };
-  const sol = part?.onCircle?.rigorous[method];
-  if (!sol) return null;
+  if (!isRigorous(method)) {
+    const own = result.results[method];
+    return own ? { fs: own.fs, lambda: null } : { note: "no valid circle" };
+  }
+  const sol = part?.circles[method]?.solution;
+  if (!sol) return { note: "no valid circle" };
   return sol.fs !== null ? { fs: sol.fs, lambda: sol.lambda } : noteOf(sol.reason, sol.reasonText);
 }
 

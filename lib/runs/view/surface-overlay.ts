@@ -3,7 +3,8 @@
  * surface, its slice sides, the line of thrust, and a numbered mark at each warning's place.
  */
 import type { RigorousFs, XY } from "@/lib/stability";
-import type { RigorousRunPart } from "@/lib/runs/record/rigorous-part";
+import type { RigorousOn, RigorousRunPart } from "@/lib/runs/record/rigorous-part";
+import { arcPoints } from "./circle-arc";
 import { rigorousWarningLines, type RigorousWarningLine } from "./rigorous-text";
 
 /** Scarpline's own marks for a slip surface of any shape and its line of thrust. */
@@ -52,31 +53,36 @@ export interface SolutionChoice {
 
 const RIGOROUS_NAME = { spencer: "Spencer", "morgenstern-price": "Morgenstern–Price" } as const;
 
-/** Every rigorous solution a run holds, drawn surface first (it is what the reader drew). */
+/** Every rigorous solution a run holds: drawn surface first (it is what the reader drew), then searched, then circles. */
 export function solutionChoices(part: RigorousRunPart | undefined): SolutionChoice[] {
   const out: SolutionChoice[] = [];
-  const s = part?.surface;
-  for (const m of ["spencer", "morgenstern-price"] as const) {
-    const sol = s?.rigorous[m];
-    if (s && sol && sol.fs !== null) {
-      const label = `${RIGOROUS_NAME[m]}, drawn surface`;
-      const overlay = surfaceOverlay(s.surface, sol, "Drawn slip surface", s.entry, s.exit);
-      out.push({ key: `surface-${m}`, label, sol, overlay, lines: warningLines(sol, s.entry, s.exit) });
-    }
+  if (!part) return out;
+  const add = (key: string, label: string, sol: RigorousFs | undefined, line: XY[], upper?: XY, toe?: XY) => {
+    if (!sol || sol.fs === null) return;
+    const overlay = surfaceOverlay(line, sol, label, upper, toe);
+    out.push({ key, label, sol, overlay, lines: warningLines(sol, upper, toe) });
+  };
+  const s = part.surface;
+  for (const m of RIGOROUS)
+    if (s) add(`surface-${m}`, `${RIGOROUS_NAME[m]}, drawn surface`, s.rigorous[m], s.surface, s.entry, s.exit);
+  for (const m of RIGOROUS) {
+    const on = part.searched[m];
+    if (on?.surface)
+      add(`searched-${m}`, `${RIGOROUS_NAME[m]}, searched surface`, on.solution, on.surface, on.entry, on.exit);
   }
-  const c = part?.onCircle;
-  for (const m of ["spencer", "morgenstern-price"] as const) {
-    const sol = c?.rigorous[m];
-    if (c && sol && sol.fs !== null) {
-      const label = `${RIGOROUS_NAME[m]}, critical circle`;
-      const ends = sol.boundaries.length > 1 ? sol.boundaries : null;
-      const a: XY | undefined = ends ? [ends[0].x, ends[0].yTop] : undefined;
-      const b: XY | undefined = ends ? [ends[ends.length - 1].x, ends[ends.length - 1].yTop] : undefined;
-      // Boundaries run left to right; the upper end is the higher of the two.
-      const [upper, toe] = a && b && a[1] < b[1] ? [b, a] : [a, b];
-      const overlay = surfaceOverlay([], sol, "Critical circle", upper, toe);
-      out.push({ key: `circle-${m}`, label, sol, overlay, lines: warningLines(sol, upper, toe) });
-    }
+  for (const m of RIGOROUS) {
+    const on = part.circles[m];
+    if (on) add(`circle-${m}`, `${RIGOROUS_NAME[m]}, critical circle`, on.solution, circleLine(on), on.entry, on.exit);
   }
   return out;
+}
+
+const RIGOROUS = ["spencer", "morgenstern-price"] as const;
+
+/** The arc of a rigorous method's own critical circle from entry to exit, as a polyline. */
+function circleLine(on: RigorousOn): XY[] {
+  const flat = arcPoints(on.circle, on.entry, on.exit);
+  const pts: XY[] = [];
+  for (let i = 0; i + 1 < flat.length; i += 2) pts.push([flat[i], flat[i + 1]]);
+  return pts;
 }

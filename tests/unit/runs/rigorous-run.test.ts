@@ -112,7 +112,7 @@ describe("a run with a drawn planar surface and all four methods", () => {
     const record = searchRecord(slope);
     if (!record.ok) throw new Error("search failed");
     const drawn = analyzeDrawnSurface(slope, surface);
-    const part = rigorousPart(slope, record.critical, drawn);
+    const part = rigorousPart(slope, record.result, drawn);
     expect(part).not.toBeNull();
     const rows = methodRows(record.result, part!);
     expect(rows.map((r) => r.method)).toEqual(["bishop", "fellenius", "spencer", "morgenstern-price"]);
@@ -159,13 +159,27 @@ describe("the demo spoil bank over a clay seam", () => {
   const record = searchRecord(doc);
   if (!record.ok) throw new Error("demo search failed");
   const drawn = analyzeDrawnSurface(doc, setup.surface!);
-  const part = rigorousPart(doc, record.critical, drawn)!;
+  const part = rigorousPart(doc, record.result, drawn)!;
 
   test("the surface along the seam is clearly below the critical circle (a seam governs, common practice)", () => {
     const circle = record.result.results.bishop!.fs;
     const spencer = part.surface!.fs.spencer!;
     expect(spencer).toBeLessThan(circle * 0.9);
-    expect(solutionChoices(part).map((c) => c.label)).toContain("Spencer, drawn surface");
+    // The surfaces search (analysis.search "surfaces") finds a surface along the seam at least as low.
+    const searched = part.searched.spencer!.solution.fs!;
+    expect(searched).toBeLessThan(part.circles.spencer!.solution.fs! * 0.9);
+    expect(searched).toBeLessThanOrEqual(spencer + 1e-6);
+    expect(methodRows(record.result, part).find((r) => r.method === "bishop")!.searched).toEqual({
+      note: "circle only",
+    });
+    expect(solutionChoices(part).map((c) => c.label)).toEqual([
+      "Spencer, drawn surface",
+      "Morgenstern–Price, drawn surface",
+      "Spencer, searched surface",
+      "Morgenstern–Price, searched surface",
+      "Spencer, critical circle",
+      "Morgenstern–Price, critical circle",
+    ]);
   });
 
   test("the report shows the methods side by side, 'circle only', and the forces between slices", async () => {
