@@ -53,7 +53,7 @@ export interface SolutionChoice {
 
 const RIGOROUS_NAME = { spencer: "Spencer", "morgenstern-price": "Morgenstern–Price" } as const;
 
-/** Every rigorous solution a run holds: drawn surface first (it is what the reader drew), then searched, then circles. */
+/** Every rigorous solution a run holds: drawn surface first (what the reader drew), then searched, then circles. */
 export function solutionChoices(part: RigorousRunPart | undefined): SolutionChoice[] {
   const out: SolutionChoice[] = [];
   if (!part) return out;
