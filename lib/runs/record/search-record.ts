@@ -6,6 +6,7 @@
  */
 import {
   analyzeCircle,
+  runGridSearch,
   runSurfaceSearch,
   type CircleSuccess,
   type EngineFailure,
@@ -73,8 +74,12 @@ export function keptWarnings(result: GridSearchSuccess, critical: CriticalReport
 
 /** Runs the search of a run's document and reports its critical circles; engine failures pass through. */
 export function searchRecord(doc: SectionDocument, opts: GridSearchOptions = {}): SearchRecord | EngineFailure {
-  // The grid of circles, then (analysis.search "surfaces") the search of surfaces of any shape.
-  const result = runSurfaceSearch(doc, { onProgress: opts.onProgress && ((p) => opts.onProgress!(p.fraction)) });
+  // A surfaces search runs the grid of circles first (its first 30 % of progress), then surfaces of any
+  // shape; a circles search calls the grid search itself so that its progress runs to the end.
+  const result =
+    doc.analysis?.search === "surfaces"
+      ? runSurfaceSearch(doc, { onProgress: opts.onProgress && ((p) => opts.onProgress!(p.fraction)) })
+      : runGridSearch(doc, opts);
   if (!result.ok) return result;
   const critical: CriticalReports = {};
   for (const method of result.methods) {
