@@ -28,7 +28,7 @@ import type {
   RigorousMethod,
   SectionDocument,
 } from "./schema";
-import { createRigorousSearch } from "./rigorous-search";
+import { createRigorousSearch, rigorousFailureWarnings } from "./rigorous-search";
 import { createScratch } from "./scratch";
 import { stageWarnings } from "./drawdown/staged-report";
 import { createMethodState, localMinima, recordFs, type MethodState } from "./search-state";
@@ -171,6 +171,7 @@ export function runGridSearch(doc: SectionDocument | unknown, opts: GridSearchOp
     if (M.method === "bishop" || M.method === "fellenius")
       stageWarnings(M.method, crit?.stages, "critical circle", warnings);
   }
+  if (rig) rigorousFailureWarnings(rig, warnings);
   if (weightless.size > 0)
     warnings.push({
       code: "impenetrable-without-weight",

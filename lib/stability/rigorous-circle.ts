@@ -65,12 +65,14 @@ export interface RigorousPick {
   lambda: number;
   mass: number;
   dir: number;
+  /** Smallest mα of the governing mass at its solution. */
+  minMa: number;
   /** Status of the failure when no mass gave a factor. */
   status: number;
 }
 
 export function createRigorousPick(): RigorousPick {
-  return { fs: NaN, lambda: NaN, mass: -1, dir: 1, status: 0 };
+  return { fs: NaN, lambda: NaN, mass: -1, dir: 1, minMa: NaN, status: 0 };
 }
 
 /**
@@ -120,6 +122,7 @@ export function rigorousOnCircle(
         best = f;
         out.fs = f;
         out.lambda = G.lambda;
+        out.minMa = G.minMa;
         out.mass = m;
         out.dir = dir;
       }

@@ -20,7 +20,9 @@ export function rigorousReason(status: number): { reason: string; reasonText: st
   if (status === M_ALPHA)
     return {
       reason: "m-alpha-not-positive",
-      reasonText: "mα = cos α + sin α·tan φ'/F is zero or negative on a slice at the solution: the exit is too steep.",
+      reasonText:
+        "mα = cos α + sin α·tan φ'/F is zero (below 0.01) or negative on a slice at the solution, so its base " +
+        "force is unbounded: the exit is too steep.",
     };
   return {
     reason: "not-converged",

@@ -11,6 +11,7 @@ import type { AnalysisMethod, Grid } from "./schema";
 import type { Scratch } from "./scratch";
 import type { MethodState } from "./search-state";
 import { evaluateCircle } from "./evaluate-circle";
+import { circleRigorous } from "./rigorous-circle";
 
 const LABEL: Record<AnalysisMethod, string> = {
   bishop: "Bishop's simplified method",
@@ -68,6 +69,13 @@ export function criticalWarnings(
       code: "mass-near-section-side",
       message: `${LABEL[method]}: the critical slip mass comes within 1% of a side of the section; extend the section so the side does not limit the circle.`,
     });
+  }
+  if ((method === "spencer" || method === "morgenstern-price") && !crit.surface) {
+    // The acceptability of the critical circle's solution: thrust line, tension, mα, with their places.
+    if (evaluateCircle(P, S, crit.circle.xc, crit.circle.yc, crit.circle.r, true) === 0) {
+      const r = circleRigorous(P, S, crit.circle, [method], P.analysis.interslice);
+      for (const w of r.warnings) out.push({ code: w.code, message: `${w.message} (critical circle)` });
+    }
   }
   if (method === "bishop") {
     evaluateCircle(P, S, crit.circle.xc, crit.circle.yc, crit.circle.r, true);

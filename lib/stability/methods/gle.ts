@@ -211,6 +211,8 @@ function refineRoot(G: GleSlices, lam: number, eq: Equation, a: number, b: numbe
 }
 
 const TOL = 1e-7;
+/** Solutions with some mα at or below this are refused (reported as mα not positive). */
+export const MIN_M_ALPHA = 0.01;
 const MAX_NEWTON = 40;
 
 /**
@@ -327,7 +329,8 @@ function finish(G: GleSlices, F: number, lam: number, codes: GleCodes): number {
   G.minMa = minMa;
   G.minMaAt = at;
   if (F > 0) march(G, F, lam);
-  if (!(minMa > 0)) {
+  // mα at (numerically) zero means an unbounded base normal force: a spurious root, not a solution.
+  if (!(minMa > MIN_M_ALPHA)) {
     G.status = codes.mAlpha;
     return NaN;
   }
