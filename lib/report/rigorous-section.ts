@@ -4,7 +4,7 @@
  * the forces between slices of each solution (the same words as the result view).
  */
 import { rgb } from "pdf-lib";
-import type { GridSearchSuccess, SectionDocument } from "@/lib/stability";
+import type { GridSearchSuccess, SectionDocument, XY } from "@/lib/stability";
 import type { RigorousRunPart } from "@/lib/runs/record/rigorous-part";
 import { formatFs } from "@/lib/runs/view/verdict";
 import { INTERSLICE_NAME, methodRows, placeText, type MethodCell } from "@/lib/runs/view/rigorous-text";
@@ -14,6 +14,7 @@ import { ALARM, SOFT, type ReportWriter } from "./report-writer";
 
 const SURFACE = rgb(0.17, 0.36, 0.48);
 const THRUST = rgb(0.64, 0.28, 0.12);
+const SEARCHED = rgb(0.15, 0.15, 0.2);
 
 function cellText(c: MethodCell): string {
   if (c === null) return "—";
@@ -31,11 +32,17 @@ export function writeRigorous(
   const rows = methodRows(run.result, part);
   w.table(
     [
-      { header: "Method", width: 150 },
-      { header: "Critical circle", width: 150 },
-      { header: "Drawn surface", width: w.width - 300 },
+      { header: "Method", width: 130 },
+      { header: "Critical circle", width: 120 },
+      { header: "Searched surface", width: 120 },
+      { header: "Drawn surface", width: w.width - 370 },
     ],
-    rows.map((r) => [r.name, cellText(r.circle), part.surface ? cellText(r.surface) : "no surface drawn"]),
+    rows.map((r) => [
+      r.name,
+      cellText(r.circle),
+      part.search === "surfaces" ? cellText(r.searched) : "circles only searched",
+      part.surface ? cellText(r.surface) : "no surface drawn",
+    ]),
     8.5,
   );
   w.paragraph(
@@ -45,25 +52,28 @@ export function writeRigorous(
     { size: 7.5, color: SOFT },
   );
   const choices = solutionChoices(part);
+  const pts = (line: readonly XY[]) => line.map((p) => placeText(p).replace(" m", "")).join(", ");
   const s = part.surface;
-  if (s && s.surface.length > 1) {
-    w.paragraph(`Drawn slip surface: ${s.surface.map((p) => placeText(p).replace(" m", "")).join(", ")} m.`, {
-      size: 8.5,
-    });
-    const shown = choices.find((c) => c.key.startsWith("surface-"));
+  if (s && s.surface.length > 1) w.paragraph(`Drawn slip surface: ${pts(s.surface)} m.`, { size: 8.5 });
+  const searched = part.searched.spencer ?? part.searched["morgenstern-price"];
+  if (searched?.surface) w.paragraph(`Searched slip surface (lowest): ${pts(searched.surface)} m.`, { size: 8.5 });
+  const shown = choices.find((c) => !c.key.startsWith("circle-"));
+  if (shown) {
     w.ensure(320);
     drawSection(w, {
       document: run.document,
       critical: {},
       lines: [
-        { points: s.surface, color: SURFACE, width: 1.8 },
-        ...(shown ? [{ points: shown.sol.thrustLine, color: THRUST, width: 1.2, dash: [4, 2] }] : []),
+        ...(s && s.surface.length > 1 ? [{ points: s.surface, color: SURFACE, width: 1.8 }] : []),
+        ...(searched?.surface ? [{ points: searched.surface, color: SEARCHED, width: 1.5, dash: [6, 2] }] : []),
+        { points: shown.sol.thrustLine, color: THRUST, width: 1.2, dash: [4, 2] },
       ],
     });
-    w.paragraph(`Solid blue-grey: the drawn slip surface; dashed rust: the line of thrust of ${shown?.label ?? "—"}.`, {
-      size: 7.5,
-      color: SOFT,
-    });
+    w.paragraph(
+      "Solid blue-grey: the drawn slip surface; long dashes, dark: the searched surface; short dashes, rust: " +
+        `the line of thrust of ${shown.label}.`,
+      { size: 7.5, color: SOFT },
+    );
   }
   for (const c of choices) {
     for (const l of c.lines)

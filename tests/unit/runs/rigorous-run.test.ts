@@ -218,5 +218,7 @@ describe("the demo spoil bank over a clay seam", () => {
     expect(text).toContain("circle only");
     expect(text).toContain(part.surface!.fs.spencer!.toFixed(3));
     expect(text).toContain("Forces between slices: Spencer, drawn surface");
+    expect(text).toContain("Searched slip surface (lowest)");
+    expect(text).toContain(part.searched.spencer!.solution.fs!.toFixed(3));
   }, 30_000);
 });
