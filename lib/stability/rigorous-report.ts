@@ -4,7 +4,7 @@
  * warnings a reviewer needs with their place (docs/engine.md §11 "Acceptability").
  */
 import { fmt, fmtPoint } from "./issues";
-import { thrustLine, type GleSlices } from "./methods/gle";
+import type { GleSlices } from "./methods/gle";
 import type { IntersliceFunction, RigorousMethod } from "./schema";
 import type { IntersliceForce, RigorousFs, RigorousSlice, RigorousWarning, XY } from "./rigorous-types";
 import { M_ALPHA_WARN } from "./search-warnings";
@@ -198,4 +198,28 @@ function placeWarnings(
     });
   }
   return out;
+}
+
+/**
+ * Elevation of the line of thrust at each interior boundary (NaN where |E| is too small to
+ * place it), from the moment balance of each slice about its base midpoint:
+ *   (y_{i+1} − ym)·E_{i+1} = (y_i − ym)·E_i − (b/2)·(X_i + X_{i+1}) + (yH − ym)·H,
+ * carried as Z = y·E so that a boundary with E ≈ 0 passes its moment on unchanged.
+ * Fills `out` (length n + 1; both ends NaN).
+ */
+function thrustLine(G: GleSlices, out: Float64Array): void {
+  const n = G.n;
+  let scale = 0;
+  for (let i = 0; i <= n; i++) scale = Math.max(scale, Math.abs(G.E[i]));
+  const small = 1e-6 * scale + 1e-9;
+  out[0] = NaN;
+  let Z = 0;
+  for (let i = 0; i < n; i++) {
+    const b = G.xr[i] - G.xl[i];
+    const ym = G.ym[i];
+    const E1 = G.E[i + 1];
+    Z += ym * (E1 - G.E[i]) - (b / 2) * (G.X[i] + G.X[i + 1]) + (G.yH[i] - ym) * G.H[i];
+    out[i + 1] = i + 1 < n && Math.abs(E1) > small ? Z / E1 : NaN;
+  }
+  out[n] = NaN;
 }

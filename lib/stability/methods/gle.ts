@@ -144,6 +144,85 @@ export function march(G: GleSlices, F: number, lam: number): boolean {
   return Number.isFinite(E) && Number.isFinite(M);
 }
 
+/** ∂(E_n, M)/∂(F, λ) of the last marchWithDerivatives: [∂E/∂F, ∂E/∂λ, ∂M/∂F, ∂M/∂λ]. */
+const jac = new Float64Array(4);
+
+/**
+ * march() carrying the derivatives of every quantity with respect to F and λ (forward mode), so
+ * one pass gives the residuals and their Jacobian for Newton's method.
+ */
+export function marchWithDerivatives(G: GleSlices, F: number, lam: number): boolean {
+  const n = G.n;
+  const inv = 1 / F;
+  const inv2 = inv * inv;
+  let E = 0;
+  let EF = 0;
+  let EL = 0;
+  let X = 0;
+  let XF = 0;
+  let XL = 0;
+  let M = 0;
+  let MF = 0;
+  let ML = 0;
+  for (let i = 0; i < n; i++) {
+    const s = G.sinA[i];
+    const co = G.cosA[i];
+    const t = G.tp[i];
+    const l = G.len[i];
+    const ma = co + s * t * inv;
+    if (!(ma > 1e-9)) return false;
+    const maF = -s * t * inv2;
+    const a0 = (G.c[i] - G.u[i] * t) * l;
+    const A = a0 * inv;
+    const AF = -a0 * inv2;
+    const k = s - t * co * inv;
+    const kF = t * co * inv2;
+    const R = G.V[i] + X - A * s;
+    const RF = XF - AF * s;
+    const RL = XL;
+    const f = G.f[i + 1];
+    const fi = lam * f;
+    const den = ma + k * fi;
+    if (Math.abs(den) < 1e-12) return false;
+    const denF = maF + kF * fi;
+    const denL = k * f;
+    const q = E + G.H[i] - A * co;
+    const num = q * ma + k * R;
+    const numF = (EF - AF * co) * ma + q * maF + kF * R + k * RF;
+    const numL = EL * ma + k * RL;
+    const En = num / den;
+    const EnF = (numF - En * denF) / den;
+    const EnL = (numL - En * denL) / den;
+    const N = (R - fi * En) / ma;
+    const NF = (RF - fi * EnF - N * maF) / ma;
+    const NL = (RL - f * En - fi * EnL) / ma;
+    const S = A + N * t * inv;
+    const SF = AF + NF * t * inv - N * t * inv2;
+    const SL = NL * t * inv;
+    const aS = G.armS[i];
+    const aN = G.armN[i];
+    M += S * aS - N * aN - G.drive[i];
+    MF += SF * aS - NF * aN;
+    ML += SL * aS - NL * aN;
+    G.N[i] = N;
+    E = En;
+    EF = EnF;
+    EL = EnL;
+    X = fi * En;
+    XF = fi * EnF;
+    XL = f * En + fi * EnL;
+    G.E[i + 1] = E;
+    G.X[i + 1] = X;
+  }
+  res[0] = E;
+  res[1] = M;
+  jac[0] = EF;
+  jac[1] = EL;
+  jac[2] = MF;
+  jac[3] = ML;
+  return Number.isFinite(E) && Number.isFinite(M) && jac.every(Number.isFinite);
+}
+
 /** The smallest F at which every mα stays positive (F above it keeps the march defined). */
 export function lowestF(G: GleSlices): number {
   let lo = 1e-3;
@@ -217,7 +296,7 @@ const MAX_NEWTON = 40;
 
 /**
  * Solves F and λ on the slices in G from the start (F0, λ0): Newton's method on both residuals
- * (a finite-difference Jacobian, steps limited to 30 % of F and 0.3 in λ), and, when it fails, a
+ * (the Jacobian carried through the march, steps limited to 30 % of F and 0.3 in λ), and, when it fails, a
  * scan of λ for a change of sign of F_m(λ) − F_f(λ) refined by bisection. Sets G.fs, G.lambda,
  * G.iterations and G.status (OK, NOT_CONVERGED, or M_ALPHA when some mα ≤ 0 at the solution);
  * the arrays hold the forces at the solution.
@@ -233,17 +312,13 @@ export function solveGle(G: GleSlices, F0: number, lam0: number, codes: GleCodes
   let lam = Number.isFinite(lam0) ? lam0 : 0;
   for (let it = 0; it < MAX_NEWTON; it++) {
     G.iterations = it + 1;
-    if (!march(G, F, lam)) break;
+    if (!marchWithDerivatives(G, F, lam)) break;
     const r0 = res[0] / sf;
     const r1 = res[1] / sm;
-    const hF = 1e-7 * F;
-    const hL = 1e-7;
-    if (!march(G, F + hF, lam)) break;
-    const a00 = (res[0] / sf - r0) / hF;
-    const a10 = (res[1] / sm - r1) / hF;
-    if (!march(G, F, lam + hL)) break;
-    const a01 = (res[0] / sf - r0) / hL;
-    const a11 = (res[1] / sm - r1) / hL;
+    const a00 = jac[0] / sf;
+    const a01 = jac[1] / sf;
+    const a10 = jac[2] / sm;
+    const a11 = jac[3] / sm;
     const det = a00 * a11 - a01 * a10;
     if (!(Math.abs(det) > 1e-300)) break;
     let dF = -(a11 * r0 - a01 * r1) / det;
@@ -338,28 +413,4 @@ function finish(G: GleSlices, F: number, lam: number, codes: GleCodes): number {
   G.lambda = lam;
   G.status = codes.ok;
   return F;
-}
-
-/**
- * Elevation of the line of thrust at each interior boundary (NaN where |E| is too small to
- * place it), from the moment balance of each slice about its base midpoint:
- *   (y_{i+1} − ym)·E_{i+1} = (y_i − ym)·E_i − (b/2)·(X_i + X_{i+1}) + (yH − ym)·H,
- * carried as Z = y·E so that a boundary with E ≈ 0 passes its moment on unchanged.
- * Fills `out` (length n + 1; both ends NaN).
- */
-export function thrustLine(G: GleSlices, out: Float64Array): void {
-  const n = G.n;
-  let scale = 0;
-  for (let i = 0; i <= n; i++) scale = Math.max(scale, Math.abs(G.E[i]));
-  const small = 1e-6 * scale + 1e-9;
-  out[0] = NaN;
-  let Z = 0;
-  for (let i = 0; i < n; i++) {
-    const b = G.xr[i] - G.xl[i];
-    const ym = G.ym[i];
-    const E1 = G.E[i + 1];
-    Z += ym * (E1 - G.E[i]) - (b / 2) * (G.X[i] + G.X[i + 1]) + (G.yH[i] - ym) * G.H[i];
-    out[i + 1] = i + 1 < n && Math.abs(E1) > small ? Z / E1 : NaN;
-  }
-  out[n] = NaN;
 }
