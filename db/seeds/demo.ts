@@ -4,6 +4,7 @@ import { buildDemoSection } from "./demo-section";
 import { seedDemoMaterials } from "./demo-materials";
 import { seedDemoDesign } from "./demo-design";
 import { seedZonedDam } from "./demo-zoned-dam";
+import { seedWeakLayer } from "./demo-weak-layer";
 import { fetchMaterialsOfProject } from "../queries/materials";
 import { toEngineMaterial } from "../../lib/materials/engine-material";
 
@@ -73,6 +74,7 @@ export async function seedDemo(knex: Knex): Promise<{ created: boolean }> {
     ]);
     await seedDemoDesign(trx, projectId, ids.designer);
     await seedZonedDam(trx, projectId, ids.engineer);
+    await seedWeakLayer(trx, projectId, ids.engineer);
   });
   return { created: true };
 }

@@ -3,7 +3,16 @@
  * One zod schema serves the form (client) and the run route (server).
  */
 import { z } from "zod";
-import { gridSchema, radiiSchema, type Analysis, type SectionDocument } from "@/lib/stability";
+import {
+  analysisMethodSchema,
+  gridSchema,
+  intersliceSchema,
+  pointSchema,
+  searchKindSchema,
+  radiiSchema,
+  type Analysis,
+  type SectionDocument,
+} from "@/lib/stability";
 import { directionForFace } from "./face";
 import { LOADING_CONDITION_KEYS, loadingCondition, type LoadingConditionKey } from "./required-fs";
 import { MAX_SEARCH_CIRCLES, searchCircleCount, tooManyCirclesMessage } from "@/lib/runs/record/limits";
@@ -14,6 +23,9 @@ import {
   type WaterCondition,
 } from "@/lib/sections/water-conditions";
 import { seepageWaterBlock } from "@/lib/seepage-stability/attach";
+
+/** More bends than a hand-drawn surface along layers needs; keeps a stored set-up small. */
+export const MAX_SURFACE_POINTS = 40;
 
 export const runSetupSchema = z
   .object({
@@ -26,7 +38,26 @@ export const runSetupSchema = z
      */
     waterSource: z.enum(["condition", "seepage"]).optional(),
     face: z.enum(["upstream", "downstream"], { error: "Choose the face to check." }),
-    methods: z.array(z.enum(["bishop", "fellenius"])).min(1, "Choose at least one method."),
+    methods: z
+      .array(analysisMethodSchema)
+      .min(1, "Choose at least one method.")
+      .refine(
+        (ms) => ms.includes("bishop") || ms.includes("fellenius"),
+        "Keep Bishop's simplified or the ordinary method: the circle search runs on them.",
+      ),
+    /** Circles on the grid (absent), or then surfaces of any shape for the rigorous methods. */
+    search: searchKindSchema.optional(),
+    /** Morgenstern–Price's interslice function; absent: half-sine (docs/engine-io.md). */
+    interslice: intersliceSchema.optional(),
+    /**
+     * One slip surface the user drew, from ground to ground ([x, y] in m): every method asked for is
+     * also reported on it. The engine judges whether it is admissible (lib/runs/record/rigorous-part.ts).
+     */
+    surface: z
+      .array(pointSchema)
+      .min(2, "A slip surface needs at least two points.")
+      .max(MAX_SURFACE_POINTS, `A drawn slip surface may have at most ${MAX_SURFACE_POINTS} points.`)
+      .optional(),
     slices: z
       .number({ error: "Enter a number of slices." })
       .int("Whole slices only.")
@@ -53,6 +84,12 @@ export const runSetupSchema = z
     ordinaryForm: z.enum(["classical", "effective-weight"]).default("classical"),
   })
   .superRefine((v, ctx) => {
+    if (v.search === "surfaces" && !v.methods.some((m) => m === "spencer" || m === "morgenstern-price"))
+      ctx.addIssue({
+        code: "custom",
+        path: ["search"],
+        message: "A search of surfaces of any shape runs Spencer's or the Morgenstern–Price method: tick one.",
+      });
     if (loadingCondition(v.condition).engineCase === "drawdown") {
       if (v.drawdownFrom === undefined)
         ctx.addIssue({ code: "custom", path: ["drawdownFrom"], message: "Enter the pool level before drawdown (m)." });
@@ -92,6 +129,8 @@ export function toAnalysis(doc: SectionDocument, setup: RunSetup): Analysis {
     refine: setup.refine,
     ordinaryForm: setup.ordinaryForm,
   };
+  if (setup.methods.includes("morgenstern-price")) analysis.interslice = setup.interslice ?? "half-sine";
+  if (setup.search === "surfaces") analysis.search = "surfaces";
   if (condition.engineCase === "drawdown") {
     analysis.drawdown = { from: setup.drawdownFrom!, to: setup.drawdownTo!, method: setup.drawdownMethod };
   }

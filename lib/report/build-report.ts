@@ -21,6 +21,8 @@ import { countOf, formatCount, formatDateTime, withUnit } from "@/lib/format";
 import { conditionWords, faceWords, MODEL_SHORT } from "@/lib/vocabulary";
 import { writeSensitivity, type ReportSensitivity } from "./sensitivity-section";
 import { writeProbabilistic, type ReportProbabilistic } from "./probabilistic-section";
+import { writeRigorous } from "./rigorous-section";
+import type { RigorousRunPart } from "@/lib/runs/record/rigorous-part";
 
 export interface ReportInput {
   projectName: string;
@@ -41,7 +43,7 @@ export interface ReportInput {
     engineVersion: string;
     revisesRunId: number | null;
     document: SectionDocument;
-    result: GridSearchSuccess & { setup?: RunSetup };
+    result: GridSearchSuccess & { setup?: RunSetup; rigorous?: RigorousRunPart };
     sliceTables: Partial<Record<"bishop" | "fellenius", { slices: SliceRow[]; minMAlpha: number | null }>>;
   };
   review: {
@@ -343,6 +345,7 @@ export async function buildRunReport(input: ReportInput): Promise<Uint8Array> {
   w.cautionBox("Engineering caution", CAUTION_TEXT, ALARM);
   writeInputs(w, input);
   writeResults(w, input);
+  writeRigorous(w, run);
   writeMaterials(w, input);
   writeReview(w, input);
   if (input.sensitivity) writeSensitivity(w, input.sensitivity);

@@ -16,6 +16,8 @@ export interface DrawingInput {
   critical: Partial<Record<"bishop" | "fellenius", CircleFs | null>>;
   grid?: Grid;
   drawdownTo?: number;
+  /** Further polylines over the circles: a drawn slip surface, a line of thrust. */
+  lines?: readonly { points: readonly (readonly [number, number])[]; color: RGB; width: number; dash?: number[] }[];
 }
 
 const WATER = rgb(0.1, 0.35, 0.75);
@@ -127,6 +129,14 @@ export function drawSection(w: ReportWriter, input: DrawingInput, height = 300):
       color: style.color,
     });
   }
+  for (const l of input.lines ?? [])
+    if (l.points.length > 1)
+      page.drawSvgPath(path(l.points, false), {
+        ...at,
+        borderColor: l.color,
+        borderWidth: l.width,
+        borderDashArray: l.dash,
+      });
   drawAxes(w, b, { originX, originY, scale, sx, sy, boxH });
   w.y = top - height - 4;
 }

@@ -22,9 +22,13 @@ import { conditionWords, faceWords } from "@/lib/vocabulary";
 import { WhatIfPanel } from "@/components/runs/kept/what-if-panel";
 import { SensitivityPanel } from "@/components/runs/kept/sensitivity-panel";
 import { ScatterStudyPanel } from "@/components/runs/kept/scatter-study-panel";
+import { MethodComparison } from "@/components/runs/result/method-comparison";
+import { IntersliceTable } from "@/components/runs/result/interslice-table";
+import { useSolutionChoice } from "@/components/runs/result/use-solution-choice";
+import type { RigorousRunPart } from "@/lib/runs/record/rigorous-part";
 
 type Method = "bishop" | "fellenius";
-export type StoredResult = GridSearchSuccess & { setup: RunSetup };
+export type StoredResult = GridSearchSuccess & { setup: RunSetup; rigorous?: RigorousRunPart };
 export type StoredSlices = Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>;
 
 export interface RunViewProps {
@@ -72,6 +76,7 @@ export function RunView({
   const staged = useMemo(() => stagedView(result, doc, run.engineVersion), [result, doc, run.engineVersion]);
   const seepage = runSeepage(run);
   const drawnDoc = useMemo(() => documentToDraw(doc, seepage), [doc, seepage]);
+  const solution = useSolutionChoice(result.rigorous);
 
   return (
     <div className="space-y-4">
@@ -148,6 +153,7 @@ export function RunView({
               grid={doc.analysis?.grid}
               radii={doc.analysis?.radii}
               height={480}
+              surface={solution.current?.overlay}
             />
           </PinnedCanvas>
           <FsSummary
@@ -156,6 +162,17 @@ export function RunView({
             minMAlpha={{ bishop: tables.bishop?.minMAlpha, fellenius: tables.fellenius?.minMAlpha }}
             staged={staged}
           />
+          {result.rigorous ? (
+            <MethodComparison
+              result={result}
+              part={result.rigorous}
+              requiredFs={run.requiredFs}
+              choices={solution.choices}
+              chosen={solution.chosen}
+              onChoose={solution.setChosen}
+            />
+          ) : null}
+          {solution.current ? <IntersliceTable choice={solution.current} /> : null}
           <WhatIfPanel
             document={doc}
             storedFs={Object.fromEntries(methods.map((m) => [m, result.results[m]!.fs]))}

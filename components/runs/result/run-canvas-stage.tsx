@@ -11,6 +11,9 @@ import { AxisMarks } from "@/components/runs/result/canvas-axes";
 import { CentreGridShapes } from "@/components/runs/result/canvas-centre-grid";
 import { CircleShapes } from "@/components/runs/result/canvas-circles";
 import { SetupHandles } from "@/components/runs/result/canvas-setup-handles";
+import { SurfaceHandles, SurfaceShapes, type SurfaceDrawing } from "@/components/runs/result/canvas-surface";
+import type { SurfaceOverlay } from "@/lib/runs/view/surface-overlay";
+import { toWorld } from "@/lib/runs/view/view-fit";
 
 export interface RunCanvasStageProps {
   scene: RunScene;
@@ -20,6 +23,10 @@ export interface RunCanvasStageProps {
   setup?: { grid: Grid; radii: Radii; onGridChange: (grid: Grid, radii: Radii) => void };
   /** Called with pixel moves while the background is dragged. */
   onPan: (dx: number, dy: number) => void;
+  /** A slip surface of any shape with its line of thrust, drawn over the circles. */
+  surface?: SurfaceOverlay;
+  /** Drawing mode: a click on the background is a vertex at (x, y) m instead of a pan. */
+  drawing?: SurfaceDrawing & { onClick: (x: number, y: number, metresPerPixel: number) => void };
 }
 
 /**
@@ -27,13 +34,19 @@ export interface RunCanvasStageProps {
  * Drawing layers do not listen to events, so a press anywhere but on a set-up handle lands
  * on the stage itself and pans the view.
  */
-export default function RunCanvasStage({ scene, view, width, height, setup, onPan }: RunCanvasStageProps) {
+export default function RunCanvasStage(props: RunCanvasStageProps) {
+  const { scene, view, width, height, setup, onPan, surface, drawing } = props;
   const last = useRef<{ x: number; y: number } | null>(null);
 
   const onDown = (e: Konva.KonvaEventObject<PointerEvent>) => {
     const stage = e.target.getStage();
     if (!stage || e.target !== stage) return;
     const p = stage.getPointerPosition();
+    if (drawing && p) {
+      const [x, y] = toWorld(view, p.x, p.y);
+      drawing.onClick(x, y, 1 / view.scale);
+      return;
+    }
     last.current = p ? { x: p.x, y: p.y } : null;
   };
   const onMove = (e: Konva.KonvaEventObject<PointerEvent>) => {
@@ -60,7 +73,13 @@ export default function RunCanvasStage({ scene, view, width, height, setup, onPa
         <SectionShapes scene={scene} view={view} />
         <CentreGridShapes scene={scene} view={view} setup={Boolean(setup)} />
         <CircleShapes scene={scene} view={view} />
+        {surface ? <SurfaceShapes overlay={surface} view={view} /> : null}
       </Layer>
+      {drawing ? (
+        <Layer>
+          <SurfaceHandles drawing={drawing} view={view} />
+        </Layer>
+      ) : null}
       {setup ? (
         <Layer>
           <SetupHandles {...setup} view={view} sectionBox={scene.fitBox} />

@@ -9,6 +9,8 @@ import { buildRunScene, type CircleOverlay, type RunMethod } from "@/lib/runs/vi
 import { fitView, panBy, zoomAt, type Box, type RunView } from "@/lib/runs/view/view-fit";
 import { FsMapLegend } from "@/components/runs/result/fs-map-legend";
 import { CanvasKey } from "@/components/runs/result/canvas-key";
+import { SURFACE_COLOUR, THRUST_COLOUR, type SurfaceOverlay } from "@/lib/runs/view/surface-overlay";
+import type { RunCanvasStageProps } from "@/components/runs/result/run-canvas-stage";
 
 // Konva needs a browser canvas: the stage loads on the client only.
 const RunCanvasStage = dynamic(() => import("@/components/runs/result/run-canvas-stage"), {
@@ -42,6 +44,10 @@ export interface RunCanvasProps {
   height?: number;
   /** Show the engineering caution under a result view (default true). */
   caution?: boolean;
+  /** A slip surface of any shape with its slices, line of thrust and warning marks. */
+  surface?: SurfaceOverlay;
+  /** Drawing a slip surface: background clicks add vertices (the view still zooms with the wheel). */
+  drawing?: RunCanvasStageProps["drawing"];
 }
 
 const WHEEL_ZOOM = 0.0015;
@@ -144,14 +150,33 @@ export function RunCanvas(props: RunCanvasProps) {
         data-testid="run-canvas"
         data-view={viewAttr}
         data-critical={criticalAttribute(scene.critical)}
-        data-mode={setup ? "set-up" : overlays && overlays.length > 0 ? "compare" : result ? "result" : "section"}
+        data-mode={
+          props.drawing
+            ? "drawing"
+            : setup
+              ? "set-up"
+              : overlays && overlays.length > 0
+                ? "compare"
+                : result
+                  ? "result"
+                  : "section"
+        }
         role="img"
         aria-label={describeCanvas(
           scene.critical.map((c) => c.label),
           Boolean(setup),
         )}
       >
-        <RunCanvasStage scene={scene} view={view} width={width} height={height} setup={setup} onPan={onPan} />
+        <RunCanvasStage
+          scene={scene}
+          view={view}
+          width={width}
+          height={height}
+          setup={props.drawing ? undefined : setup}
+          onPan={onPan}
+          surface={props.surface}
+          drawing={props.drawing}
+        />
         <div className="absolute right-2 top-2 flex gap-1">
           <button
             type="button"
@@ -179,6 +204,7 @@ export function RunCanvas(props: RunCanvasProps) {
           <FsMapLegend range={scene.range} method={scene.method} requiredFs={props.requiredFs} />
         ) : null}
         <CanvasKey scene={scene} setup={Boolean(setup)} />
+        {props.surface ? <SurfaceKey overlay={props.surface} /> : null}
         {showsResult && caution ? <Caution compact /> : null}
       </figcaption>
     </figure>
@@ -189,4 +215,37 @@ function describeCanvas(labels: string[], setup: boolean): string {
   const base = "Cross-section of the slope drawn to equal scale";
   if (setup) return `${base}, with the grid of trial centres and the tangent band as handles`;
   return labels.length > 0 ? `${base}, with critical circles: ${labels.join("; ")}` : base;
+}
+
+/** The surface's own key: what the solid and the dashed line are, and the numbered warnings. */
+function SurfaceKey({ overlay }: { overlay: SurfaceOverlay }) {
+  return (
+    <div className="flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink-soft" data-testid="surface-key">
+      {overlay.line.length > 1 ? (
+        <span>
+          <span
+            aria-hidden
+            className="mr-1 inline-block h-0.5 w-5 align-middle"
+            style={{ background: SURFACE_COLOUR }}
+          />
+          {overlay.label}
+        </span>
+      ) : null}
+      {overlay.thrust.length > 1 ? (
+        <span data-testid="thrust-key">
+          <span
+            aria-hidden
+            className="mr-1 inline-block w-5 border-t-2 border-dashed align-middle"
+            style={{ borderColor: THRUST_COLOUR }}
+          />
+          Line of thrust (where the force between slices acts)
+        </span>
+      ) : null}
+      {overlay.marks.map((m) => (
+        <span key={m.n}>
+          !{m.n} {m.text}
+        </span>
+      ))}
+    </div>
+  );
 }

@@ -6,6 +6,7 @@
 import type { FieldErrors, Resolver } from "react-hook-form";
 import { runSetupSchema, type RunSetup } from "@/lib/analysis/run-setup";
 import type { LoadingConditionKey } from "@/lib/analysis/required-fs";
+import type { AnalysisMethod, IntersliceFunction } from "@/lib/stability";
 
 export interface RunSetupInput {
   condition: LoadingConditionKey;
@@ -14,7 +15,11 @@ export interface RunSetupInput {
   /** true: pore pressures from the condition's finite-element seepage solution. */
   fromSeepage: boolean;
   face: "upstream" | "downstream";
-  methods: ("bishop" | "fellenius")[];
+  methods: AnalysisMethod[];
+  interslice: IntersliceFunction;
+  search: "circles" | "surfaces";
+  /** The drawn slip surface ([x, y] in m), or none. */
+  surface?: [number, number][];
   slices: number;
   ordinaryForm: "classical" | "effective-weight";
   grid: { x1: number; y1: number; x2: number; y2: number; nx: number; ny: number };
@@ -40,6 +45,9 @@ export function toRunSetup(v: RunSetupInput): unknown {
     ...(v.fromSeepage ? { waterSource: "seepage" } : {}),
     face: v.face,
     methods: Array.isArray(v.methods) ? v.methods : [v.methods].filter(Boolean),
+    interslice: v.interslice ?? "half-sine",
+    search: v.search === "surfaces" ? "surfaces" : undefined,
+    surface: v.surface && v.surface.length > 0 ? v.surface : undefined,
     slices: v.slices,
     ordinaryForm: v.ordinaryForm,
     grid: v.grid,
@@ -63,6 +71,9 @@ export function fromRunSetup(s: RunSetup): RunSetupInput {
     fromSeepage: s.waterSource === "seepage",
     face: s.face,
     methods: s.methods,
+    interslice: s.interslice ?? "half-sine",
+    search: s.search ?? "circles",
+    surface: s.surface,
     slices: s.slices,
     ordinaryForm: s.ordinaryForm,
     grid: s.grid,

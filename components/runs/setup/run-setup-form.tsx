@@ -25,6 +25,12 @@ import { SearchOutcome } from "@/components/runs/setup/search-outcome";
 import { RunCanvas } from "@/components/runs/result/run-canvas";
 import { SeepageWaterField } from "@/components/runs/setup/seepage-water-field";
 import { attachSeepage, type SeepageInputs } from "@/lib/seepage-stability/attach";
+import { SurfaceField } from "@/components/runs/setup/surface-field";
+import { useSolutionChoice } from "@/components/runs/result/use-solution-choice";
+import { analyzeDrawnSurface, checkDrawnSurface, rigorousPart } from "@/lib/runs/record/rigorous-part";
+import { groundLine } from "@/lib/runs/view/section-outline";
+import { addClick, moveVertex, type DrawState } from "@/lib/runs/view/surface-draw";
+import type { SurfaceOverlay } from "@/lib/runs/view/surface-overlay";
 
 export interface RunSetupFormProps {
   projectId: number;
@@ -47,6 +53,8 @@ function defaults(doc: SectionDocument, requiredFs: Record<LoadingConditionKey, 
     fromSeepage: false,
     face,
     methods: ["bishop", "fellenius"],
+    interslice: "half-sine",
+    search: "circles",
     slices: 50,
     ordinaryForm: "classical",
     grid: g.grid,
@@ -89,6 +97,13 @@ export function RunSetupForm({
   const search = useGridSearch();
   const [setup, setSetup] = useState<RunSetup | null>(null);
   const values = form.watch();
+  const [draw, setDraw] = useState<DrawState>(() => ({ points: initial?.surface ?? [], finished: true }));
+  const [drawing, setDrawing] = useState(false);
+
+  function setSurface(next: DrawState) {
+    setDraw(next);
+    form.setValue("surface", next.finished && next.points.length >= 2 ? next.points : undefined);
+  }
 
   function placeGrid(face = values.face) {
     const g = suggestGrid(doc, directionForFace(doc, face));
@@ -120,7 +135,12 @@ export function RunSetupForm({
   }
 
   const [seepageError, setSeepageError] = useState<string | null>(null);
+  // The document the last search ran on (seepage attached when asked), for the preview's rigorous part.
+  const [searchedDoc, setSearchedDoc] = useState<SectionDocument | null>(null);
   const onRun = form.handleSubmit((valid) => {
+    // A refused surface already shows its reason beside the drawing; no factor is computed for it.
+    if (surfaceCheck && !surfaceCheck.ok) return;
+    setDrawing(false);
     setSeepageError(null);
     let runDoc = doc;
     if (valid.waterSource === "seepage") {
@@ -137,7 +157,9 @@ export function RunSetupForm({
       runDoc = attached.section;
     }
     setSetup(valid);
-    search.start(documentForRun(runDoc, valid));
+    const searched = documentForRun(runDoc, valid);
+    setSearchedDoc(searched);
+    search.start(searched);
   });
 
   const gridForCanvas = Number.isFinite(values.grid?.x1) ? values.grid : undefined;
@@ -163,6 +185,34 @@ export function RunSetupForm({
     }
   }, [doc, values.condition, values.waterCondition]);
   const shownDoc = useMemo(() => (chosenWater ? withWater(doc, chosenWater.water) : doc), [doc, chosenWater]);
+  const ground = useMemo(() => groundLine(doc), [doc]);
+  const surfaceCheck = useMemo(
+    () => (draw.finished && draw.points.length >= 2 ? checkDrawnSurface(shownDoc, draw.points) : null),
+    [shownDoc, draw],
+  );
+  // The rigorous part of the preview, built as the save builds it (lib/runs/record/rigorous-part.ts).
+  const part = useMemo(() => {
+    if (!done || !setup || !searchedDoc || !done.result.ok) return undefined;
+    const drawn = setup.surface ? analyzeDrawnSurface(searchedDoc, setup.surface) : null;
+    return rigorousPart(searchedDoc, done.result, drawn) ?? undefined;
+  }, [done, setup, searchedDoc]);
+  const solution = useSolutionChoice(part);
+  // The searched solution is drawn only while the surface on the canvas is still the one searched.
+  const searchedThisSurface =
+    done !== null && JSON.stringify(setup?.surface ?? []) === JSON.stringify(draw.finished ? draw.points : []);
+  const drawnOverlay: SurfaceOverlay | undefined =
+    draw.points.length > 1
+      ? {
+          line: draw.points,
+          sides: [],
+          thrust: [],
+          marks:
+            surfaceCheck && !surfaceCheck.ok && surfaceCheck.at
+              ? [{ at: surfaceCheck.at, n: 1, text: "where the surface is refused" }]
+              : [],
+          label: "Drawn slip surface",
+        }
+      : undefined;
 
   return (
     <div className="grid gap-4 xl:grid-cols-[22rem_1fr]">
@@ -198,6 +248,15 @@ export function RunSetupForm({
         </p>
       </form>
       <div className="min-w-0 space-y-3">
+        <SurfaceField
+          points={draw.points}
+          finished={draw.finished}
+          drawing={drawing}
+          onDrawing={setDrawing}
+          onTyped={(points) => setSurface({ points, finished: true })}
+          onClear={() => setSurface({ points: [], finished: true })}
+          check={surfaceCheck}
+        />
         <SearchProgress state={search.state} onCancel={search.cancel} />
         <RunCanvas
           document={shownDoc}
@@ -226,6 +285,16 @@ export function RunSetupForm({
           requiredFs={values.requiredFs}
           height={460}
           caution={false}
+          surface={drawing ? undefined : (searchedThisSurface && solution.current?.overlay) || drawnOverlay}
+          drawing={
+            drawing
+              ? {
+                  points: draw.points,
+                  onClick: (x, y, mpp) => setSurface(addClick(draw, x, y, ground, 8 * mpp)),
+                  onMove: (i, x, y) => setSurface({ ...draw, points: moveVertex(draw.points, i, x, y, ground) }),
+                }
+              : undefined
+          }
         />
         {done && setup ? (
           <SearchOutcome
@@ -233,6 +302,8 @@ export function RunSetupForm({
             section={section}
             setup={setup}
             outcome={done}
+            rigorous={part}
+            solution={solution}
             revisesRunId={revisesRunId}
             materials={doc.materials}
             onSaved={(id) => router.push(`/projects/${projectId}/runs/${id}`)}

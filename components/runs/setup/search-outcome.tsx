@@ -14,6 +14,10 @@ import { userIssue } from "@/lib/runs/view/engine-issue-text";
 import { runFs } from "@/lib/runs/view/slice-csv";
 import { stagedFromResult } from "@/lib/runs/view/staged-view";
 import { countOf } from "@/lib/format";
+import type { RigorousRunPart } from "@/lib/runs/record/rigorous-part";
+import { MethodComparison } from "@/components/runs/result/method-comparison";
+import { IntersliceTable } from "@/components/runs/result/interslice-table";
+import type { useSolutionChoice } from "@/components/runs/result/use-solution-choice";
 
 export interface SearchOutcomeProps {
   projectId: number;
@@ -22,6 +26,9 @@ export interface SearchOutcomeProps {
   outcome: Extract<WorkerMessage, { type: "done" }>;
   revisesRunId?: number;
   onSaved: (runId: number) => void;
+  /** Spencer and Morgenstern–Price on the critical circle and every method on the drawn surface. */
+  rigorous?: RigorousRunPart;
+  solution?: ReturnType<typeof useSolutionChoice>;
   /** The analysed document's materials, to name them in errors. */
   materials?: readonly { id: string; name?: string }[];
 }
@@ -35,6 +42,8 @@ export function SearchOutcome({
   revisesRunId,
   onSaved,
   materials = [],
+  rigorous,
+  solution,
 }: SearchOutcomeProps) {
   const { result, critical } = outcome;
   const [title, setTitle] = useState(`${loadingCondition(setup.condition).label}, ${setup.face} face`);
@@ -102,6 +111,17 @@ export function SearchOutcome({
         requiredFs={setup.requiredFs}
         minMAlpha={{ bishop: critical.bishop?.minMAlpha, fellenius: critical.fellenius?.minMAlpha }}
       />
+      {rigorous && solution ? (
+        <MethodComparison
+          result={result}
+          part={rigorous}
+          requiredFs={setup.requiredFs}
+          choices={solution.choices}
+          chosen={solution.chosen}
+          onChoose={solution.setChosen}
+        />
+      ) : null}
+      {solution?.current ? <IntersliceTable choice={solution.current} /> : null}
       <div className="panel flex flex-wrap items-end gap-3 p-3">
         <div className="min-w-64 flex-1">
           <label className="label" htmlFor="run-title">

@@ -99,6 +99,8 @@ export function ConditionFields({
 }
 
 export function MethodFields({ form }: { form: SetupForm }) {
+  const chosen = form.watch("methods");
+  const mp = Array.isArray(chosen) ? chosen.includes("morgenstern-price") : chosen === "morgenstern-price";
   return (
     <fieldset className="space-y-3">
       <legend className="mb-1 text-sm font-semibold">Methods</legend>
@@ -109,8 +111,41 @@ export function MethodFields({ form }: { form: SetupForm }) {
         <label className="inline-flex items-center gap-1.5">
           <input type="checkbox" value="fellenius" {...form.register("methods")} /> Ordinary method of slices
         </label>
+        <label className="inline-flex items-center gap-1.5">
+          <input type="checkbox" value="spencer" {...form.register("methods")} /> Spencer&apos;s method
+        </label>
+        <label className="inline-flex items-center gap-1.5">
+          <input type="checkbox" value="morgenstern-price" {...form.register("methods")} /> Morgenstern–Price
+        </label>
+        <p className="text-xs text-ink-faint">
+          Spencer and Morgenstern–Price satisfy force and moment equilibrium; they are solved on the critical circle and
+          on a surface you draw.
+        </p>
         {form.formState.errors.methods?.message ? (
           <p className="field-error">{form.formState.errors.methods.message}</p>
+        ) : null}
+      </div>
+      {mp ? (
+        <div>
+          <label className="label" htmlFor="f-interslice">
+            Morgenstern–Price interslice function
+          </label>
+          <select id="f-interslice" className="field" {...form.register("interslice")}>
+            <option value="half-sine">Half-sine, f(x) = sin(πx′)</option>
+            <option value="constant">Constant, f(x) = 1</option>
+          </select>
+        </div>
+      ) : null}
+      <div className="flex flex-col gap-1 text-sm" role="radiogroup" aria-label="Slip surfaces searched">
+        <span className="label">Slip surfaces searched</span>
+        <label className="inline-flex items-center gap-1.5">
+          <input type="radio" value="circles" {...form.register("search")} /> Circles on the grid of centres
+        </label>
+        <label className="inline-flex items-center gap-1.5">
+          <input type="radio" value="surfaces" {...form.register("search")} /> Circles, then surfaces of any shape
+        </label>
+        {form.formState.errors.search?.message ? (
+          <p className="field-error">{form.formState.errors.search.message}</p>
         ) : null}
       </div>
       <div className="grid grid-cols-2 gap-2">

@@ -20,9 +20,11 @@ import {
   type SliceRow,
 } from "@/lib/stability";
 import type { PreviewCheck } from "./compare-preview";
+import { refusalText } from "@/lib/runs/view/rigorous-text";
 import { searchOnServer } from "./server-search";
 import { userIssue } from "@/lib/runs/view/engine-issue-text";
 import { withSeepageKeys, type SeepageSummary } from "@/lib/seepage-stability";
+import { analyzeDrawnSurface, rigorousPart, surfaceRefusal, type RigorousRunPart } from "./rigorous-part";
 
 export type StoredSliceTables = Partial<Record<Method, { slices: SliceRow[]; minMAlpha: number | null }>>;
 
@@ -32,6 +34,8 @@ export type StoredRunResult = GridSearchSuccess & {
   previewCheck: PreviewCheck;
   /** Water from a seepage solution: its q and mesh, for the run page and the review. */
   seepage?: SeepageSummary;
+  /** Spencer and Morgenstern–Price on the critical circle and every method on a drawn surface, when asked. */
+  rigorous?: RigorousRunPart;
 };
 
 export interface RunRecord {
@@ -88,16 +92,35 @@ export async function computeRunRecord(
       setup: ["No trial circle gave a factor of safety: check that the grid lies above the slope."],
     });
   }
+  const surface = setup.surface ? drawnSurfaceOrRefuse(document, setup.surface) : null;
+  const rigorous = rigorousPart(document, result, surface);
   const fsOf = (m: Method) => (result.methods.includes(m) ? (result.results[m]?.fs ?? null) : null);
   return {
     document,
-    result: { ...result, setup, previewCheck: compare(result), ...(seepage ? { seepage } : {}) },
+    result: {
+      ...result,
+      setup,
+      previewCheck: compare(result),
+      ...(seepage ? { seepage } : {}),
+      ...(rigorous ? { rigorous } : {}),
+    },
     sliceTables,
     fsBishop: fsOf("bishop"),
     fsFellenius: fsOf("fellenius"),
     waterCondition: { id: water.id, name: water.name },
     mode,
   };
+}
+
+/** The drawn slip surface analysed; a surface the engine refuses is a 400 with its reason and place. */
+function drawnSurfaceOrRefuse(section: SectionDocument, points: [number, number][]) {
+  const surface = analyzeDrawnSurface(section, points);
+  const refused = surface ? surfaceRefusal(surface) : null;
+  if (!surface || refused) {
+    const text = refused ? refusalText(refused) : "The drawn slip surface could not be analysed.";
+    throw new ApiError(400, "invalid_surface", text, { "setup.surface": [text] });
+  }
+  return surface;
 }
 
 /** The water condition the set-up names (or its loading condition's usual one); 400 if the version lacks it. */

@@ -8,6 +8,7 @@
 import {
   analyzeCircle,
   runGridSearch,
+  runSurfaceSearch,
   type CircleSuccess,
   type EngineFailure,
   type EngineWarning,
@@ -80,7 +81,15 @@ export function searchRecord(doc: SectionDocument, opts: GridSearchOptions = {})
   const water = prepareWater(doc);
   if (!water.ok) return water;
   const { document, waterField, seepage } = water;
-  const result = runGridSearch(document, { ...opts, waterField });
+  // A surfaces search runs the grid of circles first (its first 30 % of progress), then surfaces of any
+  // shape; a circles search calls the grid search itself so that its progress runs to the end.
+  const result =
+    doc.analysis?.search === "surfaces"
+      ? runSurfaceSearch(document, {
+          waterField,
+          onProgress: opts.onProgress && ((p) => opts.onProgress!(p.fraction)),
+        })
+      : runGridSearch(document, { ...opts, waterField });
   if (!result.ok) return result;
   const critical: CriticalReports = {};
   for (const method of result.methods) {
