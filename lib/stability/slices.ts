@@ -10,13 +10,21 @@ import * as cases from "./load-cases";
 import type { PreparedSection } from "./prepare";
 import type { Scratch } from "./scratch";
 import * as status from "./status";
-import { addBishopRow, clearBishop } from "./methods/bishop";
-import { rawNormal } from "./methods/ordinary";
-import { collectBreaks } from "./slice-breaks";
-import { findStrip } from "./strip-table";
-import { addFaceThrust } from "./vertical-faces";
+import * as bishop from "./methods/bishop";
+import * as ordinary from "./methods/ordinary";
+import * as breaks from "./slice-breaks";
+import * as strips from "./strip-table";
+import * as faces from "./vertical-faces";
 
-// Module-local copies: imported bindings are property reads on every use in the hot loop.
+// Module-local copies: imported bindings are property reads on every use in the hot loop, and where
+// modules are compiled to CommonJS (tsx, so npm run bench) each read of an imported function calls a
+// getter that the JIT does not inline. None of these modules imports this one, so the copies are set.
+const addBishopRow = bishop.addBishopRow;
+const clearBishop = bishop.clearBishop;
+const rawNormal = ordinary.rawNormal;
+const collectBreaks = breaks.collectBreaks;
+const findStrip = strips.findStrip;
+const addFaceThrust = faces.addFaceThrust;
 const SLICE_CAPACITY = defaults.SLICE_CAPACITY;
 const KIND_RIGID = cases.KIND_RIGID;
 const KIND_UNDRAINED = cases.KIND_UNDRAINED;
