@@ -82,6 +82,14 @@ export function buildSlices(
   const layerMat = T.layerMat;
   const waterA = P.waterA;
   const waterB = P.waterB;
+  const waterCos2 = P.waterCos2;
+  const surcharge = P.q;
+  const ru = P.ru;
+  const gammaOf = M.gamma;
+  const gammaSatOf = M.gammaSat;
+  const kindOf = M.kind;
+  const cOf = M.c;
+  const tanPhiOf = M.tanPhi;
   const nStrips = T.n;
   // The strip under each slice midpoint, advanced as the slices go right.
   let ks = findStrip(T, kept[0]);
@@ -156,7 +164,7 @@ export function buildSlices(
         const lowBot = last ? ym : bot;
         const h = top - lowBot;
         if (h > 0) {
-          const g = M.gamma[mi];
+          const g = gammaOf[mi];
           if (g < 0) {
             // The arc in impenetrable material governs; a block above the arc is carried as
             // weight, which it cannot be without γ (reported once the whole mass is sliced).
@@ -167,7 +175,7 @@ export function buildSlices(
           let hb = 0;
           if (yw > lowBot) hb = yw - lowBot < h ? yw - lowBot : h;
           const ha = h - hb;
-          const gs = M.gammaSat[mi];
+          const gs = gammaSatOf[mi];
           wsum += g * ha + gs * hb;
           gBase = hb > 0 ? gs : g;
           if (kh !== 0) wy += g * ha * (top - ha / 2) + gs * hb * (lowBot + hb / 2);
@@ -177,7 +185,7 @@ export function buildSlices(
           break;
         }
       }
-      const kind = M.kind[baseMat];
+      const kind = kindOf[baseMat];
       if (kind === KIND_RIGID) return RIGID;
       // The weight uses the exact area above the arc; the base angle is the midpoint's.
       const W = wsum * b + gBase * areaCorr;
@@ -188,8 +196,8 @@ export function buildSlices(
       // u is the base's mean pore pressure over its width: the exact area above the arc enters
       // it as it enters W, so that u·b is the water's true vertical thrust on the base.
       let u = 0;
-      if (line) u = yw > ym ? gw * (yw - ym + areaCorr / b) * P.waterCos2[ks] : 0;
-      else if (ruMode) u = (P.ru * W) / b;
+      if (line) u = yw > ym ? gw * (yw - ym + areaCorr / b) * waterCos2[ks] : 0;
+      else if (ruMode) u = (ru * W) / b;
       let Ww = 0;
       let Fw = 0;
       let dH = 0;
@@ -208,7 +216,7 @@ export function buildSlices(
           dH += Fw * (yc - yF);
         }
       }
-      const Q = P.q[ks] * b;
+      const Q = surcharge[ks] * b;
       const V = W + Ww + Q;
       let Hs = 0;
       if (kh !== 0 && wsum > 0) {
@@ -224,8 +232,8 @@ export function buildSlices(
         tp = 0;
         uEff = 0;
       } else {
-        c = M.c[baseMat];
-        tp = M.tanPhi[baseMat];
+        c = cOf[baseMat];
+        tp = tanPhiOf[baseMat];
       }
       const bb = arcLen * cosA;
       let Hn = Fw + Hs;
