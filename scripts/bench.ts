@@ -6,7 +6,9 @@
  * It also times validation and one circle on surveyed grounds of 2,000 and 20,000 vertices
  * (docs/engine.md §1: validation is near-linear, so ten times the vertices cost about ten times).
  */
-import { readFileSync } from "node:fs";
+import { build } from "esbuild";
+import { execFileSync } from "node:child_process";
+import { readFileSync, rmSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { analyzeCircle } from "../lib/stability/analyze-circle";
@@ -88,6 +90,36 @@ for (let rep = 0; rep < 5; rep++) {
 }
 const loopRate = loopCount / median(loopCpu);
 
+/**
+ * The same circle loop on the engine bundled as the app ships it (one ES module, as
+ * scripts/build-engine.mjs writes for the worker threads), in a fresh process: under tsx every
+ * module is compiled to CommonJS on its own and each call of an imported function reads a getter,
+ * and a second copy of the engine in one process runs slower than the first, so neither the
+ * figures above nor an in-process copy show what a worker thread does.
+ */
+async function bundledLoopRate(): Promise<number> {
+  const root = path.join(__dirname, "..");
+  const outfile = path.join(os.tmpdir(), `scarpline-bench-loop-${process.pid}.mjs`);
+  await build({
+    entryPoints: [path.join(root, "scripts", "bench-circle-loop.ts")],
+    outfile,
+    bundle: true,
+    platform: "node",
+    format: "esm",
+    target: "node20",
+    tsconfig: path.join(root, "tsconfig.json"),
+    logLevel: "warning",
+  });
+  try {
+    const out = execFileSync(process.execPath, [outfile, file], { encoding: "utf8" });
+    const m = /circles_per_cpu_second=(\d+)/.exec(out);
+    if (!m) throw new Error(`bundled circle loop printed no rate: ${out}`);
+    return Number(m[1]);
+  } finally {
+    rmSync(outfile, { force: true });
+  }
+}
+
 /** A 2H:1V slope over a weak layer whose ground is surveyed at n vertices with a few cm of relief. */
 function surveyedSection(n: number): SectionDocument {
   const ground: [number, number][] = [];
@@ -142,5 +174,8 @@ for (const { n, t, c } of surveyTimes)
       `one circle with validation ${(c * 1000).toFixed(0)} ms (CPU)`,
   );
 console.log(`Circle loop alone: ${Math.round(loopRate)} circles per CPU second`);
-console.log(`Whole search: ${Math.round(searchRate)} circles per second per core  (target ≥ 250000)`);
-console.log(`circles_per_second=${Math.round(searchRate)}`);
+void bundledLoopRate().then((bundled) => {
+  console.log(`Circle loop alone, engine bundled as the app runs it: ${Math.round(bundled)} circles per CPU second`);
+  console.log(`Whole search: ${Math.round(searchRate)} circles per second per core  (target ≥ 250000)`);
+  console.log(`circles_per_second=${Math.round(searchRate)}`);
+});

@@ -4,19 +4,27 @@
  * one-circle reports re-run the governing mass with the very same code, so a stored
  * critical circle re-checks to the same bits.
  */
-import { arcY, isDriven, massDirection } from "./circle-direction";
+import * as direction from "./circle-direction";
 import { evaluateStagedCircle } from "./drawdown/staged-circle";
-import { bishopFactor } from "./methods/bishop";
-import { findMasses } from "./intersect";
+import * as bishop from "./methods/bishop";
+import * as intersect from "./intersect";
 import type { PreparedSection } from "./prepare";
 import type { Scratch } from "./scratch";
-import { buildSlices } from "./slices";
+import * as slices from "./slices";
 import * as status from "./status";
 
-// Module-local copies: imported bindings are property reads on every use in the hot loop.
+// Module-local copies: imported bindings are property reads on every use in the hot loop (a getter
+// call for a function where modules are compiled to CommonJS, as under tsx). None of these modules
+// imports this one, so the copies are set when this module runs.
 const BAD_RADIUS = status.BAD_RADIUS;
 const NO_DRIVING = status.NO_DRIVING;
 const OK = status.OK;
+const arcY = direction.arcY;
+const isDriven = direction.isDriven;
+const massDirection = direction.massDirection;
+const bishopFactor = bishop.bishopFactor;
+const findMasses = intersect.findMasses;
+const buildSlices = slices.buildSlices;
 
 export { arcY };
 

@@ -5,9 +5,11 @@
 import type { PreparedSection } from "./prepare";
 import type { Scratch } from "./scratch";
 import * as status from "./status";
-import { findStrip } from "./strip-table";
+import * as strips from "./strip-table";
 
-// Module-local copies: imported bindings are property reads on every use in the hot loop.
+// Module-local copies: imported bindings are property reads on every use in the hot loop (a getter
+// call for a function where modules are compiled to CommonJS, as under tsx).
+const findStrip = strips.findStrip;
 const NO_MASS = status.NO_MASS;
 const OK = status.OK;
 const OUT_OF_SECTION = status.OUT_OF_SECTION;

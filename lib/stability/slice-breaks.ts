@@ -6,10 +6,12 @@
 import * as defaults from "./defaults";
 import type { PreparedSection } from "./prepare";
 import type { Scratch } from "./scratch";
-import { findStrip } from "./strip-table";
+import * as strips from "./strip-table";
 
-// Module-local copy: imported bindings are property reads on every use in the hot loop.
+// Module-local copies: imported bindings are property reads on every use in the hot loop (a getter
+// call for a function where modules are compiled to CommonJS, as under tsx).
 const MERGE_FRACTION = defaults.MERGE_FRACTION;
+const findStrip = strips.findStrip;
 
 /**
  * Streaming state of the break merge: [the last break seen, a vertex waiting on its right

@@ -10,14 +10,23 @@ import * as cases from "./load-cases";
 import type { PreparedSection } from "./prepare";
 import type { Scratch } from "./scratch";
 import * as status from "./status";
-import { addBishopRow, clearBishop } from "./methods/bishop";
-import { rawNormal } from "./methods/ordinary";
-import { collectBreaks } from "./slice-breaks";
-import { findStrip } from "./strip-table";
-import { addFaceThrust } from "./vertical-faces";
-import { fieldPressure } from "./water-field";
+import * as bishop from "./methods/bishop";
+import * as ordinary from "./methods/ordinary";
+import * as breaks from "./slice-breaks";
+import * as strips from "./strip-table";
+import * as faces from "./vertical-faces";
+import * as field from "./water-field";
 
-// Module-local copies: imported bindings are property reads on every use in the hot loop.
+// Module-local copies: imported bindings are property reads on every use in the hot loop, and where
+// modules are compiled to CommonJS (tsx, so npm run bench) each read of an imported function calls a
+// getter that the JIT does not inline. None of these modules imports this one, so the copies are set.
+const addBishopRow = bishop.addBishopRow;
+const clearBishop = bishop.clearBishop;
+const rawNormal = ordinary.rawNormal;
+const collectBreaks = breaks.collectBreaks;
+const findStrip = strips.findStrip;
+const addFaceThrust = faces.addFaceThrust;
+const fieldPressure = field.fieldPressure;
 const SLICE_CAPACITY = defaults.SLICE_CAPACITY;
 const KIND_RIGID = cases.KIND_RIGID;
 const KIND_UNDRAINED = cases.KIND_UNDRAINED;
@@ -76,6 +85,14 @@ export function buildSlices(
   const waterA = P.waterA;
   const waterB = P.waterB;
   const uField = P.uField;
+  const waterCos2 = P.waterCos2;
+  const surcharge = P.q;
+  const ru = P.ru;
+  const gammaOf = M.gamma;
+  const gammaSatOf = M.gammaSat;
+  const kindOf = M.kind;
+  const cOf = M.c;
+  const tanPhiOf = M.tanPhi;
   const nStrips = T.n;
   // The strip under each slice midpoint, advanced as the slices go right.
   let ks = findStrip(T, kept[0]);
@@ -150,7 +167,7 @@ export function buildSlices(
         const lowBot = last ? ym : bot;
         const h = top - lowBot;
         if (h > 0) {
-          const g = M.gamma[mi];
+          const g = gammaOf[mi];
           if (g < 0) {
             // The arc in impenetrable material governs; a block above the arc is carried as
             // weight, which it cannot be without γ (reported once the whole mass is sliced).
@@ -161,7 +178,7 @@ export function buildSlices(
           let hb = 0;
           if (yw > lowBot) hb = yw - lowBot < h ? yw - lowBot : h;
           const ha = h - hb;
-          const gs = M.gammaSat[mi];
+          const gs = gammaSatOf[mi];
           wsum += g * ha + gs * hb;
           gBase = hb > 0 ? gs : g;
           if (kh !== 0) wy += g * ha * (top - ha / 2) + gs * hb * (lowBot + hb / 2);
@@ -171,7 +188,7 @@ export function buildSlices(
           break;
         }
       }
-      const kind = M.kind[baseMat];
+      const kind = kindOf[baseMat];
       if (kind === KIND_RIGID) return RIGID;
       // The weight uses the exact area above the arc; the base angle is the midpoint's.
       const W = wsum * b + gBase * areaCorr;
@@ -183,8 +200,8 @@ export function buildSlices(
       // it as it enters W, so that u·b is the water's true vertical thrust on the base.
       let u = 0;
       if (uField !== null) u = fieldPressure(uField, xm, ym, (gw * areaCorr) / b);
-      else if (line) u = yw > ym ? gw * (yw - ym + areaCorr / b) * P.waterCos2[ks] : 0;
-      else if (ruMode) u = (P.ru * W) / b;
+      else if (line) u = yw > ym ? gw * (yw - ym + areaCorr / b) * waterCos2[ks] : 0;
+      else if (ruMode) u = (ru * W) / b;
       let Ww = 0;
       let Fw = 0;
       let dH = 0;
@@ -203,7 +220,7 @@ export function buildSlices(
           dH += Fw * (yc - yF);
         }
       }
-      const Q = P.q[ks] * b;
+      const Q = surcharge[ks] * b;
       const V = W + Ww + Q;
       let Hs = 0;
       if (kh !== 0 && wsum > 0) {
@@ -219,8 +236,8 @@ export function buildSlices(
         tp = 0;
         uEff = 0;
       } else {
-        c = M.c[baseMat];
-        tp = M.tanPhi[baseMat];
+        c = cOf[baseMat];
+        tp = tanPhiOf[baseMat];
       }
       const bb = arcLen * cosA;
       let Hn = Fw + Hs;

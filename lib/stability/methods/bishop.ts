@@ -182,22 +182,28 @@ function zeroStrength(S: Scratch): number {
 function finish(S: Scratch, F: number): number {
   const T = S.bishop;
   const inv = 1 / F;
+  const cs = T.cos;
+  const tt = T.t;
+  const idx = T.idx;
+  const pCos = T.pCos;
+  const cbSin = T.cbSin;
+  const n = T.n;
   let minMa = T.flatCos;
   let at = T.flatAt;
   let x = T.flatX;
   let sin = T.flatSin;
   let cos = T.flatCos;
   let neg = 0;
-  for (let k = 0; k < T.n; k++) {
-    const ma = T.cos[k] + T.t[k] * inv;
-    if (ma < minMa || (ma === minMa && T.idx[k] < at)) {
+  for (let k = 0; k < n; k++) {
+    const ma = cs[k] + tt[k] * inv;
+    if (ma < minMa || (ma === minMa && idx[k] < at)) {
       minMa = ma;
-      at = T.idx[k];
+      at = idx[k];
       x = T.x[k];
       sin = T.sin[k];
-      cos = T.cos[k];
+      cos = cs[k];
     }
-    if (T.pCos[k] - T.cbSin[k] * inv < 0) neg++;
+    if (pCos[k] - cbSin[k] * inv < 0) neg++;
   }
   S.minMa = minMa;
   S.minMaX = x;
