@@ -172,7 +172,8 @@ export const analysisSchema = z.object({
 });
 
 const documentShape = {
-  version: z.literal(1),
+  // The second edition only adds optional keys (docs/engine-io.md), so a document may say either.
+  version: z.union([z.literal(1), z.literal(2)], { error: "version must be 1 or 2" }),
   regions: z.array(regionSchema).min(1, "at least one region is needed"),
   water: waterSchema.optional(),
   loads: loadsSchema.optional(),
