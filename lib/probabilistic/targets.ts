@@ -1,9 +1,11 @@
 /**
  * Target reliability index and the words for a result against it. The levels of expected
- * performance against β are the table of the U.S. Army Corps of Engineers' engineering technical
- * letters on reliability (ETL 1110-2-547, 1995, reproduced in ETL 1110-2-556, 1999). The search
- * tool did not reach either document, so which of the two first holds the table, the level names
- * and the β values are from memory; each probability is computed here as Φ(−β), not copied.
+ * performance against β are the table of the U.S. Army Corps of Engineers (ETL 1110-2-547, 1997),
+ * as reproduced with its probabilities in Kar, "Probabilistic based reliability analysis of a finite
+ * soil slope" (presentation, Table 1, "U.S. Army Corps of Engineers, 1997"): β 1.0 hazardous (0.16),
+ * 1.5 unsatisfactory (0.07), 2.0 poor (0.023), 2.5 below average (0.006), 3.0 above average (0.001),
+ * 4.0 good (0.00003), 5.0 high (0.0000003). The ETL itself was not reached; each probability is
+ * computed here as Φ(−β) and checked against the table's rounded values.
  * The default target, β = 3 ("above average"), is the level often quoted for dams (common practice,
  * from memory); projects set their own with a reason, and local codes and the engineer of record govern.
  */
@@ -21,8 +23,8 @@ export const PERFORMANCE_LEVELS = [
 
 export const DEFAULT_TARGET_BETA = 3.0;
 export const TARGET_BASIS =
-  "Levels of expected performance against β after USACE ETL 1110-2-547 (1995) and ETL 1110-2-556 (1999) " +
-  "(table recalled from memory); the default target β = 3.0 is the 'above average' level.";
+  "Levels of expected performance against β after the U.S. Army Corps of Engineers (ETL 1110-2-547, 1997); " +
+  "the default target β = 3.0 is the 'above average' level.";
 
 /** The probability of unsatisfactory performance that a β stands for, Φ(−β). */
 export const pfOfBeta = (beta: number) => normalCdf(-beta);

@@ -3,9 +3,10 @@
  * Sources of the checks:
  * - Φ(−β) against the standard normal table: Φ(−2) = 0.02275, Φ(−3) = 0.00135, Φ(−4) = 3.17e-5
  *   (Abramowitz & Stegun, Handbook of Mathematical Functions, Table 26.1).
- * - The levels of expected performance against β: USACE ETL 1110-2-547 / 1110-2-556 (table from
- *   memory: hazardous 1.0, unsatisfactory 1.5, poor 2.0, below average 2.5, above average 3.0,
- *   good 4.0, high 5.0).
+ * - The levels of expected performance against β and their probabilities: U.S. Army Corps of Engineers
+ *   (ETL 1110-2-547, 1997) as reproduced in Kar, "Probabilistic based reliability analysis of a finite
+ *   soil slope", Table 1: hazardous 1.0 (0.16), unsatisfactory 1.5 (0.07), poor 2.0 (0.023), below
+ *   average 2.5 (0.006), above average 3.0 (0.001), good 4.0 (0.00003), high 5.0 (0.0000003).
  * - Bad input: φ′ with a normal spread so wide that most samples are negative is meaningless
  *   (φ′ < 0 is not a friction angle: a fact of the trade); the sample bounds are the engine's.
  */
@@ -35,6 +36,21 @@ describe("target reliability index", () => {
     expect(pfOfBeta(2)).toBeCloseTo(0.02275, 5);
     expect(pfOfBeta(3)).toBeCloseTo(0.00135, 5);
     expect(pfOfBeta(4)).toBeCloseTo(3.17e-5, 7);
+  });
+
+  it("gives the table's probabilities to the precision the table prints them", () => {
+    // U.S. Army Corps of Engineers (1997) as reproduced in Kar, Table 1 (see the header).
+    // [β, pf as printed, significant figures printed]
+    const table: [number, number, number][] = [
+      [1.0, 0.16, 2],
+      [1.5, 0.07, 1],
+      [2.0, 0.023, 2],
+      [2.5, 0.006, 1],
+      [3.0, 0.001, 1],
+      [4.0, 0.00003, 1],
+      [5.0, 0.0000003, 1],
+    ];
+    for (const [beta, pf, figures] of table) expect(Number(pfOfBeta(beta).toPrecision(figures))).toBeCloseTo(pf, 12);
   });
 
   it("judges the lower of the two forms of β against the target, in words", () => {
