@@ -1,19 +1,22 @@
 /**
  * The circle loop of scripts/bench.ts on its own (the bench section's 32,000 circles, both methods),
  * for scripts/bench.ts to bundle and run in a fresh process: the engine as the app ships it, one
- * ES module with direct calls (scripts/build-engine.mjs). Prints `circles_per_cpu_second=N`, the
- * median of 7 runs after two warm-up runs.
+ * ES module with direct calls (scripts/build-engine.mjs). Prints `circles_per_cpu_second=N` for the
+ * loop and `search_circles_per_cpu_second=N` for the whole search (validation, preparation, search,
+ * result assembly: runGridSearch), each the median of 7 runs after two warm-up runs.
  */
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { evaluateCircle } from "../lib/stability/evaluate-circle";
+import { runGridSearch } from "../lib/stability/grid-search";
 import { prepareSection } from "../lib/stability/prepare";
 import { createScratch } from "../lib/stability/scratch";
 import type { SectionDocument } from "../lib/stability/schema";
 import { validateSection } from "../lib/stability/validate";
 
 const file = process.argv[2] ?? path.join("tests", "fixtures", "sections", "three-material-embankment.json");
-const v = validateSection(JSON.parse(readFileSync(file, "utf8")) as SectionDocument);
+const doc = JSON.parse(readFileSync(file, "utf8")) as SectionDocument;
+const v = validateSection(doc);
 if (!v.ok) throw new Error("benchmark section is invalid");
 const P = prepareSection(v.section);
 const S = createScratch();
@@ -48,3 +51,21 @@ for (let rep = 0; rep < 7; rep++) {
 }
 rates.sort((a, b) => a - b);
 console.log(`circles_per_cpu_second=${Math.round(rates[3])}`);
+
+/** CPU seconds of one whole search, and how many circles it tried. */
+function search(): { cpu: number; tried: number } {
+  const c0 = process.cpuUsage();
+  const r = runGridSearch(doc);
+  const c = process.cpuUsage(c0);
+  if (!r.ok) throw new Error("benchmark section is invalid");
+  return { cpu: (c.user + c.system) / 1e6, tried: r.circles.tried };
+}
+search();
+search();
+const searchRates: number[] = [];
+for (let rep = 0; rep < 7; rep++) {
+  const { cpu, tried } = search();
+  searchRates.push(tried / cpu);
+}
+searchRates.sort((a, b) => a - b);
+console.log(`search_circles_per_cpu_second=${Math.round(searchRates[3])}`);
