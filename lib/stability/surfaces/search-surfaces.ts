@@ -37,10 +37,12 @@ export function runSurfaceSearch(doc: unknown, opts: SurfaceSearchOptions = {}):
     if (opts.onProgress && opts.onProgress({ fraction, bestFs }) === false) stop = true;
     return !stop;
   };
-  const grid = runGridSearch(doc, { onProgress: (f) => report(0.3 * f, null), waterField: opts.waterField });
-  if (!grid.ok || grid.cancelled) return grid;
   const v = validateSection(doc);
   if (!v.ok) return v;
+  // The circles take the first 30 % of the bar only when surfaces follow them; otherwise all of it.
+  const share = v.section.analysis?.search === "surfaces" ? 0.3 : 1;
+  const grid = runGridSearch(doc, { onProgress: (f) => report(share * f, null), waterField: opts.waterField });
+  if (!grid.ok || grid.cancelled) return grid;
   const P = prepareSection(v.section, undefined, opts.waterField);
   if (P.analysis.search !== "surfaces") return grid;
   const methods = P.analysis.rigorous;

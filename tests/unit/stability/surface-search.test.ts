@@ -87,6 +87,18 @@ describe("surfaces search on a slope over a thin weak layer", () => {
     expect(r.warnings.some((w) => w.code === "search-cancelled")).toBe(true);
   }, 120_000);
 
+  test("a circles search through the same entry fills the whole progress bar with its grid", () => {
+    // The 0.3 share of the grid is reserved for the surfaces that follow it; with none, the grid is all.
+    const doc = weakLayer();
+    doc.analysis = { ...doc.analysis, search: "circles" };
+    const seen: number[] = [];
+    const r = runSurfaceSearch(doc, { onProgress: (p) => void seen.push(p.fraction) });
+    expect(r.ok).toBe(true);
+    expect(seen.filter((f) => f < 1).some((f) => f > 0.5)).toBe(true);
+    for (let i = 1; i < seen.length; i++) expect(seen[i]).toBeGreaterThanOrEqual(seen[i - 1]);
+    expect(seen[seen.length - 1]).toBe(1);
+  }, 120_000);
+
   test("without a rigorous method the circles stand, with a warning", () => {
     const doc = weakLayer();
     doc.analysis = { ...doc.analysis, methods: ["bishop"] };
