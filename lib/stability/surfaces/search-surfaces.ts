@@ -119,8 +119,11 @@ function startSurfaces(P: PreparedSection, crit: CircleFs, lowest: CircleFs[]): 
     const [xa, xb] = span(c);
     out.push(circlePolyline(P, c.circle, xa, xb));
   }
-  // Deeper circles about the same centre, following the top of impenetrable material where they meet it.
+  // The critical circle and deeper ones about the same centre, following the top of impenetrable
+  // material or of a much stronger layer where they meet it (the critical one only if it does).
   const [xa, xb] = span(crit);
+  const composite = circlePolyline(P, crit.circle, xa, xb, true);
+  if (composite.some((p, i) => p[1] !== out[0][i][1])) out.push(composite);
   for (const k of [1.1, 1.25]) {
     const c = { ...crit.circle, r: crit.circle.r * k };
     const h = Math.sqrt(Math.max(0, c.r * c.r - (crit.circle.yc - groundAt(P.ground, xa)) ** 2));

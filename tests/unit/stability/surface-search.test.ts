@@ -13,7 +13,8 @@ import type { GridSearchSuccess, SectionDocument } from "@/lib/stability";
 import { checkSurface } from "@/lib/stability/surfaces/check-surface";
 import { nelderMead } from "@/lib/stability/surfaces/nelder-mead";
 import { runSurfaceSearch } from "@/lib/stability/surfaces/search-surfaces";
-import { circlePolyline, rigidTop } from "@/lib/stability/surfaces/start-surfaces";
+import { analyzeSurface } from "@/lib/stability/surfaces/analyze-surface";
+import { circlePolyline, rigidTop, STRONGER_RATIO, strongTop } from "@/lib/stability/surfaces/start-surfaces";
 import { validateSection } from "@/lib/stability/validate";
 import { clone, loadFixture, search } from "./helpers";
 
@@ -156,5 +157,101 @@ describe("composite starts: a circle that meets impenetrable material follows it
     }
     expect(lifted).toBeGreaterThan(0);
     expect(checkSurface(P, pts).ok).toBe(true);
+  });
+});
+
+describe("composite starts: a circle that meets a much stronger layer follows its top", () => {
+  /** Invented: a soft clay slope (su 20 kPa) on a stiff clay (su `stiff` kPa) whose top is at y = 4. */
+  function stiffBase(stiff: number): SectionDocument {
+    return {
+      version: 1,
+      materials: [
+        { id: "soft", model: "undrained", gamma: 17, su: 20 },
+        { id: "stiff", model: "undrained", gamma: 20, su: stiff },
+      ],
+      regions: [
+        {
+          material: "soft",
+          points: [
+            [0, 16],
+            [20, 16],
+            [40, 6],
+            [80, 6],
+            [80, 4],
+            [0, 4],
+          ],
+        },
+        {
+          material: "stiff",
+          points: [
+            [0, 4],
+            [80, 4],
+            [80, 0],
+            [0, 0],
+          ],
+        },
+      ],
+      analysis: { methods: ["spencer", "morgenstern-price"], slices: 40 },
+    };
+  }
+  const prepared = (doc: SectionDocument) => {
+    const v = validateSection(doc);
+    if (!v.ok) throw new Error("invalid");
+    return prepareSection(v.section);
+  };
+  // Centre (32, 24), R 22: the arc reaches y = 2, 2 m into the stiff clay, between x = 32 ± √84.
+  const xc = 32;
+  const yc = 24;
+  const R = 22;
+  const arc = (x: number) => yc - Math.sqrt(R * R - (x - xc) ** 2);
+  const g = (x: number) => (x <= 20 ? 16 : x <= 40 ? 16 - (x - 20) / 2 : 6);
+  const bis = (a: number, b: number) => {
+    for (let i = 0; i < 200; i++) {
+      const m = (a + b) / 2;
+      if ((g(a) - arc(a)) * (g(m) - arc(m)) <= 0) b = m;
+      else a = m;
+    }
+    return (a + b) / 2;
+  };
+  const xa = bis(xc - R + 1e-9, xc);
+  const xb = bis(xc, xc + R - 1e-9);
+
+  test("su 150 under su 20 (7.5 times, at least STRONGER_RATIO): the surface follows the top, lower F", () => {
+    const doc = stiffBase(150);
+    const P = prepared(doc);
+    expect(STRONGER_RATIO).toBeLessThanOrEqual(150 / 20);
+    expect(strongTop(P, 30)).toBeCloseTo(4, 9);
+    const composite = circlePolyline(P, { xc, yc, r: R }, xa, xb, true);
+    const dipping = circlePolyline(P, { xc, yc, r: R }, xa, xb);
+    let lifted = 0;
+    for (const [x, y] of composite.slice(1, -1)) {
+      if (arc(x) < 4) {
+        expect(y).toBeCloseTo(4.001, 9);
+        lifted++;
+      } else expect(y).toBeCloseTo(arc(x), 9);
+    }
+    expect(lifted).toBeGreaterThan(0);
+    expect(checkSurface(P, composite).ok).toBe(true);
+    // Hand reasoning (φ = 0, so the resistance is Σ su·l): the arc runs about 2·22·asin(√84/22) ≈ 18.9 m
+    // in the stiff clay, resisting ≈ 150 × 18.9 ≈ 2,800 kN/m; the composite surface replaces it by the
+    // ≈ 18.3 m chord on the stiff clay's top in soft clay, ≈ 20 × 18.3 ≈ 370 kN/m. The sliver it leaves
+    // behind (≈ ⅔ × 18.3 × 2 ≈ 24 m², ≈ 490 kN/m) lies under the centre, where α ≈ 0 and it drives little.
+    // So the composite surface's factor is well below the dipping circle's.
+    const a = analyzeSurface(doc, composite);
+    const b = analyzeSurface(doc, dipping);
+    if (!a.ok || !b.ok) throw new Error("invalid");
+    for (const m of ["spencer", "morgenstern-price"] as const) {
+      expect(a.fs[m]).not.toBeNull();
+      expect(b.fs[m]).not.toBeNull();
+      expect(a.fs[m] ?? Infinity).toBeLessThan(0.8 * (b.fs[m] ?? 0));
+    }
+  });
+
+  test("su 40 under su 20 (twice, below STRONGER_RATIO) is no bound: the circle stays a circle", () => {
+    const P = prepared(stiffBase(40));
+    expect(40 / 20).toBeLessThan(STRONGER_RATIO);
+    expect(strongTop(P, 30)).toBe(-Infinity);
+    const composite = circlePolyline(P, { xc, yc, r: R }, xa, xb, true);
+    for (const [x, y] of composite.slice(1, -1)) expect(y).toBeCloseTo(arc(x), 9);
   });
 });
