@@ -29,6 +29,8 @@ export interface SurfaceSearchOptions extends WaterFieldOptions {
 /** Evaluations of the factor per start, and in the final polish of the best. */
 const START_BUDGET = 1200;
 const POLISH_BUDGET = 2000;
+/** Largest interslice tension a searched surface may carry, as a share of the mass's vertical load. */
+const TENSION_SHARE = 0.1;
 
 /** A grid search of circles, then (analysis.search "surfaces") the search of surfaces of any shape. */
 export function runSurfaceSearch(doc: unknown, opts: SurfaceSearchOptions = {}): GridSearchResult {
@@ -91,6 +93,19 @@ export function runSurfaceSearch(doc: unknown, opts: SurfaceSearchOptions = {}):
     });
   report(1, null);
   return { ...grid, cancelled: grid.cancelled || stop };
+}
+
+/**
+ * Whether the solution pulls the slices apart with more than a tenth of the mass's whole vertical load
+ * somewhere (docs/engine.md §12 "Search"): soil carries no such tension, and such a root of the
+ * equations (a strongly negative λ) can sit far below the physical one.
+ */
+function tensile(E: SurfaceEvaluator): boolean {
+  const G = E.G;
+  let load = 0;
+  for (let i = 0; i < G.n; i++) load += G.V[i];
+  for (let i = 0; i <= G.n; i++) if (G.E[i] < -TENSION_SHARE * load) return true;
+  return false;
 }
 
 function surfaceResult(crit: CircleFs, best: { fs: number; pts: XY[]; lambda: number; dir: number }): CircleFs {
@@ -182,7 +197,7 @@ function improve(
     // The same start for every surface (not the best so far), so that where the equations have more
     // than one root the search does not wander onto another; a solution with mα < 0.2 is not accepted.
     const fs = evaluateSurface(P, E, ok.px, ok.py, method, halfSine);
-    if (!(fs > 0) || E.G.minMa < M_ALPHA_WARN) return Infinity;
+    if (!(fs > 0) || E.G.minMa < M_ALPHA_WARN || tensile(E)) return Infinity;
     if (fs < best) {
       best = fs;
       bestPts = Array.from(ok.px, (x, i) => [x, ok.py[i]] as XY);
