@@ -1,8 +1,8 @@
 /**
  * Starting surfaces of the surfaces search (docs/engine.md §12 "Search"): the critical and lowest
  * circles as polylines; the same circles deepened and made composite where they meet impenetrable
- * material or a much stronger layer (they follow its top); and wedge-shaped surfaces that run along the weakest layers under
- * the slip mass. Every start is checked for admissibility by the search itself.
+ * material or a much stronger layer (they follow its top); and wedge-shaped surfaces that run along
+ * the weakest layers under the slip mass. Every start is checked for admissibility by the search itself.
  */
 import { arcY } from "../circle-direction";
 import { groundAt } from "../ground";

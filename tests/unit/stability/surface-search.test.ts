@@ -235,7 +235,7 @@ describe("composite starts: a circle that meets a much stronger layer follows it
     // Hand reasoning (φ = 0, so the resistance is Σ su·l): the arc runs about 2·22·asin(√84/22) ≈ 18.9 m
     // in the stiff clay, resisting ≈ 150 × 18.9 ≈ 2,800 kN/m; the composite surface replaces it by the
     // ≈ 18.3 m chord on the stiff clay's top in soft clay, ≈ 20 × 18.3 ≈ 370 kN/m. The sliver it leaves
-    // behind (≈ ⅔ × 18.3 × 2 ≈ 24 m², ≈ 490 kN/m) lies under the centre, where α ≈ 0 and it drives little.
+    // behind (≈ ⅔ × 18.3 × 2 ≈ 24 m², ≈ 490 kN/m) lies under the centre, where α ≈ 0: it drives little.
     // So the composite surface's factor is well below the dipping circle's.
     const a = analyzeSurface(doc, composite);
     const b = analyzeSurface(doc, dipping);
