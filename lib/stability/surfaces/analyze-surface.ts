@@ -19,7 +19,19 @@ import type {
   XY,
 } from "../rigorous-types";
 import type { AnalysisMethod } from "../schema";
-import { M_ALPHA, NOT_CONVERGED, OK, REASONS, REASON_TEXT, RIGID, RIGID_NO_WEIGHT, rigidNoWeightText } from "../status";
+import {
+  M_ALPHA,
+  NO_MASS,
+  NOT_CONVERGED,
+  OK,
+  OUT_OF_SECTION,
+  REASONS,
+  REASON_TEXT,
+  RIGID,
+  RIGID_NO_WEIGHT,
+  TOO_MANY_BREAKS,
+  rigidNoWeightText,
+} from "../status";
 import { validateSection } from "../validate";
 import { ENGINE_VERSION } from "../version";
 import { checkSurface } from "./check-surface";
@@ -34,13 +46,21 @@ export const CIRCULAR_ONLY: MethodReason = {
   reasonText: "This method assumes a circular slip surface (moment equilibrium about its centre).",
 };
 
+/** Texts of the slicing statuses whose circle wording does not fit a surface of any shape. */
+const SURFACE_TEXT: Readonly<Record<number, string>> = {
+  [NO_MASS]: "The slip surface does not cut the ground: there is no slip mass.",
+  [OUT_OF_SECTION]:
+    "The slip mass reaches a side of the section, or the slip surface leaves the bottom of the regions.",
+  [RIGID]: "The slip surface enters impenetrable material.",
+  [TOO_MANY_BREAKS]: "The section is too detailed under this slip surface (too many slice breaks).",
+};
+
 /** The reason name and text of a slicing status. */
 export function sliceReason(P: PreparedSection, st: number, E: SurfaceEvaluator): MethodReason {
   if (st === ABOVE_GROUND)
     return { reason: "above-ground", reasonText: "The slip surface passes above the ground between its ends." };
   if (st === RIGID_NO_WEIGHT) return { reason: REASONS[st], reasonText: rigidNoWeightText(P.mat.ids[E.B.rigidMat]) };
-  const text = st === RIGID ? "The slip surface enters impenetrable material." : REASON_TEXT[st];
-  return { reason: REASONS[st] ?? "invalid", reasonText: text.replace("The circle", "The slip surface") };
+  return { reason: REASONS[st] ?? "invalid", reasonText: SURFACE_TEXT[st] ?? REASON_TEXT[st] };
 }
 
 /** Analyses the slip surface `points` ([x, y] in m, from one ground point to another) of a section document. */

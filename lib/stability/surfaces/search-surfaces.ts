@@ -29,6 +29,8 @@ export interface SurfaceSearchOptions extends WaterFieldOptions {
 /** Evaluations of the factor per start, and in the final polish of the best. */
 const START_BUDGET = 1200;
 const POLISH_BUDGET = 2000;
+/** Largest interslice tension a searched surface may carry, as a share of the mass's vertical load. */
+const TENSION_SHARE = 0.1;
 
 /** A grid search of circles, then (analysis.search "surfaces") the search of surfaces of any shape. */
 export function runSurfaceSearch(doc: unknown, opts: SurfaceSearchOptions = {}): GridSearchResult {
@@ -37,10 +39,12 @@ export function runSurfaceSearch(doc: unknown, opts: SurfaceSearchOptions = {}):
     if (opts.onProgress && opts.onProgress({ fraction, bestFs }) === false) stop = true;
     return !stop;
   };
-  const grid = runGridSearch(doc, { onProgress: (f) => report(0.3 * f, null), waterField: opts.waterField });
-  if (!grid.ok || grid.cancelled) return grid;
   const v = validateSection(doc);
   if (!v.ok) return v;
+  // The circles take the first 30 % of the bar only when surfaces follow them; otherwise all of it.
+  const share = v.section.analysis?.search === "surfaces" ? 0.3 : 1;
+  const grid = runGridSearch(doc, { onProgress: (f) => report(share * f, null), waterField: opts.waterField });
+  if (!grid.ok || grid.cancelled) return grid;
   const P = prepareSection(v.section, undefined, opts.waterField);
   if (P.analysis.search !== "surfaces") return grid;
   const methods = P.analysis.rigorous;
@@ -91,6 +95,19 @@ export function runSurfaceSearch(doc: unknown, opts: SurfaceSearchOptions = {}):
   return { ...grid, cancelled: grid.cancelled || stop };
 }
 
+/**
+ * Whether the solution pulls the slices apart with more than a tenth of the mass's whole vertical load
+ * somewhere (docs/engine.md §12 "Search"): soil carries no such tension, and such a root of the
+ * equations (a strongly negative λ) can sit far below the physical one.
+ */
+function tensile(E: SurfaceEvaluator): boolean {
+  const G = E.G;
+  let load = 0;
+  for (let i = 0; i < G.n; i++) load += G.V[i];
+  for (let i = 0; i <= G.n; i++) if (G.E[i] < -TENSION_SHARE * load) return true;
+  return false;
+}
+
 function surfaceResult(crit: CircleFs, best: { fs: number; pts: XY[]; lambda: number; dir: number }): CircleFs {
   const a = best.pts[0];
   const b = best.pts[best.pts.length - 1];
@@ -117,8 +134,11 @@ function startSurfaces(P: PreparedSection, crit: CircleFs, lowest: CircleFs[]): 
     const [xa, xb] = span(c);
     out.push(circlePolyline(P, c.circle, xa, xb));
   }
-  // Deeper circles about the same centre, following the top of impenetrable material where they meet it.
+  // The critical circle and deeper ones about the same centre, following the top of impenetrable
+  // material or of a much stronger layer where they meet it (the critical one only if it does).
   const [xa, xb] = span(crit);
+  const composite = circlePolyline(P, crit.circle, xa, xb, true);
+  if (composite.some((p, i) => p[1] !== out[0][i][1])) out.push(composite);
   for (const k of [1.1, 1.25]) {
     const c = { ...crit.circle, r: crit.circle.r * k };
     const h = Math.sqrt(Math.max(0, c.r * c.r - (crit.circle.yc - groundAt(P.ground, xa)) ** 2));
@@ -177,7 +197,7 @@ function improve(
     // The same start for every surface (not the best so far), so that where the equations have more
     // than one root the search does not wander onto another; a solution with mα < 0.2 is not accepted.
     const fs = evaluateSurface(P, E, ok.px, ok.py, method, halfSine);
-    if (!(fs > 0) || E.G.minMa < M_ALPHA_WARN) return Infinity;
+    if (!(fs > 0) || E.G.minMa < M_ALPHA_WARN || tensile(E)) return Infinity;
     if (fs < best) {
       best = fs;
       bestPts = Array.from(ok.px, (x, i) => [x, ok.py[i]] as XY);

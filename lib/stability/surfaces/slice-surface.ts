@@ -4,7 +4,8 @@
  * same strips, layers, water surface, surcharges and seismic coefficient the circles use. Slices
  * break at the surface's vertices, at every strip boundary (ground and region vertices, water and
  * load breaks) and where the surface crosses a material boundary or the water surface, then are
- * split to the nominal width (mass width / analysis.slices). Inside one slice the ground, the base
+ * split to the nominal width (mass width / analysis.slices). Ponded water pushes on the vertical steps
+ * of the ground as it does for circles (vertical-faces.ts). Inside one slice the ground, the base
  * and each layer line are straight, so the midpoint column times the width is the exact area.
  */
 import { SLICE_CAPACITY } from "../defaults";
@@ -13,6 +14,9 @@ import { KIND_RIGID, KIND_UNDRAINED } from "../load-cases";
 import type { PreparedSection } from "../prepare";
 import { findStrip } from "../strip-table";
 import { OK, OUT_OF_SECTION, RIGID, RIGID_NO_WEIGHT, TOO_MANY_BREAKS } from "../status";
+import { borderingFace, faceThrust, type FaceThrust } from "../vertical-faces";
+
+const FACE: FaceThrust = { F: 0, y: 0 };
 
 /** Surface status codes beyond status.ts: the surface comes out above the ground between its ends. */
 export const ABOVE_GROUND = 101;
@@ -171,7 +175,7 @@ export function sliceSurface(
       seg = segmentAt(px, xm, seg);
       const slope = (py[seg + 1] - py[seg]) / (px[seg + 1] - px[seg]);
       const ym = py[seg] + slope * (xm - px[seg]);
-      const st = column(P, B, n, xl, xr, xm, ym, dir);
+      const st = column(P, B, n, xl, xr, xm, ym, slope, dir);
       if (st !== OK) {
         B.atX = xm;
         B.atY = ym;
@@ -198,6 +202,7 @@ function column(
   xr: number,
   xm: number,
   ym: number,
+  slope: number,
   dir: number,
 ): number {
   const T = P.table;
@@ -265,6 +270,13 @@ function column(
       Ww = (P.gammaW * b * (dl + dr)) / 2;
       Fw = (dir * P.gammaW * (dl + dr) * (ygR - ygL)) / 2;
       yF = ygL + ((ygR - ygL) * (dl + 2 * dr)) / (3 * (dl + dr));
+    }
+    // Water against a vertical step of the ground on the slice's soil side, above the surface there.
+    const kf = P.hasFaces ? borderingFace(P, ks, xl, xr) : -1;
+    if (kf >= 0 && faceThrust(P, kf, ym + slope * (T.xs[kf] - xm), dir, FACE)) {
+      const moment = Fw * yF + FACE.F * FACE.y;
+      Fw += FACE.F;
+      yF = Fw !== 0 ? moment / Fw : FACE.y;
     }
   }
   let c: number;

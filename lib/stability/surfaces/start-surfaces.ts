@@ -1,12 +1,12 @@
 /**
  * Starting surfaces of the surfaces search (docs/engine.md §12 "Search"): the critical and lowest
  * circles as polylines; the same circles deepened and made composite where they meet impenetrable
- * material (they follow its top); and wedge-shaped surfaces that run along the weakest layers under
- * the slip mass. Every start is checked for admissibility by the search itself.
+ * material or a much stronger layer (they follow its top); and wedge-shaped surfaces that run along
+ * the weakest layers under the slip mass. Every start is checked for admissibility by the search itself.
  */
 import { arcY } from "../circle-direction";
 import { groundAt } from "../ground";
-import { KIND_RIGID } from "../load-cases";
+import { KIND_RIGID, KIND_UNDRAINED } from "../load-cases";
 import type { PreparedSection } from "../prepare";
 import type { Circle } from "../results";
 import type { XY } from "../rigorous-types";
@@ -21,7 +21,7 @@ export function circlePolyline(P: PreparedSection, c: Circle, xa: number, xb: nu
   for (let i = 1; i <= CIRCLE_VERTICES; i++) {
     const x = xa + ((xb - xa) * i) / (CIRCLE_VERTICES + 1);
     let y = arcY(c.xc, c.yc, c.r, x);
-    if (lift) y = Math.max(y, rigidTop(P, x) + 1e-3);
+    if (lift) y = Math.max(y, strongTop(P, x) + 1e-3);
     pts.push([x, Math.min(y, groundAt(P.ground, x) - 1e-3)]);
   }
   pts.push([xb, groundAt(P.ground, xb)]);
@@ -34,6 +34,46 @@ export function rigidTop(P: PreparedSection, x: number): number {
   const k = findStrip(T, x);
   for (let i = T.lineOff[k]; i < T.lineOff[k + 1] - 1; i++)
     if (P.mat.kind[T.layerMat[i]] === KIND_RIGID) return T.lineA[i] + T.lineB[i] * x;
+  return -Infinity;
+}
+
+/**
+ * A layer is "much stronger" than the soil on it when its shear strength at the vertical effective
+ * stress of its top is at least this many times the soil's at the same stress (docs/engine.md §12
+ * "Composite surfaces"): a starting-surface rule only, the optimiser may still move vertices into it.
+ */
+export const STRONGER_RATIO = 3;
+
+/** Shear strength (kPa) of material m at elevation y under vertical effective stress s (kPa). */
+function strengthAt(P: PreparedSection, m: number, y: number, s: number): number {
+  const M = P.mat;
+  if (M.kind[m] === KIND_UNDRAINED) return M.su[m] + M.suGradient[m] * Math.max(0, M.suDatum[m] - y);
+  return M.c[m] + Math.max(0, s) * M.tanPhi[m];
+}
+
+/**
+ * The highest top at x (m) of impenetrable material or of a layer much stronger than the soil on it
+ * (STRONGER_RATIO), or −Infinity where there is none: a composite surface does not cut below it.
+ */
+export function strongTop(P: PreparedSection, x: number): number {
+  const T = P.table;
+  const M = P.mat;
+  const k = findStrip(T, x);
+  const yw = P.waterKind === 1 ? P.waterA[k] + P.waterB[k] * x : -Infinity;
+  let sv = 0;
+  for (let i = T.lineOff[k]; i < T.lineOff[k + 1] - 1; i++) {
+    const top = T.lineA[i] + T.lineB[i] * x;
+    const mi = T.layerMat[i];
+    if (M.kind[mi] === KIND_RIGID) return top;
+    if (i > T.lineOff[k]) {
+      const s = sv - (yw > top ? P.gammaW * (yw - top) : 0);
+      const above = strengthAt(P, T.layerMat[i - 1], top, s);
+      if (above > 0 && strengthAt(P, mi, top, s) >= STRONGER_RATIO * above) return top;
+    }
+    const bot = T.lineA[i + 1] + T.lineB[i + 1] * x;
+    const wet = Math.max(0, Math.min(top, yw) - bot);
+    sv += M.gamma[mi] * (top - bot - wet) + M.gammaSat[mi] * wet;
+  }
   return -Infinity;
 }
 

@@ -331,6 +331,8 @@ describe("a surface that cannot slide is refused with a reason, a sentence and n
     const r = surface(make(), pts);
     expect(r.reason).toBe(reason);
     expect(r.reasonText?.length ?? 0).toBeGreaterThan(20);
+    // A polyline is no arc and no circle: the refusal speaks of the slip surface.
+    expect(r.reasonText).not.toMatch(/\b(arc|circle)\b/);
     for (const m of RIGOROUS) expect(r.fs[m]).toBeNull();
     expect(r.slices).toEqual([]);
   });
