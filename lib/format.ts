@@ -71,3 +71,9 @@ export function withUnit(value: string | number, unit: string | undefined): stri
 export function countOf(n: number, one: string, many = `${one}s`): string {
   return `${formatCount(n)} ${n === 1 ? one : many}`;
 }
+
+/** A probability as the reports write it: 0.31 % down to 0.1 %, then 6.2 × 10⁻⁴ (`digits` decimals). */
+export function formatProbability(p: number | null | undefined, digits = 2): string {
+  if (p === null || p === undefined || !Number.isFinite(p)) return "—";
+  return p >= 0.001 || p === 0 ? `${(p * 100).toFixed(2)} %` : formatScientific(p, digits);
+}

@@ -35,13 +35,20 @@ export function loadCaseWords(code: string): string {
 }
 
 /** Names of the limit-equilibrium methods as the result views and the report print them. */
-export const METHOD_NAME: Record<"bishop" | "fellenius", string> = {
+export const METHOD_NAME: Record<"bishop" | "fellenius" | "spencer" | "morgenstern-price", string> = {
   bishop: "Bishop's simplified method",
   fellenius: "Ordinary method of slices",
+  spencer: "Spencer's method",
+  "morgenstern-price": "Morgenstern–Price",
 };
 
 /** Short names, for labels on a drawing and table headers. */
-export const METHOD_SHORT: Record<"bishop" | "fellenius", string> = { bishop: "Bishop", fellenius: "Ordinary" };
+export const METHOD_SHORT: Record<"bishop" | "fellenius" | "spencer" | "morgenstern-price", string> = {
+  bishop: "Bishop",
+  fellenius: "Ordinary",
+  spencer: "Spencer",
+  "morgenstern-price": "Morgenstern–Price",
+};
 
 export function methodName(code: string): string {
   return (METHOD_NAME as Record<string, string>)[code] ?? code;

@@ -3,6 +3,7 @@
 import { useState } from "react";
 import type { ReliabilityTarget } from "@/lib/probabilistic/types";
 import { PERFORMANCE_LEVELS, pfOfBeta } from "@/lib/probabilistic/targets";
+import { formatScientific } from "@/lib/format";
 import { fetchJson } from "@/lib/client/fetch-json";
 import { FieldError, FormBanner } from "@/components/ui/form-message";
 import { useApiForm } from "@/components/ui/use-api-form";
@@ -51,7 +52,7 @@ export function ReliabilityTargetForm({
           {PERFORMANCE_LEVELS.map((l) => (
             <tr key={l.beta}>
               <td className="pr-4 tabular-nums">{l.beta.toFixed(1)}</td>
-              <td className="pr-4 tabular-nums">{pfOfBeta(l.beta).toExponential(1)}</td>
+              <td className="pr-4 tabular-nums">{formatScientific(pfOfBeta(l.beta), 1)}</td>
               <td>{l.level}</td>
             </tr>
           ))}

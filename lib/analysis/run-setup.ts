@@ -42,7 +42,8 @@ export const runSetupSchema = z
       .array(analysisMethodSchema)
       .min(1, "Choose at least one method.")
       .refine(
-        (ms) => ms.includes("bishop") || ms.includes("fellenius"),
+        // An empty list already has its own message above.
+        (ms) => ms.length === 0 || ms.includes("bishop") || ms.includes("fellenius"),
         "Keep Bishop's simplified or the ordinary method: the circle search runs on them.",
       ),
     /** Circles on the grid (absent), or then surfaces of any shape for the rigorous methods. */

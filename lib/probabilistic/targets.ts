@@ -9,6 +9,7 @@
  * The default target, β = 3 ("above average"), is the level often quoted for dams (common practice,
  * from memory); projects set their own with a reason, and local codes and the engineer of record govern.
  */
+import { formatProbability } from "@/lib/format";
 import { normalCdf } from "@/lib/stability";
 
 export const PERFORMANCE_LEVELS = [
@@ -60,7 +61,7 @@ export interface Verdict {
   sentence: string;
 }
 
-const pct = (p: number) => (p >= 0.001 ? `${(p * 100).toFixed(2)} %` : p.toExponential(1));
+const pct = (p: number) => formatProbability(p, 1);
 
 /**
  * pf and β against the project's target, in words. The lower of the two forms of β is judged, so

@@ -3,6 +3,8 @@
  * sampling used, mean and sd of FS, pf and β per method with the Taylor-series estimate beside
  * them, the spreads sampled, and pf and β against the project's target in words.
  */
+import { formatProbability } from "@/lib/format";
+import { METHOD_NAME } from "@/lib/vocabulary";
 import type { ReliabilityTarget, StoredProbabilistic } from "@/lib/probabilistic/types";
 import { reliabilityVerdict } from "@/lib/probabilistic/targets";
 import type { ReportWriter } from "./report-writer";
@@ -13,10 +15,9 @@ export interface ReportProbabilistic {
   target: ReliabilityTarget;
 }
 
-const METHOD: Record<string, string> = { bishop: "Bishop's simplified", fellenius: "Ordinary method" };
+const METHOD: Record<string, string> = METHOD_NAME;
 const n = (v: number | null | undefined, d: number) => (v === null || v === undefined ? "—" : v.toFixed(d));
-const pf = (v: number | null | undefined) =>
-  v === null || v === undefined ? "—" : v >= 0.001 || v === 0 ? `${(v * 100).toFixed(2)} %` : v.toExponential(2);
+const pf = (v: number | null | undefined) => formatProbability(v);
 
 export function writeProbabilistic(w: ReportWriter, { stored, target }: ReportProbabilistic): void {
   const o = stored.outcome;

@@ -243,7 +243,9 @@ async function start(withServer: boolean, state: State): Promise<Stack> {
     ...s3Env(state.s3),
     ...smtpEnv(state.smtp),
   };
-  for (let i = 0; i < 2; i++) state.workers.push((await startWorkerProcess(appEnv)).process);
+  // Two integration tests (jobs-queue, probabilistic-jobs) each SIGKILL one stack worker mid-job and stop
+  // their own replacement when done; four leave at least two for the tests that run after them.
+  for (let i = 0; i < 4; i++) state.workers.push((await startWorkerProcess(appEnv)).process);
   state.server = await startAppServer(appEnv, port);
   return { dbName: state.dbName, appUrl, appEnv, workerPids: state.workers.map((w) => w.pid!) };
 }

@@ -1,5 +1,6 @@
 "use client";
 
+import { formatProbability } from "@/lib/format";
 import type { MethodProbabilistic } from "@/lib/stability";
 import type { ReliabilityTarget, StoredProbabilistic } from "@/lib/probabilistic/types";
 import { reliabilityVerdict } from "@/lib/probabilistic/targets";
@@ -9,8 +10,7 @@ import { ScatterStudyCharts } from "@/components/runs/kept/scatter-study-charts"
 const METHOD_LABEL: Record<string, string> = { bishop: "Bishop's simplified", fellenius: "Ordinary method" };
 const n3 = (v: number | null | undefined) => (v === null || v === undefined ? "—" : v.toFixed(3));
 const n2 = (v: number | null | undefined) => (v === null || v === undefined ? "—" : v.toFixed(2));
-const pfText = (v: number | null | undefined) =>
-  v === null || v === undefined ? "—" : v >= 0.001 || v === 0 ? `${(v * 100).toFixed(2)} %` : v.toExponential(2);
+const pfText = (v: number | null | undefined) => formatProbability(v);
 
 function MethodRows({ method, s, fs }: { method: string; s: MethodProbabilistic; fs: number | null | undefined }) {
   const f = s.fosm;

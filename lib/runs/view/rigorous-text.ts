@@ -12,16 +12,12 @@ import type {
   SurfaceSuccess,
   XY,
 } from "@/lib/stability";
+import { METHOD_NAME } from "@/lib/vocabulary";
 import type { RigorousRunPart, SurfaceRefused } from "@/lib/runs/record/rigorous-part";
 
 export const ALL_METHODS: readonly AnalysisMethod[] = ["bishop", "fellenius", "spencer", "morgenstern-price"];
 
-export const ANY_METHOD_NAME: Record<AnalysisMethod, string> = {
-  bishop: "Bishop's simplified method",
-  fellenius: "Ordinary method of slices",
-  spencer: "Spencer's method",
-  "morgenstern-price": "Morgenstern–Price",
-};
+export const ANY_METHOD_NAME: Record<AnalysisMethod, string> = METHOD_NAME;
 
 export const INTERSLICE_NAME = { "half-sine": "half-sine f(x)", constant: "constant f(x)" } as const;
 

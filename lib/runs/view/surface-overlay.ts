@@ -2,6 +2,7 @@
  * What the run canvas draws for a slip surface and one rigorous solution on it, in metres: the
  * surface, its slice sides, the line of thrust, and a numbered mark at each warning's place.
  */
+import { METHOD_SHORT } from "@/lib/vocabulary";
 import type { RigorousFs, XY } from "@/lib/stability";
 import type { RigorousOn, RigorousRunPart } from "@/lib/runs/record/rigorous-part";
 import { arcPoints } from "./circle-arc";
@@ -51,7 +52,7 @@ export interface SolutionChoice {
   lines: (RigorousWarningLine & { n: number })[];
 }
 
-const RIGOROUS_NAME = { spencer: "Spencer", "morgenstern-price": "Morgenstern–Price" } as const;
+const RIGOROUS_NAME = METHOD_SHORT;
 
 /** Every rigorous solution a run holds: drawn surface first (what the reader drew), then searched, then circles. */
 export function solutionChoices(part: RigorousRunPart | undefined): SolutionChoice[] {
