@@ -4,7 +4,7 @@
  * them, the spreads sampled, and pf and β against the project's target in words.
  */
 import { formatProbability } from "@/lib/format";
-import { METHOD_NAME } from "@/lib/vocabulary";
+import { METHOD_NAME, METHOD_SHORT } from "@/lib/vocabulary";
 import type { ReliabilityTarget, StoredProbabilistic } from "@/lib/probabilistic/types";
 import { reliabilityVerdict } from "@/lib/probabilistic/targets";
 import type { ReportWriter } from "./report-writer";
@@ -16,6 +16,8 @@ export interface ReportProbabilistic {
 }
 
 const METHOD: Record<string, string> = METHOD_NAME;
+// Table rows carry two words more, so they take the short names to fit their column.
+const SHORT: Record<string, string> = METHOD_SHORT;
 const n = (v: number | null | undefined, d: number) => (v === null || v === undefined ? "—" : v.toFixed(d));
 const pf = (v: number | null | undefined) => formatProbability(v);
 
@@ -44,7 +46,7 @@ export function writeProbabilistic(w: ReportWriter, { stored, target }: ReportPr
       const s = o.probabilistic[m]!;
       return [
         [
-          `${METHOD[m] ?? m}, sampled`,
+          `${SHORT[m] ?? m}, sampled`,
           n(s.meanFs, 3),
           n(s.sdFs, 3),
           pf(s.pf),
@@ -52,7 +54,7 @@ export function writeProbabilistic(w: ReportWriter, { stored, target }: ReportPr
           n(s.betaLognormal, 2),
         ],
         [
-          `${METHOD[m] ?? m}, Taylor series`,
+          `${SHORT[m] ?? m}, Taylor series`,
           n(s.fosm.fs, 3),
           n(s.fosm.sdFs, 3),
           pf(s.fosm.pfLognormal),
