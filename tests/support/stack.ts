@@ -73,10 +73,14 @@ export async function dropDatabase(dbName: string): Promise<void> {
   }
 }
 
-function buildApp(): void {
-  // The queue workers and the engine threads load bundles (scripts/build-engine.mjs); a second's work, always redone.
+function buildEngine(): void {
+  // The queue workers and the engine threads load bundles (scripts/build-engine.mjs); a second's work, always
+  // redone, and before the seed, which keeps its demo runs through those threads when a bundle exists.
   const engine = spawnSync(process.execPath, ["scripts/build-engine.mjs"], { cwd: ROOT, encoding: "utf8" });
   if (engine.status !== 0) throw new Error(`engine bundle failed:\n${engine.stdout}\n${engine.stderr}`);
+}
+
+function buildApp(): void {
   if (process.env.SCARPLINE_SKIP_BUILD === "1" && fs.existsSync(path.join(ROOT, DIST_DIR, "BUILD_ID"))) return;
   const result = spawnSync(process.execPath, ["node_modules/next/dist/bin/next", "build"], {
     cwd: ROOT,
@@ -220,6 +224,7 @@ async function stopFakeS3(fake: FakeS3): Promise<void> {
 }
 
 async function start(withServer: boolean, state: State): Promise<Stack> {
+  buildEngine();
   await createDatabase(state.dbName);
   if (!withServer) return { dbName: state.dbName, appUrl: "", appEnv: {}, workerPids: [] };
   buildApp();
