@@ -6,6 +6,7 @@
  */
 import type { AnalysisMethod, IntersliceFunction, RigorousMethod } from "./schema";
 import type { EngineWarning } from "./issues";
+import type { SliceRow } from "./analyze-circle";
 
 export type { AnalysisMethod, IntersliceFunction, RigorousMethod };
 
@@ -93,23 +94,25 @@ export interface MethodReason {
   reasonText: string;
 }
 
-/** The loads and strengths of one slice of a polyline surface (forces kN/m, kPa, m, °). */
-export interface SurfaceSliceRow {
-  xLeft: number;
-  xRight: number;
-  weight: number;
-  pondedLoad: number;
-  waterThrust: number;
-  surcharge: number;
-  seismicForce: number;
-  alpha: number;
-  baseLength: number;
-  baseY: number;
-  porePressure: number;
-  material: string;
-  c: number;
-  phi: number;
-}
+/** The loads and strengths of one slice of a polyline surface (forces kN/m, kPa, m, °): the circle's
+ * slice row without its circle-only terms. */
+export type SurfaceSliceRow = Pick<
+  SliceRow,
+  | "xLeft"
+  | "xRight"
+  | "weight"
+  | "pondedLoad"
+  | "waterThrust"
+  | "surcharge"
+  | "seismicForce"
+  | "alpha"
+  | "baseLength"
+  | "baseY"
+  | "porePressure"
+  | "material"
+  | "c"
+  | "phi"
+>;
 
 /** The result of one slip surface given as a polyline (`--surface`). */
 export interface SurfaceSuccess {
