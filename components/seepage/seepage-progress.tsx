@@ -1,5 +1,6 @@
 "use client";
 
+import { ProgressBar } from "@/components/ui/progress-bar";
 import type { SeepageRunState } from "./use-seepage-run";
 import { messageWords, placeWords } from "@/lib/issue-words";
 
@@ -9,16 +10,7 @@ export function SeepageProgress({ state, onCancel }: { state: SeepageRunState; o
     const pct = Math.round((state.round / Math.max(1, state.maxRounds)) * 100);
     return (
       <div className="panel flex items-center gap-3 px-3 py-2" data-testid="seepage-progress">
-        <div
-          className="h-2 flex-1 overflow-hidden rounded bg-paper-sunk"
-          role="progressbar"
-          aria-label="Seepage solve progress"
-          aria-valuemin={0}
-          aria-valuemax={100}
-          aria-valuenow={pct}
-        >
-          <div className="h-full bg-clay-500 transition-[width]" style={{ width: `${pct}%` }} />
-        </div>
+        <ProgressBar percent={pct} label="Seepage solve progress" />
         <span className="text-sm tabular-nums">
           round {state.round} of at most {state.maxRounds}
         </span>

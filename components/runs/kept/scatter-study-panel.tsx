@@ -1,5 +1,6 @@
 "use client";
 
+import { ProgressBar } from "@/components/ui/progress-bar";
 import { useScatterStudy } from "@/components/runs/kept/use-scatter-study";
 import { ScatterStudyForm } from "@/components/runs/kept/scatter-study-form";
 import { ScatterStudyResults } from "@/components/runs/kept/scatter-study-results";
@@ -36,16 +37,7 @@ export function ScatterStudyPanel({ projectId, runId, canRun }: ScatterStudyPane
       {running ? (
         <div className="space-y-1" data-testid="scatter-progress" data-state={running.job.state}>
           <div className="flex items-center gap-3">
-            <div
-              className="h-2 flex-1 overflow-hidden rounded bg-paper-sunk"
-              role="progressbar"
-              aria-label="Probabilistic run progress"
-              aria-valuemin={0}
-              aria-valuemax={100}
-              aria-valuenow={pct}
-            >
-              <div className="h-full bg-clay-500 transition-[width]" style={{ width: `${pct}%` }} />
-            </div>
+            <ProgressBar percent={pct} label="Probabilistic run progress" />
             <span className="text-sm tabular-nums" data-testid="scatter-progress-text">
               {running.job.state === "queued"
                 ? "waiting for a worker"

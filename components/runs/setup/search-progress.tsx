@@ -1,5 +1,6 @@
 "use client";
 
+import { ProgressBar } from "@/components/ui/progress-bar";
 import type { SearchState } from "@/components/runs/setup/use-grid-search";
 
 export function SearchProgress({ state, onCancel }: { state: SearchState; onCancel: () => void }) {
@@ -7,16 +8,7 @@ export function SearchProgress({ state, onCancel }: { state: SearchState; onCanc
     const pct = Math.round(state.fraction * 100);
     return (
       <div className="panel flex items-center gap-3 px-3 py-2" data-testid="search-progress">
-        <div
-          className="h-2 flex-1 overflow-hidden rounded bg-paper-sunk"
-          role="progressbar"
-          aria-label="Search progress"
-          aria-valuemin={0}
-          aria-valuemax={100}
-          aria-valuenow={pct}
-        >
-          <div className="h-full bg-clay-500 transition-[width]" style={{ width: `${pct}%` }} />
-        </div>
+        <ProgressBar percent={pct} label="Search progress" />
         <span className="w-12 text-right text-sm tabular-nums">{pct} %</span>
         <button type="button" className="btn-quiet" onClick={onCancel}>
           Cancel
