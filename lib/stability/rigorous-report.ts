@@ -3,6 +3,7 @@
  * per boundary and the line of thrust in document coordinates, base forces per slice, and the
  * warnings a reviewer needs with their place (docs/engine.md §11 "Acceptability").
  */
+import { METHOD_LABEL } from "./method-labels";
 import { fmt, fmtPoint } from "./issues";
 import type { GleSlices } from "./methods/gle";
 import type { IntersliceFunction, RigorousMethod } from "./schema";
@@ -10,10 +11,7 @@ import type { IntersliceForce, RigorousFs, RigorousSlice, RigorousWarning, XY } 
 import { M_ALPHA_WARN } from "./search-warnings";
 import { OK, M_ALPHA } from "./status";
 
-const LABEL: Record<RigorousMethod, string> = {
-  spencer: "Spencer's method",
-  "morgenstern-price": "The Morgenstern–Price method",
-};
+const LABEL = METHOD_LABEL;
 
 /** Reasons a rigorous method gives no factor, as names and plain text. */
 export function rigorousReason(status: number): { reason: string; reasonText: string } {

@@ -2,6 +2,7 @@
  * Spencer and Morgenstern–Price in the grid search of circles (docs/engine.md §11): each method
  * keeps its own critical circle, map and lowest circles, like Bishop's, from the same trial circles.
  */
+import { METHOD_LABEL } from "./method-labels";
 import { createGleSlices } from "./methods/gle";
 import type { PreparedSection } from "./prepare";
 import { createRigorousPick, rigorousOnCircle } from "./rigorous-circle";
@@ -12,10 +13,7 @@ import { REASONS } from "./status";
 import { M_ALPHA_WARN } from "./search-warnings";
 import type { EngineWarning } from "./issues";
 
-const LABEL: Record<RigorousMethod, string> = {
-  spencer: "Spencer's method",
-  "morgenstern-price": "The Morgenstern–Price method",
-};
+const LABEL = METHOD_LABEL;
 
 /** One warning per method that found no solution on some circles Bishop's method accepted. */
 export function rigorousFailureWarnings(rig: RigorousSearch, out: EngineWarning[]): void {

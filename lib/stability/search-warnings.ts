@@ -3,6 +3,7 @@
  * on the grid's edge or at an end of the radius range, a critical mass near a section side,
  * a low mα, and methods without any valid circle.
  */
+import { METHOD_LABEL } from "./method-labels";
 import type { EngineWarning } from "./issues";
 import { fmt } from "./issues";
 import type { PreparedSection } from "./prepare";
@@ -13,12 +14,7 @@ import type { MethodState } from "./search-state";
 import { evaluateCircle } from "./evaluate-circle";
 import { circleRigorous } from "./rigorous-circle";
 
-const LABEL: Record<AnalysisMethod, string> = {
-  bishop: "Bishop's simplified method",
-  fellenius: "The ordinary method",
-  spencer: "Spencer's method",
-  "morgenstern-price": "The Morgenstern–Price method",
-};
+const LABEL = METHOD_LABEL;
 /** Bishop's mα below this flags a suspect result (after Whitman & Bailey 1967). */
 export const M_ALPHA_WARN = 0.2;
 

@@ -4,6 +4,7 @@
  * the Taylor-series estimate beside them. Synchronous, deterministic for a seed, cancellable
  * through the progress callback like the grid search.
  */
+import { METHOD_LABEL } from "../method-labels";
 import { resolveAnalysis } from "../defaults";
 import { runGridSearch, type GridSearchSuccess } from "../grid-search";
 import { issue, type EngineWarning, type Issue } from "../issues";
@@ -154,6 +155,14 @@ export function runProbabilistic(doc: unknown, opts: ProbabilisticOptions = {}):
       });
   });
   warnings.push(...sampleWarnings(variables, matrix.moved, n, sampling, correlations.length > 0, cancelled));
+  const unsampled = det.rigorousMethods ?? [];
+  if (unsampled.length > 0)
+    warnings.push({
+      code: "rigorous-not-sampled",
+      message:
+        `${unsampled.map((m) => METHOD_LABEL[m]).join(" and ")}: not sampled; the probabilistic run covers ` +
+        "Bishop's simplified and the ordinary method (the deterministic results of all methods stand as searched).",
+    });
   return {
     ...det,
     warnings,

@@ -53,3 +53,17 @@ describe("result figures", () => {
     expect(hasProbabilisticSettings(null)).toBe(false);
   });
 });
+
+describe("methods the sampling does not cover", () => {
+  // Spencer and Morgenstern–Price are searched deterministically but not sampled: the output must say
+  // so rather than leave them out in silence (docs/probabilistic.md).
+  test("a run asking for Spencer reports Bishop's and the ordinary method's pf and warns for Spencer", () => {
+    const base = loadDoc("linear-dry-slope.json");
+    const doc = withSettings(base, { samples: 200, seed: 4 });
+    doc.analysis.methods = ["bishop", "fellenius", "spencer"];
+    const r = run(doc);
+    expect(Object.keys(r.probabilistic).sort()).toEqual(["bishop", "fellenius"]);
+    const w = r.warnings.find((x) => x.code === "rigorous-not-sampled");
+    expect(w?.message).toMatch(/^Spencer's method: not sampled/);
+  });
+});
