@@ -43,9 +43,10 @@ export function MaterialWorkbench({ projectId, canEdit, initial }: MaterialWorkb
     <div className="space-y-6">
       <div className="grid gap-6 xl:grid-cols-[2fr_3fr]">
         <div className="space-y-3">
-          {/* Remount on each save so the form shows what the server kept. */}
+          {/* Remount whenever the kept values change so the form shows what the server kept: updatedAt alone
+              has whole seconds, so two changes within one second (a save, then "use these values") kept it. */}
           <MaterialParametersForm
-            key={material.updatedAt}
+            key={JSON.stringify(material)}
             projectId={projectId}
             material={material}
             canEdit={canEdit}
